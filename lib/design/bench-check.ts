@@ -1,0 +1,30 @@
+// Expected readings for a bench check of the built front end (the build sheet's table).
+import { errorAt } from "./error-budget";
+import type { Requirement } from "./requirement";
+import type { Choice } from "./types";
+
+export type BenchCheckRow = { label: string; currentA: number; expectedV: number; minV: number; maxV: number };
+
+/** Rows at Imin, the typical current (if given), 10 %, 50 % and 100 % of Imax. */
+export function benchCheck(req: Requirement, choice: Choice): BenchCheckRow[] {
+  const { min, max, typical } = req.current;
+  const points: { label: string; currentA: number }[] = [{ label: "Minimum current", currentA: min }];
+  if (typical !== undefined) points.push({ label: "Typical current", currentA: typical });
+  points.push(
+    { label: "10 % of maximum current", currentA: 0.1 * max },
+    { label: "50 % of maximum current", currentA: 0.5 * max },
+    { label: "Maximum current", currentA: max },
+  );
+  const tz = choice.shuntOhms * choice.gain;
+  return points.map(({ label, currentA }) => {
+    const { worstA } = errorAt(req, choice, currentA);
+    return {
+      label,
+      currentA,
+      expectedV: currentA * tz,
+      // The output cannot go below ground on a single supply.
+      minV: Math.max(0, (currentA - worstA) * tz),
+      maxV: (currentA + worstA) * tz,
+    };
+  });
+}

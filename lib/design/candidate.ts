@@ -1,0 +1,66 @@
+// One candidate's figures (DESIGN.md §3), in the API's field names.
+import { errorAt, lowestAccurateCurrent } from "./error-budget";
+import { seriesValues } from "./eseries";
+import { type Model, buildModel, largestRating, noiseRmsA, operatingBurden, signalBandwidth } from "./model";
+import { pairMask, reasonsOf, shuntFigures, sqrtNoiseBandwidth } from "./pair";
+import type { Requirement } from "./requirement";
+import type { Candidate, CandidateDetail, Choice } from "./types";
+
+export { rejectReasonLabels, rejectReasons, type RejectReason } from "./pair";
+
+const scratch = new Float64Array(1);
+
+/** The API fields of a pair, from the model. `pareto` is left false for the solver to set. */
+export function candidateFigures(m: Model, R: number, G: number): Candidate {
+  const sf = shuntFigures(m, R);
+  const mask = pairMask(m, R, G, sf, sqrtNoiseBandwidth(m, G), scratch);
+  const rg = R * G;
+  return {
+    shuntOhms: R,
+    gain: G,
+    transimpedanceVPerA: rg,
+    burdenV: m.iMax * R,
+    dissipationW: m.iMax * m.iMax * R,
+    ratingW: Number.isNaN(sf.rating) ? largestRating(m) : sf.rating,
+    outputAtMaxV: m.iMax * rg,
+    lsbA: m.lsbV / rg,
+    offsetErrorA: m.vosRef / R,
+    errorAtMinPercent: 100 * (scratch[0] ?? NaN),
+    feasible: mask === 0,
+    pareto: false,
+    reasons: reasonsOf(mask),
+  };
+}
+
+export function evaluateCandidate(req: Requirement, choice: Choice): CandidateDetail {
+  const m = buildModel(req);
+  const { shuntOhms: R, gain: G } = choice;
+  const base = candidateFigures(m, R, G);
+  const sf = shuntFigures(m, R);
+  const burdenOp = operatingBurden(m, R);
+  const pct = (I: number) => errorAt(req, choice, I).worstPercent;
+  const typical = req.current.typical;
+  return {
+    ...base,
+    loadVoltageV: Number.isNaN(burdenOp) ? 0 : m.vBus - burdenOp,
+    selfHeatingK: base.dissipationW * sf.theta,
+    bandwidthHz: signalBandwidth(m, G),
+    deadZoneA: m.swingLow / (R * G),
+    countsAtMin: (m.iMin * R * G) / m.lsbV,
+    noiseA: noiseRmsA(m, R, G),
+    headroomV: m.outCeil - base.outputAtMaxV,
+    errorAtTypicalPercent: typical === undefined ? null : pct(typical),
+    errorAtMaxPercent: pct(m.iMax),
+    rssAtMinPercent: errorAt(req, choice, m.iMin).rssPercent,
+    accuracyBandPercent: Math.max(pct(m.bandLo), pct(m.bandHi)),
+    lowestAccurateCurrentA: lowestAccurateCurrent(req, m, choice),
+  };
+}
+
+/** Whether the pair is one the requirement's sweep examines. */
+export function isInSweep(req: Requirement, choice: Choice): boolean {
+  const { shuntOhms: R, gain: G } = choice;
+  if (!Number.isFinite(R) || !Number.isFinite(G)) return false;
+  const valueHit = seriesValues(req.shunt.series, req.shunt.min, req.shunt.max).some((v) => Math.abs(v - R) <= 1e-9 * v);
+  return valueHit && req.amplifier.gains.some((g) => Math.abs(g - G) <= 1e-9 * g);
+}

@@ -1,0 +1,139 @@
+// The error budget of one pair across the current span: each source in amps, the worst
+// case (sum) and the root-sum-square, as % of reading.
+import { type Model, buildModel, noiseRmsA, operatingBurden, REFERENCE_C, worstErrorA } from "./model";
+import { shuntFigures } from "./pair";
+import type { Requirement } from "./requirement";
+import type { Choice } from "./types";
+
+export type BudgetSource =
+  | "gainError"
+  | "shuntTolerance"
+  | "shuntTempco"
+  | "gainDrift"
+  | "offset"
+  | "offsetDrift"
+  | "biasCurrent"
+  | "commonMode"
+  | "readout"
+  | "noise";
+
+export const budgetSourceLabels: Record<BudgetSource, string> = {
+  gainError: "Amplifier gain error",
+  shuntTolerance: "Shunt tolerance",
+  shuntTempco: "Shunt tempco (ambient and self-heating)",
+  gainDrift: "Amplifier gain drift",
+  offset: `Amplifier offset at ${REFERENCE_C} °C`,
+  offsetDrift: "Offset drift over temperature",
+  biasCurrent: "Input bias current",
+  commonMode: "Common-mode error (CMRR)",
+  readout: "Readout step (half an LSB)",
+  noise: "Noise (crest factor × RMS)",
+};
+
+export type BudgetTerm = { source: BudgetSource; label: string; errorA: number };
+export type ErrorAtResult = { worstA: number; rssA: number; worstPercent: number; rssPercent: number; terms: BudgetTerm[] };
+
+/** Budget terms at current I (A). The sum equals worstErrorA from the model. */
+export function budgetTerms(req: Requirement, m: Model, choice: Choice, I: number): BudgetTerm[] {
+  const { shuntOhms: R, gain: G } = choice;
+  const theta = shuntFigures(m, R).theta;
+  const a = req.amplifier;
+  const values: Record<BudgetSource, number> = {
+    gainError: I * a.gainError,
+    shuntTolerance: I * req.shunt.tolerance,
+    shuntTempco: I * m.alphaR * (m.dTamb + I * I * R * theta),
+    gainDrift: I * a.gainDrift * m.dTamb,
+    offset: a.offset / R,
+    offsetDrift: (a.offsetDrift * m.dTamb) / R,
+    biasCurrent: a.biasCurrent,
+    commonMode: m.cmV / R,
+    readout: m.lsbV / (2 * R * G),
+    noise: m.crest * noiseRmsA(m, R, G),
+  };
+  return (Object.keys(values) as BudgetSource[]).map((source) => ({ source, label: budgetSourceLabels[source], errorA: values[source] }));
+}
+
+function combine(terms: BudgetTerm[], I: number): ErrorAtResult {
+  let worstA = 0;
+  let sq = 0;
+  for (const t of terms) {
+    worstA += Math.abs(t.errorA);
+    sq += t.errorA * t.errorA;
+  }
+  const rssA = Math.sqrt(sq);
+  return { worstA, rssA, worstPercent: (100 * worstA) / I, rssPercent: (100 * rssA) / I, terms };
+}
+
+export function errorAt(req: Requirement, choice: Choice, currentA: number): ErrorAtResult {
+  return combine(budgetTerms(req, buildModel(req), choice, currentA), currentA);
+}
+
+/** n currents spaced evenly on a log scale from a to b inclusive. */
+export function logSpace(a: number, b: number, n: number): number[] {
+  if (n <= 1 || a === b) return [a];
+  const la = Math.log(a);
+  const step = (Math.log(b) - la) / (n - 1);
+  return Array.from({ length: n }, (_, i) => (i === n - 1 ? b : Math.exp(la + i * step)));
+}
+
+export type ErrorCurvePoint = { currentA: number; worstPercent: number; rssPercent: number };
+
+export function errorCurve(req: Requirement, choice: Choice, points = 60): ErrorCurvePoint[] {
+  const m = buildModel(req);
+  return logSpace(req.current.min, req.current.max, points).map((I) => {
+    const r = combine(budgetTerms(req, m, choice, I), I);
+    return { currentA: I, worstPercent: r.worstPercent, rssPercent: r.rssPercent };
+  });
+}
+
+/** The breakdown per source across the span, for a stacked chart (% of reading). */
+export function errorBreakdownCurve(req: Requirement, choice: Choice, points = 40): { currentA: number; terms: { source: BudgetSource; percent: number }[] }[] {
+  const m = buildModel(req);
+  return logSpace(req.current.min, req.current.max, points).map((I) => ({
+    currentA: I,
+    terms: budgetTerms(req, m, choice, I).map((t) => ({ source: t.source, percent: (100 * t.errorA) / I })),
+  }));
+}
+
+export type LoadCurvePoint = { currentA: number; burdenV: number; loadVoltageV: number };
+
+/** Drop and load voltage across the span (the load drawing each current at full supply). */
+export function loadCurve(req: Requirement, choice: Choice, points = 60): LoadCurvePoint[] {
+  const m = buildModel(req);
+  return logSpace(req.current.min, req.current.max, points).map((I) => {
+    const burdenV = operatingBurden({ ...m, iMax: I }, choice.shuntOhms);
+    return { currentA: I, burdenV, loadVoltageV: m.vBus - burdenV };
+  });
+}
+
+/**
+ * Lowest current in the span whose worst-case error meets the accuracy target, or null.
+ * The worst-case ratio a + b·I² + c/I is convex, so the currents that meet it form one interval.
+ */
+export function lowestAccurateCurrent(req: Requirement, m: Model, choice: Choice): number | null {
+  const { shuntOhms: R, gain: G } = choice;
+  const theta = shuntFigures(m, R).theta;
+  const ratio = (I: number) => worstErrorA(m, R, G, theta, I) / I;
+  const target = m.accRatio;
+  if (ratio(m.iMin) <= target) return m.iMin;
+  // Golden-section search for the minimum on a log scale.
+  let lo = Math.log(m.iMin);
+  let hi = Math.log(m.iMax);
+  const phi = (Math.sqrt(5) - 1) / 2;
+  for (let k = 0; k < 80; k++) {
+    const x1 = hi - phi * (hi - lo);
+    const x2 = lo + phi * (hi - lo);
+    if (ratio(Math.exp(x1)) < ratio(Math.exp(x2))) hi = x2;
+    else lo = x1;
+  }
+  const best = Math.exp((lo + hi) / 2);
+  if (ratio(best) > target) return null;
+  let a = m.iMin;
+  let b = best;
+  for (let k = 0; k < 100 && b - a > 1e-12 * b; k++) {
+    const mid = Math.sqrt(a * b);
+    if (ratio(mid) <= target) b = mid;
+    else a = mid;
+  }
+  return b;
+}

@@ -1,0 +1,18 @@
+// The engine's public surface (see .notes/engine-contract.md). Pure TypeScript: mathjs, zod
+// and this folder only, so it runs in a route handler and in a browser worker alike.
+export * from "./units";
+export * from "./eseries";
+export * from "./gains";
+export * from "./requirement";
+export * from "./types";
+export { BOLTZMANN, REFERENCE_C, SINGLE_POLE_NBW, readoutStepV } from "./model";
+export { candidateFigures, evaluateCandidate, isInSweep, rejectReasonLabels, rejectReasons, type RejectReason } from "./candidate";
+export * from "./error-budget";
+export { solve, defaultRankingText, type SolveResult, type SolveOptions } from "./solve";
+export { RankExpressionError, compileRankExpression, rankFields, type RankField } from "./rank";
+export { planRanges, SWITCH_DOWN_FRACTION, MAX_RANGES, type RangePlan, type PlannedRange } from "./range-plan";
+export * from "./bench-check";
+export * from "./insertion";
+export * from "./netlist";
+export * from "./monte-carlo";
+export { mulberry32 } from "./prng";

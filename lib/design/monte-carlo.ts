@@ -1,0 +1,113 @@
+// Monte Carlo spread of the reading error for one pair: every part drawn uniformly within
+// its tolerance band, noise Gaussian, the output quantised and clipped as the readout sees it.
+import { buildModel, noiseRmsA, REFERENCE_C } from "./model";
+import { shuntFigures } from "./pair";
+import { gaussian, mulberry32 } from "./prng";
+import type { Requirement } from "./requirement";
+import type { Choice } from "./types";
+
+export type MonteCarloRow = {
+  currentA: number;
+  /** Reading error percentiles, % of reading (signed: reading − true). */
+  p1: number;
+  p5: number;
+  p50: number;
+  p95: number;
+  p99: number;
+  mean: number;
+  std: number;
+  min: number;
+  max: number;
+  /** Share of draws within the accuracy target, %. */
+  withinTargetPercent: number;
+};
+
+export type MonteCarloResult = { draws: number; seed: number; rows: MonteCarloRow[] };
+
+export type MonteCarloOptions = { currentsA?: number[]; draws?: number; seed?: number };
+
+export const DEFAULT_DRAWS = 2000;
+export const DEFAULT_SEED = 20261201;
+
+/** Percentile by linear interpolation between order statistics (sorted input). */
+export function percentile(sorted: ArrayLike<number>, p: number): number {
+  const n = sorted.length;
+  if (n === 0) return NaN;
+  const pos = (p / 100) * (n - 1);
+  const lo = Math.floor(pos);
+  const hi = Math.min(n - 1, lo + 1);
+  const a = sorted[lo] as number;
+  const b = sorted[hi] as number;
+  return a + (b - a) * (pos - lo);
+}
+
+export function defaultMonteCarloCurrents(req: Requirement): number[] {
+  const list = [req.current.min, req.current.typical, req.accuracy.bandMin, req.current.max].filter((x): x is number => x !== undefined);
+  return [...new Set(list)].sort((a, b) => a - b);
+}
+
+export function monteCarlo(req: Requirement, choice: Choice, opts: MonteCarloOptions = {}): MonteCarloResult {
+  const draws = Math.max(1, Math.min(200_000, Math.floor(opts.draws ?? DEFAULT_DRAWS)));
+  const seed = opts.seed ?? DEFAULT_SEED;
+  const currents = opts.currentsA ?? defaultMonteCarloCurrents(req);
+  const m = buildModel(req);
+  const { shuntOhms: R, gain: G } = choice;
+  const theta = shuntFigures(m, R).theta;
+  const a = req.amplifier;
+  const s = req.shunt;
+  const noiseV = noiseRmsA(m, R, G) * R;
+  const rnd = mulberry32(seed);
+  const normal = gaussian(rnd);
+  const u = (half: number) => (2 * rnd() - 1) * half;
+  const floorV = a.swingLow;
+  const ceilV = m.outCeil;
+  const errors = currents.map(() => new Float64Array(draws));
+  for (let d = 0; d < draws; d++) {
+    // One built unit: parts and ambient drawn once, then read at every current.
+    const ambient = req.temperature.min + rnd() * (req.temperature.max - req.temperature.min);
+    const dT = ambient - REFERENCE_C;
+    const epsR = u(s.tolerance);
+    const alphaR = u(s.tempco);
+    const epsG = u(a.gainError);
+    const alphaG = u(a.gainDrift);
+    const vos = u(a.offset) + u(a.offsetDrift) * dT;
+    const ib = u(a.biasCurrent);
+    const cm = u(m.cmV);
+    const gainActual = G * (1 + epsG + alphaG * dT);
+    currents.forEach((I, k) => {
+      const dTs = I * I * R * theta;
+      const vShunt = I * R * (1 + epsR + alphaR * (dT + dTs));
+      const vIn = vShunt + vos + ib * R + cm + normal() * noiseV;
+      const vOut = Math.min(ceilV, Math.max(floorV, gainActual * vIn));
+      const quantised = Math.round(vOut / m.lsbV) * m.lsbV;
+      const reading = quantised / (R * G);
+      (errors[k] as Float64Array)[d] = (100 * (reading - I)) / I;
+    });
+  }
+  const rows = currents.map((I, k) => {
+    const e = (errors[k] as Float64Array).sort();
+    let sum = 0;
+    let sq = 0;
+    let within = 0;
+    for (const x of e) {
+      sum += x;
+      sq += x * x;
+      if (Math.abs(x) <= req.accuracy.percent) within++;
+    }
+    const mean = sum / draws;
+    return {
+      currentA: I,
+      p1: percentile(e, 1),
+      p5: percentile(e, 5),
+      p50: percentile(e, 50),
+      p95: percentile(e, 95),
+      p99: percentile(e, 99),
+      mean,
+      std: Math.sqrt(Math.max(0, sq / draws - mean * mean)),
+      min: e[0] ?? NaN,
+      max: e[draws - 1] ?? NaN,
+      withinTargetPercent: (100 * within) / draws,
+    };
+  });
+  return { draws, seed, rows };
+}

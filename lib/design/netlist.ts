@@ -1,0 +1,71 @@
+// An ngspice-compatible netlist of one design at Imax: supply, shunt, load and amplifier.
+import { buildModel, operatingBurden } from "./model";
+import type { Requirement } from "./requirement";
+import type { Choice } from "./types";
+
+/**
+ * SPICE reads "m" and "M" both as milli, so values go out in plain exponent notation
+ * ("4.7e-3"), never with scale suffixes.
+ */
+export function spiceNumber(x: number): string {
+  if (!Number.isFinite(x)) throw new RangeError(`cannot write ${x} into a netlist`);
+  if (x === 0) return "0";
+  const [mant = "0", exp = "0"] = x.toExponential(9).split("e");
+  const m = mant.replace(/\.?0+$/, "");
+  const e = Number(exp);
+  return e === 0 ? m : `${m}e${e}`;
+}
+
+export function buildNetlist(req: Requirement, choice: Choice, opts: { includeOffset?: boolean } = {}): string {
+  const includeOffset = opts.includeOffset ?? true;
+  const { shuntOhms: R, gain: G } = choice;
+  const vBus = req.supply.voltage;
+  const iMax = req.current.max;
+  const high = req.supply.side === "high";
+  const model = req.load.model;
+  // The load sits between `la` and `lb`: bus → load → sp on the low side, sn → load → 0 on the high side.
+  const [la, lb] = high ? ["sn", "0"] : ["bus", "sp"];
+  const lines: string[] = [];
+  lines.push(`* Sensewright current-sense front end: ${high ? "high" : "low"}-side shunt, ${model} load at Imax`);
+  lines.push(`* shunt ${spiceNumber(R)} ohm, gain ${spiceNumber(G)}; all values in SI base units`);
+  lines.push("* Nodes: bus = supply +, sp = shunt end the current enters, sn = the other end, out = amplifier output, 0 = ground.");
+  if (high) {
+    lines.push("* High side: bus -> VFEED (0 V, reads the current) -> sp -> RSHUNT -> sn -> load -> 0.");
+  } else {
+    lines.push("* Low side: bus -> load -> sp -> RSHUNT -> sn -> VRET (0 V, reads the current) -> 0.");
+  }
+  lines.push(`VBUS bus 0 DC ${spiceNumber(vBus)}`);
+  if (high) lines.push("VFEED bus sp DC 0");
+  lines.push(`RSHUNT sp sn ${spiceNumber(R)}`);
+  if (!high) lines.push("VRET sn 0 DC 0");
+  if (model === "constant-current") {
+    lines.push(`* Constant-current load: draws Imax whatever its voltage.`);
+    lines.push(`ILOAD ${la} ${lb} DC ${spiceNumber(iMax)}`);
+  } else if (model === "resistive") {
+    lines.push(`* Resistive load: the resistance that draws Imax at the full supply.`);
+    lines.push(`RLOAD ${la} ${lb} ${spiceNumber(vBus / iMax)}`);
+  } else {
+    const p = vBus * iMax;
+    lines.push(`* Constant-power load: draws Imax at the full supply, P = ${spiceNumber(p)} W, more current as its voltage falls.`);
+    lines.push(`BLOAD ${la} ${lb} I=${spiceNumber(p)}/max(V(${la},${lb}),${spiceNumber(vBus / 1000)})`);
+    // Steer the operating point to the physical (high-voltage) solution.
+    const burden = operatingBurden(buildModel(req), R);
+    if (Number.isFinite(burden)) {
+      lines.push(high ? `.nodeset V(sn)=${spiceNumber(vBus - burden)}` : `.nodeset V(sp)=${spiceNumber(burden)}`);
+    }
+  }
+  lines.push("* Amplifier: an ideal voltage-controlled voltage source across the shunt,");
+  if (includeOffset) {
+    lines.push(`* with its input offset ${spiceNumber(req.amplifier.offset)} V as a source in series with the + input.`);
+    lines.push(`VOS spo sp DC ${spiceNumber(req.amplifier.offset)}`);
+    lines.push(`EAMP out 0 spo sn ${spiceNumber(G)}`);
+  } else {
+    lines.push("* offset left out.");
+    lines.push(`EAMP out 0 sp sn ${spiceNumber(G)}`);
+  }
+  // A load on the output keeps `out` from floating in simulators that check it.
+  lines.push("RREAD out 0 1e6");
+  lines.push(".op");
+  lines.push(".end");
+  return lines.join("\n") + "\n";
+}

@@ -1,0 +1,261 @@
+// The requirement: one zod schema shared by the API and the wizard form. It reads unit
+// strings, fills every documented default (DEFAULTS.md) and checks the cross-field rules,
+// putting each error on the dotted path of the field at fault.
+import { z } from "zod";
+import { isSeriesName, seriesNames, seriesValues, type SeriesName } from "./eseries";
+import { commonFixedGains, resistorPairGains, type GainSet } from "./gains";
+import { quantity } from "./units";
+
+export const loadModels = ["constant-current", "resistive", "constant-power"] as const;
+export type LoadModel = (typeof loadModels)[number];
+
+/** Largest grid the solver will sweep in one request (values × gains). */
+export const maxSweepPairs = 2_000_000;
+
+const seriesField = z
+  .string({ error: "Series: expected a series name such as E96" })
+  .refine(isSeriesName, { error: (iss) => `Series: unknown series "${String(iss.input)}"; use one of ${seriesNames.join(", ")}` })
+  .transform((s) => s as SeriesName);
+
+const positive = (label: string) => (v: number) => v > 0 || `${label} must be above zero`;
+const nonNegative = (label: string) => (v: number) => v >= 0 || `${label} cannot be negative`;
+
+/** A quantity field with a sign rule; the rule's message lands on the field's own path. */
+function q(dim: Parameters<typeof quantity>[0], label: string, rule: (v: number) => true | string) {
+  return quantity(dim, label).check(
+    z.superRefine((v: number, ctx) => {
+      const r = rule(v);
+      if (r !== true) ctx.addIssue({ code: "custom", message: r });
+    }),
+  );
+}
+
+const count = (label: string, min: number, max: number) =>
+  z
+    .number({ error: `${label}: expected a whole number` })
+    .int({ error: `${label} must be a whole number` })
+    .min(min, { error: `${label} must be at least ${min}` })
+    .max(max, { error: `${label} must be at most ${max}` });
+
+const adcReadout = z.object({
+  kind: z.literal("adc"),
+  bits: count("ADC resolution (bits)", 4, 32),
+  fullScale: q("voltage", "ADC full scale", positive("ADC full scale")),
+});
+const meterReadout = z.object({
+  kind: z.literal("meter"),
+  fullScale: q("voltage", "Meter range full scale", positive("Meter range full scale")),
+  counts: count("Meter counts", 10, 10_000_000),
+});
+
+const gainSetSchema = z.object({
+  series: seriesField,
+  min: z.number().min(1, { error: "Lowest gain must be at least 1 (a non-inverting stage)" }).default(2),
+  max: z.number().max(100_000, { error: "Highest gain must be at most 100000" }).default(1000),
+});
+
+const baseSchema = z.object({
+  current: z.object({
+    min: q("current", "Minimum current", positive("Minimum current")),
+    max: q("current", "Maximum current", positive("Maximum current")),
+    typical: q("current", "Typical current", positive("Typical current")).optional(),
+  }),
+  supply: z.object({
+    voltage: q("voltage", "Supply voltage", positive("Supply voltage")),
+    side: z.enum(["low", "high"], { error: 'Sensing side: expected "low" or "high"' }).default("low"),
+  }),
+  drop: z
+    .object({
+      max: q("voltage", "Allowed drop", positive("Allowed drop")).optional(),
+      fraction: q("fraction", "Allowed drop (fraction of supply)", (v) => (v > 0 && v < 1) || "Allowed drop as a fraction of the supply must be between 0 and 1 (e.g. 0.02 or \"2 %\")").optional(),
+      loadMin: q("voltage", "Minimum load voltage", nonNegative("Minimum load voltage")).optional(),
+    })
+    .prefault({}),
+  load: z
+    .object({ model: z.enum(loadModels, { error: `Load model: expected one of ${loadModels.join(", ")}` }).default("constant-current") })
+    .prefault({}),
+  readout: z
+    .discriminatedUnion("kind", [adcReadout, meterReadout], { error: 'Readout: kind must be "adc" or "meter"' })
+    .default({ kind: "adc", bits: 12, fullScale: 2.5 }),
+  resolution: z.object({ countsAtMin: z.number().positive({ error: "Counts at minimum current must be above zero" }).max(1e9).default(10) }).prefault({}),
+  accuracy: z
+    .object({
+      percent: z
+        .union([z.number(), z.string()])
+        .transform((v, ctx) => {
+          if (typeof v === "number") return v;
+          const m = /^\s*([+-]?\d*\.?\d+(?:e[+-]?\d+)?)\s*%?\s*$/i.exec(v);
+          if (!m) {
+            ctx.addIssue({ code: "custom", message: `Accuracy target: cannot read "${v}" as a percentage` });
+            return z.NEVER;
+          }
+          return Number(m[1]);
+        })
+        .check(z.superRefine((v: number, ctx) => {
+          if (!(v > 0 && v <= 100 && Number.isFinite(v))) ctx.addIssue({ code: "custom", message: "Accuracy target must be above 0 % and at most 100 %" });
+        }))
+        .default(2),
+      bandMin: q("current", "Accuracy band, lowest current", positive("Accuracy band, lowest current")).optional(),
+      bandMax: q("current", "Accuracy band, highest current", positive("Accuracy band, highest current")).optional(),
+      crestFactor: z.number().min(0, { error: "Noise crest factor cannot be negative" }).max(10).default(3),
+    })
+    .prefault({}),
+  temperature: z
+    .object({
+      min: quantity("temperature", "Lowest ambient temperature").default(0),
+      max: quantity("temperature", "Highest ambient temperature").default(70),
+    })
+    .prefault({}),
+  bandwidth: z
+    .object({ min: q("frequency", "Required bandwidth", nonNegative("Required bandwidth")).default(0) })
+    .prefault({}),
+  shunt: z
+    .object({
+      series: seriesField.default("E96"),
+      min: q("resistance", "Smallest shunt", positive("Smallest shunt")).default(0.001),
+      max: q("resistance", "Largest shunt", positive("Largest shunt")).default(1000),
+      tolerance: q("fraction", "Shunt tolerance", (v) => (v >= 0 && v < 0.5) || "Shunt tolerance must be between 0 and 50 %").default(0.005),
+      tempco: q("tempco", "Shunt tempco", nonNegative("Shunt tempco")).default(50e-6),
+      ratings: z.array(q("power", "Power rating", positive("Power rating"))).min(1, { error: "Offer at least one power rating" }).default([0.1, 0.125, 0.25, 0.5, 1, 2, 3]),
+      derating: z.number().gt(0, { error: "Derating must be above 0" }).max(1, { error: "Derating must be at most 1" }).default(0.5),
+      thermalResistance: q("thermalResistance", "Shunt thermal resistance", positive("Shunt thermal resistance")).nullable().default(null),
+      ratedRise: q("temperature", "Temperature rise at full rating", positive("Temperature rise at full rating")).default(85),
+    })
+    .prefault({}),
+  amplifier: z
+    .object({
+      gains: z.union([z.array(z.number().positive({ error: "Each gain must be above zero" })), gainSetSchema]).optional(),
+      gainSet: gainSetSchema.nullable().optional(),
+      offset: q("voltage", "Amplifier offset", nonNegative("Amplifier offset")).default(10e-6),
+      offsetDrift: q("voltageDrift", "Offset drift", nonNegative("Offset drift")).default(0.1e-6),
+      gainError: q("fraction", "Amplifier gain error", (v) => (v >= 0 && v < 0.5) || "Gain error must be between 0 and 50 %").default(0.001),
+      gainDrift: q("tempco", "Gain drift", nonNegative("Gain drift")).default(10e-6),
+      biasCurrent: q("current", "Input bias current", nonNegative("Input bias current")).default(20e-9),
+      noiseDensity: q("noiseDensity", "Input noise density", nonNegative("Input noise density")).default(40e-9),
+      gbw: q("frequency", "Gain-bandwidth", positive("Gain-bandwidth")).default(2e6),
+      supply: q("voltage", "Amplifier supply", positive("Amplifier supply")).default(5),
+      swingLow: q("voltage", "Lowest output (above ground)", nonNegative("Lowest output")).default(0.02),
+      swingHigh: q("voltage", "Output headroom below the amplifier supply", nonNegative("Output headroom")).default(0.05),
+      filterHz: q("frequency", "Output filter corner", positive("Output filter corner")).nullable().default(null),
+      cmrrDb: z.number().min(0, { error: "CMRR cannot be negative" }).max(200).default(100),
+    })
+    .prefault({}),
+  limit: z.number().int({ error: "Limit must be a whole number" }).min(1, { error: "Limit must be at least 1" }).max(10_000, { error: "Limit must be at most 10000" }).default(200),
+});
+
+type Base = z.output<typeof baseSchema>;
+
+/** What the API and the wizard send: numbers in SI or unit strings. */
+export type RequirementInput = z.input<typeof baseSchema>;
+
+/** Normalized: SI numbers, every default filled in, gains listed exactly as swept. */
+export type Requirement = Omit<Base, "drop" | "accuracy" | "amplifier"> & {
+  drop: { max: number; fraction?: number; loadMin?: number };
+  accuracy: { percent: number; bandMin: number; bandMax: number; crestFactor: number };
+  amplifier: Omit<Base["amplifier"], "gains" | "gainSet"> & { gains: number[]; gainSet: GainSet | null };
+};
+
+function dedupeSorted(gains: number[]): number[] {
+  const out: number[] = [];
+  for (const g of [...gains].sort((a, b) => a - b)) {
+    if (out.length === 0 || Math.abs(g - (out[out.length - 1] ?? 0)) > 1e-12 * g) out.push(g);
+  }
+  return out;
+}
+
+function gainsOf(a: Base["amplifier"]): { gains: number[]; gainSet: GainSet | null } {
+  if (Array.isArray(a.gains)) return { gains: dedupeSorted(a.gains), gainSet: a.gainSet ?? null };
+  const set = a.gains ?? a.gainSet ?? null;
+  if (set) return { gains: resistorPairGains(set), gainSet: set };
+  return { gains: [...commonFixedGains], gainSet: null };
+}
+
+function normalize(b: Base): Requirement {
+  const { max, fraction, loadMin } = b.drop;
+  const fromFraction = fraction !== undefined ? fraction * b.supply.voltage : undefined;
+  const dropMax = max !== undefined && fromFraction !== undefined ? Math.min(max, fromFraction) : (max ?? fromFraction ?? 0.02 * b.supply.voltage);
+  const drop: Requirement["drop"] = { max: dropMax };
+  if (fraction !== undefined) drop.fraction = fraction;
+  if (loadMin !== undefined) drop.loadMin = loadMin;
+  const bandMin = b.accuracy.bandMin ?? Math.max(b.current.min, 0.1 * b.current.max);
+  const bandMax = b.accuracy.bandMax ?? b.current.max;
+  const { gains: _g, gainSet: _s, ...amp } = b.amplifier;
+  return {
+    ...b,
+    drop,
+    accuracy: { percent: b.accuracy.percent, bandMin, bandMax, crestFactor: b.accuracy.crestFactor },
+    shunt: { ...b.shunt, ratings: [...b.shunt.ratings].sort((x, y) => x - y) },
+    amplifier: { ...amp, ...gainsOf(b.amplifier) },
+  };
+}
+
+function crossFieldRules(b: Base, ctx: z.RefinementCtx) {
+  const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: "custom", path, message });
+  const { current, supply, drop, accuracy, temperature, shunt, amplifier } = b;
+  if (current.min > current.max) issue(["current", "min"], "Minimum current must not be above the maximum current");
+  if (current.typical !== undefined && (current.typical < current.min || current.typical > current.max))
+    issue(["current", "typical"], "Typical current must lie between the minimum and the maximum current");
+  if (drop.max !== undefined && drop.max >= supply.voltage) issue(["drop", "max"], "Allowed drop must be below the supply voltage");
+  if (drop.loadMin !== undefined && drop.loadMin >= supply.voltage) issue(["drop", "loadMin"], "Minimum load voltage must be below the supply voltage");
+  const bandMin = accuracy.bandMin ?? Math.max(current.min, 0.1 * current.max);
+  const bandMax = accuracy.bandMax ?? current.max;
+  if (current.min <= current.max && bandMin > bandMax) issue(["accuracy", "bandMin"], "Accuracy band: lowest current must not be above the highest");
+  if (accuracy.bandMin !== undefined && (accuracy.bandMin < current.min * (1 - 1e-9) || accuracy.bandMin > current.max * (1 + 1e-9)))
+    issue(["accuracy", "bandMin"], "Accuracy band must lie inside the current span");
+  if (accuracy.bandMax !== undefined && (accuracy.bandMax < current.min * (1 - 1e-9) || accuracy.bandMax > current.max * (1 + 1e-9)))
+    issue(["accuracy", "bandMax"], "Accuracy band must lie inside the current span");
+  if (temperature.min > temperature.max) issue(["temperature", "min"], "Lowest ambient temperature must not be above the highest");
+  if (temperature.min < -273.15) issue(["temperature", "min"], "Temperature is below absolute zero");
+  if (temperature.max > 300) issue(["temperature", "max"], "Highest ambient temperature must be at most 300 °C");
+  if (shunt.min > shunt.max) issue(["shunt", "min"], "Smallest shunt must not be above the largest");
+  else {
+    const n = seriesValues(shunt.series, shunt.min, shunt.max).length;
+    if (n === 0) issue(["shunt", "min"], `No ${shunt.series} value lies between the smallest and the largest shunt`);
+    const g = gainsOf(amplifier).gains.length;
+    if (g === 0) issue(["amplifier", "gains"], "No gain to sweep: give at least one gain, or a gain range that a resistor pair can reach");
+    if (n * g > maxSweepPairs)
+      issue(["shunt", "max"], `That is ${n * g} shunt and gain pairs; narrow the shunt bounds or the gains to at most ${maxSweepPairs}`);
+  }
+  if (Array.isArray(amplifier.gains) && amplifier.gains.length > 10_000) issue(["amplifier", "gains"], "At most 10000 gains");
+  if (!Array.isArray(amplifier.gains) && amplifier.gains && amplifier.gains.min > amplifier.gains.max)
+    issue(["amplifier", "gains", "min"], "Lowest gain must not be above the highest");
+  if (amplifier.swingLow >= amplifier.supply - amplifier.swingHigh)
+    issue(["amplifier", "swingLow"], "Lowest output must be below the highest output the amplifier reaches");
+}
+
+export const requirementSchema: z.ZodType<Requirement, RequirementInput> = baseSchema.superRefine(crossFieldRules).transform(normalize);
+
+export type FieldErrors = Record<string, string[]>;
+
+export type ParseRequirementResult =
+  | { ok: true; requirement: Requirement }
+  | { ok: false; message: string; fieldErrors: FieldErrors };
+
+/** Zod issues as `{ "current.max": ["…"] }`, the shape the API and the form both use. */
+export function issuesToFieldErrors(issues: readonly z.core.$ZodIssue[]): FieldErrors {
+  const out: FieldErrors = {};
+  for (const issue of issues) {
+    const path = issue.path.map(String).join(".") || "(requirement)";
+    (out[path] ??= []).push(issue.message);
+  }
+  return out;
+}
+
+export function parseRequirement(input: unknown): ParseRequirementResult {
+  const r = requirementSchema.safeParse(input);
+  if (r.success) return { ok: true, requirement: r.data };
+  const fieldErrors = issuesToFieldErrors(r.error.issues);
+  const message = Object.entries(fieldErrors)
+    .map(([path, msgs]) => `${path}: ${msgs.join("; ")}`)
+    .join("\n");
+  return { ok: false, message, fieldErrors };
+}
+
+/** The demo soil-moisture logger (DESIGN.md §6): the wizard's start values. */
+export const defaultRequirementInput: RequirementInput = {
+  current: { min: "3 uA", max: "180 mA" },
+  supply: { voltage: "3.0 V", side: "low" },
+  drop: { max: "60 mV" },
+  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+  resolution: { countsAtMin: 10 },
+};

@@ -1,0 +1,57 @@
+// The sweep's inner loop: every series value × every gain on plain numbers in typed arrays.
+// No mathjs and no per-pair objects; results stay in the arrays for the front and ranking.
+import { seriesValues } from "./eseries";
+import type { Model } from "./model";
+import { firstReasonIndex, pairMask, rejectReasons, shuntFigures, sqrtNoiseBandwidth } from "./pair";
+import type { Requirement } from "./requirement";
+
+export type SweepArrays = {
+  values: Float64Array;
+  gains: Float64Array;
+  /** Per pair (iR·nG + iG): bitmask of failed constraints, 0 = feasible. */
+  mask: Uint8Array;
+  /** Per pair: worst-case error at Imin, ratio of reading. */
+  errMin: Float64Array;
+  /** Per value: chosen rating (NaN: none covers it) and thermal resistance. */
+  rating: Float64Array;
+  theta: Float64Array;
+  /** Pairs counted under their first failing constraint, in rejectReasons order. */
+  rejectedCounts: Int32Array;
+  feasibleCount: number;
+};
+
+export function sweepValues(req: Requirement): Float64Array {
+  return Float64Array.from(seriesValues(req.shunt.series, req.shunt.min, req.shunt.max));
+}
+
+export function sweepGrid(m: Model, values: Float64Array, gains: Float64Array): SweepArrays {
+  const nR = values.length;
+  const nG = gains.length;
+  const mask = new Uint8Array(nR * nG);
+  const errMin = new Float64Array(nR * nG);
+  const rating = new Float64Array(nR);
+  const theta = new Float64Array(nR);
+  const sqrtNbw = new Float64Array(nG);
+  for (let j = 0; j < nG; j++) sqrtNbw[j] = sqrtNoiseBandwidth(m, gains[j] as number);
+  const rejectedCounts = new Int32Array(rejectReasons.length);
+  const out = new Float64Array(1);
+  let feasibleCount = 0;
+  for (let i = 0; i < nR; i++) {
+    const R = values[i] as number;
+    const sf = shuntFigures(m, R);
+    rating[i] = sf.rating;
+    theta[i] = sf.theta;
+    const row = i * nG;
+    for (let j = 0; j < nG; j++) {
+      const bits = pairMask(m, R, gains[j] as number, sf, sqrtNbw[j] as number, out);
+      mask[row + j] = bits;
+      errMin[row + j] = out[0] as number;
+      if (bits === 0) feasibleCount++;
+      else {
+        const k = firstReasonIndex(bits);
+        rejectedCounts[k] = (rejectedCounts[k] ?? 0) + 1;
+      }
+    }
+  }
+  return { values, gains, mask, errMin, rating, theta, rejectedCounts, feasibleCount };
+}

@@ -1,0 +1,242 @@
+// Quantities at the edges: unit strings in, SI numbers out (and back to SI-prefixed text).
+// mathjs parses units here only; the sweep never sees a Unit.
+import { unit as mathUnit, type Unit } from "mathjs";
+import { z } from "zod";
+
+export type Amps = number;
+export type Volts = number;
+export type Ohms = number;
+export type Watts = number;
+export type Kelvin = number;
+export type Celsius = number;
+export type Hertz = number;
+export type Seconds = number;
+/** A plain ratio: 0.01 is 1 %. */
+export type Fraction = number;
+
+export type Dimension =
+  | "current"
+  | "voltage"
+  | "resistance"
+  | "power"
+  | "time"
+  | "temperature"
+  | "frequency"
+  | "charge"
+  | "fraction"
+  | "tempco"
+  | "voltageDrift"
+  | "noiseDensity"
+  | "thermalResistance"
+  | "transimpedance";
+
+/** The mathjs unit whose base dimension each of ours has (null: dimensionless). */
+const referenceUnit: Record<Dimension, string | null> = {
+  current: "A",
+  voltage: "V",
+  resistance: "ohm",
+  power: "W",
+  time: "s",
+  temperature: "K",
+  frequency: "Hz",
+  charge: "C",
+  fraction: null,
+  tempco: "1/K",
+  voltageDrift: "V/K",
+  noiseDensity: "V/Hz^0.5",
+  thermalResistance: "K/W",
+  transimpedance: "V/A",
+};
+
+const dimensionWords: Record<Dimension, string> = {
+  current: "a current",
+  voltage: "a voltage",
+  resistance: "a resistance",
+  power: "a power",
+  time: "a time",
+  temperature: "a temperature",
+  frequency: "a frequency",
+  charge: "a charge",
+  fraction: "a plain ratio or percentage",
+  tempco: "a temperature coefficient",
+  voltageDrift: "a voltage drift",
+  noiseDensity: "a noise density",
+  thermalResistance: "a thermal resistance",
+  transimpedance: "a transimpedance",
+};
+
+// Resistance and transimpedance share a base dimension; name it by what was asked for.
+const detectOrder: Dimension[] = [
+  "current",
+  "voltage",
+  "resistance",
+  "power",
+  "time",
+  "temperature",
+  "frequency",
+  "charge",
+  "voltageDrift",
+  "noiseDensity",
+  "thermalResistance",
+  "tempco",
+];
+
+const referenceCache = new Map<string, Unit>();
+function reference(name: string): Unit {
+  let u = referenceCache.get(name);
+  if (!u) {
+    u = mathUnit(name);
+    referenceCache.set(name, u);
+  }
+  return u;
+}
+
+/** mathjs gives unit("50 uA").toSI() = 4.9999…e-5: keep 12 significant digits. */
+export function roundSig(value: number, digits = 12): number {
+  if (value === 0 || !Number.isFinite(value)) return value;
+  return Number(value.toPrecision(digits));
+}
+
+/** Spellings engineers type that mathjs does not know, rewritten to ones it does. */
+function normalizeText(text: string): string {
+  return text
+    .trim()
+    .replace(/[\u00b5\u03bc]/g, "u") // micro sign and Greek mu
+    .replace(/[\u03a9\u2126]/g, "ohm") // Greek capital omega and ohm sign
+    .replace(/Ohm/g, "ohm")
+    .replace(/\u00b0\s*C/g, "degC")
+    .replace(/\/\s*(?:\u221a|rt|sqrt\s*)\(?\s*Hz\s*\)?/g, "/Hz^0.5")
+    .replace(/\s+/g, " ");
+}
+
+export type ParseResult = { ok: true; value: number } | { ok: false; message: string };
+
+const plainNumber = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+
+/**
+ * Parse a number (already SI) or a unit string into an SI number of the wanted dimension.
+ * Temperatures come back in °C (the product's reference is 25 °C); "%" and "ppm" are ratios.
+ */
+export function parseQuantity(input: number | string, dim: Dimension, label?: string): ParseResult {
+  const prefix = label ? `${label}: ` : "";
+  if (typeof input === "number") {
+    if (!Number.isFinite(input)) return { ok: false, message: `${prefix}${String(input)} is not a finite number` };
+    return { ok: true, value: input };
+  }
+  if (typeof input !== "string") return { ok: false, message: `${prefix}expected a number or a quantity such as "150 mA"` };
+  const raw = input.trim();
+  if (raw === "") return { ok: false, message: `${prefix}a value is required` };
+  const text = normalizeText(raw);
+  if (plainNumber.test(text)) return { ok: true, value: Number(text) };
+
+  // Ratios: percent and parts per million, optionally per kelvin for tempcos.
+  const ratio = /^([+-]?(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?)\s*(%|ppm)(?:\s*\/\s*(K|degC))?$/i.exec(text);
+  if (ratio) {
+    const scale = ratio[2] === "%" ? 1e-2 : 1e-6;
+    const perKelvin = ratio[3] !== undefined;
+    const value = roundSig(Number(ratio[1]) * scale);
+    if (dim === "fraction" && !perKelvin) return { ok: true, value };
+    if (dim === "tempco" && (perKelvin || ratio[2] === "ppm")) return { ok: true, value };
+    return { ok: false, message: `${prefix}${raw} is ${perKelvin ? "a temperature coefficient" : "a ratio"}, not ${dimensionWords[dim]}` };
+  }
+  // A drift per degree Celsius is the same per kelvin.
+  const unitText = dim === "temperature" ? text : text.replace(/\/\s*degC/g, "/K");
+  let parsed: Unit;
+  try {
+    parsed = mathUnit(unitText);
+  } catch {
+    return { ok: false, message: `${prefix}cannot read "${raw}" as ${dimensionWords[dim]} (try a number with a unit, e.g. ${example(dim)})` };
+  }
+  const ref = referenceUnit[dim];
+  const matches = ref === null ? parsed.dimensions.every((d) => d === 0) : parsed.equalBase(reference(ref));
+  if (!matches) {
+    const found = detectOrder.find((d) => {
+      const r = referenceUnit[d];
+      return r !== null && parsed.equalBase(reference(r));
+    });
+    const message = found
+      ? `${prefix}${raw} is ${dimensionWords[found]}, not ${dimensionWords[dim]}`
+      : `${prefix}${raw} has the wrong unit for ${dimensionWords[dim]}`;
+    return { ok: false, message };
+  }
+  let value: number;
+  if (dim === "temperature") {
+    value = parsed.toNumber("degC");
+  } else if (ref === null) {
+    value = parsed.toNumber();
+  } else {
+    value = parsed.toSI().toNumber();
+  }
+  value = roundSig(value);
+  if (!Number.isFinite(value)) return { ok: false, message: `${prefix}${raw} is not a finite value` };
+  return { ok: true, value };
+}
+
+function example(dim: Dimension): string {
+  const examples: Record<Dimension, string> = {
+    current: '"150 mA"',
+    voltage: '"3.3 V"',
+    resistance: '"4.7 mohm"',
+    power: '"0.25 W"',
+    time: '"10 us"',
+    temperature: '"85 degC"',
+    frequency: '"10 kHz"',
+    charge: '"1 mC"',
+    fraction: '"1 %"',
+    tempco: '"50 ppm/K"',
+    voltageDrift: '"0.1 uV/K"',
+    noiseDensity: '"40 nV/rtHz"',
+    thermalResistance: '"80 K/W"',
+    transimpedance: '"1 V/A"',
+  };
+  return examples[dim];
+}
+
+/** A zod field that accepts a number (SI) or a unit string and yields the SI number. */
+export const quantity = (dim: Dimension, label: string) =>
+  z.union([z.number(), z.string()]).transform((input, ctx) => {
+    const r = parseQuantity(input, dim, label);
+    if (!r.ok) {
+      ctx.addIssue({ code: "custom", message: r.message });
+      return z.NEVER;
+    }
+    return r.value;
+  });
+
+const prefixes: Record<number, string> = {
+  [-24]: "y",
+  [-21]: "z",
+  [-18]: "a",
+  [-15]: "f",
+  [-12]: "p",
+  [-9]: "n",
+  [-6]: "µ",
+  [-3]: "m",
+  0: "",
+  3: "k",
+  6: "M",
+  9: "G",
+  12: "T",
+  15: "P",
+};
+
+/** formatSI(0.0047, "Ω") → "4.7 mΩ"; trailing zeros dropped, `sig` significant figures at most. */
+export function formatSI(value: number, unitName: string, sig = 3): string {
+  const sep = unitName ? " " : "";
+  if (!Number.isFinite(value)) return `${value > 0 ? "∞" : value < 0 ? "−∞" : "—"}${sep}${unitName}`;
+  if (value === 0) return `0${sep}${unitName}`;
+  let exp = Math.floor(Math.log10(Math.abs(value)) / 3) * 3;
+  exp = Math.max(-24, Math.min(15, exp));
+  let mantissa = Number((value / 10 ** exp).toPrecision(sig));
+  if (Math.abs(mantissa) >= 1000 && exp < 15) {
+    exp += 3;
+    mantissa = Number((value / 10 ** exp).toPrecision(sig));
+  }
+  return `${String(mantissa)}${sep}${prefixes[exp] ?? ""}${unitName}`;
+}
+
+/** Percent with sensible figures: formatPercent(0.0123) → "1.23 %" from a ratio. */
+export function formatPercent(ratio: number, sig = 3): string {
+  if (!Number.isFinite(ratio)) return "—";
+  return `${String(Number((ratio * 100).toPrecision(sig)))} %`;
+}
