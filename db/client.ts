@@ -1,0 +1,66 @@
+// The one database handle of the process: PGlite on PGLITE_DIR, or a PostgreSQL server with DATABASE_URL.
+// Cached on globalThis because Next loads this module separately for instrumentation, routes and pages.
+import path from "node:path";
+import type { PgDatabase, PgQueryResultHKT } from "drizzle-orm/pg-core";
+import { env } from "@/lib/env";
+import { acquireDataDirLock } from "./lock";
+import * as schema from "./schema";
+
+export type Db = PgDatabase<PgQueryResultHKT, typeof schema>;
+export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
+export type DatabaseKind = "pglite" | "postgres";
+
+type Handle = { db: Db; kind: DatabaseKind; close: () => Promise<void> };
+
+const globalKey = Symbol.for("sensewright.db");
+type GlobalWithDb = typeof globalThis & { [globalKey]?: Promise<Handle> };
+const g = globalThis as GlobalWithDb;
+
+const migrationsFolder = () => path.join(process.cwd(), "db", "migrations");
+
+async function open(): Promise<Handle> {
+  const { DATABASE_URL, PGLITE_DIR } = env();
+  if (DATABASE_URL) {
+    const { Pool } = await import("pg");
+    const { drizzle } = await import("drizzle-orm/node-postgres");
+    const { migrate } = await import("drizzle-orm/node-postgres/migrator");
+    const pool = new Pool({ connectionString: DATABASE_URL, max: 10 });
+    const db = drizzle(pool, { schema });
+    await migrate(db, { migrationsFolder: migrationsFolder() });
+    return { db: db as unknown as Db, kind: "postgres", close: () => pool.end() };
+  }
+  const inMemory = PGLITE_DIR.startsWith("memory://");
+  if (!inMemory) acquireDataDirLock(path.resolve(PGLITE_DIR));
+  const { PGlite } = await import("@electric-sql/pglite");
+  const { drizzle } = await import("drizzle-orm/pglite");
+  const { migrate } = await import("drizzle-orm/pglite/migrator");
+  const client = new PGlite(inMemory ? undefined : path.resolve(PGLITE_DIR));
+  const db = drizzle(client, { schema });
+  await migrate(db, { migrationsFolder: migrationsFolder() });
+  return { db: db as unknown as Db, kind: "pglite", close: () => client.close() };
+}
+
+function handle(): Promise<Handle> {
+  if (!g[globalKey]) {
+    g[globalKey] = open().catch((e: unknown) => {
+      delete g[globalKey];
+      throw e;
+    });
+  }
+  return g[globalKey];
+}
+
+/** The database, opened and migrated on first use. */
+export async function getDb(): Promise<Db> {
+  return (await handle()).db;
+}
+
+export async function databaseKind(): Promise<DatabaseKind> {
+  return (await handle()).kind;
+}
+
+export async function closeDb(): Promise<void> {
+  const h = g[globalKey];
+  delete g[globalKey];
+  if (h) await (await h).close();
+}

@@ -1,0 +1,57 @@
+#!/usr/bin/env node
+// `npm test`: unit and database tests (Vitest), a production build, then HTTP and browser tests
+// (Playwright, Debian's Chromium). Ends with one line: "N passed, N failed".
+import { spawnSync } from "node:child_process";
+import fs from "node:fs";
+import path from "node:path";
+
+const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), "..");
+process.chdir(root);
+const out = path.join(root, "test-results");
+fs.mkdirSync(out, { recursive: true });
+const only = process.argv[2]; // "unit" | "e2e" | undefined
+
+const totals = { passed: 0, failed: 0, skipped: 0 };
+const run = (cmd, args, env = {}) =>
+  spawnSync(cmd, args, { stdio: "inherit", env: { ...process.env, ...env } }).status ?? 1;
+
+function readJson(file) {
+  try {
+    return JSON.parse(fs.readFileSync(file, "utf8"));
+  } catch {
+    return null;
+  }
+}
+
+if (only !== "e2e") {
+  const file = path.join(out, "vitest.json");
+  fs.rmSync(file, { force: true });
+  const status = run("npx", ["vitest", "run", "--reporter=default", "--reporter=json", `--outputFile=${file}`]);
+  const report = readJson(file);
+  if (report) {
+    totals.passed += report.numPassedTests ?? 0;
+    totals.failed += (report.numFailedTests ?? 0) + (report.numFailedTestSuites ?? 0) * (report.numFailedTests ? 0 : 1);
+    totals.skipped += (report.numPendingTests ?? 0) + (report.numTodoTests ?? 0);
+  } else if (status !== 0) totals.failed += 1;
+}
+
+if (only !== "unit") {
+  console.log("\n[test] building the app for the HTTP and browser tests…");
+  if (run("npx", ["next", "build"]) !== 0) {
+    totals.failed += 1;
+  } else {
+    const file = path.join(out, "playwright.json");
+    fs.rmSync(file, { force: true });
+    const status = run("npx", ["playwright", "test", "--reporter=list,json"], { PLAYWRIGHT_JSON_OUTPUT_NAME: file });
+    const report = readJson(file);
+    if (report?.stats) {
+      totals.passed += report.stats.expected ?? 0;
+      totals.failed += (report.stats.unexpected ?? 0) + (report.stats.flaky ?? 0);
+      totals.skipped += report.stats.skipped ?? 0;
+      if (status !== 0 && !report.stats.unexpected) totals.failed += report.errors?.length ? report.errors.length : 1;
+    } else if (status !== 0) totals.failed += 1;
+  }
+}
+
+console.log(`\n${totals.passed} passed, ${totals.failed} failed${totals.skipped ? `, ${totals.skipped} skipped` : ""}`);
+process.exit(totals.failed > 0 ? 1 : 0);
