@@ -13,7 +13,7 @@ export default defineConfig({
   expect: { timeout: 10_000 },
   retries: 0,
   reporter: process.env.CI ? [["list"]] : [["list"]],
-  outputDir: "test-results",
+  outputDir: process.env.PW_OUTPUT_DIR ?? "test-results/playwright",
   use: {
     baseURL,
     trace: "retain-on-failure",

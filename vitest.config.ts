@@ -3,7 +3,10 @@ import { defineConfig } from "vitest/config";
 
 export default defineConfig({
   resolve: {
-    alias: { "@": fileURLToPath(new URL("./", import.meta.url)) },
+    alias: {
+      "@": fileURLToPath(new URL("./", import.meta.url)),
+      "server-only": fileURLToPath(new URL("./tests/fixtures/server-only.ts", import.meta.url)),
+    },
   },
   test: {
     environment: "node",
@@ -11,7 +14,9 @@ export default defineConfig({
     // A fresh PGlite takes seconds to start; database tests share one per file.
     testTimeout: 60_000,
     hookTimeout: 60_000,
-    // server-only throws outside React Server Components; tests import server modules directly.
-    server: { deps: { inline: [] } },
+    // Database tests get an in-memory PGlite per test file, or the PostgreSQL server of DATABASE_URL
+    // (one file at a time then, since they share that database).
+    env: process.env.DATABASE_URL ? {} : { PGLITE_DIR: "memory://" },
+    fileParallelism: !process.env.DATABASE_URL,
   },
 });
