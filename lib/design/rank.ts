@@ -26,7 +26,7 @@ export type RankScope = Record<RankField, number>;
 
 const allowedFunctions = new Set(["abs", "sqrt", "cbrt", "exp", "log", "log10", "log2", "min", "max", "pow", "square", "round", "floor", "ceil"]);
 const allowedConstants = new Set(["pi", "e"]);
-const allowedOperators = new Set(["+", "-", "*", "/", "^", "unaryMinus", "unaryPlus"]);
+const allowedOperators = new Set(["add", "subtract", "multiply", "divide", "pow", "unaryMinus", "unaryPlus"]);
 
 export class RankExpressionError extends Error {
   readonly field = "rank";

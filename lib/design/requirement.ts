@@ -189,6 +189,12 @@ function normalize(b: Base): Requirement {
   };
 }
 
+function gainsAreSound(a: Base["amplifier"]): boolean {
+  if (Array.isArray(a.gains)) return a.gains.every((g) => g > 0);
+  const set = a.gains ?? a.gainSet;
+  return !set || (isSeriesName(set.series) && set.min >= 1 && set.max <= 100_000);
+}
+
 function crossFieldRules(b: Base, ctx: z.RefinementCtx) {
   const issue = (path: (string | number)[], message: string) => ctx.addIssue({ code: "custom", path, message });
   const { current, supply, drop, accuracy, temperature, shunt, amplifier } = b;
@@ -207,8 +213,9 @@ function crossFieldRules(b: Base, ctx: z.RefinementCtx) {
   if (temperature.min > temperature.max) issue(["temperature", "min"], "Lowest ambient temperature must not be above the highest");
   if (temperature.min < -273.15) issue(["temperature", "min"], "Temperature is below absolute zero");
   if (temperature.max > 300) issue(["temperature", "max"], "Highest ambient temperature must be at most 300 °C");
+  // Field-level refusals do not stop these rules from running: only check what is sound.
   if (shunt.min > shunt.max) issue(["shunt", "min"], "Smallest shunt must not be above the largest");
-  else {
+  else if (isSeriesName(shunt.series) && shunt.min > 0 && gainsAreSound(amplifier)) {
     const n = seriesValues(shunt.series, shunt.min, shunt.max).length;
     if (n === 0) issue(["shunt", "min"], `No ${shunt.series} value lies between the smallest and the largest shunt`);
     const g = gainsOf(amplifier).gains.length;
