@@ -73,7 +73,7 @@ export function logSpace(a: number, b: number, n: number): number[] {
   if (n <= 1 || a === b) return [a];
   const la = Math.log(a);
   const step = (Math.log(b) - la) / (n - 1);
-  return Array.from({ length: n }, (_, i) => (i === n - 1 ? b : Math.exp(la + i * step)));
+  return Array.from({ length: n }, (_, i) => (i === 0 ? a : i === n - 1 ? b : Math.exp(la + i * step)));
 }
 
 export type ErrorCurvePoint = { currentA: number; worstPercent: number; rssPercent: number };

@@ -134,7 +134,7 @@ const baseSchema = z.object({
       noiseDensity: q("noiseDensity", "Input noise density", nonNegative("Input noise density")).default(40e-9),
       gbw: q("frequency", "Gain-bandwidth", positive("Gain-bandwidth")).default(2e6),
       supply: q("voltage", "Amplifier supply", positive("Amplifier supply")).default(5),
-      swingLow: q("voltage", "Lowest output (above ground)", nonNegative("Lowest output")).default(0.02),
+      swingLow: q("voltage", "Lowest output (above ground)", nonNegative("Lowest output")).default(0.01),
       swingHigh: q("voltage", "Output headroom below the amplifier supply", nonNegative("Output headroom")).default(0.05),
       filterHz: q("frequency", "Output filter corner", positive("Output filter corner")).nullable().default(null),
       cmrrDb: z.number().min(0, { error: "CMRR cannot be negative" }).max(200).default(100),

@@ -137,7 +137,8 @@ describe("solve: the listing", () => {
     supply: { voltage: "3.0 V" },
     drop: { max: "60 mV" },
     readout: { kind: "adc", bits: 16, fullScale: "2.5 V" },
-    shunt: { series: "E96", min: "1 mohm", max: "1 kohm" },
+    shunt: { series: "E96", min: "10 mohm", max: "1 ohm" },
+    amplifier: { gains: { series: "E12", min: 2, max: 200 } },
   });
 
   it("lists the front first, then the rest by the default ranking, up to the limit", () => {
@@ -178,7 +179,7 @@ describe("solve: the listing", () => {
   });
 
   it("accepts the documented example expression", () => {
-    const s = solve({ ...logger, limit: 20 }, { rankExpression: "burdenV * 1000 + errorAtMinPercent" });
+    const s = solve({ ...logger, limit: 80 }, { rankExpression: "burdenV * 1000 + errorAtMinPercent" });
     expect(s.ranking).toMatch(/burdenV \* 1000/);
     const rest = s.candidates.filter((c) => c.feasible && !c.pareto);
     expect(rest.length).toBeGreaterThan(5);
