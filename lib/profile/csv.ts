@@ -1,0 +1,145 @@
+// A refused CSV: what is wrong and exactly where, so the user can fix the file.
+// Rows are counted two ways and the message says which: the 1-based data row (after the header)
+// and the line of the file (comments and blank lines included).
+import { parseQuantity, type Dimension } from "@/lib/design";
+
+export type CsvPlace = {
+  /** 1-based data row after the header; absent for header problems and whole-file problems. */
+  row?: number;
+  /** 1-based line of the file. */
+  line?: number;
+  /** The column as written in the header (or the expected column's name when it is missing). */
+  column?: string;
+};
+
+export class CsvRefusal extends Error {
+  constructor(
+    readonly reason: string,
+    readonly place: CsvPlace = {},
+  ) {
+    super(describePlace(place) + reason);
+    this.name = "CsvRefusal";
+  }
+
+  /** The body of the 422: the API's error shape plus where the problem is. */
+  toJson() {
+    const { row, line, column } = this.place;
+    return {
+      message: this.message,
+      fieldErrors: { file: [this.message] },
+      ...(row !== undefined ? { row } : {}),
+      ...(line !== undefined ? { line } : {}),
+      ...(column !== undefined ? { column } : {}),
+    };
+  }
+}
+
+function describePlace({ row, line, column }: CsvPlace): string {
+  const parts: string[] = [];
+  if (row !== undefined) parts.push(`Data row ${row}${line !== undefined ? ` (file line ${line})` : ""}`);
+  else if (line !== undefined) parts.push(`File line ${line}`);
+  if (column !== undefined) parts.push(`column "${column}"`);
+  return parts.length ? `${parts.join(", ")}: ` : "";
+}
+
+const numberText = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+const notFinite = /^[+-]?(nan|inf|infinity|∞)$/i;
+
+/** A cell as a finite number, or the reason it is not one. */
+export function readNumberCell(raw: string): { ok: true; value: number } | { ok: false; reason: string } {
+  const text = raw.trim();
+  if (text === "") return { ok: false, reason: "the cell is empty; expected a number" };
+  if (notFinite.test(text)) return { ok: false, reason: `"${text}" is not a finite number (NaN and infinity are refused)` };
+  if (!numberText.test(text)) return { ok: false, reason: `"${truncate(text)}" is not a number` };
+  const value = Number(text);
+  if (!Number.isFinite(value)) return { ok: false, reason: `"${truncate(text)}" is too large to be a finite number` };
+  return { ok: true, value };
+}
+
+export function truncate(text: string, max = 40): string {
+  return text.length > max ? `${text.slice(0, max)}…` : text;
+}
+
+/** Tracks file line numbers from Papa's row-end cursor, counting newlines once. */
+export class LineCounter {
+  private pos = 0;
+  private newlines = 0;
+  constructor(private readonly text: string) {}
+
+  /** The (last) line of the row that ends at `cursor`. */
+  lineOfRowEndingAt(cursor: number): number {
+    let end = cursor;
+    if (end > 0 && this.text[end - 1] === "\n") end -= 1;
+    while (this.pos < end) {
+      const next = this.text.indexOf("\n", this.pos);
+      if (next === -1 || next >= end) {
+        this.pos = end;
+        break;
+      }
+      this.newlines += 1;
+      this.pos = next + 1;
+    }
+    return this.newlines + 1;
+  }
+}
+
+/** `Time (ms)` → { name: "Time", unit: "ms" }; `current [uA]` → { name: "current", unit: "uA" }. */
+export function splitHeaderUnit(cell: string): { name: string; unit: string | null } {
+  const text = cell.trim().replace(/^\uFEFF/, "");
+  const m = /^(.*?)\s*(?:\(([^()]*)\)|\[([^[\]]*)\])\s*$/.exec(text);
+  if (!m) return { name: text, unit: null };
+  return { name: (m[1] ?? "").trim(), unit: (m[2] ?? m[3] ?? "").trim() };
+}
+
+/** How many SI base units one of `unit` is, through the engine's quantity parser. */
+export function unitScale(
+  unit: string,
+  dim: Dimension,
+  place: CsvPlace,
+): { ok: true; scale: number } | { ok: false; refusal: CsvRefusal } {
+  const example = exampleUnit[dim] ?? "an SI unit";
+  if (unit === "") return { ok: false, refusal: new CsvRefusal(`the brackets hold no unit; write one (e.g. ${example}) or leave them out`, place) };
+  const r = parseQuantity(`1 ${unit}`, dim);
+  if (r.ok && r.value > 0) return { ok: true, scale: r.value };
+  const head = `1 ${unit}`;
+  const wrongDimension = !r.ok && r.message.startsWith(head) && r.message.includes(", not ");
+  const reason = wrongDimension
+    ? `unit "${unit}"${r.message.slice(head.length)}`
+    : `unit "${unit}" is not a known unit of ${dim} (use e.g. ${example})`;
+  return { ok: false, refusal: new CsvRefusal(reason, place) };
+}
+
+const exampleUnit: Partial<Record<Dimension, string>> = {
+  current: "mA",
+  voltage: "mV",
+  time: "ms",
+  resistance: "mohm",
+  frequency: "kHz",
+  power: "W",
+};
+
+/** Header names compared without case, spaces, dashes or underscores. */
+export function headerKey(name: string): string {
+  return name.toLowerCase().replace(/[\s_\-./]+/g, "");
+}
+
+const delimiters = [",", ";", "\t", "|"] as const;
+
+/** The delimiter of the header line (the first line that is neither blank nor a "#" comment). */
+export function detectDelimiter(text: string): string {
+  let pos = 0;
+  while (pos < text.length) {
+    const end = text.indexOf("\n", pos);
+    const line = text.slice(pos, end === -1 ? text.length : end).trim();
+    pos = end === -1 ? text.length : end + 1;
+    if (line === "" || line.startsWith("#")) continue;
+    let best: string = ",";
+    let bestCount = 0;
+    for (const d of delimiters) {
+      const count = line.split(d).length - 1;
+      if (count > bestCount) [best, bestCount] = [d, count];
+    }
+    return best;
+  }
+  return ",";
+}

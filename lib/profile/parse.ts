@@ -1,0 +1,156 @@
+// Reads a current recording from CSV: a time column and a current column, units in the header.
+// Papa parses row by row (step) and the first problem stops it; nothing partial is returned.
+import Papa from "papaparse";
+import { CsvRefusal, LineCounter, detectDelimiter, headerKey, readNumberCell, splitHeaderUnit, truncate, unitScale } from "./csv";
+
+export type ProfileSeries = {
+  /** Seconds, strictly increasing. */
+  timesS: Float64Array;
+  /** Amperes. */
+  currentsA: Float64Array;
+  /** The header's column names as written, for messages and the screen. */
+  columns: { time: string; current: string };
+};
+
+export type ParseOutcome = { ok: true; series: ProfileSeries } | { ok: false; refusal: CsvRefusal };
+
+const timeNames = new Set(["time", "t"]);
+const currentNames = new Set(["current", "i"]);
+
+export const PROFILE_HEADER_HELP =
+  'The header must name a time column ("time" or "t") and a current column ("current" or "i"), ' +
+  'each with an optional unit in parentheses or brackets, e.g. "Time (ms)" and "current [uA]"; without a unit, seconds and amperes.';
+
+type Column = { index: number; label: string; scale: number };
+
+/** Finds the two columns in the header row; refuses missing, unknown or doubled columns and bad units. */
+export function readProfileHeader(cells: string[], line: number): { time: Column; current: Column } | CsvRefusal {
+  let time: Column | null = null;
+  let current: Column | null = null;
+  for (const [index, cell] of cells.entries()) {
+    const label = cell.trim().replace(/^\uFEFF/, "");
+    const { name, unit } = splitHeaderUnit(label);
+    const key = headerKey(name);
+    const kind = timeNames.has(key) ? "time" : currentNames.has(key) ? "current" : null;
+    if (!kind) {
+      const shown = label === "" ? `column ${index + 1} has no name` : `"${truncate(label)}" is not a column this file may have`;
+      return new CsvRefusal(`${shown}. ${PROFILE_HEADER_HELP}`, { line, column: label || `column ${index + 1}` });
+    }
+    if ((kind === "time" ? time : current) !== null) {
+      return new CsvRefusal(`there is a second ${kind} column; keep exactly one`, { line, column: label });
+    }
+    let scale = 1;
+    if (unit !== null) {
+      const s = unitScale(unit, kind, { line, column: label });
+      if (!s.ok) return s.refusal;
+      scale = s.scale;
+    }
+    const col = { index, label, scale };
+    if (kind === "time") time = col;
+    else current = col;
+  }
+  if (!time) return new CsvRefusal(`the time column is missing. ${PROFILE_HEADER_HELP}`, { line, column: "time" });
+  if (!current) return new CsvRefusal(`the current column is missing. ${PROFILE_HEADER_HELP}`, { line, column: "current" });
+  return { time, current };
+}
+
+/** Grows a Float64Array as rows arrive, without boxing every number. */
+class Float64Builder {
+  private data = new Float64Array(4096);
+  length = 0;
+  push(v: number) {
+    if (this.length === this.data.length) {
+      const next = new Float64Array(this.data.length * 2);
+      next.set(this.data);
+      this.data = next;
+    }
+    this.data[this.length++] = v;
+  }
+  last(): number {
+    return this.data[this.length - 1] ?? Number.NaN;
+  }
+  finish(): Float64Array {
+    return this.data.slice(0, this.length);
+  }
+}
+
+/** Whole-file limits: more rows than this is refused before memory runs out. */
+export const MAX_PROFILE_ROWS = 5_000_000;
+
+/**
+ * Parses a profile CSV held in a string. Lines starting with "#" are comments; blank lines are
+ * skipped; the delimiter (comma, semicolon, tab) is detected. Returns the series or the first refusal.
+ */
+export function parseProfileCsv(text: string): ParseOutcome {
+  const lines = new LineCounter(text);
+  const times = new Float64Builder();
+  const currents = new Float64Builder();
+  let header = null as { time: Column; current: Column } | null;
+  let width = 0;
+  let refusal = null as CsvRefusal | null;
+  let row = 0;
+
+  Papa.parse<string[]>(text, {
+    comments: "#",
+    delimiter: detectDelimiter(text),
+    skipEmptyLines: false,
+    step(result, parser) {
+      const line = lines.lineOfRowEndingAt(result.meta.cursor);
+      const cells = result.data;
+      const stop = (r: CsvRefusal) => {
+        refusal = r;
+        parser.abort();
+      };
+      const bad = result.errors.find((e) => e.type !== "Delimiter");
+      if (bad) return stop(new CsvRefusal(`the file cannot be read as CSV here: ${bad.message}`, header ? { row: row + 1, line } : { line }));
+      if (cells.length === 0 || (cells.length === 1 && (cells[0] ?? "").trim() === "")) return; // blank line
+      if (!header) {
+        const h = readProfileHeader(cells, line);
+        if (h instanceof CsvRefusal) return stop(h);
+        header = h;
+        width = cells.length;
+        return;
+      }
+      row += 1;
+      if (row > MAX_PROFILE_ROWS) return stop(new CsvRefusal(`the file has more than ${MAX_PROFILE_ROWS} data rows`, { row, line }));
+      if (cells.length !== width) {
+        return stop(new CsvRefusal(`the row has ${cells.length} cell${cells.length === 1 ? "" : "s"} but the header has ${width} columns`, { row, line }));
+      }
+      const t = readNumberCell(cells[header.time.index] ?? "");
+      if (!t.ok) return stop(new CsvRefusal(t.reason, { row, line, column: header.time.label }));
+      const i = readNumberCell(cells[header.current.index] ?? "");
+      if (!i.ok) return stop(new CsvRefusal(i.reason, { row, line, column: header.current.label }));
+      const tS = t.value * header.time.scale;
+      const iA = i.value * header.current.scale;
+      if (!Number.isFinite(tS) || !Number.isFinite(iA)) {
+        const column = Number.isFinite(tS) ? header.current.label : header.time.label;
+        return stop(new CsvRefusal("the value is too large to be a finite number in SI units", { row, line, column }));
+      }
+      if (times.length > 0 && !(tS > times.last())) {
+        return stop(
+          new CsvRefusal(`time must increase from row to row, but ${t.value} is not after the previous row's ${Number((times.last() / header.time.scale).toPrecision(12))}`, {
+            row,
+            line,
+            column: header.time.label,
+          }),
+        );
+      }
+      times.push(tS);
+      currents.push(iA);
+    },
+  });
+
+  if (refusal) return { ok: false, refusal };
+  if (!header) return { ok: false, refusal: new CsvRefusal(`the file is empty. ${PROFILE_HEADER_HELP}`, { line: 1 }) };
+  const h = header;
+  if (times.length < 2) {
+    return {
+      ok: false,
+      refusal: new CsvRefusal(
+        `the file has ${times.length} data row${times.length === 1 ? "" : "s"}; a profile needs at least two (a start and an end time)`,
+        times.length === 1 ? { row: 1 } : {},
+      ),
+    };
+  }
+  return { ok: true, series: { timesS: times.finish(), currentsA: currents.finish(), columns: { time: h.time.label, current: h.current.label } } };
+}
