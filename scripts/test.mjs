@@ -9,7 +9,11 @@ const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), "..")
 process.chdir(root);
 const out = path.join(root, "test-results");
 fs.mkdirSync(out, { recursive: true });
-const only = process.argv[2]; // "unit" | "e2e" | undefined
+// node scripts/test.mjs [unit|e2e] [--no-build] [playwright files…]
+const args = process.argv.slice(2);
+const only = args[0] === "unit" || args[0] === "e2e" ? args.shift() : undefined;
+const noBuild = args.includes("--no-build");
+const files = args.filter((a) => a !== "--no-build");
 
 const totals = { passed: 0, failed: 0, skipped: 0 };
 const run = (cmd, args, env = {}) =>
@@ -30,19 +34,21 @@ if (only !== "e2e") {
   const report = readJson(file);
   if (report) {
     totals.passed += report.numPassedTests ?? 0;
-    totals.failed += (report.numFailedTests ?? 0) + (report.numFailedTestSuites ?? 0) * (report.numFailedTests ? 0 : 1);
+    totals.failed += report.numFailedTests ?? 0;
+    // A file that fails to load has no failed tests of its own; an unhandled error fails the run too.
+    if (status !== 0 && !report.numFailedTests) totals.failed += Math.max(1, report.numFailedTestSuites ?? 0);
     totals.skipped += (report.numPendingTests ?? 0) + (report.numTodoTests ?? 0);
   } else if (status !== 0) totals.failed += 1;
 }
 
 if (only !== "unit") {
   console.log("\n[test] building the app for the HTTP and browser tests…");
-  if (run("npx", ["next", "build"]) !== 0) {
+  if (!noBuild && run("npx", ["next", "build"]) !== 0) {
     totals.failed += 1;
   } else {
     const file = path.join(out, "playwright.json");
     fs.rmSync(file, { force: true });
-    const status = run("npx", ["playwright", "test", "--reporter=list,json"], { PLAYWRIGHT_JSON_OUTPUT_NAME: file });
+    const status = run("npx", ["playwright", "test", "--reporter=list,json", ...files], { PLAYWRIGHT_JSON_OUTPUT_NAME: file });
     const report = readJson(file);
     if (report?.stats) {
       totals.passed += report.stats.expected ?? 0;
@@ -53,5 +59,6 @@ if (only !== "unit") {
   }
 }
 
+fs.writeFileSync(path.join(out, "totals.json"), JSON.stringify(totals));
 console.log(`\n${totals.passed} passed, ${totals.failed} failed${totals.skipped ? `, ${totals.skipped} skipped` : ""}`);
 process.exit(totals.failed > 0 ? 1 : 0);
