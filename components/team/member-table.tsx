@@ -68,7 +68,7 @@ export function MemberTable({ members, canEdit, selfId }: { members: Member[]; c
                   <span data-testid={`role-${m.email}`}>{m.role}</span>
                 )}
               </td>
-              <td className="px-4 py-2 text-ink-muted">{new Date(m.joinedAt).toLocaleDateString("en-GB")}</td>
+              <td className="px-4 py-2 text-ink-muted">{m.joinedAt.slice(0, 10)}</td>
             </tr>
           ))}
         </tbody>
