@@ -1,4 +1,110 @@
+// Demo designs of the invented Harbourline scenario (DESIGN.md §6), each built through the design
+// service so every figure comes from the engine, with the choice taken from the solver's Pareto front.
+//
+// Adjusted scenarios (the engine finds no single shunt and gain for the literal ones):
+// - Soil-moisture logger: 3 µA to 180 mA is far wider than one range can read (the amplifier's
+//   output floor alone hides everything below about 1/125 of full scale); the solver proposes a
+//   three-range plan. The demo design is the radio-burst range, 2 mA to 180 mA, and says so.
+// - Pump controller: 100 mA to 6 A with a 150 mV drop and a 120 dB CMRR amplifier; at 24 V common
+//   mode a 100 dB part leaves too much offset at the bottom of the accuracy band.
+// - Bench adapter: 2 µA to 180 µA, an amplifier whose output reaches 1 mV of ground, a 10 Hz output
+//   filter (a meter reads slowly) and a 3 % target; the choice nearest 1 mV per µA is taken.
+import { parseRequirement, solve, type Candidate, type RequirementInput } from "@/lib/design";
+import { evaluateDesign } from "@/lib/designs/service";
+import { changeDesignStatus, createDesign } from "../queries/designs";
+import { addReview } from "../queries/reviews";
 import type { DemoIds } from "./team";
 
-/** Demo designs of the Harbourline scenario (filled in by the designs feature). */
-export async function seedDemoDesigns(_ids: DemoIds): Promise<void> {}
+type DemoDesign = {
+  name: string;
+  project: string;
+  requirement: RequirementInput;
+  pick: (front: Candidate[]) => Candidate | undefined;
+  state: "draft" | "in-review" | "approved";
+};
+
+export const demoDesigns: DemoDesign[] = [
+  {
+    name: "Logger radio-burst range",
+    project: "Soil-moisture logger",
+    requirement: {
+      current: { min: "2 mA", max: "180 mA" },
+      supply: { voltage: "3.0 V", side: "low" },
+      drop: { max: "60 mV" },
+      readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+      resolution: { countsAtMin: 10 },
+    },
+    pick: (front) => front[0],
+    state: "approved",
+  },
+  {
+    name: "Pump motor current, high side",
+    project: "Pump controller",
+    requirement: {
+      current: { min: "100 mA", max: "6 A" },
+      supply: { voltage: "24 V", side: "high" },
+      drop: { max: "150 mV" },
+      readout: { kind: "adc", bits: 12, fullScale: "3.3 V" },
+      resolution: { countsAtMin: 10 },
+      amplifier: { cmrrDb: 120 },
+    },
+    pick: (front) => front[0],
+    state: "in-review",
+  },
+  {
+    name: "Meter adapter, 1 mV per µA",
+    project: "Bench adapter",
+    requirement: {
+      current: { min: "2 uA", max: "180 uA" },
+      supply: { voltage: "3.3 V", side: "low" },
+      drop: { max: "20 mV" },
+      readout: { kind: "meter", fullScale: "200 mV", counts: 2000 },
+      resolution: { countsAtMin: 10 },
+      accuracy: { percent: 3 },
+      amplifier: { swingLow: "1 mV", filterHz: "10 Hz" },
+    },
+    pick: (front) =>
+      [...front].sort((a, b) => Math.abs(Math.log(a.transimpedanceVPerA / 1000)) - Math.abs(Math.log(b.transimpedanceVPerA / 1000)))[0],
+    state: "draft",
+  },
+];
+
+/** The Pareto candidate a demo design uses, or an error naming the scenario. */
+export function demoChoice(d: DemoDesign) {
+  const parsed = parseRequirement(d.requirement);
+  if (!parsed.ok) throw new Error(`demo design "${d.name}": ${parsed.message}`);
+  const front = solve(parsed.requirement).candidates.filter((c) => c.pareto && c.feasible);
+  const chosen = d.pick(front);
+  if (!chosen) throw new Error(`demo design "${d.name}": the solver found no feasible candidate`);
+  return { shuntOhms: chosen.shuntOhms, gain: chosen.gain };
+}
+
+export async function seedDemoDesigns(ids: DemoIds): Promise<void> {
+  const designer = ids.userIds.designer;
+  for (const d of demoDesigns) {
+    const evaluated = evaluateDesign(d.requirement, demoChoice(d));
+    const { id } = await createDesign({ ...evaluated, teamId: ids.teamId, userId: designer, name: d.name, project: d.project });
+    if (d.state === "draft") continue;
+    const submitted = await changeDesignStatus({
+      designId: id,
+      teamId: ids.teamId,
+      actorId: designer,
+      revision: 1,
+      from: ["draft"],
+      to: "in-review",
+      action: "design.submitted",
+    });
+    if (!submitted.ok) throw new Error(`demo design "${d.name}": ${submitted.message}`);
+    if (d.state === "approved") {
+      const approved = await addReview({
+        designId: id,
+        teamId: ids.teamId,
+        actorId: ids.userIds.reviewer,
+        verdict: "approve",
+        body: "Burden and error at the bottom of the burst range are within target; approved for the first build.",
+        revision: 1,
+      });
+      if (!approved.ok) throw new Error(`demo design "${d.name}": ${approved.message}`);
+    }
+  }
+}

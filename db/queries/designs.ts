@@ -1,0 +1,278 @@
+// Designs and their immutable revisions. Every write is one transaction with its audit event;
+// an edit is a compare-and-set on designs.revision, so a stale edit writes nothing.
+import { and, asc, desc, eq, sql } from "drizzle-orm";
+import { alias } from "drizzle-orm/pg-core";
+import type { CandidateDetail, Choice, Requirement } from "@/lib/design";
+import type { DesignView } from "@/lib/design-view";
+import { getDb, type Tx } from "../client";
+import { designRevisions, designs, reviews, users, type DesignStatus } from "../schema";
+import { recordAudit } from "./audit";
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+/** Ids come from URLs: anything that is not a UUID cannot name a design (and must not reach SQL as one). */
+export const isUuid = (id: string) => UUID.test(id);
+
+export type SavedFigures = { requirement: Requirement; choice: Choice; metrics: CandidateDetail };
+
+export type NewDesign = SavedFigures & {
+  teamId: string;
+  userId: string;
+  name: string;
+  project?: string | null;
+};
+
+/** The immutable row of one save. */
+function insertRevision(tx: Tx, designId: string, revision: number, input: SavedFigures & { name: string; userId: string }) {
+  return tx.insert(designRevisions).values({
+    designId,
+    revision,
+    name: input.name,
+    requirement: input.requirement as unknown as Record<string, unknown>,
+    choice: input.choice,
+    metrics: input.metrics as unknown as Record<string, unknown>,
+    authorId: input.userId,
+  });
+}
+
+/** Creates the design and its revision 1 together. */
+export async function createDesign(input: NewDesign): Promise<{ id: string; revision: 1; status: "draft" }> {
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .insert(designs)
+      .values({ teamId: input.teamId, name: input.name, project: input.project ?? null, createdBy: input.userId })
+      .returning({ id: designs.id });
+    if (!row) throw new Error("design not created");
+    await insertRevision(tx, row.id, 1, input);
+    await recordAudit(
+      {
+        teamId: input.teamId,
+        actorId: input.userId,
+        action: "design.created",
+        targetType: "design",
+        targetId: row.id,
+        details: { name: input.name, revision: 1, shuntOhms: input.choice.shuntOhms, gain: input.choice.gain },
+      },
+      tx,
+    );
+    return { id: row.id, revision: 1 as const, status: "draft" as const };
+  });
+}
+
+const author = alias(users, "author");
+
+/** The team's designs, newest change first; makers see approved ones only. */
+export async function listDesigns(teamId: string, opts: { approvedOnly?: boolean } = {}) {
+  const db = await getDb();
+  const where = opts.approvedOnly
+    ? and(eq(designs.teamId, teamId), eq(designs.status, "approved"))
+    : eq(designs.teamId, teamId);
+  const rows = await db
+    .select({
+      id: designs.id,
+      name: designs.name,
+      project: designs.project,
+      status: designs.status,
+      revision: designs.revision,
+      updatedAt: designs.updatedAt,
+      authorName: author.name,
+      shuntOhms: sql<number>`(${designRevisions.choice}->>'shuntOhms')::float8`,
+      gain: sql<number>`(${designRevisions.choice}->>'gain')::float8`,
+    })
+    .from(designs)
+    .innerJoin(designRevisions, and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)))
+    .innerJoin(author, eq(author.id, designRevisions.authorId))
+    .where(where)
+    .orderBy(desc(designs.updatedAt));
+  return rows.map((r) => ({ ...r, updatedAt: r.updatedAt.toISOString() }));
+}
+
+/** The design with its current revision, scoped by team: another team's design is null. */
+export async function getDesign(designId: string, teamId: string) {
+  if (!isUuid(designId)) return null;
+  const db = await getDb();
+  const rows = await db
+    .select({ design: designs, current: designRevisions, authorName: author.name })
+    .from(designs)
+    .innerJoin(designRevisions, and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)))
+    .innerJoin(author, eq(author.id, designRevisions.authorId))
+    .where(and(eq(designs.id, designId), eq(designs.teamId, teamId)))
+    .limit(1);
+  return rows[0] ?? null;
+}
+
+export type ApprovalInfo = { revision: number; byName: string; byId: string; at: string };
+
+/** Approvals of a design, by revision (each approval belongs to the revision it was given on). */
+async function approvalsOf(designId: string): Promise<Map<number, ApprovalInfo>> {
+  const db = await getDb();
+  const rows = await db
+    .select({ revision: reviews.revision, byName: users.name, byId: users.id, at: reviews.createdAt })
+    .from(reviews)
+    .innerJoin(users, eq(users.id, reviews.authorId))
+    .where(and(eq(reviews.designId, designId), eq(reviews.verdict, "approve")))
+    .orderBy(asc(reviews.createdAt));
+  const out = new Map<number, ApprovalInfo>();
+  for (const r of rows) out.set(r.revision, { revision: r.revision, byName: r.byName, byId: r.byId, at: r.at.toISOString() });
+  return out;
+}
+
+/** Every revision of a design, oldest first, with its author and approval. Assumes the design was scoped already. */
+export async function listRevisions(designId: string) {
+  const db = await getDb();
+  const rows = await db
+    .select({
+      revision: designRevisions.revision,
+      name: designRevisions.name,
+      requirement: designRevisions.requirement,
+      choice: designRevisions.choice,
+      metrics: designRevisions.metrics,
+      authorId: designRevisions.authorId,
+      authorName: users.name,
+      createdAt: designRevisions.createdAt,
+    })
+    .from(designRevisions)
+    .innerJoin(users, eq(users.id, designRevisions.authorId))
+    .where(eq(designRevisions.designId, designId))
+    .orderBy(asc(designRevisions.revision));
+  const approvals = await approvalsOf(designId);
+  return rows.map((r) => ({
+    ...r,
+    requirement: r.requirement as unknown as Requirement,
+    metrics: r.metrics as unknown as CandidateDetail,
+    createdAt: r.createdAt.toISOString(),
+    approval: approvals.get(r.revision) ?? null,
+  }));
+}
+export type RevisionRecord = Awaited<ReturnType<typeof listRevisions>>[number];
+
+/** The saved design as the screens see it, or null when it is not this team's. */
+export async function getDesignView(designId: string, teamId: string): Promise<DesignView | null> {
+  const found = await getDesign(designId, teamId);
+  if (!found) return null;
+  const { design, current, authorName } = found;
+  const revisions = await listRevisions(design.id);
+  const approval = revisions.find((r) => r.revision === design.revision)?.approval ?? null;
+  return {
+    id: design.id,
+    name: design.name,
+    project: design.project,
+    status: design.status,
+    revision: design.revision,
+    requirement: current.requirement as unknown as Requirement,
+    choice: current.choice,
+    metrics: current.metrics as unknown as CandidateDetail,
+    authorId: current.authorId,
+    authorName,
+    updatedAt: design.updatedAt.toISOString(),
+    approval: approval && design.status === "approved" ? { byName: approval.byName, at: approval.at, revision: approval.revision } : null,
+    revisions: revisions.map((r) => ({ revision: r.revision, authorName: r.authorName, createdAt: r.createdAt })),
+  };
+}
+
+export type ReviseInput = SavedFigures & {
+  designId: string;
+  teamId: string;
+  userId: string;
+  /** The revision the caller was editing: the write happens only if it is still the current one. */
+  expectedRevision: number;
+  name: string;
+  project: string | null;
+  changed: string[];
+};
+
+export type ReviseResult = { ok: true; revision: number } | { ok: false; status: 404 | 409; message: string };
+
+/** Writes a new revision in draft, or nothing at all when the caller's revision is stale. */
+export async function reviseDesign(input: ReviseInput): Promise<ReviseResult> {
+  if (!isUuid(input.designId)) return { ok: false, status: 404, message: "That design was not found." };
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    const updated = await tx
+      .update(designs)
+      .set({
+        revision: sql`${designs.revision} + 1`,
+        status: "draft",
+        name: input.name,
+        project: input.project,
+        updatedAt: sql`now()`,
+      })
+      .where(and(eq(designs.id, input.designId), eq(designs.teamId, input.teamId), eq(designs.revision, input.expectedRevision)))
+      .returning({ revision: designs.revision, status: designs.status });
+    const row = updated[0];
+    if (!row) {
+      const exists = await tx
+        .select({ revision: designs.revision })
+        .from(designs)
+        .where(and(eq(designs.id, input.designId), eq(designs.teamId, input.teamId)));
+      if (!exists[0]) return { ok: false, status: 404, message: "That design was not found." } as const;
+      return {
+        ok: false,
+        status: 409,
+        message: `Someone else saved this design first: it is at revision ${exists[0].revision}, you edited revision ${input.expectedRevision}. Nothing was saved; reload to see their changes.`,
+      } as const;
+    }
+    await insertRevision(tx, input.designId, row.revision, input);
+    await recordAudit(
+      {
+        teamId: input.teamId,
+        actorId: input.userId,
+        action: "design.revised",
+        targetType: "design",
+        targetId: input.designId,
+        details: { from: input.expectedRevision, revision: row.revision, changed: input.changed, status: "draft" },
+      },
+      tx,
+    );
+    return { ok: true, revision: row.revision } as const;
+  });
+}
+
+export type StatusChange = { ok: true } | { ok: false; status: 404 | 409; message: string };
+
+/**
+ * Moves a design to `to` only if it is still at `revision` and in one of `from`; audited with the
+ * change. Returns 409 when someone changed it meanwhile.
+ */
+export async function changeDesignStatus(input: {
+  designId: string;
+  teamId: string;
+  actorId: string;
+  revision: number;
+  from: readonly DesignStatus[];
+  to: DesignStatus;
+  action: string;
+  details?: Record<string, unknown>;
+  tx?: Tx;
+}): Promise<StatusChange> {
+  const run = async (tx: Tx): Promise<StatusChange> => {
+    const updated = await tx
+      .update(designs)
+      .set({ status: input.to, updatedAt: sql`now()` })
+      .where(
+        and(
+          eq(designs.id, input.designId),
+          eq(designs.teamId, input.teamId),
+          eq(designs.revision, input.revision),
+          sql`${designs.status} in (${sql.join(input.from.map((s) => sql`${s}`), sql`, `)})`,
+        ),
+      )
+      .returning({ id: designs.id });
+    if (!updated[0]) return { ok: false, status: 409, message: "The design changed while you were looking at it; reload and try again." };
+    await recordAudit(
+      {
+        teamId: input.teamId,
+        actorId: input.actorId,
+        action: input.action,
+        targetType: "design",
+        targetId: input.designId,
+        details: { revision: input.revision, to: input.to, ...input.details },
+      },
+      tx,
+    );
+    return { ok: true };
+  };
+  if (input.tx) return run(input.tx);
+  const db = await getDb();
+  return db.transaction(run);
+}

@@ -1,0 +1,105 @@
+// Review comments and verdicts. A verdict and the status change it makes commit together, and
+// only while the design is still in review at the revision the reviewer saw.
+import { and, asc, eq } from "drizzle-orm";
+import { getDb } from "../client";
+import { designRevisions, designs, reviews, users, type Verdict } from "../schema";
+import { recordAudit } from "./audit";
+import { changeDesignStatus } from "./designs";
+
+export async function listReviews(designId: string) {
+  const db = await getDb();
+  const rows = await db
+    .select({
+      id: reviews.id,
+      revision: reviews.revision,
+      verdict: reviews.verdict,
+      body: reviews.body,
+      parentId: reviews.parentId,
+      authorId: reviews.authorId,
+      authorName: users.name,
+      createdAt: reviews.createdAt,
+    })
+    .from(reviews)
+    .innerJoin(users, eq(users.id, reviews.authorId))
+    .where(eq(reviews.designId, designId))
+    .orderBy(asc(reviews.createdAt));
+  return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
+}
+export type ReviewRecord = Awaited<ReturnType<typeof listReviews>>[number];
+
+export type AddReviewInput = {
+  designId: string;
+  teamId: string;
+  actorId: string;
+  verdict: Verdict;
+  body: string;
+  /** The revision commented on; verdicts always go to the current revision. */
+  revision: number;
+  parentId?: string | null;
+};
+
+export type AddReviewResult =
+  | { ok: true; id: string; revision: number; status: string }
+  | { ok: false; status: 403 | 404 | 409 | 422; message: string; fieldErrors?: Record<string, string[]> };
+
+export async function addReview(input: AddReviewInput): Promise<AddReviewResult> {
+  const db = await getDb();
+  return db.transaction(async (tx): Promise<AddReviewResult> => {
+    const [design] = await tx
+      .select({ status: designs.status, revision: designs.revision })
+      .from(designs)
+      .where(and(eq(designs.id, input.designId), eq(designs.teamId, input.teamId)))
+      .for("update");
+    if (!design) return { ok: false, status: 404, message: "That design was not found in your team." } as const;
+    let revision = input.revision;
+    if (input.parentId) {
+      const [parent] = await tx
+        .select({ revision: reviews.revision })
+        .from(reviews)
+        .where(and(eq(reviews.id, input.parentId), eq(reviews.designId, input.designId)));
+      if (!parent)
+        return { ok: false, status: 422, message: "The comment you reply to is not on this design.", fieldErrors: { parentId: ["is not a comment on this design"] } } as const;
+      revision = parent.revision;
+    }
+    const [rev] = await tx
+      .select({ authorId: designRevisions.authorId })
+      .from(designRevisions)
+      .where(and(eq(designRevisions.designId, input.designId), eq(designRevisions.revision, revision)));
+    if (!rev) return { ok: false, status: 422, message: `This design has no revision ${revision}.`, fieldErrors: { revision: [`no revision ${revision}`] } } as const;
+    let status: string = design.status;
+    if (input.verdict !== "comment") {
+      if (revision !== design.revision)
+        return { ok: false, status: 409, message: `A verdict goes on the current revision (${design.revision}); you looked at revision ${revision}. Reload and review the current one.` } as const;
+      if (rev.authorId === input.actorId)
+        return { ok: false, status: 403, message: "You wrote this revision: its verdict must come from another reviewer or owner." } as const;
+      if (design.status !== "in-review")
+        return { ok: false, status: 409, message: `The design is ${design.status}, not in-review: a verdict is given only while it is in review.` } as const;
+      const to = input.verdict === "approve" ? "approved" : "returned";
+      const changed = await changeDesignStatus({
+        designId: input.designId,
+        teamId: input.teamId,
+        actorId: input.actorId,
+        revision,
+        from: ["in-review"],
+        to,
+        action: input.verdict === "approve" ? "design.approved" : "design.returned",
+        details: input.body ? { reason: input.body.slice(0, 500) } : {},
+        tx,
+      });
+      if (!changed.ok) return changed;
+      status = to;
+    }
+    const [row] = await tx
+      .insert(reviews)
+      .values({ designId: input.designId, revision, authorId: input.actorId, verdict: input.verdict, body: input.body, parentId: input.parentId ?? null })
+      .returning({ id: reviews.id });
+    if (!row) throw new Error("review not stored");
+    if (input.verdict === "comment") {
+      await recordAudit(
+        { teamId: input.teamId, actorId: input.actorId, action: "design.commented", targetType: "design", targetId: input.designId, details: { revision, reviewId: row.id, reply: !!input.parentId } },
+        tx,
+      );
+    }
+    return { ok: true, id: row.id, revision, status } as const;
+  });
+}

@@ -1,0 +1,27 @@
+// Who may see which design: every query is scoped by the caller's team, and makers see approved
+// designs only. A design a caller may not see is reported as not found (404), so its existence
+// does not leak to another team — nor, for makers, to someone who could not open it anyway.
+import "server-only";
+import { getDesign, getDesignView } from "@/db/queries/designs";
+import type { Caller } from "@/lib/auth/gate";
+import { HttpError } from "@/lib/http";
+
+export const designNotFound = () => new HttpError(404, "That design was not found in your team.");
+const notApprovedForMakers = () =>
+  new HttpError(404, "That design was not found among your team's approved designs (makers see approved designs only).");
+
+/** The design row and its current revision, or 404. */
+export async function designFor(caller: Caller, id: string) {
+  const found = await getDesign(id, caller.teamId);
+  if (!found) throw designNotFound();
+  if (caller.role === "maker" && found.design.status !== "approved") throw notApprovedForMakers();
+  return found;
+}
+
+/** The DesignView for a caller, or 404 on the same rules. */
+export async function designViewFor(caller: Caller, id: string) {
+  const view = await getDesignView(id, caller.teamId);
+  if (!view) throw designNotFound();
+  if (caller.role === "maker" && view.status !== "approved") throw notApprovedForMakers();
+  return view;
+}
