@@ -2,18 +2,15 @@
 import { errorAt, lowestAccurateCurrent } from "./error-budget";
 import { seriesValues } from "./eseries";
 import { type Model, buildModel, largestRating, noiseRmsA, operatingBurden, signalBandwidth } from "./model";
-import { pairMask, reasonsOf, shuntFigures, sqrtNoiseBandwidth } from "./pair";
+import { pairMask, reasonsOf, shuntFigures } from "./pair";
 import type { Requirement } from "./requirement";
 import type { Candidate, CandidateDetail, Choice } from "./types";
 
 export { rejectReasonLabels, rejectReasons, type RejectReason } from "./pair";
 
-const scratch = new Float64Array(1);
-
 /** The API fields of a pair, from the model. `pareto` is left false for the solver to set. */
 export function candidateFigures(m: Model, R: number, G: number): Candidate {
-  const sf = shuntFigures(m, R);
-  const mask = pairMask(m, R, G, sf, sqrtNoiseBandwidth(m, G), scratch);
+  const { mask, errMinRatio, sf } = pairMask(m, R, G);
   const rg = R * G;
   return {
     shuntOhms: R,
@@ -25,7 +22,7 @@ export function candidateFigures(m: Model, R: number, G: number): Candidate {
     outputAtMaxV: m.iMax * rg,
     lsbA: m.lsbV / rg,
     offsetErrorA: m.vosRef / R,
-    errorAtMinPercent: 100 * (scratch[0] ?? NaN),
+    errorAtMinPercent: 100 * errMinRatio,
     feasible: mask === 0,
     pareto: false,
     reasons: reasonsOf(mask),

@@ -52,44 +52,81 @@ export function shuntFigures(m: Model, R: number): ShuntFigures {
   };
 }
 
-/** √(noise bandwidth) at gain G, √Hz. */
-export function sqrtNoiseBandwidth(m: Model, G: number): number {
-  return Math.sqrt(noiseBandwidth(m, G));
-}
+/** Figures that depend on the gain alone, for every gain swept. */
+export type GainFigures = { gains: Float64Array; bandwidth: Float64Array; sqrtNbw: Float64Array };
 
-/** Current-independent error at a pair, A: offset-type + ½ LSB + crest·noise. */
-export function fixedErrorA(m: Model, R: number, G: number, offsetA: number, noisePerR: number, sqrtNbw: number): number {
-  return offsetA + m.lsbV / (2 * R * G) + m.crest * noisePerR * sqrtNbw;
-}
-
-/** Worst-case error at I as a ratio of reading, from the pair's fixed error. */
-export function worstRatioAt(m: Model, R: number, theta: number, fixedA: number, I: number): number {
-  return m.gainConst + m.alphaR * I * I * R * theta + fixedA / I;
+export function gainFigures(m: Model, gains: ArrayLike<number>): GainFigures {
+  const n = gains.length;
+  const g = Float64Array.from(gains);
+  const bandwidth = new Float64Array(n);
+  const sqrtNbw = new Float64Array(n);
+  for (let j = 0; j < n; j++) {
+    bandwidth[j] = signalBandwidth(m, g[j] as number);
+    sqrtNbw[j] = Math.sqrt(noiseBandwidth(m, g[j] as number));
+  }
+  return { gains: g, bandwidth, sqrtNbw };
 }
 
 /**
- * Bitmask of every failed constraint (bit k = rejectReasons[k]). `out[0]` receives the
- * worst-case error at Imin as a ratio of reading.
+ * One shunt value against every gain: writes each pair's bitmask of failed constraints
+ * (bit k = rejectReasons[k], 0 = feasible) and its worst-case error at Imin (ratio of
+ * reading) from `offset`, counts each rejected pair under its first failure, and returns
+ * how many were feasible. One tight loop, plain numbers: this is the sweep's inner loop.
  */
-export function pairMask(m: Model, R: number, G: number, sf: ShuntFigures, sqrtNbw: number, out: Float64Array): number {
-  const rg = R * G;
-  let mask = sf.dropFails ? BIT_DROP : 0;
-  if (m.iMax * rg > m.outCeil * slack) mask |= BIT_OUTPUT;
-  if ((m.iMin * rg) / m.lsbV < m.countsAtMin / slack) mask |= BIT_COUNTS;
-  if (Number.isNaN(sf.rating)) mask |= BIT_POWER;
-  if (signalBandwidth(m, G) < m.bwReq / slack) mask |= BIT_BANDWIDTH;
-  const fixedA = fixedErrorA(m, R, G, sf.offsetA, sf.noisePerR, sqrtNbw);
-  // a + b·I² + c/I is convex in I, so its largest value over the band is at an end.
-  const lo = worstRatioAt(m, R, sf.theta, fixedA, m.bandLo);
-  const hi = worstRatioAt(m, R, sf.theta, fixedA, m.bandHi);
-  if (lo > m.accRatio * slack || hi > m.accRatio * slack) mask |= BIT_ACCURACY;
-  if (m.swingLow / rg > m.iMin * slack) mask |= BIT_DEADZONE;
-  out[0] = worstRatioAt(m, R, sf.theta, fixedA, m.iMin);
-  return mask;
+export function sweepRow(
+  m: Model,
+  R: number,
+  sf: ShuntFigures,
+  gf: GainFigures,
+  mask: Uint8Array,
+  errMin: Float64Array,
+  offset: number,
+  rejected: Int32Array,
+): number {
+  const { gains, bandwidth, sqrtNbw } = gf;
+  const nG = gains.length;
+  const rowBits = (sf.dropFails ? BIT_DROP : 0) | (Number.isNaN(sf.rating) ? BIT_POWER : 0);
+  // Worst-case ratio at I: gainConst + heat·I² + fixed/I, with fixed the current-independent error (A).
+  const heat = m.alphaR * R * sf.theta;
+  const gainLo = m.gainConst + heat * m.bandLo * m.bandLo;
+  const gainHi = m.gainConst + heat * m.bandHi * m.bandHi;
+  const gainMin = m.gainConst + heat * m.iMin * m.iMin;
+  const outLimit = m.outCeil * slack;
+  const countsNeed = m.countsAtMin / slack;
+  const bwNeed = m.bwReq / slack;
+  const accLimit = m.accRatio * slack;
+  const deadLimit = m.iMin * slack;
+  const halfStep = m.lsbV / 2;
+  const noiseK = m.crest * sf.noisePerR;
+  let feasible = 0;
+  for (let j = 0; j < nG; j++) {
+    const rg = R * (gains[j] as number);
+    let bits = rowBits;
+    if (m.iMax * rg > outLimit) bits |= BIT_OUTPUT;
+    if ((m.iMin * rg) / m.lsbV < countsNeed) bits |= BIT_COUNTS;
+    if ((bandwidth[j] as number) < bwNeed) bits |= BIT_BANDWIDTH;
+    const fixedA = sf.offsetA + halfStep / rg + noiseK * (sqrtNbw[j] as number);
+    // a + b·I² + c/I is convex in I, so its largest value over the band is at an end.
+    if (gainLo + fixedA / m.bandLo > accLimit || gainHi + fixedA / m.bandHi > accLimit) bits |= BIT_ACCURACY;
+    if (m.swingLow / rg > deadLimit) bits |= BIT_DEADZONE;
+    mask[offset + j] = bits;
+    errMin[offset + j] = gainMin + fixedA / m.iMin;
+    if (bits === 0) feasible++;
+    else {
+      const k = 31 - Math.clz32(bits & -bits);
+      rejected[k] = (rejected[k] ?? 0) + 1;
+    }
+  }
+  return feasible;
 }
 
-export function firstReasonIndex(mask: number): number {
-  return 31 - Math.clz32(mask & -mask);
+/** Bitmask and worst-case error at Imin (ratio) of a single pair, through the same loop. */
+export function pairMask(m: Model, R: number, G: number): { mask: number; errMinRatio: number; sf: ShuntFigures } {
+  const sf = shuntFigures(m, R);
+  const mask = new Uint8Array(1);
+  const errMin = new Float64Array(1);
+  sweepRow(m, R, sf, gainFigures(m, [G]), mask, errMin, 0, new Int32Array(rejectReasons.length));
+  return { mask: mask[0] ?? 0, errMinRatio: errMin[0] ?? NaN, sf };
 }
 
 export function reasonsOf(mask: number): RejectReason[] {

@@ -1,7 +1,7 @@
 // A multi-range plan for spans too wide for one shunt and gain: two or three ranges, each
 // feasible on its own sub-span, overlapping so that switching has hysteresis.
 import { signalBandwidth, type Model } from "./model";
-import { pairMask, shuntFigures, sqrtNoiseBandwidth } from "./pair";
+import { pairMask } from "./pair";
 import type { Requirement } from "./requirement";
 import type { SweepArrays } from "./sweep";
 import { formatSI } from "./units";
@@ -37,7 +37,6 @@ type Pick = { p: number; bottom: number };
 /** The pair that reaches lowest while staying feasible on [bottom, top]. */
 function bestRangeBelow(req: Requirement, m: Model, sw: SweepArrays, top: number): Pick | null {
   const nG = sw.gains.length;
-  const scratch = new Float64Array(1);
   const bottoms: Pick[] = [];
   for (let i = 0; i < sw.values.length; i++) {
     const R = sw.values[i] as number;
@@ -59,8 +58,7 @@ function bestRangeBelow(req: Requirement, m: Model, sw: SweepArrays, top: number
     // Outside the accuracy band nothing is asked of accuracy: a zero-width band at the top passes.
     const band = lo <= hi ? { bandLo: lo, bandHi: hi } : { bandLo: top, bandHi: top, accRatio: Infinity };
     const sub: Model = { ...m, iMax: top, iMin: pick.bottom * (1 + 1e-12), ...band };
-    const subR = { ...m, iMax: top };
-    if (pairMask(sub, R, G, shuntFigures(subR, R), sqrtNoiseBandwidth(m, G), scratch) === 0) return pick;
+    if (pairMask(sub, R, G).mask === 0) return pick;
   }
   return null;
 }

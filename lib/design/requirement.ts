@@ -137,7 +137,7 @@ const baseSchema = z.object({
       swingLow: q("voltage", "Lowest output (above ground)", nonNegative("Lowest output")).default(0.01),
       swingHigh: q("voltage", "Output headroom below the amplifier supply", nonNegative("Output headroom")).default(0.05),
       filterHz: q("frequency", "Output filter corner", positive("Output filter corner")).nullable().default(null),
-      cmrrDb: z.number().min(0, { error: "CMRR cannot be negative" }).max(200).default(100),
+      cmrrDb: z.number().min(0, { error: "CMRR cannot be negative" }).max(200).default(120),
     })
     .prefault({}),
   limit: z.number().int({ error: "Limit must be a whole number" }).min(1, { error: "Limit must be at least 1" }).max(10_000, { error: "Limit must be at most 10000" }).default(200),

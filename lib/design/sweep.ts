@@ -2,7 +2,7 @@
 // No mathjs and no per-pair objects; results stay in the arrays for the front and ranking.
 import { seriesValues } from "./eseries";
 import type { Model } from "./model";
-import { firstReasonIndex, pairMask, rejectReasons, shuntFigures, sqrtNoiseBandwidth } from "./pair";
+import { gainFigures, rejectReasons, shuntFigures, sweepRow } from "./pair";
 import type { Requirement } from "./requirement";
 
 export type SweepArrays = {
@@ -31,27 +31,15 @@ export function sweepGrid(m: Model, values: Float64Array, gains: Float64Array): 
   const errMin = new Float64Array(nR * nG);
   const rating = new Float64Array(nR);
   const theta = new Float64Array(nR);
-  const sqrtNbw = new Float64Array(nG);
-  for (let j = 0; j < nG; j++) sqrtNbw[j] = sqrtNoiseBandwidth(m, gains[j] as number);
+  const gf = gainFigures(m, gains);
   const rejectedCounts = new Int32Array(rejectReasons.length);
-  const out = new Float64Array(1);
   let feasibleCount = 0;
   for (let i = 0; i < nR; i++) {
     const R = values[i] as number;
     const sf = shuntFigures(m, R);
     rating[i] = sf.rating;
     theta[i] = sf.theta;
-    const row = i * nG;
-    for (let j = 0; j < nG; j++) {
-      const bits = pairMask(m, R, gains[j] as number, sf, sqrtNbw[j] as number, out);
-      mask[row + j] = bits;
-      errMin[row + j] = out[0] as number;
-      if (bits === 0) feasibleCount++;
-      else {
-        const k = firstReasonIndex(bits);
-        rejectedCounts[k] = (rejectedCounts[k] ?? 0) + 1;
-      }
-    }
+    feasibleCount += sweepRow(m, R, sf, gf, mask, errMin, i * nG, rejectedCounts);
   }
   return { values, gains, mask, errMin, rating, theta, rejectedCounts, feasibleCount };
 }

@@ -1,0 +1,164 @@
+// Engine benchmark: the solver's sweep against a hand-written Float64Array loop that computes
+// the same per-pair figures and feasibility on the same grid (E192, 1 mΩ–10 kΩ × resistor-pair gains).
+// Reported as ratios; nothing here asserts a wall-clock time.
+import { buildModel, type Model } from "../../lib/design/model";
+import { parseRequirement, type RequirementInput } from "../../lib/design/requirement";
+import { solve } from "../../lib/design/solve";
+import { sweepGrid, sweepValues } from "../../lib/design/sweep";
+
+/** The 24 V pump controller of the demo (DESIGN.md §6), swept wide on purpose. */
+export const benchRequirement: RequirementInput = {
+  current: { min: "20 mA", max: "2 A" },
+  supply: { voltage: "12 V", side: "high" },
+  drop: { max: "100 mV" },
+  readout: { kind: "adc", bits: 16, fullScale: "2.5 V" },
+  resolution: { countsAtMin: 10 },
+  shunt: { series: "E192", min: "1 mohm", max: "10 kohm" },
+  amplifier: { gains: { series: "E12", min: 5, max: 200 } },
+};
+
+const median = (xs: number[]) => {
+  const s = [...xs].sort((a, b) => a - b);
+  const mid = s.length >> 1;
+  return s.length % 2 ? (s[mid] as number) : ((s[mid - 1] as number) + (s[mid] as number)) / 2;
+};
+
+function time(repeats: number, fn: () => void): number {
+  for (let k = 0; k < 5; k++) fn(); // warm-up: let the JIT settle
+  const t: number[] = [];
+  for (let k = 0; k < repeats; k++) {
+    const t0 = performance.now();
+    fn();
+    t.push(performance.now() - t0);
+  }
+  return median(t);
+}
+
+/**
+ * The same figures and constraints as the engine, written out by hand in one loop:
+ * the floor the engine's abstractions are measured against. Like the engine it allocates
+ * its result arrays on every run.
+ */
+export function baselineSweep(m: Model, values: Float64Array, gains: Float64Array) {
+  const nG = gains.length;
+  const mask = new Uint8Array(values.length * nG);
+  const errMin = new Float64Array(values.length * nG);
+  const rejected = new Int32Array(7);
+  const sqrtNbw = new Float64Array(nG);
+  const bw = new Float64Array(nG);
+  for (let j = 0; j < nG; j++) {
+    const g = gains[j] as number;
+    bw[j] = Math.min(m.gbw / g, m.filterHz);
+    sqrtNbw[j] = Math.sqrt((Math.PI / 2) * (bw[j] as number));
+  }
+  const ratings = Float64Array.from(m.ratings);
+  const slack = 1 + 1e-12;
+  let feasible = 0;
+  for (let i = 0; i < values.length; i++) {
+    const R = values[i] as number;
+    // drop at the operating point, for the three load models
+    let burden: number;
+    if (m.loadModel === 0) burden = m.iMax * R;
+    else if (m.loadModel === 1) burden = (m.vBus * R) / (m.vBus / m.iMax + R);
+    else {
+      const disc = m.vBus * m.vBus - 4 * m.vBus * m.iMax * R;
+      burden = disc < 0 ? NaN : m.vBus - (m.vBus + Math.sqrt(disc)) / 2;
+    }
+    const dropFails = !(burden <= m.dropMax * slack) || m.iMax * R > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
+    const need = (m.iMax * m.iMax * R) / m.derating;
+    let rating = NaN;
+    for (let k = 0; k < ratings.length; k++) {
+      if ((ratings[k] as number) >= need * (1 - 1e-12)) {
+        rating = ratings[k] as number;
+        break;
+      }
+    }
+    const theta = m.thetaFixed ?? m.ratedRise / (Number.isNaN(rating) ? (ratings[ratings.length - 1] as number) : rating);
+    const offsetA = (m.vosWorst + m.cmV) / R + m.ib;
+    const noisePerR = Math.sqrt(m.en2 + m.fourKT * R) / R;
+    const heat = m.alphaR * R * theta;
+    for (let j = 0; j < nG; j++) {
+      const G = gains[j] as number;
+      const rg = R * G;
+      let bits = dropFails ? 1 : 0;
+      if (m.iMax * rg > m.outCeil * slack) bits |= 2;
+      if ((m.iMin * rg) / m.lsbV < m.countsAtMin / slack) bits |= 4;
+      if (Number.isNaN(rating)) bits |= 8;
+      if ((bw[j] as number) < m.bwReq / slack) bits |= 16;
+      const fixedA = offsetA + m.lsbV / (2 * rg) + m.crest * noisePerR * (sqrtNbw[j] as number);
+      const lo = m.gainConst + heat * m.bandLo * m.bandLo + fixedA / m.bandLo;
+      const hi = m.gainConst + heat * m.bandHi * m.bandHi + fixedA / m.bandHi;
+      if (lo > m.accRatio * slack || hi > m.accRatio * slack) bits |= 32;
+      if (m.swingLow / rg > m.iMin * slack) bits |= 64;
+      const p = i * nG + j;
+      mask[p] = bits;
+      errMin[p] = m.gainConst + heat * m.iMin * m.iMin + fixedA / m.iMin;
+      if (bits === 0) feasible++;
+      else {
+        const k = 31 - Math.clz32(bits & -bits);
+        rejected[k] = (rejected[k] ?? 0) + 1;
+      }
+    }
+  }
+  return { feasible, rejected, mask, errMin };
+}
+
+export async function run(): Promise<Record<string, number>> {
+  const parsed = parseRequirement(benchRequirement);
+  if (!parsed.ok) throw new Error(parsed.message);
+  const r = parsed.requirement;
+  const m = buildModel(r);
+  const values = sweepValues(r);
+  const gains = Float64Array.from(r.amplifier.gains);
+  const n = values.length * gains.length;
+
+  // Same answer, or the comparison means nothing.
+  const engine = sweepGrid(m, values, gains);
+  const base = baselineSweep(m, values, gains);
+  const same =
+    base.feasible === engine.feasibleCount &&
+    base.rejected.every((c, k) => c === engine.rejectedCounts[k]) &&
+    base.mask.every((b, p) => b === engine.mask[p]) &&
+    base.errMin.every((e, p) => Math.abs(e - (engine.errMin[p] as number)) <= 1e-12 * Math.abs(e));
+  if (!same) throw new Error(`bench: baseline (${base.feasible} feasible) and engine (${engine.feasibleCount}) disagree`);
+
+  // Warm both up until the JIT has settled, then interleave single runs so that load from
+  // other processes on the machine falls on both alike.
+  const runEngine = () => sweepGrid(m, values, gains);
+  const runBaseline = () => baselineSweep(m, values, gains);
+  for (let k = 0; k < 40; k++) {
+    runEngine();
+    runBaseline();
+  }
+  const sweepTimes: number[] = [];
+  const baseTimes: number[] = [];
+  for (let k = 0; k < 41; k++) {
+    let t0 = performance.now();
+    runEngine();
+    sweepTimes.push(performance.now() - t0);
+    t0 = performance.now();
+    runBaseline();
+    baseTimes.push(performance.now() - t0);
+  }
+  const sweepMs = median(sweepTimes);
+  const baselineMs = median(baseTimes);
+  let listed = 0;
+  const solveMs = time(7, () => {
+    const p = parseRequirement(benchRequirement);
+    if (!p.ok) throw new Error(p.message);
+    listed = solve(p.requirement).candidates.length;
+  });
+  const front = solve(r).candidates.filter((c) => c.pareto).length;
+  return {
+    "sweep.candidates": n,
+    "sweep.values": values.length,
+    "sweep.gains": gains.length,
+    "sweep.feasible": engine.feasibleCount,
+    "sweep.ms": sweepMs,
+    "baseline.ms": baselineMs,
+    "sweep.ratio": sweepMs / baselineMs,
+    "solve.ms": solveMs,
+    "solve.listed": listed,
+    "solve.front": front,
+  };
+}
