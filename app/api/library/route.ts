@@ -1,0 +1,5 @@
+import { listLibrary } from "@/db/queries/library";
+import { apiRoute } from "@/lib/auth/gate";
+
+/** Every member reads the team's library. */
+export const GET = apiRoute({ doing: "read the parts library" }, async ({ caller }) => listLibrary(caller.teamId));

@@ -1,0 +1,60 @@
+import { describe, expect, it } from "vitest";
+import { demoAmplifiers, demoShunts } from "@/db/seed/library";
+import { libraryToCsv, parseLibraryCsv } from "./csv";
+import { amplifierInput, shuntInput } from "./schema";
+
+const ampHeader = "name,gainMode,gains,offsetV,offsetDriftVPerK,gainErrorFraction,gainDriftPerK,biasCurrentA,noiseDensityVPerRtHz,gbwHz,swingLowV,swingHighV,cmrrDb,supplyMinV,supplyMaxV";
+
+function refusal(kind: "amplifiers" | "shunts", text: string) {
+  const r = parseLibraryCsv(kind, text);
+  if (r.ok) throw new Error("expected a refusal");
+  return r.refusal;
+}
+
+describe("library CSV", () => {
+  it("the demo parts pass their schemas", () => {
+    for (const a of demoAmplifiers) expect(amplifierInput.safeParse(a).success).toBe(true);
+    for (const s of demoShunts) expect(shuntInput.safeParse(s).success).toBe(true);
+  });
+
+  it("round-trips an export", () => {
+    const amps = demoAmplifiers.map((a) => amplifierInput.parse(a));
+    const csv = libraryToCsv("amplifiers", amps);
+    expect(csv.split("\n")[0]).toBe(ampHeader);
+    const back = parseLibraryCsv("amplifiers", csv);
+    expect(back.ok && back.parts.rows).toEqual(amps);
+    const shunts = demoShunts.map((s) => shuntInput.parse(s));
+    const s = parseLibraryCsv("shunts", libraryToCsv("shunts", shunts));
+    expect(s.ok && s.parts.rows).toEqual(shunts);
+  });
+
+  it("reads plain names with units in the header or the cell", () => {
+    const r = parseLibraryCsv(
+      "shunts",
+      "Name,Series,Min [mohm],Max (mohm),Tolerance,Tempco,Ratings,4-terminal\nBench strip,E24,1,100,1 %,50 ppm/K,0.5 W; 1 W,yes\n",
+    );
+    expect(r.ok).toBe(true);
+    if (!r.ok || r.parts.kind !== "shunts") return;
+    expect(r.parts.rows[0]).toMatchObject({ minOhms: 0.001, maxOhms: 0.1, toleranceFraction: 0.01, tempcoPerK: 50e-6, ratingsW: [0.5, 1], fourTerminal: true });
+  });
+
+  it("refuses naming the row and the column", () => {
+    const base = "name,series,minOhms,maxOhms,toleranceFraction,tempcoPerK,ratingsW,fourTerminal\n";
+    expect(refusal("shunts", `${base}A,E24,0.001,0.1,0.01,5e-5,1,no\nB,E24,abc,0.1,0.01,5e-5,1,no\n`).message).toBe(
+      'Data row 2 (file line 3), column "minOhms": cannot read "abc" as a resistance (try a number with a unit, e.g. "4.7 mohm")',
+    );
+    expect(refusal("shunts", `${base.replace("minOhms", "minOhms [mohm]")}A,E24,abc,0.1,0.01,5e-5,1,no\n`).message).toMatch(/"abc" is not a number/);
+    expect(refusal("shunts", `${base}A,E24,NaN,0.1,0.01,5e-5,1,no\n`).place).toEqual({ row: 1, line: 2, column: "minOhms" });
+    expect(refusal("shunts", `${base}A,E25,0.001,0.1,0.01,5e-5,1,no\n`).place.column).toBe("series");
+    expect(refusal("shunts", `${base}A,E24,0.2,0.1,0.01,5e-5,1,no\n`).place.column).toBe("maxOhms");
+    expect(refusal("shunts", `${base}A,E24,0.001,0.1,0.01,5e-5,1,no\na,E24,0.001,0.1,0.01,5e-5,1,no\n`).message).toMatch(/already used by data row 1/);
+    expect(refusal("shunts", "name,series,minOhms [V],maxOhms,toleranceFraction,tempcoPerK,ratingsW,fourTerminal\n").message).toMatch(
+      /column "minOhms \[V\]": unit "V" is a voltage, not a resistance/,
+    );
+    expect(refusal("shunts", "name,series,minOhms [zz],maxOhms,toleranceFraction,tempcoPerK,ratingsW,fourTerminal\n").place.column).toBe("minOhms [zz]");
+    expect(refusal("shunts", "name,series,minOhms,maxOhms,toleranceFraction,tempcoPerK,ratingsW\n").message).toMatch(/"fourTerminal" is missing/);
+    expect(refusal("shunts", `${base.trim()},colour\n`).place.column).toBe("colour");
+    expect(refusal("shunts", `${base}A,E24,5 V,0.1,0.01,5e-5,1,no\n`).message).toMatch(/5 V is a voltage, not a resistance/);
+    expect(refusal("amplifiers", `${ampHeader}\nX,fixed,10;inf,0,0,0,0,0,0,1e6,0,0,100,3,5\n`).place).toEqual({ row: 1, line: 2, column: "gains" });
+  });
+});

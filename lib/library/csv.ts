@@ -1,0 +1,226 @@
+// Library CSV, in and out. Export writes the API's field names (SI, unit in the name) so an exported
+// file imports back unchanged; import also takes plain names with a unit in the header
+// ("offset [uV]") or in the cell ("10 uV"). The same refusals as profiles: row, line and column named.
+import Papa from "papaparse";
+import type { z } from "zod";
+import { parseQuantity, type Dimension } from "@/lib/design";
+import { CsvRefusal, LineCounter, detectDelimiter, headerKey, readNumberCell, splitHeaderUnit, truncate, unitScale } from "@/lib/profile/csv";
+import { amplifierInput, shuntInput, type AmplifierValues, type PartKind, type ShuntValues } from "./schema";
+
+type Cell = "text" | "number" | "list" | "quantityList" | "bool" | Dimension;
+
+type ColumnSpec = {
+  key: string;
+  /** Other header names that mean this column (compared without case, spaces or dashes). */
+  aliases: string[];
+  cell: Cell;
+  /** For a list of quantities, the dimension of each. */
+  dim?: Dimension;
+  label: string;
+};
+
+export const amplifierColumns: ColumnSpec[] = [
+  { key: "name", aliases: [], cell: "text", label: "Name" },
+  { key: "gainMode", aliases: ["mode"], cell: "text", label: "Gain mode" },
+  { key: "gains", aliases: ["gain"], cell: "list", label: "Gains" },
+  { key: "offsetV", aliases: ["offset", "inputoffset", "vos"], cell: "voltage", label: "Input offset" },
+  { key: "offsetDriftVPerK", aliases: ["offsetdrift", "drift"], cell: "voltageDrift", label: "Offset drift" },
+  { key: "gainErrorFraction", aliases: ["gainerror"], cell: "fraction", label: "Gain error" },
+  { key: "gainDriftPerK", aliases: ["gaindrift"], cell: "tempco", label: "Gain drift" },
+  { key: "biasCurrentA", aliases: ["biascurrent", "bias", "ib"], cell: "current", label: "Input bias current" },
+  { key: "noiseDensityVPerRtHz", aliases: ["noisedensity", "noise", "en"], cell: "noiseDensity", label: "Input noise density" },
+  { key: "gbwHz", aliases: ["gbw", "gainbandwidth"], cell: "frequency", label: "Gain-bandwidth" },
+  { key: "swingLowV", aliases: ["swinglow", "outputlow"], cell: "voltage", label: "Lowest output above ground" },
+  { key: "swingHighV", aliases: ["swinghigh", "outputheadroom", "headroom"], cell: "voltage", label: "Output headroom below the supply" },
+  { key: "cmrrDb", aliases: ["cmrr"], cell: "number", label: "CMRR (dB)" },
+  { key: "supplyMinV", aliases: ["supplymin", "minsupply"], cell: "voltage", label: "Lowest supply" },
+  { key: "supplyMaxV", aliases: ["supplymax", "maxsupply"], cell: "voltage", label: "Highest supply" },
+];
+
+export const shuntColumns: ColumnSpec[] = [
+  { key: "name", aliases: [], cell: "text", label: "Name" },
+  { key: "series", aliases: ["eseries"], cell: "text", label: "Series" },
+  { key: "minOhms", aliases: ["min", "minvalue", "smallest"], cell: "resistance", label: "Smallest value" },
+  { key: "maxOhms", aliases: ["max", "maxvalue", "largest"], cell: "resistance", label: "Largest value" },
+  { key: "toleranceFraction", aliases: ["tolerance"], cell: "fraction", label: "Tolerance" },
+  { key: "tempcoPerK", aliases: ["tempco", "tcr"], cell: "tempco", label: "Tempco" },
+  { key: "ratingsW", aliases: ["ratings", "rating", "power"], cell: "quantityList", dim: "power", label: "Power ratings" },
+  { key: "fourTerminal", aliases: ["4terminal", "kelvin"], cell: "bool", label: "4-terminal" },
+];
+
+export const columnsOf: Record<PartKind, ColumnSpec[]> = { amplifiers: amplifierColumns, shunts: shuntColumns };
+
+const kindWords: Record<PartKind, string> = { amplifiers: "amplifier", shunts: "shunt" };
+
+type HeaderColumn = { spec: ColumnSpec; index: number; label: string; scale: number | null };
+
+function readHeader(kind: PartKind, cells: string[], line: number): HeaderColumn[] | CsvRefusal {
+  const specs = columnsOf[kind];
+  const byName = new Map<string, ColumnSpec>();
+  for (const s of specs) for (const n of [s.key, ...s.aliases]) byName.set(headerKey(n), s);
+  const found: HeaderColumn[] = [];
+  for (const [index, raw] of cells.entries()) {
+    const label = raw.trim().replace(/^\uFEFF/, "");
+    const { name, unit } = splitHeaderUnit(label);
+    const spec = byName.get(headerKey(name));
+    if (!spec) {
+      return new CsvRefusal(
+        `${label ? `"${truncate(label)}" is not a column of the ${kindWords[kind]} list` : `column ${index + 1} has no name`}; the columns are ${specs.map((s) => s.key).join(", ")}`,
+        { line, column: label || `column ${index + 1}` },
+      );
+    }
+    if (found.some((f) => f.spec === spec)) return new CsvRefusal(`the column "${spec.key}" appears twice`, { line, column: label });
+    let scale: number | null = null;
+    if (unit !== null) {
+      const dim = spec.cell === "quantityList" ? spec.dim : isDimension(spec.cell) ? spec.cell : null;
+      if (!dim) return new CsvRefusal(`this column takes no unit`, { line, column: label });
+      const s = unitScale(unit, dim, { line, column: label });
+      if (!s.ok) return s.refusal;
+      scale = s.scale;
+    }
+    found.push({ spec, index, label, scale });
+  }
+  const missing = specs.filter((s) => !found.some((f) => f.spec === s));
+  if (missing.length) {
+    return new CsvRefusal(`the column${missing.length > 1 ? "s" : ""} ${missing.map((m) => `"${m.key}"`).join(", ")} ${missing.length > 1 ? "are" : "is"} missing`, {
+      line,
+      column: missing[0]!.key,
+    });
+  }
+  return found;
+}
+
+function isDimension(c: Cell): c is Dimension {
+  return !["text", "number", "list", "quantityList", "bool"].includes(c);
+}
+
+type CellResult = { ok: true; value: unknown } | { ok: false; reason: string };
+
+function readQuantityCell(raw: string, dim: Dimension, scale: number | null): CellResult {
+  const text = raw.trim();
+  if (scale !== null) {
+    const n = readNumberCell(text);
+    return n.ok ? { ok: true, value: n.value * scale } : n;
+  }
+  const n = readNumberCell(text);
+  if (n.ok) return n;
+  if (/^[+-]?(nan|inf|infinity|∞)$/i.test(text) || text === "") return n;
+  const q = parseQuantity(text, dim);
+  return q.ok ? { ok: true, value: q.value } : { ok: false, reason: q.message };
+}
+
+function splitList(raw: string): string[] {
+  const text = raw.trim();
+  if (text === "") return [];
+  const parts = text.split(/[;|]/).map((p) => p.trim());
+  if (parts.length === 1 && /\s/.test(text) && text.split(/\s+/).every((p) => readNumberCell(p).ok)) return text.split(/\s+/);
+  return parts;
+}
+
+function readCell(col: HeaderColumn, raw: string): CellResult {
+  const { cell } = col.spec;
+  switch (cell) {
+    case "text":
+      return { ok: true, value: raw.trim() };
+    case "number":
+      return readNumberCell(raw);
+    case "bool": {
+      const v = raw.trim().toLowerCase();
+      if (["yes", "true", "1", "y"].includes(v)) return { ok: true, value: true };
+      if (["no", "false", "0", "n", ""].includes(v)) return { ok: true, value: false };
+      return { ok: false, reason: `"${truncate(raw.trim())}" is not yes or no` };
+    }
+    case "list":
+    case "quantityList": {
+      const values: number[] = [];
+      for (const part of splitList(raw)) {
+        const r = cell === "list" ? readNumberCell(part) : readQuantityCell(part, col.spec.dim!, col.scale);
+        if (!r.ok) return { ok: false, reason: `in the list "${truncate(raw.trim())}": ${r.reason}` };
+        values.push(r.value as number);
+      }
+      if (values.length === 0) return { ok: false, reason: "the list is empty; separate values with ; (e.g. 10;20;50)" };
+      return { ok: true, value: values };
+    }
+    default:
+      return readQuantityCell(raw, cell, col.scale);
+  }
+}
+
+export type ImportedParts =
+  | { kind: "amplifiers"; rows: AmplifierValues[] }
+  | { kind: "shunts"; rows: ShuntValues[] };
+
+/** Parses a whole library CSV; the first problem refuses the file (nothing is imported). */
+export function parseLibraryCsv(kind: PartKind, text: string): { ok: true; parts: ImportedParts } | { ok: false; refusal: CsvRefusal } {
+  const lines = new LineCounter(text);
+  const schema: z.ZodType = kind === "amplifiers" ? amplifierInput : shuntInput;
+  let header = null as HeaderColumn[] | null;
+  let refusal = null as CsvRefusal | null;
+  const rows: unknown[] = [];
+  const names = new Map<string, number>();
+  let row = 0;
+
+  Papa.parse<string[]>(text, {
+    comments: "#",
+    delimiter: detectDelimiter(text),
+    skipEmptyLines: false,
+    step(result, parser) {
+      const line = lines.lineOfRowEndingAt(result.meta.cursor);
+      const cells = result.data;
+      const stop = (r: CsvRefusal) => {
+        refusal = r;
+        parser.abort();
+      };
+      const bad = result.errors.find((e) => e.type !== "Delimiter");
+      if (bad) return stop(new CsvRefusal(`the file cannot be read as CSV here: ${bad.message}`, header ? { row: row + 1, line } : { line }));
+      if (cells.length === 0 || (cells.length === 1 && (cells[0] ?? "").trim() === "")) return;
+      if (!header) {
+        const h = readHeader(kind, cells, line);
+        if (h instanceof CsvRefusal) return stop(h);
+        header = h;
+        return;
+      }
+      row += 1;
+      if (row > 10_000) return stop(new CsvRefusal("the file has more than 10000 parts", { row, line }));
+      if (cells.length !== header.length) return stop(new CsvRefusal(`the row has ${cells.length} cells but the header has ${header.length} columns`, { row, line }));
+      const values: Record<string, unknown> = {};
+      for (const col of header) {
+        const r = readCell(col, cells[col.index] ?? "");
+        if (!r.ok) return stop(new CsvRefusal(r.reason, { row, line, column: col.label }));
+        values[col.spec.key] = r.value;
+      }
+      const parsed = schema.safeParse(values);
+      if (!parsed.success) {
+        const issue = parsed.error.issues[0]!;
+        const key = String(issue.path[0] ?? "name");
+        const col = header.find((c) => c.spec.key === key);
+        return stop(new CsvRefusal(issue.message, { row, line, column: col?.label ?? key }));
+      }
+      const name = String(values.name).toLowerCase();
+      const seen = names.get(name);
+      if (seen !== undefined) {
+        const col = header.find((c) => c.spec.key === "name")!;
+        return stop(new CsvRefusal(`the name "${truncate(String(values.name))}" is already used by data row ${seen}; each part needs its own name`, { row, line, column: col.label }));
+      }
+      names.set(name, row);
+      rows.push(parsed.data);
+    },
+  });
+  if (refusal) return { ok: false, refusal };
+  if (!header) return { ok: false, refusal: new CsvRefusal(`the file is empty; the first line must name the columns ${columnsOf[kind].map((c) => c.key).join(", ")}`, { line: 1 }) };
+  if (rows.length === 0) return { ok: false, refusal: new CsvRefusal("the file has a header but no parts") };
+  return { ok: true, parts: kind === "amplifiers" ? { kind, rows: rows as AmplifierValues[] } : { kind, rows: rows as ShuntValues[] } };
+}
+
+function cellText(value: unknown): string {
+  if (Array.isArray(value)) return value.map((v) => String(v)).join(";");
+  if (typeof value === "boolean") return value ? "yes" : "no";
+  return String(value);
+}
+
+/** CSV of the parts with the API's field names as the header (SI, unit in the name). */
+export function libraryToCsv(kind: PartKind, parts: readonly Record<string, unknown>[]): string {
+  const columns = columnsOf[kind].map((c) => c.key);
+  const data = parts.map((p) => columns.map((k) => cellText(p[k])));
+  return `${Papa.unparse({ fields: columns, data }, { newline: "\n" })}\n`;
+}

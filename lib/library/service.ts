@@ -1,0 +1,30 @@
+// The library's write rules shared by its routes: merge a PATCH into the stored part, check it
+// whole, and turn a query's refusal into the API's error.
+import "server-only";
+import type { z } from "zod";
+import type { WriteResult } from "@/db/queries/library";
+import { HttpError, invalid } from "@/lib/http";
+
+export const editorRoles = ["owner", "designer"] as const;
+
+/** The stored part with the patch's fields over it, checked by the full schema (422 on a bad mix). */
+export function mergePatch<T>(stored: Record<string, unknown>, patch: Record<string, unknown>, schema: z.ZodType<T>): T {
+  const { updatedAt: _u, ...fields } = patch;
+  const merged = { ...stored, ...Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined)) };
+  const parsed = schema.safeParse(merged);
+  if (!parsed.success) throw invalid(parsed.error);
+  return parsed.data;
+}
+
+/** The written row, or the refusal as an HttpError. */
+export function written<T>(result: WriteResult<T>): T {
+  if (result.ok) return result.row;
+  throw new HttpError(result.status, result.message, result.field ? { [result.field]: [result.message] } : undefined);
+}
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+/** A part id from the URL: anything that is not a UUID names no part. */
+export function partId(id: string | undefined, what: string): string {
+  if (!id || !UUID.test(id)) throw new HttpError(404, `That ${what} was not found in the library.`);
+  return id;
+}

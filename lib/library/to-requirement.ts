@@ -1,0 +1,43 @@
+// A library part as the requirement's amplifier or shunt group, for the wizard's parts step.
+import type { RequirementInput } from "@/lib/design";
+import type { AmplifierValues, ShuntValues } from "./schema";
+
+type AmplifierGroup = NonNullable<RequirementInput["amplifier"]>;
+type ShuntGroup = NonNullable<RequirementInput["shunt"]>;
+
+/**
+ * The requirement's `amplifier` group for a library amplifier. `supplyV` is the amplifier's own
+ * supply in the design (clamped into the part's supply range; its highest by default).
+ * A resistor-set part sweeps G = 1 + Rf/Rg from E24 pairs between its lowest and highest gain.
+ */
+export function amplifierRequirement(amp: AmplifierValues, supplyV?: number): AmplifierGroup {
+  const supply = Math.min(amp.supplyMaxV, Math.max(amp.supplyMinV, supplyV ?? amp.supplyMaxV));
+  const gains =
+    amp.gainMode === "fixed" ? [...amp.gains] : { series: "E24", min: amp.gains[0] ?? 1, max: amp.gains[1] ?? amp.gains[0] ?? 1 };
+  return {
+    gains,
+    offset: amp.offsetV,
+    offsetDrift: amp.offsetDriftVPerK,
+    gainError: amp.gainErrorFraction,
+    gainDrift: amp.gainDriftPerK,
+    biasCurrent: amp.biasCurrentA,
+    noiseDensity: amp.noiseDensityVPerRtHz,
+    gbw: amp.gbwHz,
+    supply,
+    swingLow: amp.swingLowV,
+    swingHigh: amp.swingHighV,
+    cmrrDb: amp.cmrrDb,
+  };
+}
+
+/** The requirement's `shunt` group for a library shunt family (its series, value range and ratings). */
+export function shuntRequirement(shunt: ShuntValues): ShuntGroup {
+  return {
+    series: shunt.series,
+    min: shunt.minOhms,
+    max: shunt.maxOhms,
+    tolerance: shunt.toleranceFraction,
+    tempco: shunt.tempcoPerK,
+    ratings: [...shunt.ratingsW],
+  };
+}
