@@ -4,7 +4,7 @@
 import Papa from "papaparse";
 import type { z } from "zod";
 import { parseQuantity, type Dimension } from "@/lib/design";
-import { CsvRefusal, LineCounter, detectDelimiter, headerKey, readNumberCell, splitHeaderUnit, truncate, unitScale } from "@/lib/profile/csv";
+import { CsvRefusal, headerKey, readNumberCell, splitHeaderUnit, truncate, unitScale, walkCsv } from "@/lib/profile/csv";
 import { amplifierInput, shuntInput, type AmplifierValues, type PartKind, type ShuntValues } from "./schema";
 
 type Cell = "text" | "number" | "list" | "quantityList" | "bool" | Dimension;
@@ -152,60 +152,44 @@ export type ImportedParts =
 
 /** Parses a whole library CSV; the first problem refuses the file (nothing is imported). */
 export function parseLibraryCsv(kind: PartKind, text: string): { ok: true; parts: ImportedParts } | { ok: false; refusal: CsvRefusal } {
-  const lines = new LineCounter(text);
   const schema: z.ZodType = kind === "amplifiers" ? amplifierInput : shuntInput;
   let header = null as HeaderColumn[] | null;
-  let refusal = null as CsvRefusal | null;
   const rows: unknown[] = [];
   const names = new Map<string, number>();
-  let row = 0;
 
-  Papa.parse<string[]>(text, {
-    comments: "#",
-    delimiter: detectDelimiter(text),
-    skipEmptyLines: false,
-    step(result, parser) {
-      const line = lines.lineOfRowEndingAt(result.meta.cursor);
-      const cells = result.data;
-      const stop = (r: CsvRefusal) => {
-        refusal = r;
-        parser.abort();
-      };
-      const bad = result.errors.find((e) => e.type !== "Delimiter");
-      if (bad) return stop(new CsvRefusal(`the file cannot be read as CSV here: ${bad.message}`, header ? { row: row + 1, line } : { line }));
-      if (cells.length === 0 || (cells.length === 1 && (cells[0] ?? "").trim() === "")) return;
-      if (!header) {
-        const h = readHeader(kind, cells, line);
-        if (h instanceof CsvRefusal) return stop(h);
-        header = h;
-        return;
-      }
-      row += 1;
-      if (row > 10_000) return stop(new CsvRefusal("the file has more than 10000 parts", { row, line }));
-      if (cells.length !== header.length) return stop(new CsvRefusal(`the row has ${cells.length} cells but the header has ${header.length} columns`, { row, line }));
+  const walk = walkCsv(text, {
+    header(cells, line) {
+      const h = readHeader(kind, cells, line);
+      if (h instanceof CsvRefusal) return h;
+      header = h;
+    },
+    row(cells, row, line) {
+      if (!header) return;
+      if (row > 10_000) return new CsvRefusal("the file has more than 10000 parts", { row, line });
+      if (cells.length !== header.length) return new CsvRefusal(`the row has ${cells.length} cells but the header has ${header.length} columns`, { row, line });
       const values: Record<string, unknown> = {};
       for (const col of header) {
         const r = readCell(col, cells[col.index] ?? "");
-        if (!r.ok) return stop(new CsvRefusal(r.reason, { row, line, column: col.label }));
+        if (!r.ok) return new CsvRefusal(r.reason, { row, line, column: col.label });
         values[col.spec.key] = r.value;
       }
       const parsed = schema.safeParse(values);
+      const nameColumn = header.find((c) => c.spec.key === "name")!.label;
       if (!parsed.success) {
         const issue = parsed.error.issues[0]!;
         const key = String(issue.path[0] ?? "name");
-        const col = header.find((c) => c.spec.key === key);
-        return stop(new CsvRefusal(issue.message, { row, line, column: col?.label ?? key }));
+        return new CsvRefusal(issue.message, { row, line, column: header.find((c) => c.spec.key === key)?.label ?? key });
       }
       const name = String(values.name).toLowerCase();
       const seen = names.get(name);
       if (seen !== undefined) {
-        const col = header.find((c) => c.spec.key === "name")!;
-        return stop(new CsvRefusal(`the name "${truncate(String(values.name))}" is already used by data row ${seen}; each part needs its own name`, { row, line, column: col.label }));
+        return new CsvRefusal(`the name "${truncate(String(values.name))}" is already used by data row ${seen}; each part needs its own name`, { row, line, column: nameColumn });
       }
       names.set(name, row);
       rows.push(parsed.data);
     },
   });
+  const refusal = walk.refusal;
   if (refusal) return { ok: false, refusal };
   if (!header) return { ok: false, refusal: new CsvRefusal(`the file is empty; the first line must name the columns ${columnsOf[kind].map((c) => c.key).join(", ")}`, { line: 1 }) };
   if (rows.length === 0) return { ok: false, refusal: new CsvRefusal("the file has a header but no parts") };

@@ -1,6 +1,7 @@
 // A refused CSV: what is wrong and exactly where, so the user can fix the file.
 // Rows are counted two ways and the message says which: the 1-based data row (after the header)
 // and the line of the file (comments and blank lines included).
+import Papa from "papaparse";
 import { parseQuantity, type Dimension } from "@/lib/design";
 
 export type CsvPlace = {
@@ -142,4 +143,47 @@ export function detectDelimiter(text: string): string {
     return best;
   }
   return ",";
+}
+
+export type RowVisitor = {
+  /** The header row; return a refusal to stop. */
+  header(cells: string[], line: number): CsvRefusal | void;
+  /** A data row (1-based `row`); return a refusal to stop. */
+  row(cells: string[], row: number, line: number): CsvRefusal | void;
+};
+
+/**
+ * Walks a CSV held in a string row by row with Papa's step callback, stopping at the first refusal.
+ * "#" lines are comments, blank lines are skipped, the delimiter comes from the header line.
+ * Returns the first refusal, or null with the number of data rows and whether a header was seen.
+ */
+export function walkCsv(text: string, visit: RowVisitor): { refusal: CsvRefusal | null; rows: number; sawHeader: boolean } {
+  const lines = new LineCounter(text);
+  let refusal = null as CsvRefusal | null;
+  let sawHeader = false;
+  let row = 0;
+  Papa.parse<string[]>(text, {
+    comments: "#",
+    delimiter: detectDelimiter(text),
+    skipEmptyLines: false,
+    step(result, parser) {
+      const line = lines.lineOfRowEndingAt(result.meta.cursor);
+      const cells = result.data;
+      const stop = (r: CsvRefusal | void) => {
+        if (!r) return;
+        refusal = r;
+        parser.abort();
+      };
+      const bad = result.errors.find((e) => e.type !== "Delimiter");
+      if (bad) return stop(new CsvRefusal(`the file cannot be read as CSV here: ${bad.message}`, sawHeader ? { row: row + 1, line } : { line }));
+      if (cells.length === 0 || (cells.length === 1 && (cells[0] ?? "").trim() === "")) return; // blank line
+      if (!sawHeader) {
+        sawHeader = true;
+        return stop(visit.header(cells, line));
+      }
+      row += 1;
+      stop(visit.row(cells, row, line));
+    },
+  });
+  return { refusal, rows: row, sawHeader };
 }

@@ -6,3 +6,5 @@ export * from "./summary";
 export * from "./decimate";
 export * from "./samples";
 export * from "./limits";
+export * from "./design";
+export * from "./ticks";

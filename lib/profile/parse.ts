@@ -1,7 +1,6 @@
 // Reads a current recording from CSV: a time column and a current column, units in the header.
-// Papa parses row by row (step) and the first problem stops it; nothing partial is returned.
-import Papa from "papaparse";
-import { CsvRefusal, LineCounter, detectDelimiter, headerKey, readNumberCell, splitHeaderUnit, truncate, unitScale } from "./csv";
+// Papa parses row by row (walkCsv's step) and the first problem stops it; nothing partial is returned.
+import { CsvRefusal, headerKey, readNumberCell, splitHeaderUnit, truncate, unitScale, walkCsv } from "./csv";
 
 export type ProfileSeries = {
   /** Seconds, strictly increasing. */
@@ -82,67 +81,50 @@ export const MAX_PROFILE_ROWS = 5_000_000;
  * skipped; the delimiter (comma, semicolon, tab) is detected. Returns the series or the first refusal.
  */
 export function parseProfileCsv(text: string): ParseOutcome {
-  const lines = new LineCounter(text);
   const times = new Float64Builder();
   const currents = new Float64Builder();
   let header = null as { time: Column; current: Column } | null;
   let width = 0;
-  let refusal = null as CsvRefusal | null;
-  let row = 0;
 
-  Papa.parse<string[]>(text, {
-    comments: "#",
-    delimiter: detectDelimiter(text),
-    skipEmptyLines: false,
-    step(result, parser) {
-      const line = lines.lineOfRowEndingAt(result.meta.cursor);
-      const cells = result.data;
-      const stop = (r: CsvRefusal) => {
-        refusal = r;
-        parser.abort();
-      };
-      const bad = result.errors.find((e) => e.type !== "Delimiter");
-      if (bad) return stop(new CsvRefusal(`the file cannot be read as CSV here: ${bad.message}`, header ? { row: row + 1, line } : { line }));
-      if (cells.length === 0 || (cells.length === 1 && (cells[0] ?? "").trim() === "")) return; // blank line
-      if (!header) {
-        const h = readProfileHeader(cells, line);
-        if (h instanceof CsvRefusal) return stop(h);
-        header = h;
-        width = cells.length;
-        return;
-      }
-      row += 1;
-      if (row > MAX_PROFILE_ROWS) return stop(new CsvRefusal(`the file has more than ${MAX_PROFILE_ROWS} data rows`, { row, line }));
+  const walk = walkCsv(text, {
+    header(cells, line) {
+      const h = readProfileHeader(cells, line);
+      if (h instanceof CsvRefusal) return h;
+      header = h;
+      width = cells.length;
+    },
+    row(cells, row, line) {
+      if (!header) return;
+      if (row > MAX_PROFILE_ROWS) return new CsvRefusal(`the file has more than ${MAX_PROFILE_ROWS} data rows`, { row, line });
       if (cells.length !== width) {
-        return stop(new CsvRefusal(`the row has ${cells.length} cell${cells.length === 1 ? "" : "s"} but the header has ${width} columns`, { row, line }));
+        return new CsvRefusal(`the row has ${cells.length} cell${cells.length === 1 ? "" : "s"} but the header has ${width} columns`, { row, line });
       }
       const t = readNumberCell(cells[header.time.index] ?? "");
-      if (!t.ok) return stop(new CsvRefusal(t.reason, { row, line, column: header.time.label }));
+      if (!t.ok) return new CsvRefusal(t.reason, { row, line, column: header.time.label });
       const i = readNumberCell(cells[header.current.index] ?? "");
-      if (!i.ok) return stop(new CsvRefusal(i.reason, { row, line, column: header.current.label }));
+      if (!i.ok) return new CsvRefusal(i.reason, { row, line, column: header.current.label });
       const tS = t.value * header.time.scale;
       const iA = i.value * header.current.scale;
       if (!Number.isFinite(tS) || !Number.isFinite(iA)) {
         const column = Number.isFinite(tS) ? header.current.label : header.time.label;
-        return stop(new CsvRefusal("the value is too large to be a finite number in SI units", { row, line, column }));
+        return new CsvRefusal("the value is too large to be a finite number in SI units", { row, line, column });
       }
       if (times.length > 0 && !(tS > times.last())) {
-        return stop(
-          new CsvRefusal(`time must increase from row to row, but ${t.value} is not after the previous row's ${Number((times.last() / header.time.scale).toPrecision(12))}`, {
-            row,
-            line,
-            column: header.time.label,
-          }),
-        );
+        const previous = Number((times.last() / header.time.scale).toPrecision(12));
+        return new CsvRefusal(`time must increase from row to row, but ${t.value} is not after the previous row's ${previous}`, {
+          row,
+          line,
+          column: header.time.label,
+        });
       }
       times.push(tS);
       currents.push(iA);
     },
   });
 
-  if (refusal) return { ok: false, refusal };
+  if (walk.refusal) return { ok: false, refusal: walk.refusal };
   if (!header) return { ok: false, refusal: new CsvRefusal(`the file is empty. ${PROFILE_HEADER_HELP}`, { line: 1 }) };
-  const h = header;
+  const h = header as { time: Column; current: Column };
   if (times.length < 2) {
     return {
       ok: false,

@@ -1,17 +1,29 @@
 import type { Metadata } from "next";
-import { EmptyState } from "@/components/ui/panel";
+import { LibraryWorkbench } from "@/components/library/library-workbench";
+import { listLibrary } from "@/db/queries/library";
 import { requirePageCaller } from "@/lib/auth/gate";
 
 export const metadata: Metadata = { title: "Library" };
 
 export default async function LibraryPage() {
-  await requirePageCaller("/library");
+  const caller = await requirePageCaller("/library");
+  const library = await listLibrary(caller.teamId);
+  const canEdit = caller.role === "owner" || caller.role === "designer";
   return (
-    <div className="flex flex-col gap-4">
-      <h1 className="text-lg font-semibold">Parts library</h1>
-      <EmptyState title="The parts library is empty">
-        The team&apos;s amplifiers and shunts will be kept here, for the design wizard to pick from.
-      </EmptyState>
+    <div className="flex flex-col gap-2">
+      <div>
+        <h1 className="text-lg font-semibold">Parts library</h1>
+        <p className="max-w-prose text-ink-muted">
+          The amplifiers and shunt families {caller.teamName} builds with. The design wizard&apos;s parts step picks from them; figures are the data-sheet values the
+          error budget uses (worst case at 25 °C, drifts per kelvin).
+          {canEdit ? "" : " Owners and designers edit the library."}
+        </p>
+      </div>
+      <LibraryWorkbench
+        amplifiers={library.amplifiers as unknown as Parameters<typeof LibraryWorkbench>[0]["amplifiers"]}
+        shunts={library.shunts as unknown as Parameters<typeof LibraryWorkbench>[0]["shunts"]}
+        canEdit={canEdit}
+      />
     </div>
   );
 }

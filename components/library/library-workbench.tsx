@@ -1,0 +1,219 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useRef, useState } from "react";
+import { Badge } from "@/components/ui/badge";
+import { Button, buttonClass } from "@/components/ui/button";
+import { Field, Select } from "@/components/ui/field";
+import { Panel } from "@/components/ui/panel";
+import { fieldsOf } from "@/lib/library/fields";
+import type { PartKind } from "@/lib/library/schema";
+import { PartForm } from "./part-form";
+
+type Part = Record<string, unknown> & { id: string; name: string; updatedAt: string };
+
+const titles: Record<PartKind, string> = { amplifiers: "Amplifiers", shunts: "Shunt families" };
+const singular: Record<PartKind, string> = { amplifiers: "amplifier", shunts: "shunt family" };
+
+type Notice = { tone: "good" | "bad"; text: string } | null;
+
+export function LibraryWorkbench({ amplifiers, shunts, canEdit }: { amplifiers: Part[]; shunts: Part[]; canEdit: boolean }) {
+  const router = useRouter();
+  const [notice, setNotice] = useState<Notice>(null);
+  const done = (text: string) => {
+    if (text) setNotice({ tone: "good", text });
+    router.refresh();
+  };
+  return (
+    <div className="flex flex-col gap-4">
+      <p role="status" aria-live="polite" className={`min-h-5 text-sm font-medium ${notice?.tone === "bad" ? "text-bad" : "text-good"}`}>
+        {notice?.text}
+      </p>
+      <PartTable kind="amplifiers" parts={amplifiers} canEdit={canEdit} onDone={done} onError={(t) => setNotice({ tone: "bad", text: t })} />
+      <PartTable kind="shunts" parts={shunts} canEdit={canEdit} onDone={done} onError={(t) => setNotice({ tone: "bad", text: t })} />
+      <ImportExport canEdit={canEdit} onDone={done} />
+    </div>
+  );
+}
+
+function PartTable({
+  kind,
+  parts,
+  canEdit,
+  onDone,
+  onError,
+}: {
+  kind: PartKind;
+  parts: Part[];
+  canEdit: boolean;
+  onDone: (message: string) => void;
+  onError: (message: string) => void;
+}) {
+  const [editing, setEditing] = useState<string | "new" | null>(null);
+  const columns = fieldsOf[kind].filter((f) => f.inTable);
+
+  async function remove(part: Part) {
+    if (!window.confirm(`Remove ${part.name} from the library? Designs already saved keep their figures.`)) return;
+    const res = await fetch(`/api/library/${kind}/${part.id}`, { method: "DELETE" }).catch(() => null);
+    if (!res) return onError("The server could not be reached; nothing was removed.");
+    const data = (await res.json().catch(() => ({}))) as { message?: string };
+    if (!res.ok) return onError(data.message ?? `Removing ${part.name} was refused (${res.status}).`);
+    onDone(`Removed ${part.name}.`);
+  }
+
+  const finish = (message: string) => {
+    setEditing(null);
+    onDone(message);
+  };
+
+  return (
+    <Panel
+      title={`${titles[kind]} (${parts.length})`}
+      actions={
+        canEdit && editing !== "new" ? (
+          <Button variant="secondary" onClick={() => setEditing("new")}>
+            Add {singular[kind]}
+          </Button>
+        ) : null
+      }
+    >
+      {editing === "new" && (
+        <div className="mb-4 rounded-panel border border-copper/40 bg-copper-soft/30 p-3">
+          <PartForm kind={kind} part={null} onDone={finish} />
+        </div>
+      )}
+      {parts.length === 0 ? (
+        <p className="text-ink-muted">
+          No {titles[kind].toLowerCase()} yet.{canEdit ? ` Add one, or import a CSV below.` : " Owners and designers add them."}
+        </p>
+      ) : (
+        <div className="overflow-x-auto">
+          <table className="w-full min-w-max text-left text-sm" aria-label={titles[kind]}>
+            <thead className="border-b border-line text-xs text-ink-muted">
+              <tr>
+                {columns.map((c) => (
+                  <th key={c.key} scope="col" className="px-2 py-1.5 font-medium whitespace-nowrap">
+                    {c.label}
+                  </th>
+                ))}
+                {canEdit && <th className="px-2 py-1.5" aria-label="Actions" />}
+              </tr>
+            </thead>
+            <tbody>
+              {parts.map((p) => (
+                <FragmentRow key={p.id} colSpan={columns.length + (canEdit ? 1 : 0)} editing={editing === p.id} form={<PartForm kind={kind} part={p} onDone={finish} />}>
+                  {columns.map((c) => (
+                    <td key={c.key} className={`px-2 py-1.5 whitespace-nowrap ${c.key === "name" ? "font-medium" : "num"}`}>
+                      {c.key === "fourTerminal" ? (p.fourTerminal ? <Badge tone="signal">4-terminal</Badge> : <span className="text-ink-faint">2-terminal</span>) : c.show(p[c.key])}
+                    </td>
+                  ))}
+                  {canEdit && (
+                    <td className="px-2 py-1 text-right whitespace-nowrap">
+                      <Button variant="ghost" onClick={() => setEditing(editing === p.id ? null : p.id)} aria-label={`Edit ${p.name}`}>
+                        Edit
+                      </Button>
+                      <Button variant="ghost" onClick={() => remove(p)} aria-label={`Remove ${p.name}`}>
+                        Remove
+                      </Button>
+                    </td>
+                  )}
+                </FragmentRow>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+    </Panel>
+  );
+}
+
+function FragmentRow({ children, editing, form, colSpan }: { children: React.ReactNode; editing: boolean; form: React.ReactNode; colSpan: number }) {
+  return (
+    <>
+      <tr className={`border-b border-line last:border-0 ${editing ? "bg-sunken" : ""}`}>{children}</tr>
+      {editing && (
+        <tr className="border-b border-line bg-sunken">
+          <td colSpan={colSpan} className="px-2 py-3">
+            {form}
+          </td>
+        </tr>
+      )}
+    </>
+  );
+}
+
+type ImportResult = { created: number; updated: number; kind: PartKind; fileName: string };
+
+function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message: string) => void }) {
+  const [kind, setKind] = useState<PartKind>("amplifiers");
+  const [error, setError] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+  const fileRef = useRef<HTMLInputElement>(null);
+
+  async function upload(e: React.FormEvent) {
+    e.preventDefault();
+    const file = fileRef.current?.files?.[0];
+    setError(null);
+    if (!file) return setError("Choose a CSV file first.");
+    const form = new FormData();
+    form.set("kind", kind);
+    form.set("file", file);
+    setBusy(true);
+    const res = await fetch("/api/library/import", { method: "POST", body: form }).catch(() => null);
+    setBusy(false);
+    if (!res) return setError("The server could not be reached; nothing was imported.");
+    const data = (await res.json().catch(() => ({}))) as Partial<ImportResult> & { message?: string };
+    if (!res.ok) return setError(data.message ?? `The import was refused (${res.status}).`);
+    if (fileRef.current) fileRef.current.value = "";
+    onDone(`Imported ${data.fileName}: ${data.created} added, ${data.updated} updated.`);
+  }
+
+  return (
+    <Panel title="Import and export (CSV)">
+      <div className="grid gap-6 md:grid-cols-2">
+        <div className="flex flex-col gap-2">
+          <h3 className="text-sm font-medium">Export</h3>
+          <p className="text-xs text-ink-muted">One row per part, SI units, the unit in each column name (offsetV, minOhms…). A file exported here imports back unchanged.</p>
+          <div className="flex gap-2">
+            <a className={buttonClass("secondary")} href="/api/library/export?kind=amplifiers" download>
+              Amplifiers CSV
+            </a>
+            <a className={buttonClass("secondary")} href="/api/library/export?kind=shunts" download>
+              Shunt families CSV
+            </a>
+          </div>
+        </div>
+        {canEdit ? (
+          <form onSubmit={upload} className="flex flex-col gap-2" aria-label="Import parts">
+            <h3 className="text-sm font-medium">Import</h3>
+            <p className="text-xs text-ink-muted">
+              All or nothing: one bad cell refuses the whole file and names its row and column. A part whose name is already in the library is updated. Units may go in
+              the header (<code>offset [uV]</code>) or the cell (<code>35 uV</code>); lists are separated by <code>;</code>.
+            </p>
+            <div className="grid grid-cols-[10rem_1fr] items-end gap-2">
+              <Field id="import-kind" label="The file holds">
+                <Select id="import-kind" value={kind} onChange={(e) => setKind(e.target.value as PartKind)}>
+                  <option value="amplifiers">Amplifiers</option>
+                  <option value="shunts">Shunt families</option>
+                </Select>
+              </Field>
+              <Field id="import-file" label="CSV file">
+                <input id="import-file" ref={fileRef} type="file" accept=".csv,text/csv" className="text-sm file:mr-2 file:rounded file:border file:border-line file:bg-panel file:px-2 file:py-1" />
+              </Field>
+            </div>
+            <div className="flex items-center gap-2">
+              <Button type="submit" variant="primary" disabled={busy}>
+                {busy ? "Importing…" : "Import"}
+              </Button>
+            </div>
+            <p role="alert" aria-live="assertive" className="text-sm font-medium text-bad" data-testid="import-error">
+              {error}
+            </p>
+          </form>
+        ) : (
+          <p className="text-sm text-ink-muted">Owners and designers import parts; everyone can read and export the library.</p>
+        )}
+      </div>
+    </Panel>
+  );
+}

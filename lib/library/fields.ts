@@ -1,0 +1,105 @@
+// How each library field is shown and typed on the screen: the label in the trade's words, the
+// SI value formatted with a prefix for the table and the form, and how the form's text goes to the API.
+import { formatSI } from "@/lib/design";
+import type { PartKind } from "./schema";
+
+export type FieldKind = "text" | "quantity" | "numberList" | "quantityList" | "select" | "checkbox" | "number";
+
+export type FieldSpec = {
+  key: string;
+  label: string;
+  kind: FieldKind;
+  /** SI number(s) → text for a table cell or an input. */
+  show: (value: unknown) => string;
+  hint?: string;
+  options?: { value: string; label: string }[];
+  /** Shown in the table (some fields only appear in the form). */
+  inTable?: boolean;
+};
+
+const si = (unit: string) => (v: unknown) => (typeof v === "number" ? formatSI(v, unit) : "");
+const ppm = (v: unknown) => (typeof v === "number" ? `${Number((v * 1e6).toPrecision(3))} ppm/K` : "");
+const percent = (v: unknown) => (typeof v === "number" ? `${Number((v * 100).toPrecision(3))} %` : "");
+const list = (fmt: (v: unknown) => string, sep = ", ") => (v: unknown) => (Array.isArray(v) ? v.map(fmt).join(sep) : "");
+const plain = (v: unknown) => (v === undefined || v === null ? "" : String(v));
+
+export const amplifierFields: FieldSpec[] = [
+  { key: "name", label: "Name", kind: "text", show: plain, inTable: true },
+  {
+    key: "gainMode",
+    label: "Gain mode",
+    kind: "select",
+    show: (v) => (v === "resistor-set" ? "resistor-set" : "fixed"),
+    options: [
+      { value: "fixed", label: "Fixed gains (a list)" },
+      { value: "resistor-set", label: "Set by a resistor pair (lowest–highest)" },
+    ],
+    inTable: true,
+  },
+  { key: "gains", label: "Gains", kind: "numberList", show: list(plain), hint: "Fixed: each gain, e.g. 20, 50, 100. Resistor-set: lowest and highest, e.g. 1, 1000.", inTable: true },
+  { key: "offsetV", label: "Input offset", kind: "quantity", show: si("V"), hint: "e.g. 35 uV", inTable: true },
+  { key: "offsetDriftVPerK", label: "Offset drift", kind: "quantity", show: si("V/K"), hint: "e.g. 0.1 uV/K", inTable: true },
+  { key: "gainErrorFraction", label: "Gain error", kind: "quantity", show: percent, hint: "e.g. 0.2 %", inTable: true },
+  { key: "gainDriftPerK", label: "Gain drift", kind: "quantity", show: ppm, hint: "e.g. 10 ppm/K" },
+  { key: "biasCurrentA", label: "Input bias current", kind: "quantity", show: si("A"), hint: "e.g. 20 nA", inTable: true },
+  { key: "noiseDensityVPerRtHz", label: "Input noise density", kind: "quantity", show: si("V/rtHz"), hint: "e.g. 40 nV/rtHz", inTable: true },
+  { key: "gbwHz", label: "Gain-bandwidth", kind: "quantity", show: si("Hz"), hint: "e.g. 400 kHz", inTable: true },
+  { key: "swingLowV", label: "Lowest output above ground", kind: "quantity", show: si("V"), hint: "e.g. 10 mV", inTable: true },
+  { key: "swingHighV", label: "Output headroom below the supply", kind: "quantity", show: si("V"), hint: "e.g. 30 mV", inTable: true },
+  { key: "cmrrDb", label: "CMRR (dB)", kind: "number", show: (v) => (typeof v === "number" ? `${v} dB` : ""), inTable: true },
+  { key: "supplyMinV", label: "Lowest supply", kind: "quantity", show: si("V"), hint: "e.g. 2.7 V" },
+  { key: "supplyMaxV", label: "Highest supply", kind: "quantity", show: si("V"), hint: "e.g. 5.5 V" },
+];
+
+export const shuntFields: FieldSpec[] = [
+  { key: "name", label: "Name", kind: "text", show: plain, inTable: true },
+  {
+    key: "series",
+    label: "Series",
+    kind: "select",
+    show: plain,
+    options: ["E6", "E12", "E24", "E48", "E96", "E192"].map((s) => ({ value: s, label: s })),
+    inTable: true,
+  },
+  { key: "minOhms", label: "Smallest value", kind: "quantity", show: si("Ω"), hint: "e.g. 1 mohm", inTable: true },
+  { key: "maxOhms", label: "Largest value", kind: "quantity", show: si("Ω"), hint: "e.g. 100 mohm", inTable: true },
+  { key: "toleranceFraction", label: "Tolerance", kind: "quantity", show: percent, hint: "e.g. 1 %", inTable: true },
+  { key: "tempcoPerK", label: "Tempco", kind: "quantity", show: ppm, hint: "e.g. 50 ppm/K", inTable: true },
+  { key: "ratingsW", label: "Power ratings", kind: "quantityList", show: list(si("W")), hint: "e.g. 0.5 W, 1 W, 2 W", inTable: true },
+  { key: "fourTerminal", label: "4-terminal (Kelvin) connection", kind: "checkbox", show: (v) => (v ? "yes" : "no"), inTable: true },
+];
+
+export const fieldsOf: Record<PartKind, FieldSpec[]> = { amplifiers: amplifierFields, shunts: shuntFields };
+
+/** The form's text for each field as the API body (unit strings are parsed on the server). */
+export function formToBody(kind: PartKind, form: Record<string, string | boolean>): Record<string, unknown> {
+  const body: Record<string, unknown> = {};
+  for (const f of fieldsOf[kind]) {
+    const raw = form[f.key];
+    if (f.kind === "checkbox") body[f.key] = raw === true;
+    else if (f.kind === "numberList") body[f.key] = splitItems(String(raw ?? "")).map((s) => (Number.isFinite(Number(s)) ? Number(s) : s));
+    else if (f.kind === "quantityList") body[f.key] = splitItems(String(raw ?? ""));
+    else if (f.kind === "number") body[f.key] = String(raw ?? "").trim() === "" ? "" : Number(raw);
+    else body[f.key] = String(raw ?? "").trim();
+  }
+  return body;
+}
+
+function splitItems(text: string): string[] {
+  return text
+    .split(/[,;]/)
+    .map((s) => s.trim())
+    .filter(Boolean);
+}
+
+/** A stored part as the form's starting text. */
+export function partToForm(kind: PartKind, part: Record<string, unknown> | null): Record<string, string | boolean> {
+  const out: Record<string, string | boolean> = {};
+  for (const f of fieldsOf[kind]) {
+    if (f.kind === "checkbox") out[f.key] = part ? part[f.key] === true : false;
+    else if (!part) out[f.key] = f.kind === "select" ? (f.options?.[kind === "shunts" ? 4 : 0]?.value ?? "") : "";
+    else if (f.kind === "number") out[f.key] = plain(part[f.key]);
+    else out[f.key] = f.show(part[f.key]);
+  }
+  return out;
+}
