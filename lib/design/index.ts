@@ -12,6 +12,7 @@ export { solve, defaultRankingText, type SolveResult, type SolveOptions } from "
 export { RankExpressionError, compileRankExpression, rankFields, type RankField } from "./rank";
 export { planRanges, SWITCH_DOWN_FRACTION, MAX_RANGES, type RangePlan, type PlannedRange } from "./range-plan";
 export * from "./bench-check";
+export { decadeScaleLabel } from "./decade";
 export * from "./insertion";
 export * from "./netlist";
 export * from "./monte-carlo";

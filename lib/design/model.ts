@@ -44,7 +44,7 @@ export type Model = {
   en2: number;
   fourKT: number;
   gbw: number;
-  /** Output filter corner, Hz (Infinity: none). */
+  /** Lowest band limit after the amplifier: output filter or meter bandwidth, Hz (Infinity: none). */
   filterHz: number;
   crest: number;
   swingLow: number;
@@ -91,7 +91,7 @@ export function buildModel(req: Requirement): Model {
     en2: a.noiseDensity * a.noiseDensity,
     fourKT: 4 * BOLTZMANN * tNoiseK,
     gbw: a.gbw,
-    filterHz: a.filterHz ?? Infinity,
+    filterHz: Math.min(a.filterHz ?? Infinity, req.readout.kind === "meter" ? req.readout.bandwidthHz : Infinity),
     crest: req.accuracy.crestFactor,
     swingLow: a.swingLow,
     bwReq: req.bandwidth.min,

@@ -46,6 +46,8 @@ const meterReadout = z.object({
   kind: z.literal("meter"),
   fullScale: q("voltage", "Meter range full scale", positive("Meter range full scale")),
   counts: count("Meter counts", 10, 10_000_000),
+  // A bench meter averages each reading; what it sees is band-limited to about this.
+  bandwidthHz: q("frequency", "Meter bandwidth", positive("Meter bandwidth")).default(10),
 });
 
 const gainSetSchema = z.object({

@@ -187,3 +187,33 @@ describe("solve: the listing", () => {
     for (let i = 1; i < rest.length; i++) expect(score(rest[i] as Candidate)).toBeGreaterThanOrEqual(score(rest[i - 1] as Candidate) - 1e-12);
   });
 });
+
+describe("decade scale factors for bench-meter readouts", () => {
+  it("labels powers of ten in the trade's words", async () => {
+    const { decadeScaleLabel } = await import("./decade");
+    expect(decadeScaleLabel(1)).toBe("1 mV per mA");
+    expect(decadeScaleLabel(1000)).toBe("1 mV per µA");
+    expect(decadeScaleLabel(1e6)).toBe("1 mV per nA");
+    expect(decadeScaleLabel(100)).toBe("100 mV per mA");
+    expect(decadeScaleLabel(0.1)).toBe("100 mV per A");
+    expect(decadeScaleLabel(2)).toBeNull();
+  });
+  it("offers 1 mV per µA for the demo's meter adapter (DESIGN.md §6), feasible", () => {
+    // A meter's 200 mV range reading a current up to 200 µA at 1 mV per µA.
+    const r = req({
+      current: { min: "2 uA", max: "180 uA" },
+      supply: { voltage: "3 V" },
+      drop: { max: "30 mV" },
+      readout: { kind: "meter", fullScale: "200 mV", counts: 2000 },
+      resolution: { countsAtMin: 10 },
+      accuracy: { percent: 5 },
+      amplifier: { gains: [1, 10, 100, 1000], swingLow: 0 },
+    });
+    const s = solve(r);
+    const micro = s.decadeScales.find((c) => c.scale === "1 mV per µA");
+    expect(micro).toBeDefined();
+    expect(micro?.feasible).toBe(true);
+    expect(micro?.transimpedanceVPerA).toBeCloseTo(1000, 9);
+    for (const c of s.decadeScales) expect(c.feasible).toBe(true);
+  });
+});

@@ -1,6 +1,7 @@
 // The solver: sweep the grid, mark the Pareto front, rank, and propose ranges when no
 // single pair can cover the span.
 import { candidateFigures } from "./candidate";
+import { decadePairs, decadeScaleLabel } from "./decade";
 import { buildModel, signalBandwidth, type Model } from "./model";
 import { paretoFrontSorted } from "./pareto";
 import { rejectReasons, type RejectReason } from "./pair";
@@ -19,6 +20,8 @@ export type SolveResult = {
   rangePlan: RangePlan | null;
   /** How the candidates after the front were ordered. */
   ranking: string;
+  /** Feasible pairs with a decade scale factor (1 mV per mA, …), the best per decade. */
+  decadeScales: (Candidate & { scale: string })[];
 };
 
 export type SolveOptions = { rankExpression?: string };
@@ -39,14 +42,33 @@ function popcount(x: number): number {
 
 /** Indices of the k smallest scores (ties by index), ascending. */
 function smallest(indices: Int32Array, scores: Float64Array, k: number): number[] {
-  let pool = Array.from(indices);
-  if (pool.length > k && k > 0) {
-    const sorted = Float64Array.from(pool, (p) => scores[p] as number).sort();
-    const threshold = sorted[k - 1] as number;
-    pool = pool.filter((p) => (scores[p] as number) <= threshold);
+  if (k <= 0 || indices.length === 0) return [];
+  let pool = indices;
+  if (indices.length > k) {
+    // Find the k-th smallest score with a native numeric sort, then keep only what can make the cut.
+    const s = new Float64Array(indices.length);
+    for (let i = 0; i < indices.length; i++) s[i] = scores[indices[i] as number] as number;
+    s.sort();
+    const threshold = s[k - 1] as number;
+    const kept = new Int32Array(indices.length);
+    let n = 0;
+    for (let i = 0; i < indices.length; i++) {
+      const p = indices[i] as number;
+      if (!((scores[p] as number) > threshold)) kept[n++] = p;
+    }
+    pool = kept.subarray(0, n);
   }
-  pool.sort((a, b) => (scores[a] as number) - (scores[b] as number) || a - b);
-  return pool.slice(0, Math.max(0, k));
+  const out = Array.from(pool);
+  out.sort((a, b) => (scores[a] as number) - (scores[b] as number) || a - b);
+  return out.slice(0, k);
+}
+
+/** Indices p (ascending) where keep(p) holds. */
+function indicesWhere(n: number, keep: (p: number) => boolean): Int32Array {
+  const tmp = new Int32Array(n);
+  let k = 0;
+  for (let p = 0; p < n; p++) if (keep(p)) tmp[k++] = p;
+  return tmp.slice(0, k);
 }
 
 function rankScope(m: Model, sw: SweepArrays, p: number, scope: RankScope): RankScope {
@@ -74,9 +96,10 @@ function rankScope(m: Model, sw: SweepArrays, p: number, scope: RankScope): Rank
   return scope;
 }
 
-function scoreAll(m: Model, sw: SweepArrays, indices: Int32Array, rank: CompiledRank | null): Float64Array {
+/** Scores of the given pairs, written into `into` (a fresh array by default). */
+function scoreAll(m: Model, sw: SweepArrays, indices: Int32Array, rank: CompiledRank | null, into?: Float64Array): Float64Array {
   const nG = sw.gains.length;
-  const scores = new Float64Array(sw.mask.length);
+  const scores = into ?? new Float64Array(sw.mask.length);
   if (rank) {
     const scope = {} as RankScope;
     for (const p of indices) scores[p] = rank.evaluate(rankScope(m, sw, p, scope));
@@ -118,14 +141,10 @@ export function solve(req: Requirement, opts: SolveOptions = {}): SolveResult {
   const nPairs = sw.mask.length;
   const nG = sw.gains.length;
 
-  const feasible = new Int32Array(sw.feasibleCount);
-  let nf = 0;
-  for (let p = 0; p < nPairs; p++) if (sw.mask[p] === 0) feasible[nf++] = p;
   const onFront = frontOf(m, sw);
-  const scores = scoreAll(m, sw, feasible, rank);
-
-  const front = Int32Array.from(Array.from(feasible).filter((p) => onFront[p] === 1));
-  const rest = Int32Array.from(Array.from(feasible).filter((p) => onFront[p] !== 1));
+  const front = indicesWhere(nPairs, (p) => onFront[p] === 1);
+  const rest = indicesWhere(nPairs, (p) => sw.mask[p] === 0 && onFront[p] !== 1);
+  const scores = scoreAll(m, sw, front, rank, scoreAll(m, sw, rest, rank));
   const chosen = smallest(front, scores, front.length);
   chosen.push(...smallest(rest, scores, req.limit - chosen.length));
 
@@ -134,18 +153,21 @@ export function solve(req: Requirement, opts: SolveOptions = {}): SolveResult {
     const failedCount = new Uint8Array(nPairs);
     for (let p = 0; p < nPairs; p++) failedCount[p] = popcount(sw.mask[p] as number);
     for (let failed = 1; failed <= rejectReasons.length && chosen.length < req.limit; failed++) {
-      const group: number[] = [];
-      for (let p = 0; p < nPairs; p++) if (failedCount[p] === failed) group.push(p);
-      const indices = Int32Array.from(group);
-      chosen.push(...smallest(indices, scoreAll(m, sw, indices, rank), req.limit - chosen.length));
+      const group = indicesWhere(nPairs, (p) => failedCount[p] === failed);
+      chosen.push(...smallest(group, scoreAll(m, sw, group, rank), req.limit - chosen.length));
     }
   }
 
-  const candidates = chosen.map((p) => {
+  const toCandidate = (p: number) => {
     const i = Math.floor(p / nG);
     const c = candidateFigures(m, sw.values[i] as number, sw.gains[p - i * nG] as number);
     c.pareto = onFront[p] === 1;
     return c;
+  };
+  const candidates = chosen.map(toCandidate);
+  const decadeScales = decadePairs(sw, scores).map((p) => {
+    const c = toCandidate(p);
+    return { ...c, scale: decadeScaleLabel(c.transimpedanceVPerA) ?? "" };
   });
 
   const rejected = Object.fromEntries(rejectReasons.map((r, k) => [r, sw.rejectedCounts[k] ?? 0])) as Record<RejectReason, number>;
@@ -157,5 +179,6 @@ export function solve(req: Requirement, opts: SolveOptions = {}): SolveResult {
     candidates,
     rangePlan: sw.feasibleCount === 0 ? planRanges(req, m, sw) : null,
     ranking: rank ? `By the expression ${rank.source}; lower first.` : defaultRankingText,
+    decadeScales,
   };
 }
