@@ -60,7 +60,7 @@ export function evaluateDesign(requirementInput: unknown, choice: Choice): Evalu
     const onSeries = isInSweep(req, { shuntOhms: choice.shuntOhms, gain: req.amplifier.gains[0] ?? choice.gain });
     if (!onSeries) {
       fieldErrors["choice.shuntOhms"] = [
-        `${formatSI(choice.shuntOhms, "Ω")} is not a ${req.shunt.series} value between ${formatSI(req.shunt.min, "Ω")} and ${formatSI(req.shunt.max, "Ω")}`,
+        `${formatSI(choice.shuntOhms, "Ω")} is not in the ${req.shunt.series} series between ${formatSI(req.shunt.min, "Ω")} and ${formatSI(req.shunt.max, "Ω")}`,
       ];
     }
     if (!req.amplifier.gains.some((g) => Math.abs(g - choice.gain) <= 1e-9 * g)) {

@@ -1,0 +1,3 @@
+export default function DesignLoading() {
+  return <p className="text-ink-muted">Loading the design…</p>;
+}

@@ -1,0 +1,87 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { BuildSheetPanel } from "@/components/design/build-sheet-panel";
+import { DesignFigures } from "@/components/design/design-figures";
+import { ProfilesPanel } from "@/components/design/profiles-panel";
+import { ComparePicker } from "@/components/review/compare-picker";
+import { ReviewPanel } from "@/components/review/review-panel";
+import { StatusBadge, statusExplained } from "@/components/review/status-badge";
+import { listTargetAudit } from "@/db/queries/audit";
+import { getDesignView, isUuid, listDesigns, listRevisions } from "@/db/queries/designs";
+import { listReviews } from "@/db/queries/reviews";
+import { formatSI } from "@/lib/design";
+import { requirePageCaller } from "@/lib/auth/gate";
+import type { DesignViewer } from "@/lib/design-view";
+import { formatWhen } from "@/lib/designs/when";
+
+export const metadata: Metadata = { title: "Design" };
+
+export default async function DesignPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const caller = await requirePageCaller(`/designs/${id}`);
+  if (!isUuid(id)) notFound();
+  const design = await getDesignView(id, caller.teamId);
+  // Makers see approved designs only; anything else is "not found" for them, as in the API.
+  if (!design || (caller.role === "maker" && design.status !== "approved")) notFound();
+  const viewer: DesignViewer = { userId: caller.userId, role: caller.role };
+  const [revisions, reviews, audit, others] = await Promise.all([
+    listRevisions(design.id),
+    listReviews(design.id),
+    listTargetAudit(caller.teamId, "design", design.id),
+    listDesigns(caller.teamId, { approvedOnly: caller.role === "maker" }),
+  ]);
+  const { metrics, choice } = design;
+  return (
+    <div className="flex flex-col gap-4">
+      <header className="flex flex-wrap items-start justify-between gap-4">
+        <div className="min-w-0">
+          <p className="text-xs text-ink-muted">
+            <Link href="/designs" className="hover:text-ink">
+              Designs
+            </Link>
+            {design.project && <> / {design.project}</>}
+          </p>
+          <h1 className="flex flex-wrap items-center gap-2 text-lg font-semibold">
+            <span data-testid="design-name">{design.name}</span>
+            <StatusBadge status={design.status} />
+            <span className="text-xs font-normal text-ink-muted num" data-testid="design-revision">
+              revision {design.revision}
+            </span>
+          </h1>
+          <p className="mt-0.5 text-xs text-ink-muted">
+            {statusExplained[design.status]} Revision {design.revision} by {design.authorName}, saved {formatWhen(design.updatedAt)}.
+            {design.approval && (
+              <>
+                {" "}
+                Approved by {design.approval.byName} on {formatWhen(design.approval.at)}.
+              </>
+            )}
+          </p>
+        </div>
+        <dl className="grid grid-cols-3 gap-x-6 gap-y-0.5 text-right text-xs num">
+          <dt className="text-ink-muted">Shunt</dt>
+          <dt className="text-ink-muted">Gain</dt>
+          <dt className="text-ink-muted">Burden</dt>
+          <dd className="text-base font-semibold">{formatSI(choice.shuntOhms, "Ω")}</dd>
+          <dd className="text-base font-semibold">{formatSI(choice.gain, "")}</dd>
+          <dd className="text-base font-semibold">{formatSI(metrics.burdenV, "V")}</dd>
+        </dl>
+      </header>
+      <ComparePicker
+        current={{ id: design.id, name: design.name }}
+        others={others.filter((d) => d.id !== design.id).map((d) => ({ id: d.id, name: d.name, project: d.project, status: d.status }))}
+      />
+      <DesignFigures design={design} />
+      <ReviewPanel
+        design={design}
+        viewer={viewer}
+        revisions={revisions}
+        reviews={reviews}
+        audit={audit.map((e) => ({ ...e, at: e.at.toISOString() }))}
+      />
+      <BuildSheetPanel design={design} viewer={viewer} />
+      <ProfilesPanel design={design} viewer={viewer} />
+    </div>
+  );
+}

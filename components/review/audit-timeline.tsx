@@ -1,0 +1,50 @@
+import { formatWhen } from "@/lib/designs/when";
+
+export type AuditEntry = {
+  id: string;
+  action: string;
+  targetType: string | null;
+  targetId: string | null;
+  details: Record<string, unknown>;
+  at: string;
+  actorName: string | null;
+  actorEmail: string | null;
+};
+
+const words: Record<string, (d: Record<string, unknown>) => string> = {
+  "design.created": (d) => `created the design (revision ${String(d.revision ?? 1)})`,
+  "design.revised": (d) =>
+    `saved revision ${String(d.revision)}${Array.isArray(d.changed) && d.changed.length ? `: ${d.changed.slice(0, 6).join(", ")}${d.changed.length > 6 ? "…" : ""}` : ""}`,
+  "design.submitted": (d) => `submitted revision ${String(d.revision)} for review`,
+  "design.approved": (d) => `approved revision ${String(d.revision)}`,
+  "design.returned": (d) => `returned revision ${String(d.revision)}${d.reason ? `: “${String(d.reason)}”` : ""}`,
+  "design.commented": (d) => `${d.reply ? "replied to a comment" : "commented"} on revision ${String(d.revision)}`,
+  "mail.failed": (d) => `could not mail ${String(d.to)} (${String(d.kind)}): ${String(d.error)}`,
+  "member.role-changed": (d) => `changed a role from ${String(d.from)} to ${String(d.to)}`,
+  "member.removed": (d) => `removed ${String(d.email ?? "a member")} (${String(d.role ?? "")}) from the team`,
+  "invitation.created": (d) => `invited ${String(d.email)} as ${String(d.role)}${d.newTeam ? ` to found “${String(d.newTeam)}”` : ""}`,
+  "invitation.revoked": (d) => `revoked the invitation of ${String(d.email)}`,
+  "invitation.accepted": (d) => `accepted the invitation for ${String(d.email)} and joined as ${String(d.role)}`,
+  "sign-in.failed": (d) => `failed sign-in for ${String(d.email)} (${String(d.reason)})`,
+};
+
+export function describeAudit(e: AuditEntry): string {
+  return words[e.action]?.(e.details) ?? e.action;
+}
+
+/** Who did what, newest first. */
+export function AuditTimeline({ entries, empty = "Nothing recorded yet." }: { entries: AuditEntry[]; empty?: string }) {
+  if (entries.length === 0) return <p className="text-xs text-ink-faint">{empty}</p>;
+  return (
+    <ol className="flex flex-col gap-1 text-sm" data-testid="audit-timeline">
+      {entries.map((e) => (
+        <li key={e.id} className="grid grid-cols-[9.5rem_1fr] gap-3">
+          <span className="text-xs text-ink-muted num">{formatWhen(e.at)}</span>
+          <span>
+            <span className="font-medium">{e.actorName ?? "Someone signed out"}</span> {describeAudit(e)}
+          </span>
+        </li>
+      ))}
+    </ol>
+  );
+}

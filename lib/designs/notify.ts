@@ -1,0 +1,59 @@
+// Who hears about a design's review, and what the mail says. Plain text, numbers via formatSI.
+import "server-only";
+import { listMembers } from "@/db/queries/users";
+import { formatSI, type CandidateDetail, type Choice } from "@/lib/design";
+import { sendMail } from "@/lib/mail/send";
+
+type DesignRef = { id: string; name: string; project: string | null; revision: number; choice: Choice; metrics: CandidateDetail };
+
+const summary = (d: DesignRef) =>
+  [
+    `Design: ${d.name}${d.project ? ` (${d.project})` : ""}, revision ${d.revision}`,
+    `Shunt ${formatSI(d.choice.shuntOhms, "Ω")}, gain ${formatSI(d.choice.gain, "")}, burden ${formatSI(d.metrics.burdenV, "V")} at maximum current,`,
+    `worst-case error ${formatSI(d.metrics.errorAtMinPercent, "")} % at minimum current.`,
+  ].join("\n");
+
+/** Submit: the team's reviewers (the owners when there is no reviewer). */
+export async function mailSubmitted(teamId: string, actor: { userId: string; name: string }, d: DesignRef) {
+  const members = await listMembers(teamId);
+  let to = members.filter((m) => m.role === "reviewer" && m.userId !== actor.userId);
+  if (to.length === 0) to = members.filter((m) => m.role === "owner" && m.userId !== actor.userId);
+  return sendMail({
+    teamId,
+    actorId: actor.userId,
+    to: to.map((m) => m.email),
+    subject: `Review requested: ${d.name} (revision ${d.revision})`,
+    text: `${actor.name} submitted a design for review.\n\n${summary(d)}\n\nOpen it to approve it, return it with a reason, or comment:`,
+    path: `/designs/${d.id}`,
+    about: { type: "design", id: d.id, kind: "submitted" },
+  });
+}
+
+const verdictWords = { approve: "approved", return: "returned", comment: "commented on" } as const;
+
+/** A verdict or comment: the revision's author and, for a reply, the author of the comment replied to. */
+export async function mailReviewed(
+  teamId: string,
+  actor: { userId: string; name: string },
+  d: DesignRef,
+  review: { verdict: "approve" | "return" | "comment"; body: string; revision: number },
+  recipientIds: string[],
+) {
+  const members = await listMembers(teamId);
+  const to = members.filter((m) => recipientIds.includes(m.userId) && m.userId !== actor.userId);
+  const what = verdictWords[review.verdict];
+  const subject =
+    review.verdict === "comment"
+      ? `Comment on ${d.name} (revision ${review.revision})`
+      : `${d.name} ${what} (revision ${review.revision})`;
+  const reason = review.body.trim() ? `\n\n${review.verdict === "return" ? "Reason" : review.verdict === "approve" ? "Note" : "Comment"}:\n${review.body.trim()}` : "";
+  return sendMail({
+    teamId,
+    actorId: actor.userId,
+    to: to.map((m) => m.email),
+    subject,
+    text: `${actor.name} ${what} revision ${review.revision} of your design.${reason}\n\n${summary(d)}\n\nOpen the design:`,
+    path: `/designs/${d.id}`,
+    about: { type: "design", id: d.id, kind: review.verdict },
+  });
+}
