@@ -36,25 +36,32 @@ export class RankExpressionError extends Error {
   }
 }
 
-const math = create(all as NonNullable<typeof all>);
-const limitedParse = math.parse;
-const disabled = (name: string) => () => {
-  throw new Error(`Function ${name} is disabled`);
-};
-math.import(
-  {
-    import: disabled("import"),
-    createUnit: disabled("createUnit"),
-    evaluate: disabled("evaluate"),
-    parse: disabled("parse"),
-    simplify: disabled("simplify"),
-    derivative: disabled("derivative"),
-    compile: disabled("compile"),
-    resolve: disabled("resolve"),
-    reviver: disabled("reviver"),
-  },
-  { override: true },
-);
+/** The limited instance, made on first use (it costs a moment at start-up). */
+let limitedParse: ((expr: string) => MathNode) | null = null;
+function parser(): (expr: string) => MathNode {
+  if (limitedParse) return limitedParse;
+  const math = create(all as NonNullable<typeof all>);
+  const parse = math.parse;
+  const disabled = (name: string) => () => {
+    throw new Error(`Function ${name} is disabled`);
+  };
+  math.import(
+    {
+      import: disabled("import"),
+      createUnit: disabled("createUnit"),
+      evaluate: disabled("evaluate"),
+      parse: disabled("parse"),
+      simplify: disabled("simplify"),
+      derivative: disabled("derivative"),
+      compile: disabled("compile"),
+      resolve: disabled("resolve"),
+      reviver: disabled("reviver"),
+    },
+    { override: true },
+  );
+  limitedParse = (expr: string) => parse(expr);
+  return limitedParse;
+}
 
 const fieldSet = new Set<string>(rankFields);
 
@@ -106,7 +113,7 @@ export function compileRankExpression(source: string): CompiledRank {
   if (source.length > 500) throw new RankExpressionError("Ranking expression is longer than 500 characters");
   let node: MathNode;
   try {
-    node = limitedParse(source);
+    node = parser()(source);
   } catch (e) {
     throw new RankExpressionError(`Ranking expression: ${e instanceof Error ? e.message : String(e)}`);
   }

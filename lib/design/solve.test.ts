@@ -217,3 +217,33 @@ describe("decade scale factors for bench-meter readouts", () => {
     for (const c of s.decadeScales) expect(c.feasible).toBe(true);
   });
 });
+
+describe("solve: the rejection tally matches pair-by-pair evaluation", () => {
+  it("counts each pair once, under the first constraint evaluateCandidate reports", () => {
+    fc.assert(
+      fc.property(requirementArb, (r0) => {
+        const r = { ...r0, shunt: { ...r0.shunt, series: "E6" as const, min: 0.01, max: 10 } };
+        const tally: Record<string, number> = Object.fromEntries(rejectReasons.map((k) => [k, 0]));
+        let feasible = 0;
+        for (const R of seriesValues(r.shunt.series, r.shunt.min, r.shunt.max))
+          for (const G of r.amplifier.gains) {
+            const c = evaluateCandidate(r, { shuntOhms: R, gain: G });
+            if (c.feasible) feasible++;
+            else tally[c.reasons[0] as string] = (tally[c.reasons[0] as string] ?? 0) + 1;
+          }
+        const s = solve(r);
+        expect(s.feasibleCount).toBe(feasible);
+        expect(s.rejected).toEqual(tally);
+      }),
+      { numRuns: 15 },
+    );
+  });
+
+  it("isInSweep accepts swept pairs only", () => {
+    const r = req({ current: { min: "2 mA", max: "180 mA" }, supply: { voltage: "3 V" }, shunt: { series: "E24", min: "10 mohm", max: "1 ohm" }, amplifier: { gains: [20, 50] } });
+    expect(isInSweep(r, { shuntOhms: 0.47, gain: 50 })).toBe(true);
+    expect(isInSweep(r, { shuntOhms: 0.475, gain: 50 })).toBe(false); // an E96 value, not E24
+    expect(isInSweep(r, { shuntOhms: 4.7, gain: 50 })).toBe(false); // outside the bounds
+    expect(isInSweep(r, { shuntOhms: 0.47, gain: 25 })).toBe(false); // not a swept gain
+  });
+});
