@@ -165,3 +165,8 @@ export function worstErrorA(m: Model, R: number, G: number, theta: number, I: nu
   const gainPart = I * (m.gainConst + m.alphaR * I * I * R * theta);
   return gainPart + offsetTermA(m, R) + m.lsbV / (2 * R * G) + m.crest * noiseRmsA(m, R, G);
 }
+
+/** The default ranking score: dimensionless, each objective measured against what the requirement allows. */
+export function defaultScore(m: Model, burdenV: number, lsbA: number, errMinRatio: number): number {
+  return errMinRatio / m.accRatio + burdenV / m.dropMax + (lsbA * m.countsAtMin) / m.iMin;
+}

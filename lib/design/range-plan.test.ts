@@ -50,6 +50,12 @@ describe("range plans for spans too wide for one range", () => {
     expect(plan.adds).toMatch(/settle/);
   });
 
+  it("splits the demo logger's span into ranges of at least a decade each", () => {
+    const plan = solve(cases[0][1]).rangePlan;
+    expect(plan?.ranges.length).toBe(3);
+    for (const x of plan?.ranges ?? []) expect(x.maxA / x.minA).toBeGreaterThan(10);
+  });
+
   it("proposes no plan when one range is enough", () => {
     expect(solve(req({ current: { min: "10 mA", max: "180 mA" }, supply: { voltage: "3 V" } })).rangePlan).toBeNull();
   });

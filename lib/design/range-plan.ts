@@ -1,9 +1,9 @@
 // A multi-range plan for spans too wide for one shunt and gain: two or three ranges, each
 // feasible on its own sub-span, overlapping so that switching has hysteresis.
-import { signalBandwidth, type Model } from "./model";
+import { defaultScore, signalBandwidth, type Model } from "./model";
 import { pairMask } from "./pair";
 import type { Requirement } from "./requirement";
-import type { SweepArrays } from "./sweep";
+import { sweepGrid, type SweepArrays } from "./sweep";
 import { formatSI } from "./units";
 
 /** Switch down once the current falls below this share of the lower range's top. */
@@ -33,6 +33,55 @@ export type RangePlan = {
 };
 
 type Pick = { p: number; bottom: number };
+type Span = { p: number; minA: number; maxA: number };
+
+/**
+ * The model for one range [lo, hi]: drop, output and rating at its own top, counts and dead
+ * zone at its own bottom, accuracy only on the part of the accuracy band inside it.
+ */
+function subModel(req: Requirement, m: Model, lo: number, hi: number): Model {
+  const bLo = Math.max(req.accuracy.bandMin, lo);
+  const bHi = Math.min(req.accuracy.bandMax, hi);
+  // Outside the accuracy band nothing is asked of accuracy.
+  const band = bLo <= bHi ? { bandLo: bLo, bandHi: bHi } : { bandLo: hi, bandHi: hi, accRatio: Infinity };
+  return { ...m, iMin: lo, iMax: hi, ...band };
+}
+
+/** The best-scoring feasible pair for the range [lo, hi], through the sweep's own loop. */
+function bestPairFor(req: Requirement, m: Model, sw: SweepArrays, lo: number, hi: number): number | null {
+  const sub = subModel(req, m, lo, hi);
+  const s = sweepGrid(sub, sw.values, sw.gains);
+  if (s.feasibleCount === 0) return null;
+  const nG = sw.gains.length;
+  let best = -1;
+  let bestScore = Infinity;
+  for (let p = 0; p < s.mask.length; p++) {
+    if (s.mask[p] !== 0) continue;
+    const i = Math.floor(p / nG);
+    const R = sw.values[i] as number;
+    const score = defaultScore(sub, hi * R, sub.lsbV / (R * (sw.gains[p - i * nG] as number)), s.errMin[p] as number);
+    if (score < bestScore) {
+      bestScore = score;
+      best = p;
+    }
+  }
+  return best >= 0 ? best : null;
+}
+
+/** n ranges splitting the span evenly in ratio, each overlapping the one below; null if one has no pair. */
+function balancedPlan(req: Requirement, m: Model, sw: SweepArrays, n: number): Span[] | null {
+  const ratio = m.iMax / m.iMin;
+  const spans: Span[] = [];
+  let bottom = m.iMin;
+  for (let k = 0; k < n; k++) {
+    const top = k === n - 1 ? m.iMax : m.iMin * ratio ** ((k + 1) / n);
+    const p = bestPairFor(req, m, sw, bottom, top);
+    if (p === null) return null;
+    spans.push({ p, minA: bottom, maxA: top });
+    bottom = SWITCH_DOWN_FRACTION * top;
+  }
+  return spans;
+}
 
 /** The pair that reaches lowest while staying feasible on [bottom, top]. */
 function bestRangeBelow(req: Requirement, m: Model, sw: SweepArrays, top: number): Pick | null {
@@ -53,12 +102,7 @@ function bestRangeBelow(req: Requirement, m: Model, sw: SweepArrays, top: number
     const i = Math.floor(pick.p / nG);
     const R = sw.values[i] as number;
     const G = sw.gains[pick.p - i * nG] as number;
-    const lo = Math.max(req.accuracy.bandMin, pick.bottom);
-    const hi = Math.min(req.accuracy.bandMax, top);
-    // Outside the accuracy band nothing is asked of accuracy: a zero-width band at the top passes.
-    const band = lo <= hi ? { bandLo: lo, bandHi: hi } : { bandLo: top, bandHi: top, accRatio: Infinity };
-    const sub: Model = { ...m, iMax: top, iMin: pick.bottom * (1 + 1e-12), ...band };
-    if (pairMask(sub, R, G).mask === 0) return pick;
+    if (pairMask(subModel(req, m, pick.bottom * (1 + 1e-12), top), R, G).mask === 0) return pick;
   }
   return null;
 }
@@ -68,35 +112,45 @@ function settlingTime(req: Requirement, m: Model, G: number): number {
   return Math.log(2 * steps) / (2 * Math.PI * signalBandwidth(m, G));
 }
 
-export function planRanges(req: Requirement, m: Model, sw: SweepArrays): RangePlan | null {
-  const nG = sw.gains.length;
-  const picked: { pick: Pick; top: number }[] = [];
+/** Greedy from the top: each range reaches as low as any pair allows. Fewest ranges, uneven spans. */
+function greedyPlan(req: Requirement, m: Model, sw: SweepArrays): Span[] | null {
+  const spans: Span[] = [];
   let top = m.iMax;
   for (let k = 0; k < MAX_RANGES; k++) {
     const pick = bestRangeBelow(req, m, sw, top);
     if (!pick) return null;
-    picked.push({ pick, top });
-    if (pick.bottom <= m.iMin * (1 + 1e-9)) break;
-    if (k === MAX_RANGES - 1) return null;
+    const reachesBottom = pick.bottom <= m.iMin * (1 + 1e-9);
+    spans.unshift({ p: pick.p, minA: reachesBottom ? m.iMin : pick.bottom, maxA: top });
+    if (reachesBottom) return spans.length >= 2 ? spans : null;
     top = pick.bottom / SWITCH_DOWN_FRACTION;
   }
-  if (picked.length < 2) return null;
-  const ranges: PlannedRange[] = picked
-    .map(({ pick, top: t }) => {
-      const i = Math.floor(pick.p / nG);
-      const R = sw.values[i] as number;
-      const G = sw.gains[pick.p - i * nG] as number;
-      return {
-        minA: pick.bottom <= m.iMin * (1 + 1e-9) ? m.iMin : pick.bottom,
-        maxA: t,
-        shuntOhms: R,
-        gain: G,
-        burdenAtTopV: t * R,
-        countsAtBottom: (pick.bottom * R * G) / m.lsbV,
-        settlingS: settlingTime(req, m, G),
-      };
-    })
-    .reverse();
+  return null;
+}
+
+/**
+ * Two or three ranges covering the span, ascending: an even split in ratio when one works
+ * (two ranges first), else the greedy plan; null when three ranges cannot cover it.
+ */
+export function planRanges(req: Requirement, m: Model, sw: SweepArrays): RangePlan | null {
+  let spans: Span[] | null = null;
+  for (let n = 2; n <= MAX_RANGES && !spans; n++) spans = balancedPlan(req, m, sw, n);
+  spans ??= greedyPlan(req, m, sw);
+  if (!spans) return null;
+  const nG = sw.gains.length;
+  const ranges: PlannedRange[] = spans.map(({ p, minA, maxA }) => {
+    const i = Math.floor(p / nG);
+    const R = sw.values[i] as number;
+    const G = sw.gains[p - i * nG] as number;
+    return {
+      minA,
+      maxA,
+      shuntOhms: R,
+      gain: G,
+      burdenAtTopV: maxA * R,
+      countsAtBottom: (minA * R * G) / m.lsbV,
+      settlingS: settlingTime(req, m, G),
+    };
+  });
   const switchPoints = ranges.slice(0, -1).map((r) => ({ upA: r.maxA, downA: SWITCH_DOWN_FRACTION * r.maxA }));
   const pointsText = switchPoints
     .map((s) => `up above ${formatSI(s.upA, "A")}, back down below ${formatSI(s.downA, "A")}`)

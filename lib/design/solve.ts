@@ -2,7 +2,7 @@
 // single pair can cover the span.
 import { candidateFigures } from "./candidate";
 import { decadePairs, decadeScaleLabel } from "./decade";
-import { buildModel, signalBandwidth, type Model } from "./model";
+import { buildModel, defaultScore, signalBandwidth, type Model } from "./model";
 import { paretoFrontSorted } from "./pareto";
 import { rejectReasons, type RejectReason } from "./pair";
 import { compileRankExpression, type CompiledRank, type RankScope } from "./rank";
@@ -28,11 +28,6 @@ export type SolveOptions = { rankExpression?: string };
 
 export const defaultRankingText =
   "Sum of each objective as a share of its limit: errorAtMinPercent / accuracy target + burdenV / allowed drop + lsbA / (Imin / counts at Imin); lower first.";
-
-/** The default ranking score: dimensionless, each objective measured against what the requirement allows. */
-function defaultScore(m: Model, burdenV: number, lsbA: number, errMinRatio: number): number {
-  return errMinRatio / m.accRatio + burdenV / m.dropMax + (lsbA * m.countsAtMin) / m.iMin;
-}
 
 function popcount(x: number): number {
   let c = 0;
