@@ -1,0 +1,44 @@
+// POST /api/netlist: a SPICE netlist (text/plain) of a requirement and a chosen pair;
+// `?offset=0` leaves the amplifier's offset out.
+import { z } from "zod";
+import { buildNetlist, type Choice, type Requirement } from "@/lib/design";
+import { apiRoute, parseWith } from "@/lib/auth/gate";
+import { HttpError, type FieldErrors } from "@/lib/http";
+import { objectBody, requirementOr422 } from "@/lib/wizard/engine-input";
+
+const positiveFinite = (label: string) =>
+  z
+    .number({ error: `${label}: expected a number in SI units` })
+    .refine((v) => Number.isFinite(v) && v > 0, { error: `${label} must be a finite number above zero` });
+
+const candidateSchema = z.object(
+  { shuntOhms: positiveFinite("Shunt (ohms)"), gain: positiveFinite("Gain") },
+  { error: "Candidate: expected { shuntOhms, gain }" },
+);
+const querySchema = z.object({
+  offset: z.enum(["0", "1"], { error: 'offset: expected "0" (leave the offset out) or "1"' }).optional(),
+});
+
+/** Runs a parser that throws a 422, keeping its field errors so both halves of the body are reported. */
+function collect<T>(errors: FieldErrors, parse: () => T): T | null {
+  try {
+    return parse();
+  } catch (e) {
+    if (!(e instanceof HttpError) || e.status !== 422) throw e;
+    Object.assign(errors, e.fieldErrors);
+    return null;
+  }
+}
+
+export const POST = apiRoute({ body: z.unknown(), query: querySchema, doing: "write netlists" }, async ({ body, query }) => {
+  const raw = objectBody(body);
+  const errors: FieldErrors = {};
+  const requirement: Requirement | null = collect(errors, () => requirementOr422(raw.requirement ?? {}, "requirement"));
+  const candidate: Choice | null = collect(errors, () => parseWith(candidateSchema, raw.candidate, "candidate"));
+  if (!requirement || !candidate) {
+    const [path, messages] = Object.entries(errors)[0] ?? ["(body)", ["is invalid"]];
+    throw new HttpError(422, `Invalid input at ${path}: ${messages[0]}`, errors);
+  }
+  const text = buildNetlist(requirement, candidate, { includeOffset: query.offset !== "0" });
+  return new Response(text, { headers: { "content-type": "text/plain; charset=utf-8" } });
+});

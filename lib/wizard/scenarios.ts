@@ -1,0 +1,35 @@
+// Start points for the wizard, from the invented demo scenario (DESIGN.md §6).
+import { defaultRequirementInput, type RequirementInput } from "@/lib/design";
+
+export type Scenario = { key: string; title: string; summary: string; input: RequirementInput };
+
+/**
+ * The soil-moisture logger read by a 24-bit converter through an amplifier on a split supply
+ * (output reaches 0 V): one range covers 3 µA to 180 mA.
+ */
+export const loggerOneRange: RequirementInput = {
+  current: { min: "3 uA", max: "180 mA" },
+  supply: { voltage: "3.0 V", side: "low" },
+  drop: { max: "60 mV" },
+  load: { model: "constant-current" },
+  readout: { kind: "adc", bits: 24, fullScale: "2.5 V" },
+  resolution: { countsAtMin: 10 },
+  accuracy: { percent: 2 },
+  temperature: { min: "0 degC", max: "70 degC" },
+  amplifier: { swingLow: "0 V" },
+};
+
+export const scenarios: Scenario[] = [
+  {
+    key: "logger-24",
+    title: "Soil-moisture logger, 24-bit converter",
+    summary: "3 µA asleep to 180 mA on radio bursts from a 3.0 V cell; one range works.",
+    input: loggerOneRange,
+  },
+  {
+    key: "logger-12",
+    title: "Soil-moisture logger, 12-bit converter",
+    summary: "The same span through a 12-bit converter: no single range works, so the solver plans ranges.",
+    input: defaultRequirementInput,
+  },
+];
