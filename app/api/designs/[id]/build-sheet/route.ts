@@ -1,0 +1,20 @@
+// GET /api/designs/[id]/build-sheet: the design's build sheet as a PDF download. Any team member
+// may preview a draft's sheet (it says "not approved" on every page); makers see approved
+// designs only, so for them an unapproved design is not found (the design service's rule).
+import { apiRoute } from "@/lib/auth/gate";
+import { attachment, exportFileName } from "@/lib/build-sheet/exports";
+import { renderBuildSheet } from "@/lib/build-sheet/render";
+import { designViewFor } from "@/lib/designs/access";
+
+export const GET = apiRoute({ doing: "download build sheets" }, async ({ caller, params }) => {
+  const view = await designViewFor(caller, params.id ?? "");
+  const pdf = await renderBuildSheet(view, { team: caller.teamName, generatedAt: new Date() });
+  return new Response(new Uint8Array(pdf), {
+    headers: {
+      "content-type": "application/pdf",
+      "content-disposition": attachment(exportFileName(view, "pdf")),
+      "content-length": String(pdf.length),
+      "cache-control": "private, no-store",
+    },
+  });
+});

@@ -1,0 +1,79 @@
+// The plain-file exports of a saved design: the parts list as CSV, the whole design as JSON
+// (our own versioned format, which imports back as a new design), and their file names.
+import { z } from "zod";
+import type { DesignView } from "@/lib/design-view";
+import { choiceSchema } from "@/lib/designs/service";
+import { designSlug } from "./slug";
+import { partsList, type Part } from "./parts";
+
+export const EXPORT_FORMAT = "sensewright-design";
+export const EXPORT_VERSION = 1;
+
+/** "<design-slug>-rev<N>.<ext>" */
+export function exportFileName(view: Pick<DesignView, "name" | "revision">, ext: string): string {
+  return `${designSlug(view.name)}-rev${view.revision}.${ext}`;
+}
+
+export function attachment(fileName: string): string {
+  return `attachment; filename="${fileName}"`;
+}
+
+export const csvColumns = ["designator", "part", "value", "tolerance", "tempco", "rating", "notes", "value_si", "unit"] as const;
+
+function csvField(v: string): string {
+  return /[",\r\n]/.test(v) ? `"${v.replace(/"/g, '""')}"` : v;
+}
+
+function csvCell(p: Part, col: (typeof csvColumns)[number]): string {
+  if (col === "value_si") return p.valueSI === null ? "" : String(p.valueSI);
+  if (col === "unit") return p.unit ?? "";
+  return p[col];
+}
+
+/** RFC 4180: a header row, CRLF line ends, fields quoted when they hold a comma, quote or line break. */
+export function partsCsv(view: Pick<DesignView, "requirement" | "choice">): string {
+  const rows = partsList(view.requirement, view.choice);
+  const lines = [csvColumns.join(","), ...rows.map((p) => csvColumns.map((c) => csvField(csvCell(p, c))).join(","))];
+  return lines.join("\r\n") + "\r\n";
+}
+
+export type DesignExport = {
+  format: typeof EXPORT_FORMAT;
+  version: typeof EXPORT_VERSION;
+  name: string;
+  project: string | null;
+  requirement: DesignView["requirement"];
+  choice: DesignView["choice"];
+  /** Informational: where and when it came from, and the figures it had. Import recomputes them. */
+  exportedAt: string;
+  source: { designId: string; revision: number; status: DesignView["status"] };
+  metrics: DesignView["metrics"];
+};
+
+export function designExport(view: DesignView, exportedAt: Date): DesignExport {
+  return {
+    format: EXPORT_FORMAT,
+    version: EXPORT_VERSION,
+    name: view.name,
+    project: view.project,
+    requirement: view.requirement,
+    choice: view.choice,
+    exportedAt: exportedAt.toISOString(),
+    source: { designId: view.id, revision: view.revision, status: view.status },
+    metrics: view.metrics,
+  };
+}
+
+/** What an import accepts: the export's own fields; the informational ones are ignored. */
+export const designImportSchema = z.object(
+  {
+    format: z.literal(EXPORT_FORMAT, { error: `format: expected "${EXPORT_FORMAT}" (a file exported from a design)` }),
+    version: z.literal(EXPORT_VERSION, { error: `version: this build reads version ${EXPORT_VERSION} files` }),
+    name: z.string({ error: "name: expected text" }).trim().min(1, { error: "name: give the design a name" }).max(200, { error: "name: at most 200 characters" }),
+    project: z.string({ error: "project: expected text" }).trim().max(200, { error: "project: at most 200 characters" }).nullish(),
+    requirement: z.record(z.string(), z.unknown(), { error: "requirement: expected an object" }),
+    choice: choiceSchema,
+  },
+  { error: "Expected a design file: a JSON object" },
+);
+export type DesignImport = z.infer<typeof designImportSchema>;

@@ -1,0 +1,60 @@
+// Designs for tests and the benchmark, built from the engine: the demo team's soil-moisture
+// logger (its radio-burst range, low side) and its pump controller (high side, 24 V, 6 A).
+import { evaluateCandidate, parseRequirement, solve, type Choice, type Requirement, type RequirementInput } from "@/lib/design";
+import type { DesignView } from "@/lib/design-view";
+import type { DesignStatus } from "@/db/schema";
+
+export const loggerRequirement: RequirementInput = {
+  current: { min: "1 mA", max: "180 mA", typical: "45 mA" },
+  supply: { voltage: "3.0 V", side: "low" },
+  drop: { max: "60 mV" },
+  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+  resolution: { countsAtMin: 10 },
+};
+
+export const pumpRequirement: RequirementInput = {
+  current: { min: "300 mA", max: "6 A", typical: "2.5 A" },
+  supply: { voltage: "24 V", side: "high" },
+  drop: { max: "100 mV" },
+  readout: { kind: "adc", bits: 12, fullScale: "3.3 V" },
+  resolution: { countsAtMin: 10 },
+  accuracy: { percent: 3 },
+};
+
+export function parsed(input: RequirementInput): Requirement {
+  const r = parseRequirement(input);
+  if (!r.ok) throw new Error(r.message);
+  return r.requirement;
+}
+
+/** The solver's first feasible candidate (the front comes first). */
+export function firstFeasible(req: Requirement): Choice {
+  const c = solve(req).candidates.find((x) => x.feasible);
+  if (!c) throw new Error("no feasible candidate for the fixture requirement");
+  return { shuntOhms: c.shuntOhms, gain: c.gain };
+}
+
+export function fixtureView(
+  input: RequirementInput,
+  opts: { name?: string; status?: DesignStatus; revision?: number; choice?: Choice; project?: string | null } = {},
+): DesignView {
+  const requirement = parsed(input);
+  const choice = opts.choice ?? firstFeasible(requirement);
+  const status = opts.status ?? "draft";
+  const revision = opts.revision ?? 2;
+  return {
+    id: "00000000-0000-4000-8000-000000000001",
+    name: opts.name ?? "Soil logger, radio range",
+    project: opts.project === undefined ? "Soil-moisture logger" : opts.project,
+    status,
+    revision,
+    requirement,
+    choice,
+    metrics: evaluateCandidate(requirement, choice),
+    authorId: "00000000-0000-4000-8000-000000000002",
+    authorName: "Demo Designer",
+    updatedAt: "2026-11-30T10:00:00.000Z",
+    approval: status === "approved" ? { byName: "Demo Reviewer", at: "2026-11-30T15:42:00.000Z", revision } : null,
+    revisions: [{ revision, authorName: "Demo Designer", createdAt: "2026-11-30T10:00:00.000Z" }],
+  };
+}

@@ -1,0 +1,195 @@
+// Everything the build sheet says, as text rows: the engine computes, this file only words and
+// formats. Shared by the PDF, the design page's panel and the tests (which compare against it).
+import {
+  benchCheck,
+  errorAt,
+  errorCurve,
+  evaluateCandidate,
+  type BenchCheckRow,
+  type CandidateDetail,
+  type Choice,
+  type ErrorCurvePoint,
+  type Requirement,
+} from "@/lib/design";
+import type { DesignView } from "@/lib/design-view";
+import * as f from "./format";
+import { kelvinAdvice, partsList, readoutText, type Part } from "./parts";
+
+export type Row = { label: string; value: string };
+export type BenchRow = BenchCheckRow & { current: string; expected: string; band: string };
+export type BudgetRow = { label: string; atMin: string; atMinPercent: string; atMax: string; atMaxPercent: string };
+
+export type SheetData = {
+  requirement: Row[];
+  parts: Part[];
+  performance: Row[];
+  budget: BudgetRow[];
+  budgetTotals: { atMinPercent: string; atMaxPercent: string; rssMinPercent: string; rssMaxPercent: string };
+  curve: ErrorCurvePoint[];
+  bench: BenchRow[];
+  benchHowTo: string[];
+  layout: string[];
+  cautions: string[];
+  metrics: CandidateDetail;
+};
+
+/** Above this common-mode voltage the isolation caution leads (a DC touch-safety limit often quoted as 60 V; common practice, from memory). */
+export const HAZARDOUS_VOLTAGE_V = 60;
+/** A shunt surface hotter than this can burn on touch (common practice, no source). */
+export const HOT_SURFACE_C = 60;
+
+export function requirementRows(req: Requirement): Row[] {
+  const c = req.current;
+  const rows: Row[] = [
+    { label: "Current span", value: `${f.amps(c.min)} to ${f.amps(c.max)}` },
+  ];
+  if (c.typical !== undefined) rows.push({ label: "Typical current", value: f.amps(c.typical) });
+  rows.push(
+    { label: "Supply", value: `${f.volts(req.supply.voltage)}, ${req.supply.side === "high" ? "high-side" : "low-side"} shunt` },
+    { label: "Allowed drop at maximum current", value: f.volts(req.drop.max) },
+  );
+  if (req.drop.loadMin !== undefined) rows.push({ label: "Minimum load voltage", value: f.volts(req.drop.loadMin) });
+  rows.push(
+    { label: "Load", value: req.load.model.replace("-", " ") },
+    { label: "Readout", value: readoutText(req) },
+    { label: "Counts at minimum current", value: `at least ${formatCount(req.resolution.countsAtMin)}` },
+    { label: "Accuracy target", value: `${f.percent(req.accuracy.percent)} of reading from ${f.amps(req.accuracy.bandMin)} to ${f.amps(req.accuracy.bandMax)}` },
+    { label: "Ambient temperature", value: `${f.celsius(req.temperature.min)} to ${f.celsius(req.temperature.max)}` },
+  );
+  if (req.bandwidth.min > 0) rows.push({ label: "Bandwidth", value: `at least ${f.hertz(req.bandwidth.min)}` });
+  rows.push({
+    label: "Shunt options",
+    value: `${req.shunt.series}, ${f.ohms(req.shunt.min)} to ${f.ohms(req.shunt.max)}, ±${f.fraction(req.shunt.tolerance)}, ${f.ppmPerK(req.shunt.tempco)}, derating ${f.fraction(req.shunt.derating)}`,
+  });
+  const a = req.amplifier;
+  const gains = a.gainSet
+    ? `set by a resistor pair (${a.gainSet.series}), ${f.gain(a.gainSet.min)} to ${f.gain(a.gainSet.max)}`
+    : a.gains.map((g) => f.gain(g)).join(", ");
+  rows.push({ label: "Amplifier gains offered", value: gains });
+  return rows;
+}
+
+function formatCount(n: number): string {
+  return Number.isInteger(n) ? String(n) : String(Number(n.toPrecision(3)));
+}
+
+export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
+  const rows: Row[] = [
+    { label: "Drop at maximum current", value: `${f.volts(m.burdenV)} (${f.fraction(m.burdenV / req.supply.voltage)} of the supply)` },
+    { label: "Load voltage at maximum current", value: f.volts(m.loadVoltageV) },
+    { label: "Scale factor", value: `${f.transimpedance(m.transimpedanceVPerA)}: ${f.decadeScale(m.transimpedanceVPerA)}` },
+    { label: "Output at maximum current", value: `${f.volts(m.outputAtMaxV)} (headroom ${f.volts(m.headroomV)})` },
+    { label: "Readout step (LSB) in current", value: f.amps(m.lsbA) },
+    { label: "Counts at minimum current", value: formatCount(m.countsAtMin) },
+    { label: "Error at minimum current (worst case)", value: `${f.percent(m.errorAtMinPercent)} of reading (RSS ${f.percent(m.rssAtMinPercent)})` },
+  ];
+  if (m.errorAtTypicalPercent !== null && req.current.typical !== undefined) {
+    rows.push({ label: `Error at the typical current (${f.amps(req.current.typical)})`, value: `${f.percent(m.errorAtTypicalPercent)} of reading` });
+  }
+  rows.push(
+    { label: "Error at maximum current (worst case)", value: `${f.percent(m.errorAtMaxPercent)} of reading` },
+    {
+      label: `Lowest current within ${f.percent(req.accuracy.percent)}`,
+      value: m.lowestAccurateCurrentA === null ? "none in the span" : f.amps(m.lowestAccurateCurrentA),
+    },
+    { label: "Bandwidth (−3 dB)", value: f.hertz(m.bandwidthHz) },
+    { label: "Dissipation at maximum current", value: `${f.watts(m.dissipationW)} in a ${f.watts(m.ratingW)} part` },
+    { label: "Self-heating at maximum current", value: `${f.kelvin(m.selfHeatingK)} (shunt up to about ${f.celsius(req.temperature.max + m.selfHeatingK)})` },
+  );
+  if (m.deadZoneA > 0) rows.push({ label: "Reads as zero below", value: `${f.amps(m.deadZoneA)} (output floor ${f.volts(req.amplifier.swingLow)})` });
+  return rows;
+}
+
+export function budgetRows(req: Requirement, choice: Choice): { rows: BudgetRow[]; totals: SheetData["budgetTotals"] } {
+  const lo = errorAt(req, choice, req.current.min);
+  const hi = errorAt(req, choice, req.current.max);
+  const rows = lo.terms.map((t, i) => {
+    const h = hi.terms[i]!;
+    return {
+      label: t.label,
+      atMin: f.amps(t.errorA),
+      atMinPercent: f.percent((100 * t.errorA) / req.current.min),
+      atMax: f.amps(h.errorA),
+      atMaxPercent: f.percent((100 * h.errorA) / req.current.max),
+    };
+  });
+  return {
+    rows,
+    totals: {
+      atMinPercent: f.percent(lo.worstPercent),
+      atMaxPercent: f.percent(hi.worstPercent),
+      rssMinPercent: f.percent(lo.rssPercent),
+      rssMaxPercent: f.percent(hi.rssPercent),
+    },
+  };
+}
+
+export function benchRows(req: Requirement, choice: Choice): BenchRow[] {
+  return benchCheck(req, choice).map((r) => ({
+    ...r,
+    current: f.amps(r.currentA),
+    expected: f.volts(r.expectedV),
+    band: `${f.volts(r.minV)} to ${f.volts(r.maxV)}`,
+  }));
+}
+
+export function benchHowTo(req: Requirement): string[] {
+  const high = req.supply.side === "high";
+  return [
+    "Power U1 from its own supply and leave the circuit under test disconnected: feed the shunt from a test source instead of the real load.",
+    "Apply each test current with a calibrated current source, or with a known resistor from a stable supply (current = supply voltage / resistance), and measure the current with a reference meter in series.",
+    `Read the output between OUT and GND on J1 with a reference voltmeter${high ? "; on the high side, bring the shunt up to the working supply voltage so the amplifier sees its real common-mode voltage" : ""}.`,
+    "Each reading should fall inside its band; the band is the worst-case error budget at that current. A reading outside it points at the shunt value, its sense connections or the amplifier gain.",
+    "Start at the lowest current and work up; at full scale, let the shunt settle thermally for a minute before reading.",
+  ];
+}
+
+export function layoutNotes(req: Requirement, choice: Choice): string[] {
+  const k = kelvinAdvice(choice.shuntOhms);
+  return [
+    k === "part"
+      ? `Kelvin connections: R1 is a 4-terminal part; route the sense traces from its sense terminals only. At ${f.ohms(choice.shuntOhms)}, a few milliohms of copper or solder in the sense path would be a large error.`
+      : "Kelvin connections: take the sense traces from the inner edges of R1's pads, never from the wide current traces; the current enters and leaves by the outer edges.",
+    "Run the two sense traces as a short, tightly paired (or twisted) pair straight to U1's inputs, away from switching nodes and the load's current loop.",
+    "Place U1 close to R1 so the sense pair stays short; keep the gain-setting parts (if any) and C1 right at U1.",
+    "Keep copper and solder-joint resistance out of the measurement: no vias or connectors between R1's sense points and U1, and the current path's copper wide enough for the maximum current.",
+    `Heat: R1 dissipates ${f.watts(evaluateCandidate(req, choice).dissipationW)} at full scale; give its pads copper area to spread the heat, and keep U1 and any other precision parts away from it.`,
+    req.supply.side === "high"
+      ? "High side: both sense lines carry the supply voltage; keep clearance to low-voltage circuitry as the working voltage requires."
+      : "Low side: R1 lifts the load's return above the system ground by the drop; keep other grounds from joining between R1 and the load.",
+  ];
+}
+
+export function cautions(req: Requirement, m: CandidateDetail): string[] {
+  const vCm = req.supply.side === "high" ? req.supply.voltage : 0;
+  const hot = req.temperature.max + m.selfHeatingK;
+  const out = [
+    `Hot parts: at full current R1 runs about ${f.kelvin(m.selfHeatingK)} above ambient (up to about ${f.celsius(hot)})${hot >= HOT_SURFACE_C ? ", hot enough to burn: do not touch it while or just after it carries current" : ""}.`,
+    "Fuse the measured path: put a fuse or current limit rated for the circuit ahead of the shunt, so a fault cannot turn the shunt or its traces into the fuse.",
+    vCm >= HAZARDOUS_VOLTAGE_V
+      ? `High common-mode voltage: the sense lines sit at ${f.volts(vCm)}. Use an isolated amplifier or one rated for that common-mode voltage, and bench instruments rated for the measurement category of the circuit.`
+      : "High common-mode voltage or mains: if this front end is ever used on mains-connected or high-voltage circuits, it needs an isolated amplifier, isolated readout and instruments rated for the circuit's measurement category; this design does not provide them.",
+    "Never open a live inductive circuit (motors, coils, long supply leads): the current keeps flowing and the voltage spike can arc or destroy the amplifier. Switch off before connecting or disconnecting the shunt.",
+    "Follow local electrical codes and your organisation's safety rules; work on mains or hazardous voltages belongs to suitably qualified, licensed people.",
+  ];
+  return out;
+}
+
+export function sheetData(view: Pick<DesignView, "requirement" | "choice">): SheetData {
+  const { requirement: req, choice } = view;
+  const m = evaluateCandidate(req, choice);
+  const budget = budgetRows(req, choice);
+  return {
+    requirement: requirementRows(req),
+    parts: partsList(req, choice, m),
+    performance: performanceRows(req, m),
+    budget: budget.rows,
+    budgetTotals: budget.totals,
+    curve: errorCurve(req, choice, 60),
+    bench: benchRows(req, choice),
+    benchHowTo: benchHowTo(req),
+    layout: layoutNotes(req, choice),
+    cautions: cautions(req, m),
+    metrics: m,
+  };
+}

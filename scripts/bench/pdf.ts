@@ -1,0 +1,36 @@
+// Build-sheet benchmark: the median warm render of a full build sheet (the demo logger, a draft,
+// so the not-approved notice is on every page) against a bare one-page react-pdf document
+// rendered in the same process. Reported as a time and a ratio; nothing here asserts.
+import { createElement } from "react";
+import { Document, Page, Text, renderToBuffer } from "@react-pdf/renderer";
+import { fixtureView, loggerRequirement } from "../../lib/build-sheet/fixtures";
+import { renderBuildSheet } from "../../lib/build-sheet/render";
+
+const median = (xs: number[]) => {
+  const s = [...xs].sort((a, b) => a - b);
+  const mid = s.length >> 1;
+  return s.length % 2 ? (s[mid] as number) : ((s[mid - 1] as number) + (s[mid] as number)) / 2;
+};
+
+async function time(repeats: number, fn: () => Promise<unknown>): Promise<number> {
+  for (let k = 0; k < 3; k++) await fn(); // warm-up: fonts built, modules and JIT settled
+  const t: number[] = [];
+  for (let k = 0; k < repeats; k++) {
+    const t0 = performance.now();
+    await fn();
+    t.push(performance.now() - t0);
+  }
+  return median(t);
+}
+
+function bareDocument() {
+  return createElement(Document, null, createElement(Page, { size: "A4" }, createElement(Text, null, "Sensewright")));
+}
+
+export async function run(): Promise<Record<string, number>> {
+  const view = fixtureView(loggerRequirement, { status: "draft" });
+  const meta = { team: "Harbourline Labs", generatedAt: new Date("2026-12-01T12:00:00Z") };
+  const sheet = await time(9, () => renderBuildSheet(view, meta));
+  const bare = await time(9, () => renderToBuffer(bareDocument()));
+  return { "pdf.ms": sheet, "pdf.bare.ms": bare, "pdf.ratio": sheet / bare };
+}
