@@ -21,6 +21,8 @@ describe("benchCheck", () => {
     expect(rows.at(-1)?.expectedV).toBeCloseTo(2.466, 12);
   });
   it("leaves the typical row out when no typical current is given", () => {
-    expect(benchCheck(req({ current: { min: "2 mA", max: "180 mA" }, supply: { voltage: "3 V" } }), choice)).toHaveLength(4);
+    expect(
+      benchCheck(req({ current: { min: "2 mA", max: "180 mA" }, supply: { voltage: "3 V" } }), choice),
+    ).toHaveLength(4);
   });
 });

@@ -58,6 +58,8 @@ export function evaluateCandidate(req: Requirement, choice: Choice): CandidateDe
 export function isInSweep(req: Requirement, choice: Choice): boolean {
   const { shuntOhms: R, gain: G } = choice;
   if (!Number.isFinite(R) || !Number.isFinite(G)) return false;
-  const valueHit = seriesValues(req.shunt.series, req.shunt.min, req.shunt.max).some((v) => Math.abs(v - R) <= 1e-9 * v);
+  const valueHit = seriesValues(req.shunt.series, req.shunt.min, req.shunt.max).some(
+    (v) => Math.abs(v - R) <= 1e-9 * v,
+  );
   return valueHit && req.amplifier.gains.some((g) => Math.abs(g - G) <= 1e-9 * g);
 }

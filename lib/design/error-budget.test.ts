@@ -4,7 +4,11 @@ import { errorAt, errorBreakdownCurve, errorCurve, loadCurve, logSpace } from ".
 import { solve } from "./solve";
 import { req } from "./test-helpers";
 
-const r = req({ current: { min: "2 mA", max: "180 mA" }, supply: { voltage: "3 V" }, readout: { kind: "adc", bits: 16, fullScale: "2.5 V" } });
+const r = req({
+  current: { min: "2 mA", max: "180 mA" },
+  supply: { voltage: "3 V" },
+  readout: { kind: "adc", bits: 16, fullScale: "2.5 V" },
+});
 const choice = { shuntOhms: 0.274, gain: 50 };
 // A pair the solver finds feasible, for the checks that need the target met somewhere.
 const feasible = solve(r).candidates[0] ?? choice;

@@ -31,7 +31,13 @@ export const budgetSourceLabels: Record<BudgetSource, string> = {
 };
 
 export type BudgetTerm = { source: BudgetSource; label: string; errorA: number };
-export type ErrorAtResult = { worstA: number; rssA: number; worstPercent: number; rssPercent: number; terms: BudgetTerm[] };
+export type ErrorAtResult = {
+  worstA: number;
+  rssA: number;
+  worstPercent: number;
+  rssPercent: number;
+  terms: BudgetTerm[];
+};
 
 /** Budget terms at current I (A). The sum equals worstErrorA from the model. */
 export function budgetTerms(req: Requirement, m: Model, choice: Choice, I: number): BudgetTerm[] {
@@ -50,7 +56,11 @@ export function budgetTerms(req: Requirement, m: Model, choice: Choice, I: numbe
     readout: m.lsbV / (2 * R * G),
     noise: m.crest * noiseRmsA(m, R, G),
   };
-  return (Object.keys(values) as BudgetSource[]).map((source) => ({ source, label: budgetSourceLabels[source], errorA: values[source] }));
+  return (Object.keys(values) as BudgetSource[]).map((source) => ({
+    source,
+    label: budgetSourceLabels[source],
+    errorA: values[source],
+  }));
 }
 
 function combine(terms: BudgetTerm[], I: number): ErrorAtResult {
@@ -87,7 +97,11 @@ export function errorCurve(req: Requirement, choice: Choice, points = 60): Error
 }
 
 /** The breakdown per source across the span, for a stacked chart (% of reading). */
-export function errorBreakdownCurve(req: Requirement, choice: Choice, points = 40): { currentA: number; terms: { source: BudgetSource; percent: number }[] }[] {
+export function errorBreakdownCurve(
+  req: Requirement,
+  choice: Choice,
+  points = 40,
+): { currentA: number; terms: { source: BudgetSource; percent: number }[] }[] {
   const m = buildModel(req);
   return logSpace(req.current.min, req.current.max, points).map((I) => ({
     currentA: I,

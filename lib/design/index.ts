@@ -6,7 +6,14 @@ export * from "./gains";
 export * from "./requirement";
 export * from "./types";
 export { BOLTZMANN, REFERENCE_C, SINGLE_POLE_NBW, readoutStepV } from "./model";
-export { candidateFigures, evaluateCandidate, isInSweep, rejectReasonLabels, rejectReasons, type RejectReason } from "./candidate";
+export {
+  candidateFigures,
+  evaluateCandidate,
+  isInSweep,
+  rejectReasonLabels,
+  rejectReasons,
+  type RejectReason,
+} from "./candidate";
 export * from "./error-budget";
 export { solve, defaultRankingText, type SolveResult, type SolveOptions } from "./solve";
 export { RankExpressionError, compileRankExpression, rankFields, type RankField } from "./rank";

@@ -3,7 +3,11 @@ import { insertion, InsertionError, insertionCurve, insertionSchema } from "./in
 
 describe("insertion", () => {
   it("parses unit strings in the body", () => {
-    const body = insertionSchema.parse({ supply: "2.0 V", seriesOhms: "1.9 ohm", load: { model: "constant-current", current: "200 mA" } });
+    const body = insertionSchema.parse({
+      supply: "2.0 V",
+      seriesOhms: "1.9 ohm",
+      load: { model: "constant-current", current: "200 mA" },
+    });
     expect(body).toEqual({ supply: 2, seriesOhms: 1.9, load: { model: "constant-current", current: 0.2 } });
   });
   it("refuses a wrong dimension and a negative resistance on their paths", () => {
@@ -13,7 +17,13 @@ describe("insertion", () => {
   });
   it("constant current: the current stays and the load loses I·R (Ohm's law)", () => {
     const r = insertion({ supply: 2, seriesOhms: 1.9, load: { model: "constant-current", current: 0.2 } });
-    expect(r).toEqual({ currentA: 0.2, loadVoltageV: 2 - 0.38, burdenV: 0.38, currentChangePercent: 0, powerInSeriesW: 0.2 * 0.2 * 1.9 });
+    expect(r).toEqual({
+      currentA: 0.2,
+      loadVoltageV: 2 - 0.38,
+      burdenV: 0.38,
+      currentChangePercent: 0,
+      powerInSeriesW: 0.2 * 0.2 * 1.9,
+    });
   });
   it("resistive: I' = V/(RL + R) (Ohm's law)", () => {
     const r = insertion({ supply: 3, seriesOhms: 1, load: { model: "resistive", current: 0.3 } });
@@ -29,16 +39,27 @@ describe("insertion", () => {
     expect(r.loadVoltageV).toBeCloseTo((5 + Math.sqrt(5)) / 2, 12);
   });
   it("constant power with V² < 4·P·R has no operating point", () => {
-    expect(() => insertion({ supply: 2, seriesOhms: 1, load: { model: "constant-power", current: 1.1 } })).toThrow(InsertionError);
-    expect(() => insertion({ supply: 2, seriesOhms: 1, load: { model: "constant-power", current: 1.1 } })).toThrow(/cannot be powered through/);
+    expect(() => insertion({ supply: 2, seriesOhms: 1, load: { model: "constant-power", current: 1.1 } })).toThrow(
+      InsertionError,
+    );
+    expect(() => insertion({ supply: 2, seriesOhms: 1, load: { model: "constant-power", current: 1.1 } })).toThrow(
+      /cannot be powered through/,
+    );
     // V² = 4·P·R exactly is the last operating point: the load gets half the supply.
-    expect(insertion({ supply: 2, seriesOhms: 1, load: { model: "constant-power", current: 0.5 } }).loadVoltageV).toBeCloseTo(1, 12);
+    expect(
+      insertion({ supply: 2, seriesOhms: 1, load: { model: "constant-power", current: 0.5 } }).loadVoltageV,
+    ).toBeCloseTo(1, 12);
   });
   it("a constant-current load that needs more than the supply across R is refused", () => {
-    expect(() => insertion({ supply: 2, seriesOhms: 100, load: { model: "constant-current", current: 0.1 } })).toThrow(/cannot be powered/);
+    expect(() => insertion({ supply: 2, seriesOhms: 100, load: { model: "constant-current", current: 0.1 } })).toThrow(
+      /cannot be powered/,
+    );
   });
   it("insertionCurve spans the currents and leaves out those with no operating point", () => {
-    const c = insertionCurve({ supply: 2, seriesOhms: 1, load: { model: "constant-power", current: 0.4 } }, { points: 30 });
+    const c = insertionCurve(
+      { supply: 2, seriesOhms: 1, load: { model: "constant-power", current: 0.4 } },
+      { points: 30 },
+    );
     expect(c.length).toBeGreaterThan(10);
     expect(c.length).toBeLessThan(30);
     for (let i = 1; i < c.length; i++) expect((c[i]?.burdenV ?? 0) > (c[i - 1]?.burdenV ?? 0)).toBe(true);

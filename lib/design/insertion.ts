@@ -19,7 +19,9 @@ export const insertionSchema = z.object({
     }),
   ),
   load: z.object({
-    model: z.enum(loadModels, { error: `Load model: expected one of ${loadModels.join(", ")}` }).default("constant-current"),
+    model: z
+      .enum(loadModels, { error: `Load model: expected one of ${loadModels.join(", ")}` })
+      .default("constant-current"),
     current: positiveQ("current", "Load current"),
   }),
 });
@@ -48,7 +50,12 @@ function fmt(x: number): string {
 }
 
 /** Current through the path for a load model, or an explanation of why there is none. */
-export function operatingCurrent(supplyV: number, seriesOhms: number, model: LoadModel, nominalA: number): number | string {
+export function operatingCurrent(
+  supplyV: number,
+  seriesOhms: number,
+  model: LoadModel,
+  nominalA: number,
+): number | string {
   const R = seriesOhms;
   if (model === "resistive") return supplyV / (supplyV / nominalA + R);
   if (model === "constant-current") {
@@ -84,7 +91,10 @@ export type InsertionCurvePoint = InsertionResult & { nominalA: number };
  * The insertion result across load currents (log-spaced, nominal current at full supply),
  * from `fromA` to `toA`; currents with no operating point are left out.
  */
-export function insertionCurve(input: Insertion, opts: { fromA?: number; toA?: number; points?: number } = {}): InsertionCurvePoint[] {
+export function insertionCurve(
+  input: Insertion,
+  opts: { fromA?: number; toA?: number; points?: number } = {},
+): InsertionCurvePoint[] {
   const from = opts.fromA ?? input.load.current / 100;
   const to = opts.toA ?? input.load.current * 2;
   const n = Math.max(2, Math.min(1000, opts.points ?? 50));

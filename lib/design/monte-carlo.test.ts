@@ -4,7 +4,11 @@ import { monteCarlo, percentile } from "./monte-carlo";
 import { mulberry32 } from "./prng";
 import { req } from "./test-helpers";
 
-const r = req({ current: { min: "2 mA", max: "180 mA" }, supply: { voltage: "3 V" }, readout: { kind: "adc", bits: 16, fullScale: "2.5 V" } });
+const r = req({
+  current: { min: "2 mA", max: "180 mA" },
+  supply: { voltage: "3 V" },
+  readout: { kind: "adc", bits: 16, fullScale: "2.5 V" },
+});
 const choice = { shuntOhms: 0.274, gain: 50 };
 
 describe("mulberry32", () => {

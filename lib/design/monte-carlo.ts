@@ -42,7 +42,9 @@ export function percentile(sorted: ArrayLike<number>, p: number): number {
 }
 
 export function defaultMonteCarloCurrents(req: Requirement): number[] {
-  const list = [req.current.min, req.current.typical, req.accuracy.bandMin, req.current.max].filter((x): x is number => x !== undefined);
+  const list = [req.current.min, req.current.typical, req.accuracy.bandMin, req.current.max].filter(
+    (x): x is number => x !== undefined,
+  );
   return [...new Set(list)].sort((a, b) => a - b);
 }
 

@@ -21,20 +21,42 @@ function operatingPoint(netlist: string): Record<string, number> {
     writeFileSync(file, netlist);
     const out = execFileSync("ngspice", ["-b", file], { encoding: "utf8", stdio: ["ignore", "pipe", "pipe"] });
     const nodes: Record<string, number> = {};
-    for (const m of out.matchAll(/^\s*([a-z0-9_#]+)\s+(-?\d[\d.]*e[+-]\d+)\s*$/gim)) nodes[(m[1] ?? "").toLowerCase()] = Number(m[2]);
+    for (const m of out.matchAll(/^\s*([a-z0-9_#]+)\s+(-?\d[\d.]*e[+-]\d+)\s*$/gim))
+      nodes[(m[1] ?? "").toLowerCase()] = Number(m[2]);
     return nodes;
   } finally {
     rmSync(dir, { recursive: true, force: true });
   }
 }
 
-const within = (actual: number, expected: number, rel: number) => expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
+const within = (actual: number, expected: number, rel: number) =>
+  expect(Math.abs(actual - expected)).toBeLessThanOrEqual(rel * Math.abs(expected));
 
 const cases: [string, Requirement, { shuntOhms: number; gain: number }][] = [
-  ["low side, constant current", req({ current: { min: "1 mA", max: "180 mA" }, supply: { voltage: "3 V" } }), { shuntOhms: 0.274, gain: 50 }],
-  ["high side, constant current", req({ current: { min: "60 mA", max: "6 A" }, supply: { voltage: "24 V", side: "high" }, drop: { max: "100 mV" } }), { shuntOhms: 0.01, gain: 20 }],
-  ["low side, resistive", req({ current: { min: "1 mA", max: "200 mA" }, supply: { voltage: "2 V" }, load: { model: "resistive" } }), { shuntOhms: 1.9, gain: 1 }],
-  ["high side, constant power", req({ current: { min: "1 mA", max: "500 mA" }, supply: { voltage: "5 V", side: "high" }, load: { model: "constant-power" } }), { shuntOhms: 0.5, gain: 10 }],
+  [
+    "low side, constant current",
+    req({ current: { min: "1 mA", max: "180 mA" }, supply: { voltage: "3 V" } }),
+    { shuntOhms: 0.274, gain: 50 },
+  ],
+  [
+    "high side, constant current",
+    req({ current: { min: "60 mA", max: "6 A" }, supply: { voltage: "24 V", side: "high" }, drop: { max: "100 mV" } }),
+    { shuntOhms: 0.01, gain: 20 },
+  ],
+  [
+    "low side, resistive",
+    req({ current: { min: "1 mA", max: "200 mA" }, supply: { voltage: "2 V" }, load: { model: "resistive" } }),
+    { shuntOhms: 1.9, gain: 1 },
+  ],
+  [
+    "high side, constant power",
+    req({
+      current: { min: "1 mA", max: "500 mA" },
+      supply: { voltage: "5 V", side: "high" },
+      load: { model: "constant-power" },
+    }),
+    { shuntOhms: 0.5, gain: 10 },
+  ],
 ];
 
 describe.skipIf(!hasNgspice)("netlist in ngspice (batch mode .op)", () => {
@@ -42,7 +64,11 @@ describe.skipIf(!hasNgspice)("netlist in ngspice (batch mode .op)", () => {
     const nodes = operatingPoint(buildNetlist(r, choice));
     const spiceBurden = (nodes.sp ?? NaN) - (nodes.sn ?? NaN);
     // The engine's operating point for this load model (insertion) and its output I·R·G + G·Vos.
-    const op = insertion({ supply: r.supply.voltage, seriesOhms: choice.shuntOhms, load: { model: r.load.model, current: r.current.max } });
+    const op = insertion({
+      supply: r.supply.voltage,
+      seriesOhms: choice.shuntOhms,
+      load: { model: r.load.model, current: r.current.max },
+    });
     within(spiceBurden, op.burdenV, 1e-3);
     within(nodes.out ?? NaN, choice.gain * (op.burdenV + r.amplifier.offset), 1e-3);
     if (r.load.model === "constant-current") within(spiceBurden, evaluateCandidate(r, choice).burdenV, 1e-3);

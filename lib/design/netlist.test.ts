@@ -26,7 +26,10 @@ describe("netlist", () => {
     expect(n).not.toMatch(/\d[mMkunp]\b/); // no scale suffixes on numbers
   });
   it("high side puts the load after the shunt; resistive and constant-power loads are modelled", () => {
-    const high = buildNetlist(req({ ...base, supply: { voltage: "24 V", side: "high" }, load: { model: "resistive" } }), { shuntOhms: 0.01, gain: 20 });
+    const high = buildNetlist(
+      req({ ...base, supply: { voltage: "24 V", side: "high" }, load: { model: "resistive" } }),
+      { shuntOhms: 0.01, gain: 20 },
+    );
     expect(high).toContain("VFEED bus sp DC 0");
     expect(high).toContain("RLOAD sn 0 1.333333333e2");
     const cp = buildNetlist(req({ ...base, load: { model: "constant-power" } }), { shuntOhms: 0.1, gain: 20 });

@@ -28,7 +28,9 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: { includeOf
   const lines: string[] = [];
   lines.push(`* Sensewright current-sense front end: ${high ? "high" : "low"}-side shunt, ${model} load at Imax`);
   lines.push(`* shunt ${spiceNumber(R)} ohm, gain ${spiceNumber(G)}; all values in SI base units`);
-  lines.push("* Nodes: bus = supply +, sp = shunt end the current enters, sn = the other end, out = amplifier output, 0 = ground.");
+  lines.push(
+    "* Nodes: bus = supply +, sp = shunt end the current enters, sn = the other end, out = amplifier output, 0 = ground.",
+  );
   if (high) {
     lines.push("* High side: bus -> VFEED (0 V, reads the current) -> sp -> RSHUNT -> sn -> load -> 0.");
   } else {
@@ -46,7 +48,9 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: { includeOf
     lines.push(`RLOAD ${la} ${lb} ${spiceNumber(vBus / iMax)}`);
   } else {
     const p = vBus * iMax;
-    lines.push(`* Constant-power load: draws Imax at the full supply, P = ${spiceNumber(p)} W, more current as its voltage falls.`);
+    lines.push(
+      `* Constant-power load: draws Imax at the full supply, P = ${spiceNumber(p)} W, more current as its voltage falls.`,
+    );
     lines.push(`BLOAD ${la} ${lb} I=${spiceNumber(p)}/max(V(${la},${lb}),${spiceNumber(vBus / 1000)})`);
     // Steer the operating point to the physical (high-voltage) solution.
     const burden = operatingBurden(buildModel(req), R);
@@ -56,7 +60,9 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: { includeOf
   }
   lines.push("* Amplifier: an ideal voltage-controlled voltage source across the shunt,");
   if (includeOffset) {
-    lines.push(`* with its input offset ${spiceNumber(req.amplifier.offset)} V as a source in series with the + input.`);
+    lines.push(
+      `* with its input offset ${spiceNumber(req.amplifier.offset)} V as a source in series with the + input.`,
+    );
     lines.push(`VOS spo sp DC ${spiceNumber(req.amplifier.offset)}`);
     lines.push(`EAMP out 0 spo sn ${spiceNumber(G)}`);
   } else {

@@ -1,6 +1,15 @@
 // Feasibility of one (shunt, gain) pair, shared by the sweep and evaluateCandidate so the
 // two can never disagree. Per-shunt figures are computed once per value, per-gain once per gain.
-import { type Model, inputNoiseDensity, noiseBandwidth, offsetTermA, operatingBurden, ratingFor, signalBandwidth, thetaFor } from "./model";
+import {
+  type Model,
+  inputNoiseDensity,
+  noiseBandwidth,
+  offsetTermA,
+  operatingBurden,
+  ratingFor,
+  signalBandwidth,
+  thetaFor,
+} from "./model";
 
 /** Constraint order: a rejected pair is counted under the first one it fails. */
 export const rejectReasons = ["drop", "output", "counts", "power", "bandwidth", "accuracy", "deadZone"] as const;

@@ -32,10 +32,10 @@ describe("ideal ADC quantisation: SNR = 6.02·N + 1.76 dB for a full-scale sine 
     const r = simple({ readout: { kind: "adc", bits, fullScale: "2.5 V" } });
     const lsb = readoutStepV(r);
     const noiseRms = lsb / Math.sqrt(12); // uniform quantisation error of one step
-    const sineRms = (2.5 / 2) / Math.SQRT2; // full-scale sine, peak-to-peak = full scale
+    const sineRms = 2.5 / 2 / Math.SQRT2; // full-scale sine, peak-to-peak = full scale
     const snr = 20 * Math.log10(sineRms / noiseRms);
     // 6.02 and 1.76 are rounded constants: agree to the rounding.
-    expect(Math.abs(snr - (6.02 * bits + 1.76))).toBeLessThan(0.01 * bits / 8 + 0.01);
+    expect(Math.abs(snr - (6.02 * bits + 1.76))).toBeLessThan((0.01 * bits) / 8 + 0.01);
   });
 });
 
@@ -56,7 +56,10 @@ describe("non-inverting amplifier gain G = 1 + Rf/Rg (any analogue electronics t
 
 describe("Ohm's and Joule's laws on round numbers", () => {
   it("1 Ω at 100 mA drops 100 mV and dissipates 10 mW", () => {
-    const c = evaluateCandidate(simple({ amplifier: { gains: [1] }, shunt: { min: 1, max: 1 } }), { shuntOhms: 1, gain: 1 });
+    const c = evaluateCandidate(simple({ amplifier: { gains: [1] }, shunt: { min: 1, max: 1 } }), {
+      shuntOhms: 1,
+      gain: 1,
+    });
     expect(c.burdenV).toBeCloseTo(0.1, 12);
     expect(c.dissipationW).toBeCloseTo(0.01, 12);
   });
@@ -105,7 +108,9 @@ describe("error model sanity (DESIGN.md §3 default model)", () => {
     const c = { shuntOhms: 1, gain: 20 };
     const share = (I: number) => {
       const e = errorAt(r, c, I);
-      const gainish = e.terms.filter((t) => ["gainError", "shuntTolerance", "shuntTempco", "gainDrift"].includes(t.source));
+      const gainish = e.terms.filter((t) =>
+        ["gainError", "shuntTolerance", "shuntTempco", "gainDrift"].includes(t.source),
+      );
       return gainish.reduce((s, t) => s + t.errorA, 0) / e.worstA;
     };
     expect(share(1e-6)).toBeLessThan(0.1);
@@ -121,7 +126,11 @@ describe("error model sanity (DESIGN.md §3 default model)", () => {
   });
   it("high-side sensing adds Vbus·10^(−CMRR/20)/R", () => {
     const low = errorAt(simple({ supply: { voltage: 24, side: "low" } }), { shuntOhms: 0.1, gain: 20 }, 0.01);
-    const high = errorAt(simple({ supply: { voltage: 24, side: "high" }, amplifier: { cmrrDb: 80 } }), { shuntOhms: 0.1, gain: 20 }, 0.01);
+    const high = errorAt(
+      simple({ supply: { voltage: 24, side: "high" }, amplifier: { cmrrDb: 80 } }),
+      { shuntOhms: 0.1, gain: 20 },
+      0.01,
+    );
     const cm = high.terms.find((t) => t.source === "commonMode")?.errorA ?? NaN;
     expect(cm).toBeCloseTo((24 * 1e-4) / 0.1, 12);
     expect(low.terms.find((t) => t.source === "commonMode")?.errorA).toBe(0);

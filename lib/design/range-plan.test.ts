@@ -7,8 +7,19 @@ import { req } from "./test-helpers";
 describe("range plans for spans too wide for one range", () => {
   const cases = [
     // DESIGN.md §6: the soil-moisture logger, 3 µA asleep to 180 mA transmitting, from 3.0 V.
-    ["the demo logger, 3 µA .. 180 mA", req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } })],
-    ["3 µA .. 6 A at 24 V", req({ current: { min: "3 uA", max: "6 A" }, supply: { voltage: "24 V" }, drop: { max: "100 mV" }, readout: { kind: "adc", bits: 16, fullScale: "2.5 V" } })],
+    [
+      "the demo logger, 3 µA .. 180 mA",
+      req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } }),
+    ],
+    [
+      "3 µA .. 6 A at 24 V",
+      req({
+        current: { min: "3 uA", max: "6 A" },
+        supply: { voltage: "24 V" },
+        drop: { max: "100 mV" },
+        readout: { kind: "adc", bits: 16, fullScale: "2.5 V" },
+      }),
+    ],
   ] as const;
 
   it.each(cases)("%s: 2 or 3 overlapping ranges that cover the span", (_name, r) => {
@@ -31,7 +42,10 @@ describe("range plans for spans too wide for one range", () => {
       const sub = {
         ...r,
         current: { min: x.minA, max: x.maxA },
-        accuracy: lo <= hi ? { ...r.accuracy, bandMin: lo, bandMax: hi } : { ...r.accuracy, bandMin: x.maxA, bandMax: x.maxA, percent: 100 },
+        accuracy:
+          lo <= hi
+            ? { ...r.accuracy, bandMin: lo, bandMax: hi }
+            : { ...r.accuracy, bandMin: x.maxA, bandMax: x.maxA, percent: 100 },
       };
       const c = evaluateCandidate(sub, { shuntOhms: x.shuntOhms, gain: x.gain });
       expect(c.reasons.filter((why) => why !== "accuracy" || lo <= hi)).toEqual([]);

@@ -24,7 +24,22 @@ export const rankFields = [
 export type RankField = (typeof rankFields)[number];
 export type RankScope = Record<RankField, number>;
 
-const allowedFunctions = new Set(["abs", "sqrt", "cbrt", "exp", "log", "log10", "log2", "min", "max", "pow", "square", "round", "floor", "ceil"]);
+const allowedFunctions = new Set([
+  "abs",
+  "sqrt",
+  "cbrt",
+  "exp",
+  "log",
+  "log10",
+  "log2",
+  "min",
+  "max",
+  "pow",
+  "square",
+  "round",
+  "floor",
+  "ceil",
+]);
 const allowedConstants = new Set(["pi", "e"]);
 const allowedOperators = new Set(["add", "subtract", "multiply", "divide", "pow", "unaryMinus", "unaryPlus"]);
 
@@ -69,18 +84,24 @@ function check(node: MathNode): void {
   switch (node.type) {
     case "ConstantNode": {
       const v = (node as unknown as { value: unknown }).value;
-      if (typeof v !== "number" || !Number.isFinite(v)) throw new RankExpressionError(`Ranking expression: only numbers are allowed as constants, not ${JSON.stringify(v)}`);
+      if (typeof v !== "number" || !Number.isFinite(v))
+        throw new RankExpressionError(
+          `Ranking expression: only numbers are allowed as constants, not ${JSON.stringify(v)}`,
+        );
       return;
     }
     case "SymbolNode": {
       const name = (node as unknown as { name: string }).name;
       if (!fieldSet.has(name) && !allowedConstants.has(name))
-        throw new RankExpressionError(`Ranking expression: unknown name "${name}"; use candidate fields (${rankFields.join(", ")})`);
+        throw new RankExpressionError(
+          `Ranking expression: unknown name "${name}"; use candidate fields (${rankFields.join(", ")})`,
+        );
       return;
     }
     case "OperatorNode": {
       const op = node as unknown as { fn: string; op: string; args: MathNode[] };
-      if (!allowedOperators.has(op.fn)) throw new RankExpressionError(`Ranking expression: operator "${op.op}" is not allowed; use + - * / ^`);
+      if (!allowedOperators.has(op.fn))
+        throw new RankExpressionError(`Ranking expression: operator "${op.op}" is not allowed; use + - * / ^`);
       op.args.forEach(check);
       return;
     }
@@ -91,7 +112,9 @@ function check(node: MathNode): void {
       const fn = node as unknown as { fn: MathNode; args: MathNode[] };
       const name = fn.fn.type === "SymbolNode" ? (fn.fn as unknown as { name: string }).name : null;
       if (name === null || !allowedFunctions.has(name))
-        throw new RankExpressionError(`Ranking expression: function "${name ?? "?"}" is not allowed; use ${[...allowedFunctions].join(", ")}`);
+        throw new RankExpressionError(
+          `Ranking expression: function "${name ?? "?"}" is not allowed; use ${[...allowedFunctions].join(", ")}`,
+        );
       fn.args.forEach(check);
       return;
     }
@@ -101,7 +124,9 @@ function check(node: MathNode): void {
     case "BlockNode":
       throw new RankExpressionError("Ranking expression: give a single expression (no ';' or line breaks)");
     default:
-      throw new RankExpressionError(`Ranking expression: ${node.type.replace(/Node$/, "").toLowerCase()} expressions are not allowed`);
+      throw new RankExpressionError(
+        `Ranking expression: ${node.type.replace(/Node$/, "").toLowerCase()} expressions are not allowed`,
+      );
   }
 }
 

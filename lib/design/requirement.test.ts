@@ -50,8 +50,19 @@ describe("parseRequirement: refusals land on the dotted field path", () => {
     expect(errorsOf({ ...base, shunt: { series: "E6", min: "1.6 ohm", max: "2.1 ohm" } })["shunt.min"]).toBeDefined();
     expect(errorsOf({ ...base, shunt: { min: "2 ohm", max: "1 ohm" } })["shunt.min"]).toBeDefined();
   });
+  it("missing fields say they are required, on their own path", () => {
+    const e = errorsOf({ current: { min: "1 mA" }, readout: { kind: "adc", bits: 12 } });
+    expect(e["current.max"]).toEqual(["Maximum current is required"]);
+    expect(e["supply"]).toEqual(["Supply (voltage) is required"]);
+    expect(e["readout.fullScale"]).toEqual(["ADC full scale is required"]);
+    expect(errorsOf(null)["(requirement)"]).toBeDefined();
+  });
   it("a grid too large to sweep is refused on shunt.max", () => {
-    const e = errorsOf({ ...base, shunt: { series: "E192", min: "1 uohm", max: "1 Gohm" }, amplifier: { gains: { series: "E24", min: 1.1, max: 10000 } } });
+    const e = errorsOf({
+      ...base,
+      shunt: { series: "E192", min: "1 uohm", max: "1 Gohm" },
+      amplifier: { gains: { series: "E24", min: 1.1, max: 10000 } },
+    });
     expect(e["shunt.max"]?.[0]).toMatch(/narrow/);
   });
 });
@@ -96,7 +107,11 @@ describe("parseRequirement: defaults and normalisation", () => {
     expect(r.requirement.amplifier.gains).toEqual([20, 50, 100]);
   });
   it("re-parses its own output to the same requirement", () => {
-    const r = parseRequirement({ ...base, amplifier: { gains: { series: "E12", min: 2, max: 100 } }, drop: { fraction: 0.02 } });
+    const r = parseRequirement({
+      ...base,
+      amplifier: { gains: { series: "E12", min: 2, max: 100 } },
+      drop: { fraction: 0.02 },
+    });
     if (!r.ok) throw new Error(r.message);
     const again = parseRequirement(JSON.parse(JSON.stringify(r.requirement)));
     if (!again.ok) throw new Error(again.message);

@@ -14,7 +14,9 @@ export const maxSweepPairs = 2_000_000;
 
 const seriesField = z
   .string({ error: "Series: expected a series name such as E96" })
-  .refine(isSeriesName, { error: (iss) => `Series: unknown series "${String(iss.input)}"; use one of ${seriesNames.join(", ")}` })
+  .refine(isSeriesName, {
+    error: (iss) => `Series: unknown series "${String(iss.input)}"; use one of ${seriesNames.join(", ")}`,
+  })
   .transform((s) => s as SeriesName);
 
 const positive = (label: string) => (v: number) => v > 0 || `${label} must be above zero`;
@@ -56,94 +58,158 @@ const gainSetSchema = z.object({
   max: z.number().max(100_000, { error: "Highest gain must be at most 100000" }).default(1000),
 });
 
-const baseSchema = z.object({
-  current: z.object({
-    min: q("current", "Minimum current", positive("Minimum current")),
-    max: q("current", "Maximum current", positive("Maximum current")),
-    typical: q("current", "Typical current", positive("Typical current")).optional(),
-  }),
-  supply: z.object({
-    voltage: q("voltage", "Supply voltage", positive("Supply voltage")),
-    side: z.enum(["low", "high"], { error: 'Sensing side: expected "low" or "high"' }).default("low"),
-  }),
-  drop: z
-    .object({
-      max: q("voltage", "Allowed drop", positive("Allowed drop")).optional(),
-      fraction: q("fraction", "Allowed drop (fraction of supply)", (v) => (v > 0 && v < 1) || "Allowed drop as a fraction of the supply must be between 0 and 1 (e.g. 0.02 or \"2 %\")").optional(),
-      loadMin: q("voltage", "Minimum load voltage", nonNegative("Minimum load voltage")).optional(),
-    })
-    .prefault({}),
-  load: z
-    .object({ model: z.enum(loadModels, { error: `Load model: expected one of ${loadModels.join(", ")}` }).default("constant-current") })
-    .prefault({}),
-  readout: z
-    .discriminatedUnion("kind", [adcReadout, meterReadout], { error: 'Readout: kind must be "adc" or "meter"' })
-    .default({ kind: "adc", bits: 12, fullScale: 2.5 }),
-  resolution: z.object({ countsAtMin: z.number().positive({ error: "Counts at minimum current must be above zero" }).max(1e9).default(10) }).prefault({}),
-  accuracy: z
-    .object({
-      percent: z
-        .union([z.number(), z.string()])
-        .transform((v, ctx) => {
-          if (typeof v === "number") return v;
-          const m = /^\s*([+-]?\d*\.?\d+(?:e[+-]?\d+)?)\s*%?\s*$/i.exec(v);
-          if (!m) {
-            ctx.addIssue({ code: "custom", message: `Accuracy target: cannot read "${v}" as a percentage` });
-            return z.NEVER;
-          }
-          return Number(m[1]);
-        })
-        .check(z.superRefine((v: number, ctx) => {
-          if (!(v > 0 && v <= 100 && Number.isFinite(v))) ctx.addIssue({ code: "custom", message: "Accuracy target must be above 0 % and at most 100 %" });
-        }))
-        .default(2),
-      bandMin: q("current", "Accuracy band, lowest current", positive("Accuracy band, lowest current")).optional(),
-      bandMax: q("current", "Accuracy band, highest current", positive("Accuracy band, highest current")).optional(),
-      crestFactor: z.number().min(0, { error: "Noise crest factor cannot be negative" }).max(10).default(3),
-    })
-    .prefault({}),
-  temperature: z
-    .object({
-      min: quantity("temperature", "Lowest ambient temperature").default(0),
-      max: quantity("temperature", "Highest ambient temperature").default(70),
-    })
-    .prefault({}),
-  bandwidth: z
-    .object({ min: q("frequency", "Required bandwidth", nonNegative("Required bandwidth")).default(0) })
-    .prefault({}),
-  shunt: z
-    .object({
-      series: seriesField.default("E96"),
-      min: q("resistance", "Smallest shunt", positive("Smallest shunt")).default(0.001),
-      max: q("resistance", "Largest shunt", positive("Largest shunt")).default(1000),
-      tolerance: q("fraction", "Shunt tolerance", (v) => (v >= 0 && v < 0.5) || "Shunt tolerance must be between 0 and 50 %").default(0.005),
-      tempco: q("tempco", "Shunt tempco", nonNegative("Shunt tempco")).default(50e-6),
-      ratings: z.array(q("power", "Power rating", positive("Power rating"))).min(1, { error: "Offer at least one power rating" }).default([0.1, 0.125, 0.25, 0.5, 1, 2, 3]),
-      derating: z.number().gt(0, { error: "Derating must be above 0" }).max(1, { error: "Derating must be at most 1" }).default(0.5),
-      thermalResistance: q("thermalResistance", "Shunt thermal resistance", positive("Shunt thermal resistance")).nullable().default(null),
-      ratedRise: q("temperature", "Temperature rise at full rating", positive("Temperature rise at full rating")).default(85),
-    })
-    .prefault({}),
-  amplifier: z
-    .object({
-      gains: z.union([z.array(z.number().positive({ error: "Each gain must be above zero" })), gainSetSchema]).optional(),
-      gainSet: gainSetSchema.nullable().optional(),
-      offset: q("voltage", "Amplifier offset", nonNegative("Amplifier offset")).default(10e-6),
-      offsetDrift: q("voltageDrift", "Offset drift", nonNegative("Offset drift")).default(0.1e-6),
-      gainError: q("fraction", "Amplifier gain error", (v) => (v >= 0 && v < 0.5) || "Gain error must be between 0 and 50 %").default(0.001),
-      gainDrift: q("tempco", "Gain drift", nonNegative("Gain drift")).default(10e-6),
-      biasCurrent: q("current", "Input bias current", nonNegative("Input bias current")).default(20e-9),
-      noiseDensity: q("noiseDensity", "Input noise density", nonNegative("Input noise density")).default(40e-9),
-      gbw: q("frequency", "Gain-bandwidth", positive("Gain-bandwidth")).default(2e6),
-      supply: q("voltage", "Amplifier supply", positive("Amplifier supply")).default(5),
-      swingLow: q("voltage", "Lowest output (above ground)", nonNegative("Lowest output")).default(0.01),
-      swingHigh: q("voltage", "Output headroom below the amplifier supply", nonNegative("Output headroom")).default(0.05),
-      filterHz: q("frequency", "Output filter corner", positive("Output filter corner")).nullable().default(null),
-      cmrrDb: z.number().min(0, { error: "CMRR cannot be negative" }).max(200).default(120),
-    })
-    .prefault({}),
-  limit: z.number().int({ error: "Limit must be a whole number" }).min(1, { error: "Limit must be at least 1" }).max(10_000, { error: "Limit must be at most 10000" }).default(200),
+const group = (what: string) => ({
+  error: (iss: { input?: unknown }) =>
+    iss.input === undefined ? `${what} is required` : `${what}: expected an object`,
 });
+
+const baseSchema = z.object(
+  {
+    current: z.object(
+      {
+        min: q("current", "Minimum current", positive("Minimum current")),
+        max: q("current", "Maximum current", positive("Maximum current")),
+        typical: q("current", "Typical current", positive("Typical current")).optional(),
+      },
+      group("Current span (min and max)"),
+    ),
+    supply: z.object(
+      {
+        voltage: q("voltage", "Supply voltage", positive("Supply voltage")),
+        side: z.enum(["low", "high"], { error: 'Sensing side: expected "low" or "high"' }).default("low"),
+      },
+      group("Supply (voltage)"),
+    ),
+    drop: z
+      .object({
+        max: q("voltage", "Allowed drop", positive("Allowed drop")).optional(),
+        fraction: q(
+          "fraction",
+          "Allowed drop (fraction of supply)",
+          (v) =>
+            (v > 0 && v < 1) || 'Allowed drop as a fraction of the supply must be between 0 and 1 (e.g. 0.02 or "2 %")',
+        ).optional(),
+        loadMin: q("voltage", "Minimum load voltage", nonNegative("Minimum load voltage")).optional(),
+      })
+      .prefault({}),
+    load: z
+      .object({
+        model: z
+          .enum(loadModels, { error: `Load model: expected one of ${loadModels.join(", ")}` })
+          .default("constant-current"),
+      })
+      .prefault({}),
+    readout: z
+      .discriminatedUnion("kind", [adcReadout, meterReadout], { error: 'Readout: kind must be "adc" or "meter"' })
+      .default({ kind: "adc", bits: 12, fullScale: 2.5 }),
+    resolution: z
+      .object({
+        countsAtMin: z
+          .number()
+          .positive({ error: "Counts at minimum current must be above zero" })
+          .max(1e9)
+          .default(10),
+      })
+      .prefault({}),
+    accuracy: z
+      .object({
+        percent: z
+          .union([z.number(), z.string()])
+          .transform((v, ctx) => {
+            if (typeof v === "number") return v;
+            const m = /^\s*([+-]?\d*\.?\d+(?:e[+-]?\d+)?)\s*%?\s*$/i.exec(v);
+            if (!m) {
+              ctx.addIssue({ code: "custom", message: `Accuracy target: cannot read "${v}" as a percentage` });
+              return z.NEVER;
+            }
+            return Number(m[1]);
+          })
+          .check(
+            z.superRefine((v: number, ctx) => {
+              if (!(v > 0 && v <= 100 && Number.isFinite(v)))
+                ctx.addIssue({ code: "custom", message: "Accuracy target must be above 0 % and at most 100 %" });
+            }),
+          )
+          .default(2),
+        bandMin: q("current", "Accuracy band, lowest current", positive("Accuracy band, lowest current")).optional(),
+        bandMax: q("current", "Accuracy band, highest current", positive("Accuracy band, highest current")).optional(),
+        crestFactor: z.number().min(0, { error: "Noise crest factor cannot be negative" }).max(10).default(3),
+      })
+      .prefault({}),
+    temperature: z
+      .object({
+        min: quantity("temperature", "Lowest ambient temperature").default(0),
+        max: quantity("temperature", "Highest ambient temperature").default(70),
+      })
+      .prefault({}),
+    bandwidth: z
+      .object({ min: q("frequency", "Required bandwidth", nonNegative("Required bandwidth")).default(0) })
+      .prefault({}),
+    shunt: z
+      .object({
+        series: seriesField.default("E96"),
+        min: q("resistance", "Smallest shunt", positive("Smallest shunt")).default(0.001),
+        max: q("resistance", "Largest shunt", positive("Largest shunt")).default(1000),
+        tolerance: q(
+          "fraction",
+          "Shunt tolerance",
+          (v) => (v >= 0 && v < 0.5) || "Shunt tolerance must be between 0 and 50 %",
+        ).default(0.005),
+        tempco: q("tempco", "Shunt tempco", nonNegative("Shunt tempco")).default(50e-6),
+        ratings: z
+          .array(q("power", "Power rating", positive("Power rating")))
+          .min(1, { error: "Offer at least one power rating" })
+          .default([0.1, 0.125, 0.25, 0.5, 1, 2, 3]),
+        derating: z
+          .number()
+          .gt(0, { error: "Derating must be above 0" })
+          .max(1, { error: "Derating must be at most 1" })
+          .default(0.5),
+        thermalResistance: q("thermalResistance", "Shunt thermal resistance", positive("Shunt thermal resistance"))
+          .nullable()
+          .default(null),
+        ratedRise: q(
+          "temperature",
+          "Temperature rise at full rating",
+          positive("Temperature rise at full rating"),
+        ).default(85),
+      })
+      .prefault({}),
+    amplifier: z
+      .object({
+        gains: z
+          .union([z.array(z.number().positive({ error: "Each gain must be above zero" })), gainSetSchema])
+          .optional(),
+        gainSet: gainSetSchema.nullable().optional(),
+        offset: q("voltage", "Amplifier offset", nonNegative("Amplifier offset")).default(10e-6),
+        offsetDrift: q("voltageDrift", "Offset drift", nonNegative("Offset drift")).default(0.1e-6),
+        gainError: q(
+          "fraction",
+          "Amplifier gain error",
+          (v) => (v >= 0 && v < 0.5) || "Gain error must be between 0 and 50 %",
+        ).default(0.001),
+        gainDrift: q("tempco", "Gain drift", nonNegative("Gain drift")).default(10e-6),
+        biasCurrent: q("current", "Input bias current", nonNegative("Input bias current")).default(20e-9),
+        noiseDensity: q("noiseDensity", "Input noise density", nonNegative("Input noise density")).default(40e-9),
+        gbw: q("frequency", "Gain-bandwidth", positive("Gain-bandwidth")).default(2e6),
+        supply: q("voltage", "Amplifier supply", positive("Amplifier supply")).default(5),
+        swingLow: q("voltage", "Lowest output (above ground)", nonNegative("Lowest output")).default(0.01),
+        swingHigh: q("voltage", "Output headroom below the amplifier supply", nonNegative("Output headroom")).default(
+          0.05,
+        ),
+        filterHz: q("frequency", "Output filter corner", positive("Output filter corner")).nullable().default(null),
+        cmrrDb: z.number().min(0, { error: "CMRR cannot be negative" }).max(200).default(120),
+      })
+      .prefault({}),
+    limit: z
+      .number()
+      .int({ error: "Limit must be a whole number" })
+      .min(1, { error: "Limit must be at least 1" })
+      .max(10_000, { error: "Limit must be at most 10000" })
+      .default(200),
+  },
+  { error: "A requirement must be a JSON object" },
+);
 
 type Base = z.output<typeof baseSchema>;
 
@@ -175,7 +241,10 @@ function gainsOf(a: Base["amplifier"]): { gains: number[]; gainSet: GainSet | nu
 function normalize(b: Base): Requirement {
   const { max, fraction, loadMin } = b.drop;
   const fromFraction = fraction !== undefined ? fraction * b.supply.voltage : undefined;
-  const dropMax = max !== undefined && fromFraction !== undefined ? Math.min(max, fromFraction) : (max ?? fromFraction ?? 0.02 * b.supply.voltage);
+  const dropMax =
+    max !== undefined && fromFraction !== undefined
+      ? Math.min(max, fromFraction)
+      : (max ?? fromFraction ?? 0.02 * b.supply.voltage);
   const drop: Requirement["drop"] = { max: dropMax };
   if (fraction !== undefined) drop.fraction = fraction;
   if (loadMin !== undefined) drop.loadMin = loadMin;
@@ -203,16 +272,26 @@ function crossFieldRules(b: Base, ctx: z.RefinementCtx) {
   if (current.min > current.max) issue(["current", "min"], "Minimum current must not be above the maximum current");
   if (current.typical !== undefined && (current.typical < current.min || current.typical > current.max))
     issue(["current", "typical"], "Typical current must lie between the minimum and the maximum current");
-  if (drop.max !== undefined && drop.max >= supply.voltage) issue(["drop", "max"], "Allowed drop must be below the supply voltage");
-  if (drop.loadMin !== undefined && drop.loadMin >= supply.voltage) issue(["drop", "loadMin"], "Minimum load voltage must be below the supply voltage");
+  if (drop.max !== undefined && drop.max >= supply.voltage)
+    issue(["drop", "max"], "Allowed drop must be below the supply voltage");
+  if (drop.loadMin !== undefined && drop.loadMin >= supply.voltage)
+    issue(["drop", "loadMin"], "Minimum load voltage must be below the supply voltage");
   const bandMin = accuracy.bandMin ?? Math.max(current.min, 0.1 * current.max);
   const bandMax = accuracy.bandMax ?? current.max;
-  if (current.min <= current.max && bandMin > bandMax) issue(["accuracy", "bandMin"], "Accuracy band: lowest current must not be above the highest");
-  if (accuracy.bandMin !== undefined && (accuracy.bandMin < current.min * (1 - 1e-9) || accuracy.bandMin > current.max * (1 + 1e-9)))
+  if (current.min <= current.max && bandMin > bandMax)
+    issue(["accuracy", "bandMin"], "Accuracy band: lowest current must not be above the highest");
+  if (
+    accuracy.bandMin !== undefined &&
+    (accuracy.bandMin < current.min * (1 - 1e-9) || accuracy.bandMin > current.max * (1 + 1e-9))
+  )
     issue(["accuracy", "bandMin"], "Accuracy band must lie inside the current span");
-  if (accuracy.bandMax !== undefined && (accuracy.bandMax < current.min * (1 - 1e-9) || accuracy.bandMax > current.max * (1 + 1e-9)))
+  if (
+    accuracy.bandMax !== undefined &&
+    (accuracy.bandMax < current.min * (1 - 1e-9) || accuracy.bandMax > current.max * (1 + 1e-9))
+  )
     issue(["accuracy", "bandMax"], "Accuracy band must lie inside the current span");
-  if (temperature.min > temperature.max) issue(["temperature", "min"], "Lowest ambient temperature must not be above the highest");
+  if (temperature.min > temperature.max)
+    issue(["temperature", "min"], "Lowest ambient temperature must not be above the highest");
   if (temperature.min < -273.15) issue(["temperature", "min"], "Temperature is below absolute zero");
   if (temperature.max > 300) issue(["temperature", "max"], "Highest ambient temperature must be at most 300 °C");
   // Field-level refusals do not stop these rules from running: only check what is sound.
@@ -221,24 +300,33 @@ function crossFieldRules(b: Base, ctx: z.RefinementCtx) {
     const n = seriesValues(shunt.series, shunt.min, shunt.max).length;
     if (n === 0) issue(["shunt", "min"], `No ${shunt.series} value lies between the smallest and the largest shunt`);
     const g = gainsOf(amplifier).gains.length;
-    if (g === 0) issue(["amplifier", "gains"], "No gain to sweep: give at least one gain, or a gain range that a resistor pair can reach");
+    if (g === 0)
+      issue(
+        ["amplifier", "gains"],
+        "No gain to sweep: give at least one gain, or a gain range that a resistor pair can reach",
+      );
     if (n * g > maxSweepPairs)
-      issue(["shunt", "max"], `That is ${n * g} shunt and gain pairs; narrow the shunt bounds or the gains to at most ${maxSweepPairs}`);
+      issue(
+        ["shunt", "max"],
+        `That is ${n * g} shunt and gain pairs; narrow the shunt bounds or the gains to at most ${maxSweepPairs}`,
+      );
   }
-  if (Array.isArray(amplifier.gains) && amplifier.gains.length > 10_000) issue(["amplifier", "gains"], "At most 10000 gains");
+  if (Array.isArray(amplifier.gains) && amplifier.gains.length > 10_000)
+    issue(["amplifier", "gains"], "At most 10000 gains");
   if (!Array.isArray(amplifier.gains) && amplifier.gains && amplifier.gains.min > amplifier.gains.max)
     issue(["amplifier", "gains", "min"], "Lowest gain must not be above the highest");
   if (amplifier.swingLow >= amplifier.supply - amplifier.swingHigh)
     issue(["amplifier", "swingLow"], "Lowest output must be below the highest output the amplifier reaches");
 }
 
-export const requirementSchema: z.ZodType<Requirement, RequirementInput> = baseSchema.superRefine(crossFieldRules).transform(normalize);
+export const requirementSchema: z.ZodType<Requirement, RequirementInput> = baseSchema
+  .superRefine(crossFieldRules)
+  .transform(normalize);
 
 export type FieldErrors = Record<string, string[]>;
 
 export type ParseRequirementResult =
-  | { ok: true; requirement: Requirement }
-  | { ok: false; message: string; fieldErrors: FieldErrors };
+  { ok: true; requirement: Requirement } | { ok: false; message: string; fieldErrors: FieldErrors };
 
 /** Zod issues as `{ "current.max": ["…"] }`, the shape the API and the form both use. */
 export function issuesToFieldErrors(issues: readonly z.core.$ZodIssue[]): FieldErrors {

@@ -48,7 +48,8 @@ function independentChecks(r: Requirement, c: ReturnType<typeof evaluateCandidat
   const failed: string[] = [];
   const tol = 1 + 1e-9;
   if (c.burdenV > r.drop.max * tol || operatingBurden(m, c.shuntOhms) > r.drop.max * tol) failed.push("drop");
-  if (c.outputAtMaxV > Math.min(r.readout.fullScale, r.amplifier.supply - r.amplifier.swingHigh) * tol) failed.push("output");
+  if (c.outputAtMaxV > Math.min(r.readout.fullScale, r.amplifier.supply - r.amplifier.swingHigh) * tol)
+    failed.push("output");
   if (c.countsAtMin * tol < r.resolution.countsAtMin) failed.push("counts");
   if (c.ratingW * r.shunt.derating * tol < c.dissipationW) failed.push("power");
   if (c.bandwidthHz * tol < r.bandwidth.min) failed.push("bandwidth");
@@ -65,7 +66,9 @@ describe("solve: properties", () => {
         const sum = Object.values(s.rejected).reduce((a, b) => a + b, 0);
         expect(Object.keys(s.rejected)).toEqual([...rejectReasons]);
         expect(s.feasibleCount + sum).toBe(s.evaluated);
-        expect(s.evaluated).toBe(seriesValues(r.shunt.series, r.shunt.min, r.shunt.max).length * r.amplifier.gains.length);
+        expect(s.evaluated).toBe(
+          seriesValues(r.shunt.series, r.shunt.min, r.shunt.max).length * r.amplifier.gains.length,
+        );
       }),
       { numRuns: 40 },
     );
@@ -156,9 +159,13 @@ describe("solve: the listing", () => {
     const s = solve({ ...logger, limit: 50 }, { rankExpression: "burdenV" });
     const rest = s.candidates.filter((c) => c.feasible && !c.pareto);
     expect(rest.length).toBeGreaterThan(5);
-    for (let i = 1; i < rest.length; i++) expect((rest[i] as Candidate).burdenV).toBeGreaterThanOrEqual((rest[i - 1] as Candidate).burdenV);
-    const t = solve({ ...logger, limit: 50 }, { rankExpression: "-lsbA" }).candidates.filter((c) => c.feasible && !c.pareto);
-    for (let i = 1; i < t.length; i++) expect((t[i] as Candidate).lsbA).toBeLessThanOrEqual((t[i - 1] as Candidate).lsbA);
+    for (let i = 1; i < rest.length; i++)
+      expect((rest[i] as Candidate).burdenV).toBeGreaterThanOrEqual((rest[i - 1] as Candidate).burdenV);
+    const t = solve({ ...logger, limit: 50 }, { rankExpression: "-lsbA" }).candidates.filter(
+      (c) => c.feasible && !c.pareto,
+    );
+    for (let i = 1; i < t.length; i++)
+      expect((t[i] as Candidate).lsbA).toBeLessThanOrEqual((t[i - 1] as Candidate).lsbA);
   });
 
   it.each([
@@ -167,7 +174,7 @@ describe("solve: the listing", () => {
     ["burdenV; gain", /single expression/],
     ["voltage * 2", /unknown name "voltage"/],
     ["import({}, {})", /function "import" is not allowed/],
-    ["evaluate(\"1\")", /not allowed/],
+    ['evaluate("1")', /not allowed/],
     ["burdenV * 1000 +", /Ranking expression/],
     ["5 mV", /unknown name "mV"/],
     ["[1, 2]", /not allowed/],
@@ -184,7 +191,8 @@ describe("solve: the listing", () => {
     const rest = s.candidates.filter((c) => c.feasible && !c.pareto);
     expect(rest.length).toBeGreaterThan(5);
     const score = (c: Candidate) => c.burdenV * 1000 + c.errorAtMinPercent;
-    for (let i = 1; i < rest.length; i++) expect(score(rest[i] as Candidate)).toBeGreaterThanOrEqual(score(rest[i - 1] as Candidate) - 1e-12);
+    for (let i = 1; i < rest.length; i++)
+      expect(score(rest[i] as Candidate)).toBeGreaterThanOrEqual(score(rest[i - 1] as Candidate) - 1e-12);
   });
 });
 
@@ -240,7 +248,12 @@ describe("solve: the rejection tally matches pair-by-pair evaluation", () => {
   });
 
   it("isInSweep accepts swept pairs only", () => {
-    const r = req({ current: { min: "2 mA", max: "180 mA" }, supply: { voltage: "3 V" }, shunt: { series: "E24", min: "10 mohm", max: "1 ohm" }, amplifier: { gains: [20, 50] } });
+    const r = req({
+      current: { min: "2 mA", max: "180 mA" },
+      supply: { voltage: "3 V" },
+      shunt: { series: "E24", min: "10 mohm", max: "1 ohm" },
+      amplifier: { gains: [20, 50] },
+    });
     expect(isInSweep(r, { shuntOhms: 0.47, gain: 50 })).toBe(true);
     expect(isInSweep(r, { shuntOhms: 0.475, gain: 50 })).toBe(false); // an E96 value, not E24
     expect(isInSweep(r, { shuntOhms: 4.7, gain: 50 })).toBe(false); // outside the bounds

@@ -92,7 +92,13 @@ function rankScope(m: Model, sw: SweepArrays, p: number, scope: RankScope): Rank
 }
 
 /** Scores of the given pairs, written into `into` (a fresh array by default). */
-function scoreAll(m: Model, sw: SweepArrays, indices: Int32Array, rank: CompiledRank | null, into?: Float64Array): Float64Array {
+function scoreAll(
+  m: Model,
+  sw: SweepArrays,
+  indices: Int32Array,
+  rank: CompiledRank | null,
+  into?: Float64Array,
+): Float64Array {
   const nG = sw.gains.length;
   const scores = into ?? new Float64Array(sw.mask.length);
   if (rank) {
@@ -165,7 +171,10 @@ export function solve(req: Requirement, opts: SolveOptions = {}): SolveResult {
     return { ...c, scale: decadeScaleLabel(c.transimpedanceVPerA) ?? "" };
   });
 
-  const rejected = Object.fromEntries(rejectReasons.map((r, k) => [r, sw.rejectedCounts[k] ?? 0])) as Record<RejectReason, number>;
+  const rejected = Object.fromEntries(rejectReasons.map((r, k) => [r, sw.rejectedCounts[k] ?? 0])) as Record<
+    RejectReason,
+    number
+  >;
   return {
     requirement: req,
     evaluated: nPairs,

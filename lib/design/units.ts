@@ -123,7 +123,8 @@ export function parseQuantity(input: number | string, dim: Dimension, label?: st
     if (!Number.isFinite(input)) return { ok: false, message: `${prefix}${String(input)} is not a finite number` };
     return { ok: true, value: input };
   }
-  if (typeof input !== "string") return { ok: false, message: `${prefix}expected a number or a quantity such as "150 mA"` };
+  if (typeof input !== "string")
+    return { ok: false, message: `${prefix}expected a number or a quantity such as "150 mA"` };
   const raw = input.trim();
   if (raw === "") return { ok: false, message: `${prefix}a value is required` };
   const text = normalizeText(raw);
@@ -137,7 +138,10 @@ export function parseQuantity(input: number | string, dim: Dimension, label?: st
     const value = roundSig(Number(ratio[1]) * scale);
     if (dim === "fraction" && !perKelvin) return { ok: true, value };
     if (dim === "tempco" && (perKelvin || ratio[2] === "ppm")) return { ok: true, value };
-    return { ok: false, message: `${prefix}${raw} is ${perKelvin ? "a temperature coefficient" : "a ratio"}, not ${dimensionWords[dim]}` };
+    return {
+      ok: false,
+      message: `${prefix}${raw} is ${perKelvin ? "a temperature coefficient" : "a ratio"}, not ${dimensionWords[dim]}`,
+    };
   }
   // A drift per degree Celsius is the same per kelvin.
   const unitText = dim === "temperature" ? text : text.replace(/\/\s*degC/g, "/K");
@@ -145,7 +149,10 @@ export function parseQuantity(input: number | string, dim: Dimension, label?: st
   try {
     parsed = mathUnit(unitText);
   } catch {
-    return { ok: false, message: `${prefix}cannot read "${raw}" as ${dimensionWords[dim]} (try a number with a unit, e.g. ${example(dim)})` };
+    return {
+      ok: false,
+      message: `${prefix}cannot read "${raw}" as ${dimensionWords[dim]} (try a number with a unit, e.g. ${example(dim)})`,
+    };
   }
   const ref = referenceUnit[dim];
   const matches = ref === null ? parsed.dimensions.every((d) => d === 0) : parsed.equalBase(reference(ref));
@@ -194,14 +201,21 @@ function example(dim: Dimension): string {
 
 /** A zod field that accepts a number (SI) or a unit string and yields the SI number. */
 export const quantity = (dim: Dimension, label: string) =>
-  z.union([z.number(), z.string()]).transform((input, ctx) => {
-    const r = parseQuantity(input, dim, label);
-    if (!r.ok) {
-      ctx.addIssue({ code: "custom", message: r.message });
-      return z.NEVER;
-    }
-    return r.value;
-  });
+  z
+    .union([z.number(), z.string()], {
+      error: (iss) =>
+        iss.input === undefined || iss.input === null
+          ? `${label} is required`
+          : `${label}: expected a number in SI units or a quantity such as ${example(dim)}`,
+    })
+    .transform((input, ctx) => {
+      const r = parseQuantity(input, dim, label);
+      if (!r.ok) {
+        ctx.addIssue({ code: "custom", message: r.message });
+        return z.NEVER;
+      }
+      return r.value;
+    });
 
 const prefixes: Record<number, string> = {
   [-24]: "y",

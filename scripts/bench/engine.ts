@@ -64,7 +64,8 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
       const disc = m.vBus * m.vBus - 4 * m.vBus * m.iMax * R;
       burden = disc < 0 ? NaN : m.vBus - (m.vBus + Math.sqrt(disc)) / 2;
     }
-    const dropFails = !(burden <= m.dropMax * slack) || m.iMax * R > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
+    const dropFails =
+      !(burden <= m.dropMax * slack) || m.iMax * R > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
     const need = (m.iMax * m.iMax * R) / m.derating;
     let rating = NaN;
     for (let k = 0; k < ratings.length; k++) {
@@ -73,7 +74,8 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
         break;
       }
     }
-    const theta = m.thetaFixed ?? m.ratedRise / (Number.isNaN(rating) ? (ratings[ratings.length - 1] as number) : rating);
+    const theta =
+      m.thetaFixed ?? m.ratedRise / (Number.isNaN(rating) ? (ratings[ratings.length - 1] as number) : rating);
     const offsetA = (m.vosWorst + m.cmV) / R + m.ib;
     const noisePerR = Math.sqrt(m.en2 + m.fourKT * R) / R;
     const heat = m.alphaR * R * theta;
@@ -120,7 +122,8 @@ export async function run(): Promise<Record<string, number>> {
     base.rejected.every((c, k) => c === engine.rejectedCounts[k]) &&
     base.mask.every((b, p) => b === engine.mask[p]) &&
     base.errMin.every((e, p) => Math.abs(e - (engine.errMin[p] as number)) <= 1e-12 * Math.abs(e));
-  if (!same) throw new Error(`bench: baseline (${base.feasible} feasible) and engine (${engine.feasibleCount}) disagree`);
+  if (!same)
+    throw new Error(`bench: baseline (${base.feasible} feasible) and engine (${engine.feasibleCount}) disagree`);
 
   // Warm both up until the JIT has settled, then interleave single runs so that load from
   // other processes on the machine falls on both alike.
