@@ -2,7 +2,7 @@
 // an edit is a compare-and-set on designs.revision, so a stale edit writes nothing.
 import { and, asc, desc, eq, sql } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
-import type { CandidateDetail, Choice, Requirement } from "@/lib/design";
+import { parseRequirement, type CandidateDetail, type Choice, type Requirement } from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
 import { getDb, type Tx } from "../client";
 import { designRevisions, designs, reviews, users, type DesignStatus } from "../schema";
@@ -11,6 +11,15 @@ import { recordAudit } from "./audit";
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 /** Ids come from URLs: anything that is not a UUID cannot name a design (and must not reach SQL as one). */
 export const isUuid = (id: string) => UUID.test(id);
+
+/**
+ * A stored requirement, read back through the engine's schema so defaults added since it was saved
+ * are filled in (the normalized form parses to itself). Kept as stored if it no longer parses.
+ */
+export function storedRequirement(stored: unknown): Requirement {
+  const parsed = parseRequirement(stored);
+  return parsed.ok ? parsed.requirement : (stored as Requirement);
+}
 
 export type SavedFigures = { requirement: Requirement; choice: Choice; metrics: CandidateDetail };
 
@@ -138,7 +147,7 @@ export async function listRevisions(designId: string) {
   const approvals = await approvalsOf(designId);
   return rows.map((r) => ({
     ...r,
-    requirement: r.requirement as unknown as Requirement,
+    requirement: storedRequirement(r.requirement),
     metrics: r.metrics as unknown as CandidateDetail,
     createdAt: r.createdAt.toISOString(),
     approval: approvals.get(r.revision) ?? null,
@@ -159,7 +168,7 @@ export async function getDesignView(designId: string, teamId: string): Promise<D
     project: design.project,
     status: design.status,
     revision: design.revision,
-    requirement: current.requirement as unknown as Requirement,
+    requirement: storedRequirement(current.requirement),
     choice: current.choice,
     metrics: current.metrics as unknown as CandidateDetail,
     authorId: current.authorId,

@@ -1,6 +1,6 @@
 // Labels, units and "which way is better" for the fields of a saved design, shared by the
 // revision diff, the compare page and the mails. Pure: runs on the server and in the browser.
-import { formatSI } from "@/lib/design";
+import { formatPercent, formatSI } from "@/lib/design";
 
 export type FieldKind = "si" | "percent" | "fraction" | "ppm" | "plain" | "db" | "celsius" | "count" | "text";
 
@@ -89,6 +89,9 @@ export const metricFields: Record<string, FieldInfo> = {
   lowestAccurateCurrentA: { label: "Lowest current meeting the accuracy target", kind: "si", unit: "A", better: "lower" },
 };
 
+/** A number without SI prefixes (for %, dB, °C, ppm where a prefix would read wrong). */
+const plain = (v: number) => String(Number(v.toPrecision(4)));
+
 function one(value: unknown, info: FieldInfo): string {
   if (value === null || value === undefined) return "—";
   if (typeof value !== "number") return String(value);
@@ -96,15 +99,15 @@ function one(value: unknown, info: FieldInfo): string {
     case "si":
       return formatSI(value, info.unit ?? "");
     case "percent":
-      return `${formatSI(value, "")} %`;
+      return formatPercent(value / 100);
     case "fraction":
-      return `${formatSI(value * 100, "")} %`;
+      return formatPercent(value);
     case "ppm":
-      return `${formatSI(value * 1e6, "")} ppm/K`;
+      return `${plain(value * 1e6)} ppm/K`;
     case "db":
-      return `${formatSI(value, "")} dB`;
+      return `${plain(value)} dB`;
     case "celsius":
-      return `${formatSI(value, "")} °C`;
+      return `${plain(value)} °C`;
     case "count":
       return info.unit ? `${value} ${info.unit}` : String(value);
     case "plain":

@@ -1,7 +1,7 @@
 // Who hears about a design's review, and what the mail says. Plain text, numbers via formatSI.
 import "server-only";
 import { listMembers } from "@/db/queries/users";
-import { formatSI, type CandidateDetail, type Choice } from "@/lib/design";
+import { formatPercent, formatSI, type CandidateDetail, type Choice } from "@/lib/design";
 import { sendMail } from "@/lib/mail/send";
 
 type DesignRef = { id: string; name: string; project: string | null; revision: number; choice: Choice; metrics: CandidateDetail };
@@ -10,7 +10,7 @@ const summary = (d: DesignRef) =>
   [
     `Design: ${d.name}${d.project ? ` (${d.project})` : ""}, revision ${d.revision}`,
     `Shunt ${formatSI(d.choice.shuntOhms, "Ω")}, gain ${formatSI(d.choice.gain, "")}, burden ${formatSI(d.metrics.burdenV, "V")} at maximum current,`,
-    `worst-case error ${formatSI(d.metrics.errorAtMinPercent, "")} % at minimum current.`,
+    `worst-case error ${formatPercent(d.metrics.errorAtMinPercent / 100)} at minimum current.`,
   ].join("\n");
 
 /** Submit: the team's reviewers (the owners when there is no reviewer). */

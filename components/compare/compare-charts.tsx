@@ -1,0 +1,88 @@
+"use client";
+// Overlaid curves of the compared designs: worst-case error and burden against current, log–log.
+// The series are computed by the engine on the server; this only draws them.
+import { Axis, Grid, LineSeries, XYChart, buildChartTheme } from "@visx/xychart";
+import { formatPercent, formatSI } from "@/lib/design";
+import { seriesColours } from "./colours";
+
+export type CurveSeries = { key: string; label: string; points: { x: number; y: number }[] };
+
+
+const theme = buildChartTheme({
+  backgroundColor: "transparent",
+  colors: seriesColours,
+  gridColor: "rgb(219 218 211)",
+  gridColorDark: "rgb(128 132 138)",
+  tickLength: 4,
+  svgLabelSmall: { fill: "rgb(82 86 92)", fontSize: 11 },
+  svgLabelBig: { fill: "rgb(82 86 92)", fontSize: 12 },
+});
+
+function logDomain(values: number[]): [number, number] {
+  const v = values.filter((x) => Number.isFinite(x) && x > 0);
+  if (v.length === 0) return [1e-6, 1];
+  const lo = Math.min(...v);
+  const hi = Math.max(...v);
+  const a = 10 ** Math.floor(Math.log10(lo));
+  const b = 10 ** Math.ceil(Math.log10(hi));
+  return [a, b > a ? b : a * 10];
+}
+
+const decades = ([a, b]: [number, number]) => {
+  const out: number[] = [];
+  for (let e = Math.round(Math.log10(a)); e <= Math.round(Math.log10(b)); e++) out.push(10 ** e);
+  return out;
+};
+
+const margin = { top: 12, right: 16, bottom: 40, left: 76 };
+
+export function CurveChart({ title, series, yUnit, yLabel, width, height, testId }: {
+  title: string;
+  series: CurveSeries[];
+  yUnit: string;
+  yLabel: string;
+  width: number;
+  height: number;
+  testId: string;
+}) {
+  const xd = logDomain(series.flatMap((s) => s.points.map((p) => p.x)));
+  const yd = logDomain(series.flatMap((s) => s.points.map((p) => p.y)));
+  const fmtY = (v: number) => (yUnit === "%" ? formatPercent(v / 100) : formatSI(v, yUnit));
+  return (
+    <figure className="flex flex-col gap-1" data-testid={testId}>
+      <figcaption className="text-xs font-semibold text-ink-muted">{title}</figcaption>
+      <XYChart
+        width={width}
+        height={height}
+        margin={margin}
+        theme={theme}
+        xScale={{ type: "log", domain: xd }}
+        yScale={{ type: "log", domain: yd }}
+        accessibilityLabel={title}
+      >
+        <Grid columns rows numTicks={6} lineStyle={{ strokeWidth: 0.5 }} />
+        <Axis orientation="bottom" label="Current" tickValues={decades(xd)} tickFormat={(v: number) => formatSI(v, "A")} />
+        <Axis orientation="left" label={yLabel} labelOffset={44} tickValues={decades(yd)} tickFormat={(v: number) => fmtY(v)} />
+        {series.map((s, i) => (
+          <LineSeries
+            key={s.key}
+            dataKey={s.label}
+            data={s.points.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y) && p.x > 0 && p.y > 0)}
+            xAccessor={(d: { x: number; y: number }) => d.x}
+            yAccessor={(d: { x: number; y: number }) => d.y}
+            stroke={seriesColours[i % seriesColours.length]}
+            strokeWidth={2}
+          />
+        ))}
+      </XYChart>
+      <ul className="flex flex-wrap gap-3 text-xs">
+        {series.map((s, i) => (
+          <li key={s.key} className="flex items-center gap-1.5">
+            <span aria-hidden className="inline-block h-0.5 w-4" style={{ background: seriesColours[i % seriesColours.length] }} />
+            {s.label}
+          </li>
+        ))}
+      </ul>
+    </figure>
+  );
+}

@@ -1,0 +1,87 @@
+import Link from "next/link";
+import { StatusBadge } from "@/components/review/status-badge";
+import type { DesignView, DesignViewer } from "@/lib/design-view";
+import { bestIndexes } from "@/lib/designs/compare";
+import { choiceFields, flatten, formatField, metricFields, requirementFields, type FieldInfo } from "@/lib/designs/figures";
+import { CompareVerdict } from "./compare-verdict";
+import { seriesColours } from "./colours";
+
+type Row = { key: string; info: FieldInfo; values: unknown[] };
+
+function rows(fields: Record<string, FieldInfo>, objects: unknown[]): Row[] {
+  const flat = objects.map((o) => flatten(o));
+  return Object.entries(fields)
+    .filter(([path]) => flat.some((f) => f[path] !== undefined && f[path] !== null))
+    .map(([path, info]) => ({ key: path, info, values: flat.map((f) => f[path]) }));
+}
+
+function Section({ title, list, mark }: { title: string; list: Row[]; mark: boolean }) {
+  return (
+    <>
+      <tr>
+        <th colSpan={99} className="bg-sunken px-3 py-1 text-left text-2xs font-semibold uppercase tracking-wide text-ink-muted">
+          {title}
+        </th>
+      </tr>
+      {list.map((r) => {
+        const best = mark ? bestIndexes(r.values as number[], r.info) : [];
+        const differs = new Set(r.values.map((v) => JSON.stringify(v ?? null))).size > 1;
+        return (
+          <tr key={r.key} className="border-b border-line last:border-0" data-testid={`row-${r.key}`}>
+            <th scope="row" className={`px-3 py-1 text-left font-normal ${differs ? "text-ink" : "text-ink-muted"}`}>
+              {r.info.label}
+              {r.info.better && (
+                <span className="ml-1 whitespace-nowrap text-2xs text-ink-faint" title={`${r.info.better} is better`}>
+                  {r.info.better === "lower" ? "↓ better" : "↑ better"}
+                </span>
+              )}
+            </th>
+            {r.values.map((v, i) => (
+              <td key={i} className={`px-3 py-1 text-right ${best.includes(i) ? "font-semibold text-good" : ""}`} data-best={best.includes(i) || undefined}>
+                {formatField(v, r.info)}
+                {best.includes(i) && <span className="ml-1 text-2xs" aria-label="best in this row">best</span>}
+              </td>
+            ))}
+          </tr>
+        );
+      })}
+    </>
+  );
+}
+
+/** Requirement, choice and every figure side by side, the best value in each figure row marked. */
+export function CompareTable({ designs, viewer }: { designs: DesignView[]; viewer: DesignViewer }) {
+  return (
+    <div className="overflow-x-auto rounded-panel border border-line bg-panel">
+      <table className="w-full text-sm">
+        <thead>
+          <tr className="border-b border-line align-top">
+            <th className="min-w-72 px-3 py-2 text-left text-xs font-medium text-ink-muted">Design</th>
+            {designs.map((d, i) => (
+              <th key={d.id} className="px-3 py-2 text-right font-normal" data-testid="compare-column">
+                <div className="flex flex-col items-end gap-1">
+                  <span className="flex items-center gap-1.5">
+                    <span aria-hidden className="inline-block h-2 w-2 rounded-full" style={{ background: seriesColours[i % seriesColours.length] }} />
+                    <Link href={`/designs/${d.id}`} className="font-semibold hover:text-copper">
+                      {d.name}
+                    </Link>
+                  </span>
+                  <span className="text-xs text-ink-muted">
+                    {d.project ?? "no project"} · revision {d.revision} · {d.authorName}
+                  </span>
+                  <StatusBadge status={d.status} />
+                  <CompareVerdict design={d} viewer={viewer} />
+                </div>
+              </th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          <Section title="Choice" list={rows(choiceFields, designs.map((d) => d.choice))} mark={false} />
+          <Section title="Figures (from the engine, at each design's own requirement)" list={rows(metricFields, designs.map((d) => d.metrics))} mark />
+          <Section title="Requirement" list={rows(requirementFields, designs.map((d) => d.requirement))} mark={false} />
+        </tbody>
+      </table>
+    </div>
+  );
+}
