@@ -1,5 +1,6 @@
 // Expected readings for a bench check of the built front end (the build sheet's table).
-import { errorAt } from "./error-budget";
+import { errorAtWith } from "./error-budget";
+import { buildModel } from "./model";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
 
@@ -16,8 +17,9 @@ export function benchCheck(req: Requirement, choice: Choice): BenchCheckRow[] {
     { label: "Maximum current", currentA: max },
   );
   const tz = choice.shuntOhms * choice.gain;
+  const m = buildModel(req);
   return points.map(({ label, currentA }) => {
-    const { worstA } = errorAt(req, choice, currentA);
+    const { worstA } = errorAtWith(req, m, choice, currentA);
     return {
       label,
       currentA,

@@ -1,5 +1,5 @@
 // One candidate's figures (DESIGN.md §3), in the API's field names.
-import { errorAt, lowestAccurateCurrent } from "./error-budget";
+import { errorAtWith, lowestAccurateCurrent } from "./error-budget";
 import { seriesValues } from "./eseries";
 import { type Model, buildModel, largestRating, noiseRmsA, operatingBurden, signalBandwidth } from "./model";
 import { pairMask, reasonsOf, shuntFigures } from "./pair";
@@ -35,7 +35,7 @@ export function evaluateCandidate(req: Requirement, choice: Choice): CandidateDe
   const base = candidateFigures(m, R, G);
   const sf = shuntFigures(m, R);
   const burdenOp = operatingBurden(m, R);
-  const pct = (I: number) => errorAt(req, choice, I).worstPercent;
+  const pct = (I: number) => errorAtWith(req, m, choice, I).worstPercent;
   const typical = req.current.typical;
   return {
     ...base,
@@ -48,7 +48,7 @@ export function evaluateCandidate(req: Requirement, choice: Choice): CandidateDe
     headroomV: m.outCeil - base.outputAtMaxV,
     errorAtTypicalPercent: typical === undefined ? null : pct(typical),
     errorAtMaxPercent: pct(m.iMax),
-    rssAtMinPercent: errorAt(req, choice, m.iMin).rssPercent,
+    rssAtMinPercent: errorAtWith(req, m, choice, m.iMin).rssPercent,
     accuracyBandPercent: Math.max(pct(m.bandLo), pct(m.bandHi)),
     lowestAccurateCurrentA: lowestAccurateCurrent(req, m, choice),
   };

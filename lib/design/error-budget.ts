@@ -75,7 +75,12 @@ function combine(terms: BudgetTerm[], I: number): ErrorAtResult {
 }
 
 export function errorAt(req: Requirement, choice: Choice, currentA: number): ErrorAtResult {
-  return combine(budgetTerms(req, buildModel(req), choice, currentA), currentA);
+  return errorAtWith(req, buildModel(req), choice, currentA);
+}
+
+/** errorAt with the model already built (for callers that ask at many currents). */
+export function errorAtWith(req: Requirement, m: Model, choice: Choice, currentA: number): ErrorAtResult {
+  return combine(budgetTerms(req, m, choice, currentA), currentA);
 }
 
 /** n currents spaced evenly on a log scale from a to b inclusive. */
