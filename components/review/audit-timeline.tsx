@@ -25,6 +25,7 @@ const words: Record<string, (d: Record<string, unknown>) => string> = {
   "invitation.created": (d) => `invited ${String(d.email)} as ${String(d.role)}${d.newTeam ? ` to found “${String(d.newTeam)}”` : ""}`,
   "invitation.revoked": (d) => `revoked the invitation of ${String(d.email)}`,
   "invitation.accepted": (d) => `accepted the invitation for ${String(d.email)} and joined as ${String(d.role)}`,
+  "team.created": (d) => `started the team “${String(d.name)}” for ${String(d.firstOwner)}`,
   "sign-in.failed": (d) => `failed sign-in for ${String(d.email)} (${String(d.reason)})`,
 };
 

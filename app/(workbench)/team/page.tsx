@@ -1,5 +1,11 @@
 import type { Metadata } from "next";
+import Link from "next/link";
+import { TeamAuditLog } from "@/components/team/audit-log";
+import { InvitationsPanel } from "@/components/team/invitations-panel";
+import { RemoveMembers } from "@/components/team/invitations-remove";
 import { MemberTable } from "@/components/team/member-table";
+import { listTeamAudit } from "@/db/queries/audit";
+import { listInvitations } from "@/db/queries/invitations";
 import { listMembers } from "@/db/queries/users";
 import { requirePageCaller } from "@/lib/auth/gate";
 
@@ -23,6 +29,26 @@ export default async function TeamPage() {
         canEdit={caller.role === "owner"}
         selfId={caller.userId}
       />
+      {caller.role === "owner" && <OwnerSections teamId={caller.teamId} selfId={caller.userId} members={members} />}
     </div>
+  );
+}
+
+/** Invitations, removing members, the outbox and the team's log: owners only. */
+async function OwnerSections({ teamId, selfId, members }: { teamId: string; selfId: string; members: Awaited<ReturnType<typeof listMembers>> }) {
+  const [invitations, audit] = await Promise.all([listInvitations(teamId), listTeamAudit(teamId, 200)]);
+  return (
+    <>
+      <p className="text-xs text-ink-muted">
+        Mail the workbench has sent for the team is in the{" "}
+        <Link href="/outbox" className="text-copper underline">
+          outbox
+        </Link>{" "}
+        while no SMTP server is configured.
+      </p>
+      <InvitationsPanel invitations={invitations} />
+      <RemoveMembers members={members} selfId={selfId} />
+      <TeamAuditLog entries={audit.map((e) => ({ ...e, at: e.at.toISOString() }))} />
+    </>
   );
 }

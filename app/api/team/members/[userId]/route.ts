@@ -13,3 +13,4 @@ export const PATCH = apiRoute(
     return { userId, role: body.role };
   },
 );
+export { removeMemberRoute as DELETE } from "@/app/api/invitations/remove-member";

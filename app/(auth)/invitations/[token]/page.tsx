@@ -1,0 +1,55 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { AcceptInvitationForm } from "@/components/team/invitations-accept";
+import { Logo } from "@/components/logo";
+import { findInvitationByToken } from "@/db/queries/invitations";
+import { formatWhen } from "@/lib/designs/when";
+
+export const metadata: Metadata = { title: "Invitation" };
+export const dynamic = "force-dynamic";
+
+const why = {
+  accepted: "This invitation has been used already. Sign in with the account it created.",
+  revoked: "The team's owner revoked this invitation. Ask them for a new one if you still need access.",
+  expired: "This invitation has expired. Ask the team's owner for a new one.",
+} as const;
+
+export default async function InvitationPage({ params }: { params: Promise<{ token: string }> }) {
+  const { token } = await params;
+  const invitation = token.length >= 20 && token.length <= 200 ? await findInvitationByToken(token) : null;
+  return (
+    <main className="mx-auto flex min-h-screen max-w-md flex-col justify-center gap-6 px-6 py-10">
+      <div className="flex items-center gap-2 text-lg font-semibold">
+        <Logo className="h-6 w-6" /> Sensewright
+      </div>
+      <div className="rounded-panel border border-line bg-panel p-6">
+        {!invitation ? (
+          <>
+            <h1 className="mb-2 text-base font-semibold">This invitation link is not valid</h1>
+            <p className="text-ink-muted">Check that the whole link was copied from the mail, or ask the team&apos;s owner for a new one.</p>
+          </>
+        ) : invitation.status !== "pending" ? (
+          <>
+            <h1 className="mb-2 text-base font-semibold">Invitation to {invitation.teamName}</h1>
+            <p className="text-ink-muted" data-testid="invitation-state">
+              {why[invitation.status]}
+            </p>
+          </>
+        ) : (
+          <>
+            <h1 className="mb-1 text-base font-semibold">Join {invitation.teamName}</h1>
+            <p className="mb-4 text-xs text-ink-muted">
+              You are invited as a <strong className="text-ink">{invitation.role}</strong>. The link works once and expires {formatWhen(invitation.expiresAt)}.
+            </p>
+            <AcceptInvitationForm token={token} email={invitation.email} hasAccount={invitation.hasAccount} />
+          </>
+        )}
+      </div>
+      <p className="text-center text-xs text-ink-muted">
+        <Link href="/sign-in" className="hover:text-ink">
+          Sign in instead
+        </Link>
+      </p>
+    </main>
+  );
+}

@@ -1,0 +1,224 @@
+// Invitations (a single-use link, only its hash kept, 7 days), accepting one, founding a new team
+// through one, and removing members. A team always keeps at least one owner.
+import { createHash, randomBytes } from "node:crypto";
+import { and, desc, eq, gt, isNull, sql } from "drizzle-orm";
+import { getDb } from "../client";
+import { invitations, memberships, teams, users, type Role } from "../schema";
+import { recordAudit } from "./audit";
+
+export const INVITATION_DAYS = 7;
+const DAY_MS = 24 * 60 * 60 * 1000;
+
+export const hashToken = (token: string) => createHash("sha256").update(token, "utf8").digest("hex");
+
+export type InvitationStatus = "pending" | "accepted" | "revoked" | "expired";
+
+function statusOf(i: { acceptedAt: Date | null; revokedAt: Date | null; expiresAt: Date }, now = new Date()): InvitationStatus {
+  if (i.acceptedAt) return "accepted";
+  if (i.revokedAt) return "revoked";
+  return i.expiresAt <= now ? "expired" : "pending";
+}
+
+export type CreateInvitationResult =
+  | { ok: true; id: string; token: string; teamId: string; teamName: string; email: string; role: Role; expiresAt: string }
+  | { ok: false; status: 409; message: string };
+
+/**
+ * Invites `email` to the caller's team with `role` — or, with `newTeam`, creates that team and
+ * invites `email` as its first owner.
+ */
+export async function createInvitation(input: {
+  teamId: string;
+  invitedBy: string;
+  email: string;
+  role: Role;
+  newTeam?: string;
+}): Promise<CreateInvitationResult> {
+  const db = await getDb();
+  const email = input.email.trim().toLowerCase();
+  const token = randomBytes(32).toString("base64url");
+  const expiresAt = new Date(Date.now() + INVITATION_DAYS * DAY_MS);
+  return db.transaction(async (tx): Promise<CreateInvitationResult> => {
+    let teamId = input.teamId;
+    let teamName = "";
+    if (input.newTeam) {
+      const [team] = await tx.insert(teams).values({ name: input.newTeam.trim() }).returning();
+      if (!team) throw new Error("team not created");
+      teamId = team.id;
+      teamName = team.name;
+    } else {
+      const member = await tx
+        .select({ id: users.id })
+        .from(memberships)
+        .innerJoin(users, eq(users.id, memberships.userId))
+        .where(and(eq(memberships.teamId, teamId), sql`lower(${users.email}) = ${email}`));
+      if (member[0]) return { ok: false, status: 409, message: `${email} is already a member of this team.` };
+      const pending = await tx
+        .select({ id: invitations.id })
+        .from(invitations)
+        .where(
+          and(
+            eq(invitations.teamId, teamId),
+            sql`lower(${invitations.email}) = ${email}`,
+            isNull(invitations.acceptedAt),
+            isNull(invitations.revokedAt),
+            gt(invitations.expiresAt, sql`now()`),
+          ),
+        );
+      if (pending[0]) return { ok: false, status: 409, message: `${email} already has a pending invitation; revoke it first to send a new one.` };
+      const [team] = await tx.select({ name: teams.name }).from(teams).where(eq(teams.id, teamId));
+      teamName = team?.name ?? "";
+    }
+    const role: Role = input.newTeam ? "owner" : input.role;
+    const [row] = await tx
+      .insert(invitations)
+      .values({ teamId, email, role, tokenHash: hashToken(token), invitedBy: input.invitedBy, expiresAt })
+      .returning({ id: invitations.id });
+    if (!row) throw new Error("invitation not stored");
+    // Audited in the inviting team's log (and, for a new team, in that team's log too).
+    const details = { email, role, expiresAt: expiresAt.toISOString(), ...(input.newTeam ? { newTeam: teamName, newTeamId: teamId } : {}) };
+    await recordAudit({ teamId: input.teamId, actorId: input.invitedBy, action: "invitation.created", targetType: "invitation", targetId: row.id, details }, tx);
+    if (input.newTeam) {
+      await recordAudit({ teamId, actorId: input.invitedBy, action: "team.created", targetType: "team", targetId: teamId, details: { name: teamName, firstOwner: email } }, tx);
+    }
+    return { ok: true, id: row.id, token, teamId, teamName, email, role, expiresAt: expiresAt.toISOString() };
+  });
+}
+
+export async function listInvitations(teamId: string) {
+  const db = await getDb();
+  const rows = await db
+    .select({
+      id: invitations.id,
+      email: invitations.email,
+      role: invitations.role,
+      expiresAt: invitations.expiresAt,
+      acceptedAt: invitations.acceptedAt,
+      revokedAt: invitations.revokedAt,
+      createdAt: invitations.createdAt,
+      invitedByName: users.name,
+    })
+    .from(invitations)
+    .innerJoin(users, eq(users.id, invitations.invitedBy))
+    .where(eq(invitations.teamId, teamId))
+    .orderBy(desc(invitations.createdAt));
+  return rows.map((r) => ({
+    id: r.id,
+    email: r.email,
+    role: r.role,
+    status: statusOf(r),
+    invitedByName: r.invitedByName,
+    createdAt: r.createdAt.toISOString(),
+    expiresAt: r.expiresAt.toISOString(),
+    acceptedAt: r.acceptedAt?.toISOString() ?? null,
+    revokedAt: r.revokedAt?.toISOString() ?? null,
+  }));
+}
+
+export type RevokeResult = { ok: true; revokedAt: string } | { ok: false; status: 404 | 409; message: string };
+
+export async function revokeInvitation(teamId: string, id: string, actorId: string): Promise<RevokeResult> {
+  const db = await getDb();
+  return db.transaction(async (tx): Promise<RevokeResult> => {
+    const [inv] = await tx
+      .select()
+      .from(invitations)
+      .where(and(eq(invitations.id, id), eq(invitations.teamId, teamId)))
+      .for("update");
+    if (!inv) return { ok: false, status: 404, message: "That invitation was not found in your team." };
+    const status = statusOf(inv);
+    if (status !== "pending") return { ok: false, status: 409, message: `That invitation is already ${status}.` };
+    const [row] = await tx.update(invitations).set({ revokedAt: sql`now()` }).where(eq(invitations.id, id)).returning({ revokedAt: invitations.revokedAt });
+    await recordAudit({ teamId, actorId, action: "invitation.revoked", targetType: "invitation", targetId: id, details: { email: inv.email, role: inv.role } }, tx);
+    return { ok: true, revokedAt: (row?.revokedAt ?? new Date()).toISOString() };
+  });
+}
+
+/** The invitation a link names, with its team, whatever its state (the page explains each). */
+export async function findInvitationByToken(token: string) {
+  const db = await getDb();
+  const rows = await db
+    .select({ invitation: invitations, teamName: teams.name })
+    .from(invitations)
+    .innerJoin(teams, eq(teams.id, invitations.teamId))
+    .where(eq(invitations.tokenHash, hashToken(token)))
+    .limit(1);
+  const row = rows[0];
+  if (!row) return null;
+  const { invitation: i } = row;
+  const existing = await db.select({ id: users.id }).from(users).where(sql`lower(${users.email}) = ${i.email.toLowerCase()}`);
+  return { id: i.id, teamId: i.teamId, teamName: row.teamName, email: i.email, role: i.role, status: statusOf(i), expiresAt: i.expiresAt.toISOString(), hasAccount: !!existing[0] };
+}
+
+export type AcceptResult =
+  | { ok: true; userId: string; teamId: string; teamName: string; email: string; role: Role }
+  | { ok: false; status: 403 | 404 | 409 | 410 | 422; message: string };
+
+/**
+ * Accepts an invitation once: a new account gets the name and password hash given; an existing
+ * account must prove its password (`checkPassword`). Marking it accepted is a compare-and-set.
+ */
+export async function acceptInvitation(input: {
+  token: string;
+  name: string;
+  passwordHash: string;
+  checkPassword: (hash: string) => Promise<boolean>;
+}): Promise<AcceptResult> {
+  const db = await getDb();
+  return db.transaction(async (tx): Promise<AcceptResult> => {
+    const [inv] = await tx.select().from(invitations).where(eq(invitations.tokenHash, hashToken(input.token))).for("update");
+    if (!inv) return { ok: false, status: 404, message: "That invitation link is not valid." };
+    const status = statusOf(inv);
+    if (status === "accepted") return { ok: false, status: 409, message: "That invitation has been used already; sign in instead." };
+    if (status === "revoked") return { ok: false, status: 410, message: "That invitation was revoked by the team's owner." };
+    if (status === "expired") return { ok: false, status: 410, message: `That invitation expired on ${inv.expiresAt.toISOString().slice(0, 10)}; ask the owner for a new one.` };
+    const [team] = await tx.select({ name: teams.name }).from(teams).where(eq(teams.id, inv.teamId));
+    const [existing] = await tx.select().from(users).where(sql`lower(${users.email}) = ${inv.email.toLowerCase()}`);
+    let userId: string;
+    if (existing) {
+      if (!(await input.checkPassword(existing.passwordHash)))
+        return { ok: false, status: 403, message: "An account with this e-mail exists: enter its password to join the team." };
+      const member = await tx.select({ id: memberships.id }).from(memberships).where(and(eq(memberships.teamId, inv.teamId), eq(memberships.userId, existing.id)));
+      if (member[0]) return { ok: false, status: 409, message: "You are a member of this team already." };
+      userId = existing.id;
+    } else {
+      if (!input.name.trim()) return { ok: false, status: 422, message: "Give your name: it is how the team sees you." };
+      const [u] = await tx.insert(users).values({ email: inv.email, name: input.name.trim(), passwordHash: input.passwordHash }).returning({ id: users.id });
+      if (!u) throw new Error("user not created");
+      userId = u.id;
+    }
+    await tx.insert(memberships).values({ teamId: inv.teamId, userId, role: inv.role });
+    await tx.update(invitations).set({ acceptedAt: sql`now()` }).where(and(eq(invitations.id, inv.id), isNull(invitations.acceptedAt)));
+    await recordAudit(
+      { teamId: inv.teamId, actorId: userId, action: "invitation.accepted", targetType: "invitation", targetId: inv.id, details: { email: inv.email, role: inv.role, newAccount: !existing } },
+      tx,
+    );
+    return { ok: true, userId, teamId: inv.teamId, teamName: team?.name ?? "", email: inv.email, role: inv.role };
+  });
+}
+
+export type RemoveResult = { ok: true } | { ok: false; status: 404 | 409; message: string };
+
+/** Removes a member from the team (not their account); refuses to remove the last owner. */
+export async function removeMember(teamId: string, userId: string, actorId: string): Promise<RemoveResult> {
+  const db = await getDb();
+  return db.transaction(async (tx): Promise<RemoveResult> => {
+    const [m] = await tx
+      .select({ role: memberships.role, email: users.email, name: users.name })
+      .from(memberships)
+      .innerJoin(users, eq(users.id, memberships.userId))
+      .where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)))
+      .for("update", { of: memberships });
+    if (!m) return { ok: false, status: 404, message: "That person is not a member of this team." };
+    if (m.role === "owner") {
+      const [owners] = await tx
+        .select({ n: sql<number>`count(*)::int` })
+        .from(memberships)
+        .where(and(eq(memberships.teamId, teamId), eq(memberships.role, "owner")));
+      if ((owners?.n ?? 0) <= 1) return { ok: false, status: 409, message: "A team must keep at least one owner: make someone else owner first." };
+    }
+    await tx.delete(memberships).where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)));
+    await recordAudit({ teamId, actorId, action: "member.removed", targetType: "user", targetId: userId, details: { email: m.email, name: m.name, role: m.role } }, tx);
+    return { ok: true };
+  });
+}
