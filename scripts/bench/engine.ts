@@ -79,6 +79,9 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
     const offsetA = (m.vosWorst + m.cmV) / R + m.ib;
     const noisePerR = Math.sqrt(m.en2 + m.fourKT * R) / R;
     const heat = m.alphaR * R * theta;
+    const gainLo = m.gainConst + heat * m.bandLo * m.bandLo;
+    const gainHi = m.gainConst + heat * m.bandHi * m.bandHi;
+    const gainMin = m.gainConst + heat * m.iMin * m.iMin;
     for (let j = 0; j < nG; j++) {
       const G = gains[j] as number;
       const rg = R * G;
@@ -88,13 +91,13 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
       if (Number.isNaN(rating)) bits |= 8;
       if ((bw[j] as number) < m.bwReq / slack) bits |= 16;
       const fixedA = offsetA + m.lsbV / (2 * rg) + m.crest * noisePerR * (sqrtNbw[j] as number);
-      const lo = m.gainConst + heat * m.bandLo * m.bandLo + fixedA / m.bandLo;
-      const hi = m.gainConst + heat * m.bandHi * m.bandHi + fixedA / m.bandHi;
+      const lo = gainLo + fixedA / m.bandLo;
+      const hi = gainHi + fixedA / m.bandHi;
       if (lo > m.accRatio * slack || hi > m.accRatio * slack) bits |= 32;
       if (m.swingLow / rg > m.iMin * slack) bits |= 64;
       const p = i * nG + j;
       mask[p] = bits;
-      errMin[p] = m.gainConst + heat * m.iMin * m.iMin + fixedA / m.iMin;
+      errMin[p] = gainMin + fixedA / m.iMin;
       if (bits === 0) feasible++;
       else {
         const k = 31 - Math.clz32(bits & -bits);
@@ -135,7 +138,7 @@ export async function run(): Promise<Record<string, number>> {
   }
   const sweepTimes: number[] = [];
   const baseTimes: number[] = [];
-  for (let k = 0; k < 41; k++) {
+  for (let k = 0; k < 101; k++) {
     let t0 = performance.now();
     runEngine();
     sweepTimes.push(performance.now() - t0);
