@@ -1,0 +1,94 @@
+// A designer drops a recording on a saved design's page and reads the chart; the library page
+// is looked at too. Screenshots go to the run's output directory for a person to look at.
+import { expect, test } from "@playwright/test";
+import { apiAs, signInPage } from "../fixtures/auth";
+import { createProfileDesign } from "../integration/profiles-helpers";
+
+const shots = process.env.PW_OUTPUT_DIR ?? "test-results/playwright";
+
+/** A logger-like recording: 20 000 samples of sleep with radio bursts, in ms and µA. */
+function loggerCsv(clipA: number): string {
+  const lines = ["# bench recording, invented", "Time (ms),Current [uA]"];
+  for (let k = 0; k < 20_000; k++) {
+    const t = k * 0.5;
+    const inBurst = k % 4000 >= 1000 && k % 4000 < 1100;
+    const overload = k >= 9040 && k < 9060;
+    const uA = overload ? clipA * 1.3e6 : inBurst ? 60_000 + 20_000 * Math.sin(k / 7) : 400 + 50 * Math.sin(k / 40);
+    lines.push(`${t},${uA.toFixed(2)}`);
+  }
+  return `${lines.join("\n")}\n`;
+}
+
+test("a designer uploads a recording through the form and sees the chart", async ({ page }) => {
+  const api = await apiAs("designer");
+  const design = await createProfileDesign(api, `Upload e2e ${Date.now()}`);
+  await api.dispose();
+  const clipA = design.requirement.readout.fullScale / (design.choice.shuntOhms * design.choice.gain);
+
+  await signInPage(page, "designer");
+  await page.goto(`/designs/${design.id}`);
+  const panel = page.getByRole("region", { name: "Measured current profiles" }).or(page.locator("section", { hasText: "Measured current profiles" })).first();
+  await expect(panel).toBeVisible();
+
+  // A bad file first: the message names the row and the column, and nothing is listed.
+  await page.getByLabel("Current recording (CSV)").setInputFiles({
+    name: "broken.csv",
+    mimeType: "text/csv",
+    buffer: Buffer.from("time (s),current (mA)\n0,1\n1,two\n"),
+  });
+  const error = page.getByTestId("profile-upload-error");
+  await expect(error).toContainText('Data row 2 (file line 3), column "current (mA)": "two" is not a number');
+  await expect(page.getByText("No recordings stored on this design yet.")).toBeVisible();
+
+  await page.getByLabel("Current recording (CSV)").setInputFiles({ name: "logger-burst.csv", mimeType: "text/csv", buffer: Buffer.from(loggerCsv(clipA)) });
+  await expect(page.getByText("Stored logger-burst.csv: 20,000 samples.")).toBeVisible();
+  await expect(error).toHaveCount(0);
+  const chart = page.getByTestId("profile-chart");
+  await expect(chart).toBeVisible();
+  await expect(chart.locator("path").first()).toBeVisible();
+  await expect(page.getByTestId("profile-summary")).toContainText("20,000");
+  await expect(page.getByTestId("profile-summary")).toContainText("Clipped");
+  await expect(page.getByRole("table", { name: "Stored profiles" })).toContainText("logger-burst.csv");
+
+  await page.getByLabel("Battery capacity").fill("220 mAh");
+  await expect(page.getByTestId("battery-life")).toContainText(/h\)/);
+  await page.waitForTimeout(300);
+  await page.screenshot({ path: `${shots}/profile-panel.png`, fullPage: true });
+
+  // Drag across the chart to zoom, then reset.
+  const box = (await chart.boundingBox())!;
+  const before = await page.getByTestId("chart-window").textContent();
+  await page.mouse.move(box.x + box.width * 0.4, box.y + 100);
+  await page.mouse.down();
+  await page.mouse.move(box.x + box.width * 0.5, box.y + 120, { steps: 5 });
+  await page.mouse.up();
+  await expect(page.getByTestId("chart-window")).not.toHaveText(before ?? "");
+  await page.waitForTimeout(300);
+  await page.screenshot({ path: `${shots}/profile-zoomed.png`, fullPage: false, clip: { x: 0, y: Math.max(0, box.y - 120), width: 1280, height: box.height + 200 } });
+  await page.getByRole("button", { name: "Reset zoom" }).click();
+  await expect(page.getByTestId("chart-window")).toHaveText(before ?? "");
+});
+
+test("the library page lists the parts and lets a designer add one", async ({ page }) => {
+  await signInPage(page, "designer");
+  await page.goto("/library");
+  await expect(page.getByRole("table", { name: "Amplifiers" })).toContainText("SW-CSA-20 fixed-gain sense amp");
+  await expect(page.getByRole("table", { name: "Shunt families" })).toContainText("SW-K4 four-terminal foil");
+  await page.screenshot({ path: `${shots}/library.png`, fullPage: true });
+
+  await page.getByRole("button", { name: "Add shunt family" }).click();
+  const form = page.getByRole("form", { name: "Add shunt family" });
+  const name = `Bench strip ${Date.now().toString(36)}`;
+  await form.getByLabel("Name").fill(name);
+  await form.getByLabel("Smallest value").fill("2 mohm");
+  await form.getByLabel("Largest value").fill("20 V");
+  await form.getByLabel("Tolerance").fill("1 %");
+  await form.getByLabel("Tempco").fill("50 ppm/K");
+  await form.getByLabel("Power ratings").fill("1 W, 2 W");
+  await form.getByRole("button", { name: "Add shunt family" }).click();
+  await expect(form.getByText("20 V is a voltage, not a resistance")).toBeVisible();
+  await page.screenshot({ path: `${shots}/library-form-error.png`, fullPage: true });
+  await form.getByLabel("Largest value").fill("20 mohm");
+  await form.getByRole("button", { name: "Add shunt family" }).click();
+  await expect(page.getByRole("table", { name: "Shunt families" })).toContainText(name);
+});
