@@ -1,3 +1,4 @@
+import Link from "next/link";
 import { formatWhen } from "@/lib/designs/when";
 
 export type AuditEntry = {
@@ -34,7 +35,16 @@ export function describeAudit(e: AuditEntry): string {
 }
 
 /** Who did what, newest first. */
-export function AuditTimeline({ entries, empty = "Nothing recorded yet." }: { entries: AuditEntry[]; empty?: string }) {
+export function AuditTimeline({
+  entries,
+  empty = "Nothing recorded yet.",
+  designNames,
+}: {
+  entries: AuditEntry[];
+  empty?: string;
+  /** For a team-wide log: names of the designs events point at, so each line says which design. */
+  designNames?: Record<string, string>;
+}) {
   if (entries.length === 0) return <p className="text-xs text-ink-faint">{empty}</p>;
   return (
     <ol className="flex flex-col gap-1 text-sm" data-testid="audit-timeline">
@@ -43,6 +53,14 @@ export function AuditTimeline({ entries, empty = "Nothing recorded yet." }: { en
           <span className="text-xs text-ink-muted num">{formatWhen(e.at)}</span>
           <span>
             <span className="font-medium">{e.actorName ?? "Someone signed out"}</span> {describeAudit(e)}
+            {designNames && e.targetType === "design" && e.targetId && (
+              <>
+                {" — "}
+                <Link href={`/designs/${e.targetId}`} className="text-copper hover:underline">
+                  {designNames[e.targetId] ?? "a removed design"}
+                </Link>
+              </>
+            )}
           </span>
         </li>
       ))}

@@ -2,10 +2,10 @@ import { AuditTimeline, type AuditEntry } from "@/components/review/audit-timeli
 import { Panel } from "@/components/ui/panel";
 
 /** The team's log for owners: every state change, role change, invitation and failed sign-in. */
-export function TeamAuditLog({ entries }: { entries: AuditEntry[] }) {
+export function TeamAuditLog({ entries, designNames }: { entries: AuditEntry[]; designNames: Record<string, string> }) {
   return (
     <Panel title="Team log">
-      <AuditTimeline entries={entries} empty="Nothing recorded yet." />
+      <AuditTimeline entries={entries} designNames={designNames} empty="Nothing recorded yet." />
     </Panel>
   );
 }

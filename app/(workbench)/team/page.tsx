@@ -5,6 +5,7 @@ import { InvitationsPanel } from "@/components/team/invitations-panel";
 import { RemoveMembers } from "@/components/team/invitations-remove";
 import { MemberTable } from "@/components/team/member-table";
 import { listTeamAudit } from "@/db/queries/audit";
+import { listDesigns } from "@/db/queries/designs";
 import { listInvitations } from "@/db/queries/invitations";
 import { listMembers } from "@/db/queries/users";
 import { requirePageCaller } from "@/lib/auth/gate";
@@ -36,7 +37,7 @@ export default async function TeamPage() {
 
 /** Invitations, removing members, the outbox and the team's log: owners only. */
 async function OwnerSections({ teamId, selfId, members }: { teamId: string; selfId: string; members: Awaited<ReturnType<typeof listMembers>> }) {
-  const [invitations, audit] = await Promise.all([listInvitations(teamId), listTeamAudit(teamId, 200)]);
+  const [invitations, audit, designs] = await Promise.all([listInvitations(teamId), listTeamAudit(teamId, 200), listDesigns(teamId)]);
   return (
     <>
       <p className="text-xs text-ink-muted">
@@ -48,7 +49,10 @@ async function OwnerSections({ teamId, selfId, members }: { teamId: string; self
       </p>
       <InvitationsPanel invitations={invitations} />
       <RemoveMembers members={members} selfId={selfId} />
-      <TeamAuditLog entries={audit.map((e) => ({ ...e, at: e.at.toISOString() }))} />
+      <TeamAuditLog
+        entries={audit.map((e) => ({ ...e, at: e.at.toISOString() }))}
+        designNames={Object.fromEntries(designs.map((d) => [d.id, d.name]))}
+      />
     </>
   );
 }

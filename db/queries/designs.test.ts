@@ -1,0 +1,111 @@
+// Compare-and-set on design revisions, against a real (in-memory) PGlite.
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { evaluateDesign } from "@/lib/designs/service";
+import { closeDb, getDb } from "../client";
+import { designRevisions, memberships, teams, users } from "../schema";
+import { listTargetAudit } from "./audit";
+import { changeDesignStatus, createDesign, getDesign, getDesignView, listRevisions, reviseDesign } from "./designs";
+import { addReview } from "./reviews";
+
+const suffix = Math.random().toString(36).slice(2, 8);
+let teamId = "";
+let otherTeamId = "";
+const ids: Record<string, string> = {};
+
+const requirement = {
+  current: { min: "2 mA", max: "180 mA" },
+  supply: { voltage: "3.0 V", side: "low" },
+  drop: { max: "60 mV" },
+  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+};
+const first = () => evaluateDesign(requirement, { shuntOhms: 0.274, gain: 50 });
+
+beforeAll(async () => {
+  const db = await getDb();
+  const [team] = await db.insert(teams).values({ name: `CAS team ${suffix}` }).returning();
+  const [other] = await db.insert(teams).values({ name: `Other team ${suffix}` }).returning();
+  teamId = team!.id;
+  otherTeamId = other!.id;
+  for (const role of ["designer", "reviewer"] as const) {
+    const [u] = await db.insert(users).values({ email: `${role}-${suffix}@test.example`, name: `${role} ${suffix}`, passwordHash: "x" }).returning();
+    ids[role] = u!.id;
+    await db.insert(memberships).values({ teamId, userId: u!.id, role });
+  }
+});
+
+afterAll(closeDb);
+
+async function newDesign(name: string) {
+  return createDesign({ ...first(), teamId, userId: ids.designer!, name, project: "CAS" });
+}
+
+const revise = (designId: string, expectedRevision: number, name: string) =>
+  reviseDesign({ ...first(), designId, teamId, userId: ids.designer!, expectedRevision, name, project: "CAS", changed: ["name"] });
+
+describe("design revisions", () => {
+  it("creates the design with revision 1 in draft, figures from the engine", async () => {
+    const created = await newDesign(`one ${suffix}`);
+    expect(created).toMatchObject({ revision: 1, status: "draft" });
+    const view = await getDesignView(created.id, teamId);
+    expect(view?.revision).toBe(1);
+    expect(view?.metrics.burdenV).toBeCloseTo(0.18 * 0.274, 12); // Ohm's law: 180 mA through 274 mΩ
+    expect(view?.metrics.feasible).toBe(true);
+  });
+
+  it("writes revision 2 for the current revision and refuses the stale one, writing nothing", async () => {
+    const { id } = await newDesign(`two ${suffix}`);
+    expect(await revise(id, 1, `two renamed ${suffix}`)).toEqual({ ok: true, revision: 2 });
+    const before = await getDesign(id, teamId);
+    const stale = await revise(id, 1, `stale ${suffix}`);
+    expect(stale).toMatchObject({ ok: false, status: 409 });
+    const after = await getDesign(id, teamId);
+    expect(after?.design).toEqual(before?.design);
+    expect((await listRevisions(id)).map((r) => r.revision)).toEqual([1, 2]);
+    expect((await listRevisions(id)).map((r) => r.name)).toEqual([`two ${suffix}`, `two renamed ${suffix}`]);
+  });
+
+  it("lets exactly one of two simultaneous edits of the same revision through", async () => {
+    const { id } = await newDesign(`race ${suffix}`);
+    const results = await Promise.all([revise(id, 1, `left ${suffix}`), revise(id, 1, `right ${suffix}`)]);
+    expect(results.filter((r) => r.ok)).toHaveLength(1);
+    expect(results.filter((r) => !r.ok)).toEqual([expect.objectContaining({ status: 409 })]);
+    const db = await getDb();
+    const rows = await db.select().from(designRevisions);
+    expect(rows.filter((r) => r.designId === id)).toHaveLength(2);
+  });
+
+  it("does not find or edit another team's design", async () => {
+    const { id } = await newDesign(`mine ${suffix}`);
+    expect(await getDesign(id, otherTeamId)).toBeNull();
+    expect(await getDesignView(id, otherTeamId)).toBeNull();
+    const r = await reviseDesign({ ...first(), designId: id, teamId: otherTeamId, userId: ids.designer!, expectedRevision: 1, name: "x", project: null, changed: [] });
+    expect(r).toMatchObject({ ok: false, status: 404 });
+    expect((await getDesign(id, teamId))?.design.revision).toBe(1);
+    expect(await getDesign("not-a-uuid", teamId)).toBeNull();
+  });
+
+  it("keeps an approval on its revision; an edit after approval starts a new draft", async () => {
+    const { id } = await newDesign(`approved ${suffix}`);
+    expect(await changeDesignStatus({ designId: id, teamId, actorId: ids.designer!, revision: 1, from: ["draft"], to: "in-review", action: "design.submitted" })).toEqual({ ok: true });
+    const own = await addReview({ designId: id, teamId, actorId: ids.designer!, verdict: "approve", body: "", revision: 1 });
+    expect(own).toMatchObject({ ok: false, status: 403 });
+    expect(await addReview({ designId: id, teamId, actorId: ids.reviewer!, verdict: "approve", body: "fine", revision: 1 })).toMatchObject({ ok: true, status: "approved" });
+    expect((await getDesignView(id, teamId))?.approval).toMatchObject({ revision: 1 });
+    expect(await revise(id, 1, `approved, edited ${suffix}`)).toEqual({ ok: true, revision: 2 });
+    const view = await getDesignView(id, teamId);
+    expect(view).toMatchObject({ status: "draft", revision: 2, approval: null });
+    const revs = await listRevisions(id);
+    expect(revs[0]?.approval).toMatchObject({ revision: 1 });
+    expect(revs[1]?.approval).toBeNull();
+    // A verdict on the old revision is refused now that revision 2 is current.
+    expect(await addReview({ designId: id, teamId, actorId: ids.reviewer!, verdict: "return", body: "late", revision: 1 })).toMatchObject({ ok: false, status: 409 });
+    const log = await listTargetAudit(teamId, "design", id);
+    expect(log.map((e) => e.action)).toEqual(["design.revised", "design.approved", "design.submitted", "design.created"]);
+  });
+
+  it("refuses a verdict on a design that is not in review", async () => {
+    const { id } = await newDesign(`draft ${suffix}`);
+    expect(await addReview({ designId: id, teamId, actorId: ids.reviewer!, verdict: "approve", body: "", revision: 1 })).toMatchObject({ ok: false, status: 409 });
+    expect((await getDesign(id, teamId))?.design.status).toBe("draft");
+  });
+});
