@@ -59,7 +59,10 @@ const cases: [string, Requirement, { shuntOhms: number; gain: number }][] = [
   ],
 ];
 
-describe.skipIf(!hasNgspice)("netlist in ngspice (batch mode .op)", () => {
+const title = hasNgspice
+  ? "netlist in ngspice (batch mode .op)"
+  : "netlist in ngspice — SKIPPED: ngspice is not installed (apt-get install -y ngspice; CI installs it)";
+describe.skipIf(!hasNgspice)(title, () => {
   it.each(cases)("%s: burden and output agree with the engine within 0.1 %", (_name, r, choice) => {
     const nodes = operatingPoint(buildNetlist(r, choice));
     const spiceBurden = (nodes.sp ?? NaN) - (nodes.sn ?? NaN);
