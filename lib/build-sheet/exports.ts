@@ -1,6 +1,7 @@
 // The plain-file exports of a saved design: the parts list as CSV, the whole design as JSON
 // (our own versioned format, which imports back as a new design), and their file names.
 import { z } from "zod";
+import { buildNetlist } from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
 import { choiceSchema } from "@/lib/designs/service";
 import { designSlug } from "./slug";
@@ -16,6 +17,11 @@ export function exportFileName(view: Pick<DesignView, "name" | "revision">, ext:
 
 export function attachment(fileName: string): string {
   return `attachment; filename="${fileName}"`;
+}
+
+/** The design's SPICE netlist: exactly what POST /api/netlist gives for its requirement and choice. */
+export function designNetlist(view: Pick<DesignView, "requirement" | "choice">, opts: { includeOffset: boolean }): string {
+  return buildNetlist(view.requirement, view.choice, opts);
 }
 
 export const csvColumns = ["designator", "part", "value", "tolerance", "tempco", "rating", "notes", "value_si", "unit"] as const;

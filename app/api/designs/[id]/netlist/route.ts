@@ -1,9 +1,8 @@
 // GET /api/designs/[id]/netlist: the saved design's SPICE netlist, from the same generator as
 // POST /api/netlist (the engine's buildNetlist); `?offset=0` leaves the amplifier offset out.
 import { z } from "zod";
-import { buildNetlist } from "@/lib/design";
 import { apiRoute } from "@/lib/auth/gate";
-import { attachment, exportFileName } from "@/lib/build-sheet/exports";
+import { attachment, designNetlist, exportFileName } from "@/lib/build-sheet/exports";
 import { designViewFor } from "@/lib/designs/access";
 
 const querySchema = z.object({
@@ -12,7 +11,7 @@ const querySchema = z.object({
 
 export const GET = apiRoute({ doing: "download netlists", query: querySchema }, async ({ caller, params, query }) => {
   const view = await designViewFor(caller, params.id ?? "");
-  const text = buildNetlist(view.requirement, view.choice, { includeOffset: query.offset !== "0" });
+  const text = designNetlist(view, { includeOffset: query.offset !== "0" });
   return new Response(text, {
     headers: {
       "content-type": "text/plain; charset=utf-8",
