@@ -38,6 +38,9 @@ export const HAZARDOUS_VOLTAGE_V = 60;
 /** A shunt surface hotter than this can burn on touch (common practice, no source). */
 export const HOT_SURFACE_C = 60;
 
+/** A longer gain list is summarised, so the requirement table stays one table. */
+const MAX_LISTED_GAINS = 12;
+
 export function requirementRows(req: Requirement): Row[] {
   const c = req.current;
   const rows: Row[] = [
@@ -64,7 +67,9 @@ export function requirementRows(req: Requirement): Row[] {
   const a = req.amplifier;
   const gains = a.gainSet
     ? `set by a resistor pair (${a.gainSet.series}), ${f.gain(a.gainSet.min)} to ${f.gain(a.gainSet.max)}`
-    : a.gains.map((g) => f.gain(g)).join(", ");
+    : a.gains.length <= MAX_LISTED_GAINS
+      ? a.gains.map((g) => f.gain(g)).join(", ")
+      : `${a.gains.length} gains from ${f.gain(a.gains[0]!)} to ${f.gain(a.gains[a.gains.length - 1]!)}`;
   rows.push({ label: "Amplifier gains offered", value: gains });
   return rows;
 }

@@ -168,3 +168,21 @@ describe("build sheet cautions and parts that depend on the design", () => {
     r.pages.forEach((p) => expect(p).toContain("NOT APPROVED"));
   });
 });
+
+describe("build sheet of a design with very long text", () => {
+  it("still numbers every page consistently and keeps to four pages", async () => {
+    const long = "Bench adapter for the field logger's radio burst range, second build with the wider copper pour and the relocated amplifier ".repeat(2).slice(0, 200);
+    const gains = Array.from({ length: 40 }, (_, i) => 2 + i * 5);
+    const view = fixtureView({ ...loggerRequirement, amplifier: { gains } }, { name: long, project: long });
+    const r = await render(view, "long-text");
+    expect(r.pages.length).toBeGreaterThanOrEqual(1);
+    expect(r.pages.length).toBeLessThanOrEqual(4);
+    r.pages.forEach((page, i) => {
+      expect(page).toContain(`Page ${i + 1} of ${r.pages.length}`);
+      expect(page).toContain("NOT APPROVED");
+    });
+    expectText(r.all, "40 gains from 2 V/V to 197 V/V");
+    expectText(r.all, "Never open a live inductive circuit");
+  });
+});
+

@@ -97,6 +97,11 @@ export function notApprovedNotice(view: Pick<DesignView, "status" | "revision">)
   return `NOT APPROVED — draft for review, not for building (status: ${statusWords[view.status]}, revision ${view.revision})`;
 }
 
+/** Header and footer lines are one line high: long names are cut there (the title block has them whole). */
+function clip(text: string, max: number): string {
+  return text.length <= max ? text : `${text.slice(0, max - 1).trimEnd()}…`;
+}
+
 function isoDate(d: Date): string {
   return d.toISOString().slice(0, 10);
 }
@@ -120,9 +125,9 @@ function Table<T>({ cols, rows, zebra = false }: { cols: Col<T>[]; rows: T[]; ze
       {rows.map((r, i) => (
         <View key={i} style={[s.row, zebra && i % 2 === 1 ? { backgroundColor: "#fbfaf7" } : {}]} wrap={false}>
           {cols.map((c, ci) => (
-            <View key={ci} style={[s.cell, { width: c.width }]}>
-              <Text style={{ textAlign: c.align ?? "left" }}>{c.render(r)}</Text>
-            </View>
+            <Text key={ci} style={[s.cell, { width: c.width, textAlign: c.align ?? "left" }]}>
+              {c.render(r)}
+            </Text>
           ))}
         </View>
       ))}
@@ -234,7 +239,7 @@ function SheetPage({
       <View style={s.header} fixed>
         <View>
           <Text style={s.brand}>SENSEWRIGHT BUILD SHEET</Text>
-          <Text style={s.headerTitle}>{`${view.name} — revision ${view.revision}`}</Text>
+          <Text style={s.headerTitle}>{`${clip(view.name, 80)} — revision ${view.revision}`}</Text>
         </View>
         <Text style={{ fontSize: 8, fontWeight: 700, color: approved ? colors.good : colors.bad }}>
           {approved ? "APPROVED" : statusWords[view.status].toUpperCase()}
@@ -251,7 +256,7 @@ function SheetPage({
         </>
       )}
       <View style={s.footer} fixed>
-        <Text>{`${meta.team} · generated ${isoDate(meta.generatedAt)} · ${view.name}, revision ${view.revision}`}</Text>
+        <Text>{`${clip(meta.team, 40)} · generated ${isoDate(meta.generatedAt)} · ${clip(view.name, 60)}, revision ${view.revision}`}</Text>
         {numbering.kind === "static" ? (
           <Text>{`Page ${number} of ${numbering.total}`}</Text>
         ) : (
