@@ -39,7 +39,14 @@ function fontFile(subset: string): string {
 }
 
 function openSource(subset: string): FkFont {
-  return fontkit.create(readFileSync(fontFile(subset))) as unknown as FkFont;
+  const file = fontFile(subset);
+  let bytes: Buffer;
+  try {
+    bytes = readFileSync(file);
+  } catch {
+    throw new Error(`The build sheet's typeface is missing (${file}); start the app from its own directory with its dependencies installed.`);
+  }
+  return fontkit.create(bytes) as unknown as FkFont;
 }
 
 function rawTable(font: FkFont, tag: string): Uint8Array {
