@@ -43,7 +43,10 @@ export function ProfilesPanel({ design, viewer }: { design: DesignView; viewer: 
   const canUpload = viewer.role === "owner" || viewer.role === "designer";
   const qc = useQueryClient();
   const listKey = ["profiles", design.id];
-  const list = useQuery({ queryKey: listKey, queryFn: () => getJson<{ profiles: ListItem[] }>(`/api/designs/${design.id}/profiles`) });
+  const list = useQuery({
+    queryKey: listKey,
+    queryFn: () => getJson<{ profiles: ListItem[] }>(`/api/designs/${design.id}/profiles`),
+  });
   const [selected, setSelected] = useState<string | null>(null);
   const profiles = list.data?.profiles ?? [];
   const shown = selected && profiles.some((p) => p.id === selected) ? selected : (profiles[0]?.id ?? null);
@@ -60,76 +63,108 @@ export function ProfilesPanel({ design, viewer }: { design: DesignView; viewer: 
   }
 
   return (
-    <Panel title="Measured current profiles">
-      <div className="flex flex-col gap-4">
-        <p className="max-w-prose text-ink-muted">
-          Check this design against a recording of how the device really draws current: how far the shunt pulls the load voltage down, how often the readout clips
-          or reads below one step, and how much charge flowed.
-        </p>
-        {canUpload ? (
-          <UploadForm
-            designId={design.id}
-            onUploaded={async (id) => {
-              setSelected(id);
-              await qc.invalidateQueries({ queryKey: listKey });
-            }}
-          />
-        ) : (
-          <p className="text-xs text-ink-muted">Owners and designers upload recordings; you can read them.</p>
-        )}
+    <div data-testid="profiles-panel">
+      <Panel title="Measured current profiles">
+        <div className="flex flex-col gap-4">
+          <p className="max-w-prose text-ink-muted">
+            Check this design against a recording of how the device really draws current: how far the shunt pulls the
+            load voltage down, how often the readout clips or reads below one step, and how much charge flowed.
+          </p>
+          {canUpload ? (
+            <UploadForm
+              designId={design.id}
+              onUploaded={async (id) => {
+                setSelected(id);
+                await qc.invalidateQueries({ queryKey: listKey });
+              }}
+            />
+          ) : (
+            <p className="text-xs text-ink-muted">Owners and designers upload recordings; you can read them.</p>
+          )}
 
-        {list.isError && <p className="text-bad">The recordings could not be loaded: {list.error.message}</p>}
-        {list.isSuccess && profiles.length === 0 && <p className="text-ink-muted">No recordings stored on this design yet.</p>}
-        {profiles.length > 0 && (
-          <div className="overflow-x-auto">
-            <table className="w-full text-left text-sm" aria-label="Stored profiles">
-              <thead className="border-b border-line text-xs text-ink-muted">
-                <tr>
-                  <th className="px-2 py-1.5 font-medium">Recording</th>
-                  <th className="px-2 py-1.5 font-medium">Samples</th>
-                  <th className="px-2 py-1.5 font-medium">Duration</th>
-                  <th className="px-2 py-1.5 font-medium">Peak</th>
-                  <th className="px-2 py-1.5 font-medium">Clipped</th>
-                  <th className="px-2 py-1.5 font-medium">Uploaded</th>
-                  <th className="px-2 py-1.5" aria-label="Actions" />
-                </tr>
-              </thead>
-              <tbody>
-                {profiles.map((p) => (
-                  <tr key={p.id} className={`border-b border-line last:border-0 ${p.id === shown ? "bg-signal-soft/50" : ""}`}>
-                    <td className="px-2 py-1.5">
-                      <button type="button" className="font-medium text-signal hover:underline" onClick={() => setSelected(p.id)} aria-pressed={p.id === shown}>
-                        {p.fileName}
-                      </button>
-                    </td>
-                    <td className="num px-2 py-1.5">{p.samples.toLocaleString("en-GB")}</td>
-                    <td className="num px-2 py-1.5">{formatSI(p.summary.durationS, "s")}</td>
-                    <td className="num px-2 py-1.5">{formatSI(p.summary.peakCurrentA, "A")}</td>
-                    <td className="num px-2 py-1.5">{`${Number(p.summary.clippedPercent.toPrecision(3))} %`}</td>
-                    <td className="px-2 py-1.5 text-ink-muted">
-                      {p.uploadedByName}, {new Date(p.createdAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })} (rev. {p.revision})
-                    </td>
-                    <td className="px-2 py-1 text-right">
-                      {(p.uploadedBy === viewer.userId || viewer.role === "owner") && (
-                        <Button variant="ghost" onClick={() => remove(p)} aria-label={`Delete ${p.fileName}`}>
-                          Delete
-                        </Button>
-                      )}
-                    </td>
+          {list.isError && <p className="text-bad">The recordings could not be loaded: {list.error.message}</p>}
+          {list.isSuccess && profiles.length === 0 && (
+            <p className="text-ink-muted">No recordings stored on this design yet.</p>
+          )}
+          {profiles.length > 0 && (
+            <div className="overflow-x-auto">
+              <table className="w-full text-left text-sm" aria-label="Stored profiles">
+                <thead className="border-b border-line text-xs text-ink-muted">
+                  <tr>
+                    <th className="px-2 py-1.5 font-medium">Recording</th>
+                    <th className="px-2 py-1.5 font-medium">Samples</th>
+                    <th className="px-2 py-1.5 font-medium">Duration</th>
+                    <th className="px-2 py-1.5 font-medium">Peak</th>
+                    <th className="px-2 py-1.5 font-medium">Clipped</th>
+                    <th className="px-2 py-1.5 font-medium">Uploaded</th>
+                    <th className="px-2 py-1.5" aria-label="Actions" />
                   </tr>
-                ))}
-              </tbody>
-            </table>
-            {deleteError && <p className="text-sm text-bad">{deleteError}</p>}
-          </div>
-        )}
-        {shown && <ProfileDetail key={shown} designId={design.id} profileId={shown} designRevision={design.revision} loadMinV={design.requirement.drop.loadMin} />}
-      </div>
-    </Panel>
+                </thead>
+                <tbody>
+                  {profiles.map((p) => (
+                    <tr
+                      key={p.id}
+                      className={`border-b border-line last:border-0 ${p.id === shown ? "bg-signal-soft/50" : ""}`}
+                    >
+                      <td className="px-2 py-1.5">
+                        <button
+                          type="button"
+                          className="font-medium text-signal hover:underline"
+                          onClick={() => setSelected(p.id)}
+                          aria-pressed={p.id === shown}
+                        >
+                          {p.fileName}
+                        </button>
+                      </td>
+                      <td className="num px-2 py-1.5">{p.samples.toLocaleString("en-GB")}</td>
+                      <td className="num px-2 py-1.5">{formatSI(p.summary.durationS, "s")}</td>
+                      <td className="num px-2 py-1.5">{formatSI(p.summary.peakCurrentA, "A")}</td>
+                      <td className="num px-2 py-1.5">{`${Number(p.summary.clippedPercent.toPrecision(3))} %`}</td>
+                      <td className="px-2 py-1.5 text-ink-muted">
+                        {p.uploadedByName},{" "}
+                        {new Date(p.createdAt).toLocaleString("en-GB", { dateStyle: "medium", timeStyle: "short" })}{" "}
+                        (rev. {p.revision})
+                      </td>
+                      <td className="px-2 py-1 text-right">
+                        {(p.uploadedBy === viewer.userId || viewer.role === "owner") && (
+                          <Button variant="ghost" onClick={() => remove(p)} aria-label={`Delete ${p.fileName}`}>
+                            Delete
+                          </Button>
+                        )}
+                      </td>
+                    </tr>
+                  ))}
+                </tbody>
+              </table>
+              {deleteError && <p className="text-sm text-bad">{deleteError}</p>}
+            </div>
+          )}
+          {shown && (
+            <ProfileDetail
+              key={shown}
+              designId={design.id}
+              profileId={shown}
+              designRevision={design.revision}
+              loadMinV={design.requirement.drop.loadMin}
+            />
+          )}
+        </div>
+      </Panel>
+    </div>
   );
 }
 
-function ProfileDetail({ designId, profileId, designRevision, loadMinV }: { designId: string; profileId: string; designRevision: number; loadMinV?: number }) {
+function ProfileDetail({
+  designId,
+  profileId,
+  designRevision,
+  loadMinV,
+}: {
+  designId: string;
+  profileId: string;
+  designRevision: number;
+  loadMinV?: number;
+}) {
   const { ref, width } = useWidth();
   const [zoom, setZoom] = useState<{ from: number; to: number } | null>(null);
   const [log, setLog] = useState<boolean | null>(null);
@@ -172,7 +207,8 @@ function ProfileDetail({ designId, profileId, designRevision, loadMinV }: { desi
             <h3 className="font-semibold">{d.fileName}</h3>
             {d.revision !== designRevision && (
               <p className="text-xs text-warn">
-                Uploaded against revision {d.revision}; the figures below are for the current revision {d.current.revision}.
+                Uploaded against revision {d.revision}; the figures below are for the current revision{" "}
+                {d.current.revision}.
               </p>
             )}
           </div>
@@ -188,11 +224,17 @@ function ProfileDetail({ designId, profileId, designRevision, loadMinV }: { desi
               Reset zoom
             </Button>
             <label className="ml-2 flex items-center gap-1.5">
-              <input type="checkbox" checked={useLog} onChange={(e) => setLog(e.target.checked)} className="accent-copper" />
+              <input
+                type="checkbox"
+                checked={useLog}
+                onChange={(e) => setLog(e.target.checked)}
+                className="accent-copper"
+              />
               Logarithmic current axis
             </label>
             <span className="ml-auto text-ink-muted num" data-testid="chart-window">
-              {formatSI(d.series.fromS, "s", 4)} – {formatSI(d.series.toS, "s", 4)} · {d.series.windowSamples.toLocaleString("en-GB")} samples drawn as{" "}
+              {formatSI(d.series.fromS, "s", 4)} – {formatSI(d.series.toS, "s", 4)} ·{" "}
+              {d.series.windowSamples.toLocaleString("en-GB")} samples drawn as{" "}
               {d.series.tS.length.toLocaleString("en-GB")} points {query.isFetching ? "· loading…" : ""}
             </span>
           </div>
@@ -205,11 +247,19 @@ function ProfileDetail({ designId, profileId, designRevision, loadMinV }: { desi
             series={d.series}
             width={width}
             log={useLog}
-            design={{ shuntOhms: d.design.shuntOhms, supplyV: d.design.supplyV, lsbA: d.design.lsbA, clipCurrentA: d.current.summary.clipCurrentA, loadMinV }}
+            design={{
+              shuntOhms: d.design.shuntOhms,
+              supplyV: d.design.supplyV,
+              lsbA: d.design.lsbA,
+              clipCurrentA: d.current.summary.clipCurrentA,
+              loadMinV,
+            }}
             onZoom={(from, to) => setZoom({ from, to })}
           />
         )}
-        {!d && !query.isError && <div className="h-[426px] animate-pulse rounded bg-sunken" aria-label="Loading the chart" />}
+        {!d && !query.isError && (
+          <div className="h-[426px] animate-pulse rounded bg-sunken" aria-label="Loading the chart" />
+        )}
       </div>
       {d && (
         <ul className="flex flex-wrap gap-4 text-2xs text-ink-muted" aria-label="Chart key">
@@ -227,7 +277,8 @@ function ProfileDetail({ designId, profileId, designRevision, loadMinV }: { desi
           </li>
           {loadMinV !== undefined && (
             <li className="flex items-center gap-1.5">
-              <span className="inline-block h-0.5 w-4 border-t border-dashed border-bad" /> required minimum load voltage
+              <span className="inline-block h-0.5 w-4 border-t border-dashed border-bad" /> required minimum load
+              voltage
             </li>
           )}
         </ul>

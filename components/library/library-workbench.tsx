@@ -6,7 +6,7 @@ import { Badge } from "@/components/ui/badge";
 import { Button, buttonClass } from "@/components/ui/button";
 import { Field, Select } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import { fieldsOf } from "@/lib/library/fields";
+import { tableColumnsOf } from "@/lib/library/fields";
 import type { PartKind } from "@/lib/library/schema";
 import { PartForm } from "./part-form";
 
@@ -50,7 +50,7 @@ function PartTable({
   onError: (message: string) => void;
 }) {
   const [editing, setEditing] = useState<string | "new" | null>(null);
-  const columns = fieldsOf[kind].filter((f) => f.inTable);
+  const columns = tableColumnsOf[kind];
 
   async function remove(part: Part) {
     if (!window.confirm(`Remove ${part.name} from the library? Designs already saved keep their figures.`)) return;
@@ -88,9 +88,12 @@ function PartTable({
         </p>
       ) : (
         <div className="overflow-x-auto">
-          <table className="w-full min-w-max text-left text-sm" aria-label={titles[kind]}>
+          <table className="w-full text-left text-sm" aria-label={titles[kind]}>
             <thead className="border-b border-line text-xs text-ink-muted">
               <tr>
+                <th scope="col" className="px-2 py-1.5 font-medium">
+                  Name
+                </th>
                 {columns.map((c) => (
                   <th key={c.key} scope="col" className="px-2 py-1.5 font-medium whitespace-nowrap">
                     {c.label}
@@ -101,10 +104,13 @@ function PartTable({
             </thead>
             <tbody>
               {parts.map((p) => (
-                <FragmentRow key={p.id} colSpan={columns.length + (canEdit ? 1 : 0)} editing={editing === p.id} form={<PartForm kind={kind} part={p} onDone={finish} />}>
+                <FragmentRow key={p.id} colSpan={columns.length + (canEdit ? 2 : 1)} editing={editing === p.id} form={<PartForm kind={kind} part={p} onDone={finish} />}>
+                  <th scope="row" className="px-2 py-1.5 text-left font-medium">
+                    {p.name}
+                  </th>
                   {columns.map((c) => (
-                    <td key={c.key} className={`px-2 py-1.5 whitespace-nowrap ${c.key === "name" ? "font-medium" : "num"}`}>
-                      {c.key === "fourTerminal" ? (p.fourTerminal ? <Badge tone="signal">4-terminal</Badge> : <span className="text-ink-faint">2-terminal</span>) : c.show(p[c.key])}
+                    <td key={c.key} className="num px-2 py-1.5 whitespace-nowrap">
+                      {c.key === "fourTerminal" ? (p.fourTerminal ? <Badge tone="signal">4-terminal</Badge> : <span className="text-ink-faint">2-terminal</span>) : c.show(p)}
                     </td>
                   ))}
                   {canEdit && (

@@ -33,8 +33,10 @@ export function PartForm({ kind, part, onDone }: { kind: PartKind; part: Part | 
     if (!res) return setMessage("The server could not be reached; nothing was saved.");
     const data = (await res.json().catch(() => ({}))) as { message?: string; fieldErrors?: Record<string, string[]>; name?: string };
     if (!res.ok) {
-      setErrors(data.fieldErrors ?? {});
-      setMessage(data.message ?? `The change was refused (${res.status}).`);
+      const fieldErrors = data.fieldErrors ?? {};
+      setErrors(fieldErrors);
+      const onFields = Object.keys(fieldErrors).some((k) => fieldsOf[kind].some((f) => f.key === k));
+      setMessage(onFields ? "Nothing was saved: correct the marked fields." : (data.message ?? `The change was refused (${res.status}).`));
       return;
     }
     onDone(part ? `Saved ${String(data.name)}.` : `Added ${String(data.name)} to the library.`);

@@ -13,8 +13,6 @@ export type FieldSpec = {
   show: (value: unknown) => string;
   hint?: string;
   options?: { value: string; label: string }[];
-  /** Shown in the table (some fields only appear in the form). */
-  inTable?: boolean;
 };
 
 const si = (unit: string) => (v: unknown) => (typeof v === "number" ? formatSI(v, unit) : "");
@@ -24,7 +22,7 @@ const list = (fmt: (v: unknown) => string, sep = ", ") => (v: unknown) => (Array
 const plain = (v: unknown) => (v === undefined || v === null ? "" : String(v));
 
 export const amplifierFields: FieldSpec[] = [
-  { key: "name", label: "Name", kind: "text", show: plain, inTable: true },
+  { key: "name", label: "Name", kind: "text", show: plain },
   {
     key: "gainMode",
     label: "Gain mode",
@@ -34,42 +32,74 @@ export const amplifierFields: FieldSpec[] = [
       { value: "fixed", label: "Fixed gains (a list)" },
       { value: "resistor-set", label: "Set by a resistor pair (lowest–highest)" },
     ],
-    inTable: true,
   },
-  { key: "gains", label: "Gains", kind: "numberList", show: list(plain), hint: "Fixed: each gain, e.g. 20, 50, 100. Resistor-set: lowest and highest, e.g. 1, 1000.", inTable: true },
-  { key: "offsetV", label: "Input offset", kind: "quantity", show: si("V"), hint: "e.g. 35 uV", inTable: true },
-  { key: "offsetDriftVPerK", label: "Offset drift", kind: "quantity", show: si("V/K"), hint: "e.g. 0.1 uV/K", inTable: true },
-  { key: "gainErrorFraction", label: "Gain error", kind: "quantity", show: percent, hint: "e.g. 0.2 %", inTable: true },
+  { key: "gains", label: "Gains", kind: "numberList", show: list(plain), hint: "Fixed: each gain, e.g. 20, 50, 100. Resistor-set: lowest and highest, e.g. 1, 1000." },
+  { key: "offsetV", label: "Input offset", kind: "quantity", show: si("V"), hint: "e.g. 35 uV" },
+  { key: "offsetDriftVPerK", label: "Offset drift", kind: "quantity", show: si("V/K"), hint: "e.g. 0.1 uV/K" },
+  { key: "gainErrorFraction", label: "Gain error", kind: "quantity", show: percent, hint: "e.g. 0.2 %" },
   { key: "gainDriftPerK", label: "Gain drift", kind: "quantity", show: ppm, hint: "e.g. 10 ppm/K" },
-  { key: "biasCurrentA", label: "Input bias current", kind: "quantity", show: si("A"), hint: "e.g. 20 nA", inTable: true },
-  { key: "noiseDensityVPerRtHz", label: "Input noise density", kind: "quantity", show: si("V/rtHz"), hint: "e.g. 40 nV/rtHz", inTable: true },
-  { key: "gbwHz", label: "Gain-bandwidth", kind: "quantity", show: si("Hz"), hint: "e.g. 400 kHz", inTable: true },
-  { key: "swingLowV", label: "Lowest output above ground", kind: "quantity", show: si("V"), hint: "e.g. 10 mV", inTable: true },
-  { key: "swingHighV", label: "Output headroom below the supply", kind: "quantity", show: si("V"), hint: "e.g. 30 mV", inTable: true },
-  { key: "cmrrDb", label: "CMRR (dB)", kind: "number", show: (v) => (typeof v === "number" ? `${v} dB` : ""), inTable: true },
+  { key: "biasCurrentA", label: "Input bias current", kind: "quantity", show: si("A"), hint: "e.g. 20 nA" },
+  { key: "noiseDensityVPerRtHz", label: "Input noise density", kind: "quantity", show: si("V/rtHz"), hint: "e.g. 40 nV/rtHz" },
+  { key: "gbwHz", label: "Gain-bandwidth", kind: "quantity", show: si("Hz"), hint: "e.g. 400 kHz" },
+  { key: "swingLowV", label: "Lowest output above ground", kind: "quantity", show: si("V"), hint: "e.g. 10 mV" },
+  { key: "swingHighV", label: "Output headroom below the supply", kind: "quantity", show: si("V"), hint: "e.g. 30 mV" },
+  { key: "cmrrDb", label: "CMRR (dB)", kind: "number", show: (v) => (typeof v === "number" ? `${v} dB` : "") },
   { key: "supplyMinV", label: "Lowest supply", kind: "quantity", show: si("V"), hint: "e.g. 2.7 V" },
   { key: "supplyMaxV", label: "Highest supply", kind: "quantity", show: si("V"), hint: "e.g. 5.5 V" },
 ];
 
 export const shuntFields: FieldSpec[] = [
-  { key: "name", label: "Name", kind: "text", show: plain, inTable: true },
+  { key: "name", label: "Name", kind: "text", show: plain },
   {
     key: "series",
     label: "Series",
     kind: "select",
     show: plain,
     options: ["E6", "E12", "E24", "E48", "E96", "E192"].map((s) => ({ value: s, label: s })),
-    inTable: true,
   },
-  { key: "minOhms", label: "Smallest value", kind: "quantity", show: si("Ω"), hint: "e.g. 1 mohm", inTable: true },
-  { key: "maxOhms", label: "Largest value", kind: "quantity", show: si("Ω"), hint: "e.g. 100 mohm", inTable: true },
-  { key: "toleranceFraction", label: "Tolerance", kind: "quantity", show: percent, hint: "e.g. 1 %", inTable: true },
-  { key: "tempcoPerK", label: "Tempco", kind: "quantity", show: ppm, hint: "e.g. 50 ppm/K", inTable: true },
-  { key: "ratingsW", label: "Power ratings", kind: "quantityList", show: list(si("W")), hint: "e.g. 0.5 W, 1 W, 2 W", inTable: true },
-  { key: "fourTerminal", label: "4-terminal (Kelvin) connection", kind: "checkbox", show: (v) => (v ? "yes" : "no"), inTable: true },
+  { key: "minOhms", label: "Smallest value", kind: "quantity", show: si("Ω"), hint: "e.g. 1 mohm" },
+  { key: "maxOhms", label: "Largest value", kind: "quantity", show: si("Ω"), hint: "e.g. 100 mohm" },
+  { key: "toleranceFraction", label: "Tolerance", kind: "quantity", show: percent, hint: "e.g. 1 %" },
+  { key: "tempcoPerK", label: "Tempco", kind: "quantity", show: ppm, hint: "e.g. 50 ppm/K" },
+  { key: "ratingsW", label: "Power ratings", kind: "quantityList", show: list(si("W")), hint: "e.g. 0.5 W, 1 W, 2 W" },
+  { key: "fourTerminal", label: "4-terminal (Kelvin) connection", kind: "checkbox", show: (v) => (v ? "yes" : "no") },
 ];
 
 export const fieldsOf: Record<PartKind, FieldSpec[]> = { amplifiers: amplifierFields, shunts: shuntFields };
+
+export type TableColumn = { key: string; label: string; show: (part: Record<string, unknown>) => string };
+
+const field = (kind: PartKind, key: string) => fieldsOf[kind].find((f) => f.key === key)!;
+const column = (kind: PartKind, key: string, label?: string): TableColumn => {
+  const f = field(kind, key);
+  return { key, label: label ?? f.label, show: (p) => f.show(p[key]) };
+};
+
+/** The tables show the figures that tell parts apart; the form holds every field. */
+export const tableColumnsOf: Record<PartKind, TableColumn[]> = {
+  amplifiers: [
+    {
+      key: "gains",
+      label: "Gains",
+      show: (p) => (p.gainMode === "resistor-set" && Array.isArray(p.gains) ? `${p.gains.join("–")} (resistor pair)` : list(plain)(p.gains)),
+    },
+    column("amplifiers", "offsetV", "Offset"),
+    column("amplifiers", "offsetDriftVPerK", "Drift"),
+    column("amplifiers", "gainErrorFraction"),
+    column("amplifiers", "biasCurrentA", "Bias current"),
+    column("amplifiers", "noiseDensityVPerRtHz", "Noise"),
+    column("amplifiers", "gbwHz", "GBW"),
+    { key: "supply", label: "Supply", show: (p) => `${si("V")(p.supplyMinV)} – ${si("V")(p.supplyMaxV)}` },
+  ],
+  shunts: [
+    column("shunts", "series"),
+    { key: "values", label: "Values", show: (p) => `${si("Ω")(p.minOhms)} – ${si("Ω")(p.maxOhms)}` },
+    column("shunts", "toleranceFraction"),
+    column("shunts", "tempcoPerK"),
+    column("shunts", "ratingsW"),
+    { key: "fourTerminal", label: "Connection", show: (p) => (p.fourTerminal ? "4-terminal" : "2-terminal") },
+  ],
+};
 
 /** The form's text for each field as the API body (unit strings are parsed on the server). */
 export function formToBody(kind: PartKind, form: Record<string, string | boolean>): Record<string, unknown> {

@@ -4,7 +4,8 @@ import { expect, test } from "@playwright/test";
 import { apiAs, signInPage } from "../fixtures/auth";
 import { createProfileDesign } from "../integration/profiles-helpers";
 
-const shots = process.env.PW_OUTPUT_DIR ?? "test-results/playwright";
+// Outside Playwright's output directory, which each run empties.
+const shots = process.env.SHOTS_DIR ?? "test-results/screens";
 
 /** A logger-like recording: 20 000 samples of sleep with radio bursts, in ms and µA. */
 function loggerCsv(clipA: number): string {
@@ -27,8 +28,7 @@ test("a designer uploads a recording through the form and sees the chart", async
 
   await signInPage(page, "designer");
   await page.goto(`/designs/${design.id}`);
-  const panel = page.getByRole("region", { name: "Measured current profiles" }).or(page.locator("section", { hasText: "Measured current profiles" })).first();
-  await expect(panel).toBeVisible();
+  await expect(page.getByTestId("profiles-panel")).toBeVisible();
 
   // A bad file first: the message names the row and the column, and nothing is listed.
   await page.getByLabel("Current recording (CSV)").setInputFiles({
@@ -53,9 +53,10 @@ test("a designer uploads a recording through the form and sees the chart", async
   await page.getByLabel("Battery capacity").fill("220 mAh");
   await expect(page.getByTestId("battery-life")).toContainText(/h\)/);
   await page.waitForTimeout(300);
-  await page.screenshot({ path: `${shots}/profile-panel.png`, fullPage: true });
+  await page.getByTestId("profiles-panel").screenshot({ path: `${shots}/profile-panel.png` });
 
   // Drag across the chart to zoom, then reset.
+  await chart.scrollIntoViewIfNeeded();
   const box = (await chart.boundingBox())!;
   const before = await page.getByTestId("chart-window").textContent();
   await page.mouse.move(box.x + box.width * 0.4, box.y + 100);
@@ -64,7 +65,7 @@ test("a designer uploads a recording through the form and sees the chart", async
   await page.mouse.up();
   await expect(page.getByTestId("chart-window")).not.toHaveText(before ?? "");
   await page.waitForTimeout(300);
-  await page.screenshot({ path: `${shots}/profile-zoomed.png`, fullPage: false, clip: { x: 0, y: Math.max(0, box.y - 120), width: 1280, height: box.height + 200 } });
+  await page.getByTestId("profiles-panel").screenshot({ path: `${shots}/profile-zoomed.png` });
   await page.getByRole("button", { name: "Reset zoom" }).click();
   await expect(page.getByTestId("chart-window")).toHaveText(before ?? "");
 });
@@ -86,7 +87,7 @@ test("the library page lists the parts and lets a designer add one", async ({ pa
   await form.getByLabel("Tempco").fill("50 ppm/K");
   await form.getByLabel("Power ratings").fill("1 W, 2 W");
   await form.getByRole("button", { name: "Add shunt family" }).click();
-  await expect(form.getByText("20 V is a voltage, not a resistance")).toBeVisible();
+  await expect(form.getByText("Largest value: 20 V is a voltage, not a resistance", { exact: true })).toBeVisible();
   await page.screenshot({ path: `${shots}/library-form-error.png`, fullPage: true });
   await form.getByLabel("Largest value").fill("20 mohm");
   await form.getByRole("button", { name: "Add shunt family" }).click();
