@@ -1,0 +1,63 @@
+// Shared set-up for the HTTP-level authorization and review tests: signed-in contexts for each
+// demo role, a member of another team (made through the product's own invitation flow, never by
+// writing to the database), and designs in known states made through the API.
+import { expect, request as playwrightRequest, type APIRequestContext } from "@playwright/test";
+import { baseURL } from "../../playwright.config";
+import { apiAs, signInApi, type DemoRole } from "../fixtures/auth";
+
+export type Who = "anon" | DemoRole | "outsider";
+export const everyone: Who[] = ["anon", "owner", "designer", "reviewer", "maker", "outsider"];
+
+export const requirement = {
+  current: { min: "2 mA", max: "180 mA" },
+  supply: { voltage: "3.0 V", side: "low" },
+  drop: { max: "60 mV" },
+  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+};
+export const choice = { shuntOhms: "274 mohm", gain: 50 };
+
+export const unique = () => `${Date.now().toString(36)}${Math.random().toString(36).slice(2, 7)}`;
+
+/** Joins through an invitation link as a new account; returns the signed-in context. */
+export async function acceptAndSignIn(link: string, email: string, name: string): Promise<APIRequestContext> {
+  const token = new URL(link).pathname.split("/").pop()!;
+  const ctx = await playwrightRequest.newContext({ baseURL });
+  const password = `pw-${unique()}-long`;
+  const res = await ctx.post("/api/invitations/accept", { data: { token, name, password } });
+  expect(res.status(), await res.text()).toBe(201);
+  expect(await signInApi(ctx, email, password)).toBe(true);
+  return ctx;
+}
+
+/** An owner of a separate team, founded through an invitation the demo owner sends. */
+export async function makeOutsider(owner: APIRequestContext): Promise<APIRequestContext> {
+  const email = `outsider-${unique()}@other.example`;
+  const res = await owner.post("/api/invitations", { data: { email, newTeam: `Tidewater Instruments ${unique()}` } });
+  expect(res.status(), await res.text()).toBe(201);
+  const { link } = (await res.json()) as { link: string };
+  return acceptAndSignIn(link, email, "Outside Owner");
+}
+
+export type Contexts = Record<Who, APIRequestContext>;
+
+export async function allContexts(): Promise<Contexts> {
+  const [anon, owner, designer, reviewer, maker] = await Promise.all([apiAs(null), apiAs("owner"), apiAs("designer"), apiAs("reviewer"), apiAs("maker")]);
+  const outsider = await makeOutsider(owner);
+  return { anon, owner, designer, reviewer, maker, outsider };
+}
+
+export async function createDesign(as: APIRequestContext, name = `Matrix ${unique()}`): Promise<string> {
+  const res = await as.post("/api/designs", { data: { name, project: "Access checks", requirement, choice } });
+  expect(res.status(), await res.text()).toBe(201);
+  return ((await res.json()) as { id: string }).id;
+}
+
+export async function submitDesign(as: APIRequestContext, id: string) {
+  const res = await as.post(`/api/designs/${id}/submit`, { data: {} });
+  expect(res.status(), await res.text()).toBe(200);
+}
+
+export async function approveDesign(as: APIRequestContext, id: string) {
+  const res = await as.post(`/api/designs/${id}/reviews`, { data: { verdict: "approve", body: "fine" } });
+  expect(res.status(), await res.text()).toBe(201);
+}
