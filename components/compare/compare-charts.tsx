@@ -21,8 +21,9 @@ const theme = buildChartTheme({
 function logDomain(values: number[]): [number, number] {
   const v = values.filter((x) => Number.isFinite(x) && x > 0);
   if (v.length === 0) return [1e-6, 1];
-  const lo = Math.min(...v);
-  const hi = Math.max(...v);
+  // A little room above and below, so a curve never runs along the frame.
+  const lo = Math.min(...v) / 1.25;
+  const hi = Math.max(...v) * 1.25;
   const a = 10 ** Math.floor(Math.log10(lo));
   const b = 10 ** Math.ceil(Math.log10(hi));
   return [a, b > a ? b : a * 10];

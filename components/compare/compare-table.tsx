@@ -15,6 +15,31 @@ function rows(fields: Record<string, FieldInfo>, objects: unknown[]): Row[] {
     .map(([path, info]) => ({ key: path, info, values: flat.map((f) => f[path]) }));
 }
 
+const differs = (r: Row) => new Set(r.values.map((v) => formatField(v, r.info))).size > 1;
+
+function SameRows({ list, columns }: { list: Row[]; columns: number }) {
+  if (list.length === 0) return null;
+  return (
+    <tr>
+      <td colSpan={columns + 1} className="px-3 py-1.5">
+        <details>
+          <summary className="cursor-pointer text-xs text-ink-muted">
+            {list.length} requirement fields are the same in every design
+          </summary>
+          <dl className="mt-1 grid grid-cols-1 gap-x-6 gap-y-0.5 text-xs sm:grid-cols-2 lg:grid-cols-3">
+            {list.map((r) => (
+              <div key={r.key} className="flex justify-between gap-2 border-b border-line py-0.5">
+                <dt className="text-ink-muted">{r.info.label}</dt>
+                <dd className="text-right num">{formatField(r.values[0], r.info)}</dd>
+              </div>
+            ))}
+          </dl>
+        </details>
+      </td>
+    </tr>
+  );
+}
+
 function Section({ title, list, mark }: { title: string; list: Row[]; mark: boolean }) {
   return (
     <>
@@ -24,11 +49,10 @@ function Section({ title, list, mark }: { title: string; list: Row[]; mark: bool
         </th>
       </tr>
       {list.map((r) => {
-        const best = mark ? bestIndexes(r.values as number[], r.info) : [];
-        const differs = new Set(r.values.map((v) => JSON.stringify(v ?? null))).size > 1;
+        const best = mark ? bestIndexes(r.values, r.info) : [];
         return (
           <tr key={r.key} className="border-b border-line last:border-0" data-testid={`row-${r.key}`}>
-            <th scope="row" className={`px-3 py-1 text-left font-normal ${differs ? "text-ink" : "text-ink-muted"}`}>
+            <th scope="row" className={`px-3 py-1 text-left font-normal ${differs(r) ? "text-ink" : "text-ink-muted"}`}>
               {r.info.label}
               {r.info.better && (
                 <span className="ml-1 whitespace-nowrap text-2xs text-ink-faint" title={`${r.info.better} is better`}>
@@ -45,12 +69,20 @@ function Section({ title, list, mark }: { title: string; list: Row[]; mark: bool
           </tr>
         );
       })}
+      {list.length === 0 && (
+        <tr>
+          <td colSpan={99} className="px-3 py-1 text-xs text-ink-faint">
+            None: every design states the same requirement.
+          </td>
+        </tr>
+      )}
     </>
   );
 }
 
 /** Requirement, choice and every figure side by side, the best value in each figure row marked. */
 export function CompareTable({ designs, viewer }: { designs: DesignView[]; viewer: DesignViewer }) {
+  const requirementRows = rows(requirementFields, designs.map((d) => d.requirement));
   return (
     <div className="overflow-x-auto rounded-panel border border-line bg-panel">
       <table className="w-full text-sm">
@@ -79,7 +111,8 @@ export function CompareTable({ designs, viewer }: { designs: DesignView[]; viewe
         <tbody>
           <Section title="Choice" list={rows(choiceFields, designs.map((d) => d.choice))} mark={false} />
           <Section title="Figures (from the engine, at each design's own requirement)" list={rows(metricFields, designs.map((d) => d.metrics))} mark />
-          <Section title="Requirement" list={rows(requirementFields, designs.map((d) => d.requirement))} mark={false} />
+          <Section title="Requirement: where the designs differ" list={requirementRows.filter(differs)} mark={false} />
+          <SameRows list={requirementRows.filter((r) => !differs(r))} columns={designs.length} />
         </tbody>
       </table>
     </div>
