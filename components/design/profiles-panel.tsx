@@ -275,12 +275,14 @@ function ProfileDetail({
           <li className="flex items-center gap-1.5">
             <span className="inline-block size-3 bg-warn/15" /> below one readout step ({formatSI(d.design.lsbA, "A")})
           </li>
-          {loadMinV !== undefined && (
-            <li className="flex items-center gap-1.5">
-              <span className="inline-block h-0.5 w-4 border-t border-dashed border-bad" /> required minimum load
-              voltage
-            </li>
-          )}
+          {loadMinV !== undefined &&
+            loadMinV >=
+              d.design.supplyV - 4 * d.series.currentA.reduce((a, b) => Math.max(a, b), 0) * d.design.shuntOhms && (
+              <li className="flex items-center gap-1.5">
+                <span className="inline-block h-0.5 w-4 border-t border-dashed border-bad" /> required minimum load
+                voltage ({formatSI(loadMinV, "V")})
+              </li>
+            )}
         </ul>
       )}
     </section>

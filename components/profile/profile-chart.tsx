@@ -83,7 +83,10 @@ export function ProfileChart({
   const vTop = M.top + CURRENT_H + M.gap;
   const supply = design.supplyV;
   const maxBurden = Math.max(peak * design.shuntOhms, 1e-12);
-  const vLo = Math.min(supply - maxBurden * 1.15, design.loadMinV ?? Infinity);
+  // The required minimum load voltage is drawn when it is near enough not to flatten the curve.
+  const loadMin =
+    design.loadMinV !== undefined && design.loadMinV >= supply - 4 * maxBurden ? design.loadMinV : undefined;
+  const vLo = Math.min(supply - maxBurden * 1.15, loadMin !== undefined ? loadMin - maxBurden * 0.1 : Infinity);
   const vHi = supply + maxBurden * 0.1;
   const yVolt = (v: number) => vTop + VOLTAGE_H - ((v - vLo) / (vHi - vLo)) * VOLTAGE_H;
   const burdenTicks = linearTicks(Math.max(0, supply - vHi), supply - vLo, 3).filter((b) => b >= 0);
@@ -159,13 +162,26 @@ export function ProfileChart({
       <rect x={M.left} y={yTop} width={plotW} height={CURRENT_H} className="fill-none stroke-line" />
       {currentTicks.map((v) => (
         <g key={`ct${v}`}>
-          <line x1={M.left} x2={M.left + plotW} y1={yCurrent(v)} y2={yCurrent(v)} className="stroke-line/60" strokeDasharray="2 3" />
+          <line
+            x1={M.left}
+            x2={M.left + plotW}
+            y1={yCurrent(v)}
+            y2={yCurrent(v)}
+            className="stroke-line/60"
+            strokeDasharray="2 3"
+          />
           <text x={M.left - 6} y={yCurrent(v) + 3} textAnchor="end" className="fill-ink-muted text-[10px]">
             {formatSI(v, "A")}
           </text>
         </g>
       ))}
-      <text x={12} y={yTop + CURRENT_H / 2} transform={`rotate(-90 12 ${yTop + CURRENT_H / 2})`} textAnchor="middle" className="fill-ink-muted text-[11px]">
+      <text
+        x={12}
+        y={yTop + CURRENT_H / 2}
+        transform={`rotate(-90 12 ${yTop + CURRENT_H / 2})`}
+        textAnchor="middle"
+        className="fill-ink-muted text-[11px]"
+      >
         Current
       </text>
       <g clipPath="url(#profile-clip-top)">
@@ -193,13 +209,26 @@ export function ProfileChart({
       ))}
       {burdenTicks.map((b) => (
         <g key={`bt${b}`}>
-          <line x1={M.left} x2={M.left + plotW} y1={yVolt(supply - b)} y2={yVolt(supply - b)} className="stroke-line/60" strokeDasharray="2 3" />
+          <line
+            x1={M.left}
+            x2={M.left + plotW}
+            y1={yVolt(supply - b)}
+            y2={yVolt(supply - b)}
+            className="stroke-line/60"
+            strokeDasharray="2 3"
+          />
           <text x={M.left + plotW + 6} y={yVolt(supply - b) + 3} className="fill-ink-muted text-[10px]">
             {formatSI(b, "V")}
           </text>
         </g>
       ))}
-      <text x={12} y={vTop + VOLTAGE_H / 2} transform={`rotate(-90 12 ${vTop + VOLTAGE_H / 2})`} textAnchor="middle" className="fill-ink-muted text-[11px]">
+      <text
+        x={12}
+        y={vTop + VOLTAGE_H / 2}
+        transform={`rotate(-90 12 ${vTop + VOLTAGE_H / 2})`}
+        textAnchor="middle"
+        className="fill-ink-muted text-[11px]"
+      >
         Load voltage
       </text>
       <text
@@ -212,10 +241,24 @@ export function ProfileChart({
         Burden
       </text>
       <g clipPath="url(#profile-clip-bottom)">
-        {design.loadMinV !== undefined && (
-          <line x1={M.left} x2={M.left + plotW} y1={yVolt(design.loadMinV)} y2={yVolt(design.loadMinV)} className="stroke-bad" strokeDasharray="6 3" />
+        {loadMin !== undefined && (
+          <line
+            x1={M.left}
+            x2={M.left + plotW}
+            y1={yVolt(loadMin)}
+            y2={yVolt(loadMin)}
+            className="stroke-bad"
+            strokeDasharray="6 3"
+          />
         )}
-        <line x1={M.left} x2={M.left + plotW} y1={yVolt(supply)} y2={yVolt(supply)} className="stroke-ink-faint" strokeDasharray="4 3" />
+        <line
+          x1={M.left}
+          x2={M.left + plotW}
+          y1={yVolt(supply)}
+          y2={yVolt(supply)}
+          className="stroke-ink-faint"
+          strokeDasharray="4 3"
+        />
         <path d={loadPath} className="fill-none stroke-copper" strokeWidth={1.25} strokeLinejoin="round" />
       </g>
 
@@ -244,7 +287,14 @@ export function ProfileChart({
         />
       )}
       {/* Catches the pointer over the plots. */}
-      <rect x={M.left} y={yTop} width={plotW} height={vTop + VOLTAGE_H - yTop} fill="transparent" className="cursor-crosshair" />
+      <rect
+        x={M.left}
+        y={yTop}
+        width={plotW}
+        height={vTop + VOLTAGE_H - yTop}
+        fill="transparent"
+        className="cursor-crosshair"
+      />
     </svg>
   );
 }

@@ -39,7 +39,7 @@ export const amplifierFields: FieldSpec[] = [
   { key: "gainErrorFraction", label: "Gain error", kind: "quantity", show: percent, hint: "e.g. 0.2 %" },
   { key: "gainDriftPerK", label: "Gain drift", kind: "quantity", show: ppm, hint: "e.g. 10 ppm/K" },
   { key: "biasCurrentA", label: "Input bias current", kind: "quantity", show: si("A"), hint: "e.g. 20 nA" },
-  { key: "noiseDensityVPerRtHz", label: "Input noise density", kind: "quantity", show: si("V/rtHz"), hint: "e.g. 40 nV/rtHz" },
+  { key: "noiseDensityVPerRtHz", label: "Input noise density", kind: "quantity", show: si("V/√Hz"), hint: "e.g. 40 nV/rtHz" },
   { key: "gbwHz", label: "Gain-bandwidth", kind: "quantity", show: si("Hz"), hint: "e.g. 400 kHz" },
   { key: "swingLowV", label: "Lowest output above ground", kind: "quantity", show: si("V"), hint: "e.g. 10 mV" },
   { key: "swingHighV", label: "Output headroom below the supply", kind: "quantity", show: si("V"), hint: "e.g. 30 mV" },

@@ -8,12 +8,14 @@ type ShuntGroup = NonNullable<RequirementInput["shunt"]>;
 /**
  * The requirement's `amplifier` group for a library amplifier. `supplyV` is the amplifier's own
  * supply in the design (clamped into the part's supply range; its highest by default).
- * A resistor-set part sweeps G = 1 + Rf/Rg from E24 pairs between its lowest and highest gain.
+ * A resistor-set part sweeps G = 1 + Rf/Rg from E12 pairs (E24 pairs make too many gains for a wide shunt range) between its lowest and highest gain.
  */
 export function amplifierRequirement(amp: AmplifierValues, supplyV?: number): AmplifierGroup {
   const supply = Math.min(amp.supplyMaxV, Math.max(amp.supplyMinV, supplyV ?? amp.supplyMaxV));
   const gains =
-    amp.gainMode === "fixed" ? [...amp.gains] : { series: "E24", min: amp.gains[0] ?? 1, max: amp.gains[1] ?? amp.gains[0] ?? 1 };
+    amp.gainMode === "fixed"
+      ? [...amp.gains]
+      : { series: "E12", min: amp.gains[0] ?? 1, max: amp.gains[1] ?? amp.gains[0] ?? 1 };
   return {
     gains,
     offset: amp.offsetV,
