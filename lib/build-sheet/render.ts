@@ -5,12 +5,11 @@ import type { DesignView } from "@/lib/design-view";
 import { sheetFonts } from "./font";
 import { BuildSheetDocument, PLANNED_PAGES, type SheetMeta } from "./pdf/document";
 import { FONT } from "./pdf/theme";
-import { sheetData } from "./sheet-data";
-
-const state = globalThis as unknown as { __sensewrightSheetFontRegistered?: boolean };
+import { sheetData, type SheetData } from "./sheet-data";
 
 function registerFonts() {
-  if (state.__sensewrightSheetFontRegistered) return;
+  // Asked of react-pdf itself: a module reload in development gives it a fresh, empty registry.
+  if (Font.getRegisteredFontFamilies().includes(FONT)) return;
   const { regular, bold } = sheetFonts();
   const url = (b: Uint8Array) => `data:font/ttf;base64,${Buffer.from(b).toString("base64")}`;
   Font.register({
@@ -22,7 +21,6 @@ function registerFonts() {
   });
   // Words are not split across lines: a part number or a value cut in two is a misreading.
   Font.registerHyphenationCallback((word) => [word]);
-  state.__sensewrightSheetFontRegistered = true;
 }
 
 /** Pages in a finished PDF (react-pdf writes each page object uncompressed). */
@@ -33,8 +31,12 @@ export function pdfPageCount(pdf: Buffer): number {
 type DocElement = Parameters<typeof renderToBuffer>[0];
 
 export async function renderBuildSheet(view: DesignView, opts: SheetMeta): Promise<Buffer> {
+  return renderSheet(view, sheetData(view), opts);
+}
+
+/** The same, from sheet data already worked out (tests feed it oversized data). */
+export async function renderSheet(view: DesignView, data: SheetData, opts: SheetMeta): Promise<Buffer> {
   registerFonts();
-  const data = sheetData(view);
   // Page numbers written in advance spare react-pdf a second layout of every page; if some
   // page's content overflowed (a very long name, say), the count is off, so lay it out again
   // with numbers the layout works out.

@@ -13,7 +13,8 @@ import { coveredCodePoints } from "@/lib/build-sheet/font";
 import { fixtureView, loggerRequirement, pumpRequirement } from "@/lib/build-sheet/fixtures";
 import * as f from "@/lib/build-sheet/format";
 import { notApprovedNotice } from "@/lib/build-sheet/pdf/document";
-import { renderBuildSheet } from "@/lib/build-sheet/render";
+import { pdfPageCount, renderBuildSheet, renderSheet } from "@/lib/build-sheet/render";
+import { sheetData } from "@/lib/build-sheet/sheet-data";
 
 const meta = { team: "Harbourline Labs", generatedAt: new Date("2026-12-01T09:30:00Z") };
 // PDF text extraction returns compatibility forms (the micro sign comes back as Greek mu):
@@ -183,6 +184,19 @@ describe("build sheet of a design with very long text", () => {
     });
     expectText(r.all, "40 gains from 2 V/V to 197 V/V");
     expectText(r.all, "Never open a live inductive circuit");
+  });
+});
+
+describe("page numbers when a page overflows its plan", () => {
+  it("lays the sheet out again so every page says its true number and the true total", async () => {
+    const view = fixtureView(loggerRequirement, { name: "Overflow check" });
+    const data = sheetData(view);
+    const oversized = { ...data, layout: [...data.layout, ...data.layout, ...data.layout, ...data.layout] };
+    const pdf = await renderSheet(view, oversized, meta);
+    const { text } = await extractText(new Uint8Array(pdf), { mergePages: false });
+    expect(pdfPageCount(pdf)).toBe(text.length);
+    expect(text.length).toBeGreaterThan(3);
+    text.map(squash).forEach((page, i) => expect(page).toContain(`Page ${i + 1} of ${text.length}`));
   });
 });
 
