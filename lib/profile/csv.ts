@@ -51,6 +51,7 @@ export function readNumberCell(raw: string): { ok: true; value: number } | { ok:
   const text = raw.trim();
   if (text === "") return { ok: false, reason: "the cell is empty; expected a number" };
   if (notFinite.test(text)) return { ok: false, reason: `"${text}" is not a finite number (NaN and infinity are refused)` };
+  if (/^[+-]?\d+,\d+$/.test(text)) return { ok: false, reason: `"${text}" is not a number (write decimals with a point: ${text.replace(",", ".")})` };
   if (!numberText.test(text)) return { ok: false, reason: `"${truncate(text)}" is not a number` };
   const value = Number(text);
   if (!Number.isFinite(value)) return { ok: false, reason: `"${truncate(text)}" is too large to be a finite number` };
