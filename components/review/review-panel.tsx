@@ -17,7 +17,7 @@ export function ReviewPanel(props: {
 }) {
   const { design, viewer } = props;
   return (
-    <div className="grid grid-cols-1 gap-4 lg:grid-cols-2">
+    <div id="review" className="grid scroll-mt-4 grid-cols-1 gap-4 lg:grid-cols-2">
       <Panel title="Review" className="lg:col-span-2">
         <ReviewActions design={design} viewer={viewer} />
       </Panel>

@@ -56,7 +56,10 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
                 {" "}
                 Approved by {design.approval.byName} on {formatWhen(design.approval.at)}.
               </>
-            )}
+            )}{" "}
+            <a href="#review" className="text-copper hover:underline">
+              Review, comments and revisions
+            </a>
           </p>
         </div>
         <dl className="grid grid-cols-3 gap-x-6 gap-y-0.5 text-right text-xs num">
