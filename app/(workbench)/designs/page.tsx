@@ -1,17 +1,39 @@
 import type { Metadata } from "next";
+import Link from "next/link";
+import { DesignsTable } from "@/components/designs-list/designs-table";
+import { buttonClass } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/panel";
+import { listDesigns } from "@/db/queries/designs";
 import { requirePageCaller } from "@/lib/auth/gate";
 
 export const metadata: Metadata = { title: "Designs" };
 
 export default async function DesignsPage() {
-  await requirePageCaller("/designs");
+  const caller = await requirePageCaller("/designs");
+  const designs = await listDesigns(caller.teamId, { approvedOnly: caller.role === "maker" });
+  const canCreate = caller.role === "owner" || caller.role === "designer";
   return (
     <div className="flex flex-col gap-4">
-      <h1 className="text-lg font-semibold">Designs</h1>
-      <EmptyState title="No designs yet">
-        The team&apos;s saved shunt-and-amplifier designs will be listed here, with their review status and revision.
-      </EmptyState>
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <h1 className="text-lg font-semibold">Designs</h1>
+          <p className="text-ink-muted">
+            {caller.role === "maker" ? "The team's approved designs, ready to build." : `The shunt-and-amplifier designs of ${caller.teamName}, with their review status and revision.`}
+          </p>
+        </div>
+        {canCreate && (
+          <Link href="/designs/new" className={buttonClass("primary")}>
+            New design
+          </Link>
+        )}
+      </div>
+      {designs.length === 0 ? (
+        <EmptyState title={caller.role === "maker" ? "No approved designs yet" : "No designs yet"}>
+          {canCreate ? "Start one with “New design”: state the requirement and pick a shunt and gain from the sweep." : "Designs saved by the team's owners and designers appear here."}
+        </EmptyState>
+      ) : (
+        <DesignsTable designs={designs} />
+      )}
     </div>
   );
 }

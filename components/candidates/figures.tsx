@@ -1,0 +1,87 @@
+// Every figure of one candidate, grouped, in SI with prefixes.
+import { formatPercent, formatSI, rejectReasonLabels, type CandidateDetail, type Requirement } from "@/lib/design";
+
+type Row = [label: string, value: string, note?: string];
+
+export function figureGroups(req: Requirement, m: CandidateDetail): { title: string; rows: Row[] }[] {
+  const pct = (v: number | null) => (v === null ? "—" : formatPercent(v / 100));
+  return [
+    {
+      title: "Choice",
+      rows: [
+        ["Shunt", formatSI(m.shuntOhms, "Ω")],
+        ["Gain", String(Number(m.gain.toPrecision(6)))],
+        ["Transimpedance R·G", formatSI(m.transimpedanceVPerA, "V/A"), `${formatSI(m.transimpedanceVPerA * 1e-3, "V")} per mA`],
+      ],
+    },
+    {
+      title: "On the load",
+      rows: [
+        ["Burden at Imax", formatSI(m.burdenV, "V"), `allowed ${formatSI(req.drop.max, "V")}`],
+        ["Load voltage at Imax", formatSI(m.loadVoltageV, "V"), req.drop.loadMin !== undefined ? `needs ${formatSI(req.drop.loadMin, "V")}` : undefined],
+        ["Dissipation at Imax", formatSI(m.dissipationW, "W")],
+        ["Power rating chosen", formatSI(m.ratingW, "W"), `used at most ${formatPercent(req.shunt.derating)} of rating`],
+        ["Self-heating", formatSI(m.selfHeatingK, "K"), "above ambient at Imax"],
+      ],
+    },
+    {
+      title: "Signal",
+      rows: [
+        ["Output at Imax", formatSI(m.outputAtMaxV, "V"), `full scale ${formatSI(req.readout.fullScale, "V")}`],
+        ["Headroom", formatSI(m.headroomV, "V")],
+        ["Readout step (LSB)", formatSI(m.lsbA, "A")],
+        ["Counts at Imin", String(Number(m.countsAtMin.toPrecision(3))), `wanted ${req.resolution.countsAtMin}`],
+        ["Dead zone", formatSI(m.deadZoneA, "A"), "reads zero below this"],
+        ["Bandwidth", formatSI(m.bandwidthHz, "Hz")],
+        ["Noise (RMS)", formatSI(m.noiseA, "A")],
+        ["Offset (at 25 °C)", formatSI(m.offsetErrorA, "A")],
+      ],
+    },
+    {
+      title: "Error, % of reading",
+      rows: [
+        ["At Imin, worst case", pct(m.errorAtMinPercent), formatSI(req.current.min, "A")],
+        ["At Imin, RSS", pct(m.rssAtMinPercent)],
+        ["At typical", pct(m.errorAtTypicalPercent), req.current.typical !== undefined ? formatSI(req.current.typical, "A") : "no typical current given"],
+        ["At Imax, worst case", pct(m.errorAtMaxPercent), formatSI(req.current.max, "A")],
+        ["Worst in accuracy band", pct(m.accuracyBandPercent), `${formatSI(req.accuracy.bandMin, "A")} – ${formatSI(req.accuracy.bandMax, "A")}, target ${formatPercent(req.accuracy.percent / 100)}`],
+        ["Lowest current meeting target", m.lowestAccurateCurrentA === null ? "none in the span" : formatSI(m.lowestAccurateCurrentA, "A")],
+      ],
+    },
+  ];
+}
+
+export function Figures({ req, m }: { req: Requirement; m: CandidateDetail }) {
+  return (
+    <div className="flex flex-col gap-3">
+      {!m.feasible && (
+        <div className="rounded border border-bad/40 bg-bad/5 px-3 py-2 text-xs" role="note">
+          <p className="font-semibold text-bad">Not feasible</p>
+          <ul className="list-disc pl-4 text-ink-muted">
+            {m.reasons.map((r) => (
+              <li key={r}>{rejectReasonLabels[r]}</li>
+            ))}
+          </ul>
+        </div>
+      )}
+      <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
+        {figureGroups(req, m).map((g) => (
+          <div key={g.title}>
+            <h4 className="mb-1 text-2xs font-semibold uppercase tracking-wide text-ink-faint">{g.title}</h4>
+            <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-xs">
+              {g.rows.map(([label, value, note]) => (
+                <div key={label} className="contents">
+                  <dt className="text-ink-muted">{label}</dt>
+                  <dd className="num">
+                    <span className="font-medium text-ink">{value}</span>
+                    {note && <span className="ml-1.5 text-2xs text-ink-faint">{note}</span>}
+                  </dd>
+                </div>
+              ))}
+            </dl>
+          </div>
+        ))}
+      </div>
+    </div>
+  );
+}

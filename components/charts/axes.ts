@@ -1,0 +1,39 @@
+// Tick values and labels for log axes: decades (and 2, 5 within them when the span is short).
+import { formatPercent, formatSI } from "@/lib/design";
+
+export function logTicks(lo: number, hi: number, max = 7): number[] {
+  if (!(lo > 0 && hi > lo)) return [lo];
+  const a = Math.floor(Math.log10(lo));
+  const b = Math.ceil(Math.log10(hi));
+  const decades = b - a;
+  const mults = decades <= 2 ? [1, 2, 5] : [1];
+  const step = Math.max(1, Math.ceil(decades / max));
+  const out: number[] = [];
+  for (let e = a; e <= b; e += step) for (const m of mults) {
+    const v = m * 10 ** e;
+    if (v >= lo * (1 - 1e-9) && v <= hi * (1 + 1e-9)) out.push(v);
+  }
+  return out.length >= 2 ? out : [lo, hi];
+}
+
+/** A log domain padded by a fraction of a decade on each side. */
+export function logDomain(values: number[], pad = 0.15): [number, number] {
+  const pos = values.filter((v) => v > 0 && Number.isFinite(v));
+  if (pos.length === 0) return [1e-3, 1];
+  let lo = Math.min(...pos);
+  let hi = Math.max(...pos);
+  if (hi / lo < 10) {
+    const mid = Math.sqrt(lo * hi);
+    lo = mid / Math.sqrt(10);
+    hi = mid * Math.sqrt(10);
+  }
+  return [lo / 10 ** pad, hi * 10 ** pad];
+}
+
+export const siTick = (unit: string) => (v: number) => formatSI(v, unit, 2);
+export const percentTick = (v: number) => formatPercent(v / 100, 2);
+
+/** Room for SI tick labels ("500 µV", "5000 %") and the axis title beside them. */
+export const chartMargin = { top: 10, right: 14, bottom: 40, left: 76 };
+export const leftLabelOffset = 44;
+export const bottomLabelOffset = 14;

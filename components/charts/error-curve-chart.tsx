@@ -1,0 +1,96 @@
+"use client";
+// Worst-case error (% of reading) against current across the span, log–log, for the selected
+// candidate and pinned ones, with the accuracy target drawn over its band.
+import { Axis, Grid, LineSeries, Tooltip, XYChart } from "@visx/xychart";
+import { useMemo } from "react";
+import { formatPercent, formatSI, type ErrorCurvePoint } from "@/lib/design";
+import { SeriesTip } from "./series-tip";
+import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, percentTick, siTick } from "./axes";
+import { chartTheme, usePalette } from "./palette";
+import { useWidth } from "./use-width";
+
+export type ErrorSeries = { key: string; label: string; points: ErrorCurvePoint[]; primary: boolean };
+
+const HEIGHT = 240;
+type Pt = { currentA: number; v: number; label: string };
+
+export function ErrorCurveChart({ series, targetPercent, bandMinA, bandMaxA }: { series: ErrorSeries[]; targetPercent: number; bandMinA: number; bandMaxA: number }) {
+  const { ref, width } = useWidth<HTMLDivElement>();
+  const p = usePalette();
+  const theme = useMemo(() => chartTheme(p), [p]);
+  const colours = [p.copper, p.signal, p.good, p.warn];
+  const all = series.flatMap((s) => s.points);
+  const xd = logDomain(all.map((q) => q.currentA), 0.02);
+  const yd = logDomain([...all.map((q) => q.worstPercent), ...all.map((q) => q.rssPercent), targetPercent]);
+  const yClamp = (v: number) => Math.max(yd[0], Math.min(yd[1], v));
+  return (
+    <div>
+      <div ref={ref} style={{ height: HEIGHT }} data-testid="error-curve-chart">
+        {width > 0 && all.length > 0 && (
+          <XYChart width={width} height={HEIGHT} margin={chartMargin} theme={theme} xScale={{ type: "log", domain: xd }} yScale={{ type: "log", domain: yd }} accessibilityLabel="Worst-case error against current">
+            <Grid columns rows numTicks={6} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
+            <Axis orientation="bottom" labelOffset={bottomLabelOffset} label="Current" tickValues={logTicks(xd[0], xd[1])} tickFormat={siTick("A")} />
+            <Axis orientation="left" labelOffset={leftLabelOffset} label="Error, % of reading" tickValues={logTicks(yd[0], yd[1])} tickFormat={percentTick} />
+            <LineSeries
+              dataKey="Accuracy target"
+              data={[
+                { currentA: bandMinA, v: targetPercent, label: "target" },
+                { currentA: bandMaxA, v: targetPercent, label: "target" },
+              ]}
+              xAccessor={(d) => d.currentA}
+              yAccessor={(d) => d.v}
+              stroke={p.bad}
+              strokeWidth={2}
+              strokeDasharray="5 3"
+              enableEvents={false}
+            />
+            {series.map((s, i) => (
+              <LineSeries
+                key={s.key}
+                dataKey={`${s.label} (worst case)`}
+                data={s.points.map((q) => ({ currentA: q.currentA, v: yClamp(q.worstPercent), label: s.label }))}
+                xAccessor={(d) => d.currentA}
+                yAccessor={(d) => d.v}
+                stroke={colours[i % colours.length]}
+                strokeWidth={s.primary ? 2 : 1.2}
+              />
+            ))}
+            {series[0]?.primary && (
+              <LineSeries
+                dataKey={`${series[0].label} (RSS)`}
+                data={series[0].points.map((q) => ({ currentA: q.currentA, v: yClamp(q.rssPercent), label: `${series[0]!.label} RSS` }))}
+                xAccessor={(d) => d.currentA}
+                yAccessor={(d) => d.v}
+                stroke={colours[0]}
+                strokeWidth={1}
+                strokeDasharray="2 2"
+              />
+            )}
+            <Tooltip<Pt>
+              snapTooltipToDatumX
+              showVerticalCrosshair
+              showSeriesGlyphs
+              renderTooltip={({ tooltipData }) => {
+                const near = tooltipData?.nearestDatum?.datum;
+                if (!near) return null;
+                return <SeriesTip title={`at ${formatSI(near.currentA, "A")}`} byKey={tooltipData.datumByKey} skip={["Accuracy target"]} value={(d) => formatPercent(d.v / 100)} />;
+              }}
+            />
+          </XYChart>
+        )}
+      </div>
+      <ul className="mt-1 flex flex-wrap gap-x-3 gap-y-1 text-2xs text-ink-muted" aria-label="Legend">
+        {series.map((s, i) => (
+          <li key={s.key} className="flex items-center gap-1">
+            <span className="inline-block h-0.5 w-4" style={{ background: colours[i % colours.length] }} aria-hidden />
+            <span className="num">{s.label}</span>
+          </li>
+        ))}
+        {series[0]?.primary && <li className="flex items-center gap-1">dotted: RSS of the selected</li>}
+        <li className="flex items-center gap-1">
+          <span className="inline-block h-0 w-4 border-t-2 border-dashed" style={{ borderColor: p.bad }} aria-hidden /> target {formatPercent(targetPercent / 100)} over its band
+        </li>
+      </ul>
+    </div>
+  );
+}

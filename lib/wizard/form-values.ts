@@ -1,0 +1,77 @@
+// The wizard's form shape: what the designer types (unit strings), one field per input.
+// The engine's requirement schema validates it as it stands (extra keys are ignored).
+import type { LoadModel, RequirementInput } from "@/lib/design";
+import { deepMerge } from "./draft";
+
+export type WizardValues = {
+  current: { min: string; max: string; typical?: string };
+  supply: { voltage: string; side: "low" | "high" };
+  drop: { max?: string; fraction?: string; loadMin?: string };
+  load: { model: LoadModel };
+  readout: { kind: "adc" | "meter"; bits?: number; counts?: number; fullScale: string };
+  resolution: { countsAtMin: number };
+  accuracy: { percent: string; bandMin?: string; bandMax?: string };
+  temperature: { min: string; max: string };
+  shunt: { series: string; min: string; max: string; tolerance: string; tempco: string; ratings: string[]; derating: number };
+  amplifier: {
+    gains?: number[];
+    gainSet?: { series: string; min: number; max: number };
+    offset: string;
+    offsetDrift: string;
+    gainError: string;
+    gainDrift: string;
+    biasCurrent: string;
+    noiseDensity: string;
+    gbw: string;
+    supply: string;
+    swingLow: string;
+    swingHigh: string;
+    cmrrDb: number;
+  };
+  limit: number;
+};
+
+/** The engine's defaults (lib/design/requirement.ts), written the way an engineer types them. */
+export const readableDefaults: WizardValues = {
+  current: { min: "", max: "" },
+  supply: { voltage: "", side: "low" },
+  drop: { max: "60 mV" },
+  load: { model: "constant-current" },
+  readout: { kind: "adc", bits: 12, counts: 2000, fullScale: "2.5 V" },
+  resolution: { countsAtMin: 10 },
+  accuracy: { percent: "2" },
+  temperature: { min: "0 °C", max: "70 °C" },
+  shunt: {
+    series: "E96",
+    min: "1 mΩ",
+    max: "1 kΩ",
+    tolerance: "0.5 %",
+    tempco: "50 ppm/K",
+    ratings: ["0.1 W", "0.125 W", "0.25 W", "0.5 W", "1 W", "2 W", "3 W"],
+    derating: 0.5,
+  },
+  amplifier: {
+    gains: [10, 20, 25, 50, 60, 100, 200, 500],
+    gainSet: { series: "E24", min: 2, max: 1000 },
+    offset: "10 µV",
+    offsetDrift: "0.1 µV/K",
+    gainError: "0.1 %",
+    gainDrift: "10 ppm/K",
+    biasCurrent: "20 nA",
+    noiseDensity: "40 nV/rtHz",
+    gbw: "2 MHz",
+    supply: "5 V",
+    swingLow: "10 mV",
+    swingHigh: "50 mV",
+    cmrrDb: 120,
+  },
+  limit: 200,
+};
+
+/** A scenario's requirement input laid over the readable defaults (values of both modes kept;
+ * only the fields on screen reach the schema). */
+export function valuesFrom(input: RequirementInput): WizardValues {
+  const i = JSON.parse(JSON.stringify(input)) as Record<string, Record<string, unknown>>;
+  if (i.accuracy?.percent !== undefined) i.accuracy.percent = String(i.accuracy.percent);
+  return deepMerge(readableDefaults, i);
+}

@@ -1,0 +1,81 @@
+// The team library as the wizard reads it (GET /api/library, db/schema.ts columns), and an
+// amplifier row turned into the wizard's amplifier fields.
+import { formatSI } from "@/lib/design";
+import type { WizardValues } from "./form-values";
+
+export type LibraryAmplifierRow = {
+  id: string;
+  name: string;
+  gainMode: "fixed" | "resistor-set";
+  gains: number[];
+  offsetV: number;
+  offsetDriftVPerK: number;
+  gainErrorFraction: number;
+  gainDriftPerK: number;
+  biasCurrentA: number;
+  noiseDensityVPerRtHz: number;
+  gbwHz: number;
+  swingLowV: number;
+  swingHighV: number;
+  cmrrDb: number;
+  supplyMinV: number;
+  supplyMaxV: number;
+};
+
+export type LibraryShuntRow = {
+  id: string;
+  name: string;
+  series: string;
+  minOhms: number;
+  maxOhms: number;
+  toleranceFraction: number;
+  tempcoPerK: number;
+  ratingsW: number[];
+  fourTerminal: boolean;
+};
+
+export type Library = { amplifiers: LibraryAmplifierRow[]; shunts: LibraryShuntRow[] };
+
+/** The library, or an empty one when the route is missing or refuses (the wizard still works). */
+export async function fetchLibrary(): Promise<Library> {
+  const res = await fetch("/api/library", { headers: { accept: "application/json" } });
+  if (res.status === 404) return { amplifiers: [], shunts: [] };
+  if (!res.ok) throw new Error(`The library answered ${res.status}`);
+  const body = (await res.json()) as Partial<Library>;
+  return { amplifiers: Array.isArray(body.amplifiers) ? body.amplifiers : [], shunts: Array.isArray(body.shunts) ? body.shunts : [] };
+}
+
+const ppm = (x: number) => `${Number((x * 1e6).toPrecision(4))} ppm/K`;
+const pct = (x: number) => `${Number((x * 100).toPrecision(4))} %`;
+const si = (x: number, unit: string) => formatSI(x, unit, 4).replace("µ", "u");
+
+export function libraryAmplifierValues(a: LibraryAmplifierRow): Partial<WizardValues["amplifier"]> {
+  const gains = [...a.gains].sort((x, y) => x - y);
+  const base: Partial<WizardValues["amplifier"]> = {
+    offset: si(a.offsetV, "V"),
+    offsetDrift: `${si(a.offsetDriftVPerK, "V")}/K`,
+    gainError: pct(a.gainErrorFraction),
+    gainDrift: ppm(a.gainDriftPerK),
+    biasCurrent: si(a.biasCurrentA, "A"),
+    noiseDensity: `${si(a.noiseDensityVPerRtHz, "V")}/rtHz`,
+    gbw: si(a.gbwHz, "Hz"),
+    swingLow: si(a.swingLowV, "V"),
+    swingHigh: si(a.swingHighV, "V"),
+    cmrrDb: a.cmrrDb,
+  };
+  if (a.gainMode === "resistor-set" && gains.length > 0) {
+    return { ...base, gainSet: { series: "E24", min: Math.max(1, gains[0] ?? 1), max: gains.at(-1) ?? 1000 } };
+  }
+  return { ...base, gains };
+}
+
+export function libraryShuntValues(s: LibraryShuntRow): Partial<WizardValues["shunt"]> {
+  return {
+    series: s.series,
+    min: si(s.minOhms, "ohm"),
+    max: si(s.maxOhms, "ohm"),
+    tolerance: pct(s.toleranceFraction),
+    tempco: ppm(s.tempcoPerK),
+    ratings: s.ratingsW.map((w) => si(w, "W")),
+  };
+}

@@ -1,0 +1,22 @@
+// The solver off the main thread: parse the raw form values with the engine's schema, sweep,
+// and post the result back. Only the latest request matters; the page drops stale replies.
+import { parseRequirement, solve } from "@/lib/design";
+import type { SolveReply, SolveRequest } from "./solver-protocol";
+
+const post = (reply: SolveReply) => (self as unknown as { postMessage(m: SolveReply): void }).postMessage(reply);
+
+self.addEventListener("message", (event: MessageEvent<SolveRequest>) => {
+  const { id, input } = event.data;
+  try {
+    const parsed = parseRequirement(input);
+    if (!parsed.ok) {
+      post({ id, ok: false, fieldErrors: parsed.fieldErrors, message: parsed.message });
+      return;
+    }
+    const t0 = performance.now();
+    const result = solve(parsed.requirement);
+    post({ id, ok: true, result, solveMs: performance.now() - t0 });
+  } catch (e) {
+    post({ id, ok: false, fieldErrors: {}, message: e instanceof Error ? e.message : String(e) });
+  }
+});
