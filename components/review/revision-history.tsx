@@ -21,43 +21,51 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
   const changes = ra && rb ? diffRevisions(ra, rb) : [];
   return (
     <div className="flex flex-col gap-3">
-      <table className="w-full text-left text-sm [&_td]:whitespace-nowrap">
-        <thead className="text-xs text-ink-muted">
-          <tr className="border-b border-line">
-            <th className="py-1 pr-3 font-medium">Revision</th>
-            <th className="py-1 pr-3 font-medium">Author</th>
-            <th className="py-1 pr-3 font-medium">Saved</th>
-            <th className="py-1 pr-3 text-right font-medium">Shunt</th>
-            <th className="py-1 pr-3 text-right font-medium">Gain</th>
-            <th className="py-1 font-medium">Approval</th>
-          </tr>
-        </thead>
-        <tbody>
-          {[...revisions].reverse().map((r) => (
-            <tr key={r.revision} className="border-b border-line last:border-0">
-              <td className="py-1 pr-3">{r.revision}</td>
-              <td className="py-1 pr-3">{r.authorName}</td>
-              <td className="py-1 pr-3 text-ink-muted">{formatWhen(r.createdAt)}</td>
-              <td className="py-1 pr-3 text-right">{formatSI(r.choice.shuntOhms, "Ω")}</td>
-              <td className="py-1 pr-3 text-right">{formatSI(r.choice.gain, "")}</td>
-              <td className="py-1 text-xs">
-                {r.approval ? (
-                  <span className="flex items-center gap-1">
-                    <Badge tone="good">approved</Badge> by {r.approval.byName}, {formatWhen(r.approval.at)}
-                  </span>
-                ) : (
-                  <span className="text-ink-faint">—</span>
-                )}
-              </td>
+      <div className="overflow-x-auto">
+        <table className="w-full text-left text-sm">
+          <thead className="text-xs text-ink-muted">
+            <tr className="border-b border-line">
+              <th className="py-1 pr-3 font-medium">Revision</th>
+              <th className="py-1 pr-3 font-medium">Author</th>
+              <th className="py-1 pr-3 font-medium">Saved</th>
+              <th className="py-1 pr-3 text-right font-medium">Shunt</th>
+              <th className="py-1 pr-3 text-right font-medium">Gain</th>
+              <th className="py-1 font-medium">Approval</th>
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {[...revisions].reverse().map((r) => (
+              <tr key={r.revision} className="border-b border-line last:border-0">
+                <td className="py-1 pr-3">{r.revision}</td>
+                <td className="py-1 pr-3">{r.authorName}</td>
+                <td className="py-1 pr-3 text-xs text-ink-muted">{formatWhen(r.createdAt)}</td>
+                <td className="whitespace-nowrap py-1 pr-3 text-right">{formatSI(r.choice.shuntOhms, "Ω")}</td>
+                <td className="whitespace-nowrap py-1 pr-3 text-right">{formatSI(r.choice.gain, "")}</td>
+                <td className="py-1 text-xs">
+                  {r.approval ? (
+                    <span className="flex flex-col items-start gap-0.5" title={formatWhen(r.approval.at)}>
+                      <Badge tone="good">approved</Badge>
+                      <span className="text-ink-muted">by {r.approval.byName}</span>
+                    </span>
+                  ) : (
+                    <span className="text-ink-faint">—</span>
+                  )}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
       {revisions.length > 1 ? (
         <div className="flex flex-col gap-2" data-testid="revision-diff">
           <div className="flex flex-wrap items-center gap-2 text-xs">
             <span className="font-medium text-ink-muted">What changed from</span>
-            <select aria-label="From revision" value={a} onChange={(e) => setA(Number(e.target.value))} className={narrowSelect}>
+            <select
+              aria-label="From revision"
+              value={a}
+              onChange={(e) => setA(Number(e.target.value))}
+              className={narrowSelect}
+            >
               {revisions.map((r) => (
                 <option key={r.revision} value={r.revision}>
                   {r.revision}
@@ -65,7 +73,12 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
               ))}
             </select>
             <span className="text-ink-muted">to</span>
-            <select aria-label="To revision" value={b} onChange={(e) => setB(Number(e.target.value))} className={narrowSelect}>
+            <select
+              aria-label="To revision"
+              value={b}
+              onChange={(e) => setB(Number(e.target.value))}
+              className={narrowSelect}
+            >
               {revisions.map((r) => (
                 <option key={r.revision} value={r.revision}>
                   {r.revision}
@@ -74,7 +87,9 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
             </select>
           </div>
           {changes.length === 0 ? (
-            <p className="text-xs text-ink-faint">{a === b ? "Pick two different revisions." : "Nothing differs between these revisions."}</p>
+            <p className="text-xs text-ink-faint">
+              {a === b ? "Pick two different revisions." : "Nothing differs between these revisions."}
+            </p>
           ) : (
             <table className="w-full text-left text-sm">
               <thead className="text-xs text-ink-muted">
@@ -88,7 +103,9 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
                 {changes.map((c) => (
                   <tr key={`${c.group}.${c.path}`} className="border-b border-line last:border-0">
                     <td className="py-1 pr-3">
-                      <span className="mr-1 text-2xs uppercase tracking-wide text-ink-faint">{groupNames[c.group]}</span>
+                      <span className="mr-1 text-2xs uppercase tracking-wide text-ink-faint">
+                        {groupNames[c.group]}
+                      </span>
                       {c.label}
                     </td>
                     <td className="py-1 pr-3 text-right text-ink-muted">{c.aText}</td>
@@ -100,7 +117,9 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
           )}
         </div>
       ) : (
-        <p className="text-xs text-ink-faint">Only one revision so far; every save adds one, and the changes between any two show here.</p>
+        <p className="text-xs text-ink-faint">
+          Only one revision so far; every save adds one, and the changes between any two show here.
+        </p>
       )}
     </div>
   );
