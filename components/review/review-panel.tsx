@@ -21,10 +21,10 @@ export function ReviewPanel(props: {
       <Panel title="Review" className="lg:col-span-2">
         <ReviewActions design={design} viewer={viewer} />
       </Panel>
-      <Panel title="Comments and verdicts">
+      <Panel title="Comments and verdicts" className="min-w-0">
         <CommentThreads designId={design.id} currentRevision={design.revision} reviews={props.reviews} />
       </Panel>
-      <div className="flex flex-col gap-4">
+      <div className="flex min-w-0 flex-col gap-4">
         <Panel title="Revisions">
           <RevisionHistory revisions={props.revisions} />
         </Panel>
