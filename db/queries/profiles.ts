@@ -54,9 +54,10 @@ export async function insertProfile(input: {
   currentsA: Float64Array;
   summary: ProfileSummary;
   userId: string;
+  userName: string;
 }): Promise<{ id: string }> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
+  const stored = await db.transaction(async (tx) => {
     const [row] = await tx
       .insert(profiles)
       .values({
@@ -69,7 +70,7 @@ export async function insertProfile(input: {
         summary: input.summary as unknown as Record<string, unknown>,
         uploadedBy: input.userId,
       })
-      .returning({ id: profiles.id });
+      .returning({ id: profiles.id, createdAt: profiles.createdAt });
     if (!row) throw new Error("profile not stored");
     await recordAudit(
       {
@@ -84,6 +85,20 @@ export async function insertProfile(input: {
     );
     return row;
   });
+  // The chart asks for this profile next: keep the decoded samples rather than read them back.
+  remember(`${input.designId}/${stored.id}`, {
+    id: stored.id,
+    fileName: input.fileName,
+    samples: input.timesS.length,
+    revision: input.revision,
+    summary: input.summary,
+    uploadedBy: input.userId,
+    uploadedByName: input.userName,
+    createdAt: stored.createdAt.toISOString(),
+    timesS: input.timesS,
+    currentsA: input.currentsA,
+  });
+  return { id: stored.id };
 }
 
 export type StoredProfile = ProfileListItem & { timesS: Float64Array; currentsA: Float64Array };
@@ -109,9 +124,13 @@ export async function getProfile(designId: string, profileId: string): Promise<S
     .where(and(eq(profiles.designId, designId), eq(profiles.id, profileId)));
   if (!row) return null;
   const stored: StoredProfile = { ...toItem(row), timesS: bytesToFloat64(row.timesS), currentsA: bytesToFloat64(row.currentsA) };
+  remember(key, stored);
+  return stored;
+}
+
+function remember(key: string, stored: StoredProfile) {
   cache.set(key, stored);
   if (cache.size > CACHE_SIZE) cache.delete(cache.keys().next().value!);
-  return stored;
 }
 
 /** Who uploaded a profile of this design (null: no such profile). */

@@ -34,6 +34,7 @@ export const POST = apiRoute({ roles: ["owner", "designer"], doing: "upload curr
     currentsA,
     summary,
     userId: caller.userId,
+    userName: caller.name,
   });
   return json({ id, samples: summary.samples, summary, fileName: upload.fileName, revision: design.revision, columns: parsed.series.columns }, 201);
 });
