@@ -11,7 +11,7 @@
 //   filter (a meter reads slowly) and a 3 % target; the choice nearest 1 mV per µA is taken.
 import { parseRequirement, solve, type Candidate, type RequirementInput } from "@/lib/design";
 import { evaluateDesign } from "@/lib/designs/service";
-import { changeDesignStatus, createDesign } from "../queries/designs";
+import { changeDesignStatus, createDesign, reviseDesign } from "../queries/designs";
 import { addReview } from "../queries/reviews";
 import type { DemoIds } from "./team";
 
@@ -20,6 +20,7 @@ type DemoDesign = {
   project: string;
   requirement: RequirementInput;
   pick: (front: Candidate[]) => Candidate | undefined;
+  revisedPick?: (front: Candidate[]) => Candidate | undefined;
   state: "draft" | "in-review" | "approved";
 };
 
@@ -49,6 +50,8 @@ export const demoDesigns: DemoDesign[] = [
       amplifier: { cmrrDb: 120 },
     },
     pick: (front) => front[0],
+    // Returned once (too much drop at 6 A), revised to the front's lowest-burden pair, submitted again.
+    revisedPick: (front) => [...front].sort((a, b) => a.burdenV - b.burdenV)[0],
     state: "in-review",
   },
   {
@@ -70,11 +73,11 @@ export const demoDesigns: DemoDesign[] = [
 ];
 
 /** The Pareto candidate a demo design uses, or an error naming the scenario. */
-export function demoChoice(d: DemoDesign) {
+export function demoChoice(d: DemoDesign, pick = d.pick) {
   const parsed = parseRequirement(d.requirement);
   if (!parsed.ok) throw new Error(`demo design "${d.name}": ${parsed.message}`);
   const front = solve(parsed.requirement).candidates.filter((c) => c.pareto && c.feasible);
-  const chosen = d.pick(front);
+  const chosen = pick(front);
   if (!chosen) throw new Error(`demo design "${d.name}": the solver found no feasible candidate`);
   return { shuntOhms: chosen.shuntOhms, gain: chosen.gain };
 }
@@ -95,6 +98,7 @@ export async function seedDemoDesigns(ids: DemoIds): Promise<void> {
       action: "design.submitted",
     });
     if (!submitted.ok) throw new Error(`demo design "${d.name}": ${submitted.message}`);
+    if (d.revisedPick) await returnAndRevise(ids, id, d, d.revisedPick);
     if (d.state === "approved") {
       const approved = await addReview({
         designId: id,
@@ -107,4 +111,24 @@ export async function seedDemoDesigns(ids: DemoIds): Promise<void> {
       if (!approved.ok) throw new Error(`demo design "${d.name}": ${approved.message}`);
     }
   }
+}
+
+/** The reviewer returns revision 1 with a reason; the designer answers, saves revision 2 and submits it. */
+async function returnAndRevise(ids: DemoIds, id: string, d: DemoDesign, pick: NonNullable<DemoDesign["revisedPick"]>) {
+  const { designer, reviewer } = ids.userIds;
+  const returned = await addReview({
+    designId: id,
+    teamId: ids.teamId,
+    actorId: reviewer,
+    verdict: "return",
+    body: "The drop at 6 A eats into the motor's headroom; take the lowest-burden pair the front offers and resubmit.",
+    revision: 1,
+  });
+  if (!returned.ok) throw new Error(`demo design "${d.name}": ${returned.message}`);
+  await addReview({ designId: id, teamId: ids.teamId, actorId: designer, verdict: "comment", body: "Done in revision 2: smaller shunt, same gain range.", revision: 1, parentId: returned.id });
+  const evaluated = evaluateDesign(d.requirement, demoChoice(d, pick));
+  const revised = await reviseDesign({ ...evaluated, designId: id, teamId: ids.teamId, userId: designer, expectedRevision: 1, name: d.name, project: d.project, changed: ["choice.shuntOhms", "choice.gain"] });
+  if (!revised.ok) throw new Error(`demo design "${d.name}": ${revised.message}`);
+  const again = await changeDesignStatus({ designId: id, teamId: ids.teamId, actorId: designer, revision: 2, from: ["draft"], to: "in-review", action: "design.submitted" });
+  if (!again.ok) throw new Error(`demo design "${d.name}": ${again.message}`);
 }

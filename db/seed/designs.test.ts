@@ -1,0 +1,45 @@
+// The demo designs build through the design service with choices from the solver's front, and
+// land in the states the demo promises: one approved, one in review (after a return), one draft.
+import { afterAll, describe, expect, it } from "vitest";
+import { evaluateCandidate, parseRequirement } from "@/lib/design";
+import { closeDb, getDb } from "../client";
+import { listDesigns, listRevisions } from "../queries/designs";
+import { listReviews } from "../queries/reviews";
+import { teams } from "../schema";
+import { seedDemoIfEmpty } from "./index";
+
+afterAll(closeDb);
+
+describe("demo designs", () => {
+  it("seed one approved, one in review at revision 2 and one draft, figures equal to the engine's", async () => {
+    expect(await seedDemoIfEmpty()).toBe(true);
+    const db = await getDb();
+    const [team] = await db.select().from(teams);
+    const designs = await listDesigns(team!.id);
+    expect(designs.map((d) => [d.project, d.status, d.revision]).sort()).toEqual([
+      ["Bench adapter", "draft", 1],
+      ["Pump controller", "in-review", 2],
+      ["Soil-moisture logger", "approved", 1],
+    ]);
+    for (const d of designs) {
+      const revs = await listRevisions(d.id);
+      const last = revs.at(-1)!;
+      const parsed = parseRequirement(last.requirement);
+      expect(parsed.ok).toBe(true);
+      if (!parsed.ok) continue;
+      const again = evaluateCandidate(parsed.requirement, last.choice);
+      expect(again.feasible).toBe(true);
+      expect(last.metrics.burdenV).toBeCloseTo(again.burdenV, 12);
+    }
+    const adapter = designs.find((d) => d.project === "Bench adapter")!;
+    expect(adapter.shuntOhms * adapter.gain).toBeCloseTo(1000, 6); // 1 mV per µA is 1000 V/A
+    const pump = designs.find((d) => d.project === "Pump controller")!;
+    const verdicts = (await listReviews(pump.id)).map((r) => [r.revision, r.verdict]);
+    expect(verdicts).toEqual([
+      [1, "return"],
+      [1, "comment"],
+    ]);
+    const [r1, r2] = await listRevisions(pump.id);
+    expect(r2!.metrics.burdenV).toBeLessThan(r1!.metrics.burdenV);
+  });
+});
