@@ -1,5 +1,14 @@
 import Link from "next/link";
+import { choiceFields, requirementFields } from "@/lib/designs/figures";
 import { formatWhen } from "@/lib/designs/when";
+
+/** "choice.shuntOhms" → "shunt", "requirement.current.max" → "maximum current". */
+function changedLabel(path: string): string {
+  const [group, ...rest] = path.split(".");
+  const key = rest.join(".");
+  const label = group === "choice" ? choiceFields[key]?.label : group === "requirement" ? requirementFields[key]?.label : path === "name" ? "Name" : path === "project" ? "Project" : undefined;
+  return (label ?? path).toLowerCase();
+}
 
 export type AuditEntry = {
   id: string;
@@ -15,7 +24,7 @@ export type AuditEntry = {
 const words: Record<string, (d: Record<string, unknown>) => string> = {
   "design.created": (d) => `created the design (revision ${String(d.revision ?? 1)})`,
   "design.revised": (d) =>
-    `saved revision ${String(d.revision)}${Array.isArray(d.changed) && d.changed.length ? `: ${d.changed.slice(0, 6).join(", ")}${d.changed.length > 6 ? "…" : ""}` : ""}`,
+    `saved revision ${String(d.revision)}${Array.isArray(d.changed) && d.changed.length ? ` (changed ${d.changed.slice(0, 6).map((c) => changedLabel(String(c))).join(", ")}${d.changed.length > 6 ? "…" : ""})` : ""}`,
   "design.submitted": (d) => `submitted revision ${String(d.revision)} for review`,
   "design.approved": (d) => `approved revision ${String(d.revision)}`,
   "design.returned": (d) => `returned revision ${String(d.revision)}${d.reason ? `: “${String(d.reason)}”` : ""}`,

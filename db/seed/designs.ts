@@ -10,6 +10,7 @@
 // - Bench adapter: 2 µA to 180 µA, an amplifier whose output reaches 1 mV of ground, a 10 Hz output
 //   filter (a meter reads slowly) and a 3 % target; the choice nearest 1 mV per µA is taken.
 import { parseRequirement, solve, type Candidate, type RequirementInput } from "@/lib/design";
+import { changedFields } from "@/lib/designs/diff";
 import { evaluateDesign } from "@/lib/designs/service";
 import { changeDesignStatus, createDesign, reviseDesign } from "../queries/designs";
 import { addReview } from "../queries/reviews";
@@ -127,7 +128,9 @@ async function returnAndRevise(ids: DemoIds, id: string, d: DemoDesign, pick: No
   if (!returned.ok) throw new Error(`demo design "${d.name}": ${returned.message}`);
   await addReview({ designId: id, teamId: ids.teamId, actorId: designer, verdict: "comment", body: "Done in revision 2: smaller shunt, same gain range.", revision: 1, parentId: returned.id });
   const evaluated = evaluateDesign(d.requirement, demoChoice(d, pick));
-  const revised = await reviseDesign({ ...evaluated, designId: id, teamId: ids.teamId, userId: designer, expectedRevision: 1, name: d.name, project: d.project, changed: ["choice.shuntOhms", "choice.gain"] });
+  const before = evaluateDesign(d.requirement, demoChoice(d));
+  const changed = changedFields(before, evaluated);
+  const revised = await reviseDesign({ ...evaluated, designId: id, teamId: ids.teamId, userId: designer, expectedRevision: 1, name: d.name, project: d.project, changed });
   if (!revised.ok) throw new Error(`demo design "${d.name}": ${revised.message}`);
   const again = await changeDesignStatus({ designId: id, teamId: ids.teamId, actorId: designer, revision: 2, from: ["draft"], to: "in-review", action: "design.submitted" });
   if (!again.ok) throw new Error(`demo design "${d.name}": ${again.message}`);
