@@ -129,7 +129,7 @@ async function returnAndRevise(ids: DemoIds, id: string, d: DemoDesign, pick: No
   await addReview({ designId: id, teamId: ids.teamId, actorId: designer, verdict: "comment", body: "Done in revision 2: smaller shunt, same gain range.", revision: 1, parentId: returned.id });
   const evaluated = evaluateDesign(d.requirement, demoChoice(d, pick));
   const before = evaluateDesign(d.requirement, demoChoice(d));
-  const changed = changedFields(before, evaluated);
+  const changed = changedFields({ requirement: before.requirement, choice: before.choice }, { requirement: evaluated.requirement, choice: evaluated.choice });
   const revised = await reviseDesign({ ...evaluated, designId: id, teamId: ids.teamId, userId: designer, expectedRevision: 1, name: d.name, project: d.project, changed });
   if (!revised.ok) throw new Error(`demo design "${d.name}": ${revised.message}`);
   const again = await changeDesignStatus({ designId: id, teamId: ids.teamId, actorId: designer, revision: 2, from: ["draft"], to: "in-review", action: "design.submitted" });
