@@ -125,3 +125,14 @@ test("a 1,000,000-sample recording uploads under 10 MB and its chart draws", asy
   console.log(`[upload e2e] 1,000,000-sample chart drawn ${Date.now() - t0} ms after navigation`);
   await page.getByTestId("profiles-panel").screenshot({ path: `${shots}/profile-million.png` });
 });
+
+test("a maker reads the library and exports it, without edit controls", async ({ page }) => {
+  await signInPage(page, "maker");
+  await page.goto("/library");
+  await expect(page.getByRole("table", { name: "Amplifiers" })).toContainText("SW-CSA-20 fixed-gain sense amp");
+  await expect(page.getByRole("button", { name: "Add amplifier" })).toHaveCount(0);
+  await expect(page.getByRole("button", { name: /^Edit / })).toHaveCount(0);
+  await expect(page.getByRole("form", { name: "Import parts" })).toHaveCount(0);
+  await expect(page.getByRole("link", { name: "Shunt families CSV" })).toHaveAttribute("href", "/api/library/export?kind=shunts");
+  await page.screenshot({ path: `${shots}/library-maker.png`, fullPage: true });
+});
