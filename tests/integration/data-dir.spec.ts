@@ -3,6 +3,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { expect, request, test } from "@playwright/test";
+import { parseRequirement, solve } from "../../lib/design";
 import { demoEmail, signInApi } from "../fixtures/auth";
 import { startServer, waitHealthy, type StartedServer } from "../fixtures/server";
 
@@ -50,7 +51,24 @@ test("a server killed with SIGKILL restarts on the same directory with every row
   const maker = team.members.find((m) => m.email === demoEmail("maker"))!;
   const changed = await owner.patch(`/api/team/members/${maker.userId}`, { data: { role: "reviewer" } });
   expect(changed.status()).toBe(200);
+  // A design saved just before the kill.
+  const requirement = {
+    current: { min: "5 mA", max: "200 mA" },
+    supply: { voltage: "5 V", side: "low" },
+    drop: { max: "100 mV" },
+    readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+  };
+  const parsed = parseRequirement(requirement);
+  if (!parsed.ok) throw new Error(parsed.message);
+  const pick = solve(parsed.requirement).candidates.find((c) => c.feasible)!;
+  const saved = await owner.post("/api/designs", {
+    data: { name: "Saved before the kill", requirement, choice: { shuntOhms: pick.shuntOhms, gain: pick.gain } },
+  });
+  expect(saved.status(), await saved.text()).toBe(201);
+  const { id } = (await saved.json()) as { id: string };
   const before = (await (await owner.get("/api/team")).json()) as unknown;
+  const designBefore = (await (await owner.get(`/api/designs/${id}`)).json()) as unknown;
+  const listBefore = (await (await owner.get("/api/designs")).json()) as { designs: unknown[] };
   await owner.dispose();
 
   a.proc.kill("SIGKILL");
@@ -65,6 +83,10 @@ test("a server killed with SIGKILL restarts on the same directory with every row
   // The generated secret survived too: the same accounts sign in.
   expect(await signInApi(again, demoEmail("owner"))).toBe(true);
   expect(await (await again.get("/api/team")).json()).toEqual(before);
+  expect(await (await again.get(`/api/designs/${id}`)).json()).toEqual(designBefore);
+  expect(((await (await again.get("/api/designs")).json()) as { designs: unknown[] }).designs).toHaveLength(
+    listBefore.designs.length,
+  );
   await again.dispose();
   b.proc.kill("SIGTERM");
   await b.exited;
