@@ -100,8 +100,9 @@ export function ProfileChart({
   );
   const timeTicks = linearTicks(fromS, toS, Math.max(2, Math.floor(plotW / 110)));
 
-  // Drag-select to zoom.
+  // Drag-select to zoom; without a drag, the pointer reads the nearest point.
   const [drag, setDrag] = useState<{ a: number; b: number } | null>(null);
+  const [hover, setHover] = useState<number | null>(null);
   const svgRef = useRef<SVGSVGElement>(null);
   const localX = (e: React.PointerEvent) => {
     const r = svgRef.current!.getBoundingClientRect();
@@ -126,7 +127,12 @@ export function ProfileChart({
         setDrag({ a: px, b: px });
         (e.target as Element).setPointerCapture?.(e.pointerId);
       }}
-      onPointerMove={(e) => drag && setDrag({ ...drag, b: localX(e) })}
+      onPointerMove={(e) => {
+        const px = localX(e);
+        if (drag) setDrag({ ...drag, b: px });
+        else setHover(nearestIndex(series.tS, tOf(px)));
+      }}
+      onPointerLeave={() => setHover(null)}
       onPointerUp={() => {
         if (drag && Math.abs(drag.b - drag.a) > 4) {
           const [p, q] = drag.a < drag.b ? [drag.a, drag.b] : [drag.b, drag.a];
@@ -286,6 +292,17 @@ export function ProfileChart({
           data-testid="zoom-selection"
         />
       )}
+      {hover !== null && !drag && series.tS[hover] !== undefined && (
+        <HoverReadout
+          x={x(series.tS[hover]!)}
+          top={yTop}
+          bottom={vTop + VOLTAGE_H}
+          right={M.left + plotW}
+          t={series.tS[hover]!}
+          i={series.currentA[hover]!}
+          loadV={supply - series.currentA[hover]! * design.shuntOhms}
+        />
+      )}
       {/* Catches the pointer over the plots. */}
       <rect
         x={M.left}
@@ -297,6 +314,50 @@ export function ProfileChart({
       />
     </svg>
   );
+}
+
+function HoverReadout({
+  x,
+  top,
+  bottom,
+  right,
+  t,
+  i,
+  loadV,
+}: {
+  x: number;
+  top: number;
+  bottom: number;
+  right: number;
+  t: number;
+  i: number;
+  loadV: number;
+}) {
+  const text = `${formatSI(t, "s", 5)} · ${formatSI(i, "A")} · load ${formatSI(loadV, "V", 4)}`;
+  const w = text.length * 6 + 12;
+  const left = x + 8 + w > right ? x - 8 - w : x + 8;
+  return (
+    <g pointerEvents="none" data-testid="chart-readout">
+      <line x1={x} x2={x} y1={top} y2={bottom} className="stroke-ink-faint" strokeDasharray="2 2" />
+      <rect x={left} y={top + 4} width={w} height={18} rx={3} className="fill-panel stroke-line" />
+      <text x={left + 6} y={top + 17} className="fill-ink text-[11px]">
+        {text}
+      </text>
+    </g>
+  );
+}
+
+/** Index of the point nearest in time (points are in time order). */
+function nearestIndex(ts: number[], t: number): number | null {
+  if (ts.length === 0) return null;
+  let lo = 0;
+  let hi = ts.length - 1;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    if (ts[mid]! < t) lo = mid;
+    else hi = mid;
+  }
+  return Math.abs(ts[lo]! - t) <= Math.abs(ts[hi]! - t) ? lo : hi;
 }
 
 function pathOf(ts: number[], vs: number[], x: (t: number) => number, y: (v: number) => number): string {

@@ -55,9 +55,11 @@ test("a designer uploads a recording through the form and sees the chart", async
   await page.waitForTimeout(300);
   await page.getByTestId("profiles-panel").screenshot({ path: `${shots}/profile-panel.png` });
 
-  // Drag across the chart to zoom, then reset.
+  // Point to read a sample; drag across the chart to zoom, then reset.
   await chart.scrollIntoViewIfNeeded();
   const box = (await chart.boundingBox())!;
+  await page.mouse.move(box.x + box.width * 0.3, box.y + 100);
+  await expect(page.getByTestId("chart-readout")).toContainText(/s · .*A · load .*V/);
   const before = await page.getByTestId("chart-window").textContent();
   await page.mouse.move(box.x + box.width * 0.4, box.y + 100);
   await page.mouse.down();
