@@ -122,17 +122,21 @@ export function CandidateTable({
   return (
     <div className="flex flex-col gap-2">
       <div className="flex flex-wrap items-end gap-3 text-xs">
-        <label className="flex flex-col gap-0.5">
-          <span className="text-ink-muted">Show</span>
-          <select className={selectCls} value={view} onChange={(e) => setView(e.target.value as View)}>
+        <div className="flex flex-col gap-0.5">
+          <label htmlFor="cand-view" className="text-ink-muted">
+            Show
+          </label>
+          <select id="cand-view" className={selectCls} value={view} onChange={(e) => setView(e.target.value as View)}>
             <option value="all">Every listed candidate</option>
             <option value="feasible">Feasible only</option>
             <option value="front">Pareto front only</option>
           </select>
-        </label>
-        <label className="flex flex-col gap-0.5">
-          <span className="text-ink-muted">Shunt value also in</span>
-          <select className={selectCls} value={series} onChange={(e) => setSeries(e.target.value as "" | SeriesName)}>
+        </div>
+        <div className="flex flex-col gap-0.5">
+          <label htmlFor="cand-series" className="text-ink-muted">
+            Shunt value also in
+          </label>
+          <select id="cand-series" className={selectCls} value={series} onChange={(e) => setSeries(e.target.value as "" | SeriesName)}>
             <option value="">Any series</option>
             {coarser.map((s) => (
               <option key={s} value={s}>
@@ -140,10 +144,12 @@ export function CandidateTable({
               </option>
             ))}
           </select>
-        </label>
-        <label className="flex flex-col gap-0.5">
-          <span className="text-ink-muted">Gain</span>
-          <select className={selectCls} value={gain} onChange={(e) => setGain(e.target.value)}>
+        </div>
+        <div className="flex flex-col gap-0.5">
+          <label htmlFor="cand-gain" className="text-ink-muted">
+            Gain
+          </label>
+          <select id="cand-gain" className={selectCls} value={gain} onChange={(e) => setGain(e.target.value)}>
             <option value="">Any gain</option>
             {gains.map((g) => (
               <option key={g} value={g}>
@@ -151,7 +157,7 @@ export function CandidateTable({
               </option>
             ))}
           </select>
-        </label>
+        </div>
         <span className="ml-auto text-ink-muted num" role="status">
           {rows.length} of {candidates.length} listed
         </span>

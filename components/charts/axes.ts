@@ -6,7 +6,8 @@ export function logTicks(lo: number, hi: number, max = 7): number[] {
   const a = Math.floor(Math.log10(lo));
   const b = Math.ceil(Math.log10(hi));
   const decades = b - a;
-  const mults = decades <= 2 ? [1, 2, 5] : [1];
+  const span = Math.log10(hi / lo);
+  const mults = span <= 0.8 ? [1, 1.5, 2, 3, 4, 5, 6, 7, 8] : span <= 1.6 ? [1, 2, 3, 5] : decades <= 2 ? [1, 2, 5] : [1];
   const step = Math.max(1, Math.ceil(decades / max));
   const out: number[] = [];
   for (let e = a; e <= b; e += step) for (const m of mults) {
@@ -16,21 +17,21 @@ export function logTicks(lo: number, hi: number, max = 7): number[] {
   return out.length >= 2 ? out : [lo, hi];
 }
 
-/** A log domain padded by a fraction of a decade on each side. */
-export function logDomain(values: number[], pad = 0.15): [number, number] {
+/** A log domain at least `minRatio` wide, padded by a fraction of a decade on each side. */
+export function logDomain(values: number[], pad = 0.08, minRatio = 3): [number, number] {
   const pos = values.filter((v) => v > 0 && Number.isFinite(v));
   if (pos.length === 0) return [1e-3, 1];
   let lo = Math.min(...pos);
   let hi = Math.max(...pos);
-  if (hi / lo < 10) {
+  if (hi / lo < minRatio) {
     const mid = Math.sqrt(lo * hi);
-    lo = mid / Math.sqrt(10);
-    hi = mid * Math.sqrt(10);
+    lo = mid / Math.sqrt(minRatio);
+    hi = mid * Math.sqrt(minRatio);
   }
   return [lo / 10 ** pad, hi * 10 ** pad];
 }
 
-export const siTick = (unit: string) => (v: number) => formatSI(v, unit, 2);
+export const siTick = (unit: string, sig = 2) => (v: number) => formatSI(v, unit, sig);
 export const percentTick = (v: number) => formatPercent(v / 100, 2);
 
 /** Room for SI tick labels ("500 µV", "5000 %") and the axis title beside them. */

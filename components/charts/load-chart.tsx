@@ -39,10 +39,10 @@ export function LoadChart({ points, supplyV, loadMinV, dropMaxV }: { points: Loa
     <div ref={ref} data-testid="load-chart" className="flex flex-wrap gap-4">
       {width > 0 && ok.length > 0 && (
         <>
-          <XYChart width={half} height={HEIGHT} margin={chartMargin} theme={theme} xScale={{ type: "log", domain: xd }} yScale={{ type: "linear", domain: yd }} accessibilityLabel="Voltage left at the load against current">
+          <XYChart width={half} height={HEIGHT} margin={chartMargin} theme={theme} xScale={{ type: "log", domain: xd }} yScale={{ type: "linear", domain: yd, zero: false }} accessibilityLabel="Voltage left at the load against current">
             <Grid columns rows numTicks={5} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
             <Axis orientation="bottom" labelOffset={bottomLabelOffset} label="Current" tickValues={logTicks(xd[0], xd[1])} tickFormat={siTick("A")} />
-            <Axis orientation="left" labelOffset={leftLabelOffset} label="Voltage at the load" numTicks={5} tickFormat={siTick("V")} />
+            <Axis orientation="left" labelOffset={leftLabelOffset} label="Voltage at the load" numTicks={5} tickFormat={siTick("V", 3)} />
             <LineSeries dataKey="Supply" data={[{ currentA: xd[0], v: supplyV }, { currentA: xd[1], v: supplyV }]} xAccessor={(d) => d.currentA} yAccessor={(d) => d.v} stroke={p.faint} strokeDasharray="3 3" strokeWidth={1} enableEvents={false} />
             {loadMinV !== undefined && (
               <LineSeries dataKey="Load minimum" data={[{ currentA: xd[0], v: loadMinV }, { currentA: xd[1], v: loadMinV }]} xAccessor={(d) => d.currentA} yAccessor={(d) => d.v} stroke={p.bad} strokeDasharray="5 3" strokeWidth={2} enableEvents={false} />

@@ -105,19 +105,24 @@ export function DesignsTable({ designs }: { designs: DesignRow[] }) {
   return (
     <div className="flex flex-col gap-3">
       <div className="flex flex-wrap items-end gap-3 text-xs">
-        <label className="flex flex-col gap-0.5">
-          <span className="text-ink-muted">Search designs</span>
+        <div className="flex flex-col gap-0.5">
+          <label htmlFor="designs-search" className="text-ink-muted">
+            Search designs
+          </label>
           <input
+            id="designs-search"
             type="search"
             value={search}
             onChange={(e) => setSearch(e.target.value)}
             placeholder="Name, project or author"
             className="w-64 rounded border border-line bg-panel px-2 py-1.5 text-sm"
           />
-        </label>
-        <label className="flex flex-col gap-0.5">
-          <span className="text-ink-muted">Status</span>
-          <select value={status} onChange={(e) => setStatus(e.target.value as typeof status)} className="rounded border border-line bg-panel px-2 py-1.5 text-sm">
+        </div>
+        <div className="flex flex-col gap-0.5">
+          <label htmlFor="designs-status" className="text-ink-muted">
+            Status
+          </label>
+          <select id="designs-status" value={status} onChange={(e) => setStatus(e.target.value as typeof status)} className="rounded border border-line bg-panel px-2 py-1.5 text-sm">
             <option value="">Any status</option>
             {statuses.map((s) => (
               <option key={s} value={s}>
@@ -125,7 +130,7 @@ export function DesignsTable({ designs }: { designs: DesignRow[] }) {
               </option>
             ))}
           </select>
-        </label>
+        </div>
         <div className="ml-auto flex items-center gap-2">
           <span className="text-ink-muted num" role="status">
             {picked.length === 0 ? "Tick 2 to 4 designs to compare them" : `${picked.length} picked`}

@@ -224,7 +224,7 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
           <XYChart width={width} height={260} margin={chartMargin} theme={theme} xScale={{ type: "log", domain: xd }} yScale={{ type: "linear", domain: yd }} accessibilityLabel="Voltage at the load against load current">
             <Grid columns rows numTicks={5} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
             <Axis orientation="bottom" labelOffset={bottomLabelOffset} label="Load current at full supply" tickValues={logTicks(xd[0], xd[1])} tickFormat={siTick("A")} />
-            <Axis orientation="left" labelOffset={leftLabelOffset} label="Voltage at the load" numTicks={5} tickFormat={siTick("V")} />
+            <Axis orientation="left" labelOffset={leftLabelOffset} label="Voltage at the load" numTicks={5} tickFormat={siTick("V", 3)} />
             <LineSeries dataKey="now" data={[{ a: input.load.current, v: 0 }, { a: input.load.current, v: input.supply }]} xAccessor={(d: Pt) => d.a} yAccessor={(d: Pt) => d.v} stroke={p.faint} strokeDasharray="2 3" enableEvents={false} />
             {loadMinV !== undefined && (
               <LineSeries dataKey="Load minimum" data={[{ a: xd[0], v: loadMinV }, { a: xd[1], v: loadMinV }]} xAccessor={(d: Pt) => d.a} yAccessor={(d: Pt) => d.v} stroke={p.bad} strokeDasharray="5 3" strokeWidth={2} enableEvents={false} />

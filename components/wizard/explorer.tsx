@@ -1,8 +1,8 @@
 "use client";
 // The live results beside the form: the trade-off, the refusals, the table, the selected
 // candidate in depth, the range plan when one range cannot do, and saving.
-import { useEffect, useMemo, type RefObject } from "react";
-import { formatSI, type Candidate } from "@/lib/design";
+import { memo, useEffect, useMemo, type RefObject } from "react";
+import { formatSI, type Candidate, type SolveResult } from "@/lib/design";
 import { RangePlanChart } from "@/components/charts/range-plan-chart";
 import { TradeOffChart } from "@/components/charts/trade-off-chart";
 import { CandidateStudy } from "@/components/candidates/candidate-study";
@@ -79,12 +79,8 @@ export function Explorer({
   }, [solvedId, editAt]);
 
   const candidate: Candidate | null = selected ? (byKey.get(selected) ?? null) : null;
-  const choice = selected ? choiceFromKey(selected) : null;
-  const pinnedChoices = useMemo(() => pinned.map(choiceFromKey).filter((c): c is NonNullable<typeof c> => c !== null), [pinned]);
-  const listed = result?.candidates ?? [];
   const req = result?.requirement;
   const frontCount = result ? result.candidates.filter((c) => c.pareto).length : 0;
-  const feasibleListed = result ? result.candidates.filter((c) => c.feasible).length : 0;
 
   return (
     <div className="flex min-w-0 flex-col gap-4" aria-busy={busy}>
@@ -123,6 +119,38 @@ export function Explorer({
 
       {result && req && (
         <>
+          <Results result={result} selected={selected} setSelected={setSelected} pinned={pinned} setPinned={setPinned} />
+          <Panel title="Save">
+            <SavePanel requirement={req} candidate={candidate} canSave={canSave} name={name} setName={setName} project={project} setProject={setProject} onSaved={onSaved} />
+          </Panel>
+        </>
+      )}
+    </div>
+  );
+}
+
+/** Everything drawn from one solve; memoised so busy flags and typing elsewhere do not redraw the charts. */
+const Results = memo(function Results({
+  result,
+  selected,
+  setSelected,
+  pinned,
+  setPinned,
+}: {
+  result: SolveResult;
+  selected: string | null;
+  setSelected: (k: string | null) => void;
+  pinned: string[];
+  setPinned: (p: string[]) => void;
+}) {
+  const req = result.requirement;
+  const listed = result.candidates;
+  const feasibleListed = result.candidates.filter((c) => c.feasible).length;
+  const choice = selected ? choiceFromKey(selected) : null;
+  const listedKeys = useMemo(() => new Set([...(result.decadeScales ?? []), ...result.candidates].map(candidateKey)), [result]);
+  const pinnedChoices = useMemo(() => pinned.map(choiceFromKey).filter((c): c is NonNullable<typeof c> => c !== null), [pinned]);
+  return (
+    <>
           {req.readout.kind === "meter" && (
             <div className="flex flex-wrap items-center gap-2 text-xs" role="group" aria-label="Decade scale factors" data-testid="decade-scales">
               <span className="text-ink-muted">Read straight off the meter at a decade scale factor:</span>
@@ -227,13 +255,7 @@ export function Explorer({
             <p className="mt-2 text-2xs text-ink-faint">{result.ranking}</p>
           </Panel>
 
-          {choice && candidate && <CandidateStudy req={req} choice={choice} pinned={pinnedChoices} />}
-
-          <Panel title="Save">
-            <SavePanel requirement={req} candidate={candidate} canSave={canSave} name={name} setName={setName} project={project} setProject={setProject} onSaved={onSaved} />
-          </Panel>
-        </>
-      )}
-    </div>
+          {choice && selected && listedKeys.has(selected) && <CandidateStudy req={req} choice={choice} pinned={pinnedChoices} />}
+    </>
   );
-}
+});

@@ -1,7 +1,7 @@
 "use client";
 // One labelled wizard input bound to react-hook-form, with its error beside it (aria-live).
 import type { ReactNode } from "react";
-import { useFormContext, type RegisterOptions } from "react-hook-form";
+import { useFormContext, useWatch, type RegisterOptions } from "react-hook-form";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { errorText } from "@/lib/wizard/form-errors";
 import type { WizardValues } from "@/lib/wizard/form-values";
@@ -154,7 +154,8 @@ export function Choice<T extends string>({ legend, name, value, options, onChang
 
 /** The same choice bound to a form field (react-hook-form handles the radio group). */
 export function RadioField({ legend, name, options }: { legend: string; name: string; options: { value: string; label: string }[] }) {
-  const { register, watch } = useFormContext<WizardValues>();
-  const current = watch(name as never) as unknown as string;
+  const { register } = useFormContext<WizardValues>();
+  // useWatch re-renders this group only, not the whole form, on each keystroke elsewhere.
+  const current = useWatch({ name: name as never }) as unknown as string;
   return <Segmented legend={legend} options={options} isActive={(v) => v === current} input={(v) => <input type="radio" className="sr-only" value={v} {...register(name as never)} />} />;
 }

@@ -1,7 +1,7 @@
 "use client";
 // The wizard's steps: what each asks for, and which fields it checks before moving on.
 import { useQuery } from "@tanstack/react-query";
-import { useFormContext } from "react-hook-form";
+import { useFormContext, useWatch } from "react-hook-form";
 import { seriesNames } from "@/lib/design";
 import type { WizardValues } from "@/lib/wizard/form-values";
 import { fetchLibrary, libraryAmplifierValues, type LibraryAmplifierRow } from "@/lib/wizard/library";
@@ -77,8 +77,7 @@ export function SupplyStep({ live, dropMode, setDropMode }: { live: LiveErrors; 
 }
 
 export function ReadoutStep({ live }: { live: LiveErrors }) {
-  const { watch } = useFormContext<WizardValues>();
-  const kind = watch("readout.kind");
+  const kind = useWatch<WizardValues, "readout.kind">({ name: "readout.kind" });
   return (
     <div className="grid grid-cols-2 gap-3">
       <div className="col-span-2">

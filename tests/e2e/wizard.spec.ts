@@ -125,3 +125,35 @@ test("the meter check gives the worked case: 200 mA from 2.0 V through 1.9 Ω", 
   await expect(page.getByTestId("meter-chart").locator("svg").first()).toBeVisible();
   await shot(page, "7-meter");
 });
+
+test("a span too wide for one range shows its range plan on the current axis", async ({ page }) => {
+  await signInPage(page, "designer");
+  await page.goto("/designs/new");
+  await page.evaluate(() => window.localStorage.clear());
+  await page.reload();
+  await expect(page.getByTestId("solve-status")).toContainText("feasible");
+  page.once("dialog", (d) => void d.accept());
+  await page.getByText("Start again from an example").click();
+  await page.getByRole("button", { name: "Soil-moisture logger, 12-bit converter" }).click();
+  await expect(page.getByTestId("no-feasible")).toContainText("A plan with several ranges does");
+  await expect(page.getByRole("heading", { name: /Range plan: [23] ranges/ })).toBeVisible();
+  await expect(page.getByTestId("range-plan-chart").locator("svg rect").first()).toBeVisible();
+  await expect(page.getByTestId("rejections")).toContainText("Too few readout counts at the minimum current");
+  await shot(page, "8-range-plan");
+  await page.getByTestId("range-plan-chart").screenshot({ path: `${shots}/wizard-8a-range-plan-chart.png` });
+});
+
+test("the list picks two designs to compare", async ({ page }) => {
+  await signInPage(page, "designer");
+  await page.goto("/designs");
+  const boxes = page.getByRole("checkbox", { name: /^Pick .* to compare$/ });
+  expect(await boxes.count()).toBeGreaterThanOrEqual(2);
+  const compare = page.getByRole("button", { name: "Compare" });
+  await expect(compare).toBeDisabled();
+  await boxes.nth(0).check();
+  await boxes.nth(1).check();
+  await expect(compare).toBeEnabled();
+  await page.getByLabel("Status", { exact: true }).selectOption("draft");
+  await compare.click();
+  await expect(page).toHaveURL(/\/compare\?ids=[0-9a-f-]{36},[0-9a-f-]{36}$/);
+});
