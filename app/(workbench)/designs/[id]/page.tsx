@@ -71,6 +71,8 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
           <dd className="text-base font-semibold">{formatSI(metrics.burdenV, "V")}</dd>
         </dl>
       </header>
+      {/* A maker comes to build: the download, parts list and bench check lead the page. */}
+      {caller.role === "maker" && <BuildSheetPanel design={design} viewer={viewer} />}
       <ComparePicker
         current={{ id: design.id, name: design.name }}
         others={others.filter((d) => d.id !== design.id).map((d) => ({ id: d.id, name: d.name, project: d.project, status: d.status }))}
@@ -83,7 +85,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
         reviews={reviews}
         audit={audit.map((e) => ({ ...e, at: e.at.toISOString() }))}
       />
-      <BuildSheetPanel design={design} viewer={viewer} />
+      {caller.role !== "maker" && <BuildSheetPanel design={design} viewer={viewer} />}
       <ProfilesPanel design={design} viewer={viewer} />
     </div>
   );
