@@ -114,7 +114,7 @@ export function CandidateTable({
     getSortedRowModel: getSortedRowModel(),
     getFilteredRowModel: getFilteredRowModel(),
     getPaginationRowModel: getPaginationRowModel(),
-    initialState: { pagination: { pageSize: 25 } },
+    initialState: { pagination: { pageSize: 15 } },
     getRowId: (c) => candidateKey(c),
   });
 
