@@ -1,10 +1,11 @@
 "use client";
 // The wizard's steps: what each asks for, and which fields it checks before moving on.
 import { useQuery } from "@tanstack/react-query";
+import { useState } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
 import { seriesNames } from "@/lib/design";
 import type { WizardValues } from "@/lib/wizard/form-values";
-import { fetchLibrary, libraryAmplifierValues, type LibraryAmplifierRow } from "@/lib/wizard/library";
+import { fetchLibrary, libraryAmplifierValues, libraryShuntValues, type LibraryAmplifierRow, type LibraryShuntRow } from "@/lib/wizard/library";
 import { Choice, FormField, RadioField, SelectField } from "./form-field";
 
 export type StepKey = "span" | "supply" | "readout" | "shunt" | "amplifier" | "temperature";
@@ -110,8 +111,40 @@ export function ReadoutStep({ live }: { live: LiveErrors }) {
 }
 
 export function ShuntStep({ live }: { live: LiveErrors }) {
+  const { setValue } = useFormContext<WizardValues>();
+  const library = useQuery({ queryKey: ["library"], queryFn: fetchLibrary, staleTime: 60_000, retry: false });
+  const shunts = library.data?.shunts ?? [];
+  const [picked, setPicked] = useState("");
+  const pick = (row: LibraryShuntRow | undefined) => {
+    setPicked(row?.id ?? "");
+    if (!row) return;
+    for (const [k, val] of Object.entries(libraryShuntValues(row))) {
+      if (val !== undefined) setValue(`shunt.${k}` as never, val as never, { shouldValidate: true, shouldDirty: true });
+    }
+  };
   return (
     <div className="grid grid-cols-2 gap-3">
+      <div className="col-span-2 flex flex-col gap-1">
+        <label htmlFor="f-library-shunt" className="text-xs font-medium text-ink-muted">
+          Fill from the team library
+        </label>
+        <select
+          id="f-library-shunt"
+          className="w-full rounded border border-line bg-panel px-2 py-1.5 text-sm"
+          value={picked}
+          onChange={(e) => pick(shunts.find((s) => s.id === e.target.value))}
+          disabled={shunts.length === 0}
+        >
+          <option value="">{library.isLoading ? "Loading the library…" : shunts.length ? "— Type the shunt family below —" : "No shunt families in the library yet"}</option>
+          {shunts.map((s) => (
+            <option key={s.id} value={s.id}>
+              {s.name}
+              {s.fourTerminal ? " (4-terminal)" : ""}
+            </option>
+          ))}
+        </select>
+        {library.isError && <p className="text-2xs text-ink-faint">The team library could not be read; type the shunt family below.</p>}
+      </div>
       <SelectField name="shunt.series" label="E-series (IEC 60063)" options={seriesNames.map((s) => ({ value: s, label: s }))} />
       <FormField name="shunt.tolerance" label="Shunt tolerance" placeholder="0.5 %" extraError={live("shunt.tolerance")} />
       <FormField name="shunt.min" label="Smallest shunt" placeholder="1 mohm" extraError={live("shunt.min")} />

@@ -157,3 +157,26 @@ test("the list picks two designs to compare", async ({ page }) => {
   await compare.click();
   await expect(page).toHaveURL(/\/compare\?ids=[0-9a-f-]{36},[0-9a-f-]{36}$/);
 });
+
+test("parts from the team library fill the shunt and amplifier steps", async ({ page }) => {
+  await signInPage(page, "designer");
+  const lib = (await (await page.request.get("/api/library")).json()) as {
+    shunts: { id: string; toleranceFraction: number }[];
+    amplifiers: { id: string; name: string; cmrrDb: number }[];
+  };
+  test.skip(lib.shunts.length === 0 || lib.amplifiers.length === 0, "the demo library is empty");
+  await page.goto("/designs/new");
+  await page.evaluate(() => window.localStorage.clear());
+  await page.reload();
+  for (let k = 0; k < 3; k++) await next(page);
+  await expect(page.getByRole("heading", { name: /Shunt/ })).toBeVisible();
+  const shuntPick = page.locator("#f-library-shunt");
+  await shuntPick.selectOption(lib.shunts[0]!.id);
+  await expect(page.getByLabel("Shunt tolerance", { exact: true })).toHaveValue(`${Number((lib.shunts[0]!.toleranceFraction * 100).toPrecision(4))} %`);
+  await next(page);
+  await page.locator("#f-library-amp").selectOption(lib.amplifiers[0]!.id);
+  await expect(page.getByText(`Filled from "${lib.amplifiers[0]!.name}"`)).toBeVisible();
+  await expect(page.getByLabel("CMRR (dB)", { exact: true })).toHaveValue(String(lib.amplifiers[0]!.cmrrDb));
+  await shot(page, "9-library-amplifier");
+  await expect(page.getByTestId("solve-status")).toContainText("pairs swept");
+});
