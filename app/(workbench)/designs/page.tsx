@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { ImportDesign } from "@/components/build-sheet/import-design";
 import { DesignsTable } from "@/components/designs-list/designs-table";
 import { buttonClass } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/panel";
@@ -22,9 +23,12 @@ export default async function DesignsPage() {
           </p>
         </div>
         {canCreate && (
-          <Link href="/designs/new" className={buttonClass("primary")}>
-            New design
-          </Link>
+          <div className="flex items-center gap-2">
+            <ImportDesign role={caller.role} />
+            <Link href="/designs/new" className={buttonClass("primary")}>
+              New design
+            </Link>
+          </div>
         )}
       </div>
       {designs.length === 0 ? (
