@@ -97,9 +97,12 @@ function WizardForm({ initial, canSave, onRestart }: { initial: Draft; canSave: 
   useEffect(() => {
     const t = setTimeout(persist, 150);
     const sub = watch(() => persist());
+    // A reload or closed tab inside the 150 ms would otherwise lose the last change.
+    window.addEventListener("pagehide", persist);
     return () => {
       clearTimeout(t);
       sub.unsubscribe();
+      window.removeEventListener("pagehide", persist);
     };
   }, [watch, persist]);
 

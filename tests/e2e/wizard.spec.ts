@@ -49,6 +49,7 @@ test("a designer fills the wizard, explores, saves and finds the design", async 
   await page.getByLabel("Accuracy target", { exact: true }).fill("2");
   await shot(page, "2-readout");
   await next(page);
+  await expect(page.getByRole("heading", { name: /Shunt/ })).toBeVisible();
 
   // A reload keeps the draft and the step.
   await page.reload();
