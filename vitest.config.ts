@@ -14,9 +14,9 @@ export default defineConfig({
     // A fresh PGlite takes seconds to start; database tests share one per file.
     testTimeout: 60_000,
     hookTimeout: 60_000,
-    // Database tests get an in-memory PGlite per test file, or the PostgreSQL server of DATABASE_URL
-    // (one file at a time then, since they share that database).
+    // Database tests get an in-memory PGlite per test file, or (with DATABASE_URL) a fresh database
+    // of their own on that PostgreSQL server.
     env: process.env.DATABASE_URL ? {} : { PGLITE_DIR: "memory://" },
-    fileParallelism: !process.env.DATABASE_URL,
+    setupFiles: ["./tests/fixtures/vitest-db.ts"],
   },
 });
