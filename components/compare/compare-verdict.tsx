@@ -15,7 +15,14 @@ export function CompareVerdict({ design, viewer }: {
   const [returning, setReturning] = useState(false);
   const [reason, setReason] = useState("");
   if (viewer.role !== "owner" && viewer.role !== "reviewer") return null;
-  if (design.status !== "in-review") return <p className="text-xs text-ink-faint">No verdict due: the design is {design.status}.</p>;
+  // After a verdict the page refreshes into the new status: keep saying what just happened.
+  if (design.status !== "in-review")
+    return (
+      <div className="flex flex-col gap-1">
+        <p className="text-xs text-ink-faint">No verdict due: the design is {design.status}.</p>
+        {s.ok && <SendMessage state={s} reload={s.reload} />}
+      </div>
+    );
   if (design.authorId === viewer.userId) return <p className="text-xs text-ink-faint">You wrote this revision; another reviewer gives the verdict.</p>;
   const post = (verdict: "approve" | "return", body: string, ok: string) =>
     s.send(`/api/designs/${design.id}/reviews`, "POST", { verdict, body, revision: design.revision }, ok);
