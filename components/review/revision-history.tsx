@@ -60,31 +60,9 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
         <div className="flex flex-col gap-2" data-testid="revision-diff">
           <div className="flex flex-wrap items-center gap-2 text-xs">
             <span className="font-medium text-ink-muted">What changed from</span>
-            <select
-              aria-label="From revision"
-              value={a}
-              onChange={(e) => setA(Number(e.target.value))}
-              className={narrowSelect}
-            >
-              {revisions.map((r) => (
-                <option key={r.revision} value={r.revision}>
-                  {r.revision}
-                </option>
-              ))}
-            </select>
+            <RevisionSelect label="From revision" value={a} onChange={setA} revisions={revisions} />
             <span className="text-ink-muted">to</span>
-            <select
-              aria-label="To revision"
-              value={b}
-              onChange={(e) => setB(Number(e.target.value))}
-              className={narrowSelect}
-            >
-              {revisions.map((r) => (
-                <option key={r.revision} value={r.revision}>
-                  {r.revision}
-                </option>
-              ))}
-            </select>
+            <RevisionSelect label="To revision" value={b} onChange={setB} revisions={revisions} />
           </div>
           {changes.length === 0 ? (
             <p className="text-xs text-ink-faint">
@@ -122,5 +100,27 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
         </p>
       )}
     </div>
+  );
+}
+
+function RevisionSelect({
+  label,
+  value,
+  onChange,
+  revisions,
+}: {
+  label: string;
+  value: number;
+  onChange: (revision: number) => void;
+  revisions: { revision: number }[];
+}) {
+  return (
+    <select aria-label={label} value={value} onChange={(e) => onChange(Number(e.target.value))} className={narrowSelect}>
+      {revisions.map((r) => (
+        <option key={r.revision} value={r.revision}>
+          {r.revision}
+        </option>
+      ))}
+    </select>
   );
 }

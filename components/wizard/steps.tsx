@@ -1,11 +1,11 @@
 "use client";
 // The wizard's steps: what each asks for, and which fields it checks before moving on.
-import { useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
 import { seriesNames } from "@/lib/design";
 import type { WizardValues } from "@/lib/wizard/form-values";
-import { fetchLibrary, libraryAmplifierValues, libraryShuntValues, type LibraryAmplifierRow, type LibraryShuntRow } from "@/lib/wizard/library";
+import { LibraryPicker, useLibrary } from "./library-picker";
+import { libraryAmplifierValues, libraryShuntValues, type LibraryAmplifierRow, type LibraryShuntRow } from "@/lib/wizard/library";
 import { Choice, FormField, RadioField, SelectField } from "./form-field";
 
 export type StepKey = "span" | "supply" | "readout" | "shunt" | "amplifier" | "temperature";
@@ -112,7 +112,7 @@ export function ReadoutStep({ live }: { live: LiveErrors }) {
 
 export function ShuntStep({ live }: { live: LiveErrors }) {
   const { setValue } = useFormContext<WizardValues>();
-  const library = useQuery({ queryKey: ["library"], queryFn: fetchLibrary, staleTime: 60_000, retry: false });
+  const library = useLibrary();
   const shunts = library.data?.shunts ?? [];
   const [picked, setPicked] = useState("");
   const pick = (row: LibraryShuntRow | undefined) => {
@@ -124,27 +124,17 @@ export function ShuntStep({ live }: { live: LiveErrors }) {
   };
   return (
     <div className="grid grid-cols-2 gap-3">
-      <div className="col-span-2 flex flex-col gap-1">
-        <label htmlFor="f-library-shunt" className="text-xs font-medium text-ink-muted">
-          Fill from the team library
-        </label>
-        <select
-          id="f-library-shunt"
-          className="w-full rounded border border-line bg-panel px-2 py-1.5 text-sm"
-          value={picked}
-          onChange={(e) => pick(shunts.find((s) => s.id === e.target.value))}
-          disabled={shunts.length === 0}
-        >
-          <option value="">{library.isLoading ? "Loading the library…" : shunts.length ? "— Type the shunt family below —" : "No shunt families in the library yet"}</option>
-          {shunts.map((s) => (
-            <option key={s.id} value={s.id}>
-              {s.name}
-              {s.fourTerminal ? " (4-terminal)" : ""}
-            </option>
-          ))}
-        </select>
-        {library.isError && <p className="text-2xs text-ink-faint">The team library could not be read; type the shunt family below.</p>}
-      </div>
+      <LibraryPicker
+        id="f-library-shunt"
+        rows={shunts}
+        value={picked}
+        onPick={pick}
+        loading={library.isLoading}
+        noneText="— Type the shunt family below —"
+        emptyText="No shunt families in the library yet"
+        optionLabel={(s) => `${s.name}${s.fourTerminal ? " (4-terminal)" : ""}`}
+        note={library.isError && <p className="text-2xs text-ink-faint">The team library could not be read; type the shunt family below.</p>}
+      />
       <SelectField name="shunt.series" label="E-series (IEC 60063)" options={seriesNames.map((s) => ({ value: s, label: s }))} />
       <FormField name="shunt.tolerance" label="Shunt tolerance" placeholder="0.5 %" extraError={live("shunt.tolerance")} />
       <FormField name="shunt.min" label="Smallest shunt" placeholder="1 mohm" extraError={live("shunt.min")} />
@@ -173,7 +163,7 @@ export function AmplifierStep({
   setPartName: (n: string | null) => void;
 }) {
   const { setValue } = useFormContext<WizardValues>();
-  const library = useQuery({ queryKey: ["library"], queryFn: fetchLibrary, staleTime: 60_000, retry: false });
+  const library = useLibrary();
   const amps = library.data?.amplifiers ?? [];
   const pick = (row: LibraryAmplifierRow | undefined) => {
     if (!row) {
@@ -192,32 +182,24 @@ export function AmplifierStep({
   };
   return (
     <div className="grid grid-cols-2 gap-3">
-      <div className="col-span-2 flex flex-col gap-1">
-        <label htmlFor="f-library-amp" className="text-xs font-medium text-ink-muted">
-          Fill from the team library
-        </label>
-        <select
-          id="f-library-amp"
-          className="w-full rounded border border-line bg-panel px-2 py-1.5 text-sm"
-          value={amps.find((a) => a.name === partName)?.id ?? ""}
-          onChange={(e) => pick(amps.find((a) => a.id === e.target.value))}
-          disabled={amps.length === 0}
-        >
-          <option value="">{library.isLoading ? "Loading the library…" : amps.length ? "— Type the specification below —" : "No amplifiers in the library yet"}</option>
-          {amps.map((a) => (
-            <option key={a.id} value={a.id}>
-              {a.name}
-            </option>
-          ))}
-        </select>
-        <p className="text-2xs text-ink-faint">
-          {library.isError
-            ? "The team library could not be read; type the specification below."
-            : partName
-              ? `Filled from "${partName}"; any figure can still be changed.`
-              : "Or type the amplifier's specification below."}
-        </p>
-      </div>
+      <LibraryPicker
+        id="f-library-amp"
+        rows={amps}
+        value={amps.find((a) => a.name === partName)?.id ?? ""}
+        onPick={pick}
+        loading={library.isLoading}
+        noneText="— Type the specification below —"
+        emptyText="No amplifiers in the library yet"
+        note={
+          <p className="text-2xs text-ink-faint">
+            {library.isError
+              ? "The team library could not be read; type the specification below."
+              : partName
+                ? `Filled from "${partName}"; any figure can still be changed.`
+                : "Or type the amplifier's specification below."}
+          </p>
+        }
+      />
       <div className="col-span-2">
         <Choice
           legend="Gains to sweep"

@@ -5,6 +5,12 @@ import type { AmplifierValues, ShuntValues } from "./schema";
 type AmplifierGroup = NonNullable<RequirementInput["amplifier"]>;
 type ShuntGroup = NonNullable<RequirementInput["shunt"]>;
 
+/** The gains a resistor-set part sweeps: 1 + Rf/Rg from E12 pairs between its lowest and highest gain. */
+export function resistorSetGains(gains: readonly number[]) {
+  const sorted = [...gains].sort((x, y) => x - y);
+  return { series: "E12", min: Math.max(1, sorted[0] ?? 1), max: sorted.at(-1) ?? 1 };
+}
+
 /**
  * The requirement's `amplifier` group for a library amplifier. `supplyV` is the amplifier's own
  * supply in the design (clamped into the part's supply range; its highest by default).
@@ -12,10 +18,7 @@ type ShuntGroup = NonNullable<RequirementInput["shunt"]>;
  */
 export function amplifierRequirement(amp: AmplifierValues, supplyV?: number): AmplifierGroup {
   const supply = Math.min(amp.supplyMaxV, Math.max(amp.supplyMinV, supplyV ?? amp.supplyMaxV));
-  const gains =
-    amp.gainMode === "fixed"
-      ? [...amp.gains]
-      : { series: "E12", min: amp.gains[0] ?? 1, max: amp.gains[1] ?? amp.gains[0] ?? 1 };
+  const gains = amp.gainMode === "fixed" ? [...amp.gains] : resistorSetGains(amp.gains);
   return {
     gains,
     offset: amp.offsetV,

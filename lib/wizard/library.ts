@@ -1,6 +1,7 @@
 // The team library as the wizard reads it (GET /api/library, db/schema.ts columns), and an
 // amplifier row turned into the wizard's amplifier fields.
 import { formatSI } from "@/lib/design";
+import { resistorSetGains } from "@/lib/library/to-requirement";
 import type { WizardValues } from "./form-values";
 
 export type LibraryAmplifierRow = {
@@ -63,9 +64,8 @@ export function libraryAmplifierValues(a: LibraryAmplifierRow): Partial<WizardVa
     swingHigh: si(a.swingHighV, "V"),
     cmrrDb: a.cmrrDb,
   };
-  if (a.gainMode === "resistor-set" && gains.length > 0) {
-    return { ...base, gainSet: { series: "E24", min: Math.max(1, gains[0] ?? 1), max: gains.at(-1) ?? 1000 } };
-  }
+  // The same rule as the library's own mapping (lib/library/to-requirement.ts).
+  if (a.gainMode === "resistor-set" && gains.length > 0) return { ...base, gainSet: resistorSetGains(gains) };
   return { ...base, gains };
 }
 
