@@ -1,16 +1,29 @@
+import { removeMember } from "@/db/queries/invitations";
 import { changeMemberRole } from "@/db/queries/users";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
 import { roleChangeSchema } from "@/lib/team-schemas";
 
+function memberId(params: Record<string, string>): string {
+  const userId = params.userId ?? "";
+  if (!/^[0-9a-f-]{36}$/i.test(userId)) throw new HttpError(404, "That person is not a member of this team.");
+  return userId;
+}
+
 export const PATCH = apiRoute(
   { roles: ["owner"], doing: "change roles", body: roleChangeSchema },
   async ({ caller, body, params }) => {
-    const userId = params.userId ?? "";
-    if (!/^[0-9a-f-]{36}$/i.test(userId)) throw new HttpError(404, "That person is not a member of this team.");
+    const userId = memberId(params);
     const result = await changeMemberRole(caller.teamId, userId, body.role, caller.userId);
     if (!result.ok) throw new HttpError(result.status, result.message);
     return { userId, role: body.role };
   },
 );
-export { removeMemberRoute as DELETE } from "@/app/api/invitations/remove-member";
+
+// A team always keeps at least one owner: removeMember refuses the last one (409).
+export const DELETE = apiRoute({ roles: ["owner"], doing: "remove members" }, async ({ caller, params }) => {
+  const userId = memberId(params);
+  const result = await removeMember(caller.teamId, userId, caller.userId);
+  if (!result.ok) throw new HttpError(result.status, result.message);
+  return { userId, removed: true };
+});
