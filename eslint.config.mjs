@@ -2,7 +2,16 @@ import next from "eslint-config-next";
 
 const config = [
   ...next,
-  { ignores: ["node_modules/**", ".next*/**", ".data/**", "db/migrations/**", "test-results/**", "playwright-report/**"] },
+  {
+    ignores: [
+      "node_modules/**",
+      ".next*/**",
+      ".data/**",
+      "db/migrations/**",
+      "test-results/**",
+      "playwright-report/**",
+    ],
+  },
 ];
 
 export default config;

@@ -17,10 +17,10 @@ export default async function Landing() {
         Measure a circuit&apos;s current without starving it of voltage.
       </h1>
       <p className="text-base text-ink-muted">
-        Sensewright sweeps standard shunt values and amplifier gains against your current span, supply and readout,
-        and shows each candidate&apos;s burden voltage, resolution, dissipation and error from the smallest current to
-        the largest. Your team compares the alternatives, signs one off, and the bench gets a build sheet to assemble
-        and check it.
+        Sensewright sweeps standard shunt values and amplifier gains against your current span, supply and readout, and
+        shows each candidate&apos;s burden voltage, resolution, dissipation and error from the smallest current to the
+        largest. Your team compares the alternatives, signs one off, and the bench gets a build sheet to assemble and
+        check it.
       </p>
       <div>
         <Link href="/sign-in" className={buttonClass("primary")}>

@@ -10,7 +10,10 @@ const dir = path.join(process.cwd(), "scripts", "bench");
 const only = process.argv.slice(2);
 
 async function main() {
-  const available = fs.readdirSync(dir).filter((f) => f.endsWith(".ts")).map((f) => f.replace(/\.ts$/, ""));
+  const available = fs
+    .readdirSync(dir)
+    .filter((f) => f.endsWith(".ts"))
+    .map((f) => f.replace(/\.ts$/, ""));
   const names = [...order.filter((n) => available.includes(n)), ...available.filter((n) => !order.includes(n))];
   let failed = false;
   for (const name of names) {

@@ -9,7 +9,17 @@ const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), "..")
 process.chdir(root);
 const distDir = process.env.NEXT_DIST_DIR || ".next";
 const buildId = path.join(distDir, "BUILD_ID");
-const sources = ["app", "components", "lib", "db", "public", "instrumentation.ts", "next.config.ts", "tailwind.config.ts", "package-lock.json"];
+const sources = [
+  "app",
+  "components",
+  "lib",
+  "db",
+  "public",
+  "instrumentation.ts",
+  "next.config.ts",
+  "tailwind.config.ts",
+  "package-lock.json",
+];
 
 function newest(p) {
   if (!fs.existsSync(p)) return 0;
@@ -30,7 +40,10 @@ if (changedAt > builtAt) {
 
 const env = { ...process.env, SEED_DEMO: process.env.SEED_DEMO ?? "1" };
 const port = env.PORT ?? "3000";
-const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", port], { stdio: "inherit", env });
+const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", port], {
+  stdio: "inherit",
+  env,
+});
 const stop = (signal) => {
   try {
     server.kill(signal);

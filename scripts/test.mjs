@@ -48,7 +48,9 @@ if (only !== "unit") {
   } else {
     const file = path.join(out, "playwright.json");
     fs.rmSync(file, { force: true });
-    const status = run("npx", ["playwright", "test", "--reporter=list,json", ...files], { PLAYWRIGHT_JSON_OUTPUT_NAME: file });
+    const status = run("npx", ["playwright", "test", "--reporter=list,json", ...files], {
+      PLAYWRIGHT_JSON_OUTPUT_NAME: file,
+    });
     const report = readJson(file);
     if (report?.stats) {
       totals.passed += report.stats.expected ?? 0;

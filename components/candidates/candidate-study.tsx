@@ -2,7 +2,16 @@
 // One candidate examined across the span: error against current (with pinned comparisons),
 // what it does to the load, every figure, the error budget and the cautions.
 import { useMemo, useState } from "react";
-import { errorAt, errorCurve, evaluateCandidate, formatSI, loadCurve, type CandidateDetail, type Choice, type Requirement } from "@/lib/design";
+import {
+  errorAt,
+  errorCurve,
+  evaluateCandidate,
+  formatSI,
+  loadCurve,
+  type CandidateDetail,
+  type Choice,
+  type Requirement,
+} from "@/lib/design";
 import { BudgetBar } from "@/components/charts/budget-bar";
 import { ErrorCurveChart, type ErrorSeries } from "@/components/charts/error-curve-chart";
 import { LoadChart } from "@/components/charts/load-chart";
@@ -35,13 +44,23 @@ export function CandidateStudy({
       ...pinned
         .filter((p) => candidateKey(p) !== candidateKey(choice))
         .slice(0, 3)
-        .map((p) => ({ key: candidateKey(p), label: `${label(p)} (pinned)`, points: errorCurve(req, p, 60), primary: false })),
+        .map((p) => ({
+          key: candidateKey(p),
+          label: `${label(p)} (pinned)`,
+          points: errorCurve(req, p, 60),
+          primary: false,
+        })),
     ],
     [req, choice, pinned],
   );
   const load = useMemo(() => loadCurve(req, choice, 60), [req, choice]);
   const [budgetAt, setBudgetAt] = useState<"min" | "typical" | "max">("min");
-  const budgetCurrent = budgetAt === "max" ? req.current.max : budgetAt === "typical" && req.current.typical !== undefined ? req.current.typical : req.current.min;
+  const budgetCurrent =
+    budgetAt === "max"
+      ? req.current.max
+      : budgetAt === "typical" && req.current.typical !== undefined
+        ? req.current.typical
+        : req.current.min;
   const budget = useMemo(() => errorAt(req, choice, budgetCurrent), [req, choice, budgetCurrent]);
   const cautions = cautionsFor(req, detail);
 
@@ -49,7 +68,12 @@ export function CandidateStudy({
     <div className="flex flex-col gap-4">
       <div className="grid grid-cols-1 gap-4 xl:grid-cols-2">
         <Panel title="Error across the span">
-          <ErrorCurveChart series={series} targetPercent={req.accuracy.percent} bandMinA={req.accuracy.bandMin} bandMaxA={req.accuracy.bandMax} />
+          <ErrorCurveChart
+            series={series}
+            targetPercent={req.accuracy.percent}
+            bandMinA={req.accuracy.bandMin}
+            bandMaxA={req.accuracy.bandMax}
+          />
         </Panel>
         <Panel title="Error budget by source">
           <div className="mb-2 flex gap-1 text-2xs" role="group" aria-label="Budget at">

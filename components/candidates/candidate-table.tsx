@@ -51,7 +51,8 @@ export function CandidateTable({
           (view === "all" || (view === "feasible" ? c.feasible : c.pareto)) &&
           (!series || isInSeries(series, c.shuntOhms)) &&
           (!gain || c.gain === Number(gain)) &&
-          (transimpedanceFilter === null || Math.abs(c.transimpedanceVPerA - transimpedanceFilter) <= 1e-6 * transimpedanceFilter),
+          (transimpedanceFilter === null ||
+            Math.abs(c.transimpedanceVPerA - transimpedanceFilter) <= 1e-6 * transimpedanceFilter),
       ),
     [candidates, view, series, gain, transimpedanceFilter],
   );
@@ -136,7 +137,12 @@ export function CandidateTable({
           <label htmlFor="cand-series" className="text-ink-muted">
             Shunt value also in
           </label>
-          <select id="cand-series" className={selectCls} value={series} onChange={(e) => setSeries(e.target.value as "" | SeriesName)}>
+          <select
+            id="cand-series"
+            className={selectCls}
+            value={series}
+            onChange={(e) => setSeries(e.target.value as "" | SeriesName)}
+          >
             <option value="">Any series</option>
             {coarser.map((s) => (
               <option key={s} value={s}>
@@ -179,7 +185,12 @@ export function CandidateTable({
                   {row.getVisibleCells().map((cell, i) => (
                     <td key={cell.id} className="whitespace-nowrap px-2 py-1 num">
                       {i === 1 ? (
-                        <button type="button" className="font-medium text-ink underline-offset-2 hover:underline" onClick={(e) => (e.stopPropagation(), onSelect(row.id))} aria-pressed={isSel}>
+                        <button
+                          type="button"
+                          className="font-medium text-ink underline-offset-2 hover:underline"
+                          onClick={(e) => (e.stopPropagation(), onSelect(row.id))}
+                          aria-pressed={isSel}
+                        >
                           {flexRender(cell.column.columnDef.cell, cell.getContext())}
                         </button>
                       ) : (

@@ -54,7 +54,11 @@ export function Cautions({ cautions }: { cautions: Caution[] }) {
   return (
     <ul className="flex flex-col gap-2" aria-label="Cautions">
       {cautions.map((c) => (
-        <li key={c.key} className={`rounded border px-3 py-2 text-xs ${c.severity === "bad" ? "border-bad/40 bg-bad/5" : "border-warn/40 bg-warn/5"}`} data-testid={`caution-${c.key}`}>
+        <li
+          key={c.key}
+          className={`rounded border px-3 py-2 text-xs ${c.severity === "bad" ? "border-bad/40 bg-bad/5" : "border-warn/40 bg-warn/5"}`}
+          data-testid={`caution-${c.key}`}
+        >
           <p className={`font-semibold ${c.severity === "bad" ? "text-bad" : "text-warn"}`}>⚠ {c.title}</p>
           <p className="text-ink-muted">{c.text}</p>
         </li>

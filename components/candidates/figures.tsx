@@ -11,16 +11,28 @@ export function figureGroups(req: Requirement, m: CandidateDetail): { title: str
       rows: [
         ["Shunt", formatSI(m.shuntOhms, "Ω")],
         ["Gain", String(Number(m.gain.toPrecision(6)))],
-        ["Transimpedance R·G", formatSI(m.transimpedanceVPerA, "V/A"), `${formatSI(m.transimpedanceVPerA * 1e-3, "V")} per mA`],
+        [
+          "Transimpedance R·G",
+          formatSI(m.transimpedanceVPerA, "V/A"),
+          `${formatSI(m.transimpedanceVPerA * 1e-3, "V")} per mA`,
+        ],
       ],
     },
     {
       title: "On the load",
       rows: [
         ["Burden at Imax", formatSI(m.burdenV, "V"), `allowed ${formatSI(req.drop.max, "V")}`],
-        ["Load voltage at Imax", formatSI(m.loadVoltageV, "V"), req.drop.loadMin !== undefined ? `needs ${formatSI(req.drop.loadMin, "V")}` : undefined],
+        [
+          "Load voltage at Imax",
+          formatSI(m.loadVoltageV, "V"),
+          req.drop.loadMin !== undefined ? `needs ${formatSI(req.drop.loadMin, "V")}` : undefined,
+        ],
         ["Dissipation at Imax", formatSI(m.dissipationW, "W")],
-        ["Power rating chosen", formatSI(m.ratingW, "W"), `used at most ${formatPercent(req.shunt.derating)} of rating`],
+        [
+          "Power rating chosen",
+          formatSI(m.ratingW, "W"),
+          `used at most ${formatPercent(req.shunt.derating)} of rating`,
+        ],
         ["Self-heating", formatSI(m.selfHeatingK, "K"), "above ambient at Imax"],
       ],
     },
@@ -42,10 +54,21 @@ export function figureGroups(req: Requirement, m: CandidateDetail): { title: str
       rows: [
         ["At Imin, worst case", pct(m.errorAtMinPercent), formatSI(req.current.min, "A")],
         ["At Imin, RSS", pct(m.rssAtMinPercent)],
-        ["At typical", pct(m.errorAtTypicalPercent), req.current.typical !== undefined ? formatSI(req.current.typical, "A") : "no typical current given"],
+        [
+          "At typical",
+          pct(m.errorAtTypicalPercent),
+          req.current.typical !== undefined ? formatSI(req.current.typical, "A") : "no typical current given",
+        ],
         ["At Imax, worst case", pct(m.errorAtMaxPercent), formatSI(req.current.max, "A")],
-        ["Worst in accuracy band", pct(m.accuracyBandPercent), `${formatSI(req.accuracy.bandMin, "A")} – ${formatSI(req.accuracy.bandMax, "A")}, target ${formatPercent(req.accuracy.percent / 100)}`],
-        ["Lowest current meeting target", m.lowestAccurateCurrentA === null ? "none in the span" : formatSI(m.lowestAccurateCurrentA, "A")],
+        [
+          "Worst in accuracy band",
+          pct(m.accuracyBandPercent),
+          `${formatSI(req.accuracy.bandMin, "A")} – ${formatSI(req.accuracy.bandMax, "A")}, target ${formatPercent(req.accuracy.percent / 100)}`,
+        ],
+        [
+          "Lowest current meeting target",
+          m.lowestAccurateCurrentA === null ? "none in the span" : formatSI(m.lowestAccurateCurrentA, "A"),
+        ],
       ],
     },
   ];

@@ -9,9 +9,17 @@ export function SortableHead<T>({ table, cellClass = "px-2 py-1.5" }: { table: T
           {hg.headers.map((h) => {
             const sorted = h.column.getIsSorted();
             return (
-              <th key={h.id} className={`whitespace-nowrap font-medium ${cellClass}`} aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}>
+              <th
+                key={h.id}
+                className={`whitespace-nowrap font-medium ${cellClass}`}
+                aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
+              >
                 {h.column.getCanSort() ? (
-                  <button type="button" className="inline-flex items-center gap-0.5 hover:text-ink" onClick={h.column.getToggleSortingHandler()}>
+                  <button
+                    type="button"
+                    className="inline-flex items-center gap-0.5 hover:text-ink"
+                    onClick={h.column.getToggleSortingHandler()}
+                  >
                     {flexRender(h.column.columnDef.header, h.getContext())}
                     <span aria-hidden className="text-ink-faint">
                       {sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}

@@ -7,13 +7,15 @@ export function logTicks(lo: number, hi: number, max = 7): number[] {
   const b = Math.ceil(Math.log10(hi));
   const decades = b - a;
   const span = Math.log10(hi / lo);
-  const mults = span <= 0.8 ? [1, 1.5, 2, 3, 4, 5, 6, 7, 8] : span <= 1.6 ? [1, 2, 3, 5] : decades <= 2 ? [1, 2, 5] : [1];
+  const mults =
+    span <= 0.8 ? [1, 1.5, 2, 3, 4, 5, 6, 7, 8] : span <= 1.6 ? [1, 2, 3, 5] : decades <= 2 ? [1, 2, 5] : [1];
   const step = Math.max(1, Math.ceil(decades / max));
   const out: number[] = [];
-  for (let e = a; e <= b; e += step) for (const m of mults) {
-    const v = m * 10 ** e;
-    if (v >= lo * (1 - 1e-9) && v <= hi * (1 + 1e-9)) out.push(v);
-  }
+  for (let e = a; e <= b; e += step)
+    for (const m of mults) {
+      const v = m * 10 ** e;
+      if (v >= lo * (1 - 1e-9) && v <= hi * (1 + 1e-9)) out.push(v);
+    }
   return out.length >= 2 ? out : [lo, hi];
 }
 
@@ -31,7 +33,10 @@ export function logDomain(values: number[], pad = 0.08, minRatio = 3): [number, 
   return [lo / 10 ** pad, hi * 10 ** pad];
 }
 
-export const siTick = (unit: string, sig = 2) => (v: number) => formatSI(v, unit, sig);
+export const siTick =
+  (unit: string, sig = 2) =>
+  (v: number) =>
+    formatSI(v, unit, sig);
 export const percentTick = (v: number) => formatPercent(v / 100, 2);
 
 /** Room for SI tick labels ("500 µV", "5000 %") and the axis title beside them. */

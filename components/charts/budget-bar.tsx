@@ -16,17 +16,31 @@ const tones = [
 
 export function BudgetBar({ terms, currentA, label }: { terms: BudgetTerm[]; currentA: number; label: string }) {
   const total = terms.reduce((s, t) => s + Math.abs(t.errorA), 0);
-  const shown = terms.map((t, i) => ({ ...t, tone: tones[i % tones.length]!, share: total > 0 ? Math.abs(t.errorA) / total : 0 }));
+  const shown = terms.map((t, i) => ({
+    ...t,
+    tone: tones[i % tones.length]!,
+    share: total > 0 ? Math.abs(t.errorA) / total : 0,
+  }));
   return (
     <figure className="flex flex-col gap-2">
       <figcaption className="text-xs text-ink-muted">
-        {label}: worst case {formatSI(total, "A")} at {formatSI(currentA, "A")} ({formatPercent(total / currentA)} of reading)
+        {label}: worst case {formatSI(total, "A")} at {formatSI(currentA, "A")} ({formatPercent(total / currentA)} of
+        reading)
       </figcaption>
-      <div className="flex h-4 w-full overflow-hidden rounded border border-line" role="img" aria-label={`Error budget at ${formatSI(currentA, "A")}`}>
+      <div
+        className="flex h-4 w-full overflow-hidden rounded border border-line"
+        role="img"
+        aria-label={`Error budget at ${formatSI(currentA, "A")}`}
+      >
         {shown
           .filter((t) => t.share > 0)
           .map((t) => (
-            <div key={t.source} className={t.tone} style={{ width: `${t.share * 100}%` }} title={`${t.label}: ${formatSI(t.errorA, "A")}`} />
+            <div
+              key={t.source}
+              className={t.tone}
+              style={{ width: `${t.share * 100}%` }}
+              title={`${t.label}: ${formatSI(t.errorA, "A")}`}
+            />
           ))}
       </div>
       <table className="w-full text-2xs">

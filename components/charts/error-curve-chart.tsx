@@ -14,23 +14,56 @@ export type ErrorSeries = { key: string; label: string; points: ErrorCurvePoint[
 const HEIGHT = 240;
 type Pt = { currentA: number; v: number; label: string };
 
-export function ErrorCurveChart({ series, targetPercent, bandMinA, bandMaxA }: { series: ErrorSeries[]; targetPercent: number; bandMinA: number; bandMaxA: number }) {
+export function ErrorCurveChart({
+  series,
+  targetPercent,
+  bandMinA,
+  bandMaxA,
+}: {
+  series: ErrorSeries[];
+  targetPercent: number;
+  bandMinA: number;
+  bandMaxA: number;
+}) {
   const { ref, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const theme = useMemo(() => chartTheme(p), [p]);
   const colours = [p.copper, p.signal, p.good, p.warn];
   const all = series.flatMap((s) => s.points);
-  const xd = logDomain(all.map((q) => q.currentA), 0.02);
+  const xd = logDomain(
+    all.map((q) => q.currentA),
+    0.02,
+  );
   const yd = logDomain([...all.map((q) => q.worstPercent), ...all.map((q) => q.rssPercent), targetPercent]);
   const yClamp = (v: number) => Math.max(yd[0], Math.min(yd[1], v));
   return (
     <div>
       <div ref={ref} style={{ height: HEIGHT }} data-testid="error-curve-chart">
         {width > 0 && all.length > 0 && (
-          <XYChart width={width} height={HEIGHT} margin={chartMargin} theme={theme} xScale={{ type: "log", domain: xd }} yScale={{ type: "log", domain: yd }} accessibilityLabel="Worst-case error against current">
+          <XYChart
+            width={width}
+            height={HEIGHT}
+            margin={chartMargin}
+            theme={theme}
+            xScale={{ type: "log", domain: xd }}
+            yScale={{ type: "log", domain: yd }}
+            accessibilityLabel="Worst-case error against current"
+          >
             <Grid columns rows numTicks={6} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
-            <Axis orientation="bottom" labelOffset={bottomLabelOffset} label="Current" tickValues={logTicks(xd[0], xd[1])} tickFormat={siTick("A")} />
-            <Axis orientation="left" labelOffset={leftLabelOffset} label="Error, % of reading" tickValues={logTicks(yd[0], yd[1])} tickFormat={percentTick} />
+            <Axis
+              orientation="bottom"
+              labelOffset={bottomLabelOffset}
+              label="Current"
+              tickValues={logTicks(xd[0], xd[1])}
+              tickFormat={siTick("A")}
+            />
+            <Axis
+              orientation="left"
+              labelOffset={leftLabelOffset}
+              label="Error, % of reading"
+              tickValues={logTicks(yd[0], yd[1])}
+              tickFormat={percentTick}
+            />
             <LineSeries
               dataKey="Accuracy target"
               data={[
@@ -58,7 +91,11 @@ export function ErrorCurveChart({ series, targetPercent, bandMinA, bandMaxA }: {
             {series[0]?.primary && (
               <LineSeries
                 dataKey={`${series[0].label} (RSS)`}
-                data={series[0].points.map((q) => ({ currentA: q.currentA, v: yClamp(q.rssPercent), label: `${series[0]!.label} RSS` }))}
+                data={series[0].points.map((q) => ({
+                  currentA: q.currentA,
+                  v: yClamp(q.rssPercent),
+                  label: `${series[0]!.label} RSS`,
+                }))}
                 xAccessor={(d) => d.currentA}
                 yAccessor={(d) => d.v}
                 stroke={colours[0]}
@@ -73,7 +110,14 @@ export function ErrorCurveChart({ series, targetPercent, bandMinA, bandMaxA }: {
               renderTooltip={({ tooltipData }) => {
                 const near = tooltipData?.nearestDatum?.datum;
                 if (!near) return null;
-                return <SeriesTip title={`at ${formatSI(near.currentA, "A")}`} byKey={tooltipData.datumByKey} skip={["Accuracy target"]} value={(d) => formatPercent(d.v / 100)} />;
+                return (
+                  <SeriesTip
+                    title={`at ${formatSI(near.currentA, "A")}`}
+                    byKey={tooltipData.datumByKey}
+                    skip={["Accuracy target"]}
+                    value={(d) => formatPercent(d.v / 100)}
+                  />
+                );
               }}
             />
           </XYChart>
@@ -88,7 +132,8 @@ export function ErrorCurveChart({ series, targetPercent, bandMinA, bandMaxA }: {
         ))}
         {series[0]?.primary && <li className="flex items-center gap-1">dotted: RSS of the selected</li>}
         <li className="flex items-center gap-1">
-          <span className="inline-block h-0 w-4 border-t-2 border-dashed" style={{ borderColor: p.bad }} aria-hidden /> target {formatPercent(targetPercent / 100)} over its band
+          <span className="inline-block h-0 w-4 border-t-2 border-dashed" style={{ borderColor: p.bad }} aria-hidden />{" "}
+          target {formatPercent(targetPercent / 100)} over its band
         </li>
       </ul>
     </div>

@@ -2,7 +2,23 @@
 export const shapeNames = ["circle", "square", "triangle", "diamond", "cross", "down", "hexagon", "bar"] as const;
 export type ShapeName = (typeof shapeNames)[number];
 
-export function Shape({ shape, x, y, r, fill, stroke, strokeWidth = 1 }: { shape: ShapeName; x: number; y: number; r: number; fill: string; stroke?: string; strokeWidth?: number }) {
+export function Shape({
+  shape,
+  x,
+  y,
+  r,
+  fill,
+  stroke,
+  strokeWidth = 1,
+}: {
+  shape: ShapeName;
+  x: number;
+  y: number;
+  r: number;
+  fill: string;
+  stroke?: string;
+  strokeWidth?: number;
+}) {
   const common = { fill, stroke: stroke ?? "none", strokeWidth };
   switch (shape) {
     case "circle":
@@ -17,10 +33,18 @@ export function Shape({ shape, x, y, r, fill, stroke, strokeWidth = 1 }: { shape
       return <path d={`M${x},${y - r * 1.2}L${x + r},${y}L${x},${y + r * 1.2}L${x - r},${y}Z`} {...common} />;
     case "cross": {
       const w = r * 0.45;
-      return <path d={`M${x - w},${y - r}h${2 * w}v${r - w}h${r - w}v${2 * w}h${w - r}v${r - w}h${-2 * w}v${w - r}h${w - r}v${-2 * w}h${r - w}Z`} {...common} />;
+      return (
+        <path
+          d={`M${x - w},${y - r}h${2 * w}v${r - w}h${r - w}v${2 * w}h${w - r}v${r - w}h${-2 * w}v${w - r}h${w - r}v${-2 * w}h${r - w}Z`}
+          {...common}
+        />
+      );
     }
     case "hexagon": {
-      const pts = Array.from({ length: 6 }, (_, k) => `${x + r * Math.cos((Math.PI / 3) * k)},${y + r * Math.sin((Math.PI / 3) * k)}`).join(" ");
+      const pts = Array.from(
+        { length: 6 },
+        (_, k) => `${x + r * Math.cos((Math.PI / 3) * k)},${y + r * Math.sin((Math.PI / 3) * k)}`,
+      ).join(" ");
       return <polygon points={pts} {...common} />;
     }
     case "bar":

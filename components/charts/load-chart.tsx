@@ -11,12 +11,25 @@ import { useWidth } from "./use-width";
 const HEIGHT = 240;
 type Pt = { currentA: number; v: number };
 
-export function LoadChart({ points, supplyV, loadMinV, dropMaxV }: { points: LoadCurvePoint[]; supplyV: number; loadMinV?: number; dropMaxV: number }) {
+export function LoadChart({
+  points,
+  supplyV,
+  loadMinV,
+  dropMaxV,
+}: {
+  points: LoadCurvePoint[];
+  supplyV: number;
+  loadMinV?: number;
+  dropMaxV: number;
+}) {
   const { ref, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const theme = useMemo(() => chartTheme(p), [p]);
   const ok = points.filter((q) => Number.isFinite(q.burdenV) && q.burdenV > 0);
-  const xd = logDomain(points.map((q) => q.currentA), 0.02);
+  const xd = logDomain(
+    points.map((q) => q.currentA),
+    0.02,
+  );
   const lo = Math.min(loadMinV ?? supplyV, ...ok.map((q) => q.loadVoltageV));
   const yd: [number, number] = [Math.max(0, lo - 0.08 * supplyV), supplyV * 1.02];
   const yb = logDomain([...ok.map((q) => q.burdenV), dropMaxV]);
@@ -39,23 +52,113 @@ export function LoadChart({ points, supplyV, loadMinV, dropMaxV }: { points: Loa
     <div ref={ref} data-testid="load-chart" className="flex flex-wrap gap-4">
       {width > 0 && ok.length > 0 && (
         <>
-          <XYChart width={half} height={HEIGHT} margin={chartMargin} theme={theme} xScale={{ type: "log", domain: xd }} yScale={{ type: "linear", domain: yd, zero: false }} accessibilityLabel="Voltage left at the load against current">
+          <XYChart
+            width={half}
+            height={HEIGHT}
+            margin={chartMargin}
+            theme={theme}
+            xScale={{ type: "log", domain: xd }}
+            yScale={{ type: "linear", domain: yd, zero: false }}
+            accessibilityLabel="Voltage left at the load against current"
+          >
             <Grid columns rows numTicks={5} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
-            <Axis orientation="bottom" labelOffset={bottomLabelOffset} label="Current" tickValues={logTicks(xd[0], xd[1])} tickFormat={siTick("A")} />
-            <Axis orientation="left" labelOffset={leftLabelOffset} label="Voltage at the load" numTicks={5} tickFormat={siTick("V", 3)} />
-            <LineSeries dataKey="Supply" data={[{ currentA: xd[0], v: supplyV }, { currentA: xd[1], v: supplyV }]} xAccessor={(d) => d.currentA} yAccessor={(d) => d.v} stroke={p.faint} strokeDasharray="3 3" strokeWidth={1} enableEvents={false} />
+            <Axis
+              orientation="bottom"
+              labelOffset={bottomLabelOffset}
+              label="Current"
+              tickValues={logTicks(xd[0], xd[1])}
+              tickFormat={siTick("A")}
+            />
+            <Axis
+              orientation="left"
+              labelOffset={leftLabelOffset}
+              label="Voltage at the load"
+              numTicks={5}
+              tickFormat={siTick("V", 3)}
+            />
+            <LineSeries
+              dataKey="Supply"
+              data={[
+                { currentA: xd[0], v: supplyV },
+                { currentA: xd[1], v: supplyV },
+              ]}
+              xAccessor={(d) => d.currentA}
+              yAccessor={(d) => d.v}
+              stroke={p.faint}
+              strokeDasharray="3 3"
+              strokeWidth={1}
+              enableEvents={false}
+            />
             {loadMinV !== undefined && (
-              <LineSeries dataKey="Load minimum" data={[{ currentA: xd[0], v: loadMinV }, { currentA: xd[1], v: loadMinV }]} xAccessor={(d) => d.currentA} yAccessor={(d) => d.v} stroke={p.bad} strokeDasharray="5 3" strokeWidth={2} enableEvents={false} />
+              <LineSeries
+                dataKey="Load minimum"
+                data={[
+                  { currentA: xd[0], v: loadMinV },
+                  { currentA: xd[1], v: loadMinV },
+                ]}
+                xAccessor={(d) => d.currentA}
+                yAccessor={(d) => d.v}
+                stroke={p.bad}
+                strokeDasharray="5 3"
+                strokeWidth={2}
+                enableEvents={false}
+              />
             )}
-            <LineSeries dataKey="Load voltage" data={ok.map((q) => ({ currentA: q.currentA, v: q.loadVoltageV }))} xAccessor={(d) => d.currentA} yAccessor={(d) => d.v} stroke={p.signal} strokeWidth={2} />
+            <LineSeries
+              dataKey="Load voltage"
+              data={ok.map((q) => ({ currentA: q.currentA, v: q.loadVoltageV }))}
+              xAccessor={(d) => d.currentA}
+              yAccessor={(d) => d.v}
+              stroke={p.signal}
+              strokeWidth={2}
+            />
             {tip("V")}
           </XYChart>
-          <XYChart width={half} height={HEIGHT} margin={chartMargin} theme={theme} xScale={{ type: "log", domain: xd }} yScale={{ type: "log", domain: yb }} accessibilityLabel="Burden voltage against current">
+          <XYChart
+            width={half}
+            height={HEIGHT}
+            margin={chartMargin}
+            theme={theme}
+            xScale={{ type: "log", domain: xd }}
+            yScale={{ type: "log", domain: yb }}
+            accessibilityLabel="Burden voltage against current"
+          >
             <Grid columns rows numTicks={5} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
-            <Axis orientation="bottom" labelOffset={bottomLabelOffset} label="Current" tickValues={logTicks(xd[0], xd[1])} tickFormat={siTick("A")} />
-            <Axis orientation="left" labelOffset={leftLabelOffset} label="Burden (drop across the shunt)" tickValues={logTicks(yb[0], yb[1])} tickFormat={siTick("V")} />
-            <LineSeries dataKey="Allowed drop" data={[{ currentA: xd[0], v: dropMaxV }, { currentA: xd[1], v: dropMaxV }]} xAccessor={(d) => d.currentA} yAccessor={(d) => d.v} stroke={p.warn} strokeDasharray="5 3" strokeWidth={2} enableEvents={false} />
-            <LineSeries dataKey="Burden" data={ok.map((q) => ({ currentA: q.currentA, v: q.burdenV }))} xAccessor={(d) => d.currentA} yAccessor={(d) => d.v} stroke={p.copper} strokeWidth={2} />
+            <Axis
+              orientation="bottom"
+              labelOffset={bottomLabelOffset}
+              label="Current"
+              tickValues={logTicks(xd[0], xd[1])}
+              tickFormat={siTick("A")}
+            />
+            <Axis
+              orientation="left"
+              labelOffset={leftLabelOffset}
+              label="Burden (drop across the shunt)"
+              tickValues={logTicks(yb[0], yb[1])}
+              tickFormat={siTick("V")}
+            />
+            <LineSeries
+              dataKey="Allowed drop"
+              data={[
+                { currentA: xd[0], v: dropMaxV },
+                { currentA: xd[1], v: dropMaxV },
+              ]}
+              xAccessor={(d) => d.currentA}
+              yAccessor={(d) => d.v}
+              stroke={p.warn}
+              strokeDasharray="5 3"
+              strokeWidth={2}
+              enableEvents={false}
+            />
+            <LineSeries
+              dataKey="Burden"
+              data={ok.map((q) => ({ currentA: q.currentA, v: q.burdenV }))}
+              xAccessor={(d) => d.currentA}
+              yAccessor={(d) => d.v}
+              stroke={p.copper}
+              strokeWidth={2}
+            />
             {tip("V")}
           </XYChart>
         </>
@@ -67,7 +170,11 @@ export function LoadChart({ points, supplyV, loadMinV, dropMaxV }: { points: Loa
         </li>
         {loadMinV !== undefined && (
           <li>
-            <span className="mr-1 inline-block w-4 border-t-2 border-dashed align-middle" style={{ borderColor: p.bad }} aria-hidden />
+            <span
+              className="mr-1 inline-block w-4 border-t-2 border-dashed align-middle"
+              style={{ borderColor: p.bad }}
+              aria-hidden
+            />
             load minimum {formatSI(loadMinV, "V")}
           </li>
         )}
@@ -76,7 +183,11 @@ export function LoadChart({ points, supplyV, loadMinV, dropMaxV }: { points: Loa
           burden
         </li>
         <li>
-          <span className="mr-1 inline-block w-4 border-t-2 border-dashed align-middle" style={{ borderColor: p.warn }} aria-hidden />
+          <span
+            className="mr-1 inline-block w-4 border-t-2 border-dashed align-middle"
+            style={{ borderColor: p.warn }}
+            aria-hidden
+          />
           allowed drop {formatSI(dropMaxV, "V")}
         </li>
       </ul>

@@ -17,17 +17,37 @@ export function RangePlanChart({ plan, minA, maxA }: { plan: RangePlan; minA: nu
   const height = top + rows * rowH + 34;
   const lo = minA / 2;
   const hi = maxA * 2;
-  const sx = (a: number) => left + ((Math.log10(a) - Math.log10(lo)) / (Math.log10(hi) - Math.log10(lo))) * (width - left - right);
+  const sx = (a: number) =>
+    left + ((Math.log10(a) - Math.log10(lo)) / (Math.log10(hi) - Math.log10(lo))) * (width - left - right);
   const ticks = logTicks(lo, hi, 8);
   return (
     <div ref={ref} data-testid="range-plan-chart">
       {width > 0 && (
-        <svg width={width} height={height} role="img" aria-label={`Range plan: ${rows} ranges covering ${formatSI(minA, "A")} to ${formatSI(maxA, "A")}`}>
-          <rect x={sx(minA)} y={top - 4} width={sx(maxA) - sx(minA)} height={rows * rowH + 4} fill={p.signal} opacity={0.06} />
+        <svg
+          width={width}
+          height={height}
+          role="img"
+          aria-label={`Range plan: ${rows} ranges covering ${formatSI(minA, "A")} to ${formatSI(maxA, "A")}`}
+        >
+          <rect
+            x={sx(minA)}
+            y={top - 4}
+            width={sx(maxA) - sx(minA)}
+            height={rows * rowH + 4}
+            fill={p.signal}
+            opacity={0.06}
+          />
           {ticks.map((t) => (
             <g key={t}>
               <line x1={sx(t)} x2={sx(t)} y1={top - 4} y2={top + rows * rowH} stroke={p.line} strokeWidth={0.5} />
-              <text x={sx(t)} y={top + rows * rowH + 14} textAnchor="middle" fontSize={10} fill={p.muted} className="num">
+              <text
+                x={sx(t)}
+                y={top + rows * rowH + 14}
+                textAnchor="middle"
+                fontSize={10}
+                fill={p.muted}
+                className="num"
+              >
                 {formatSI(t, "A", 2)}
               </text>
             </g>
@@ -39,8 +59,23 @@ export function RangePlanChart({ plan, minA, maxA }: { plan: RangePlan; minA: nu
                 <text x={left - 8} y={y + rowH / 2 + 3} textAnchor="end" fontSize={11} fill={p.ink} className="num">
                   {formatSI(r.shuntOhms, "Ω")} × {Number(r.gain.toPrecision(4))}
                 </text>
-                <rect x={sx(r.minA)} y={y + 5} width={Math.max(2, sx(r.maxA) - sx(r.minA))} height={rowH - 10} rx={2} fill={i % 2 ? p.signal : p.copper} opacity={0.8} />
-                <text x={sx(Math.sqrt(r.minA * r.maxA))} y={y + rowH / 2 + 3} textAnchor="middle" fontSize={10} fill={p.panel} className="num">
+                <rect
+                  x={sx(r.minA)}
+                  y={y + 5}
+                  width={Math.max(2, sx(r.maxA) - sx(r.minA))}
+                  height={rowH - 10}
+                  rx={2}
+                  fill={i % 2 ? p.signal : p.copper}
+                  opacity={0.8}
+                />
+                <text
+                  x={sx(Math.sqrt(r.minA * r.maxA))}
+                  y={y + rowH / 2 + 3}
+                  textAnchor="middle"
+                  fontSize={10}
+                  fill={p.panel}
+                  className="num"
+                >
                   {formatSI(r.minA, "A")} – {formatSI(r.maxA, "A")}
                 </text>
               </g>

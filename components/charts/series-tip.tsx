@@ -1,7 +1,17 @@
 // Tooltip body for charts with several line series: one figure per series at the nearest point.
 import type { ReactNode } from "react";
 
-export function SeriesTip<D>({ title, byKey, skip = [], value }: { title: ReactNode; byKey: Record<string, { datum: D }>; skip?: string[]; value: (d: D) => string }) {
+export function SeriesTip<D>({
+  title,
+  byKey,
+  skip = [],
+  value,
+}: {
+  title: ReactNode;
+  byKey: Record<string, { datum: D }>;
+  skip?: string[];
+  value: (d: D) => string;
+}) {
   return (
     <div className="num text-2xs leading-4">
       <p className="font-semibold">{title}</p>

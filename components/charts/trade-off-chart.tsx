@@ -31,9 +31,18 @@ export function TradeOffChart({
   const { ref, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const theme = useMemo(() => chartTheme(p), [p]);
-  const feasible = useMemo(() => candidates.filter((c) => c.feasible && c.burdenV > 0 && c.errorAtMinPercent > 0), [candidates]);
+  const feasible = useMemo(
+    () => candidates.filter((c) => c.feasible && c.burdenV > 0 && c.errorAtMinPercent > 0),
+    [candidates],
+  );
   const groups = useMemo(() => gainGroups(feasible.map((c) => c.gain)), [feasible]);
-  const front = useMemo(() => feasible.filter((c) => c.pareto).sort((a, b) => a.burdenV - b.burdenV || b.errorAtMinPercent - a.errorAtMinPercent), [feasible]);
+  const front = useMemo(
+    () =>
+      feasible
+        .filter((c) => c.pareto)
+        .sort((a, b) => a.burdenV - b.burdenV || b.errorAtMinPercent - a.errorAtMinPercent),
+    [feasible],
+  );
   const xd = logDomain([...feasible.map(x), dropMaxV]);
   const yd = logDomain(feasible.map(y));
   const marked = feasible.filter((c) => candidateKey(c) === selected || pinned.includes(candidateKey(c)));
@@ -57,8 +66,20 @@ export function TradeOffChart({
             pointerEventsDataKey="nearest"
           >
             <Grid columns rows numTicks={6} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
-            <Axis orientation="bottom" labelOffset={bottomLabelOffset} label="Burden at maximum current" tickValues={logTicks(xd[0], xd[1])} tickFormat={siTick("V")} />
-            <Axis orientation="left" labelOffset={leftLabelOffset} label="Error at minimum current" tickValues={logTicks(yd[0], yd[1])} tickFormat={percentTick} />
+            <Axis
+              orientation="bottom"
+              labelOffset={bottomLabelOffset}
+              label="Burden at maximum current"
+              tickValues={logTicks(xd[0], xd[1])}
+              tickFormat={siTick("V")}
+            />
+            <Axis
+              orientation="left"
+              labelOffset={leftLabelOffset}
+              label="Error at minimum current"
+              tickValues={logTicks(yd[0], yd[1])}
+              tickFormat={percentTick}
+            />
             <LineSeries
               dataKey="Allowed drop"
               data={[
@@ -72,7 +93,17 @@ export function TradeOffChart({
               strokeWidth={1}
               enableEvents={false}
             />
-            {front.length > 1 && <LineSeries dataKey="Pareto front" data={front} xAccessor={x} yAccessor={y} stroke={p.copper} strokeWidth={1.5} enableEvents={false} />}
+            {front.length > 1 && (
+              <LineSeries
+                dataKey="Pareto front"
+                data={front}
+                xAccessor={x}
+                yAccessor={y}
+                stroke={p.copper}
+                strokeWidth={1.5}
+                enableEvents={false}
+              />
+            )}
             {groups.map((g, i) => {
               const data = feasible.filter((c) => g.test(c.gain));
               if (data.length === 0) return null;
@@ -86,7 +117,15 @@ export function TradeOffChart({
                   xAccessor={x}
                   yAccessor={y}
                   renderGlyph={({ x: gx, y: gy, datum }) => (
-                    <Shape shape={shape} x={gx} y={gy} r={datum.pareto ? 4.5 : 3.5} fill={fill} stroke={datum.pareto ? p.copperStrong : p.panel} strokeWidth={datum.pareto ? 1.2 : 0.6} />
+                    <Shape
+                      shape={shape}
+                      x={gx}
+                      y={gy}
+                      r={datum.pareto ? 4.5 : 3.5}
+                      fill={fill}
+                      stroke={datum.pareto ? p.copperStrong : p.panel}
+                      strokeWidth={datum.pareto ? 1.2 : 0.6}
+                    />
                   )}
                 />
               );
@@ -99,7 +138,15 @@ export function TradeOffChart({
                 yAccessor={y}
                 enableEvents={false}
                 renderGlyph={({ x: gx, y: gy, datum }) => (
-                  <circle cx={gx} cy={gy} r={8} fill="none" stroke={candidateKey(datum) === selected ? p.copper : p.muted} strokeWidth={candidateKey(datum) === selected ? 2 : 1.2} strokeDasharray={candidateKey(datum) === selected ? undefined : "2 2"} />
+                  <circle
+                    cx={gx}
+                    cy={gy}
+                    r={8}
+                    fill="none"
+                    stroke={candidateKey(datum) === selected ? p.copper : p.muted}
+                    strokeWidth={candidateKey(datum) === selected ? 2 : 1.2}
+                    strokeDasharray={candidateKey(datum) === selected ? undefined : "2 2"}
+                  />
                 )}
               />
             )}
@@ -125,10 +172,12 @@ export function TradeOffChart({
             </li>
           ))}
           <li className="flex items-center gap-1">
-            <span className="inline-block h-0.5 w-4" style={{ background: p.copper }} aria-hidden /> Pareto front (outlined points)
+            <span className="inline-block h-0.5 w-4" style={{ background: p.copper }} aria-hidden /> Pareto front
+            (outlined points)
           </li>
           <li className="flex items-center gap-1">
-            <span className="inline-block h-0 w-4 border-t border-dashed" style={{ borderColor: p.warn }} aria-hidden /> allowed drop
+            <span className="inline-block h-0 w-4 border-t border-dashed" style={{ borderColor: p.warn }} aria-hidden />{" "}
+            allowed drop
           </li>
         </ul>
       )}
@@ -146,7 +195,9 @@ function CandidateTip({ c }: { c: Candidate }) {
       <p>Burden {formatSI(c.burdenV, "V")}</p>
       <p>Error at Imin {formatPercent(c.errorAtMinPercent / 100)}</p>
       <p>Step {formatSI(c.lsbA, "A")}</p>
-      <p>Dissipation {formatSI(c.dissipationW, "W")} (rated {formatSI(c.ratingW, "W")})</p>
+      <p>
+        Dissipation {formatSI(c.dissipationW, "W")} (rated {formatSI(c.ratingW, "W")})
+      </p>
       <p className="text-ink-faint">Click to select</p>
     </div>
   );

@@ -7,7 +7,6 @@ import { seriesColours } from "./colours";
 
 export type CurveSeries = { key: string; label: string; points: { x: number; y: number }[] };
 
-
 const theme = buildChartTheme({
   backgroundColor: "transparent",
   colors: seriesColours,
@@ -37,7 +36,15 @@ const decades = ([a, b]: [number, number]) => {
 
 const margin = { top: 12, right: 16, bottom: 40, left: 76 };
 
-export function CurveChart({ title, series, yUnit, yLabel, width, height, testId }: {
+export function CurveChart({
+  title,
+  series,
+  yUnit,
+  yLabel,
+  width,
+  height,
+  testId,
+}: {
   title: string;
   series: CurveSeries[];
   yUnit: string;
@@ -62,8 +69,19 @@ export function CurveChart({ title, series, yUnit, yLabel, width, height, testId
         accessibilityLabel={title}
       >
         <Grid columns rows numTicks={6} lineStyle={{ strokeWidth: 0.5 }} />
-        <Axis orientation="bottom" label="Current" tickValues={decades(xd)} tickFormat={(v: number) => formatSI(v, "A")} />
-        <Axis orientation="left" label={yLabel} labelOffset={44} tickValues={decades(yd)} tickFormat={(v: number) => fmtY(v)} />
+        <Axis
+          orientation="bottom"
+          label="Current"
+          tickValues={decades(xd)}
+          tickFormat={(v: number) => formatSI(v, "A")}
+        />
+        <Axis
+          orientation="left"
+          label={yLabel}
+          labelOffset={44}
+          tickValues={decades(yd)}
+          tickFormat={(v: number) => fmtY(v)}
+        />
         {series.map((s, i) => (
           <LineSeries
             key={s.key}
@@ -79,7 +97,11 @@ export function CurveChart({ title, series, yUnit, yLabel, width, height, testId
       <ul className="flex flex-wrap gap-3 text-xs">
         {series.map((s, i) => (
           <li key={s.key} className="flex items-center gap-1.5">
-            <span aria-hidden className="inline-block h-0.5 w-4" style={{ background: seriesColours[i % seriesColours.length] }} />
+            <span
+              aria-hidden
+              className="inline-block h-0.5 w-4"
+              style={{ background: seriesColours[i % seriesColours.length] }}
+            />
             {s.label}
           </li>
         ))}

@@ -1,8 +1,15 @@
 import Link from "next/link";
 import { StatusBadge } from "@/components/review/status-badge";
 import type { DesignView, DesignViewer } from "@/lib/design-view";
-import { bestIndexes } from "@/lib/designs/compare";
-import { choiceFields, flatten, formatField, metricFields, requirementFields, type FieldInfo } from "@/lib/designs/figures";
+import { bestIndexes } from "@/lib/saved-designs/compare";
+import {
+  choiceFields,
+  flatten,
+  formatField,
+  metricFields,
+  requirementFields,
+  type FieldInfo,
+} from "@/lib/saved-designs/figures";
 import { CompareVerdict } from "./compare-verdict";
 import { seriesColours } from "./colours";
 
@@ -44,7 +51,10 @@ function Section({ title, list, mark }: { title: string; list: Row[]; mark: bool
   return (
     <>
       <tr>
-        <th colSpan={99} className="bg-sunken px-3 py-1 text-left text-2xs font-semibold uppercase tracking-wide text-ink-muted">
+        <th
+          colSpan={99}
+          className="bg-sunken px-3 py-1 text-left text-2xs font-semibold uppercase tracking-wide text-ink-muted"
+        >
           {title}
         </th>
       </tr>
@@ -61,9 +71,17 @@ function Section({ title, list, mark }: { title: string; list: Row[]; mark: bool
               )}
             </th>
             {r.values.map((v, i) => (
-              <td key={i} className={`px-3 py-1 text-right ${best.includes(i) ? "font-semibold text-good" : ""}`} data-best={best.includes(i) || undefined}>
+              <td
+                key={i}
+                className={`px-3 py-1 text-right ${best.includes(i) ? "font-semibold text-good" : ""}`}
+                data-best={best.includes(i) || undefined}
+              >
                 {formatField(v, r.info)}
-                {best.includes(i) && <span className="ml-1 text-2xs" aria-label="best in this row">best</span>}
+                {best.includes(i) && (
+                  <span className="ml-1 text-2xs" aria-label="best in this row">
+                    best
+                  </span>
+                )}
               </td>
             ))}
           </tr>
@@ -82,7 +100,10 @@ function Section({ title, list, mark }: { title: string; list: Row[]; mark: bool
 
 /** Requirement, choice and every figure side by side, the best value in each figure row marked. */
 export function CompareTable({ designs, viewer }: { designs: DesignView[]; viewer: DesignViewer }) {
-  const requirementRows = rows(requirementFields, designs.map((d) => d.requirement));
+  const requirementRows = rows(
+    requirementFields,
+    designs.map((d) => d.requirement),
+  );
   return (
     <div className="overflow-x-auto rounded-panel border border-line bg-panel">
       <table className="w-full text-sm">
@@ -93,7 +114,11 @@ export function CompareTable({ designs, viewer }: { designs: DesignView[]; viewe
               <th key={d.id} className="px-3 py-2 text-right font-normal" data-testid="compare-column">
                 <div className="flex flex-col items-end gap-1">
                   <span className="flex items-center gap-1.5">
-                    <span aria-hidden className="inline-block h-2 w-2 rounded-full" style={{ background: seriesColours[i % seriesColours.length] }} />
+                    <span
+                      aria-hidden
+                      className="inline-block h-2 w-2 rounded-full"
+                      style={{ background: seriesColours[i % seriesColours.length] }}
+                    />
                     <Link href={`/designs/${d.id}`} className="font-semibold hover:text-copper">
                       {d.name}
                     </Link>
@@ -109,8 +134,22 @@ export function CompareTable({ designs, viewer }: { designs: DesignView[]; viewe
           </tr>
         </thead>
         <tbody>
-          <Section title="Choice" list={rows(choiceFields, designs.map((d) => d.choice))} mark={false} />
-          <Section title="Figures (from the engine, at each design's own requirement)" list={rows(metricFields, designs.map((d) => d.metrics))} mark />
+          <Section
+            title="Choice"
+            list={rows(
+              choiceFields,
+              designs.map((d) => d.choice),
+            )}
+            mark={false}
+          />
+          <Section
+            title="Figures (from the engine, at each design's own requirement)"
+            list={rows(
+              metricFields,
+              designs.map((d) => d.metrics),
+            )}
+            mark
+          />
           <Section title="Requirement: where the designs differ" list={requirementRows.filter(differs)} mark={false} />
           <SameRows list={requirementRows.filter((r) => !differs(r))} columns={designs.length} />
         </tbody>

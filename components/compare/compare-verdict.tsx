@@ -7,7 +7,10 @@ import { useSend } from "@/components/review/use-send";
 import type { DesignStatus, Role } from "@/db/schema";
 
 /** Approve or return one compared design, for owners and reviewers who did not write it. */
-export function CompareVerdict({ design, viewer }: {
+export function CompareVerdict({
+  design,
+  viewer,
+}: {
   design: { id: string; name: string; status: DesignStatus; revision: number; authorId: string };
   viewer: { userId: string; role: Role };
 }) {
@@ -23,16 +26,28 @@ export function CompareVerdict({ design, viewer }: {
         {s.ok && <SendMessage state={s} reload={s.reload} />}
       </div>
     );
-  if (design.authorId === viewer.userId) return <p className="text-xs text-ink-faint">You wrote this revision; another reviewer gives the verdict.</p>;
+  if (design.authorId === viewer.userId)
+    return <p className="text-xs text-ink-faint">You wrote this revision; another reviewer gives the verdict.</p>;
   const post = (verdict: "approve" | "return", body: string, ok: string) =>
     s.send(`/api/designs/${design.id}/reviews`, "POST", { verdict, body, revision: design.revision }, ok);
   return (
     <div className="flex flex-col gap-1.5">
       <div className="flex flex-wrap gap-1.5">
-        <Button variant="primary" className="px-2 py-1 text-xs" disabled={s.busy} onClick={() => post("approve", "", `${design.name} approved.`)} aria-label={`Approve ${design.name}`}>
+        <Button
+          variant="primary"
+          className="px-2 py-1 text-xs"
+          disabled={s.busy}
+          onClick={() => post("approve", "", `${design.name} approved.`)}
+          aria-label={`Approve ${design.name}`}
+        >
           Approve
         </Button>
-        <Button className="px-2 py-1 text-xs" disabled={s.busy} onClick={() => setReturning((r) => !r)} aria-label={`Return ${design.name}`}>
+        <Button
+          className="px-2 py-1 text-xs"
+          disabled={s.busy}
+          onClick={() => setReturning((r) => !r)}
+          aria-label={`Return ${design.name}`}
+        >
           Return…
         </Button>
       </div>
@@ -47,7 +62,13 @@ export function CompareVerdict({ design, viewer }: {
           <label htmlFor={`reason-${design.id}`} className="text-2xs text-ink-muted">
             Reason for returning
           </label>
-          <textarea id={`reason-${design.id}`} rows={2} value={reason} onChange={(e) => setReason(e.target.value)} className="rounded border border-line bg-panel px-2 py-1 text-xs" />
+          <textarea
+            id={`reason-${design.id}`}
+            rows={2}
+            value={reason}
+            onChange={(e) => setReason(e.target.value)}
+            className="rounded border border-line bg-panel px-2 py-1 text-xs"
+          />
           <Button type="submit" className="self-start px-2 py-1 text-xs" disabled={s.busy || !reason.trim()}>
             Send it back
           </Button>

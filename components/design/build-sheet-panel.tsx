@@ -26,7 +26,12 @@ export function BuildSheetPanel({ design, viewer }: { design: DesignView; viewer
     >
       <header className="flex flex-wrap items-center justify-between gap-3 border-b border-line px-4 py-3">
         <div className="min-w-0">
-          <h2 id="build-sheet-heading" className={maker ? "text-base font-semibold" : "text-xs font-semibold uppercase tracking-wide text-ink-muted"}>
+          <h2
+            id="build-sheet-heading"
+            className={
+              maker ? "text-base font-semibold" : "text-xs font-semibold uppercase tracking-wide text-ink-muted"
+            }
+          >
             Build and bench check
           </h2>
           <p className="mt-0.5 text-xs text-ink-muted">
@@ -36,13 +41,19 @@ export function BuildSheetPanel({ design, viewer }: { design: DesignView; viewer
               </>
             ) : (
               <>
-                <Badge tone="bad">not approved</Badge> A preview for review: the sheet says “not approved” on every page. Do not build from it.
+                <Badge tone="bad">not approved</Badge> A preview for review: the sheet says “not approved” on every
+                page. Do not build from it.
               </>
             )}
           </p>
         </div>
         <nav aria-label="Downloads" className="flex flex-wrap gap-2">
-          <a href={`${base}/build-sheet`} download className={buttonClass("primary")} data-testid="download-build-sheet">
+          <a
+            href={`${base}/build-sheet`}
+            download
+            className={buttonClass("primary")}
+            data-testid="download-build-sheet"
+          >
             Build sheet (PDF)
           </a>
           <a href={`${base}/parts.csv`} download className={buttonClass("secondary")} data-testid="download-parts-csv">
@@ -64,18 +75,32 @@ export function BuildSheetPanel({ design, viewer }: { design: DesignView; viewer
             <table className="w-full text-left text-sm" data-testid="parts-table">
               <thead className="border-b border-line text-xs text-ink-muted">
                 <tr>
-                  <th scope="col" className="py-1 pr-3 font-medium">Ref</th>
-                  <th scope="col" className="py-1 pr-3 font-medium">Part</th>
-                  <th scope="col" className="py-1 pr-3 font-medium">Value</th>
-                  <th scope="col" className="py-1 pr-3 font-medium">Tolerance</th>
-                  <th scope="col" className="py-1 pr-3 font-medium">Tempco</th>
-                  <th scope="col" className="py-1 pr-3 font-medium">Rating</th>
+                  <th scope="col" className="py-1 pr-3 font-medium">
+                    Ref
+                  </th>
+                  <th scope="col" className="py-1 pr-3 font-medium">
+                    Part
+                  </th>
+                  <th scope="col" className="py-1 pr-3 font-medium">
+                    Value
+                  </th>
+                  <th scope="col" className="py-1 pr-3 font-medium">
+                    Tolerance
+                  </th>
+                  <th scope="col" className="py-1 pr-3 font-medium">
+                    Tempco
+                  </th>
+                  <th scope="col" className="py-1 pr-3 font-medium">
+                    Rating
+                  </th>
                 </tr>
               </thead>
               {parts.map((p) => (
                 <tbody key={p.designator} className="border-b border-line align-top">
                   <tr>
-                    <th scope="row" className="pt-1.5 pr-3 font-semibold">{p.designator}</th>
+                    <th scope="row" className="pt-1.5 pr-3 font-semibold">
+                      {p.designator}
+                    </th>
                     <td className="pt-1.5 pr-3">{p.part}</td>
                     <td className="pt-1.5 pr-3 font-semibold num whitespace-nowrap">{p.value}</td>
                     <td className="pt-1.5 pr-3 num">{p.tolerance}</td>
@@ -100,16 +125,26 @@ export function BuildSheetPanel({ design, viewer }: { design: DesignView; viewer
             <table className="w-full text-sm num" data-testid="bench-table">
               <thead className="border-b border-line text-xs text-ink-muted">
                 <tr>
-                  <th scope="col" className="py-1 pr-3 text-left font-medium">Test point</th>
-                  <th scope="col" className="py-1 pr-3 text-right font-medium">Test current</th>
-                  <th scope="col" className="py-1 pr-3 text-right font-medium">Expected output</th>
-                  <th scope="col" className="py-1 text-right font-medium">Accept between</th>
+                  <th scope="col" className="py-1 pr-3 text-left font-medium">
+                    Test point
+                  </th>
+                  <th scope="col" className="py-1 pr-3 text-right font-medium">
+                    Test current
+                  </th>
+                  <th scope="col" className="py-1 pr-3 text-right font-medium">
+                    Expected output
+                  </th>
+                  <th scope="col" className="py-1 text-right font-medium">
+                    Accept between
+                  </th>
                 </tr>
               </thead>
               <tbody>
                 {bench.map((r) => (
                   <tr key={r.label} className="border-b border-line">
-                    <th scope="row" className="py-1 pr-3 text-left font-normal">{r.label}</th>
+                    <th scope="row" className="py-1 pr-3 text-left font-normal">
+                      {r.label}
+                    </th>
                     <td className="py-1 pr-3 text-right">{r.current}</td>
                     <td className="py-1 pr-3 text-right font-semibold">{r.expected}</td>
                     <td className="py-1 text-right">{r.band}</td>
@@ -125,7 +160,12 @@ export function BuildSheetPanel({ design, viewer }: { design: DesignView; viewer
           </ul>
         </div>
 
-        <div role="note" aria-label="Cautions" className="rounded border border-bad/40 bg-bad/5 px-3 py-2" data-testid="build-cautions">
+        <div
+          role="note"
+          aria-label="Cautions"
+          className="rounded border border-bad/40 bg-bad/5 px-3 py-2"
+          data-testid="build-cautions"
+        >
           <h3 className="text-sm font-semibold text-bad">Cautions</h3>
           <ul className="mt-1 list-disc space-y-0.5 pl-5 text-xs">
             {warnings.map((t) => (
@@ -137,4 +177,3 @@ export function BuildSheetPanel({ design, viewer }: { design: DesignView; viewer
     </section>
   );
 }
-

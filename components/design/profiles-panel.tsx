@@ -238,7 +238,9 @@ function ProfileDetail({
               {d.series.tS.length.toLocaleString("en-GB")} points {query.isFetching ? "· loading…" : ""}
             </span>
           </div>
-          <p className="text-2xs text-ink-faint">Point at the chart to read a sample; drag across it to zoom to a stretch.</p>
+          <p className="text-2xs text-ink-faint">
+            Point at the chart to read a sample; drag across it to zoom to a stretch.
+          </p>
         </>
       )}
       <div ref={ref} className="w-full overflow-hidden">

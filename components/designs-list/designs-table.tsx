@@ -43,7 +43,9 @@ export function DesignsTable({ designs }: { designs: DesignRow[] }) {
   const rows = useMemo(() => {
     const q = search.trim().toLowerCase();
     return designs.filter(
-      (d) => (!status || d.status === status) && (!q || [d.name, d.project ?? "", d.authorName].some((s) => s.toLowerCase().includes(q))),
+      (d) =>
+        (!status || d.status === status) &&
+        (!q || [d.name, d.project ?? "", d.authorName].some((s) => s.toLowerCase().includes(q))),
     );
   }, [designs, search, status]);
 
@@ -59,7 +61,9 @@ export function DesignsTable({ designs }: { designs: DesignRow[] }) {
               type="checkbox"
               checked={on}
               disabled={!on && picked.length >= 4}
-              onChange={() => setPicked(on ? picked.filter((x) => x !== row.original.id) : [...picked, row.original.id])}
+              onChange={() =>
+                setPicked(on ? picked.filter((x) => x !== row.original.id) : [...picked, row.original.id])
+              }
               aria-label={`Pick ${row.original.name} to compare`}
             />
           );
@@ -68,12 +72,19 @@ export function DesignsTable({ designs }: { designs: DesignRow[] }) {
       col.accessor("name", {
         header: "Name",
         cell: ({ row }) => (
-          <Link href={`/designs/${row.original.id}`} className="font-medium text-ink underline-offset-2 hover:underline">
+          <Link
+            href={`/designs/${row.original.id}`}
+            className="font-medium text-ink underline-offset-2 hover:underline"
+          >
             {row.original.name}
           </Link>
         ),
       }),
-      col.accessor((d) => d.project ?? "", { id: "project", header: "Project", cell: (i) => i.getValue() || <span className="text-ink-faint">—</span> }),
+      col.accessor((d) => d.project ?? "", {
+        id: "project",
+        header: "Project",
+        cell: (i) => i.getValue() || <span className="text-ink-faint">—</span>,
+      }),
       col.accessor("status", { header: "Status", cell: (i) => <StatusBadge status={i.getValue()} /> }),
       col.accessor("revision", { header: "Revision" }),
       col.accessor((d) => d.shuntOhms ?? 0, {
@@ -122,7 +133,12 @@ export function DesignsTable({ designs }: { designs: DesignRow[] }) {
           <label htmlFor="designs-status" className="text-ink-muted">
             Status
           </label>
-          <select id="designs-status" value={status} onChange={(e) => setStatus(e.target.value as typeof status)} className="rounded border border-line bg-panel px-2 py-1.5 text-sm">
+          <select
+            id="designs-status"
+            value={status}
+            onChange={(e) => setStatus(e.target.value as typeof status)}
+            className="rounded border border-line bg-panel px-2 py-1.5 text-sm"
+          >
             <option value="">Any status</option>
             {statuses.map((s) => (
               <option key={s} value={s}>
@@ -135,7 +151,11 @@ export function DesignsTable({ designs }: { designs: DesignRow[] }) {
           <span className="text-ink-muted num" role="status">
             {picked.length === 0 ? "Tick 2 to 4 designs to compare them" : `${picked.length} picked`}
           </span>
-          <Button variant="secondary" disabled={!compareOk} onClick={() => router.push(`/compare?ids=${picked.join(",")}`)}>
+          <Button
+            variant="secondary"
+            disabled={!compareOk}
+            onClick={() => router.push(`/compare?ids=${picked.join(",")}`)}
+          >
             Compare
           </Button>
         </div>

@@ -17,7 +17,15 @@ const singular: Record<PartKind, string> = { amplifiers: "amplifier", shunts: "s
 
 type Notice = { tone: "good" | "bad"; text: string } | null;
 
-export function LibraryWorkbench({ amplifiers, shunts, canEdit }: { amplifiers: Part[]; shunts: Part[]; canEdit: boolean }) {
+export function LibraryWorkbench({
+  amplifiers,
+  shunts,
+  canEdit,
+}: {
+  amplifiers: Part[];
+  shunts: Part[];
+  canEdit: boolean;
+}) {
   const router = useRouter();
   const [notice, setNotice] = useState<Notice>(null);
   const done = (text: string) => {
@@ -26,11 +34,27 @@ export function LibraryWorkbench({ amplifiers, shunts, canEdit }: { amplifiers: 
   };
   return (
     <div className="flex flex-col gap-4">
-      <p role="status" aria-live="polite" className={`min-h-5 text-sm font-medium ${notice?.tone === "bad" ? "text-bad" : "text-good"}`}>
+      <p
+        role="status"
+        aria-live="polite"
+        className={`min-h-5 text-sm font-medium ${notice?.tone === "bad" ? "text-bad" : "text-good"}`}
+      >
         {notice?.text}
       </p>
-      <PartTable kind="amplifiers" parts={amplifiers} canEdit={canEdit} onDone={done} onError={(t) => setNotice({ tone: "bad", text: t })} />
-      <PartTable kind="shunts" parts={shunts} canEdit={canEdit} onDone={done} onError={(t) => setNotice({ tone: "bad", text: t })} />
+      <PartTable
+        kind="amplifiers"
+        parts={amplifiers}
+        canEdit={canEdit}
+        onDone={done}
+        onError={(t) => setNotice({ tone: "bad", text: t })}
+      />
+      <PartTable
+        kind="shunts"
+        parts={shunts}
+        canEdit={canEdit}
+        onDone={done}
+        onError={(t) => setNotice({ tone: "bad", text: t })}
+      />
       <ImportExport canEdit={canEdit} onDone={done} />
     </div>
   );
@@ -84,7 +108,8 @@ function PartTable({
       )}
       {parts.length === 0 ? (
         <p className="text-ink-muted">
-          No {titles[kind].toLowerCase()} yet.{canEdit ? ` Add one, or import a CSV below.` : " Owners and designers add them."}
+          No {titles[kind].toLowerCase()} yet.
+          {canEdit ? ` Add one, or import a CSV below.` : " Owners and designers add them."}
         </p>
       ) : (
         <div className="overflow-x-auto">
@@ -104,18 +129,35 @@ function PartTable({
             </thead>
             <tbody>
               {parts.map((p) => (
-                <FragmentRow key={p.id} colSpan={columns.length + (canEdit ? 2 : 1)} editing={editing === p.id} form={<PartForm kind={kind} part={p} onDone={finish} />}>
+                <FragmentRow
+                  key={p.id}
+                  colSpan={columns.length + (canEdit ? 2 : 1)}
+                  editing={editing === p.id}
+                  form={<PartForm kind={kind} part={p} onDone={finish} />}
+                >
                   <th scope="row" className="px-2 py-1.5 text-left font-medium">
                     {p.name}
                   </th>
                   {columns.map((c) => (
                     <td key={c.key} className="num px-2 py-1.5 whitespace-nowrap">
-                      {c.key === "fourTerminal" ? (p.fourTerminal ? <Badge tone="signal">4-terminal</Badge> : <span className="text-ink-faint">2-terminal</span>) : c.show(p)}
+                      {c.key === "fourTerminal" ? (
+                        p.fourTerminal ? (
+                          <Badge tone="signal">4-terminal</Badge>
+                        ) : (
+                          <span className="text-ink-faint">2-terminal</span>
+                        )
+                      ) : (
+                        c.show(p)
+                      )}
                     </td>
                   ))}
                   {canEdit && (
                     <td className="px-2 py-1 text-right whitespace-nowrap">
-                      <Button variant="ghost" onClick={() => setEditing(editing === p.id ? null : p.id)} aria-label={`Edit ${p.name}`}>
+                      <Button
+                        variant="ghost"
+                        onClick={() => setEditing(editing === p.id ? null : p.id)}
+                        aria-label={`Edit ${p.name}`}
+                      >
                         Edit
                       </Button>
                       <Button variant="ghost" onClick={() => remove(p)} aria-label={`Remove ${p.name}`}>
@@ -133,7 +175,17 @@ function PartTable({
   );
 }
 
-function FragmentRow({ children, editing, form, colSpan }: { children: React.ReactNode; editing: boolean; form: React.ReactNode; colSpan: number }) {
+function FragmentRow({
+  children,
+  editing,
+  form,
+  colSpan,
+}: {
+  children: React.ReactNode;
+  editing: boolean;
+  form: React.ReactNode;
+  colSpan: number;
+}) {
   return (
     <>
       <tr className={`border-b border-line last:border-0 ${editing ? "bg-sunken" : ""}`}>{children}</tr>
@@ -179,7 +231,10 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
       <div className="grid gap-6 md:grid-cols-2">
         <div className="flex flex-col gap-2">
           <h3 className="text-sm font-medium">Export</h3>
-          <p className="text-xs text-ink-muted">One row per part, SI units, the unit in each column name (offsetV, minOhms…). A file exported here imports back unchanged.</p>
+          <p className="text-xs text-ink-muted">
+            One row per part, SI units, the unit in each column name (offsetV, minOhms…). A file exported here imports
+            back unchanged.
+          </p>
           <div className="flex gap-2">
             <a className={buttonClass("secondary")} href="/api/library/export?kind=amplifiers" download>
               Amplifiers CSV
@@ -193,8 +248,9 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
           <form onSubmit={upload} className="flex flex-col gap-2" aria-label="Import parts">
             <h3 className="text-sm font-medium">Import</h3>
             <p className="text-xs text-ink-muted">
-              All or nothing: one bad cell refuses the whole file and names its row and column. A part whose name is already in the library is updated. Units may go in
-              the header (<code>offset [uV]</code>) or the cell (<code>35 uV</code>); lists are separated by <code>;</code>.
+              All or nothing: one bad cell refuses the whole file and names its row and column. A part whose name is
+              already in the library is updated. Units may go in the header (<code>offset [uV]</code>) or the cell (
+              <code>35 uV</code>); lists are separated by <code>;</code>.
             </p>
             <div className="grid grid-cols-[10rem_1fr] items-end gap-2">
               <Field id="import-kind" label="The file holds">
@@ -204,7 +260,13 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
                 </Select>
               </Field>
               <Field id="import-file" label="CSV file">
-                <input id="import-file" ref={fileRef} type="file" accept=".csv,text/csv" className="text-sm file:mr-2 file:rounded file:border file:border-line file:bg-panel file:px-2 file:py-1" />
+                <input
+                  id="import-file"
+                  ref={fileRef}
+                  type="file"
+                  accept=".csv,text/csv"
+                  className="text-sm file:mr-2 file:rounded file:border file:border-line file:bg-panel file:px-2 file:py-1"
+                />
               </Field>
             </div>
             <div className="flex items-center gap-2">
@@ -217,7 +279,9 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
             </p>
           </form>
         ) : (
-          <p className="text-sm text-ink-muted">Owners and designers import parts; everyone can read and export the library.</p>
+          <p className="text-sm text-ink-muted">
+            Owners and designers import parts; everyone can read and export the library.
+          </p>
         )}
       </div>
     </Panel>

@@ -11,7 +11,15 @@ type Part = Record<string, unknown> & { id: string; updatedAt: string };
 const kindWord: Record<PartKind, string> = { amplifiers: "amplifier", shunts: "shunt family" };
 
 /** Adds a part (part = null) or edits one; unit strings are read by the server, errors land beside the field. */
-export function PartForm({ kind, part, onDone }: { kind: PartKind; part: Part | null; onDone: (message: string) => void }) {
+export function PartForm({
+  kind,
+  part,
+  onDone,
+}: {
+  kind: PartKind;
+  part: Part | null;
+  onDone: (message: string) => void;
+}) {
   const [form, setForm] = useState(() => partToForm(kind, part));
   const [errors, setErrors] = useState<Record<string, string[]>>({});
   const [message, setMessage] = useState<string | null>(null);
@@ -31,19 +39,31 @@ export function PartForm({ kind, part, onDone }: { kind: PartKind; part: Part | 
     }).catch(() => null);
     setBusy(false);
     if (!res) return setMessage("The server could not be reached; nothing was saved.");
-    const data = (await res.json().catch(() => ({}))) as { message?: string; fieldErrors?: Record<string, string[]>; name?: string };
+    const data = (await res.json().catch(() => ({}))) as {
+      message?: string;
+      fieldErrors?: Record<string, string[]>;
+      name?: string;
+    };
     if (!res.ok) {
       const fieldErrors = data.fieldErrors ?? {};
       setErrors(fieldErrors);
       const onFields = Object.keys(fieldErrors).some((k) => fieldsOf[kind].some((f) => f.key === k));
-      setMessage(onFields ? "Nothing was saved: correct the marked fields." : (data.message ?? `The change was refused (${res.status}).`));
+      setMessage(
+        onFields
+          ? "Nothing was saved: correct the marked fields."
+          : (data.message ?? `The change was refused (${res.status}).`),
+      );
       return;
     }
     onDone(part ? `Saved ${String(data.name)}.` : `Added ${String(data.name)} to the library.`);
   }
 
   return (
-    <form onSubmit={submit} className="flex flex-col gap-3" aria-label={part ? `Edit ${kindWord[kind]}` : `Add ${kindWord[kind]}`}>
+    <form
+      onSubmit={submit}
+      className="flex flex-col gap-3"
+      aria-label={part ? `Edit ${kindWord[kind]}` : `Add ${kindWord[kind]}`}
+    >
       <div className="grid grid-cols-1 gap-x-4 gap-y-2 sm:grid-cols-2 lg:grid-cols-4">
         {fieldsOf[kind].map((f) => {
           const id = `${idBase}-${f.key}`;
@@ -66,7 +86,11 @@ export function PartForm({ kind, part, onDone }: { kind: PartKind; part: Part | 
             <div key={f.key} className={f.key === "name" ? "sm:col-span-2" : undefined}>
               <Field id={id} label={f.label} hint={f.hint} error={error}>
                 {f.kind === "select" ? (
-                  <Select {...common} value={String(form[f.key] ?? "")} onChange={(e) => setForm({ ...form, [f.key]: e.target.value })}>
+                  <Select
+                    {...common}
+                    value={String(form[f.key] ?? "")}
+                    onChange={(e) => setForm({ ...form, [f.key]: e.target.value })}
+                  >
                     {f.options?.map((o) => (
                       <option key={o.value} value={o.value}>
                         {o.label}

@@ -4,7 +4,15 @@
 import { useQueries } from "@tanstack/react-query";
 import { Axis, Grid, LineSeries, Tooltip, XYChart } from "@visx/xychart";
 import { useEffect, useMemo, useState } from "react";
-import { formatPercent, formatSI, insertionCurve, insertionSchema, loadModels, type InsertionResult, type LoadModel } from "@/lib/design";
+import {
+  formatPercent,
+  formatSI,
+  insertionCurve,
+  insertionSchema,
+  loadModels,
+  type InsertionResult,
+  type LoadModel,
+} from "@/lib/design";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, siTick } from "@/components/charts/axes";
 import { SeriesTip } from "@/components/charts/series-tip";
 import { chartTheme, usePalette } from "@/components/charts/palette";
@@ -26,7 +34,8 @@ const modelWords: Record<LoadModel, string> = {
 };
 
 type Inputs = { supply: string; seriesOhms: string; model: LoadModel; current: string; loadMin: string };
-type Answer = { ok: true; result: InsertionResult } | { ok: false; message: string; fieldErrors: Record<string, string[]> };
+type Answer =
+  { ok: true; result: InsertionResult } | { ok: false; message: string; fieldErrors: Record<string, string[]> };
 
 async function ask(i: Inputs, model: LoadModel): Promise<Answer> {
   const res = await fetch("/api/insertion", {
@@ -36,7 +45,11 @@ async function ask(i: Inputs, model: LoadModel): Promise<Answer> {
   });
   const body = (await res.json()) as InsertionResult & { message?: string; fieldErrors?: Record<string, string[]> };
   if (res.ok) return { ok: true, result: body };
-  return { ok: false, message: body.message ?? `The server answered ${res.status}`, fieldErrors: body.fieldErrors ?? {} };
+  return {
+    ok: false,
+    message: body.message ?? `The server answered ${res.status}`,
+    fieldErrors: body.fieldErrors ?? {},
+  };
 }
 
 function useDebounced<T>(value: T, ms: number): T {
@@ -49,10 +62,20 @@ function useDebounced<T>(value: T, ms: number): T {
 }
 
 export function MeterCheck() {
-  const [inputs, setInputs] = useState<Inputs>({ supply: "3.0 V", seriesOhms: "1.9 ohm", model: "constant-current", current: "180 mA", loadMin: "" });
+  const [inputs, setInputs] = useState<Inputs>({
+    supply: "3.0 V",
+    seriesOhms: "1.9 ohm",
+    model: "constant-current",
+    current: "180 mA",
+    loadMin: "",
+  });
   const set = (k: keyof Inputs) => (v: string) => setInputs((s) => ({ ...s, [k]: v }));
   const asked = useDebounced(inputs, 150);
-  const parsed = insertionSchema.safeParse({ supply: asked.supply, seriesOhms: asked.seriesOhms, load: { model: asked.model, current: asked.current } });
+  const parsed = insertionSchema.safeParse({
+    supply: asked.supply,
+    seriesOhms: asked.seriesOhms,
+    load: { model: asked.model, current: asked.current },
+  });
   const localErrors: Record<string, string> = {};
   if (!parsed.success) for (const i of parsed.error.issues) localErrors[i.path.join(".")] ??= i.message;
 
@@ -64,7 +87,10 @@ export function MeterCheck() {
       staleTime: Infinity,
     })),
   });
-  const byModel = Object.fromEntries(loadModels.map((m, k) => [m, answers[k]?.data])) as Record<LoadModel, Answer | undefined>;
+  const byModel = Object.fromEntries(loadModels.map((m, k) => [m, answers[k]?.data])) as Record<
+    LoadModel,
+    Answer | undefined
+  >;
   const mine = byModel[asked.model];
   const serverErrors = mine && !mine.ok ? mine.fieldErrors : {};
   const err = (path: string) => localErrors[path] ?? serverErrors[path]?.join("; ");
@@ -80,10 +106,27 @@ export function MeterCheck() {
       <Panel title="The circuit" className="lg:self-start">
         <form className="flex flex-col gap-3" onSubmit={(e) => e.preventDefault()} aria-label="Meter check">
           <Field id="m-supply" label="Supply voltage" error={err("supply")}>
-            <TextInput id="m-supply" value={inputs.supply} onChange={(e) => set("supply")(e.target.value)} aria-describedby="m-supply-error" aria-invalid={err("supply") ? true : undefined} />
+            <TextInput
+              id="m-supply"
+              value={inputs.supply}
+              onChange={(e) => set("supply")(e.target.value)}
+              aria-describedby="m-supply-error"
+              aria-invalid={err("supply") ? true : undefined}
+            />
           </Field>
-          <Field id="m-current" label="Load current at full supply" hint="What the circuit draws with nothing in series" error={err("load.current")}>
-            <TextInput id="m-current" value={inputs.current} onChange={(e) => set("current")(e.target.value)} aria-describedby="m-current-error m-current-hint" aria-invalid={err("load.current") ? true : undefined} />
+          <Field
+            id="m-current"
+            label="Load current at full supply"
+            hint="What the circuit draws with nothing in series"
+            error={err("load.current")}
+          >
+            <TextInput
+              id="m-current"
+              value={inputs.current}
+              onChange={(e) => set("current")(e.target.value)}
+              aria-describedby="m-current-error m-current-hint"
+              aria-invalid={err("load.current") ? true : undefined}
+            />
           </Field>
           <Field id="m-model" label="Load behaviour" error={err("load.model")}>
             <Select id="m-model" value={inputs.model} onChange={(e) => set("model")(e.target.value)}>
@@ -94,8 +137,19 @@ export function MeterCheck() {
               ))}
             </Select>
           </Field>
-          <Field id="m-series" label="Series resistance" hint="The meter's current range, or any shunt" error={err("seriesOhms")}>
-            <TextInput id="m-series" value={inputs.seriesOhms} onChange={(e) => set("seriesOhms")(e.target.value)} aria-describedby="m-series-error m-series-hint" aria-invalid={err("seriesOhms") ? true : undefined} />
+          <Field
+            id="m-series"
+            label="Series resistance"
+            hint="The meter's current range, or any shunt"
+            error={err("seriesOhms")}
+          >
+            <TextInput
+              id="m-series"
+              value={inputs.seriesOhms}
+              onChange={(e) => set("seriesOhms")(e.target.value)}
+              aria-describedby="m-series-error m-series-hint"
+              aria-invalid={err("seriesOhms") ? true : undefined}
+            />
           </Field>
           <div className="flex flex-col gap-1">
             <p className="text-xs font-medium text-ink-muted">Typical meter ranges</p>
@@ -113,10 +167,17 @@ export function MeterCheck() {
                 </button>
               ))}
             </div>
-            <p className="text-2xs text-ink-faint">Usual values for a handheld meter (common practice, no source); your meter&apos;s manual gives its own.</p>
+            <p className="text-2xs text-ink-faint">
+              Usual values for a handheld meter (common practice, no source); your meter&apos;s manual gives its own.
+            </p>
           </div>
           <Field id="m-loadmin" label="Minimum load voltage (optional)" hint="Drawn on the chart">
-            <TextInput id="m-loadmin" value={inputs.loadMin} onChange={(e) => set("loadMin")(e.target.value)} placeholder="2.7 V" />
+            <TextInput
+              id="m-loadmin"
+              value={inputs.loadMin}
+              onChange={(e) => set("loadMin")(e.target.value)}
+              placeholder="2.7 V"
+            />
           </Field>
         </form>
       </Panel>
@@ -129,7 +190,9 @@ export function MeterCheck() {
               {mine.message}
             </p>
           ) : (
-            <p className="text-sm text-ink-muted">{parsed.success ? "Working it out…" : "Fix the marked entry to see the figures."}</p>
+            <p className="text-sm text-ink-muted">
+              {parsed.success ? "Working it out…" : "Fix the marked entry to see the figures."}
+            </p>
           )}
         </Panel>
         <Panel title="The three load behaviours side by side">
@@ -170,10 +233,16 @@ export function MeterCheck() {
           </table>
         </Panel>
         <Panel title="Voltage left at the load across load currents">
-          {parsed.success ? <InsertionChart input={parsed.data} loadMinV={loadMin} /> : <p className="text-sm text-ink-muted">Fix the marked entry to draw the curves.</p>}
+          {parsed.success ? (
+            <InsertionChart input={parsed.data} loadMinV={loadMin} />
+          ) : (
+            <p className="text-sm text-ink-muted">Fix the marked entry to draw the curves.</p>
+          )}
         </Panel>
         <p className="text-2xs text-ink-faint">
-          A meter on a current range must be in series, never across a supply. Fuse ratings, measurement category and the range&apos;s own limits are on the meter; on mains or other high-voltage circuits follow local codes and licensed practice.
+          A meter on a current range must be in series, never across a supply. Fuse ratings, measurement category and
+          the range&apos;s own limits are on the meter; on mains or other high-voltage circuits follow local codes and
+          licensed practice.
         </p>
       </div>
     </div>
@@ -211,26 +280,85 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
   const from = input.load.current / 1000;
   const to = input.load.current * 3;
   const curves = useMemo(
-    () => loadModels.map((model) => ({ model, points: insertionCurve({ ...input, load: { ...input.load, model } }, { fromA: from, toA: to, points: 80 }) })),
+    () =>
+      loadModels.map((model) => ({
+        model,
+        points: insertionCurve({ ...input, load: { ...input.load, model } }, { fromA: from, toA: to, points: 80 }),
+      })),
     [input, from, to],
   );
-  const colours: Record<LoadModel, string> = { "constant-current": p.copper, resistive: p.signal, "constant-power": p.good };
+  const colours: Record<LoadModel, string> = {
+    "constant-current": p.copper,
+    resistive: p.signal,
+    "constant-power": p.good,
+  };
   const xd = logDomain([from, to], 0);
   const yd: [number, number] = [0, input.supply * 1.05];
   return (
     <div>
       <div ref={ref} style={{ height: 260 }} data-testid="meter-chart">
         {width > 0 && (
-          <XYChart width={width} height={260} margin={chartMargin} theme={theme} xScale={{ type: "log", domain: xd }} yScale={{ type: "linear", domain: yd }} accessibilityLabel="Voltage at the load against load current">
+          <XYChart
+            width={width}
+            height={260}
+            margin={chartMargin}
+            theme={theme}
+            xScale={{ type: "log", domain: xd }}
+            yScale={{ type: "linear", domain: yd }}
+            accessibilityLabel="Voltage at the load against load current"
+          >
             <Grid columns rows numTicks={5} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
-            <Axis orientation="bottom" labelOffset={bottomLabelOffset} label="Load current at full supply" tickValues={logTicks(xd[0], xd[1])} tickFormat={siTick("A")} />
-            <Axis orientation="left" labelOffset={leftLabelOffset} label="Voltage at the load" numTicks={5} tickFormat={siTick("V", 3)} />
-            <LineSeries dataKey="now" data={[{ a: input.load.current, v: 0 }, { a: input.load.current, v: input.supply }]} xAccessor={(d: Pt) => d.a} yAccessor={(d: Pt) => d.v} stroke={p.faint} strokeDasharray="2 3" enableEvents={false} />
+            <Axis
+              orientation="bottom"
+              labelOffset={bottomLabelOffset}
+              label="Load current at full supply"
+              tickValues={logTicks(xd[0], xd[1])}
+              tickFormat={siTick("A")}
+            />
+            <Axis
+              orientation="left"
+              labelOffset={leftLabelOffset}
+              label="Voltage at the load"
+              numTicks={5}
+              tickFormat={siTick("V", 3)}
+            />
+            <LineSeries
+              dataKey="now"
+              data={[
+                { a: input.load.current, v: 0 },
+                { a: input.load.current, v: input.supply },
+              ]}
+              xAccessor={(d: Pt) => d.a}
+              yAccessor={(d: Pt) => d.v}
+              stroke={p.faint}
+              strokeDasharray="2 3"
+              enableEvents={false}
+            />
             {loadMinV !== undefined && (
-              <LineSeries dataKey="Load minimum" data={[{ a: xd[0], v: loadMinV }, { a: xd[1], v: loadMinV }]} xAccessor={(d: Pt) => d.a} yAccessor={(d: Pt) => d.v} stroke={p.bad} strokeDasharray="5 3" strokeWidth={2} enableEvents={false} />
+              <LineSeries
+                dataKey="Load minimum"
+                data={[
+                  { a: xd[0], v: loadMinV },
+                  { a: xd[1], v: loadMinV },
+                ]}
+                xAccessor={(d: Pt) => d.a}
+                yAccessor={(d: Pt) => d.v}
+                stroke={p.bad}
+                strokeDasharray="5 3"
+                strokeWidth={2}
+                enableEvents={false}
+              />
             )}
             {curves.map((c) => (
-              <LineSeries key={c.model} dataKey={modelWords[c.model]} data={c.points.map((q) => ({ a: q.nominalA, v: q.loadVoltageV }))} xAccessor={(d: Pt) => d.a} yAccessor={(d: Pt) => d.v} stroke={colours[c.model]} strokeWidth={c.model === input.load.model ? 2.2 : 1.2} />
+              <LineSeries
+                key={c.model}
+                dataKey={modelWords[c.model]}
+                data={c.points.map((q) => ({ a: q.nominalA, v: q.loadVoltageV }))}
+                xAccessor={(d: Pt) => d.a}
+                yAccessor={(d: Pt) => d.v}
+                stroke={colours[c.model]}
+                strokeWidth={c.model === input.load.model ? 2.2 : 1.2}
+              />
             ))}
             <Tooltip<Pt>
               snapTooltipToDatumX
@@ -239,7 +367,14 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
               renderTooltip={({ tooltipData }) => {
                 const near = tooltipData?.nearestDatum?.datum;
                 if (!near) return null;
-                return <SeriesTip title={`load drawing ${formatSI(near.a, "A")}`} byKey={tooltipData.datumByKey} skip={["now", "Load minimum"]} value={(d) => formatSI(d.v, "V")} />;
+                return (
+                  <SeriesTip
+                    title={`load drawing ${formatSI(near.a, "A")}`}
+                    byKey={tooltipData.datumByKey}
+                    skip={["now", "Load minimum"]}
+                    value={(d) => formatSI(d.v, "V")}
+                  />
+                );
               }}
             />
           </XYChart>

@@ -12,7 +12,9 @@ function Figure({ label, value, note, tone }: { label: string; value: string; no
   return (
     <div className="rounded border border-line bg-panel px-3 py-2">
       <dt className="text-2xs font-medium text-ink-muted uppercase">{label}</dt>
-      <dd className={`num text-base font-semibold ${tone === "bad" ? "text-bad" : tone === "warn" ? "text-warn" : ""}`}>{value}</dd>
+      <dd className={`num text-base font-semibold ${tone === "bad" ? "text-bad" : tone === "warn" ? "text-warn" : ""}`}>
+        {value}
+      </dd>
       {note && <dd className="text-2xs text-ink-faint">{note}</dd>}
     </div>
   );
@@ -25,8 +27,16 @@ export function ProfileSummaryView({ summary, loadMinV }: { summary: ProfileSumm
     <div className="flex flex-col gap-3">
       <dl className="grid grid-cols-2 gap-2 sm:grid-cols-3 lg:grid-cols-5" data-testid="profile-summary">
         <Figure label="Samples" value={summary.samples.toLocaleString("en-GB")} />
-        <Figure label="Duration" value={formatSI(summary.durationS, "s")} note={summary.durationS >= 120 ? formatDuration(summary.durationS) : undefined} />
-        <Figure label="Charge" value={formatSI(summary.chargeC, "C")} note={`${formatSI(summary.chargeC / 3600, "Ah")}`} />
+        <Figure
+          label="Duration"
+          value={formatSI(summary.durationS, "s")}
+          note={summary.durationS >= 120 ? formatDuration(summary.durationS) : undefined}
+        />
+        <Figure
+          label="Charge"
+          value={formatSI(summary.chargeC, "C")}
+          note={`${formatSI(summary.chargeC / 3600, "Ah")}`}
+        />
         <Figure label="Average current" value={formatSI(summary.averageCurrentA, "A")} />
         <Figure label="Peak current" value={formatSI(summary.peakCurrentA, "A")} />
         <Figure label="Largest burden" value={formatSI(summary.maxBurdenV, "V")} note="peak current × shunt" />
@@ -58,22 +68,35 @@ function BatteryLife({ averageCurrentA }: { averageCurrentA: number }) {
   const [text, setText] = useState("");
   const capacity = text.trim() === "" ? null : parseCapacityC(text);
   const life = capacity === null ? null : batteryLifeS(capacity, averageCurrentA);
-  const error = text.trim() !== "" && capacity === null ? 'Write a capacity such as "220 mAh", "2.4 Ah" or "800 C"' : undefined;
+  const error =
+    text.trim() !== "" && capacity === null ? 'Write a capacity such as "220 mAh", "2.4 Ah" or "800 C"' : undefined;
   return (
     <div className="flex flex-wrap items-start gap-4 rounded border border-line bg-sunken/40 px-3 py-2">
       <div className="w-56">
         <Field id="battery-capacity" label="Battery capacity" hint="e.g. 220 mAh (a plain number is mAh)" error={error}>
-          <TextInput id="battery-capacity" value={text} placeholder="220 mAh" onChange={(e) => setText(e.target.value)} aria-invalid={error ? true : undefined} />
+          <TextInput
+            id="battery-capacity"
+            value={text}
+            placeholder="220 mAh"
+            onChange={(e) => setText(e.target.value)}
+            aria-invalid={error ? true : undefined}
+          />
         </Field>
       </div>
       <div className="pt-5 text-sm" aria-live="polite" data-testid="battery-life">
         {life !== null ? (
           <>
             <span className="num text-base font-semibold">{formatDuration(life)}</span>
-            <span className="text-ink-muted"> ({Number((life / 3600).toPrecision(3)).toLocaleString("en-GB")} h) at {formatSI(averageCurrentA, "A")} average, if the recording repeats; ignores self-discharge and the cell&apos;s cut-off voltage.</span>
+            <span className="text-ink-muted">
+              {" "}
+              ({Number((life / 3600).toPrecision(3)).toLocaleString("en-GB")} h) at {formatSI(averageCurrentA, "A")}{" "}
+              average, if the recording repeats; ignores self-discharge and the cell&apos;s cut-off voltage.
+            </span>
           </>
         ) : (
-          <span className="text-ink-muted">Enter a capacity to estimate how long it lasts at this profile&apos;s average current.</span>
+          <span className="text-ink-muted">
+            Enter a capacity to estimate how long it lasts at this profile&apos;s average current.
+          </span>
         )}
       </div>
     </div>

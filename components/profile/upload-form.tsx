@@ -16,7 +16,9 @@ export function UploadForm({ designId, onUploaded }: { designId: string; onUploa
     setError(null);
     setDone(null);
     if (file.size > 10_000_000) {
-      setError({ message: `${file.name} is ${(file.size / 1e6).toFixed(1)} MB; the largest recording accepted is 10 MB. Nothing was stored.` });
+      setError({
+        message: `${file.name} is ${(file.size / 1e6).toFixed(1)} MB; the largest recording accepted is 10 MB. Nothing was stored.`,
+      });
       return;
     }
     setBusy(file.name);
@@ -27,7 +29,8 @@ export function UploadForm({ designId, onUploaded }: { designId: string; onUploa
     if (input.current) input.current.value = "";
     if (!res) return setError({ message: "The server could not be reached; nothing was stored." });
     const data = (await res.json().catch(() => ({}))) as UploadError & { id?: string; samples?: number };
-    if (!res.ok || !data.id) return setError({ ...data, message: data.message ?? `The upload was refused (${res.status}).` });
+    if (!res.ok || !data.id)
+      return setError({ ...data, message: data.message ?? `The upload was refused (${res.status}).` });
     setDone(`Stored ${file.name}: ${data.samples?.toLocaleString("en-GB")} samples.`);
     onUploaded(data.id);
   }
@@ -51,8 +54,9 @@ export function UploadForm({ designId, onUploaded }: { designId: string; onUploa
       >
         <p className="font-medium">{busy ? `Uploading ${busy}…` : "Drop a current recording (CSV) here"}</p>
         <p className="max-w-prose text-xs text-ink-muted">
-          A header naming a time column (<code>time</code> or <code>t</code>) and a current column (<code>current</code> or <code>i</code>), each with an optional
-          unit: <code>Time (ms),current [uA]</code>. Without a unit, seconds and amperes. Up to 10 MB; lines starting with <code>#</code> are skipped.
+          A header naming a time column (<code>time</code> or <code>t</code>) and a current column (<code>current</code>{" "}
+          or <code>i</code>), each with an optional unit: <code>Time (ms),current [uA]</code>. Without a unit, seconds
+          and amperes. Up to 10 MB; lines starting with <code>#</code> are skipped.
         </p>
         <label className="cursor-pointer text-sm">
           <span className="sr-only">Current recording (CSV)</span>
@@ -71,7 +75,11 @@ export function UploadForm({ designId, onUploaded }: { designId: string; onUploa
         </label>
       </div>
       {error && (
-        <div role="alert" data-testid="profile-upload-error" className="rounded-panel border border-bad/40 bg-bad/10 px-3 py-2 text-sm text-bad">
+        <div
+          role="alert"
+          data-testid="profile-upload-error"
+          className="rounded-panel border border-bad/40 bg-bad/10 px-3 py-2 text-sm text-bad"
+        >
           <p className="font-medium">The file was refused; nothing was stored.</p>
           <p>{error.message}</p>
           {(error.row !== undefined || error.line !== undefined || error.column !== undefined) && (

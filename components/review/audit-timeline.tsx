@@ -1,12 +1,21 @@
 import Link from "next/link";
-import { choiceFields, requirementFields } from "@/lib/designs/figures";
-import { formatWhen } from "@/lib/designs/when";
+import { choiceFields, requirementFields } from "@/lib/saved-designs/figures";
+import { formatWhen } from "@/lib/saved-designs/when";
 
 /** "choice.shuntOhms" → "shunt", "requirement.current.max" → "maximum current". */
 function changedLabel(path: string): string {
   const [group, ...rest] = path.split(".");
   const key = rest.join(".");
-  const label = group === "choice" ? choiceFields[key]?.label : group === "requirement" ? requirementFields[key]?.label : path === "name" ? "Name" : path === "project" ? "Project" : undefined;
+  const label =
+    group === "choice"
+      ? choiceFields[key]?.label
+      : group === "requirement"
+        ? requirementFields[key]?.label
+        : path === "name"
+          ? "Name"
+          : path === "project"
+            ? "Project"
+            : undefined;
   return (label ?? path).toLowerCase();
 }
 
@@ -24,7 +33,14 @@ export type AuditEntry = {
 const words: Record<string, (d: Record<string, unknown>) => string> = {
   "design.created": (d) => `created the design (revision ${String(d.revision ?? 1)})`,
   "design.revised": (d) =>
-    `saved revision ${String(d.revision)}${Array.isArray(d.changed) && d.changed.length ? ` (changed ${d.changed.slice(0, 6).map((c) => changedLabel(String(c))).join(", ")}${d.changed.length > 6 ? "…" : ""})` : ""}`,
+    `saved revision ${String(d.revision)}${
+      Array.isArray(d.changed) && d.changed.length
+        ? ` (changed ${d.changed
+            .slice(0, 6)
+            .map((c) => changedLabel(String(c)))
+            .join(", ")}${d.changed.length > 6 ? "…" : ""})`
+        : ""
+    }`,
   "design.submitted": (d) => `submitted revision ${String(d.revision)} for review`,
   "design.approved": (d) => `approved revision ${String(d.revision)}`,
   "design.returned": (d) => `returned revision ${String(d.revision)}${d.reason ? `: “${String(d.reason)}”` : ""}`,
@@ -32,7 +48,8 @@ const words: Record<string, (d: Record<string, unknown>) => string> = {
   "mail.failed": (d) => `could not mail ${String(d.to)} (${String(d.kind)}): ${String(d.error)}`,
   "member.role-changed": (d) => `changed a role from ${String(d.from)} to ${String(d.to)}`,
   "member.removed": (d) => `removed ${String(d.email ?? "a member")} (${String(d.role ?? "")}) from the team`,
-  "invitation.created": (d) => `invited ${String(d.email)} as ${String(d.role)}${d.newTeam ? ` to found “${String(d.newTeam)}”` : ""}`,
+  "invitation.created": (d) =>
+    `invited ${String(d.email)} as ${String(d.role)}${d.newTeam ? ` to found “${String(d.newTeam)}”` : ""}`,
   "invitation.revoked": (d) => `revoked the invitation of ${String(d.email)}`,
   "invitation.accepted": (d) => `accepted the invitation for ${String(d.email)} and joined as ${String(d.role)}`,
   "team.created": (d) => `started the team “${String(d.name)}” for ${String(d.firstOwner)}`,

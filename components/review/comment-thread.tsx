@@ -4,7 +4,7 @@ import { useState } from "react";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import type { ReviewRecord } from "@/db/queries/reviews";
-import { formatWhen } from "@/lib/designs/when";
+import { formatWhen } from "@/lib/saved-designs/when";
 import { SendMessage } from "./send-message";
 import { useSend } from "./use-send";
 
@@ -14,7 +14,19 @@ const verdictBadge = {
   comment: null,
 } as const;
 
-function Composer({ designId, revision, parentId, label, onDone }: { designId: string; revision: number; parentId?: string; label: string; onDone?: () => void }) {
+function Composer({
+  designId,
+  revision,
+  parentId,
+  label,
+  onDone,
+}: {
+  designId: string;
+  revision: number;
+  parentId?: string;
+  label: string;
+  onDone?: () => void;
+}) {
   const s = useSend();
   const [text, setText] = useState("");
   const id = `comment-${parentId ?? `rev-${revision}`}`;
@@ -23,7 +35,14 @@ function Composer({ designId, revision, parentId, label, onDone }: { designId: s
       className="flex flex-col gap-1.5"
       onSubmit={async (e) => {
         e.preventDefault();
-        if (await s.send(`/api/designs/${designId}/reviews`, "POST", { verdict: "comment", body: text, revision, parentId }, "Comment posted.")) {
+        if (
+          await s.send(
+            `/api/designs/${designId}/reviews`,
+            "POST",
+            { verdict: "comment", body: text, revision, parentId },
+            "Comment posted.",
+          )
+        ) {
           setText("");
           onDone?.();
         }
@@ -32,7 +51,13 @@ function Composer({ designId, revision, parentId, label, onDone }: { designId: s
       <label htmlFor={id} className="text-xs font-medium text-ink-muted">
         {label}
       </label>
-      <textarea id={id} rows={2} value={text} onChange={(e) => setText(e.target.value)} className="w-full rounded border border-line bg-panel px-2 py-1.5 text-sm" />
+      <textarea
+        id={id}
+        rows={2}
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+        className="w-full rounded border border-line bg-panel px-2 py-1.5 text-sm"
+      />
       <div className="flex items-center gap-2">
         <Button type="submit" disabled={s.busy || !text.trim()} className="px-2 py-1 text-xs">
           {parentId ? "Post reply" : "Post comment"}
@@ -52,7 +77,11 @@ function Entry({ r, replies, designId }: { r: ReviewRecord; replies: ReviewRecor
         {verdictBadge[r.verdict]}
         <span>{formatWhen(r.createdAt)}</span>
       </div>
-      {r.body ? <p className="whitespace-pre-wrap text-sm">{r.body}</p> : <p className="text-xs text-ink-faint">(no note)</p>}
+      {r.body ? (
+        <p className="whitespace-pre-wrap text-sm">{r.body}</p>
+      ) : (
+        <p className="text-xs text-ink-faint">(no note)</p>
+      )}
       {replies.length > 0 && (
         <ul className="ml-4 flex flex-col gap-2 border-l border-line pl-3">
           {replies.map((c) => (
@@ -68,7 +97,13 @@ function Entry({ r, replies, designId }: { r: ReviewRecord; replies: ReviewRecor
       )}
       <div className="ml-4">
         {replying ? (
-          <Composer designId={designId} revision={r.revision} parentId={r.id} label={`Reply to ${r.authorName}`} onDone={() => setReplying(false)} />
+          <Composer
+            designId={designId}
+            revision={r.revision}
+            parentId={r.id}
+            label={`Reply to ${r.authorName}`}
+            onDone={() => setReplying(false)}
+          />
         ) : (
           <button type="button" className="text-xs text-copper hover:underline" onClick={() => setReplying(true)}>
             Reply
@@ -80,7 +115,15 @@ function Entry({ r, replies, designId }: { r: ReviewRecord; replies: ReviewRecor
 }
 
 /** Comments and verdicts, one thread per revision (newest revision first), replies nested. */
-export function CommentThreads({ designId, currentRevision, reviews }: { designId: string; currentRevision: number; reviews: ReviewRecord[] }) {
+export function CommentThreads({
+  designId,
+  currentRevision,
+  reviews,
+}: {
+  designId: string;
+  currentRevision: number;
+  reviews: ReviewRecord[];
+}) {
   const revisions = [...new Set([currentRevision, ...reviews.map((r) => r.revision)])].sort((a, b) => b - a);
   return (
     <div className="flex flex-col gap-4">
@@ -99,7 +142,11 @@ export function CommentThreads({ designId, currentRevision, reviews }: { designI
               ))}
             </ul>
             {rev === currentRevision && (
-              <Composer designId={designId} revision={rev} label="Comment on this revision (a bench finding counts too)" />
+              <Composer
+                designId={designId}
+                revision={rev}
+                label="Comment on this revision (a bench finding counts too)"
+              />
             )}
           </section>
         );

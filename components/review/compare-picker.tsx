@@ -11,16 +11,24 @@ type Other = { id: string; name: string; project: string | null; status: DesignS
 export function ComparePicker({ current, others }: { current: { id: string; name: string }; others: Other[] }) {
   const [picked, setPicked] = useState<string[]>([]);
   if (others.length === 0) return null;
-  const toggle = (id: string) => setPicked((p) => (p.includes(id) ? p.filter((x) => x !== id) : p.length < 3 ? [...p, id] : p));
+  const toggle = (id: string) =>
+    setPicked((p) => (p.includes(id) ? p.filter((x) => x !== id) : p.length < 3 ? [...p, id] : p));
   const href = `/compare?ids=${[current.id, ...picked].join(",")}`;
   return (
     <details className="rounded-panel border border-line bg-panel px-4 py-2 text-sm">
-      <summary className="cursor-pointer text-xs font-medium text-ink-muted">Compare with… (up to three other designs)</summary>
+      <summary className="cursor-pointer text-xs font-medium text-ink-muted">
+        Compare with… (up to three other designs)
+      </summary>
       <fieldset className="mt-2 flex flex-col gap-1">
         <legend className="sr-only">Designs to compare with {current.name}</legend>
         {others.map((o) => (
           <label key={o.id} className="flex items-center gap-2">
-            <input type="checkbox" checked={picked.includes(o.id)} onChange={() => toggle(o.id)} disabled={!picked.includes(o.id) && picked.length >= 3} />
+            <input
+              type="checkbox"
+              checked={picked.includes(o.id)}
+              onChange={() => toggle(o.id)}
+              disabled={!picked.includes(o.id) && picked.length >= 3}
+            />
             <span>{o.name}</span>
             <span className="text-xs text-ink-faint">
               {o.project ?? "no project"} · {o.status}

@@ -32,7 +32,14 @@ export function ReviewActions({ design, viewer }: { design: DesignView; viewer: 
             variant="primary"
             className="ml-auto"
             disabled={s.busy}
-            onClick={() => s.send(`${url}/submit`, "POST", { revision: design.revision }, "Submitted; the team's reviewers have been mailed.")}
+            onClick={() =>
+              s.send(
+                `${url}/submit`,
+                "POST",
+                { revision: design.revision },
+                "Submitted; the team's reviewers have been mailed.",
+              )
+            }
           >
             Submit revision {design.revision} for review
           </Button>
@@ -40,7 +47,9 @@ export function ReviewActions({ design, viewer }: { design: DesignView; viewer: 
       </div>
 
       {design.status === "in-review" && mayJudge && isAuthor && (
-        <p className="text-xs text-ink-muted">You wrote this revision, so the verdict must come from another reviewer or owner. You can still comment.</p>
+        <p className="text-xs text-ink-muted">
+          You wrote this revision, so the verdict must come from another reviewer or owner. You can still comment.
+        </p>
       )}
       {design.status === "in-review" && mayJudge && !isAuthor && (
         <form
@@ -61,7 +70,14 @@ export function ReviewActions({ design, viewer }: { design: DesignView; viewer: 
             <Button
               variant="primary"
               disabled={s.busy}
-              onClick={() => s.send(`${url}/reviews`, "POST", { verdict: "approve", body: reason, revision: design.revision }, `Revision ${design.revision} approved; the author has been mailed.`)}
+              onClick={() =>
+                s.send(
+                  `${url}/reviews`,
+                  "POST",
+                  { verdict: "approve", body: reason, revision: design.revision },
+                  `Revision ${design.revision} approved; the author has been mailed.`,
+                )
+              }
             >
               Approve revision {design.revision}
             </Button>
@@ -69,7 +85,14 @@ export function ReviewActions({ design, viewer }: { design: DesignView; viewer: 
               variant="secondary"
               disabled={s.busy || !reason.trim()}
               title={reason.trim() ? undefined : "Write the reason first"}
-              onClick={() => s.send(`${url}/reviews`, "POST", { verdict: "return", body: reason, revision: design.revision }, "Returned to the author with your reason.")}
+              onClick={() =>
+                s.send(
+                  `${url}/reviews`,
+                  "POST",
+                  { verdict: "return", body: reason, revision: design.revision },
+                  "Returned to the author with your reason.",
+                )
+              }
             >
               Return with reason
             </Button>
@@ -79,12 +102,19 @@ export function ReviewActions({ design, viewer }: { design: DesignView; viewer: 
 
       {canEdit && (
         <details className="text-sm">
-          <summary className="cursor-pointer text-xs text-ink-muted">Rename or move to another project (saves a new draft revision)</summary>
+          <summary className="cursor-pointer text-xs text-ink-muted">
+            Rename or move to another project (saves a new draft revision)
+          </summary>
           <form
             className="mt-2 grid grid-cols-1 gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end"
             onSubmit={(e) => {
               e.preventDefault();
-              void s.send(url, "PATCH", { revision: design.revision, name, project: project.trim() || null }, "Saved as a new draft revision.");
+              void s.send(
+                url,
+                "PATCH",
+                { revision: design.revision, name, project: project.trim() || null },
+                "Saved as a new draft revision.",
+              );
             }}
           >
             <Field id="design-name-input" label="Design name">

@@ -4,8 +4,8 @@ import { useState } from "react";
 import { Badge } from "@/components/ui/badge";
 import type { RevisionRecord } from "@/db/queries/designs";
 import { formatSI } from "@/lib/design";
-import { diffRevisions } from "@/lib/designs/diff";
-import { formatWhen } from "@/lib/designs/when";
+import { diffRevisions } from "@/lib/saved-designs/diff";
+import { formatWhen } from "@/lib/saved-designs/when";
 
 const narrowSelect = "rounded border border-line bg-panel px-2 py-1 text-sm num focus:border-copper focus:outline-none";
 
@@ -115,7 +115,12 @@ function RevisionSelect({
   revisions: { revision: number }[];
 }) {
   return (
-    <select aria-label={label} value={value} onChange={(e) => onChange(Number(e.target.value))} className={narrowSelect}>
+    <select
+      aria-label={label}
+      value={value}
+      onChange={(e) => onChange(Number(e.target.value))}
+      className={narrowSelect}
+    >
       {revisions.map((r) => (
         <option key={r.revision} value={r.revision}>
           {r.revision}

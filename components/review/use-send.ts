@@ -12,10 +12,18 @@ export function useSend() {
   async function send(url: string, method: "POST" | "PATCH", body: unknown, okText: string): Promise<boolean> {
     setState({ busy: true, error: null, stale: false, ok: null });
     try {
-      const res = await fetch(url, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+      const res = await fetch(url, {
+        method,
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify(body),
+      });
       const data = (await res.json().catch(() => ({}))) as { message?: string; fieldErrors?: Record<string, string[]> };
       if (!res.ok) {
-        const detail = data.fieldErrors ? Object.entries(data.fieldErrors).map(([k, v]) => `${k}: ${v.join("; ")}`).join(" · ") : "";
+        const detail = data.fieldErrors
+          ? Object.entries(data.fieldErrors)
+              .map(([k, v]) => `${k}: ${v.join("; ")}`)
+              .join(" · ")
+          : "";
         setState({
           busy: false,
           stale: res.status === 409,
@@ -32,5 +40,12 @@ export function useSend() {
       return false;
     }
   }
-  return { ...state, send, reload: () => { setState({ busy: false, error: null, stale: false, ok: null }); router.refresh(); } };
+  return {
+    ...state,
+    send,
+    reload: () => {
+      setState({ busy: false, error: null, stale: false, ok: null });
+      router.refresh();
+    },
+  };
 }

@@ -7,7 +7,15 @@ import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
 
 /** The invitee's form: a name and password for a new account, or the existing account's password. */
-export function AcceptInvitationForm({ token, email, hasAccount }: { token: string; email: string; hasAccount: boolean }) {
+export function AcceptInvitationForm({
+  token,
+  email,
+  hasAccount,
+}: {
+  token: string;
+  email: string;
+  hasAccount: boolean;
+}) {
   const router = useRouter();
   const [error, setError] = useState<{ message: string; fieldErrors?: Record<string, string[]> } | null>(null);
   const [busy, setBusy] = useState(false);
@@ -54,12 +62,31 @@ export function AcceptInvitationForm({ token, email, hasAccount }: { token: stri
           <TextInput id="name" name="name" autoComplete="name" required aria-invalid={!!fe("name")} />
         </Field>
       )}
-      <Field id="password" label={hasAccount ? "Your existing password" : "Choose a password"} hint={hasAccount ? "You already have an account with this e-mail." : "At least 10 characters."} error={fe("password")}>
-        <TextInput id="password" name="password" type="password" autoComplete={hasAccount ? "current-password" : "new-password"} required aria-invalid={!!fe("password")} />
+      <Field
+        id="password"
+        label={hasAccount ? "Your existing password" : "Choose a password"}
+        hint={hasAccount ? "You already have an account with this e-mail." : "At least 10 characters."}
+        error={fe("password")}
+      >
+        <TextInput
+          id="password"
+          name="password"
+          type="password"
+          autoComplete={hasAccount ? "current-password" : "new-password"}
+          required
+          aria-invalid={!!fe("password")}
+        />
       </Field>
       {!hasAccount && (
         <Field id="confirm" label="Password again" error={fe("confirm")}>
-          <TextInput id="confirm" name="confirm" type="password" autoComplete="new-password" required aria-invalid={!!fe("confirm")} />
+          <TextInput
+            id="confirm"
+            name="confirm"
+            type="password"
+            autoComplete="new-password"
+            required
+            aria-invalid={!!fe("confirm")}
+          />
         </Field>
       )}
       <p aria-live="polite" className="text-xs font-medium text-bad" data-testid="accept-error">

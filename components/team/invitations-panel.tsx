@@ -7,7 +7,7 @@ import { Button } from "@/components/ui/button";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import type { Role } from "@/db/schema";
-import { formatWhen } from "@/lib/designs/when";
+import { formatWhen } from "@/lib/saved-designs/when";
 
 export type InvitationRow = {
   id: string;
@@ -24,8 +24,17 @@ const tone = { pending: "signal", accepted: "good", revoked: "neutral", expired:
 type Message = { tone: "ok" | "bad"; text: string; link?: string } | null;
 
 async function call(url: string, method: string, body?: unknown) {
-  const res = await fetch(url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
-  const data = (await res.json().catch(() => ({}))) as { message?: string; fieldErrors?: Record<string, string[]>; link?: string; teamName?: string };
+  const res = await fetch(url, {
+    method,
+    headers: { "content-type": "application/json" },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  const data = (await res.json().catch(() => ({}))) as {
+    message?: string;
+    fieldErrors?: Record<string, string[]>;
+    link?: string;
+    teamName?: string;
+  };
   return { ok: res.ok, status: res.status, data };
 }
 
@@ -44,7 +53,10 @@ export function InvitationsPanel({ invitations }: { invitations: InvitationRow[]
     setBusy(true);
     setMessage(null);
     setFieldErrors({});
-    const body = mode === "team" ? { email: form.get("email"), newTeam: form.get("newTeam") } : { email: form.get("email"), role: form.get("role") };
+    const body =
+      mode === "team"
+        ? { email: form.get("email"), newTeam: form.get("newTeam") }
+        : { email: form.get("email"), role: form.get("role") };
     const r = await call("/api/invitations", "POST", body);
     setBusy(false);
     if (!r.ok) {
@@ -55,7 +67,10 @@ export function InvitationsPanel({ invitations }: { invitations: InvitationRow[]
     target.reset();
     setMessage({
       tone: "ok",
-      text: mode === "team" ? `Team “${r.data.teamName}” started; its first owner has been mailed a single-use link.` : "Invitation mailed. The link works once and expires in 7 days.",
+      text:
+        mode === "team"
+          ? `Team “${r.data.teamName}” started; its first owner has been mailed a single-use link.`
+          : "Invitation mailed. The link works once and expires in 7 days.",
       link: r.data.link,
     });
     router.refresh();
@@ -64,14 +79,22 @@ export function InvitationsPanel({ invitations }: { invitations: InvitationRow[]
   async function revoke(inv: InvitationRow) {
     setMessage(null);
     const r = await call(`/api/invitations/${inv.id}`, "DELETE");
-    setMessage(r.ok ? { tone: "ok", text: `The invitation of ${inv.email} is revoked; its link no longer works.` } : { tone: "bad", text: r.data.message ?? `Refused (${r.status}).` });
+    setMessage(
+      r.ok
+        ? { tone: "ok", text: `The invitation of ${inv.email} is revoked; its link no longer works.` }
+        : { tone: "bad", text: r.data.message ?? `Refused (${r.status}).` },
+    );
     router.refresh();
   }
 
   const fe = (k: string) => fieldErrors[k]?.join("; ");
   return (
     <Panel title="Invitations">
-      <form onSubmit={invite} className="mb-4 grid grid-cols-1 gap-3 md:grid-cols-[auto_1fr_1fr_auto] md:items-start" aria-label="Invite">
+      <form
+        onSubmit={invite}
+        className="mb-4 grid grid-cols-1 gap-3 md:grid-cols-[auto_1fr_1fr_auto] md:items-start"
+        aria-label="Invite"
+      >
         <Field id="invite-mode" label="Invite">
           <Select id="invite-mode" value={mode} onChange={(e) => setMode(e.target.value as "member" | "team")}>
             <option value="member">a member of this team</option>
@@ -103,7 +126,10 @@ export function InvitationsPanel({ invitations }: { invitations: InvitationRow[]
         {message?.text}
         {message?.link && (
           <span className="mt-1 block text-ink-muted">
-            Link (shown this once): <code className="break-all font-mono text-ink" data-testid="invitation-link">{message.link}</code>
+            Link (shown this once):{" "}
+            <code className="break-all font-mono text-ink" data-testid="invitation-link">
+              {message.link}
+            </code>
           </span>
         )}
       </div>
@@ -135,7 +161,12 @@ export function InvitationsPanel({ invitations }: { invitations: InvitationRow[]
                 <td className="py-1 pr-3 text-xs text-ink-muted">{formatWhen(i.expiresAt)}</td>
                 <td className="py-1 text-right">
                   {i.status === "pending" && (
-                    <Button variant="ghost" className="px-2 py-0.5 text-xs" onClick={() => revoke(i)} aria-label={`Revoke the invitation of ${i.email}`}>
+                    <Button
+                      variant="ghost"
+                      className="px-2 py-0.5 text-xs"
+                      onClick={() => revoke(i)}
+                      aria-label={`Revoke the invitation of ${i.email}`}
+                    >
                       Revoke
                     </Button>
                   )}

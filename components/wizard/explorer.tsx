@@ -51,7 +51,10 @@ export function Explorer({
 
   // Listed candidates plus the engine's decade-scale picks, which may lie outside the list.
   const byKey = useMemo(
-    () => new Map([...(result?.decadeScales ?? []), ...(result?.candidates ?? [])].map((c) => [candidateKey(c), c] as const)),
+    () =>
+      new Map(
+        [...(result?.decadeScales ?? []), ...(result?.candidates ?? [])].map((c) => [candidateKey(c), c] as const),
+      ),
     [result],
   );
   // A selection that is no longer listed falls back to the best of the front.
@@ -91,7 +94,10 @@ export function Explorer({
         <p className="text-xs text-ink-muted num" role="status" aria-live="polite" data-testid="solve-status">
           {busy ? (
             <span className="inline-flex items-center gap-1.5">
-              <span className="inline-block h-2.5 w-2.5 animate-spin rounded-full border-2 border-copper border-t-transparent" aria-hidden />
+              <span
+                className="inline-block h-2.5 w-2.5 animate-spin rounded-full border-2 border-copper border-t-transparent"
+                aria-hidden
+              />
               Solving…
             </span>
           ) : result ? (
@@ -103,8 +109,15 @@ export function Explorer({
       </div>
 
       {state.status === "invalid" && (
-        <div className="rounded-panel border border-bad/40 bg-bad/5 px-4 py-3 text-xs" data-testid="requirement-problems">
-          <p className="font-semibold text-bad">{result ? "The requirement has a problem; the results below are from the last complete one." : "The requirement is not complete yet."}</p>
+        <div
+          className="rounded-panel border border-bad/40 bg-bad/5 px-4 py-3 text-xs"
+          data-testid="requirement-problems"
+        >
+          <p className="font-semibold text-bad">
+            {result
+              ? "The requirement has a problem; the results below are from the last complete one."
+              : "The requirement is not complete yet."}
+          </p>
           <ul className="mt-1 list-disc pl-4 text-ink-muted">
             {Object.values(state.fieldErrors)
               .flat()
@@ -119,9 +132,24 @@ export function Explorer({
 
       {result && req && (
         <>
-          <Results result={result} selected={selected} setSelected={setSelected} pinned={pinned} setPinned={setPinned} />
+          <Results
+            result={result}
+            selected={selected}
+            setSelected={setSelected}
+            pinned={pinned}
+            setPinned={setPinned}
+          />
           <Panel title="Save">
-            <SavePanel requirement={req} candidate={candidate} canSave={canSave} name={name} setName={setName} project={project} setProject={setProject} onSaved={onSaved} />
+            <SavePanel
+              requirement={req}
+              candidate={candidate}
+              canSave={canSave}
+              name={name}
+              setName={setName}
+              project={project}
+              setProject={setProject}
+              onSaved={onSaved}
+            />
           </Panel>
         </>
       )}
@@ -147,115 +175,141 @@ const Results = memo(function Results({
   const listed = result.candidates;
   const feasibleListed = result.candidates.filter((c) => c.feasible).length;
   const choice = selected ? choiceFromKey(selected) : null;
-  const listedKeys = useMemo(() => new Set([...(result.decadeScales ?? []), ...result.candidates].map(candidateKey)), [result]);
-  const pinnedChoices = useMemo(() => pinned.map(choiceFromKey).filter((c): c is NonNullable<typeof c> => c !== null), [pinned]);
+  const listedKeys = useMemo(
+    () => new Set([...(result.decadeScales ?? []), ...result.candidates].map(candidateKey)),
+    [result],
+  );
+  const pinnedChoices = useMemo(
+    () => pinned.map(choiceFromKey).filter((c): c is NonNullable<typeof c> => c !== null),
+    [pinned],
+  );
   return (
     <>
-          {req.readout.kind === "meter" && (
-            <div className="flex flex-wrap items-center gap-2 text-xs" role="group" aria-label="Decade scale factors" data-testid="decade-scales">
-              <span className="text-ink-muted">Read straight off the meter at a decade scale factor:</span>
-              {decades.map((d) => {
-                const hit = (result.decadeScales ?? []).find((c) => Math.abs(c.transimpedanceVPerA - d.vPerA) <= 1e-6 * d.vPerA);
-                const key = hit ? candidateKey(hit) : null;
-                return (
-                  <button
-                    key={d.vPerA}
-                    type="button"
-                    disabled={!hit}
-                    aria-pressed={key !== null && selected === key}
-                    onClick={() => key && setSelected(key)}
-                    title={hit ? `Select ${formatSI(hit.shuntOhms, "Ω")} × ${hit.gain}` : "No feasible pair gives exactly this scale factor"}
-                    className={`rounded border px-2 py-0.5 disabled:cursor-not-allowed disabled:opacity-50 ${key !== null && selected === key ? "border-copper bg-copper-soft text-copper-strong" : "border-line hover:bg-sunken"}`}
-                  >
-                    {d.label}{" "}
-                    <span className="text-ink-faint num">{hit ? `${formatSI(hit.shuntOhms, "Ω")} × ${Number(hit.gain.toPrecision(4))}` : "none feasible"}</span>
-                  </button>
-                );
-              })}
-            </div>
-          )}
-
-          <Panel
-            title="Trade-off: burden against low-current error"
-            actions={
-              feasibleListed < result.feasibleCount ? (
-                <span className="text-2xs text-ink-faint num">
-                  showing the best {feasibleListed} of {result.feasibleCount} feasible (raise “Candidates listed”)
+      {req.readout.kind === "meter" && (
+        <div
+          className="flex flex-wrap items-center gap-2 text-xs"
+          role="group"
+          aria-label="Decade scale factors"
+          data-testid="decade-scales"
+        >
+          <span className="text-ink-muted">Read straight off the meter at a decade scale factor:</span>
+          {decades.map((d) => {
+            const hit = (result.decadeScales ?? []).find(
+              (c) => Math.abs(c.transimpedanceVPerA - d.vPerA) <= 1e-6 * d.vPerA,
+            );
+            const key = hit ? candidateKey(hit) : null;
+            return (
+              <button
+                key={d.vPerA}
+                type="button"
+                disabled={!hit}
+                aria-pressed={key !== null && selected === key}
+                onClick={() => key && setSelected(key)}
+                title={
+                  hit
+                    ? `Select ${formatSI(hit.shuntOhms, "Ω")} × ${hit.gain}`
+                    : "No feasible pair gives exactly this scale factor"
+                }
+                className={`rounded border px-2 py-0.5 disabled:cursor-not-allowed disabled:opacity-50 ${key !== null && selected === key ? "border-copper bg-copper-soft text-copper-strong" : "border-line hover:bg-sunken"}`}
+              >
+                {d.label}{" "}
+                <span className="text-ink-faint num">
+                  {hit ? `${formatSI(hit.shuntOhms, "Ω")} × ${Number(hit.gain.toPrecision(4))}` : "none feasible"}
                 </span>
-              ) : undefined
-            }
-          >
-            {result.feasibleCount > 0 ? (
-              <TradeOffChart
-                candidates={listed}
-                selected={selected}
-                pinned={pinned}
-                onSelect={setSelected}
-                dropMaxV={req.drop.max}
-              />
-            ) : (
-              <p className="text-sm text-ink-muted" data-testid="no-feasible">
-                No single shunt and gain meets every constraint across {formatSI(req.current.min, "A")} to {formatSI(req.current.max, "A")}.{" "}
-                {result.rangePlan ? "A plan with several ranges does; see below." : "Relax the drop, the counts at the minimum current or the accuracy target, or widen the shunt bounds and gains."}
-              </p>
-            )}
-          </Panel>
+              </button>
+            );
+          })}
+        </div>
+      )}
 
-          {result.rangePlan && (
-            <Panel title={`Range plan: ${result.rangePlan.ranges.length} ranges`}>
-              <div className="flex flex-col gap-3 text-xs">
-                <RangePlanChart plan={result.rangePlan} minA={req.current.min} maxA={req.current.max} />
-                <table className="w-full">
-                  <thead className="text-left text-2xs uppercase tracking-wide text-ink-muted">
-                    <tr>
-                      <th className="py-1">Range</th>
-                      <th>Shunt</th>
-                      <th>Gain</th>
-                      <th>Covers</th>
-                      <th>Drop at its top</th>
-                      <th>Counts at its bottom</th>
-                      <th>Settling</th>
-                    </tr>
-                  </thead>
-                  <tbody className="num">
-                    {result.rangePlan.ranges.map((r, i) => (
-                      <tr key={i} className="border-t border-line">
-                        <td className="py-1">{i + 1}</td>
-                        <td>{formatSI(r.shuntOhms, "Ω")}</td>
-                        <td>{Number(r.gain.toPrecision(4))}</td>
-                        <td>
-                          {formatSI(r.minA, "A")} – {formatSI(r.maxA, "A")}
-                        </td>
-                        <td>{formatSI(r.burdenAtTopV, "V")}</td>
-                        <td>{Number(r.countsAtBottom.toPrecision(3))}</td>
-                        <td>{formatSI(r.settlingS, "s")}</td>
-                      </tr>
-                    ))}
-                  </tbody>
-                </table>
-                <p className="text-ink-muted">{result.rangePlan.switchOver}</p>
-                <p className="text-ink-muted">{result.rangePlan.adds}</p>
-              </div>
-            </Panel>
-          )}
+      <Panel
+        title="Trade-off: burden against low-current error"
+        actions={
+          feasibleListed < result.feasibleCount ? (
+            <span className="text-2xs text-ink-faint num">
+              showing the best {feasibleListed} of {result.feasibleCount} feasible (raise “Candidates listed”)
+            </span>
+          ) : undefined
+        }
+      >
+        {result.feasibleCount > 0 ? (
+          <TradeOffChart
+            candidates={listed}
+            selected={selected}
+            pinned={pinned}
+            onSelect={setSelected}
+            dropMaxV={req.drop.max}
+          />
+        ) : (
+          <p className="text-sm text-ink-muted" data-testid="no-feasible">
+            No single shunt and gain meets every constraint across {formatSI(req.current.min, "A")} to{" "}
+            {formatSI(req.current.max, "A")}.{" "}
+            {result.rangePlan
+              ? "A plan with several ranges does; see below."
+              : "Relax the drop, the counts at the minimum current or the accuracy target, or widen the shunt bounds and gains."}
+          </p>
+        )}
+      </Panel>
 
-          <Panel title="Why pairs were refused">
-            <Rejections rejected={result.rejected} evaluated={result.evaluated} feasibleCount={result.feasibleCount} />
-          </Panel>
+      {result.rangePlan && (
+        <Panel title={`Range plan: ${result.rangePlan.ranges.length} ranges`}>
+          <div className="flex flex-col gap-3 text-xs">
+            <RangePlanChart plan={result.rangePlan} minA={req.current.min} maxA={req.current.max} />
+            <table className="w-full">
+              <thead className="text-left text-2xs uppercase tracking-wide text-ink-muted">
+                <tr>
+                  <th className="py-1">Range</th>
+                  <th>Shunt</th>
+                  <th>Gain</th>
+                  <th>Covers</th>
+                  <th>Drop at its top</th>
+                  <th>Counts at its bottom</th>
+                  <th>Settling</th>
+                </tr>
+              </thead>
+              <tbody className="num">
+                {result.rangePlan.ranges.map((r, i) => (
+                  <tr key={i} className="border-t border-line">
+                    <td className="py-1">{i + 1}</td>
+                    <td>{formatSI(r.shuntOhms, "Ω")}</td>
+                    <td>{Number(r.gain.toPrecision(4))}</td>
+                    <td>
+                      {formatSI(r.minA, "A")} – {formatSI(r.maxA, "A")}
+                    </td>
+                    <td>{formatSI(r.burdenAtTopV, "V")}</td>
+                    <td>{Number(r.countsAtBottom.toPrecision(3))}</td>
+                    <td>{formatSI(r.settlingS, "s")}</td>
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+            <p className="text-ink-muted">{result.rangePlan.switchOver}</p>
+            <p className="text-ink-muted">{result.rangePlan.adds}</p>
+          </div>
+        </Panel>
+      )}
 
-          <Panel title="Candidate table">
-            <CandidateTable
-              candidates={listed}
-              selected={selected}
-              onSelect={setSelected}
-              pinned={pinned}
-              onTogglePin={(k) => setPinned(pinned.includes(k) ? pinned.filter((x) => x !== k) : [...pinned, k].slice(0, 3))}
-              transimpedanceFilter={null}
-            />
-            <p className="mt-2 text-2xs text-ink-faint">{result.ranking}</p>
-          </Panel>
+      <Panel title="Why pairs were refused">
+        <Rejections rejected={result.rejected} evaluated={result.evaluated} feasibleCount={result.feasibleCount} />
+      </Panel>
 
-          {choice && selected && listedKeys.has(selected) && <CandidateStudy req={req} choice={choice} pinned={pinnedChoices} />}
+      <Panel title="Candidate table">
+        <CandidateTable
+          candidates={listed}
+          selected={selected}
+          onSelect={setSelected}
+          pinned={pinned}
+          onTogglePin={(k) =>
+            setPinned(pinned.includes(k) ? pinned.filter((x) => x !== k) : [...pinned, k].slice(0, 3))
+          }
+          transimpedanceFilter={null}
+        />
+        <p className="mt-2 text-2xs text-ink-faint">{result.ranking}</p>
+      </Panel>
+
+      {choice && selected && listedKeys.has(selected) && (
+        <CandidateStudy req={req} choice={choice} pinned={pinnedChoices} />
+      )}
     </>
   );
 });

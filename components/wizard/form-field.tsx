@@ -107,7 +107,12 @@ export function SelectField({
   const error = errorText(formState.errors, name);
   return (
     <Field id={id} label={label} hint={hint} error={error}>
-      <Select id={id} {...register(name as never)} aria-invalid={error ? true : undefined} aria-describedby={`${id}-error`}>
+      <Select
+        id={id}
+        {...register(name as never)}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={`${id}-error`}
+      >
         {options.map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}
@@ -124,7 +129,17 @@ const pill = (active: boolean) =>
   }`;
 
 /** A segmented group of radio buttons (one tab stop, arrows move). */
-function Segmented({ legend, options, isActive, input }: { legend: string; options: { value: string; label: string }[]; isActive: (v: string) => boolean; input: (v: string) => ReactNode }) {
+function Segmented({
+  legend,
+  options,
+  isActive,
+  input,
+}: {
+  legend: string;
+  options: { value: string; label: string }[];
+  isActive: (v: string) => boolean;
+  input: (v: string) => ReactNode;
+}) {
   return (
     <fieldset className="flex flex-col gap-1">
       <legend className="mb-1 text-xs font-medium text-ink-muted">{legend}</legend>
@@ -141,21 +156,57 @@ function Segmented({ legend, options, isActive, input }: { legend: string; optio
 }
 
 /** A small two- or three-way choice held outside the form (a mode of the screen). */
-export function Choice<T extends string>({ legend, name, value, options, onChange }: { legend: string; name: string; value: T; options: { value: T; label: string }[]; onChange: (v: T) => void }) {
+export function Choice<T extends string>({
+  legend,
+  name,
+  value,
+  options,
+  onChange,
+}: {
+  legend: string;
+  name: string;
+  value: T;
+  options: { value: T; label: string }[];
+  onChange: (v: T) => void;
+}) {
   return (
     <Segmented
       legend={legend}
       options={options}
       isActive={(v) => v === value}
-      input={(v) => <input type="radio" className="sr-only" name={name} value={v} checked={v === value} onChange={() => onChange(v as T)} />}
+      input={(v) => (
+        <input
+          type="radio"
+          className="sr-only"
+          name={name}
+          value={v}
+          checked={v === value}
+          onChange={() => onChange(v as T)}
+        />
+      )}
     />
   );
 }
 
 /** The same choice bound to a form field (react-hook-form handles the radio group). */
-export function RadioField({ legend, name, options }: { legend: string; name: string; options: { value: string; label: string }[] }) {
+export function RadioField({
+  legend,
+  name,
+  options,
+}: {
+  legend: string;
+  name: string;
+  options: { value: string; label: string }[];
+}) {
   const { register } = useFormContext<WizardValues>();
   // useWatch re-renders this group only, not the whole form, on each keystroke elsewhere.
   const current = useWatch({ name: name as never }) as unknown as string;
-  return <Segmented legend={legend} options={options} isActive={(v) => v === current} input={(v) => <input type="radio" className="sr-only" value={v} {...register(name as never)} />} />;
+  return (
+    <Segmented
+      legend={legend}
+      options={options}
+      isActive={(v) => v === current}
+      input={(v) => <input type="radio" className="sr-only" value={v} {...register(name as never)} />}
+    />
+  );
 }

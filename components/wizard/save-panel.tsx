@@ -40,8 +40,11 @@ export function SavePanel({
           choice: { shuntOhms: candidate!.shuntOhms, gain: candidate!.gain },
         }),
       });
-      const body = (await res.json().catch(() => ({ message: `The server answered ${res.status}` }))) as { id?: string } & SaveError;
-      if (!res.ok || !body.id) throw { message: body.message ?? `The server answered ${res.status}`, fieldErrors: body.fieldErrors };
+      const body = (await res.json().catch(() => ({ message: `The server answered ${res.status}` }))) as {
+        id?: string;
+      } & SaveError;
+      if (!res.ok || !body.id)
+        throw { message: body.message ?? `The server answered ${res.status}`, fieldErrors: body.fieldErrors };
       return { id: body.id };
     },
     onSuccess: ({ id }) => {
@@ -52,7 +55,11 @@ export function SavePanel({
   const fe = save.error?.fieldErrors ?? {};
   const nameError = name.trim() === "" && save.isError ? "Give the design a name" : fe.name?.join("; ");
   if (!canSave) {
-    return <p className="text-xs text-ink-muted">Reviewers and makers explore here; only owners and designers save designs.</p>;
+    return (
+      <p className="text-xs text-ink-muted">
+        Reviewers and makers explore here; only owners and designers save designs.
+      </p>
+    );
   }
   return (
     <form
@@ -70,18 +77,39 @@ export function SavePanel({
     >
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
         <Field id="save-name" label="Design name" error={nameError}>
-          <TextInput id="save-name" value={name} onChange={(e) => setName(e.target.value)} placeholder="Logger supply monitor" aria-invalid={nameError ? true : undefined} aria-describedby="save-name-error" maxLength={200} />
+          <TextInput
+            id="save-name"
+            value={name}
+            onChange={(e) => setName(e.target.value)}
+            placeholder="Logger supply monitor"
+            aria-invalid={nameError ? true : undefined}
+            aria-describedby="save-name-error"
+            maxLength={200}
+          />
         </Field>
         <Field id="save-project" label="Project (optional)" error={fe.project?.join("; ")}>
-          <TextInput id="save-project" value={project} onChange={(e) => setProject(e.target.value)} placeholder="Soil-moisture logger" aria-describedby="save-project-error" maxLength={200} />
+          <TextInput
+            id="save-project"
+            value={project}
+            onChange={(e) => setProject(e.target.value)}
+            placeholder="Soil-moisture logger"
+            aria-describedby="save-project-error"
+            maxLength={200}
+          />
         </Field>
       </div>
       <div className="flex flex-wrap items-center gap-3">
         <Button type="submit" variant="primary" disabled={!candidate || !candidate.feasible || save.isPending}>
-          {save.isPending ? "Saving…" : candidate ? `Save ${formatSI(candidate.shuntOhms, "Ω")} × ${Number(candidate.gain.toPrecision(4))}` : "Save"}
+          {save.isPending
+            ? "Saving…"
+            : candidate
+              ? `Save ${formatSI(candidate.shuntOhms, "Ω")} × ${Number(candidate.gain.toPrecision(4))}`
+              : "Save"}
         </Button>
         {!candidate && <span className="text-xs text-ink-muted">Select a candidate first.</span>}
-        {candidate && !candidate.feasible && <span className="text-xs text-bad">Only a feasible candidate can be saved.</span>}
+        {candidate && !candidate.feasible && (
+          <span className="text-xs text-bad">Only a feasible candidate can be saved.</span>
+        )}
         <p aria-live="polite" className="text-xs text-bad" data-testid="save-error">
           {save.isError && !nameError ? save.error.message : ""}
         </p>

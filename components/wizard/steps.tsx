@@ -5,7 +5,12 @@ import { useFormContext, useWatch } from "react-hook-form";
 import { seriesNames } from "@/lib/design";
 import type { WizardValues } from "@/lib/wizard/form-values";
 import { LibraryPicker, useLibrary } from "./library-picker";
-import { libraryAmplifierValues, libraryShuntValues, type LibraryAmplifierRow, type LibraryShuntRow } from "@/lib/wizard/library";
+import {
+  libraryAmplifierValues,
+  libraryShuntValues,
+  type LibraryAmplifierRow,
+  type LibraryShuntRow,
+} from "@/lib/wizard/library";
 import { Choice, FormField, RadioField, SelectField } from "./form-field";
 
 export type StepKey = "span" | "supply" | "readout" | "shunt" | "amplifier" | "temperature";
@@ -13,12 +18,42 @@ export type StepKey = "span" | "supply" | "readout" | "shunt" | "amplifier" | "t
 export type StepDef = { key: StepKey; title: string; blurb: string; fields: string[] };
 
 export const steps: StepDef[] = [
-  { key: "span", title: "Current span", blurb: "The smallest and largest current the front end must read.", fields: ["current", "load"] },
-  { key: "supply", title: "Supply and drop", blurb: "How much of the supply the shunt may take from the load.", fields: ["supply", "drop"] },
-  { key: "readout", title: "Readout", blurb: "What reads the amplifier's output, and how well.", fields: ["readout", "resolution", "accuracy"] },
-  { key: "shunt", title: "Shunt", blurb: "The resistor values and ratings the sweep may use.", fields: ["shunt", "limit"] },
-  { key: "amplifier", title: "Amplifier", blurb: "Gains to sweep and the amplifier's imperfections.", fields: ["amplifier"] },
-  { key: "temperature", title: "Temperature", blurb: "The ambient range the figures must hold over.", fields: ["temperature"] },
+  {
+    key: "span",
+    title: "Current span",
+    blurb: "The smallest and largest current the front end must read.",
+    fields: ["current", "load"],
+  },
+  {
+    key: "supply",
+    title: "Supply and drop",
+    blurb: "How much of the supply the shunt may take from the load.",
+    fields: ["supply", "drop"],
+  },
+  {
+    key: "readout",
+    title: "Readout",
+    blurb: "What reads the amplifier's output, and how well.",
+    fields: ["readout", "resolution", "accuracy"],
+  },
+  {
+    key: "shunt",
+    title: "Shunt",
+    blurb: "The resistor values and ratings the sweep may use.",
+    fields: ["shunt", "limit"],
+  },
+  {
+    key: "amplifier",
+    title: "Amplifier",
+    blurb: "Gains to sweep and the amplifier's imperfections.",
+    fields: ["amplifier"],
+  },
+  {
+    key: "temperature",
+    title: "Temperature",
+    blurb: "The ambient range the figures must hold over.",
+    fields: ["temperature"],
+  },
 ];
 
 const loadOptions = [
@@ -28,22 +63,58 @@ const loadOptions = [
 ];
 
 /** Plain numbers typed into the percent box mean percent. */
-const asPercent = (v: unknown) => (typeof v === "string" && /^\s*[+-]?(\d+\.?\d*|\.\d+)\s*$/.test(v) ? `${v.trim()} %` : typeof v === "string" && v.trim() === "" ? undefined : v);
+const asPercent = (v: unknown) =>
+  typeof v === "string" && /^\s*[+-]?(\d+\.?\d*|\.\d+)\s*$/.test(v)
+    ? `${v.trim()} %`
+    : typeof v === "string" && v.trim() === ""
+      ? undefined
+      : v;
 
 export function SpanStep({ live }: { live: LiveErrors }) {
   return (
     <div className="grid grid-cols-2 gap-3">
-      <FormField name="current.min" label="Minimum current" placeholder="3 uA" hint="e.g. 3 uA (sleep current)" extraError={live("current.min")} />
-      <FormField name="current.max" label="Maximum current" placeholder="180 mA" hint="e.g. 180 mA (peak)" extraError={live("current.max")} />
-      <FormField name="current.typical" label="Typical current (optional)" kind="optional" placeholder="20 mA" hint="Adds the error at this current to the figures" />
+      <FormField
+        name="current.min"
+        label="Minimum current"
+        placeholder="3 uA"
+        hint="e.g. 3 uA (sleep current)"
+        extraError={live("current.min")}
+      />
+      <FormField
+        name="current.max"
+        label="Maximum current"
+        placeholder="180 mA"
+        hint="e.g. 180 mA (peak)"
+        extraError={live("current.max")}
+      />
+      <FormField
+        name="current.typical"
+        label="Typical current (optional)"
+        kind="optional"
+        placeholder="20 mA"
+        hint="Adds the error at this current to the figures"
+      />
       <div className="col-span-2">
-        <SelectField name="load.model" label="Load behaviour" options={loadOptions} hint="Decides how the drop changes the current itself" />
+        <SelectField
+          name="load.model"
+          label="Load behaviour"
+          options={loadOptions}
+          hint="Decides how the drop changes the current itself"
+        />
       </div>
     </div>
   );
 }
 
-export function SupplyStep({ live, dropMode, setDropMode }: { live: LiveErrors; dropMode: "volts" | "share"; setDropMode: (m: "volts" | "share") => void }) {
+export function SupplyStep({
+  live,
+  dropMode,
+  setDropMode,
+}: {
+  live: LiveErrors;
+  dropMode: "volts" | "share";
+  setDropMode: (m: "volts" | "share") => void;
+}) {
   return (
     <div className="grid grid-cols-2 gap-3">
       <FormField name="supply.voltage" label="Supply voltage" placeholder="3.0 V" extraError={live("supply.voltage")} />
@@ -67,12 +138,32 @@ export function SupplyStep({ live, dropMode, setDropMode }: { live: LiveErrors; 
           ]}
         />
         {dropMode === "volts" ? (
-          <FormField name="drop.max" label="Allowed drop" placeholder="60 mV" hint="Largest voltage the shunt may take at the maximum current" extraError={live("drop.max")} />
+          <FormField
+            name="drop.max"
+            label="Allowed drop"
+            placeholder="60 mV"
+            hint="Largest voltage the shunt may take at the maximum current"
+            extraError={live("drop.max")}
+          />
         ) : (
-          <FormField name="drop.fraction" label="Allowed drop (share of supply)" transform={asPercent} placeholder="2 %" hint="A percentage of the supply voltage, e.g. 2 %" extraError={live("drop.fraction")} />
+          <FormField
+            name="drop.fraction"
+            label="Allowed drop (share of supply)"
+            transform={asPercent}
+            placeholder="2 %"
+            hint="A percentage of the supply voltage, e.g. 2 %"
+            extraError={live("drop.fraction")}
+          />
         )}
       </div>
-      <FormField name="drop.loadMin" label="Minimum load voltage (optional)" kind="optional" placeholder="2.7 V" hint="The lowest voltage the load still works at" extraError={live("drop.loadMin")} />
+      <FormField
+        name="drop.loadMin"
+        label="Minimum load voltage (optional)"
+        kind="optional"
+        placeholder="2.7 V"
+        hint="The lowest voltage the load still works at"
+        extraError={live("drop.loadMin")}
+      />
     </div>
   );
 }
@@ -93,19 +184,70 @@ export function ReadoutStep({ live }: { live: LiveErrors }) {
       </div>
       {kind === "meter" ? (
         <>
-          <FormField name="readout.fullScale" label="Meter range (full scale)" placeholder="200 mV" extraError={live("readout.fullScale")} />
-          <FormField name="readout.counts" label="Meter counts" kind="number" placeholder="2000" hint="Counts across the range, e.g. 2000" extraError={live("readout.counts")} />
+          <FormField
+            name="readout.fullScale"
+            label="Meter range (full scale)"
+            placeholder="200 mV"
+            extraError={live("readout.fullScale")}
+          />
+          <FormField
+            name="readout.counts"
+            label="Meter counts"
+            kind="number"
+            placeholder="2000"
+            hint="Counts across the range, e.g. 2000"
+            extraError={live("readout.counts")}
+          />
         </>
       ) : (
         <>
-          <FormField name="readout.fullScale" label="ADC full scale" placeholder="2.5 V" extraError={live("readout.fullScale")} />
-          <FormField name="readout.bits" label="ADC resolution (bits)" kind="number" placeholder="12" extraError={live("readout.bits")} />
+          <FormField
+            name="readout.fullScale"
+            label="ADC full scale"
+            placeholder="2.5 V"
+            extraError={live("readout.fullScale")}
+          />
+          <FormField
+            name="readout.bits"
+            label="ADC resolution (bits)"
+            kind="number"
+            placeholder="12"
+            extraError={live("readout.bits")}
+          />
         </>
       )}
-      <FormField name="resolution.countsAtMin" label="Counts wanted at minimum current" kind="number" placeholder="10" hint="Readout steps the smallest current must span" extraError={live("resolution.countsAtMin")} />
-      <FormField name="accuracy.percent" label="Accuracy target" kind="quantity" suffix="% of reading" placeholder="2" extraError={live("accuracy.percent")} />
-      <FormField name="accuracy.bandMin" label="Accuracy band from (optional)" kind="optional" placeholder="18 mA" hint="Default: the larger of the minimum and a tenth of the maximum" extraError={live("accuracy.bandMin")} />
-      <FormField name="accuracy.bandMax" label="Accuracy band to (optional)" kind="optional" placeholder="180 mA" hint="Default: the maximum current" extraError={live("accuracy.bandMax")} />
+      <FormField
+        name="resolution.countsAtMin"
+        label="Counts wanted at minimum current"
+        kind="number"
+        placeholder="10"
+        hint="Readout steps the smallest current must span"
+        extraError={live("resolution.countsAtMin")}
+      />
+      <FormField
+        name="accuracy.percent"
+        label="Accuracy target"
+        kind="quantity"
+        suffix="% of reading"
+        placeholder="2"
+        extraError={live("accuracy.percent")}
+      />
+      <FormField
+        name="accuracy.bandMin"
+        label="Accuracy band from (optional)"
+        kind="optional"
+        placeholder="18 mA"
+        hint="Default: the larger of the minimum and a tenth of the maximum"
+        extraError={live("accuracy.bandMin")}
+      />
+      <FormField
+        name="accuracy.bandMax"
+        label="Accuracy band to (optional)"
+        kind="optional"
+        placeholder="180 mA"
+        hint="Default: the maximum current"
+        extraError={live("accuracy.bandMax")}
+      />
     </div>
   );
 }
@@ -133,18 +275,52 @@ export function ShuntStep({ live }: { live: LiveErrors }) {
         noneText="— Type the shunt family below —"
         emptyText="No shunt families in the library yet"
         optionLabel={(s) => `${s.name}${s.fourTerminal ? " (4-terminal)" : ""}`}
-        note={library.isError && <p className="text-2xs text-ink-faint">The team library could not be read; type the shunt family below.</p>}
+        note={
+          library.isError && (
+            <p className="text-2xs text-ink-faint">The team library could not be read; type the shunt family below.</p>
+          )
+        }
       />
-      <SelectField name="shunt.series" label="E-series (IEC 60063)" options={seriesNames.map((s) => ({ value: s, label: s }))} />
-      <FormField name="shunt.tolerance" label="Shunt tolerance" placeholder="0.5 %" extraError={live("shunt.tolerance")} />
+      <SelectField
+        name="shunt.series"
+        label="E-series (IEC 60063)"
+        options={seriesNames.map((s) => ({ value: s, label: s }))}
+      />
+      <FormField
+        name="shunt.tolerance"
+        label="Shunt tolerance"
+        placeholder="0.5 %"
+        extraError={live("shunt.tolerance")}
+      />
       <FormField name="shunt.min" label="Smallest shunt" placeholder="1 mohm" extraError={live("shunt.min")} />
       <FormField name="shunt.max" label="Largest shunt" placeholder="1 kohm" extraError={live("shunt.max")} />
       <FormField name="shunt.tempco" label="Shunt tempco" placeholder="50 ppm/K" extraError={live("shunt.tempco")} />
-      <FormField name="shunt.derating" label="Share of rating used" kind="number" placeholder="0.5" hint="0.5 uses at most half the rating" extraError={live("shunt.derating")} />
+      <FormField
+        name="shunt.derating"
+        label="Share of rating used"
+        kind="number"
+        placeholder="0.5"
+        hint="0.5 uses at most half the rating"
+        extraError={live("shunt.derating")}
+      />
       <div className="col-span-2">
-        <FormField name="shunt.ratings" label="Power ratings on offer" kind="list" placeholder="0.125 W, 0.25 W, 0.5 W, 1 W" hint="Separate with commas" extraError={live("shunt.ratings")} />
+        <FormField
+          name="shunt.ratings"
+          label="Power ratings on offer"
+          kind="list"
+          placeholder="0.125 W, 0.25 W, 0.5 W, 1 W"
+          hint="Separate with commas"
+          extraError={live("shunt.ratings")}
+        />
       </div>
-      <FormField name="limit" label="Candidates listed" kind="number" placeholder="200" hint="The front, then the best of the rest" extraError={live("limit")} />
+      <FormField
+        name="limit"
+        label="Candidates listed"
+        kind="number"
+        placeholder="200"
+        hint="The front, then the best of the rest"
+        extraError={live("limit")}
+      />
     </div>
   );
 }
@@ -175,7 +351,8 @@ export function AmplifierStep({
     // Let the gain inputs of the chosen mode mount before filling them.
     setTimeout(() => {
       for (const [k, val] of Object.entries(v)) {
-        if (val !== undefined) setValue(`amplifier.${k}` as never, val as never, { shouldValidate: true, shouldDirty: true });
+        if (val !== undefined)
+          setValue(`amplifier.${k}` as never, val as never, { shouldValidate: true, shouldDirty: true });
       }
     }, 0);
     setPartName(row.name);
@@ -214,28 +391,103 @@ export function AmplifierStep({
       </div>
       {gainMode === "list" ? (
         <div className="col-span-2">
-          <FormField name="amplifier.gains" label="Gains" kind="numberList" placeholder="10, 20, 50, 100, 200" hint="Separate with commas" extraError={live("amplifier.gains")} />
+          <FormField
+            name="amplifier.gains"
+            label="Gains"
+            kind="numberList"
+            placeholder="10, 20, 50, 100, 200"
+            hint="Separate with commas"
+            extraError={live("amplifier.gains")}
+          />
         </div>
       ) : (
         <>
-          <SelectField name="amplifier.gainSet.series" label="Resistor series for Rf and Rg" options={seriesNames.map((s) => ({ value: s, label: s }))} />
+          <SelectField
+            name="amplifier.gainSet.series"
+            label="Resistor series for Rf and Rg"
+            options={seriesNames.map((s) => ({ value: s, label: s }))}
+          />
           <div className="grid grid-cols-2 gap-2">
-            <FormField name="amplifier.gainSet.min" label="Lowest gain" kind="number" placeholder="2" extraError={live("amplifier.gainSet.min")} />
-            <FormField name="amplifier.gainSet.max" label="Highest gain" kind="number" placeholder="1000" extraError={live("amplifier.gainSet.max")} />
+            <FormField
+              name="amplifier.gainSet.min"
+              label="Lowest gain"
+              kind="number"
+              placeholder="2"
+              extraError={live("amplifier.gainSet.min")}
+            />
+            <FormField
+              name="amplifier.gainSet.max"
+              label="Highest gain"
+              kind="number"
+              placeholder="1000"
+              extraError={live("amplifier.gainSet.max")}
+            />
           </div>
         </>
       )}
-      <FormField name="amplifier.offset" label="Input offset (at 25 °C)" placeholder="10 uV" extraError={live("amplifier.offset")} />
-      <FormField name="amplifier.offsetDrift" label="Offset drift" placeholder="0.1 uV/K" extraError={live("amplifier.offsetDrift")} />
-      <FormField name="amplifier.gainError" label="Gain error" placeholder="0.1 %" extraError={live("amplifier.gainError")} />
-      <FormField name="amplifier.gainDrift" label="Gain drift" placeholder="10 ppm/K" extraError={live("amplifier.gainDrift")} />
-      <FormField name="amplifier.biasCurrent" label="Input bias current" placeholder="20 nA" extraError={live("amplifier.biasCurrent")} />
-      <FormField name="amplifier.noiseDensity" label="Input noise density" placeholder="40 nV/rtHz" extraError={live("amplifier.noiseDensity")} />
+      <FormField
+        name="amplifier.offset"
+        label="Input offset (at 25 °C)"
+        placeholder="10 uV"
+        extraError={live("amplifier.offset")}
+      />
+      <FormField
+        name="amplifier.offsetDrift"
+        label="Offset drift"
+        placeholder="0.1 uV/K"
+        extraError={live("amplifier.offsetDrift")}
+      />
+      <FormField
+        name="amplifier.gainError"
+        label="Gain error"
+        placeholder="0.1 %"
+        extraError={live("amplifier.gainError")}
+      />
+      <FormField
+        name="amplifier.gainDrift"
+        label="Gain drift"
+        placeholder="10 ppm/K"
+        extraError={live("amplifier.gainDrift")}
+      />
+      <FormField
+        name="amplifier.biasCurrent"
+        label="Input bias current"
+        placeholder="20 nA"
+        extraError={live("amplifier.biasCurrent")}
+      />
+      <FormField
+        name="amplifier.noiseDensity"
+        label="Input noise density"
+        placeholder="40 nV/rtHz"
+        extraError={live("amplifier.noiseDensity")}
+      />
       <FormField name="amplifier.gbw" label="Gain-bandwidth" placeholder="2 MHz" extraError={live("amplifier.gbw")} />
-      <FormField name="amplifier.cmrrDb" label="CMRR (dB)" kind="number" placeholder="120" extraError={live("amplifier.cmrrDb")} />
-      <FormField name="amplifier.supply" label="Amplifier supply" placeholder="5 V" extraError={live("amplifier.supply")} />
-      <FormField name="amplifier.swingLow" label="Lowest output (above ground)" placeholder="10 mV" hint="0 V on a split supply" extraError={live("amplifier.swingLow")} />
-      <FormField name="amplifier.swingHigh" label="Output headroom below its supply" placeholder="50 mV" extraError={live("amplifier.swingHigh")} />
+      <FormField
+        name="amplifier.cmrrDb"
+        label="CMRR (dB)"
+        kind="number"
+        placeholder="120"
+        extraError={live("amplifier.cmrrDb")}
+      />
+      <FormField
+        name="amplifier.supply"
+        label="Amplifier supply"
+        placeholder="5 V"
+        extraError={live("amplifier.supply")}
+      />
+      <FormField
+        name="amplifier.swingLow"
+        label="Lowest output (above ground)"
+        placeholder="10 mV"
+        hint="0 V on a split supply"
+        extraError={live("amplifier.swingLow")}
+      />
+      <FormField
+        name="amplifier.swingHigh"
+        label="Output headroom below its supply"
+        placeholder="50 mV"
+        extraError={live("amplifier.swingHigh")}
+      />
     </div>
   );
 }
@@ -243,10 +495,21 @@ export function AmplifierStep({
 export function TemperatureStep({ live }: { live: LiveErrors }) {
   return (
     <div className="grid grid-cols-2 gap-3">
-      <FormField name="temperature.min" label="Lowest ambient temperature" placeholder="0 °C" extraError={live("temperature.min")} />
-      <FormField name="temperature.max" label="Highest ambient temperature" placeholder="70 °C" extraError={live("temperature.max")} />
+      <FormField
+        name="temperature.min"
+        label="Lowest ambient temperature"
+        placeholder="0 °C"
+        extraError={live("temperature.min")}
+      />
+      <FormField
+        name="temperature.max"
+        label="Highest ambient temperature"
+        placeholder="70 °C"
+        extraError={live("temperature.max")}
+      />
       <p className="col-span-2 text-2xs text-ink-faint">
-        Tolerances, offsets and tempcos are taken at 25 °C; the figures use the larger excursion from it, plus the shunt&apos;s own self-heating.
+        Tolerances, offsets and tempcos are taken at 25 °C; the figures use the larger excursion from it, plus the
+        shunt&apos;s own self-heating.
       </p>
     </div>
   );

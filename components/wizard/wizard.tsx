@@ -41,7 +41,11 @@ export function Wizard({ canSave }: { canSave: boolean }) {
     setDraft(loadDraft() ?? freshDraft());
   }, []);
   if (!draft) {
-    return <p className="text-ink-muted" role="status">Reading your draft…</p>;
+    return (
+      <p className="text-ink-muted" role="status">
+        Reading your draft…
+      </p>
+    );
   }
   const restart = (key: string) => {
     const d = freshDraft(key);
@@ -52,7 +56,15 @@ export function Wizard({ canSave }: { canSave: boolean }) {
   return <WizardForm key={generation} initial={draft} canSave={canSave} onRestart={restart} />;
 }
 
-function WizardForm({ initial, canSave, onRestart }: { initial: Draft; canSave: boolean; onRestart: (scenario: string) => void }) {
+function WizardForm({
+  initial,
+  canSave,
+  onRestart,
+}: {
+  initial: Draft;
+  canSave: boolean;
+  onRestart: (scenario: string) => void;
+}) {
   const methods = useForm<WizardValues>({
     resolver: zodResolver(requirementSchema) as unknown as Resolver<WizardValues>,
     defaultValues: deepMerge(readableDefaults, initial.values),
@@ -90,7 +102,19 @@ function WizardForm({ initial, canSave, onRestart }: { initial: Draft; canSave: 
   }, [dropMode, gainMode, request, getValues]);
 
   const persist = useCallback(
-    () => saveDraft({ version: 1, values: getValues(), step, dropMode, gainMode, partName, selected, pinned, name, project }),
+    () =>
+      saveDraft({
+        version: 1,
+        values: getValues(),
+        step,
+        dropMode,
+        gainMode,
+        partName,
+        selected,
+        pinned,
+        name,
+        project,
+      }),
     [getValues, step, dropMode, gainMode, partName, selected, pinned, name, project],
   );
   // Keep the draft on every change of the screen's own state and of the form's values.
@@ -106,7 +130,10 @@ function WizardForm({ initial, canSave, onRestart }: { initial: Draft; canSave: 
     };
   }, [watch, persist]);
 
-  const fieldErrors = useMemo(() => (solver.state.status === "invalid" ? solver.state.fieldErrors : {}), [solver.state]);
+  const fieldErrors = useMemo(
+    () => (solver.state.status === "invalid" ? solver.state.fieldErrors : {}),
+    [solver.state],
+  );
   const touched = formState.touchedFields as Record<string, unknown>;
   const live = useCallback(
     (path: string) => {
@@ -140,7 +167,15 @@ function WizardForm({ initial, canSave, onRestart }: { initial: Draft; canSave: 
       supply: <SupplyStep live={live} dropMode={dropMode} setDropMode={setDropMode} />,
       readout: <ReadoutStep live={live} />,
       shunt: <ShuntStep live={live} />,
-      amplifier: <AmplifierStep live={live} gainMode={gainMode} setGainMode={setGainMode} partName={partName} setPartName={setPartName} />,
+      amplifier: (
+        <AmplifierStep
+          live={live}
+          gainMode={gainMode}
+          setGainMode={setGainMode}
+          partName={partName}
+          setPartName={setPartName}
+        />
+      ),
       temperature: <TemperatureStep live={live} />,
     }),
     [live, dropMode, gainMode, partName],
@@ -168,7 +203,11 @@ function WizardForm({ initial, canSave, onRestart }: { initial: Draft; canSave: 
                     disabled={i > visited}
                     aria-current={i === step ? "step" : undefined}
                     className={`w-full border-b-2 px-1 py-2 text-center ${
-                      i === step ? "border-copper font-semibold text-ink" : i <= visited ? "border-transparent text-ink-muted hover:text-ink" : "border-transparent text-ink-faint"
+                      i === step
+                        ? "border-copper font-semibold text-ink"
+                        : i <= visited
+                          ? "border-transparent text-ink-muted hover:text-ink"
+                          : "border-transparent text-ink-faint"
                     }`}
                     title={s.title}
                   >
@@ -180,7 +219,12 @@ function WizardForm({ initial, canSave, onRestart }: { initial: Draft; canSave: 
             </ol>
             {steps.map((s, i) => (
               <section key={s.key} hidden={i !== step} aria-labelledby={`step-${s.key}`} className="p-4">
-                <h2 id={`step-${s.key}`} ref={i === step ? stepHeading : undefined} tabIndex={-1} className="text-sm font-semibold focus:outline-none">
+                <h2
+                  id={`step-${s.key}`}
+                  ref={i === step ? stepHeading : undefined}
+                  tabIndex={-1}
+                  className="text-sm font-semibold focus:outline-none"
+                >
                   <span className="num text-ink-faint">
                     {i + 1}/{steps.length}
                   </span>{" "}
@@ -194,7 +238,11 @@ function WizardForm({ initial, canSave, onRestart }: { initial: Draft; canSave: 
               <Button type="button" variant="ghost" onClick={() => go(step - 1)} disabled={step === 0}>
                 Back
               </Button>
-              {complete && step === steps.length - 1 && <span className="text-2xs text-good" role="status">Every step checks out.</span>}
+              {complete && step === steps.length - 1 && (
+                <span className="text-2xs text-good" role="status">
+                  Every step checks out.
+                </span>
+              )}
               <Button type="submit" variant="primary">
                 {step < steps.length - 1 ? `Next: ${steps[step + 1]!.title}` : "Check the whole requirement"}
               </Button>

@@ -1,6 +1,6 @@
 // Compare-and-set on design revisions, against a real (in-memory) PGlite.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { evaluateDesign } from "@/lib/designs/service";
+import { evaluateDesign } from "@/lib/saved-designs/service";
 import { closeDb, getDb } from "../client";
 import { designRevisions, memberships, teams, users } from "../schema";
 import { listTargetAudit } from "./audit";
@@ -22,12 +22,21 @@ const first = () => evaluateDesign(requirement, { shuntOhms: 0.274, gain: 50 });
 
 beforeAll(async () => {
   const db = await getDb();
-  const [team] = await db.insert(teams).values({ name: `CAS team ${suffix}` }).returning();
-  const [other] = await db.insert(teams).values({ name: `Other team ${suffix}` }).returning();
+  const [team] = await db
+    .insert(teams)
+    .values({ name: `CAS team ${suffix}` })
+    .returning();
+  const [other] = await db
+    .insert(teams)
+    .values({ name: `Other team ${suffix}` })
+    .returning();
   teamId = team!.id;
   otherTeamId = other!.id;
   for (const role of ["designer", "reviewer"] as const) {
-    const [u] = await db.insert(users).values({ email: `${role}-${suffix}@test.example`, name: `${role} ${suffix}`, passwordHash: "x" }).returning();
+    const [u] = await db
+      .insert(users)
+      .values({ email: `${role}-${suffix}@test.example`, name: `${role} ${suffix}`, passwordHash: "x" })
+      .returning();
     ids[role] = u!.id;
     await db.insert(memberships).values({ teamId, userId: u!.id, role });
   }
@@ -40,7 +49,16 @@ async function newDesign(name: string) {
 }
 
 const revise = (designId: string, expectedRevision: number, name: string) =>
-  reviseDesign({ ...first(), designId, teamId, userId: ids.designer!, expectedRevision, name, project: "CAS", changed: ["name"] });
+  reviseDesign({
+    ...first(),
+    designId,
+    teamId,
+    userId: ids.designer!,
+    expectedRevision,
+    name,
+    project: "CAS",
+    changed: ["name"],
+  });
 
 describe("design revisions", () => {
   it("creates the design with revision 1 in draft, figures from the engine", async () => {
@@ -78,7 +96,16 @@ describe("design revisions", () => {
     const { id } = await newDesign(`mine ${suffix}`);
     expect(await getDesign(id, otherTeamId)).toBeNull();
     expect(await getDesignView(id, otherTeamId)).toBeNull();
-    const r = await reviseDesign({ ...first(), designId: id, teamId: otherTeamId, userId: ids.designer!, expectedRevision: 1, name: "x", project: null, changed: [] });
+    const r = await reviseDesign({
+      ...first(),
+      designId: id,
+      teamId: otherTeamId,
+      userId: ids.designer!,
+      expectedRevision: 1,
+      name: "x",
+      project: null,
+      changed: [],
+    });
     expect(r).toMatchObject({ ok: false, status: 404 });
     expect((await getDesign(id, teamId))?.design.revision).toBe(1);
     expect(await getDesign("not-a-uuid", teamId)).toBeNull();
@@ -86,10 +113,29 @@ describe("design revisions", () => {
 
   it("keeps an approval on its revision; an edit after approval starts a new draft", async () => {
     const { id } = await newDesign(`approved ${suffix}`);
-    expect(await changeDesignStatus({ designId: id, teamId, actorId: ids.designer!, revision: 1, from: ["draft"], to: "in-review", action: "design.submitted" })).toEqual({ ok: true });
-    const own = await addReview({ designId: id, teamId, actorId: ids.designer!, verdict: "approve", body: "", revision: 1 });
+    expect(
+      await changeDesignStatus({
+        designId: id,
+        teamId,
+        actorId: ids.designer!,
+        revision: 1,
+        from: ["draft"],
+        to: "in-review",
+        action: "design.submitted",
+      }),
+    ).toEqual({ ok: true });
+    const own = await addReview({
+      designId: id,
+      teamId,
+      actorId: ids.designer!,
+      verdict: "approve",
+      body: "",
+      revision: 1,
+    });
     expect(own).toMatchObject({ ok: false, status: 403 });
-    expect(await addReview({ designId: id, teamId, actorId: ids.reviewer!, verdict: "approve", body: "fine", revision: 1 })).toMatchObject({ ok: true, status: "approved" });
+    expect(
+      await addReview({ designId: id, teamId, actorId: ids.reviewer!, verdict: "approve", body: "fine", revision: 1 }),
+    ).toMatchObject({ ok: true, status: "approved" });
     expect((await getDesignView(id, teamId))?.approval).toMatchObject({ revision: 1 });
     expect(await revise(id, 1, `approved, edited ${suffix}`)).toEqual({ ok: true, revision: 2 });
     const view = await getDesignView(id, teamId);
@@ -98,14 +144,23 @@ describe("design revisions", () => {
     expect(revs[0]?.approval).toMatchObject({ revision: 1 });
     expect(revs[1]?.approval).toBeNull();
     // A verdict on the old revision is refused now that revision 2 is current.
-    expect(await addReview({ designId: id, teamId, actorId: ids.reviewer!, verdict: "return", body: "late", revision: 1 })).toMatchObject({ ok: false, status: 409 });
+    expect(
+      await addReview({ designId: id, teamId, actorId: ids.reviewer!, verdict: "return", body: "late", revision: 1 }),
+    ).toMatchObject({ ok: false, status: 409 });
     const log = await listTargetAudit(teamId, "design", id);
-    expect(log.map((e) => e.action)).toEqual(["design.revised", "design.approved", "design.submitted", "design.created"]);
+    expect(log.map((e) => e.action)).toEqual([
+      "design.revised",
+      "design.approved",
+      "design.submitted",
+      "design.created",
+    ]);
   });
 
   it("refuses a verdict on a design that is not in review", async () => {
     const { id } = await newDesign(`draft ${suffix}`);
-    expect(await addReview({ designId: id, teamId, actorId: ids.reviewer!, verdict: "approve", body: "", revision: 1 })).toMatchObject({ ok: false, status: 409 });
+    expect(
+      await addReview({ designId: id, teamId, actorId: ids.reviewer!, verdict: "approve", body: "", revision: 1 }),
+    ).toMatchObject({ ok: false, status: 409 });
     expect((await getDesign(id, teamId))?.design.status).toBe("draft");
   });
 });

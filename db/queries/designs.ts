@@ -31,7 +31,12 @@ export type NewDesign = SavedFigures & {
 };
 
 /** The immutable row of one save. */
-function insertRevision(tx: Tx, designId: string, revision: number, input: SavedFigures & { name: string; userId: string }) {
+function insertRevision(
+  tx: Tx,
+  designId: string,
+  revision: number,
+  input: SavedFigures & { name: string; userId: string },
+) {
   return tx.insert(designRevisions).values({
     designId,
     revision,
@@ -89,7 +94,10 @@ export async function listDesigns(teamId: string, opts: { approvedOnly?: boolean
       gain: sql<number>`(${designRevisions.choice}->>'gain')::float8`,
     })
     .from(designs)
-    .innerJoin(designRevisions, and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)))
+    .innerJoin(
+      designRevisions,
+      and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)),
+    )
     .innerJoin(author, eq(author.id, designRevisions.authorId))
     .where(where)
     .orderBy(desc(designs.updatedAt));
@@ -103,7 +111,10 @@ export async function getDesign(designId: string, teamId: string) {
   const rows = await db
     .select({ design: designs, current: designRevisions, authorName: author.name })
     .from(designs)
-    .innerJoin(designRevisions, and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)))
+    .innerJoin(
+      designRevisions,
+      and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)),
+    )
     .innerJoin(author, eq(author.id, designRevisions.authorId))
     .where(and(eq(designs.id, designId), eq(designs.teamId, teamId)))
     .limit(1);
@@ -122,7 +133,8 @@ async function approvalsOf(designId: string): Promise<Map<number, ApprovalInfo>>
     .where(and(eq(reviews.designId, designId), eq(reviews.verdict, "approve")))
     .orderBy(asc(reviews.createdAt));
   const out = new Map<number, ApprovalInfo>();
-  for (const r of rows) out.set(r.revision, { revision: r.revision, byName: r.byName, byId: r.byId, at: r.at.toISOString() });
+  for (const r of rows)
+    out.set(r.revision, { revision: r.revision, byName: r.byName, byId: r.byId, at: r.at.toISOString() });
   return out;
 }
 
@@ -174,7 +186,10 @@ export async function getDesignView(designId: string, teamId: string): Promise<D
     authorId: current.authorId,
     authorName,
     updatedAt: design.updatedAt.toISOString(),
-    approval: approval && design.status === "approved" ? { byName: approval.byName, at: approval.at, revision: approval.revision } : null,
+    approval:
+      approval && design.status === "approved"
+        ? { byName: approval.byName, at: approval.at, revision: approval.revision }
+        : null,
     revisions: revisions.map((r) => ({ revision: r.revision, authorName: r.authorName, createdAt: r.createdAt })),
   };
 }
@@ -206,7 +221,13 @@ export async function reviseDesign(input: ReviseInput): Promise<ReviseResult> {
         project: input.project,
         updatedAt: sql`now()`,
       })
-      .where(and(eq(designs.id, input.designId), eq(designs.teamId, input.teamId), eq(designs.revision, input.expectedRevision)))
+      .where(
+        and(
+          eq(designs.id, input.designId),
+          eq(designs.teamId, input.teamId),
+          eq(designs.revision, input.expectedRevision),
+        ),
+      )
       .returning({ revision: designs.revision, status: designs.status });
     const row = updated[0];
     if (!row) {
@@ -263,11 +284,19 @@ export async function changeDesignStatus(input: {
           eq(designs.id, input.designId),
           eq(designs.teamId, input.teamId),
           eq(designs.revision, input.revision),
-          sql`${designs.status} in (${sql.join(input.from.map((s) => sql`${s}`), sql`, `)})`,
+          sql`${designs.status} in (${sql.join(
+            input.from.map((s) => sql`${s}`),
+            sql`, `,
+          )})`,
         ),
       )
       .returning({ id: designs.id });
-    if (!updated[0]) return { ok: false, status: 409, message: "The design changed while you were looking at it; reload and try again." };
+    if (!updated[0])
+      return {
+        ok: false,
+        status: 409,
+        message: "The design changed while you were looking at it; reload and try again.",
+      };
     await recordAudit(
       {
         teamId: input.teamId,

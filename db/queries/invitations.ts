@@ -13,14 +13,26 @@ export const hashToken = (token: string) => createHash("sha256").update(token, "
 
 export type InvitationStatus = "pending" | "accepted" | "revoked" | "expired";
 
-function statusOf(i: { acceptedAt: Date | null; revokedAt: Date | null; expiresAt: Date }, now = new Date()): InvitationStatus {
+function statusOf(
+  i: { acceptedAt: Date | null; revokedAt: Date | null; expiresAt: Date },
+  now = new Date(),
+): InvitationStatus {
   if (i.acceptedAt) return "accepted";
   if (i.revokedAt) return "revoked";
   return i.expiresAt <= now ? "expired" : "pending";
 }
 
 export type CreateInvitationResult =
-  | { ok: true; id: string; token: string; teamId: string; teamName: string; email: string; role: Role; expiresAt: string }
+  | {
+      ok: true;
+      id: string;
+      token: string;
+      teamId: string;
+      teamName: string;
+      email: string;
+      role: Role;
+      expiresAt: string;
+    }
   | { ok: false; status: 409; message: string };
 
 /**
@@ -65,7 +77,12 @@ export async function createInvitation(input: {
             gt(invitations.expiresAt, sql`now()`),
           ),
         );
-      if (pending[0]) return { ok: false, status: 409, message: `${email} already has a pending invitation; revoke it first to send a new one.` };
+      if (pending[0])
+        return {
+          ok: false,
+          status: 409,
+          message: `${email} already has a pending invitation; revoke it first to send a new one.`,
+        };
       const [team] = await tx.select({ name: teams.name }).from(teams).where(eq(teams.id, teamId));
       teamName = team?.name ?? "";
     }
@@ -76,10 +93,35 @@ export async function createInvitation(input: {
       .returning({ id: invitations.id });
     if (!row) throw new Error("invitation not stored");
     // Audited in the inviting team's log (and, for a new team, in that team's log too).
-    const details = { email, role, expiresAt: expiresAt.toISOString(), ...(input.newTeam ? { newTeam: teamName, newTeamId: teamId } : {}) };
-    await recordAudit({ teamId: input.teamId, actorId: input.invitedBy, action: "invitation.created", targetType: "invitation", targetId: row.id, details }, tx);
+    const details = {
+      email,
+      role,
+      expiresAt: expiresAt.toISOString(),
+      ...(input.newTeam ? { newTeam: teamName, newTeamId: teamId } : {}),
+    };
+    await recordAudit(
+      {
+        teamId: input.teamId,
+        actorId: input.invitedBy,
+        action: "invitation.created",
+        targetType: "invitation",
+        targetId: row.id,
+        details,
+      },
+      tx,
+    );
     if (input.newTeam) {
-      await recordAudit({ teamId, actorId: input.invitedBy, action: "team.created", targetType: "team", targetId: teamId, details: { name: teamName, firstOwner: email } }, tx);
+      await recordAudit(
+        {
+          teamId,
+          actorId: input.invitedBy,
+          action: "team.created",
+          targetType: "team",
+          targetId: teamId,
+          details: { name: teamName, firstOwner: email },
+        },
+        tx,
+      );
     }
     return { ok: true, id: row.id, token, teamId, teamName, email, role, expiresAt: expiresAt.toISOString() };
   });
@@ -128,8 +170,22 @@ export async function revokeInvitation(teamId: string, id: string, actorId: stri
     if (!inv) return { ok: false, status: 404, message: "That invitation was not found in your team." };
     const status = statusOf(inv);
     if (status !== "pending") return { ok: false, status: 409, message: `That invitation is already ${status}.` };
-    const [row] = await tx.update(invitations).set({ revokedAt: sql`now()` }).where(eq(invitations.id, id)).returning({ revokedAt: invitations.revokedAt });
-    await recordAudit({ teamId, actorId, action: "invitation.revoked", targetType: "invitation", targetId: id, details: { email: inv.email, role: inv.role } }, tx);
+    const [row] = await tx
+      .update(invitations)
+      .set({ revokedAt: sql`now()` })
+      .where(eq(invitations.id, id))
+      .returning({ revokedAt: invitations.revokedAt });
+    await recordAudit(
+      {
+        teamId,
+        actorId,
+        action: "invitation.revoked",
+        targetType: "invitation",
+        targetId: id,
+        details: { email: inv.email, role: inv.role },
+      },
+      tx,
+    );
     return { ok: true, revokedAt: (row?.revokedAt ?? new Date()).toISOString() };
   });
 }
@@ -146,8 +202,20 @@ export async function findInvitationByToken(token: string) {
   const row = rows[0];
   if (!row) return null;
   const { invitation: i } = row;
-  const existing = await db.select({ id: users.id }).from(users).where(sql`lower(${users.email}) = ${i.email.toLowerCase()}`);
-  return { id: i.id, teamId: i.teamId, teamName: row.teamName, email: i.email, role: i.role, status: statusOf(i), expiresAt: i.expiresAt.toISOString(), hasAccount: !!existing[0] };
+  const existing = await db
+    .select({ id: users.id })
+    .from(users)
+    .where(sql`lower(${users.email}) = ${i.email.toLowerCase()}`);
+  return {
+    id: i.id,
+    teamId: i.teamId,
+    teamName: row.teamName,
+    email: i.email,
+    role: i.role,
+    status: statusOf(i),
+    expiresAt: i.expiresAt.toISOString(),
+    hasAccount: !!existing[0],
+  };
 }
 
 export type AcceptResult =
@@ -166,31 +234,66 @@ export async function acceptInvitation(input: {
 }): Promise<AcceptResult> {
   const db = await getDb();
   return db.transaction(async (tx): Promise<AcceptResult> => {
-    const [inv] = await tx.select().from(invitations).where(eq(invitations.tokenHash, hashToken(input.token))).for("update");
+    const [inv] = await tx
+      .select()
+      .from(invitations)
+      .where(eq(invitations.tokenHash, hashToken(input.token)))
+      .for("update");
     if (!inv) return { ok: false, status: 404, message: "That invitation link is not valid." };
     const status = statusOf(inv);
-    if (status === "accepted") return { ok: false, status: 409, message: "That invitation has been used already; sign in instead." };
-    if (status === "revoked") return { ok: false, status: 410, message: "That invitation was revoked by the team's owner." };
-    if (status === "expired") return { ok: false, status: 410, message: `That invitation expired on ${inv.expiresAt.toISOString().slice(0, 10)}; ask the owner for a new one.` };
+    if (status === "accepted")
+      return { ok: false, status: 409, message: "That invitation has been used already; sign in instead." };
+    if (status === "revoked")
+      return { ok: false, status: 410, message: "That invitation was revoked by the team's owner." };
+    if (status === "expired")
+      return {
+        ok: false,
+        status: 410,
+        message: `That invitation expired on ${inv.expiresAt.toISOString().slice(0, 10)}; ask the owner for a new one.`,
+      };
     const [team] = await tx.select({ name: teams.name }).from(teams).where(eq(teams.id, inv.teamId));
-    const [existing] = await tx.select().from(users).where(sql`lower(${users.email}) = ${inv.email.toLowerCase()}`);
+    const [existing] = await tx
+      .select()
+      .from(users)
+      .where(sql`lower(${users.email}) = ${inv.email.toLowerCase()}`);
     let userId: string;
     if (existing) {
       if (!(await input.checkPassword(existing.passwordHash)))
-        return { ok: false, status: 403, message: "An account with this e-mail exists: enter its password to join the team." };
-      const member = await tx.select({ id: memberships.id }).from(memberships).where(and(eq(memberships.teamId, inv.teamId), eq(memberships.userId, existing.id)));
+        return {
+          ok: false,
+          status: 403,
+          message: "An account with this e-mail exists: enter its password to join the team.",
+        };
+      const member = await tx
+        .select({ id: memberships.id })
+        .from(memberships)
+        .where(and(eq(memberships.teamId, inv.teamId), eq(memberships.userId, existing.id)));
       if (member[0]) return { ok: false, status: 409, message: "You are a member of this team already." };
       userId = existing.id;
     } else {
-      if (!input.name.trim()) return { ok: false, status: 422, message: "Give your name: it is how the team sees you." };
-      const [u] = await tx.insert(users).values({ email: inv.email, name: input.name.trim(), passwordHash: input.passwordHash }).returning({ id: users.id });
+      if (!input.name.trim())
+        return { ok: false, status: 422, message: "Give your name: it is how the team sees you." };
+      const [u] = await tx
+        .insert(users)
+        .values({ email: inv.email, name: input.name.trim(), passwordHash: input.passwordHash })
+        .returning({ id: users.id });
       if (!u) throw new Error("user not created");
       userId = u.id;
     }
     await tx.insert(memberships).values({ teamId: inv.teamId, userId, role: inv.role });
-    await tx.update(invitations).set({ acceptedAt: sql`now()` }).where(and(eq(invitations.id, inv.id), isNull(invitations.acceptedAt)));
+    await tx
+      .update(invitations)
+      .set({ acceptedAt: sql`now()` })
+      .where(and(eq(invitations.id, inv.id), isNull(invitations.acceptedAt)));
     await recordAudit(
-      { teamId: inv.teamId, actorId: userId, action: "invitation.accepted", targetType: "invitation", targetId: inv.id, details: { email: inv.email, role: inv.role, newAccount: !existing } },
+      {
+        teamId: inv.teamId,
+        actorId: userId,
+        action: "invitation.accepted",
+        targetType: "invitation",
+        targetId: inv.id,
+        details: { email: inv.email, role: inv.role, newAccount: !existing },
+      },
       tx,
     );
     return { ok: true, userId, teamId: inv.teamId, teamName: team?.name ?? "", email: inv.email, role: inv.role };
@@ -215,10 +318,25 @@ export async function removeMember(teamId: string, userId: string, actorId: stri
         .select({ n: sql<number>`count(*)::int` })
         .from(memberships)
         .where(and(eq(memberships.teamId, teamId), eq(memberships.role, "owner")));
-      if ((owners?.n ?? 0) <= 1) return { ok: false, status: 409, message: "A team must keep at least one owner: make someone else owner first." };
+      if ((owners?.n ?? 0) <= 1)
+        return {
+          ok: false,
+          status: 409,
+          message: "A team must keep at least one owner: make someone else owner first.",
+        };
     }
     await tx.delete(memberships).where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)));
-    await recordAudit({ teamId, actorId, action: "member.removed", targetType: "user", targetId: userId, details: { email: m.email, name: m.name, role: m.role } }, tx);
+    await recordAudit(
+      {
+        teamId,
+        actorId,
+        action: "member.removed",
+        targetType: "user",
+        targetId: userId,
+        details: { email: m.email, name: m.name, role: m.role },
+      },
+      tx,
+    );
     return { ok: true };
   });
 }

@@ -20,7 +20,11 @@ const auditType: Record<PartKind, string> = { amplifiers: "library-amplifier", s
 export async function listLibrary(teamId: string): Promise<{ amplifiers: AmplifierJson[]; shunts: ShuntJson[] }> {
   const db = await getDb();
   const [amplifiers, shunts] = await Promise.all([
-    db.select().from(libraryAmplifiers).where(eq(libraryAmplifiers.teamId, teamId)).orderBy(asc(libraryAmplifiers.name)),
+    db
+      .select()
+      .from(libraryAmplifiers)
+      .where(eq(libraryAmplifiers.teamId, teamId))
+      .orderBy(asc(libraryAmplifiers.name)),
     db.select().from(libraryShunts).where(eq(libraryShunts.teamId, teamId)).orderBy(asc(libraryShunts.name)),
   ]);
   return { amplifiers: amplifiers.map(toJson), shunts: shunts.map(toJson) };
@@ -28,43 +32,92 @@ export async function listLibrary(teamId: string): Promise<{ amplifiers: Amplifi
 
 export async function getAmplifier(teamId: string, id: string): Promise<LibraryAmplifier | null> {
   const db = await getDb();
-  const [row] = await db.select().from(libraryAmplifiers).where(and(eq(libraryAmplifiers.teamId, teamId), eq(libraryAmplifiers.id, id)));
+  const [row] = await db
+    .select()
+    .from(libraryAmplifiers)
+    .where(and(eq(libraryAmplifiers.teamId, teamId), eq(libraryAmplifiers.id, id)));
   return row ?? null;
 }
 
 export async function getShunt(teamId: string, id: string): Promise<LibraryShunt | null> {
   const db = await getDb();
-  const [row] = await db.select().from(libraryShunts).where(and(eq(libraryShunts.teamId, teamId), eq(libraryShunts.id, id)));
+  const [row] = await db
+    .select()
+    .from(libraryShunts)
+    .where(and(eq(libraryShunts.teamId, teamId), eq(libraryShunts.id, id)));
   return row ?? null;
 }
 
 async function nameTaken(tx: Tx, kind: PartKind, teamId: string, name: string, exceptId?: string): Promise<boolean> {
   const t = tables[kind];
-  const rows = await tx.select({ id: t.id }).from(t).where(and(eq(t.teamId, teamId), eq(t.name, name)));
+  const rows = await tx
+    .select({ id: t.id })
+    .from(t)
+    .where(and(eq(t.teamId, teamId), eq(t.name, name)));
   return rows.some((r) => r.id !== exceptId);
 }
 
-export type WriteResult<T> = { ok: true; row: T } | { ok: false; status: 404 | 409 | 422; message: string; field?: string };
+export type WriteResult<T> =
+  { ok: true; row: T } | { ok: false; status: 404 | 409 | 422; message: string; field?: string };
 
 const duplicate = (name: string) =>
-  ({ ok: false, status: 422, message: `A part named "${name}" is already in the library; choose another name.`, field: "name" }) as const;
+  ({
+    ok: false,
+    status: 422,
+    message: `A part named "${name}" is already in the library; choose another name.`,
+    field: "name",
+  }) as const;
 
-export async function createAmplifier(teamId: string, values: AmplifierValues, actorId: string): Promise<WriteResult<AmplifierJson>> {
+export async function createAmplifier(
+  teamId: string,
+  values: AmplifierValues,
+  actorId: string,
+): Promise<WriteResult<AmplifierJson>> {
   const db = await getDb();
   return db.transaction(async (tx) => {
     if (await nameTaken(tx, "amplifiers", teamId, values.name)) return duplicate(values.name);
-    const [row] = await tx.insert(libraryAmplifiers).values({ ...values, teamId }).returning();
-    await recordAudit({ teamId, actorId, action: "library.create", targetType: auditType.amplifiers, targetId: row!.id, details: { name: values.name } }, tx);
+    const [row] = await tx
+      .insert(libraryAmplifiers)
+      .values({ ...values, teamId })
+      .returning();
+    await recordAudit(
+      {
+        teamId,
+        actorId,
+        action: "library.create",
+        targetType: auditType.amplifiers,
+        targetId: row!.id,
+        details: { name: values.name },
+      },
+      tx,
+    );
     return { ok: true, row: toJson(row!) };
   });
 }
 
-export async function createShunt(teamId: string, values: ShuntValues, actorId: string): Promise<WriteResult<ShuntJson>> {
+export async function createShunt(
+  teamId: string,
+  values: ShuntValues,
+  actorId: string,
+): Promise<WriteResult<ShuntJson>> {
   const db = await getDb();
   return db.transaction(async (tx) => {
     if (await nameTaken(tx, "shunts", teamId, values.name)) return duplicate(values.name);
-    const [row] = await tx.insert(libraryShunts).values({ ...values, teamId }).returning();
-    await recordAudit({ teamId, actorId, action: "library.create", targetType: auditType.shunts, targetId: row!.id, details: { name: values.name } }, tx);
+    const [row] = await tx
+      .insert(libraryShunts)
+      .values({ ...values, teamId })
+      .returning();
+    await recordAudit(
+      {
+        teamId,
+        actorId,
+        action: "library.create",
+        targetType: auditType.shunts,
+        targetId: row!.id,
+        details: { name: values.name },
+      },
+      tx,
+    );
     return { ok: true, row: toJson(row!) };
   });
 }
@@ -82,17 +135,35 @@ export async function updateAmplifier(
 ): Promise<WriteResult<AmplifierJson>> {
   const db = await getDb();
   return db.transaction(async (tx) => {
-    const [current] = await tx.select().from(libraryAmplifiers).where(and(eq(libraryAmplifiers.teamId, teamId), eq(libraryAmplifiers.id, id))).for("update");
+    const [current] = await tx
+      .select()
+      .from(libraryAmplifiers)
+      .where(and(eq(libraryAmplifiers.teamId, teamId), eq(libraryAmplifiers.id, id)))
+      .for("update");
     if (!current) return { ok: false, status: 404, message: "That amplifier was not found in the library." };
     if (expectedUpdatedAt && current.updatedAt.toISOString() !== expectedUpdatedAt)
-      return { ok: false, status: 409, message: "Someone changed this amplifier since you opened it; reload and make your change again." };
+      return {
+        ok: false,
+        status: 409,
+        message: "Someone changed this amplifier since you opened it; reload and make your change again.",
+      };
     if (await nameTaken(tx, "amplifiers", teamId, values.name, id)) return duplicate(values.name);
     const [row] = await tx
       .update(libraryAmplifiers)
       .set({ ...values, updatedAt: new Date() })
       .where(and(eq(libraryAmplifiers.teamId, teamId), eq(libraryAmplifiers.id, id)))
       .returning();
-    await recordAudit({ teamId, actorId, action: "library.update", targetType: auditType.amplifiers, targetId: id, details: { name: values.name } }, tx);
+    await recordAudit(
+      {
+        teamId,
+        actorId,
+        action: "library.update",
+        targetType: auditType.amplifiers,
+        targetId: id,
+        details: { name: values.name },
+      },
+      tx,
+    );
     return { ok: true, row: toJson(row!) };
   });
 }
@@ -106,17 +177,35 @@ export async function updateShunt(
 ): Promise<WriteResult<ShuntJson>> {
   const db = await getDb();
   return db.transaction(async (tx) => {
-    const [current] = await tx.select().from(libraryShunts).where(and(eq(libraryShunts.teamId, teamId), eq(libraryShunts.id, id))).for("update");
+    const [current] = await tx
+      .select()
+      .from(libraryShunts)
+      .where(and(eq(libraryShunts.teamId, teamId), eq(libraryShunts.id, id)))
+      .for("update");
     if (!current) return { ok: false, status: 404, message: "That shunt was not found in the library." };
     if (expectedUpdatedAt && current.updatedAt.toISOString() !== expectedUpdatedAt)
-      return { ok: false, status: 409, message: "Someone changed this shunt since you opened it; reload and make your change again." };
+      return {
+        ok: false,
+        status: 409,
+        message: "Someone changed this shunt since you opened it; reload and make your change again.",
+      };
     if (await nameTaken(tx, "shunts", teamId, values.name, id)) return duplicate(values.name);
     const [row] = await tx
       .update(libraryShunts)
       .set({ ...values, updatedAt: new Date() })
       .where(and(eq(libraryShunts.teamId, teamId), eq(libraryShunts.id, id)))
       .returning();
-    await recordAudit({ teamId, actorId, action: "library.update", targetType: auditType.shunts, targetId: id, details: { name: values.name } }, tx);
+    await recordAudit(
+      {
+        teamId,
+        actorId,
+        action: "library.update",
+        targetType: auditType.shunts,
+        targetId: id,
+        details: { name: values.name },
+      },
+      tx,
+    );
     return { ok: true, row: toJson(row!) };
   });
 }
@@ -125,9 +214,22 @@ export async function deletePart(kind: PartKind, teamId: string, id: string, act
   const db = await getDb();
   const t = tables[kind];
   return db.transaction(async (tx) => {
-    const rows = await tx.delete(t).where(and(eq(t.teamId, teamId), eq(t.id, id))).returning({ name: t.name });
+    const rows = await tx
+      .delete(t)
+      .where(and(eq(t.teamId, teamId), eq(t.id, id)))
+      .returning({ name: t.name });
     if (!rows[0]) return false;
-    await recordAudit({ teamId, actorId, action: "library.delete", targetType: auditType[kind], targetId: id, details: { name: rows[0].name } }, tx);
+    await recordAudit(
+      {
+        teamId,
+        actorId,
+        action: "library.delete",
+        targetType: auditType[kind],
+        targetId: id,
+        details: { name: rows[0].name },
+      },
+      tx,
+    );
     return true;
   });
 }
@@ -143,7 +245,12 @@ export async function importParts(
     const t = tables[parts.kind];
     const names = parts.rows.map((r) => r.name);
     const existing = new Set(
-      (await tx.select({ name: t.name }).from(t).where(and(eq(t.teamId, teamId), inArray(t.name, names)))).map((r) => r.name),
+      (
+        await tx
+          .select({ name: t.name })
+          .from(t)
+          .where(and(eq(t.teamId, teamId), inArray(t.name, names)))
+      ).map((r) => r.name),
     );
     const now = new Date();
     for (const values of parts.rows) {
@@ -152,7 +259,10 @@ export async function importParts(
         await tx
           .insert(libraryAmplifiers)
           .values({ ...v, teamId })
-          .onConflictDoUpdate({ target: [libraryAmplifiers.teamId, libraryAmplifiers.name], set: { ...v, updatedAt: now } });
+          .onConflictDoUpdate({
+            target: [libraryAmplifiers.teamId, libraryAmplifiers.name],
+            set: { ...v, updatedAt: now },
+          });
       } else {
         const v = values as ShuntValues;
         await tx
@@ -163,7 +273,10 @@ export async function importParts(
     }
     const updated = names.filter((n) => existing.has(n)).length;
     const result = { created: names.length - updated, updated };
-    await recordAudit({ teamId, actorId, action: "library.import", targetType: auditType[parts.kind], details: result }, tx);
+    await recordAudit(
+      { teamId, actorId, action: "library.import", targetType: auditType[parts.kind], details: result },
+      tx,
+    );
     return result;
   });
 }

@@ -15,7 +15,14 @@ export const TEAM_HEADER = "X-Sensewright-Team";
 export async function listTeamMail(teamId: string, limit = 200) {
   const db = await getDb();
   const rows = await db
-    .select({ id: mailMessages.id, to: mailMessages.to, from: mailMessages.from, subject: mailMessages.subject, text: mailMessages.text, sentAt: mailMessages.sentAt })
+    .select({
+      id: mailMessages.id,
+      to: mailMessages.to,
+      from: mailMessages.from,
+      subject: mailMessages.subject,
+      text: mailMessages.text,
+      sentAt: mailMessages.sentAt,
+    })
     .from(mailMessages)
     .where(sql`position(${`${TEAM_HEADER}: ${teamId}`} in ${mailMessages.raw}) > 0`)
     .orderBy(desc(mailMessages.sentAt))

@@ -1,5 +1,5 @@
 // Stored current profiles of a design: samples as little-endian Float64 bytea, written in one
-// transaction with the audit event. Callers scope the design by team first (lib/designs/access).
+// transaction with the audit event. Callers scope the design by team first (lib/saved-designs/access).
 import { and, desc, eq } from "drizzle-orm";
 import { bytesToFloat64, float64ToBytes, type ProfileSummary } from "@/lib/profile";
 import { getDb } from "../client";
@@ -31,7 +31,11 @@ const listColumns = {
 type ListRow = { [K in keyof typeof listColumns]: unknown } & { createdAt: Date; summary: Record<string, unknown> };
 
 function toItem(r: ListRow): ProfileListItem {
-  return { ...(r as unknown as ProfileListItem), summary: r.summary as unknown as ProfileSummary, createdAt: r.createdAt.toISOString() };
+  return {
+    ...(r as unknown as ProfileListItem),
+    summary: r.summary as unknown as ProfileSummary,
+    createdAt: r.createdAt.toISOString(),
+  };
 }
 
 export async function listProfiles(designId: string): Promise<ProfileListItem[]> {
@@ -123,7 +127,11 @@ export async function getProfile(designId: string, profileId: string): Promise<S
     .innerJoin(users, eq(users.id, profiles.uploadedBy))
     .where(and(eq(profiles.designId, designId), eq(profiles.id, profileId)));
   if (!row) return null;
-  const stored: StoredProfile = { ...toItem(row), timesS: bytesToFloat64(row.timesS), currentsA: bytesToFloat64(row.currentsA) };
+  const stored: StoredProfile = {
+    ...toItem(row),
+    timesS: bytesToFloat64(row.timesS),
+    currentsA: bytesToFloat64(row.currentsA),
+  };
   remember(key, stored);
   return stored;
 }
@@ -134,7 +142,10 @@ function remember(key: string, stored: StoredProfile) {
 }
 
 /** Who uploaded a profile of this design (null: no such profile). */
-export async function profileUploader(designId: string, profileId: string): Promise<{ uploadedBy: string; fileName: string } | null> {
+export async function profileUploader(
+  designId: string,
+  profileId: string,
+): Promise<{ uploadedBy: string; fileName: string } | null> {
   const db = await getDb();
   const [row] = await db
     .select({ uploadedBy: profiles.uploadedBy, fileName: profiles.fileName })
@@ -143,7 +154,12 @@ export async function profileUploader(designId: string, profileId: string): Prom
   return row ?? null;
 }
 
-export async function deleteProfile(input: { teamId: string; designId: string; profileId: string; actorId: string }): Promise<boolean> {
+export async function deleteProfile(input: {
+  teamId: string;
+  designId: string;
+  profileId: string;
+  actorId: string;
+}): Promise<boolean> {
   const db = await getDb();
   return db.transaction(async (tx) => {
     const rows = await tx

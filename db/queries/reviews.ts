@@ -58,22 +58,45 @@ export async function addReview(input: AddReviewInput): Promise<AddReviewResult>
         .from(reviews)
         .where(and(eq(reviews.id, input.parentId), eq(reviews.designId, input.designId)));
       if (!parent)
-        return { ok: false, status: 422, message: "The comment you reply to is not on this design.", fieldErrors: { parentId: ["is not a comment on this design"] } } as const;
+        return {
+          ok: false,
+          status: 422,
+          message: "The comment you reply to is not on this design.",
+          fieldErrors: { parentId: ["is not a comment on this design"] },
+        } as const;
       revision = parent.revision;
     }
     const [rev] = await tx
       .select({ authorId: designRevisions.authorId })
       .from(designRevisions)
       .where(and(eq(designRevisions.designId, input.designId), eq(designRevisions.revision, revision)));
-    if (!rev) return { ok: false, status: 422, message: `This design has no revision ${revision}.`, fieldErrors: { revision: [`no revision ${revision}`] } } as const;
+    if (!rev)
+      return {
+        ok: false,
+        status: 422,
+        message: `This design has no revision ${revision}.`,
+        fieldErrors: { revision: [`no revision ${revision}`] },
+      } as const;
     let status: string = design.status;
     if (input.verdict !== "comment") {
       if (revision !== design.revision)
-        return { ok: false, status: 409, message: `A verdict goes on the current revision (${design.revision}); you looked at revision ${revision}. Reload and review the current one.` } as const;
+        return {
+          ok: false,
+          status: 409,
+          message: `A verdict goes on the current revision (${design.revision}); you looked at revision ${revision}. Reload and review the current one.`,
+        } as const;
       if (rev.authorId === input.actorId)
-        return { ok: false, status: 403, message: "You wrote this revision: its verdict must come from another reviewer or owner." } as const;
+        return {
+          ok: false,
+          status: 403,
+          message: "You wrote this revision: its verdict must come from another reviewer or owner.",
+        } as const;
       if (design.status !== "in-review")
-        return { ok: false, status: 409, message: `The design is ${design.status}, not in-review: a verdict is given only while it is in review.` } as const;
+        return {
+          ok: false,
+          status: 409,
+          message: `The design is ${design.status}, not in-review: a verdict is given only while it is in review.`,
+        } as const;
       const to = input.verdict === "approve" ? "approved" : "returned";
       const changed = await changeDesignStatus({
         designId: input.designId,
@@ -91,12 +114,26 @@ export async function addReview(input: AddReviewInput): Promise<AddReviewResult>
     }
     const [row] = await tx
       .insert(reviews)
-      .values({ designId: input.designId, revision, authorId: input.actorId, verdict: input.verdict, body: input.body, parentId: input.parentId ?? null })
+      .values({
+        designId: input.designId,
+        revision,
+        authorId: input.actorId,
+        verdict: input.verdict,
+        body: input.body,
+        parentId: input.parentId ?? null,
+      })
       .returning({ id: reviews.id });
     if (!row) throw new Error("review not stored");
     if (input.verdict === "comment") {
       await recordAudit(
-        { teamId: input.teamId, actorId: input.actorId, action: "design.commented", targetType: "design", targetId: input.designId, details: { revision, reviewId: row.id, reply: !!input.parentId } },
+        {
+          teamId: input.teamId,
+          actorId: input.actorId,
+          action: "design.commented",
+          targetType: "design",
+          targetId: input.designId,
+          details: { revision, reviewId: row.id, reply: !!input.parentId },
+        },
         tx,
       );
     }

@@ -10,7 +10,10 @@ const suffix = Math.random().toString(36).slice(2, 8);
 
 beforeAll(async () => {
   const db = await getDb();
-  const [team] = await db.insert(teams).values({ name: `Role test team ${suffix}` }).returning();
+  const [team] = await db
+    .insert(teams)
+    .values({ name: `Role test team ${suffix}` })
+    .returning();
   teamId = team!.id;
   for (const role of ["owner", "designer", "maker"] as const) {
     const [u] = await db
@@ -40,7 +43,11 @@ describe("memberships", () => {
     expect(await changeMemberRole(teamId, ids.maker!, "designer", ids.owner!)).toEqual({ ok: true });
     expect((await getMember(ids.maker!, teamId))?.role).toBe("designer");
     const log = await listTeamAudit(teamId);
-    expect(log[0]).toMatchObject({ action: "member.role-changed", targetId: ids.maker, details: { from: "maker", to: "designer" } });
+    expect(log[0]).toMatchObject({
+      action: "member.role-changed",
+      targetId: ids.maker,
+      details: { from: "maker", to: "designer" },
+    });
   });
 
   it("never leaves a team without an owner", async () => {

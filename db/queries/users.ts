@@ -87,7 +87,11 @@ export async function changeMemberRole(
         .from(memberships)
         .where(and(eq(memberships.teamId, teamId), eq(memberships.role, "owner")));
       if ((owners[0]?.n ?? 0) <= 1) {
-        return { ok: false, status: 409, message: "A team must keep at least one owner: make someone else owner first." } as const;
+        return {
+          ok: false,
+          status: 409,
+          message: "A team must keep at least one owner: make someone else owner first.",
+        } as const;
       }
     }
     await tx
@@ -95,7 +99,14 @@ export async function changeMemberRole(
       .set({ role })
       .where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)));
     await recordAudit(
-      { teamId, actorId, action: "member.role-changed", targetType: "user", targetId: userId, details: { from: before, to: role } },
+      {
+        teamId,
+        actorId,
+        action: "member.role-changed",
+        targetType: "user",
+        targetId: userId,
+        details: { from: before, to: role },
+      },
       tx,
     );
     return { ok: true } as const;

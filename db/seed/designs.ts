@@ -10,8 +10,8 @@
 // - Bench adapter: 2 µA to 180 µA, an amplifier whose output reaches 1 mV of ground, a 10 Hz output
 //   filter (a meter reads slowly) and a 3 % target; the choice nearest 1 mV per µA is taken.
 import { parseRequirement, solve, type Candidate, type RequirementInput } from "@/lib/design";
-import { changedFields } from "@/lib/designs/diff";
-import { evaluateDesign } from "@/lib/designs/service";
+import { changedFields } from "@/lib/saved-designs/diff";
+import { evaluateDesign } from "@/lib/saved-designs/service";
 import { changeDesignStatus, createDesign, reviseDesign } from "../queries/designs";
 import { addReview } from "../queries/reviews";
 import type { DemoIds } from "./team";
@@ -68,7 +68,9 @@ export const demoDesigns: DemoDesign[] = [
       amplifier: { swingLow: "1 mV", filterHz: "10 Hz" },
     },
     pick: (front) =>
-      [...front].sort((a, b) => Math.abs(Math.log(a.transimpedanceVPerA / 1000)) - Math.abs(Math.log(b.transimpedanceVPerA / 1000)))[0],
+      [...front].sort(
+        (a, b) => Math.abs(Math.log(a.transimpedanceVPerA / 1000)) - Math.abs(Math.log(b.transimpedanceVPerA / 1000)),
+      )[0],
     state: "draft",
   },
 ];
@@ -87,7 +89,13 @@ export async function seedDemoDesigns(ids: DemoIds): Promise<void> {
   const designer = ids.userIds.designer;
   for (const d of demoDesigns) {
     const evaluated = evaluateDesign(d.requirement, demoChoice(d));
-    const { id } = await createDesign({ ...evaluated, teamId: ids.teamId, userId: designer, name: d.name, project: d.project });
+    const { id } = await createDesign({
+      ...evaluated,
+      teamId: ids.teamId,
+      userId: designer,
+      name: d.name,
+      project: d.project,
+    });
     if (d.state === "draft") continue;
     const submitted = await changeDesignStatus({
       designId: id,
@@ -126,12 +134,40 @@ async function returnAndRevise(ids: DemoIds, id: string, d: DemoDesign, pick: No
     revision: 1,
   });
   if (!returned.ok) throw new Error(`demo design "${d.name}": ${returned.message}`);
-  await addReview({ designId: id, teamId: ids.teamId, actorId: designer, verdict: "comment", body: "Done in revision 2: smaller shunt, same gain range.", revision: 1, parentId: returned.id });
+  await addReview({
+    designId: id,
+    teamId: ids.teamId,
+    actorId: designer,
+    verdict: "comment",
+    body: "Done in revision 2: smaller shunt, same gain range.",
+    revision: 1,
+    parentId: returned.id,
+  });
   const evaluated = evaluateDesign(d.requirement, demoChoice(d, pick));
   const before = evaluateDesign(d.requirement, demoChoice(d));
-  const changed = changedFields({ requirement: before.requirement, choice: before.choice }, { requirement: evaluated.requirement, choice: evaluated.choice });
-  const revised = await reviseDesign({ ...evaluated, designId: id, teamId: ids.teamId, userId: designer, expectedRevision: 1, name: d.name, project: d.project, changed });
+  const changed = changedFields(
+    { requirement: before.requirement, choice: before.choice },
+    { requirement: evaluated.requirement, choice: evaluated.choice },
+  );
+  const revised = await reviseDesign({
+    ...evaluated,
+    designId: id,
+    teamId: ids.teamId,
+    userId: designer,
+    expectedRevision: 1,
+    name: d.name,
+    project: d.project,
+    changed,
+  });
   if (!revised.ok) throw new Error(`demo design "${d.name}": ${revised.message}`);
-  const again = await changeDesignStatus({ designId: id, teamId: ids.teamId, actorId: designer, revision: 2, from: ["draft"], to: "in-review", action: "design.submitted" });
+  const again = await changeDesignStatus({
+    designId: id,
+    teamId: ids.teamId,
+    actorId: designer,
+    revision: 2,
+    from: ["draft"],
+    to: "in-review",
+    action: "design.submitted",
+  });
   if (!again.ok) throw new Error(`demo design "${d.name}": ${again.message}`);
 }

@@ -76,17 +76,54 @@ export const demoAmplifiers: AmplifierInput[] = [
 ];
 
 export const demoShunts: ShuntInput[] = [
-  { name: "SW-MF thin-film chip, 0.1 %", series: "E96", minOhms: "0.1 ohm", maxOhms: "1 kohm", toleranceFraction: "0.1 %", tempcoPerK: "25 ppm/K", ratingsW: ["0.1 W", "0.125 W", "0.25 W"], fourTerminal: false },
-  { name: "SW-MS metal-strip low-ohm, 1 %", series: "E24", minOhms: "1 mohm", maxOhms: "100 mohm", toleranceFraction: "1 %", tempcoPerK: "75 ppm/K", ratingsW: ["0.5 W", "1 W", "2 W", "3 W"], fourTerminal: false },
-  { name: "SW-K4 four-terminal foil, 0.5 %", series: "E48", minOhms: "0.5 mohm", maxOhms: "50 mohm", toleranceFraction: "0.5 %", tempcoPerK: "50 ppm/K", ratingsW: ["1 W", "2 W", "3 W", "5 W"], fourTerminal: true },
-  { name: "SW-TF thick-film general, 1 %", series: "E96", minOhms: "10 ohm", maxOhms: "100 kohm", toleranceFraction: "1 %", tempcoPerK: "100 ppm/K", ratingsW: ["0.1 W", "0.25 W"], fourTerminal: false },
+  {
+    name: "SW-MF thin-film chip, 0.1 %",
+    series: "E96",
+    minOhms: "0.1 ohm",
+    maxOhms: "1 kohm",
+    toleranceFraction: "0.1 %",
+    tempcoPerK: "25 ppm/K",
+    ratingsW: ["0.1 W", "0.125 W", "0.25 W"],
+    fourTerminal: false,
+  },
+  {
+    name: "SW-MS metal-strip low-ohm, 1 %",
+    series: "E24",
+    minOhms: "1 mohm",
+    maxOhms: "100 mohm",
+    toleranceFraction: "1 %",
+    tempcoPerK: "75 ppm/K",
+    ratingsW: ["0.5 W", "1 W", "2 W", "3 W"],
+    fourTerminal: false,
+  },
+  {
+    name: "SW-K4 four-terminal foil, 0.5 %",
+    series: "E48",
+    minOhms: "0.5 mohm",
+    maxOhms: "50 mohm",
+    toleranceFraction: "0.5 %",
+    tempcoPerK: "50 ppm/K",
+    ratingsW: ["1 W", "2 W", "3 W", "5 W"],
+    fourTerminal: true,
+  },
+  {
+    name: "SW-TF thick-film general, 1 %",
+    series: "E96",
+    minOhms: "10 ohm",
+    maxOhms: "100 kohm",
+    toleranceFraction: "1 %",
+    tempcoPerK: "100 ppm/K",
+    ratingsW: ["0.1 W", "0.25 W"],
+    fourTerminal: false,
+  },
 ];
 
 /** Loads the demo parts into the demo team's library. */
 export async function seedDemoLibrary(ids: DemoIds): Promise<void> {
   const db = await getDb();
   await db.transaction(async (tx) => {
-    for (const a of demoAmplifiers) await tx.insert(libraryAmplifiers).values({ ...amplifierInput.parse(a), teamId: ids.teamId });
+    for (const a of demoAmplifiers)
+      await tx.insert(libraryAmplifiers).values({ ...amplifierInput.parse(a), teamId: ids.teamId });
     for (const s of demoShunts) await tx.insert(libraryShunts).values({ ...shuntInput.parse(s), teamId: ids.teamId });
   });
 }

@@ -134,7 +134,8 @@ export async function requirePageCaller(next?: string): Promise<Caller> {
   return caller;
 }
 
-export type ActionResult<T> = { ok: true; data: T } | { ok: false; message: string; fieldErrors?: Record<string, string[]> };
+export type ActionResult<T> =
+  { ok: true; data: T } | { ok: false; message: string; fieldErrors?: Record<string, string[]> };
 
 /** Wraps a server action the same way apiRoute wraps a route. */
 export function serverAction<I, T>(

@@ -42,7 +42,9 @@ export const authOptions: NextAuthOptions = {
           signInLimiters.byAddress.retryAfterMs(address),
         );
         if (wait > 0) {
-          throw new Error(`Too many failed sign-ins. Try again in ${minutes(wait)} minute${minutes(wait) === 1 ? "" : "s"}.`);
+          throw new Error(
+            `Too many failed sign-ins. Try again in ${minutes(wait)} minute${minutes(wait) === 1 ? "" : "s"}.`,
+          );
         }
         const user = await findUserByEmail(email);
         const ok = user ? await bcrypt.compare(password, user.passwordHash) : false;

@@ -3,7 +3,7 @@
 import { z } from "zod";
 import { buildNetlist } from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
-import { choiceSchema } from "@/lib/designs/service";
+import { choiceSchema } from "@/lib/saved-designs/service";
 import { designSlug } from "./slug";
 import { partsList, type Part } from "./parts";
 
@@ -20,11 +20,24 @@ export function attachment(fileName: string): string {
 }
 
 /** The design's SPICE netlist: exactly what POST /api/netlist gives for its requirement and choice. */
-export function designNetlist(view: Pick<DesignView, "requirement" | "choice">, opts: { includeOffset: boolean }): string {
+export function designNetlist(
+  view: Pick<DesignView, "requirement" | "choice">,
+  opts: { includeOffset: boolean },
+): string {
   return buildNetlist(view.requirement, view.choice, opts);
 }
 
-export const csvColumns = ["designator", "part", "value", "tolerance", "tempco", "rating", "notes", "value_si", "unit"] as const;
+export const csvColumns = [
+  "designator",
+  "part",
+  "value",
+  "tolerance",
+  "tempco",
+  "rating",
+  "notes",
+  "value_si",
+  "unit",
+] as const;
 
 function csvField(v: string): string {
   return /[",\r\n]/.test(v) ? `"${v.replace(/"/g, '""')}"` : v;
@@ -75,8 +88,16 @@ export const designImportSchema = z.object(
   {
     format: z.literal(EXPORT_FORMAT, { error: `format: expected "${EXPORT_FORMAT}" (a file exported from a design)` }),
     version: z.literal(EXPORT_VERSION, { error: `version: this build reads version ${EXPORT_VERSION} files` }),
-    name: z.string({ error: "name: expected text" }).trim().min(1, { error: "name: give the design a name" }).max(200, { error: "name: at most 200 characters" }),
-    project: z.string({ error: "project: expected text" }).trim().max(200, { error: "project: at most 200 characters" }).nullish(),
+    name: z
+      .string({ error: "name: expected text" })
+      .trim()
+      .min(1, { error: "name: give the design a name" })
+      .max(200, { error: "name: at most 200 characters" }),
+    project: z
+      .string({ error: "project: expected text" })
+      .trim()
+      .max(200, { error: "project: at most 200 characters" })
+      .nullish(),
     requirement: z.record(z.string(), z.unknown(), { error: "requirement: expected an object" }),
     choice: choiceSchema,
   },

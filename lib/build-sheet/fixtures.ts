@@ -1,6 +1,13 @@
 // Designs for tests and the benchmark, built from the engine: the demo team's soil-moisture
 // logger (its radio-burst range, low side) and its pump controller (high side, 24 V, 6 A).
-import { evaluateCandidate, parseRequirement, solve, type Choice, type Requirement, type RequirementInput } from "@/lib/design";
+import {
+  evaluateCandidate,
+  parseRequirement,
+  solve,
+  type Choice,
+  type Requirement,
+  type RequirementInput,
+} from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
 import type { DesignStatus } from "@/db/schema";
 

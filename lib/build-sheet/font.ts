@@ -44,7 +44,9 @@ function openSource(subset: string): FkFont {
   try {
     bytes = readFileSync(file);
   } catch {
-    throw new Error(`The build sheet's typeface is missing (${file}); start the app from its own directory with its dependencies installed.`);
+    throw new Error(
+      `The build sheet's typeface is missing (${file}); start the app from its own directory with its dependencies installed.`,
+    );
   }
   return fontkit.create(bytes) as unknown as FkFont;
 }
@@ -290,7 +292,8 @@ function patch16(t: Uint8Array, at: number, v: number) {
 function checksum(b: Uint8Array): number {
   let sum = 0;
   for (let i = 0; i < b.length; i += 4) {
-    sum = (sum + (((b[i] ?? 0) << 24) >>> 0) + ((b[i + 1] ?? 0) << 16) + ((b[i + 2] ?? 0) << 8) + (b[i + 3] ?? 0)) >>> 0;
+    sum =
+      (sum + (((b[i] ?? 0) << 24) >>> 0) + ((b[i + 1] ?? 0) << 16) + ((b[i + 2] ?? 0) << 8) + (b[i + 3] ?? 0)) >>> 0;
   }
   return sum;
 }
@@ -404,7 +407,10 @@ function buildTtf({ base, glyphs, cmap }: Source, bold: boolean): Uint8Array {
   }
   const font = out.done();
   const adjust = (0xb1b0afba - checksum(font)) >>> 0;
-  const headAt = 12 + tags.length * 16 + tags.slice(0, tags.indexOf("head")).reduce((s, t) => s + Math.ceil(tables[t]!.length / 4) * 4, 0);
+  const headAt =
+    12 +
+    tags.length * 16 +
+    tags.slice(0, tags.indexOf("head")).reduce((s, t) => s + Math.ceil(tables[t]!.length / 4) * 4, 0);
   font[headAt + 8] = adjust >>> 24;
   font[headAt + 9] = (adjust >>> 16) & 0xff;
   font[headAt + 10] = (adjust >>> 8) & 0xff;

@@ -31,7 +31,8 @@ export function kelvinAdvice(shuntOhms: number): KelvinAdvice {
 
 const kelvinText: Record<KelvinAdvice, string> = {
   part: "4-terminal (Kelvin) shunt required: at this value the solder joints and copper would be a large part of the resistance; sense from its sense terminals only",
-  footprint: "Use a 4-pad Kelvin footprint (or a 4-terminal part): sense traces leave from the inner edges of the pads, current from the outer",
+  footprint:
+    "Use a 4-pad Kelvin footprint (or a 4-terminal part): sense traces leave from the inner edges of the pads, current from the outer",
   pads: "2-terminal part is fine; take the sense traces from the inner edges of the pads, not from the current path",
 };
 
@@ -44,7 +45,11 @@ export function gainResistors(req: Requirement, choice: Choice): { rfOhms: numbe
   return resistorPairFor(choice.gain, set.series);
 }
 
-export function partsList(req: Requirement, choice: Choice, metrics: CandidateDetail = evaluateCandidate(req, choice)): Part[] {
+export function partsList(
+  req: Requirement,
+  choice: Choice,
+  metrics: CandidateDetail = evaluateCandidate(req, choice),
+): Part[] {
   const a = req.amplifier;
   const s = req.shunt;
   const high = req.supply.side === "high";
@@ -68,7 +73,9 @@ export function partsList(req: Requirement, choice: Choice, metrics: CandidateDe
     },
     {
       designator: "U1",
-      part: pair ? "Precision amplifier, non-inverting stage (zero-drift op-amp or instrumentation amplifier)" : "Current-sense amplifier, fixed gain",
+      part: pair
+        ? "Precision amplifier, non-inverting stage (zero-drift op-amp or instrumentation amplifier)"
+        : "Current-sense amplifier, fixed gain",
       value: `Gain ${f.gain(choice.gain)}`,
       valueSI: choice.gain,
       unit: "V/V",
@@ -85,10 +92,31 @@ export function partsList(req: Requirement, choice: Choice, metrics: CandidateDe
     },
   ];
   if (pair) {
-    const note = "Sets the gain with R3 (G = 1 + R2/R3); 0.1 % and 25 ppm/K or better, same type for both so their drift tracks (common practice, no source).";
+    const note =
+      "Sets the gain with R3 (G = 1 + R2/R3); 0.1 % and 25 ppm/K or better, same type for both so their drift tracks (common practice, no source).";
     parts.push(
-      { designator: "R2", part: `Feedback resistor, ${req.amplifier.gainSet!.series} value`, value: f.ohms(pair.rfOhms), valueSI: pair.rfOhms, unit: "ohm", tolerance: "±0.1 %", tempco: "25 ppm/K or better", rating: f.watts(0.063), notes: note },
-      { designator: "R3", part: `Gain resistor, ${req.amplifier.gainSet!.series} value`, value: f.ohms(pair.rgOhms), valueSI: pair.rgOhms, unit: "ohm", tolerance: "±0.1 %", tempco: "25 ppm/K or better", rating: f.watts(0.063), notes: "Pairs with R2; place both next to U1." },
+      {
+        designator: "R2",
+        part: `Feedback resistor, ${req.amplifier.gainSet!.series} value`,
+        value: f.ohms(pair.rfOhms),
+        valueSI: pair.rfOhms,
+        unit: "ohm",
+        tolerance: "±0.1 %",
+        tempco: "25 ppm/K or better",
+        rating: f.watts(0.063),
+        notes: note,
+      },
+      {
+        designator: "R3",
+        part: `Gain resistor, ${req.amplifier.gainSet!.series} value`,
+        value: f.ohms(pair.rgOhms),
+        valueSI: pair.rgOhms,
+        unit: "ohm",
+        tolerance: "±0.1 %",
+        tempco: "25 ppm/K or better",
+        rating: f.watts(0.063),
+        notes: "Pairs with R2; place both next to U1.",
+      },
     );
   }
   parts.push(

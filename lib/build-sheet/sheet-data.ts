@@ -43,12 +43,13 @@ const MAX_LISTED_GAINS = 12;
 
 export function requirementRows(req: Requirement): Row[] {
   const c = req.current;
-  const rows: Row[] = [
-    { label: "Current span", value: `${f.amps(c.min)} to ${f.amps(c.max)}` },
-  ];
+  const rows: Row[] = [{ label: "Current span", value: `${f.amps(c.min)} to ${f.amps(c.max)}` }];
   if (c.typical !== undefined) rows.push({ label: "Typical current", value: f.amps(c.typical) });
   rows.push(
-    { label: "Supply", value: `${f.volts(req.supply.voltage)}, ${req.supply.side === "high" ? "high-side" : "low-side"} shunt` },
+    {
+      label: "Supply",
+      value: `${f.volts(req.supply.voltage)}, ${req.supply.side === "high" ? "high-side" : "low-side"} shunt`,
+    },
     { label: "Allowed drop at maximum current", value: f.volts(req.drop.max) },
   );
   if (req.drop.loadMin !== undefined) rows.push({ label: "Minimum load voltage", value: f.volts(req.drop.loadMin) });
@@ -56,7 +57,10 @@ export function requirementRows(req: Requirement): Row[] {
     { label: "Load", value: req.load.model.replace("-", " ") },
     { label: "Readout", value: readoutText(req) },
     { label: "Counts at minimum current", value: `at least ${formatCount(req.resolution.countsAtMin)}` },
-    { label: "Accuracy target", value: `${f.percent(req.accuracy.percent)} of reading from ${f.amps(req.accuracy.bandMin)} to ${f.amps(req.accuracy.bandMax)}` },
+    {
+      label: "Accuracy target",
+      value: `${f.percent(req.accuracy.percent)} of reading from ${f.amps(req.accuracy.bandMin)} to ${f.amps(req.accuracy.bandMax)}`,
+    },
     { label: "Ambient temperature", value: `${f.celsius(req.temperature.min)} to ${f.celsius(req.temperature.max)}` },
   );
   if (req.bandwidth.min > 0) rows.push({ label: "Bandwidth", value: `at least ${f.hertz(req.bandwidth.min)}` });
@@ -80,16 +84,28 @@ function formatCount(n: number): string {
 
 export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
   const rows: Row[] = [
-    { label: "Drop at maximum current", value: `${f.volts(m.burdenV)} (${f.fraction(m.burdenV / req.supply.voltage)} of the supply)` },
+    {
+      label: "Drop at maximum current",
+      value: `${f.volts(m.burdenV)} (${f.fraction(m.burdenV / req.supply.voltage)} of the supply)`,
+    },
     { label: "Load voltage at maximum current", value: f.volts(m.loadVoltageV) },
-    { label: "Scale factor", value: `${f.transimpedance(m.transimpedanceVPerA)}: ${f.decadeScale(m.transimpedanceVPerA)}` },
+    {
+      label: "Scale factor",
+      value: `${f.transimpedance(m.transimpedanceVPerA)}: ${f.decadeScale(m.transimpedanceVPerA)}`,
+    },
     { label: "Output at maximum current", value: `${f.volts(m.outputAtMaxV)} (headroom ${f.volts(m.headroomV)})` },
     { label: "Readout step (LSB) in current", value: f.amps(m.lsbA) },
     { label: "Counts at minimum current", value: formatCount(m.countsAtMin) },
-    { label: "Error at minimum current (worst case)", value: `${f.percent(m.errorAtMinPercent)} of reading (RSS ${f.percent(m.rssAtMinPercent)})` },
+    {
+      label: "Error at minimum current (worst case)",
+      value: `${f.percent(m.errorAtMinPercent)} of reading (RSS ${f.percent(m.rssAtMinPercent)})`,
+    },
   ];
   if (m.errorAtTypicalPercent !== null && req.current.typical !== undefined) {
-    rows.push({ label: `Error at the typical current (${f.amps(req.current.typical)})`, value: `${f.percent(m.errorAtTypicalPercent)} of reading` });
+    rows.push({
+      label: `Error at the typical current (${f.amps(req.current.typical)})`,
+      value: `${f.percent(m.errorAtTypicalPercent)} of reading`,
+    });
   }
   rows.push(
     { label: "Error at maximum current (worst case)", value: `${f.percent(m.errorAtMaxPercent)} of reading` },
@@ -99,9 +115,16 @@ export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
     },
     { label: "Bandwidth (−3 dB)", value: f.hertz(m.bandwidthHz) },
     { label: "Dissipation at maximum current", value: `${f.watts(m.dissipationW)} in a ${f.watts(m.ratingW)} part` },
-    { label: "Self-heating at maximum current", value: `${f.kelvin(m.selfHeatingK)} (shunt up to about ${f.celsius(req.temperature.max + m.selfHeatingK)})` },
+    {
+      label: "Self-heating at maximum current",
+      value: `${f.kelvin(m.selfHeatingK)} (shunt up to about ${f.celsius(req.temperature.max + m.selfHeatingK)})`,
+    },
   );
-  if (m.deadZoneA > 0) rows.push({ label: "Reads as zero below", value: `${f.amps(m.deadZoneA)} (output floor ${f.volts(req.amplifier.swingLow)})` });
+  if (m.deadZoneA > 0)
+    rows.push({
+      label: "Reads as zero below",
+      value: `${f.amps(m.deadZoneA)} (output floor ${f.volts(req.amplifier.swingLow)})`,
+    });
   return rows;
 }
 

@@ -11,4 +11,3 @@ export function designSlug(name: string): string {
     .replace(/-+$/g, "");
   return slug || "design";
 }
-

@@ -3,7 +3,8 @@ import { demoAmplifiers, demoShunts } from "@/db/seed/library";
 import { libraryToCsv, parseLibraryCsv } from "./csv";
 import { amplifierInput, shuntInput } from "./schema";
 
-const ampHeader = "name,gainMode,gains,offsetV,offsetDriftVPerK,gainErrorFraction,gainDriftPerK,biasCurrentA,noiseDensityVPerRtHz,gbwHz,swingLowV,swingHighV,cmrrDb,supplyMinV,supplyMaxV";
+const ampHeader =
+  "name,gainMode,gains,offsetV,offsetDriftVPerK,gainErrorFraction,gainDriftPerK,biasCurrentA,noiseDensityVPerRtHz,gbwHz,swingLowV,swingHighV,cmrrDb,supplyMinV,supplyMaxV";
 
 function refusal(kind: "amplifiers" | "shunts", text: string) {
   const r = parseLibraryCsv(kind, text);
@@ -35,7 +36,14 @@ describe("library CSV", () => {
     );
     expect(r.ok).toBe(true);
     if (!r.ok || r.parts.kind !== "shunts") return;
-    expect(r.parts.rows[0]).toMatchObject({ minOhms: 0.001, maxOhms: 0.1, toleranceFraction: 0.01, tempcoPerK: 50e-6, ratingsW: [0.5, 1], fourTerminal: true });
+    expect(r.parts.rows[0]).toMatchObject({
+      minOhms: 0.001,
+      maxOhms: 0.1,
+      toleranceFraction: 0.01,
+      tempcoPerK: 50e-6,
+      ratingsW: [0.5, 1],
+      fourTerminal: true,
+    });
   });
 
   it("refuses naming the row and the column", () => {
@@ -43,18 +51,37 @@ describe("library CSV", () => {
     expect(refusal("shunts", `${base}A,E24,0.001,0.1,0.01,5e-5,1,no\nB,E24,abc,0.1,0.01,5e-5,1,no\n`).message).toBe(
       'Data row 2 (file line 3), column "minOhms": cannot read "abc" as a resistance (try a number with a unit, e.g. "4.7 mohm")',
     );
-    expect(refusal("shunts", `${base.replace("minOhms", "minOhms [mohm]")}A,E24,abc,0.1,0.01,5e-5,1,no\n`).message).toMatch(/"abc" is not a number/);
-    expect(refusal("shunts", `${base}A,E24,NaN,0.1,0.01,5e-5,1,no\n`).place).toEqual({ row: 1, line: 2, column: "minOhms" });
+    expect(
+      refusal("shunts", `${base.replace("minOhms", "minOhms [mohm]")}A,E24,abc,0.1,0.01,5e-5,1,no\n`).message,
+    ).toMatch(/"abc" is not a number/);
+    expect(refusal("shunts", `${base}A,E24,NaN,0.1,0.01,5e-5,1,no\n`).place).toEqual({
+      row: 1,
+      line: 2,
+      column: "minOhms",
+    });
     expect(refusal("shunts", `${base}A,E25,0.001,0.1,0.01,5e-5,1,no\n`).place.column).toBe("series");
     expect(refusal("shunts", `${base}A,E24,0.2,0.1,0.01,5e-5,1,no\n`).place.column).toBe("maxOhms");
-    expect(refusal("shunts", `${base}A,E24,0.001,0.1,0.01,5e-5,1,no\na,E24,0.001,0.1,0.01,5e-5,1,no\n`).message).toMatch(/already used by data row 1/);
-    expect(refusal("shunts", "name,series,minOhms [V],maxOhms,toleranceFraction,tempcoPerK,ratingsW,fourTerminal\n").message).toMatch(
-      /column "minOhms \[V\]": unit "V" is a voltage, not a resistance/,
+    expect(
+      refusal("shunts", `${base}A,E24,0.001,0.1,0.01,5e-5,1,no\na,E24,0.001,0.1,0.01,5e-5,1,no\n`).message,
+    ).toMatch(/already used by data row 1/);
+    expect(
+      refusal("shunts", "name,series,minOhms [V],maxOhms,toleranceFraction,tempcoPerK,ratingsW,fourTerminal\n").message,
+    ).toMatch(/column "minOhms \[V\]": unit "V" is a voltage, not a resistance/);
+    expect(
+      refusal("shunts", "name,series,minOhms [zz],maxOhms,toleranceFraction,tempcoPerK,ratingsW,fourTerminal\n").place
+        .column,
+    ).toBe("minOhms [zz]");
+    expect(refusal("shunts", "name,series,minOhms,maxOhms,toleranceFraction,tempcoPerK,ratingsW\n").message).toMatch(
+      /"fourTerminal" is missing/,
     );
-    expect(refusal("shunts", "name,series,minOhms [zz],maxOhms,toleranceFraction,tempcoPerK,ratingsW,fourTerminal\n").place.column).toBe("minOhms [zz]");
-    expect(refusal("shunts", "name,series,minOhms,maxOhms,toleranceFraction,tempcoPerK,ratingsW\n").message).toMatch(/"fourTerminal" is missing/);
     expect(refusal("shunts", `${base.trim()},colour\n`).place.column).toBe("colour");
-    expect(refusal("shunts", `${base}A,E24,5 V,0.1,0.01,5e-5,1,no\n`).message).toMatch(/5 V is a voltage, not a resistance/);
-    expect(refusal("amplifiers", `${ampHeader}\nX,fixed,10;inf,0,0,0,0,0,0,1e6,0,0,100,3,5\n`).place).toEqual({ row: 1, line: 2, column: "gains" });
+    expect(refusal("shunts", `${base}A,E24,5 V,0.1,0.01,5e-5,1,no\n`).message).toMatch(
+      /5 V is a voltage, not a resistance/,
+    );
+    expect(refusal("amplifiers", `${ampHeader}\nX,fixed,10;inf,0,0,0,0,0,0,1e6,0,0,100,3,5\n`).place).toEqual({
+      row: 1,
+      line: 2,
+      column: "gains",
+    });
   });
 });

@@ -4,7 +4,15 @@
 import Papa from "papaparse";
 import type { z } from "zod";
 import { parseQuantity, type Dimension } from "@/lib/design";
-import { CsvRefusal, headerKey, readNumberCell, splitHeaderUnit, truncate, unitScale, walkCsv } from "@/lib/profile/csv";
+import {
+  CsvRefusal,
+  headerKey,
+  readNumberCell,
+  splitHeaderUnit,
+  truncate,
+  unitScale,
+  walkCsv,
+} from "@/lib/profile/csv";
 import { amplifierInput, shuntInput, type AmplifierValues, type PartKind, type ShuntValues } from "./schema";
 
 type Cell = "text" | "number" | "list" | "quantityList" | "bool" | Dimension;
@@ -28,10 +36,20 @@ export const amplifierColumns: ColumnSpec[] = [
   { key: "gainErrorFraction", aliases: ["gainerror"], cell: "fraction", label: "Gain error" },
   { key: "gainDriftPerK", aliases: ["gaindrift"], cell: "tempco", label: "Gain drift" },
   { key: "biasCurrentA", aliases: ["biascurrent", "bias", "ib"], cell: "current", label: "Input bias current" },
-  { key: "noiseDensityVPerRtHz", aliases: ["noisedensity", "noise", "en"], cell: "noiseDensity", label: "Input noise density" },
+  {
+    key: "noiseDensityVPerRtHz",
+    aliases: ["noisedensity", "noise", "en"],
+    cell: "noiseDensity",
+    label: "Input noise density",
+  },
   { key: "gbwHz", aliases: ["gbw", "gainbandwidth"], cell: "frequency", label: "Gain-bandwidth" },
   { key: "swingLowV", aliases: ["swinglow", "outputlow"], cell: "voltage", label: "Lowest output above ground" },
-  { key: "swingHighV", aliases: ["swinghigh", "outputheadroom", "headroom"], cell: "voltage", label: "Output headroom below the supply" },
+  {
+    key: "swingHighV",
+    aliases: ["swinghigh", "outputheadroom", "headroom"],
+    cell: "voltage",
+    label: "Output headroom below the supply",
+  },
   { key: "cmrrDb", aliases: ["cmrr"], cell: "number", label: "CMRR (dB)" },
   { key: "supplyMinV", aliases: ["supplymin", "minsupply"], cell: "voltage", label: "Lowest supply" },
   { key: "supplyMaxV", aliases: ["supplymax", "maxsupply"], cell: "voltage", label: "Highest supply" },
@@ -44,7 +62,13 @@ export const shuntColumns: ColumnSpec[] = [
   { key: "maxOhms", aliases: ["max", "maxvalue", "largest"], cell: "resistance", label: "Largest value" },
   { key: "toleranceFraction", aliases: ["tolerance"], cell: "fraction", label: "Tolerance" },
   { key: "tempcoPerK", aliases: ["tempco", "tcr"], cell: "tempco", label: "Tempco" },
-  { key: "ratingsW", aliases: ["ratings", "rating", "power"], cell: "quantityList", dim: "power", label: "Power ratings" },
+  {
+    key: "ratingsW",
+    aliases: ["ratings", "rating", "power"],
+    cell: "quantityList",
+    dim: "power",
+    label: "Power ratings",
+  },
   { key: "fourTerminal", aliases: ["4terminal", "kelvin"], cell: "bool", label: "4-terminal" },
 ];
 
@@ -69,7 +93,8 @@ function readHeader(kind: PartKind, cells: string[], line: number): HeaderColumn
         { line, column: label || `column ${index + 1}` },
       );
     }
-    if (found.some((f) => f.spec === spec)) return new CsvRefusal(`the column "${spec.key}" appears twice`, { line, column: label });
+    if (found.some((f) => f.spec === spec))
+      return new CsvRefusal(`the column "${spec.key}" appears twice`, { line, column: label });
     let scale: number | null = null;
     if (unit !== null) {
       const dim = spec.cell === "quantityList" ? spec.dim : isDimension(spec.cell) ? spec.cell : null;
@@ -82,10 +107,13 @@ function readHeader(kind: PartKind, cells: string[], line: number): HeaderColumn
   }
   const missing = specs.filter((s) => !found.some((f) => f.spec === s));
   if (missing.length) {
-    return new CsvRefusal(`the column${missing.length > 1 ? "s" : ""} ${missing.map((m) => `"${m.key}"`).join(", ")} ${missing.length > 1 ? "are" : "is"} missing`, {
-      line,
-      column: missing[0]!.key,
-    });
+    return new CsvRefusal(
+      `the column${missing.length > 1 ? "s" : ""} ${missing.map((m) => `"${m.key}"`).join(", ")} ${missing.length > 1 ? "are" : "is"} missing`,
+      {
+        line,
+        column: missing[0]!.key,
+      },
+    );
   }
   return found;
 }
@@ -113,7 +141,8 @@ function splitList(raw: string): string[] {
   const text = raw.trim();
   if (text === "") return [];
   const parts = text.split(/[;|]/).map((p) => p.trim());
-  if (parts.length === 1 && /\s/.test(text) && text.split(/\s+/).every((p) => readNumberCell(p).ok)) return text.split(/\s+/);
+  if (parts.length === 1 && /\s/.test(text) && text.split(/\s+/).every((p) => readNumberCell(p).ok))
+    return text.split(/\s+/);
   return parts;
 }
 
@@ -138,7 +167,8 @@ function readCell(col: HeaderColumn, raw: string): CellResult {
         if (!r.ok) return { ok: false, reason: `in the list "${truncate(raw.trim())}": ${r.reason}` };
         values.push(r.value as number);
       }
-      if (values.length === 0) return { ok: false, reason: "the list is empty; separate values with ; (e.g. 10;20;50)" };
+      if (values.length === 0)
+        return { ok: false, reason: "the list is empty; separate values with ; (e.g. 10;20;50)" };
       return { ok: true, value: values };
     }
     default:
@@ -146,12 +176,13 @@ function readCell(col: HeaderColumn, raw: string): CellResult {
   }
 }
 
-export type ImportedParts =
-  | { kind: "amplifiers"; rows: AmplifierValues[] }
-  | { kind: "shunts"; rows: ShuntValues[] };
+export type ImportedParts = { kind: "amplifiers"; rows: AmplifierValues[] } | { kind: "shunts"; rows: ShuntValues[] };
 
 /** Parses a whole library CSV; the first problem refuses the file (nothing is imported). */
-export function parseLibraryCsv(kind: PartKind, text: string): { ok: true; parts: ImportedParts } | { ok: false; refusal: CsvRefusal } {
+export function parseLibraryCsv(
+  kind: PartKind,
+  text: string,
+): { ok: true; parts: ImportedParts } | { ok: false; refusal: CsvRefusal } {
   const schema: z.ZodType = kind === "amplifiers" ? amplifierInput : shuntInput;
   let header = null as HeaderColumn[] | null;
   const rows: unknown[] = [];
@@ -166,7 +197,11 @@ export function parseLibraryCsv(kind: PartKind, text: string): { ok: true; parts
     row(cells, row, line) {
       if (!header) return;
       if (row > 10_000) return new CsvRefusal("the file has more than 10000 parts", { row, line });
-      if (cells.length !== header.length) return new CsvRefusal(`the row has ${cells.length} cells but the header has ${header.length} columns`, { row, line });
+      if (cells.length !== header.length)
+        return new CsvRefusal(`the row has ${cells.length} cells but the header has ${header.length} columns`, {
+          row,
+          line,
+        });
       const values: Record<string, unknown> = {};
       for (const col of header) {
         const r = readCell(col, cells[col.index] ?? "");
@@ -178,12 +213,19 @@ export function parseLibraryCsv(kind: PartKind, text: string): { ok: true; parts
       if (!parsed.success) {
         const issue = parsed.error.issues[0]!;
         const key = String(issue.path[0] ?? "name");
-        return new CsvRefusal(issue.message, { row, line, column: header.find((c) => c.spec.key === key)?.label ?? key });
+        return new CsvRefusal(issue.message, {
+          row,
+          line,
+          column: header.find((c) => c.spec.key === key)?.label ?? key,
+        });
       }
       const name = String(values.name).toLowerCase();
       const seen = names.get(name);
       if (seen !== undefined) {
-        return new CsvRefusal(`the name "${truncate(String(values.name))}" is already used by data row ${seen}; each part needs its own name`, { row, line, column: nameColumn });
+        return new CsvRefusal(
+          `the name "${truncate(String(values.name))}" is already used by data row ${seen}; each part needs its own name`,
+          { row, line, column: nameColumn },
+        );
       }
       names.set(name, row);
       rows.push(parsed.data);
@@ -191,9 +233,19 @@ export function parseLibraryCsv(kind: PartKind, text: string): { ok: true; parts
   });
   const refusal = walk.refusal;
   if (refusal) return { ok: false, refusal };
-  if (!header) return { ok: false, refusal: new CsvRefusal(`the file is empty; the first line must name the columns ${columnsOf[kind].map((c) => c.key).join(", ")}`, { line: 1 }) };
+  if (!header)
+    return {
+      ok: false,
+      refusal: new CsvRefusal(
+        `the file is empty; the first line must name the columns ${columnsOf[kind].map((c) => c.key).join(", ")}`,
+        { line: 1 },
+      ),
+    };
   if (rows.length === 0) return { ok: false, refusal: new CsvRefusal("the file has a header but no parts") };
-  return { ok: true, parts: kind === "amplifiers" ? { kind, rows: rows as AmplifierValues[] } : { kind, rows: rows as ShuntValues[] } };
+  return {
+    ok: true,
+    parts: kind === "amplifiers" ? { kind, rows: rows as AmplifierValues[] } : { kind, rows: rows as ShuntValues[] },
+  };
 }
 
 function cellText(value: unknown): string {

@@ -18,7 +18,10 @@ export type FieldSpec = {
 const si = (unit: string) => (v: unknown) => (typeof v === "number" ? formatSI(v, unit) : "");
 const ppm = (v: unknown) => (typeof v === "number" ? `${Number((v * 1e6).toPrecision(3))} ppm/K` : "");
 const percent = (v: unknown) => (typeof v === "number" ? `${Number((v * 100).toPrecision(3))} %` : "");
-const list = (fmt: (v: unknown) => string, sep = ", ") => (v: unknown) => (Array.isArray(v) ? v.map(fmt).join(sep) : "");
+const list =
+  (fmt: (v: unknown) => string, sep = ", ") =>
+  (v: unknown) =>
+    Array.isArray(v) ? v.map(fmt).join(sep) : "";
 const plain = (v: unknown) => (v === undefined || v === null ? "" : String(v));
 
 export const amplifierFields: FieldSpec[] = [
@@ -33,13 +36,25 @@ export const amplifierFields: FieldSpec[] = [
       { value: "resistor-set", label: "Set by a resistor pair (lowest–highest)" },
     ],
   },
-  { key: "gains", label: "Gains", kind: "numberList", show: list(plain), hint: "Fixed: each gain, e.g. 20, 50, 100. Resistor-set: lowest and highest, e.g. 1, 1000." },
+  {
+    key: "gains",
+    label: "Gains",
+    kind: "numberList",
+    show: list(plain),
+    hint: "Fixed: each gain, e.g. 20, 50, 100. Resistor-set: lowest and highest, e.g. 1, 1000.",
+  },
   { key: "offsetV", label: "Input offset", kind: "quantity", show: si("V"), hint: "e.g. 35 uV" },
   { key: "offsetDriftVPerK", label: "Offset drift", kind: "quantity", show: si("V/K"), hint: "e.g. 0.1 uV/K" },
   { key: "gainErrorFraction", label: "Gain error", kind: "quantity", show: percent, hint: "e.g. 0.2 %" },
   { key: "gainDriftPerK", label: "Gain drift", kind: "quantity", show: ppm, hint: "e.g. 10 ppm/K" },
   { key: "biasCurrentA", label: "Input bias current", kind: "quantity", show: si("A"), hint: "e.g. 20 nA" },
-  { key: "noiseDensityVPerRtHz", label: "Input noise density", kind: "quantity", show: si("V/√Hz"), hint: "e.g. 40 nV/rtHz" },
+  {
+    key: "noiseDensityVPerRtHz",
+    label: "Input noise density",
+    kind: "quantity",
+    show: si("V/√Hz"),
+    hint: "e.g. 40 nV/rtHz",
+  },
   { key: "gbwHz", label: "Gain-bandwidth", kind: "quantity", show: si("Hz"), hint: "e.g. 400 kHz" },
   { key: "swingLowV", label: "Lowest output above ground", kind: "quantity", show: si("V"), hint: "e.g. 10 mV" },
   { key: "swingHighV", label: "Output headroom below the supply", kind: "quantity", show: si("V"), hint: "e.g. 30 mV" },
@@ -81,7 +96,10 @@ export const tableColumnsOf: Record<PartKind, TableColumn[]> = {
     {
       key: "gains",
       label: "Gains",
-      show: (p) => (p.gainMode === "resistor-set" && Array.isArray(p.gains) ? `${p.gains.join("–")} (resistor pair)` : list(plain)(p.gains)),
+      show: (p) =>
+        p.gainMode === "resistor-set" && Array.isArray(p.gains)
+          ? `${p.gains.join("–")} (resistor pair)`
+          : list(plain)(p.gains),
     },
     column("amplifiers", "offsetV", "Offset"),
     column("amplifiers", "offsetDriftVPerK", "Drift"),
@@ -107,7 +125,8 @@ export function formToBody(kind: PartKind, form: Record<string, string | boolean
   for (const f of fieldsOf[kind]) {
     const raw = form[f.key];
     if (f.kind === "checkbox") body[f.key] = raw === true;
-    else if (f.kind === "numberList") body[f.key] = splitItems(String(raw ?? "")).map((s) => (Number.isFinite(Number(s)) ? Number(s) : s));
+    else if (f.kind === "numberList")
+      body[f.key] = splitItems(String(raw ?? "")).map((s) => (Number.isFinite(Number(s)) ? Number(s) : s));
     else if (f.kind === "quantityList") body[f.key] = splitItems(String(raw ?? ""));
     else if (f.kind === "number") body[f.key] = String(raw ?? "").trim() === "" ? "" : Number(raw);
     else body[f.key] = String(raw ?? "").trim();

@@ -21,7 +21,8 @@ const positive = (dim: Dimension, label: string) =>
 const fractionBelowHalf = (label: string) =>
   quantity("fraction", label).check(
     z.superRefine((v: number, ctx) => {
-      if (!(v >= 0 && v < 0.5)) ctx.addIssue({ code: "custom", message: `${label} must be between 0 and 50 % (e.g. 0.001 or "0.1 %")` });
+      if (!(v >= 0 && v < 0.5))
+        ctx.addIssue({ code: "custom", message: `${label} must be between 0 and 50 % (e.g. 0.001 or "0.1 %")` });
     }),
   );
 
@@ -33,11 +34,20 @@ const partName = z
 
 export const amplifierObject = z.object({
   name: partName,
-  gainMode: z.enum(gainModes, { error: 'Gain mode: expected "fixed" (a list of gains) or "resistor-set" (a lowest and a highest gain set by a resistor pair)' }),
+  gainMode: z.enum(gainModes, {
+    error:
+      'Gain mode: expected "fixed" (a list of gains) or "resistor-set" (a lowest and a highest gain set by a resistor pair)',
+  }),
   gains: z
-    .array(z.number({ error: "Each gain must be a number" }).positive({ error: "Each gain must be above zero" }).max(100_000, { error: "Each gain must be at most 100000" }), {
-      error: "Gains: expected a list of numbers",
-    })
+    .array(
+      z
+        .number({ error: "Each gain must be a number" })
+        .positive({ error: "Each gain must be above zero" })
+        .max(100_000, { error: "Each gain must be at most 100000" }),
+      {
+        error: "Gains: expected a list of numbers",
+      },
+    )
     .min(1, { error: "Give at least one gain" })
     .max(64, { error: "At most 64 gains" }),
   offsetV: nonNegative("voltage", "Input offset"),
@@ -49,20 +59,41 @@ export const amplifierObject = z.object({
   gbwHz: positive("frequency", "Gain-bandwidth"),
   swingLowV: nonNegative("voltage", "Lowest output above ground"),
   swingHighV: nonNegative("voltage", "Output headroom below the supply"),
-  cmrrDb: z.number({ error: "CMRR: expected a number of dB" }).min(0, { error: "CMRR cannot be negative" }).max(200, { error: "CMRR must be at most 200 dB" }),
+  cmrrDb: z
+    .number({ error: "CMRR: expected a number of dB" })
+    .min(0, { error: "CMRR cannot be negative" })
+    .max(200, { error: "CMRR must be at most 200 dB" }),
   supplyMinV: positive("voltage", "Lowest supply"),
   supplyMaxV: positive("voltage", "Highest supply"),
 });
 
 function amplifierRules(a: z.output<typeof amplifierObject>, ctx: z.RefinementCtx) {
-  if (a.supplyMinV > a.supplyMaxV) ctx.addIssue({ code: "custom", path: ["supplyMaxV"], message: "Highest supply must not be below the lowest supply" });
+  if (a.supplyMinV > a.supplyMaxV)
+    ctx.addIssue({
+      code: "custom",
+      path: ["supplyMaxV"],
+      message: "Highest supply must not be below the lowest supply",
+    });
   if (a.gainMode === "resistor-set") {
-    if (a.gains.length !== 2) ctx.addIssue({ code: "custom", path: ["gains"], message: "A resistor-set gain takes two numbers: the lowest and the highest gain" });
+    if (a.gains.length !== 2)
+      ctx.addIssue({
+        code: "custom",
+        path: ["gains"],
+        message: "A resistor-set gain takes two numbers: the lowest and the highest gain",
+      });
     else if (a.gains[0]! < 1 || a.gains[0]! > a.gains[1]!)
-      ctx.addIssue({ code: "custom", path: ["gains"], message: "Resistor-set gains: the lowest must be at least 1 and not above the highest" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["gains"],
+        message: "Resistor-set gains: the lowest must be at least 1 and not above the highest",
+      });
   }
   if (a.swingLowV + a.swingHighV >= a.supplyMinV)
-    ctx.addIssue({ code: "custom", path: ["swingLowV"], message: "The output swing limits leave no room at the lowest supply" });
+    ctx.addIssue({
+      code: "custom",
+      path: ["swingLowV"],
+      message: "The output swing limits leave no room at the lowest supply",
+    });
 }
 
 export const amplifierInput = amplifierObject.superRefine(amplifierRules);
@@ -74,7 +105,9 @@ export const shuntObject = z.object({
   name: partName,
   series: z
     .string({ error: "Series: expected a series name such as E96" })
-    .refine(isSeriesName, { error: (iss) => `Series: unknown series "${String(iss.input)}"; use one of ${seriesNames.join(", ")}` }),
+    .refine(isSeriesName, {
+      error: (iss) => `Series: unknown series "${String(iss.input)}"; use one of ${seriesNames.join(", ")}`,
+    }),
   minOhms: positive("resistance", "Smallest value"),
   maxOhms: positive("resistance", "Largest value"),
   toleranceFraction: fractionBelowHalf("Tolerance"),
@@ -87,7 +120,8 @@ export const shuntObject = z.object({
 });
 
 function shuntRules(s: z.output<typeof shuntObject>, ctx: z.RefinementCtx) {
-  if (s.minOhms > s.maxOhms) ctx.addIssue({ code: "custom", path: ["maxOhms"], message: "Largest value must not be below the smallest value" });
+  if (s.minOhms > s.maxOhms)
+    ctx.addIssue({ code: "custom", path: ["maxOhms"], message: "Largest value must not be below the smallest value" });
 }
 
 export const shuntInput = shuntObject.superRefine(shuntRules);

@@ -8,7 +8,11 @@ import { HttpError, invalid } from "@/lib/http";
 export const editorRoles = ["owner", "designer"] as const;
 
 /** The stored part with the patch's fields over it, checked by the full schema (422 on a bad mix). */
-export function mergePatch<T>(stored: Record<string, unknown>, patch: Record<string, unknown>, schema: z.ZodType<T>): T {
+export function mergePatch<T>(
+  stored: Record<string, unknown>,
+  patch: Record<string, unknown>,
+  schema: z.ZodType<T>,
+): T {
   const { updatedAt: _u, ...fields } = patch;
   const merged = { ...stored, ...Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined)) };
   const parsed = schema.safeParse(merged);

@@ -5,7 +5,16 @@ import { sendMail } from "./send";
 
 export const invitationPath = (token: string) => `/invitations/${token}`;
 
-export function mailInvitation(input: { inviterTeamId: string; actor: { userId: string; name: string }; invitationId: string; email: string; role: string; teamName: string; token: string; newTeam: boolean }) {
+export function mailInvitation(input: {
+  inviterTeamId: string;
+  actor: { userId: string; name: string };
+  invitationId: string;
+  email: string;
+  role: string;
+  teamName: string;
+  token: string;
+  newTeam: boolean;
+}) {
   const what = input.newTeam
     ? `${input.actor.name} started the team "${input.teamName}" on Sensewright and invites you to run it as its first owner.`
     : `${input.actor.name} invites you to join "${input.teamName}" on Sensewright as a ${input.role}.`;
@@ -13,7 +22,9 @@ export function mailInvitation(input: { inviterTeamId: string; actor: { userId: 
     teamId: input.inviterTeamId,
     actorId: input.actor.userId,
     to: [input.email],
-    subject: input.newTeam ? `You are invited to own ${input.teamName} on Sensewright` : `You are invited to join ${input.teamName} on Sensewright`,
+    subject: input.newTeam
+      ? `You are invited to own ${input.teamName} on Sensewright`
+      : `You are invited to join ${input.teamName} on Sensewright`,
     text: `${what}\n\nThe link below works once and expires in ${INVITATION_DAYS} days. Open it to choose your name and password:`,
     path: invitationPath(input.token),
     about: { type: "invitation", id: input.invitationId, kind: "invitation" },

@@ -11,8 +11,18 @@ async function build(message: nodemailer.SendMailOptions): Promise<string> {
 
 describe("parseMail", () => {
   it("reads recipient, sender, subject and a plain ASCII text", async () => {
-    const raw = await build({ from: "a@x.example", to: "b@y.example", subject: "Review requested", text: "Hello\nSecond line" });
-    expect(parseMail(raw)).toEqual({ from: "a@x.example", to: "b@y.example", subject: "Review requested", text: "Hello\nSecond line" });
+    const raw = await build({
+      from: "a@x.example",
+      to: "b@y.example",
+      subject: "Review requested",
+      text: "Hello\nSecond line",
+    });
+    expect(parseMail(raw)).toEqual({
+      from: "a@x.example",
+      to: "b@y.example",
+      subject: "Review requested",
+      text: "Hello\nSecond line",
+    });
   });
 
   it("decodes non-ASCII subjects and quoted-printable bodies with units", async () => {
@@ -24,7 +34,13 @@ describe("parseMail", () => {
   });
 
   it("takes the plain part of a multipart message", async () => {
-    const raw = await build({ from: "a@x.example", to: "b@y.example", subject: "s", text: "plain part ✓", html: "<p>html part</p>" });
+    const raw = await build({
+      from: "a@x.example",
+      to: "b@y.example",
+      subject: "s",
+      text: "plain part ✓",
+      html: "<p>html part</p>",
+    });
     expect(parseMail(raw).text).toBe("plain part ✓");
   });
 });

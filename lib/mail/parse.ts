@@ -46,7 +46,8 @@ export function decodeQuotedPrintable(input: string, charset = "utf-8"): string 
   return decodeBytes(bytes, charset);
 }
 
-const decodeBase64 = (input: string, charset = "utf-8") => decodeBytes([...Buffer.from(input.replace(/\s+/g, ""), "base64")], charset);
+const decodeBase64 = (input: string, charset = "utf-8") =>
+  decodeBytes([...Buffer.from(input.replace(/\s+/g, ""), "base64")], charset);
 
 /** RFC 2047 encoded words (=?UTF-8?Q?…?= and =?UTF-8?B?…?=), as nodemailer writes non-ASCII subjects. */
 export function decodeWords(value: string): string {

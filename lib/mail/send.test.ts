@@ -50,13 +50,21 @@ describe("sendMail", () => {
 
   it("reports a failed send in the audit trail instead of throwing", async () => {
     const saved = g[key];
-    g[key] = Promise.resolve({ transport: nodemailer.createTransport({ host: "127.0.0.1", port: 1, connectionTimeout: 2000 }), catcher: true });
+    g[key] = Promise.resolve({
+      transport: nodemailer.createTransport({ host: "127.0.0.1", port: 1, connectionTimeout: 2000 }),
+      catcher: true,
+    });
     try {
       expect(await sendMail(mail(["c@x.example"], "Will fail"))).toBe(0);
     } finally {
       g[key] = saved;
     }
     const log = await listTeamAudit(teamId);
-    expect(log[0]).toMatchObject({ action: "mail.failed", targetType: "design", targetId: "abc", details: { to: "c@x.example", subject: "Will fail" } });
+    expect(log[0]).toMatchObject({
+      action: "mail.failed",
+      targetType: "design",
+      targetId: "abc",
+      details: { to: "c@x.example", subject: "Will fail" },
+    });
   });
 });

@@ -50,8 +50,10 @@ const notFinite = /^[+-]?(nan|inf|infinity|∞)$/i;
 export function readNumberCell(raw: string): { ok: true; value: number } | { ok: false; reason: string } {
   const text = raw.trim();
   if (text === "") return { ok: false, reason: "the cell is empty; expected a number" };
-  if (notFinite.test(text)) return { ok: false, reason: `"${text}" is not a finite number (NaN and infinity are refused)` };
-  if (/^[+-]?\d+,\d+$/.test(text)) return { ok: false, reason: `"${text}" is not a number (write decimals with a point: ${text.replace(",", ".")})` };
+  if (notFinite.test(text))
+    return { ok: false, reason: `"${text}" is not a finite number (NaN and infinity are refused)` };
+  if (/^[+-]?\d+,\d+$/.test(text))
+    return { ok: false, reason: `"${text}" is not a number (write decimals with a point: ${text.replace(",", ".")})` };
   if (!numberText.test(text)) return { ok: false, reason: `"${truncate(text)}" is not a number` };
   const value = Number(text);
   if (!Number.isFinite(value)) return { ok: false, reason: `"${truncate(text)}" is too large to be a finite number` };
@@ -100,7 +102,11 @@ export function unitScale(
   place: CsvPlace,
 ): { ok: true; scale: number } | { ok: false; refusal: CsvRefusal } {
   const example = exampleUnit[dim] ?? "an SI unit";
-  if (unit === "") return { ok: false, refusal: new CsvRefusal(`the brackets hold no unit; write one (e.g. ${example}) or leave them out`, place) };
+  if (unit === "")
+    return {
+      ok: false,
+      refusal: new CsvRefusal(`the brackets hold no unit; write one (e.g. ${example}) or leave them out`, place),
+    };
   const r = parseQuantity(`1 ${unit}`, dim);
   if (r.ok && r.value > 0) return { ok: true, scale: r.value };
   const head = `1 ${unit}`;
@@ -158,7 +164,10 @@ export type RowVisitor = {
  * "#" lines are comments, blank lines are skipped, the delimiter comes from the header line.
  * Returns the first refusal, or null with the number of data rows and whether a header was seen.
  */
-export function walkCsv(text: string, visit: RowVisitor): { refusal: CsvRefusal | null; rows: number; sawHeader: boolean } {
+export function walkCsv(
+  text: string,
+  visit: RowVisitor,
+): { refusal: CsvRefusal | null; rows: number; sawHeader: boolean } {
   const lines = new LineCounter(text);
   let refusal = null as CsvRefusal | null;
   let sawHeader = false;
@@ -176,7 +185,13 @@ export function walkCsv(text: string, visit: RowVisitor): { refusal: CsvRefusal 
         parser.abort();
       };
       const bad = result.errors.find((e) => e.type !== "Delimiter");
-      if (bad) return stop(new CsvRefusal(`the file cannot be read as CSV here: ${bad.message}`, sawHeader ? { row: row + 1, line } : { line }));
+      if (bad)
+        return stop(
+          new CsvRefusal(
+            `the file cannot be read as CSV here: ${bad.message}`,
+            sawHeader ? { row: row + 1, line } : { line },
+          ),
+        );
       if (cells.length === 0 || (cells.length === 1 && (cells[0] ?? "").trim() === "")) return; // blank line
       if (!sawHeader) {
         sawHeader = true;

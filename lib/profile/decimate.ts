@@ -71,7 +71,16 @@ export function decimateMinMax(
   // One sample either side of the window so the line runs to the edges.
   const start = Math.max(0, lowerBound(times, fromS) - 1);
   const end = Math.min(n - 1, upperIndex(times, toS) + 1);
-  const out: DecimatedSeries = { fromS, toS, width, windowSamples: 0, tS: [], currentA: [], clipped: [], belowStep: [] };
+  const out: DecimatedSeries = {
+    fromS,
+    toS,
+    width,
+    windowSamples: 0,
+    tS: [],
+    currentA: [],
+    clipped: [],
+    belowStep: [],
+  };
   if (n === 0 || end < start) return out;
   out.windowSamples = end - start + 1;
 

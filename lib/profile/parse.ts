@@ -32,7 +32,8 @@ export function readProfileHeader(cells: string[], line: number): { time: Column
     const key = headerKey(name);
     const kind = timeNames.has(key) ? "time" : currentNames.has(key) ? "current" : null;
     if (!kind) {
-      const shown = label === "" ? `column ${index + 1} has no name` : `"${truncate(label)}" is not a column this file may have`;
+      const shown =
+        label === "" ? `column ${index + 1} has no name` : `"${truncate(label)}" is not a column this file may have`;
       return new CsvRefusal(`${shown}. ${PROFILE_HEADER_HELP}`, { line, column: label || `column ${index + 1}` });
     }
     if ((kind === "time" ? time : current) !== null) {
@@ -49,7 +50,8 @@ export function readProfileHeader(cells: string[], line: number): { time: Column
     else current = col;
   }
   if (!time) return new CsvRefusal(`the time column is missing. ${PROFILE_HEADER_HELP}`, { line, column: "time" });
-  if (!current) return new CsvRefusal(`the current column is missing. ${PROFILE_HEADER_HELP}`, { line, column: "current" });
+  if (!current)
+    return new CsvRefusal(`the current column is missing. ${PROFILE_HEADER_HELP}`, { line, column: "current" });
   return { time, current };
 }
 
@@ -95,9 +97,13 @@ export function parseProfileCsv(text: string): ParseOutcome {
     },
     row(cells, row, line) {
       if (!header) return;
-      if (row > MAX_PROFILE_ROWS) return new CsvRefusal(`the file has more than ${MAX_PROFILE_ROWS} data rows`, { row, line });
+      if (row > MAX_PROFILE_ROWS)
+        return new CsvRefusal(`the file has more than ${MAX_PROFILE_ROWS} data rows`, { row, line });
       if (cells.length !== width) {
-        return new CsvRefusal(`the row has ${cells.length} cell${cells.length === 1 ? "" : "s"} but the header has ${width} columns`, { row, line });
+        return new CsvRefusal(
+          `the row has ${cells.length} cell${cells.length === 1 ? "" : "s"} but the header has ${width} columns`,
+          { row, line },
+        );
       }
       const t = readNumberCell(cells[header.time.index] ?? "");
       if (!t.ok) return new CsvRefusal(t.reason, { row, line, column: header.time.label });
@@ -111,11 +117,14 @@ export function parseProfileCsv(text: string): ParseOutcome {
       }
       if (times.length > 0 && !(tS > times.last())) {
         const previous = Number((times.last() / header.time.scale).toPrecision(12));
-        return new CsvRefusal(`time must increase from row to row, but ${t.value} is not after the previous row's ${previous}`, {
-          row,
-          line,
-          column: header.time.label,
-        });
+        return new CsvRefusal(
+          `time must increase from row to row, but ${t.value} is not after the previous row's ${previous}`,
+          {
+            row,
+            line,
+            column: header.time.label,
+          },
+        );
       }
       times.push(tS);
       currents.push(iA);
@@ -134,5 +143,12 @@ export function parseProfileCsv(text: string): ParseOutcome {
       ),
     };
   }
-  return { ok: true, series: { timesS: times.finish(), currentsA: currents.finish(), columns: { time: h.time.label, current: h.current.label } } };
+  return {
+    ok: true,
+    series: {
+      timesS: times.finish(),
+      currentsA: currents.finish(),
+      columns: { time: h.time.label, current: h.current.label },
+    },
+  };
 }

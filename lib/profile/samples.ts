@@ -9,7 +9,8 @@ export function float64ToBytes(values: Float64Array): Uint8Array {
 }
 
 export function bytesToFloat64(bytes: Uint8Array): Float64Array {
-  if (bytes.byteLength % 8 !== 0) throw new Error(`stored samples are ${bytes.byteLength} bytes, not a whole number of Float64 values`);
+  if (bytes.byteLength % 8 !== 0)
+    throw new Error(`stored samples are ${bytes.byteLength} bytes, not a whole number of Float64 values`);
   const n = bytes.byteLength / 8;
   const out = new Float64Array(n);
   const view = new DataView(bytes.buffer, bytes.byteOffset, bytes.byteLength);

@@ -12,7 +12,15 @@ export type WizardValues = {
   resolution: { countsAtMin: number };
   accuracy: { percent: string; bandMin?: string; bandMax?: string };
   temperature: { min: string; max: string };
-  shunt: { series: string; min: string; max: string; tolerance: string; tempco: string; ratings: string[]; derating: number };
+  shunt: {
+    series: string;
+    min: string;
+    max: string;
+    tolerance: string;
+    tempco: string;
+    ratings: string[];
+    derating: number;
+  };
   amplifier: {
     gains?: number[];
     gainSet?: { series: string; min: number; max: number };

@@ -19,7 +19,12 @@ export function gainGroups(gains: number[], maxGroups = 8): GainGroup[] {
   for (let e = lo; e <= hi; e++) {
     const a = 10 ** e;
     const b = 10 ** (e + 1);
-    out.push({ key: `d${e}`, label: `G ${Number(a.toPrecision(3))} to ${Number(b.toPrecision(3))}`, test: (x: number) => x >= a && x < b, t: hi === lo ? 1 : (e - lo) / (hi - lo) });
+    out.push({
+      key: `d${e}`,
+      label: `G ${Number(a.toPrecision(3))} to ${Number(b.toPrecision(3))}`,
+      test: (x: number) => x >= a && x < b,
+      t: hi === lo ? 1 : (e - lo) / (hi - lo),
+    });
   }
   return out;
 }

@@ -43,7 +43,10 @@ export async function fetchLibrary(): Promise<Library> {
   if (res.status === 404) return { amplifiers: [], shunts: [] };
   if (!res.ok) throw new Error(`The library answered ${res.status}`);
   const body = (await res.json()) as Partial<Library>;
-  return { amplifiers: Array.isArray(body.amplifiers) ? body.amplifiers : [], shunts: Array.isArray(body.shunts) ? body.shunts : [] };
+  return {
+    amplifiers: Array.isArray(body.amplifiers) ? body.amplifiers : [],
+    shunts: Array.isArray(body.shunts) ? body.shunts : [],
+  };
 }
 
 const ppm = (x: number) => `${Number((x * 1e6).toPrecision(4))} ppm/K`;

@@ -64,7 +64,13 @@ export function useSolver() {
     w.onerror = (event) => {
       inFlight.current = null;
       setBusy(false);
-      setState({ status: "invalid", id: 0, fieldErrors: {}, message: `The solver stopped: ${event.message}`, editAt: performance.now() });
+      setState({
+        status: "invalid",
+        id: 0,
+        fieldErrors: {},
+        message: `The solver stopped: ${event.message}`,
+        editAt: performance.now(),
+      });
     };
     dispatch();
     return () => {

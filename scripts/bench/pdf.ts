@@ -26,7 +26,11 @@ async function time(repeats: number, fn: () => Promise<unknown>): Promise<number
 
 function bareDocument(fontFamily?: string) {
   const style = fontFamily ? { fontFamily } : undefined;
-  return createElement(Document, null, createElement(Page, { size: "A4", style }, createElement(Text, null, "Sensewright 4.7 mΩ")));
+  return createElement(
+    Document,
+    null,
+    createElement(Page, { size: "A4", style }, createElement(Text, null, "Sensewright 4.7 mΩ")),
+  );
 }
 
 export async function run(): Promise<Record<string, number>> {
@@ -40,5 +44,11 @@ export async function run(): Promise<Record<string, number>> {
   const bare = await time(9, () => renderToBuffer(bareDocument()));
   // For scale: the same bare page in the sheet's embedded typeface (subset and embedded each time).
   const bareFont = await time(9, () => renderToBuffer(bareDocument(FONT)));
-  return { "pdf.ms": sheet, "pdf.ratio": sheet / bare, "pdf.bare.ms": bare, "pdf.bare_font.ms": bareFont, "pdf.first.ms": first };
+  return {
+    "pdf.ms": sheet,
+    "pdf.ratio": sheet / bare,
+    "pdf.bare.ms": bare,
+    "pdf.bare_font.ms": bareFont,
+    "pdf.first.ms": first,
+  };
 }

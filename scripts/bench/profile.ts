@@ -25,7 +25,8 @@ function time(repeats: number, fn: () => void): number {
 /** The logger of DESIGN.md §6: sleeping at a few µA, bursting to 180 mA, sampled every 100 µs. */
 function recording(n: number): string {
   const parts = ["time (s),current (A)\n"];
-  for (let k = 0; k < n; k++) parts.push(`${(k * 1e-4).toFixed(4)},${(k % 1000 < 20 ? 0.18 : 3e-6).toExponential(3)}\n`);
+  for (let k = 0; k < n; k++)
+    parts.push(`${(k * 1e-4).toFixed(4)},${(k % 1000 < 20 ? 0.18 : 3e-6).toExponential(3)}\n`);
   return parts.join("");
 }
 

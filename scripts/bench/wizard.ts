@@ -52,7 +52,17 @@ export async function run(): Promise<Record<string, number>> {
   });
   const browser = await chromium.launch({
     executablePath: process.env.CHROMIUM_PATH ?? "/usr/bin/chromium",
-    args: ["--no-sandbox", "--disable-dev-shm-usage", "--disable-background-networking", "--disable-component-update", "--disable-sync", "--disable-default-apps", "--disable-extensions", "--no-first-run", "--no-default-browser-check"],
+    args: [
+      "--no-sandbox",
+      "--disable-dev-shm-usage",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+      "--disable-default-apps",
+      "--disable-extensions",
+      "--no-first-run",
+      "--no-default-browser-check",
+    ],
   });
   try {
     await waitForHealth(server);
@@ -61,7 +71,10 @@ export async function run(): Promise<Record<string, number>> {
     await page.goto(`${BASE}/designs/new`);
     await page.evaluate(() => window.localStorage.clear());
     await page.reload();
-    await page.getByTestId("solve-status").filter({ hasText: /feasible/ }).waitFor({ timeout: 30_000 });
+    await page
+      .getByTestId("solve-status")
+      .filter({ hasText: /feasible/ })
+      .waitFor({ timeout: 30_000 });
     await page.getByTestId("trade-off-chart").locator("svg").first().waitFor();
     const field = page.getByLabel("Maximum current", { exact: true });
     const times: number[] = [];
@@ -71,7 +84,9 @@ export async function run(): Promise<Record<string, number>> {
     for (let k = 0; k < EDITS + 3; k++) {
       const before = await measureCount(page);
       await field.fill(k % 2 ? "180 mA" : "170 mA");
-      await page.waitForFunction((n) => performance.getEntriesByName("wizard-resolve").length > n, before, { timeout: 20_000 });
+      await page.waitForFunction((n) => performance.getEntriesByName("wizard-resolve").length > n, before, {
+        timeout: 20_000,
+      });
       // No helper functions inside evaluate: tsx would wrap them in a helper the page lacks.
       const last = await page.evaluate(() => ({
         resolve: performance.getEntriesByName("wizard-resolve").at(-1)?.duration ?? NaN,

@@ -11,12 +11,16 @@ test("a designer imports an exported design file from the designs list and lands
 
   await signInPage(page, "designer");
   await page.goto("/designs");
-  await page.getByLabel("Import design").setInputFiles({ name: "copy.json", mimeType: "application/json", buffer: file });
+  await page
+    .getByLabel("Import design")
+    .setInputFiles({ name: "copy.json", mimeType: "application/json", buffer: file });
   await expect(page).toHaveURL(/\/designs\/[0-9a-f-]{36}$/);
   expect(page.url()).not.toContain(source.id);
   await expect(page.getByTestId("design-name")).toHaveText(source.name);
 
   await page.goto("/designs");
-  await page.getByLabel("Import design").setInputFiles({ name: "bad.json", mimeType: "application/json", buffer: Buffer.from('{"format":"other"}') });
+  await page
+    .getByLabel("Import design")
+    .setInputFiles({ name: "bad.json", mimeType: "application/json", buffer: Buffer.from('{"format":"other"}') });
   await expect(page.getByTestId("import-error")).toContainText("format");
 });

@@ -6,11 +6,15 @@ import { requirement } from "../integration/authz-helpers";
 
 const shots = process.env.PW_OUTPUT_DIR ?? "test-results/review";
 
-test("designer submits, reviewer compares and approves, designer sees it, owner reads the mail", async ({ browser }) => {
+test("designer submits, reviewer compares and approves, designer sees it, owner reads the mail", async ({
+  browser,
+}) => {
   const tag = Date.now().toString(36);
   const designer = await apiAs("designer");
   const make = async (name: string, shuntOhms: string) => {
-    const res = await designer.post("/api/designs", { data: { name, project: "Soil-moisture logger", requirement, choice: { shuntOhms, gain: 50 } } });
+    const res = await designer.post("/api/designs", {
+      data: { name, project: "Soil-moisture logger", requirement, choice: { shuntOhms, gain: 50 } },
+    });
     expect(res.status(), await res.text()).toBe(201);
     return ((await res.json()) as { id: string }).id;
   };
@@ -63,12 +67,16 @@ test("designer submits, reviewer compares and approves, designer sees it, owner 
 
 test("a stale edit on screen says someone else changed it and offers to reload", async ({ page }) => {
   const designer = await apiAs("designer");
-  const res = await designer.post("/api/designs", { data: { name: `Stale on screen ${Date.now()}`, requirement, choice: { shuntOhms: 0.274, gain: 50 } } });
+  const res = await designer.post("/api/designs", {
+    data: { name: `Stale on screen ${Date.now()}`, requirement, choice: { shuntOhms: 0.274, gain: 50 } },
+  });
   const { id } = (await res.json()) as { id: string };
   await signInPage(page, "designer");
   await page.goto(`/designs/${id}`);
   // Meanwhile someone else saves revision 2.
-  expect((await designer.patch(`/api/designs/${id}`, { data: { revision: 1, name: "Changed elsewhere" } })).status()).toBe(200);
+  expect(
+    (await designer.patch(`/api/designs/${id}`, { data: { revision: 1, name: "Changed elsewhere" } })).status(),
+  ).toBe(200);
   await page.getByText("Rename or move to another project").click();
   await page.getByLabel("Design name").fill("My late rename");
   await page.getByRole("button", { name: "Save revision 2" }).click();

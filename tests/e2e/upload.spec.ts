@@ -40,7 +40,9 @@ test("a designer uploads a recording through the form and sees the chart", async
   await expect(error).toContainText('Data row 2 (file line 3), column "current (mA)": "two" is not a number');
   await expect(page.getByText("No recordings stored on this design yet.")).toBeVisible();
 
-  await page.getByLabel("Current recording (CSV)").setInputFiles({ name: "logger-burst.csv", mimeType: "text/csv", buffer: Buffer.from(loggerCsv(clipA)) });
+  await page
+    .getByLabel("Current recording (CSV)")
+    .setInputFiles({ name: "logger-burst.csv", mimeType: "text/csv", buffer: Buffer.from(loggerCsv(clipA)) });
   await expect(page.getByText("Stored logger-burst.csv: 20,000 samples.")).toBeVisible();
   await expect(error).toHaveCount(0);
   const chart = page.getByTestId("profile-chart");
@@ -123,7 +125,9 @@ test("a 1,000,000-sample recording uploads under 10 MB and its chart draws", asy
   await expect(page.getByTestId("chart-window")).toContainText("1,000,000 samples drawn as");
   await expect(page.getByTestId("profile-chart").locator("path").first()).toBeVisible();
   // Reported, not asserted (speed belongs in the benchmark): page load to a drawn chart.
-  test.info().annotations.push({ type: "million-sample chart, ms from navigation", description: String(Date.now() - t0) });
+  test
+    .info()
+    .annotations.push({ type: "million-sample chart, ms from navigation", description: String(Date.now() - t0) });
   console.log(`[upload e2e] 1,000,000-sample chart drawn ${Date.now() - t0} ms after navigation`);
   await page.getByTestId("profiles-panel").screenshot({ path: `${shots}/profile-million.png` });
 });
@@ -135,6 +139,9 @@ test("a maker reads the library and exports it, without edit controls", async ({
   await expect(page.getByRole("button", { name: "Add amplifier" })).toHaveCount(0);
   await expect(page.getByRole("button", { name: /^Edit / })).toHaveCount(0);
   await expect(page.getByRole("form", { name: "Import parts" })).toHaveCount(0);
-  await expect(page.getByRole("link", { name: "Shunt families CSV" })).toHaveAttribute("href", "/api/library/export?kind=shunts");
+  await expect(page.getByRole("link", { name: "Shunt families CSV" })).toHaveAttribute(
+    "href",
+    "/api/library/export?kind=shunts",
+  );
   await page.screenshot({ path: `${shots}/library-maker.png`, fullPage: true });
 });

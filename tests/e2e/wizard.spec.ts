@@ -86,7 +86,11 @@ test("a designer fills the wizard, explores, saves and finds the design", async 
   await second.click();
   await expect(second).toHaveAttribute("aria-selected", "true");
   await expect(page.getByTestId("candidate-detail")).toBeVisible();
-  await expect(page.getByRole("heading", { name: new RegExp(`Selected candidate: ${shuntText.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}`) })).toBeVisible();
+  await expect(
+    page.getByRole("heading", {
+      name: new RegExp(`Selected candidate: ${shuntText.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}`),
+    }),
+  ).toBeVisible();
   await expect(page.getByTestId("error-curve-chart").locator("svg").first()).toBeVisible();
   await shot(page, "4-selected");
   await page.getByTestId("error-curve-chart").screenshot({ path: `${shots}/wizard-4a-error-curve.png` });
@@ -173,7 +177,9 @@ test("parts from the team library fill the shunt and amplifier steps", async ({ 
   await expect(page.getByRole("heading", { name: /Shunt/ })).toBeVisible();
   const shuntPick = page.locator("#f-library-shunt");
   await shuntPick.selectOption(lib.shunts[0]!.id);
-  await expect(page.getByLabel("Shunt tolerance", { exact: true })).toHaveValue(`${Number((lib.shunts[0]!.toleranceFraction * 100).toPrecision(4))} %`);
+  await expect(page.getByLabel("Shunt tolerance", { exact: true })).toHaveValue(
+    `${Number((lib.shunts[0]!.toleranceFraction * 100).toPrecision(4))} %`,
+  );
   await next(page);
   await page.locator("#f-library-amp").selectOption(lib.amplifiers[0]!.id);
   await expect(page.getByText(`Filled from "${lib.amplifiers[0]!.name}"`)).toBeVisible();

@@ -41,7 +41,13 @@ export async function makeOutsider(owner: APIRequestContext): Promise<APIRequest
 export type Contexts = Record<Who, APIRequestContext>;
 
 export async function allContexts(): Promise<Contexts> {
-  const [anon, owner, designer, reviewer, maker] = await Promise.all([apiAs(null), apiAs("owner"), apiAs("designer"), apiAs("reviewer"), apiAs("maker")]);
+  const [anon, owner, designer, reviewer, maker] = await Promise.all([
+    apiAs(null),
+    apiAs("owner"),
+    apiAs("designer"),
+    apiAs("reviewer"),
+    apiAs("maker"),
+  ]);
   const outsider = await makeOutsider(owner);
   return { anon, owner, designer, reviewer, maker, outsider };
 }

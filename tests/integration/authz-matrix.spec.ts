@@ -2,11 +2,26 @@
 // status each must get (API.md "Designs and their review" and the role rules of each route).
 // To extend: add a row to `routes`; `setup` may create what one cell needs (it runs per caller).
 import { expect, test, type APIRequestContext } from "@playwright/test";
-import { allContexts, approveDesign, choice, createDesign, everyone, requirement, submitDesign, unique, type Contexts, type Who } from "./authz-helpers";
+import {
+  allContexts,
+  approveDesign,
+  choice,
+  createDesign,
+  everyone,
+  requirement,
+  submitDesign,
+  unique,
+  type Contexts,
+  type Who,
+} from "./authz-helpers";
 import { acceptAndSignIn } from "./authz-helpers";
 
 type Method = "GET" | "POST" | "PATCH" | "DELETE";
-type Cell = { path: string; data?: unknown; multipart?: Record<string, { name: string; mimeType: string; buffer: Buffer }> };
+type Cell = {
+  path: string;
+  data?: unknown;
+  multipart?: Record<string, { name: string; mimeType: string; buffer: Buffer }>;
+};
 type Row = {
   name: string;
   method: Method;
@@ -20,11 +35,39 @@ const f = { draft: "", approved: "", approvedB: "", reviewerId: "", makerId: "" 
 const NO_SUCH = "00000000-0000-4000-8000-000000000000";
 
 const fixed = (path: string, data?: unknown) => async (): Promise<Cell> => ({ path, data });
-const members = (status: number, outsider = status): Record<Who, number> => ({ anon: 401, owner: status, designer: status, reviewer: status, maker: status, outsider });
-const ownerOnly = (ok: number, outsider = ok): Record<Who, number> => ({ anon: 401, owner: ok, designer: 403, reviewer: 403, maker: 403, outsider });
-const editors = (ok: number, outsider = ok): Record<Who, number> => ({ anon: 401, owner: ok, designer: ok, reviewer: 403, maker: 403, outsider });
+const members = (status: number, outsider = status): Record<Who, number> => ({
+  anon: 401,
+  owner: status,
+  designer: status,
+  reviewer: status,
+  maker: status,
+  outsider,
+});
+const ownerOnly = (ok: number, outsider = ok): Record<Who, number> => ({
+  anon: 401,
+  owner: ok,
+  designer: 403,
+  reviewer: 403,
+  maker: 403,
+  outsider,
+});
+const editors = (ok: number, outsider = ok): Record<Who, number> => ({
+  anon: 401,
+  owner: ok,
+  designer: ok,
+  reviewer: 403,
+  maker: 403,
+  outsider,
+});
 /** A Harbourline draft: members see it, makers and other teams get 404. */
-const draftSeen = (ok: number): Record<Who, number> => ({ anon: 401, owner: ok, designer: ok, reviewer: ok, maker: 404, outsider: 404 });
+const draftSeen = (ok: number): Record<Who, number> => ({
+  anon: 401,
+  owner: ok,
+  designer: ok,
+  reviewer: ok,
+  maker: 404,
+  outsider: 404,
+});
 
 async function freshDraft() {
   return createDesign(c.designer);
@@ -35,7 +78,9 @@ async function freshInReview() {
   return id;
 }
 async function pendingInvitation() {
-  const res = await c.owner.post("/api/invitations", { data: { email: `pending-${unique()}@invitee.example`, role: "maker" } });
+  const res = await c.owner.post("/api/invitations", {
+    data: { email: `pending-${unique()}@invitee.example`, role: "maker" },
+  });
   expect(res.status()).toBe(201);
   return ((await res.json()) as { id: string }).id;
 }
@@ -48,12 +93,23 @@ async function disposableMember() {
   return me.members.find((m) => m.email === email)!.userId;
 }
 
-const csv = { file: { name: "p.csv", mimeType: "text/csv", buffer: Buffer.from("time (s),current (A)\n0,0.01\n0.001,0.02\n0.002,0.015\n") } };
+const csv = {
+  file: {
+    name: "p.csv",
+    mimeType: "text/csv",
+    buffer: Buffer.from("time (s),current (A)\n0,0.01\n0.001,0.02\n0.002,0.015\n"),
+  },
+};
 
 const routes: Row[] = [
   { name: "GET /api/health", method: "GET", setup: fixed("/api/health"), expect: { ...members(200), anon: 200 } },
   { name: "GET /api/team", method: "GET", setup: fixed("/api/team"), expect: members(200) },
-  { name: "PATCH /api/team/members/[id] (role unchanged)", method: "PATCH", setup: async () => ({ path: `/api/team/members/${f.reviewerId}`, data: { role: "reviewer" } }), expect: ownerOnly(200, 404) },
+  {
+    name: "PATCH /api/team/members/[id] (role unchanged)",
+    method: "PATCH",
+    setup: async () => ({ path: `/api/team/members/${f.reviewerId}`, data: { role: "reviewer" } }),
+    expect: ownerOnly(200, 404),
+  },
   {
     name: "DELETE /api/team/members/[id]",
     method: "DELETE",
@@ -62,65 +118,237 @@ const routes: Row[] = [
   },
   { name: "GET /api/team/audit", method: "GET", setup: fixed("/api/team/audit"), expect: ownerOnly(200) },
   { name: "GET /api/designs", method: "GET", setup: fixed("/api/designs"), expect: members(200) },
-  { name: "POST /api/designs", method: "POST", setup: fixed("/api/designs", { name: "Matrix new", requirement, choice }), expect: editors(201) },
-  { name: "POST /api/designs/import", method: "POST", setup: fixed("/api/designs/import", { format: "sensewright-design", version: 1, name: "Imported", requirement, choice }), expect: editors(201) },
-  { name: "GET /api/designs/[draft]", method: "GET", setup: async () => ({ path: `/api/designs/${f.draft}` }), expect: draftSeen(200) },
-  { name: "GET /api/designs/[approved]", method: "GET", setup: async () => ({ path: `/api/designs/${f.approved}` }), expect: { ...members(200), outsider: 404 } },
+  {
+    name: "POST /api/designs",
+    method: "POST",
+    setup: fixed("/api/designs", { name: "Matrix new", requirement, choice }),
+    expect: editors(201),
+  },
+  {
+    name: "POST /api/designs/import",
+    method: "POST",
+    setup: fixed("/api/designs/import", {
+      format: "sensewright-design",
+      version: 1,
+      name: "Imported",
+      requirement,
+      choice,
+    }),
+    expect: editors(201),
+  },
+  {
+    name: "GET /api/designs/[draft]",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.draft}` }),
+    expect: draftSeen(200),
+  },
+  {
+    name: "GET /api/designs/[approved]",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.approved}` }),
+    expect: { ...members(200), outsider: 404 },
+  },
   { name: "GET /api/designs/not-a-uuid", method: "GET", setup: fixed("/api/designs/not-a-uuid"), expect: members(404) },
-  { name: "GET /api/designs/[unknown uuid]", method: "GET", setup: fixed(`/api/designs/${NO_SUCH}`), expect: members(404) },
+  {
+    name: "GET /api/designs/[unknown uuid]",
+    method: "GET",
+    setup: fixed(`/api/designs/${NO_SUCH}`),
+    expect: members(404),
+  },
   {
     name: "PATCH /api/designs/[draft]",
     method: "PATCH",
     setup: async () => ({ path: `/api/designs/${await freshDraft()}`, data: { revision: 1, name: "Matrix renamed" } }),
     expect: { anon: 401, owner: 200, designer: 200, reviewer: 403, maker: 403, outsider: 404 },
   },
-  { name: "GET /api/designs/[draft]/revisions", method: "GET", setup: async () => ({ path: `/api/designs/${f.draft}/revisions` }), expect: draftSeen(200) },
-  { name: "GET /api/designs/[draft]/revisions?a=1&b=1", method: "GET", setup: async () => ({ path: `/api/designs/${f.draft}/revisions?a=1&b=1` }), expect: draftSeen(200) },
+  {
+    name: "GET /api/designs/[draft]/revisions",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.draft}/revisions` }),
+    expect: draftSeen(200),
+  },
+  {
+    name: "GET /api/designs/[draft]/revisions?a=1&b=1",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.draft}/revisions?a=1&b=1` }),
+    expect: draftSeen(200),
+  },
   {
     name: "POST /api/designs/[draft]/submit",
     method: "POST",
     setup: async () => ({ path: `/api/designs/${await freshDraft()}/submit`, data: {} }),
     expect: { anon: 401, owner: 200, designer: 200, reviewer: 403, maker: 403, outsider: 404 },
   },
-  { name: "GET /api/designs/[draft]/reviews", method: "GET", setup: async () => ({ path: `/api/designs/${f.draft}/reviews` }), expect: draftSeen(200) },
-  { name: "POST reviews comment on a draft", method: "POST", setup: async () => ({ path: `/api/designs/${f.draft}/reviews`, data: { verdict: "comment", body: "a note" } }), expect: draftSeen(201) },
-  { name: "POST reviews comment on an approved design", method: "POST", setup: async () => ({ path: `/api/designs/${f.approved}/reviews`, data: { verdict: "comment", body: "bench note" } }), expect: { ...members(201), outsider: 404 } },
+  {
+    name: "GET /api/designs/[draft]/reviews",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.draft}/reviews` }),
+    expect: draftSeen(200),
+  },
+  {
+    name: "POST reviews comment on a draft",
+    method: "POST",
+    setup: async () => ({ path: `/api/designs/${f.draft}/reviews`, data: { verdict: "comment", body: "a note" } }),
+    expect: draftSeen(201),
+  },
+  {
+    name: "POST reviews comment on an approved design",
+    method: "POST",
+    setup: async () => ({
+      path: `/api/designs/${f.approved}/reviews`,
+      data: { verdict: "comment", body: "bench note" },
+    }),
+    expect: { ...members(201), outsider: 404 },
+  },
   {
     name: "POST reviews approve (in review, by the designer's revision)",
     method: "POST",
-    setup: async () => ({ path: `/api/designs/${await freshInReview()}/reviews`, data: { verdict: "approve", body: "" } }),
+    setup: async () => ({
+      path: `/api/designs/${await freshInReview()}/reviews`,
+      data: { verdict: "approve", body: "" },
+    }),
     expect: { anon: 401, owner: 201, designer: 403, reviewer: 201, maker: 404, outsider: 404 },
   },
   {
     name: "POST reviews return (in review)",
     method: "POST",
-    setup: async () => ({ path: `/api/designs/${await freshInReview()}/reviews`, data: { verdict: "return", body: "too much drop" } }),
+    setup: async () => ({
+      path: `/api/designs/${await freshInReview()}/reviews`,
+      data: { verdict: "return", body: "too much drop" },
+    }),
     expect: { anon: 401, owner: 201, designer: 403, reviewer: 201, maker: 404, outsider: 404 },
   },
-  { name: "POST reviews unknown verdict", method: "POST", setup: async () => ({ path: `/api/designs/${f.draft}/reviews`, data: { verdict: "maybe", body: "?" } }), expect: { anon: 401, owner: 422, designer: 422, reviewer: 422, maker: 422, outsider: 422 } },
-  { name: "GET /api/compare (two drafts)", method: "GET", setup: async () => ({ path: `/api/compare?ids=${f.draft},${f.approved}` }), expect: draftSeen(200) },
-  { name: "GET /api/compare (two approved)", method: "GET", setup: async () => ({ path: `/api/compare?ids=${f.approved},${f.approvedB}` }), expect: { ...members(200), outsider: 404 } },
-  { name: "GET /api/compare (one id)", method: "GET", setup: async () => ({ path: `/api/compare?ids=${f.draft}` }), expect: members(422) },
+  {
+    name: "POST reviews unknown verdict",
+    method: "POST",
+    setup: async () => ({ path: `/api/designs/${f.draft}/reviews`, data: { verdict: "maybe", body: "?" } }),
+    expect: { anon: 401, owner: 422, designer: 422, reviewer: 422, maker: 422, outsider: 422 },
+  },
+  {
+    name: "GET /api/compare (two drafts)",
+    method: "GET",
+    setup: async () => ({ path: `/api/compare?ids=${f.draft},${f.approved}` }),
+    expect: draftSeen(200),
+  },
+  {
+    name: "GET /api/compare (two approved)",
+    method: "GET",
+    setup: async () => ({ path: `/api/compare?ids=${f.approved},${f.approvedB}` }),
+    expect: { ...members(200), outsider: 404 },
+  },
+  {
+    name: "GET /api/compare (one id)",
+    method: "GET",
+    setup: async () => ({ path: `/api/compare?ids=${f.draft}` }),
+    expect: members(422),
+  },
   { name: "GET /api/outbox", method: "GET", setup: fixed("/api/outbox"), expect: ownerOnly(200) },
   { name: "GET /api/invitations", method: "GET", setup: fixed("/api/invitations"), expect: ownerOnly(200) },
-  { name: "POST /api/invitations", method: "POST", setup: async () => ({ path: "/api/invitations", data: { email: `matrix-${unique()}@invitee.example`, role: "designer" } }), expect: ownerOnly(201) },
-  { name: "DELETE /api/invitations/[id]", method: "DELETE", setup: async () => ({ path: `/api/invitations/${await pendingInvitation()}` }), expect: ownerOnly(200, 404) },
-  { name: "POST /api/invitations/accept (bad token)", method: "POST", setup: fixed("/api/invitations/accept", { token: "x".repeat(43), name: "N", password: "long-enough-pw" }), expect: { ...members(404), anon: 404 } },
+  {
+    name: "POST /api/invitations",
+    method: "POST",
+    setup: async () => ({
+      path: "/api/invitations",
+      data: { email: `matrix-${unique()}@invitee.example`, role: "designer" },
+    }),
+    expect: ownerOnly(201),
+  },
+  {
+    name: "DELETE /api/invitations/[id]",
+    method: "DELETE",
+    setup: async () => ({ path: `/api/invitations/${await pendingInvitation()}` }),
+    expect: ownerOnly(200, 404),
+  },
+  {
+    name: "POST /api/invitations/accept (bad token)",
+    method: "POST",
+    setup: fixed("/api/invitations/accept", { token: "x".repeat(43), name: "N", password: "long-enough-pw" }),
+    expect: { ...members(404), anon: 404 },
+  },
   { name: "POST /api/solve", method: "POST", setup: fixed("/api/solve", requirement), expect: members(200) },
-  { name: "POST /api/insertion", method: "POST", setup: fixed("/api/insertion", { supply: "2.0 V", seriesOhms: "1.9 ohm", load: { model: "resistive", current: "200 mA" } }), expect: members(200) },
-  { name: "POST /api/netlist", method: "POST", setup: fixed("/api/netlist", { requirement, candidate: { shuntOhms: 0.274, gain: 50 } }), expect: members(200) },
-  { name: "GET /api/designs/[draft]/build-sheet", method: "GET", setup: async () => ({ path: `/api/designs/${f.draft}/build-sheet` }), expect: draftSeen(200) },
-  { name: "GET /api/designs/[approved]/build-sheet", method: "GET", setup: async () => ({ path: `/api/designs/${f.approved}/build-sheet` }), expect: { ...members(200), outsider: 404 } },
-  { name: "GET /api/designs/[draft]/netlist", method: "GET", setup: async () => ({ path: `/api/designs/${f.draft}/netlist` }), expect: draftSeen(200) },
-  { name: "GET /api/designs/[draft]/parts.csv", method: "GET", setup: async () => ({ path: `/api/designs/${f.draft}/parts.csv` }), expect: draftSeen(200) },
-  { name: "GET /api/designs/[draft]/export", method: "GET", setup: async () => ({ path: `/api/designs/${f.draft}/export` }), expect: draftSeen(200) },
-  { name: "GET /api/designs/[draft]/profiles", method: "GET", setup: async () => ({ path: `/api/designs/${f.draft}/profiles` }), expect: draftSeen(200) },
-  { name: "POST /api/designs/[draft]/profiles", method: "POST", setup: async () => ({ path: `/api/designs/${f.draft}/profiles`, multipart: csv }), expect: { anon: 401, owner: 201, designer: 201, reviewer: 403, maker: 403, outsider: 404 } },
-  { name: "GET /api/designs/[draft]/profiles/[unknown]", method: "GET", setup: async () => ({ path: `/api/designs/${f.draft}/profiles/${NO_SUCH}` }), expect: { anon: 401, owner: 404, designer: 404, reviewer: 404, maker: 404, outsider: 404 } },
+  {
+    name: "POST /api/insertion",
+    method: "POST",
+    setup: fixed("/api/insertion", {
+      supply: "2.0 V",
+      seriesOhms: "1.9 ohm",
+      load: { model: "resistive", current: "200 mA" },
+    }),
+    expect: members(200),
+  },
+  {
+    name: "POST /api/netlist",
+    method: "POST",
+    setup: fixed("/api/netlist", { requirement, candidate: { shuntOhms: 0.274, gain: 50 } }),
+    expect: members(200),
+  },
+  {
+    name: "GET /api/designs/[draft]/build-sheet",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.draft}/build-sheet` }),
+    expect: draftSeen(200),
+  },
+  {
+    name: "GET /api/designs/[approved]/build-sheet",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.approved}/build-sheet` }),
+    expect: { ...members(200), outsider: 404 },
+  },
+  {
+    name: "GET /api/designs/[draft]/netlist",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.draft}/netlist` }),
+    expect: draftSeen(200),
+  },
+  {
+    name: "GET /api/designs/[draft]/parts.csv",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.draft}/parts.csv` }),
+    expect: draftSeen(200),
+  },
+  {
+    name: "GET /api/designs/[draft]/export",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.draft}/export` }),
+    expect: draftSeen(200),
+  },
+  {
+    name: "GET /api/designs/[draft]/profiles",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.draft}/profiles` }),
+    expect: draftSeen(200),
+  },
+  {
+    name: "POST /api/designs/[draft]/profiles",
+    method: "POST",
+    setup: async () => ({ path: `/api/designs/${f.draft}/profiles`, multipart: csv }),
+    expect: { anon: 401, owner: 201, designer: 201, reviewer: 403, maker: 403, outsider: 404 },
+  },
+  {
+    name: "GET /api/designs/[draft]/profiles/[unknown]",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.draft}/profiles/${NO_SUCH}` }),
+    expect: { anon: 401, owner: 404, designer: 404, reviewer: 404, maker: 404, outsider: 404 },
+  },
   { name: "GET /api/library", method: "GET", setup: fixed("/api/library"), expect: members(200) },
-  { name: "GET /api/library/export?kind=shunts", method: "GET", setup: fixed("/api/library/export?kind=shunts"), expect: members(200) },
-  { name: "DELETE /api/library/amplifiers/[unknown]", method: "DELETE", setup: fixed(`/api/library/amplifiers/${NO_SUCH}`), expect: editors(404) },
-  { name: "DELETE /api/library/shunts/[unknown]", method: "DELETE", setup: fixed(`/api/library/shunts/${NO_SUCH}`), expect: editors(404) },
+  {
+    name: "GET /api/library/export?kind=shunts",
+    method: "GET",
+    setup: fixed("/api/library/export?kind=shunts"),
+    expect: members(200),
+  },
+  {
+    name: "DELETE /api/library/amplifiers/[unknown]",
+    method: "DELETE",
+    setup: fixed(`/api/library/amplifiers/${NO_SUCH}`),
+    expect: editors(404),
+  },
+  {
+    name: "DELETE /api/library/shunts/[unknown]",
+    method: "DELETE",
+    setup: fixed(`/api/library/shunts/${NO_SUCH}`),
+    expect: editors(404),
+  },
 ];
 
 async function call(ctx: APIRequestContext, method: Method, cell: Cell): Promise<number> {

@@ -10,12 +10,18 @@ test("a maker opens the approved demo design and finds the sheet, parts and benc
   const maker = await apiAs("maker");
   const list = (await (await maker.get("/api/designs")).json()) as { designs: { id: string; status: string }[] };
   const approved = list.designs.find((d) => d.status === "approved")!;
-  const design = (await (await maker.get(`/api/designs/${approved.id}`)).json()) as { requirement: never; choice: never };
+  const design = (await (await maker.get(`/api/designs/${approved.id}`)).json()) as {
+    requirement: never;
+    choice: never;
+  };
   await maker.dispose();
   await page.goto(`/designs/${approved.id}`);
   const panel = page.getByTestId("build-sheet-panel");
   await expect(panel).toBeVisible();
-  await expect(panel.getByTestId("download-build-sheet")).toHaveAttribute("href", `/api/designs/${approved.id}/build-sheet`);
+  await expect(panel.getByTestId("download-build-sheet")).toHaveAttribute(
+    "href",
+    `/api/designs/${approved.id}/build-sheet`,
+  );
   await expect(panel.getByText("build from this sheet")).toBeVisible();
   await expect(panel.getByTestId("parts-table").getByRole("rowheader", { name: "R1" })).toBeVisible();
   const rows = benchRows(design.requirement, design.choice);
@@ -30,7 +36,13 @@ test("a maker opens the approved demo design and finds the sheet, parts and benc
 
 test("a designer's draft is marked not for building", async ({ page }) => {
   const designer = await apiAs("designer");
-  const res = await designer.post("/api/designs", { data: { name: `Panel check ${Date.now().toString(36)}`, requirement: loggerRequirement, choice: firstFeasible(parsed(loggerRequirement)) } });
+  const res = await designer.post("/api/designs", {
+    data: {
+      name: `Panel check ${Date.now().toString(36)}`,
+      requirement: loggerRequirement,
+      choice: firstFeasible(parsed(loggerRequirement)),
+    },
+  });
   const { id } = (await res.json()) as { id: string };
   await designer.dispose();
   await signInPage(page, "designer");

@@ -7,7 +7,15 @@ import { extractText } from "unpdf";
 import { apiAs } from "../fixtures/auth";
 import { loggerRequirement, parsed, firstFeasible } from "../../lib/build-sheet/fixtures";
 
-type DesignBody = { id: string; name: string; status: string; revision: number; requirement: unknown; choice: { shuntOhms: number; gain: number }; metrics: Record<string, unknown> };
+type DesignBody = {
+  id: string;
+  name: string;
+  status: string;
+  revision: number;
+  requirement: unknown;
+  choice: { shuntOhms: number; gain: number };
+  metrics: Record<string, unknown>;
+};
 
 let owner: APIRequestContext;
 let designer: APIRequestContext;
@@ -20,8 +28,16 @@ const draftName = `Export check ${stamp}, low side`;
 const choice = firstFeasible(parsed(loggerRequirement));
 
 test.beforeAll(async () => {
-  [owner, designer, reviewer, maker, anonymous] = await Promise.all([apiAs("owner"), apiAs("designer"), apiAs("reviewer"), apiAs("maker"), apiAs(null)]);
-  const res = await designer.post("/api/designs", { data: { name: draftName, project: "Soil-moisture logger", requirement: loggerRequirement, choice } });
+  [owner, designer, reviewer, maker, anonymous] = await Promise.all([
+    apiAs("owner"),
+    apiAs("designer"),
+    apiAs("reviewer"),
+    apiAs("maker"),
+    apiAs(null),
+  ]);
+  const res = await designer.post("/api/designs", {
+    data: { name: draftName, project: "Soil-moisture logger", requirement: loggerRequirement, choice },
+  });
   expect(res.status(), await res.text()).toBe(201);
   draftId = ((await res.json()) as { id: string }).id;
 });
@@ -57,7 +73,8 @@ test.describe("GET /api/designs/[id]/build-sheet", () => {
   });
 
   test("a reviewer and an owner may preview it too", async () => {
-    for (const ctx of [reviewer, owner]) expect((await ctx.get(`/api/designs/${draftId}/build-sheet`)).status()).toBe(200);
+    for (const ctx of [reviewer, owner])
+      expect((await ctx.get(`/api/designs/${draftId}/build-sheet`)).status()).toBe(200);
   });
 
   test("a maker does not get a draft's sheet, signed out is 401, an unknown design 404", async () => {
@@ -68,7 +85,9 @@ test.describe("GET /api/designs/[id]/build-sheet", () => {
   });
 
   test("a maker downloads the demo team's approved design, without the notice", async () => {
-    const list = (await (await maker.get("/api/designs")).json()) as { designs: { id: string; name: string; status: string }[] };
+    const list = (await (await maker.get("/api/designs")).json()) as {
+      designs: { id: string; name: string; status: string }[];
+    };
     const approved = list.designs.find((d) => d.status === "approved");
     expect(approved, "the demo data has an approved design").toBeTruthy();
     const res = await maker.get(`/api/designs/${approved!.id}/build-sheet`);
@@ -80,11 +99,15 @@ test.describe("GET /api/designs/[id]/build-sheet", () => {
   });
 
   test("once a reviewer approves the draft, the maker gets its sheet and it names the approver", async () => {
-    const created = await designer.post("/api/designs", { data: { name: `Approval check ${stamp}`, requirement: loggerRequirement, choice } });
+    const created = await designer.post("/api/designs", {
+      data: { name: `Approval check ${stamp}`, requirement: loggerRequirement, choice },
+    });
     const { id } = (await created.json()) as { id: string };
     await expectJsonError(await maker.get(`/api/designs/${id}/build-sheet`), 404);
     expect((await designer.post(`/api/designs/${id}/submit`, { data: {} })).status()).toBe(200);
-    const review = await reviewer.post(`/api/designs/${id}/reviews`, { data: { verdict: "approve", body: "Checked against the bench." } });
+    const review = await reviewer.post(`/api/designs/${id}/reviews`, {
+      data: { verdict: "approve", body: "Checked against the bench." },
+    });
     expect(review.status(), await review.text()).toBe(201);
     const res = await maker.get(`/api/designs/${id}/build-sheet`);
     expect(res.status()).toBe(200);
@@ -102,7 +125,9 @@ test.describe("GET /api/designs/[id]/netlist", () => {
       const saved = await designer.get(`/api/designs/${draftId}/netlist${q}`);
       expect(saved.status()).toBe(200);
       expect(saved.headers()["content-type"]).toMatch(/^text\/plain/);
-      const stateless = await designer.post(`/api/netlist${q}`, { data: { requirement: design.requirement, candidate: design.choice } });
+      const stateless = await designer.post(`/api/netlist${q}`, {
+        data: { requirement: design.requirement, candidate: design.choice },
+      });
       expect(stateless.status()).toBe(200);
       const text = await saved.text();
       expect(text).toBe(await stateless.text());
@@ -122,7 +147,15 @@ test.describe("GET /api/designs/[id]/parts.csv", () => {
     expect(res.headers()["content-disposition"]).toMatch(/filename=".+-rev1\.parts\.csv"/);
     const parsedCsv = Papa.parse<Record<string, string>>(await res.text(), { header: true, skipEmptyLines: true });
     expect(parsedCsv.errors).toEqual([]);
-    expect(parsedCsv.meta.fields?.slice(0, 7)).toEqual(["designator", "part", "value", "tolerance", "tempco", "rating", "notes"]);
+    expect(parsedCsv.meta.fields?.slice(0, 7)).toEqual([
+      "designator",
+      "part",
+      "value",
+      "tolerance",
+      "tempco",
+      "rating",
+      "notes",
+    ]);
     const byRef = Object.fromEntries(parsedCsv.data.map((r) => [r.designator, r]));
     expect(Number(byRef.R1?.value_si)).toBe(choice.shuntOhms);
     expect(byRef.R1?.unit).toBe("ohm");
@@ -136,7 +169,12 @@ test.describe("design export and import", () => {
     expect(exported.status()).toBe(200);
     expect(exported.headers()["content-type"]).toMatch(/^application\/json/);
     const file = (await exported.json()) as Record<string, unknown>;
-    expect(file).toMatchObject({ format: "sensewright-design", version: 1, name: draftName, project: "Soil-moisture logger" });
+    expect(file).toMatchObject({
+      format: "sensewright-design",
+      version: 1,
+      name: draftName,
+      project: "Soil-moisture logger",
+    });
     const imported = await owner.post("/api/designs/import", { data: file });
     expect(imported.status(), await imported.text()).toBe(201);
     const { id, revision, status } = (await imported.json()) as { id: string; revision: number; status: string };
@@ -163,7 +201,10 @@ test.describe("design export and import", () => {
       [{ ...file, format: "spreadsheet" }, "format"],
       [{ ...file, version: 7 }, "version"],
       [{ ...file, choice: { shuntOhms: 0.274 } }, "choice.gain"],
-      [{ ...file, requirement: { ...(file.requirement as object), current: { min: "1 mA", max: "5 V" } } }, "requirement.current.max"],
+      [
+        { ...file, requirement: { ...(file.requirement as object), current: { min: "1 mA", max: "5 V" } } },
+        "requirement.current.max",
+      ],
       [{ ...file, choice: { ...(file.choice as object), shuntOhms: 0.2745 } }, "choice.shuntOhms"],
     ];
     for (const [data, path] of cases) {
@@ -172,7 +213,10 @@ test.describe("design export and import", () => {
       const body = (await res.json()) as { fieldErrors: Record<string, string[]> };
       expect(Object.keys(body.fieldErrors)).toContain(path);
     }
-    const notJson = await designer.post("/api/designs/import", { data: "{not json", headers: { "content-type": "application/json" } });
+    const notJson = await designer.post("/api/designs/import", {
+      data: "{not json",
+      headers: { "content-type": "application/json" },
+    });
     expect(notJson.status()).toBe(422);
     const after = ((await (await designer.get("/api/designs")).json()) as { designs: unknown[] }).designs.length;
     expect(after).toBe(before);

@@ -25,7 +25,9 @@ async function library(ctx: APIRequestContext = designer): Promise<Library> {
 }
 
 function importCsv(ctx: APIRequestContext, kind: string, csv: string) {
-  return ctx.post("/api/library/import", { multipart: { kind, file: { name: `${kind}.csv`, mimeType: "text/csv", buffer: Buffer.from(csv) } } });
+  return ctx.post("/api/library/import", {
+    multipart: { kind, file: { name: `${kind}.csv`, mimeType: "text/csv", buffer: Buffer.from(csv) } },
+  });
 }
 
 const amp = (name: string) => ({
@@ -78,12 +80,18 @@ test("a designer adds, edits and deletes; stale edits and bad input are refused"
 
   const bad = await designer.post("/api/library/amplifiers", { data: { ...amp(`Bad ${tag}`), offsetV: "25 mA" } });
   expect(bad.status()).toBe(422);
-  expect(((await bad.json()) as { fieldErrors: Record<string, string[]> }).fieldErrors.offsetV?.[0]).toMatch(/is a current, not a voltage/);
+  expect(((await bad.json()) as { fieldErrors: Record<string, string[]> }).fieldErrors.offsetV?.[0]).toMatch(
+    /is a current, not a voltage/,
+  );
 
-  const edited = await owner.patch(`/api/library/amplifiers/${a.id}`, { data: { gains: [10, 20, 50], updatedAt: a.updatedAt } });
+  const edited = await owner.patch(`/api/library/amplifiers/${a.id}`, {
+    data: { gains: [10, 20, 50], updatedAt: a.updatedAt },
+  });
   expect(edited.status(), await edited.text()).toBe(200);
   expect(((await edited.json()) as Part).gains).toEqual([10, 20, 50]);
-  const stale = await designer.patch(`/api/library/amplifiers/${a.id}`, { data: { cmrrDb: 90, updatedAt: a.updatedAt } });
+  const stale = await designer.patch(`/api/library/amplifiers/${a.id}`, {
+    data: { cmrrDb: 90, updatedAt: a.updatedAt },
+  });
   expect(stale.status()).toBe(409);
   const mixed = await designer.patch(`/api/library/amplifiers/${a.id}`, { data: { supplyMinV: "6 V" } });
   expect(mixed.status()).toBe(422); // above the highest supply once merged
@@ -103,18 +111,22 @@ test("CSV import is all or nothing and names the row and column", async () => {
   expect(res.status()).toBe(422);
   const body = (await res.json()) as { message: string; row: number; line: number; column: string };
   expect(body).toMatchObject({ row: 3, line: 4, column: "fourTerminal" });
-  expect(body.message).toMatch(/^Data row 3 \(file line 4\), column "fourTerminal": "maybe" is not yes or no\. Nothing was imported\.$/);
+  expect(body.message).toMatch(
+    /^Data row 3 \(file line 4\), column "fourTerminal": "maybe" is not yes or no\. Nothing was imported\.$/,
+  );
   expect(await library()).toEqual(before);
 
   const wrongUnit = await importCsv(designer, "shunts", `${header.replace("[mohm]", "[mA]")}\n${good1}\n`);
   expect(wrongUnit.status()).toBe(422);
-  expect(((await wrongUnit.json()) as { message: string }).message).toMatch(/column "minOhms \[mA\]": unit "mA" is a current, not a resistance/);
+  expect(((await wrongUnit.json()) as { message: string }).message).toMatch(
+    /column "minOhms \[mA\]": unit "mA" is a current, not a resistance/,
+  );
   const unknown = await importCsv(designer, "shunts", `${header},colour\n${good1},red\n`);
   expect(((await unknown.json()) as { column: string }).column).toBe("colour");
   const missing = await importCsv(designer, "shunts", "name,series\nX,E24\n");
   expect(((await missing.json()) as { message: string }).message).toMatch(/missing/);
   const nan = await importCsv(designer, "shunts", `${header}\n${good1.replace(",1,100,", ",NaN,100,")}\n`);
-  expect(((await nan.json()) as { row: number; column: string })).toMatchObject({ row: 1, column: "minOhms [mohm]" });
+  expect((await nan.json()) as { row: number; column: string }).toMatchObject({ row: 1, column: "minOhms [mohm]" });
   expect((await importCsv(designer, "gizmos", `${header}\n${good1}\n`)).status()).toBe(422);
   expect(await library()).toEqual(before);
 
@@ -123,7 +135,14 @@ test("CSV import is all or nothing and names the row and column", async () => {
   expect(await ok.json()).toMatchObject({ kind: "shunts", created: 2, updated: 0 });
   const after = await library();
   const a = after.shunts.find((s) => s.name === `Strip A ${tag}`)!;
-  expect(a).toMatchObject({ series: "E24", minOhms: 0.001, maxOhms: 0.1, toleranceFraction: 0.01, ratingsW: [0.5, 1], fourTerminal: false });
+  expect(a).toMatchObject({
+    series: "E24",
+    minOhms: 0.001,
+    maxOhms: 0.1,
+    toleranceFraction: 0.01,
+    ratingsW: [0.5, 1],
+    fourTerminal: false,
+  });
 });
 
 test("export round-trips through import", async () => {

@@ -22,11 +22,18 @@ export type SavedDesign = {
 export async function createProfileDesign(ctx: APIRequestContext, name: string): Promise<SavedDesign> {
   const solved = await ctx.post("/api/solve", { data: profileRequirement });
   expect(solved.status(), await solved.text()).toBe(200);
-  const { candidates } = (await solved.json()) as { candidates: { shuntOhms: number; gain: number; feasible: boolean }[] };
+  const { candidates } = (await solved.json()) as {
+    candidates: { shuntOhms: number; gain: number; feasible: boolean }[];
+  };
   const choice = candidates.find((c) => c.feasible);
   expect(choice, "a feasible candidate").toBeTruthy();
   const created = await ctx.post("/api/designs", {
-    data: { name, project: "Profile checks", requirement: profileRequirement, choice: { shuntOhms: choice!.shuntOhms, gain: choice!.gain } },
+    data: {
+      name,
+      project: "Profile checks",
+      requirement: profileRequirement,
+      choice: { shuntOhms: choice!.shuntOhms, gain: choice!.gain },
+    },
   });
   expect(created.status(), await created.text()).toBe(201);
   const { id } = (await created.json()) as { id: string };
@@ -37,6 +44,8 @@ export async function createProfileDesign(ctx: APIRequestContext, name: string):
 
 export function uploadCsv(ctx: APIRequestContext, designId: string, name: string, content: string | Buffer) {
   return ctx.post(`/api/designs/${designId}/profiles`, {
-    multipart: { file: { name, mimeType: "text/csv", buffer: Buffer.isBuffer(content) ? content : Buffer.from(content, "utf8") } },
+    multipart: {
+      file: { name, mimeType: "text/csv", buffer: Buffer.isBuffer(content) ? content : Buffer.from(content, "utf8") },
+    },
   });
 }

@@ -11,7 +11,12 @@ let reviewer: APIRequestContext;
 let design: SavedDesign;
 
 test.beforeAll(async () => {
-  [designer, owner, maker, reviewer] = await Promise.all([apiAs("designer"), apiAs("owner"), apiAs("maker"), apiAs("reviewer")]);
+  [designer, owner, maker, reviewer] = await Promise.all([
+    apiAs("designer"),
+    apiAs("owner"),
+    apiAs("maker"),
+    apiAs("reviewer"),
+  ]);
   design = await createProfileDesign(designer, `Profile checks ${Date.now()}`);
 });
 test.afterAll(async () => {
@@ -26,18 +31,70 @@ async function count(): Promise<number> {
 
 type Refusal = { message: string; row?: number; line?: number; column?: string; fieldErrors: Record<string, string[]> };
 
-const refusals: { what: string; csv: string; row?: number; line?: number; column: string | undefined; text: RegExp }[] = [
-  { what: "a missing current column", csv: "time\n0\n1\n", line: 1, column: "current", text: /current column is missing/ },
-  { what: "a missing time column", csv: "current (mA)\n1\n2\n", line: 1, column: "time", text: /time column is missing/ },
-  { what: "an unknown column", csv: "time,current,temperature\n0,1,20\n1,2,21\n", line: 1, column: "temperature", text: /not a column this file may have/ },
-  { what: "an unknown unit", csv: "time (fortnights),current\n0,1\n1,2\n", line: 1, column: "time (fortnights)", text: /unit "fortnights" is not a known unit of time/ },
-  { what: "a unit of the wrong dimension", csv: "time (s),current [V]\n0,1\n1,2\n", line: 1, column: "current [V]", text: /unit "V" is a voltage, not a current/ },
-  { what: "a cell that is not a number", csv: "time,current\n0,1\n1,2\n2,lots\n", row: 3, line: 4, column: "current", text: /"lots" is not a number/ },
-  { what: "NaN", csv: "time,current\n0,1\n1,NaN\n", row: 2, line: 3, column: "current", text: /not a finite number/ },
-  { what: "infinity", csv: "t,i\n0,1\nInfinity,2\n", row: 2, line: 3, column: "t", text: /not a finite number/ },
-  { what: "time that does not increase", csv: "time (ms),current (uA)\n0,5\n10,6\n10,7\n", row: 3, line: 4, column: "time (ms)", text: /time must increase/ },
-  { what: "fewer than two rows", csv: "time,current\n0,1\n", row: 1, line: undefined, column: undefined, text: /at least two/ },
-];
+const refusals: { what: string; csv: string; row?: number; line?: number; column: string | undefined; text: RegExp }[] =
+  [
+    {
+      what: "a missing current column",
+      csv: "time\n0\n1\n",
+      line: 1,
+      column: "current",
+      text: /current column is missing/,
+    },
+    {
+      what: "a missing time column",
+      csv: "current (mA)\n1\n2\n",
+      line: 1,
+      column: "time",
+      text: /time column is missing/,
+    },
+    {
+      what: "an unknown column",
+      csv: "time,current,temperature\n0,1,20\n1,2,21\n",
+      line: 1,
+      column: "temperature",
+      text: /not a column this file may have/,
+    },
+    {
+      what: "an unknown unit",
+      csv: "time (fortnights),current\n0,1\n1,2\n",
+      line: 1,
+      column: "time (fortnights)",
+      text: /unit "fortnights" is not a known unit of time/,
+    },
+    {
+      what: "a unit of the wrong dimension",
+      csv: "time (s),current [V]\n0,1\n1,2\n",
+      line: 1,
+      column: "current [V]",
+      text: /unit "V" is a voltage, not a current/,
+    },
+    {
+      what: "a cell that is not a number",
+      csv: "time,current\n0,1\n1,2\n2,lots\n",
+      row: 3,
+      line: 4,
+      column: "current",
+      text: /"lots" is not a number/,
+    },
+    { what: "NaN", csv: "time,current\n0,1\n1,NaN\n", row: 2, line: 3, column: "current", text: /not a finite number/ },
+    { what: "infinity", csv: "t,i\n0,1\nInfinity,2\n", row: 2, line: 3, column: "t", text: /not a finite number/ },
+    {
+      what: "time that does not increase",
+      csv: "time (ms),current (uA)\n0,5\n10,6\n10,7\n",
+      row: 3,
+      line: 4,
+      column: "time (ms)",
+      text: /time must increase/,
+    },
+    {
+      what: "fewer than two rows",
+      csv: "time,current\n0,1\n",
+      row: 1,
+      line: undefined,
+      column: undefined,
+      text: /at least two/,
+    },
+  ];
 
 test.describe("refused files store nothing", () => {
   for (const r of refusals) {
@@ -124,7 +181,9 @@ test.describe("who may upload", () => {
     const anon = await apiAs(null);
     expect((await uploadCsv(anon, design.id, "a.csv", "time,current\n0,1\n1,2\n")).status()).toBe(401);
     await anon.dispose();
-    expect((await uploadCsv(designer, "00000000-0000-4000-8000-000000000000", "a.csv", "time,current\n0,1\n1,2\n")).status()).toBe(404);
+    expect(
+      (await uploadCsv(designer, "00000000-0000-4000-8000-000000000000", "a.csv", "time,current\n0,1\n1,2\n")).status(),
+    ).toBe(404);
     expect((await designer.get("/api/designs/not-a-uuid/profiles")).status()).toBe(404);
   });
 });
@@ -148,7 +207,8 @@ test.describe("a good upload", () => {
     expect(body.samples).toBe(5);
     const s = body.summary;
     let charge = 0;
-    for (let k = 1; k < 5; k++) charge += ((currents[k - 1]! + currents[k]!) / 2) * ((times[k]! - times[k - 1]!) / 1000);
+    for (let k = 1; k < 5; k++)
+      charge += ((currents[k - 1]! + currents[k]!) / 2) * ((times[k]! - times[k - 1]!) / 1000);
     expect(s.samples).toBe(5);
     expect(s.durationS).toBeCloseTo(0.04, 12);
     expect(s.chargeC).toBeCloseTo(charge, 9);
@@ -162,12 +222,17 @@ test.describe("a good upload", () => {
 
     const detail = await designer.get(`/api/designs/${design.id}/profiles/${body.id}?width=100`);
     expect(detail.status()).toBe(200);
-    const d = (await detail.json()) as { series: { tS: number[]; currentA: number[]; clipped: unknown[]; belowStep: unknown[] }; fileName: string };
+    const d = (await detail.json()) as {
+      series: { tS: number[]; currentA: number[]; clipped: unknown[]; belowStep: unknown[] };
+      fileName: string;
+    };
     expect(d.fileName).toBe("burst.csv");
     expect(d.series.tS).toHaveLength(5);
     expect(d.series.clipped.length).toBe(1);
     expect(d.series.belowStep.length).toBe(2);
-    const zoomed = (await (await designer.get(`/api/designs/${design.id}/profiles/${body.id}?from=0.015&to=0.025&width=100`)).json()) as { series: { tS: number[] } };
+    const zoomed = (await (
+      await designer.get(`/api/designs/${design.id}/profiles/${body.id}?from=0.015&to=0.025&width=100`)
+    ).json()) as { series: { tS: number[] } };
     expect(zoomed.series.tS).toEqual([0.01, 0.02, 0.03]); // the window plus one sample either side
     expect((await designer.get(`/api/designs/${design.id}/profiles/${body.id}?width=abc`)).status()).toBe(422);
 

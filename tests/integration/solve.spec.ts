@@ -9,7 +9,14 @@ type SolveBody = {
   evaluated: number;
   feasibleCount: number;
   rejected: Record<string, number>;
-  candidates: { shuntOhms: number; gain: number; burdenV: number; feasible: boolean; pareto: boolean; reasons: string[] }[];
+  candidates: {
+    shuntOhms: number;
+    gain: number;
+    burdenV: number;
+    feasible: boolean;
+    pareto: boolean;
+    reasons: string[];
+  }[];
   rangePlan: null | { ranges: { minA: number; maxA: number; shuntOhms: number; gain: number }[] };
 };
 
@@ -39,15 +46,55 @@ async function expect422(res: Awaited<ReturnType<APIRequestContext["post"]>>, pa
 
 test.describe("POST /api/solve refusals", () => {
   const cases: { name: string; body: unknown; path: string; text?: RegExp }[] = [
-    { name: "a voltage for the maximum current", body: { ...base, current: { min: "3 uA", max: "5 V" } }, path: "current.max", text: /5 V is a voltage, not a current/ },
-    { name: "minimum above maximum", body: { ...base, current: { min: "200 mA", max: "180 mA" } }, path: "current.min", text: /not be above the maximum/ },
-    { name: "a negative supply", body: { ...base, supply: { voltage: "-3 V" } }, path: "supply.voltage", text: /above zero/ },
-    { name: "a non-finite number (1e999 reads as Infinity)", body: '{"current":{"min":"3 uA","max":1e999},"supply":{"voltage":3},"readout":{"kind":"adc","bits":12,"fullScale":2.5}}', path: "current.max", text: /expected a (finite )?number/ },
-    { name: "absurd ADC bits", body: { ...base, readout: { kind: "adc", bits: 64, fullScale: "2.5 V" } }, path: "readout.bits", text: /at most 32/ },
-    { name: "an unknown E-series", body: { ...base, shunt: { series: "E7" } }, path: "shunt.series", text: /unknown series/ },
+    {
+      name: "a voltage for the maximum current",
+      body: { ...base, current: { min: "3 uA", max: "5 V" } },
+      path: "current.max",
+      text: /5 V is a voltage, not a current/,
+    },
+    {
+      name: "minimum above maximum",
+      body: { ...base, current: { min: "200 mA", max: "180 mA" } },
+      path: "current.min",
+      text: /not be above the maximum/,
+    },
+    {
+      name: "a negative supply",
+      body: { ...base, supply: { voltage: "-3 V" } },
+      path: "supply.voltage",
+      text: /above zero/,
+    },
+    {
+      name: "a non-finite number (1e999 reads as Infinity)",
+      body: '{"current":{"min":"3 uA","max":1e999},"supply":{"voltage":3},"readout":{"kind":"adc","bits":12,"fullScale":2.5}}',
+      path: "current.max",
+      text: /expected a (finite )?number/,
+    },
+    {
+      name: "absurd ADC bits",
+      body: { ...base, readout: { kind: "adc", bits: 64, fullScale: "2.5 V" } },
+      path: "readout.bits",
+      text: /at most 32/,
+    },
+    {
+      name: "an unknown E-series",
+      body: { ...base, shunt: { series: "E7" } },
+      path: "shunt.series",
+      text: /unknown series/,
+    },
     { name: "a missing required field", body: { supply: { voltage: "3 V" } }, path: "current" },
-    { name: "a bad ranking expression", body: { ...base, rank: "burdenV + process.exit()" }, path: "rank", text: /Ranking expression/ },
-    { name: "an unknown name in the ranking expression", body: { ...base, rank: "price * 2" }, path: "rank", text: /unknown name "price"/ },
+    {
+      name: "a bad ranking expression",
+      body: { ...base, rank: "burdenV + process.exit()" },
+      path: "rank",
+      text: /Ranking expression/,
+    },
+    {
+      name: "an unknown name in the ranking expression",
+      body: { ...base, rank: "price * 2" },
+      path: "rank",
+      text: /unknown name "price"/,
+    },
     { name: "a ranking expression that is not text", body: { ...base, rank: 42 }, path: "rank" },
   ];
   for (const c of cases) {
@@ -58,7 +105,10 @@ test.describe("POST /api/solve refusals", () => {
   }
 
   test("malformed JSON → 422 on (body)", async () => {
-    const res = await designer.post("/api/solve", { data: '{"current": {"min": "3 uA",', headers: { "content-type": "application/json" } });
+    const res = await designer.post("/api/solve", {
+      data: '{"current": {"min": "3 uA",',
+      headers: { "content-type": "application/json" },
+    });
     await expect422(res, "(body)");
   });
 
@@ -93,7 +143,11 @@ test.describe("POST /api/solve results", () => {
     }
     expect(s.rangePlan).toBeNull();
     // The requirement comes back normalized in SI with every default filled in.
-    expect(s.requirement).toMatchObject({ current: { min: 3e-6, max: 0.18 }, supply: { voltage: 3, side: "low" }, drop: { max: 0.06 } });
+    expect(s.requirement).toMatchObject({
+      current: { min: 3e-6, max: 0.18 },
+      supply: { voltage: 3, side: "low" },
+      drop: { max: 0.06 },
+    });
   });
 
   test("a span too wide for one range through 12 bits: no feasible pair, a range plan covering the span", async () => {
@@ -110,7 +164,9 @@ test.describe("POST /api/solve results", () => {
   });
 
   test("a valid ranking expression is accepted", async () => {
-    const res = await designer.post("/api/solve", { data: { ...loggerOneRange, rank: "burdenV * 1000 + errorAtMinPercent", limit: 20 } });
+    const res = await designer.post("/api/solve", {
+      data: { ...loggerOneRange, rank: "burdenV * 1000 + errorAtMinPercent", limit: 20 },
+    });
     expect(res.status()).toBe(200);
     const s = (await res.json()) as SolveBody;
     expect(s.candidates.length).toBeLessThanOrEqual(Math.max(20, s.candidates.filter((c) => c.pareto).length));
@@ -147,7 +203,9 @@ test.describe("POST /api/insertion", () => {
   });
 
   test("a current for the series resistance → 422 on seriesOhms", async () => {
-    const res = await designer.post("/api/insertion", { data: { supply: "2 V", seriesOhms: "2 mA", load: { current: "1 mA" } } });
+    const res = await designer.post("/api/insertion", {
+      data: { supply: "2 V", seriesOhms: "2 mA", load: { current: "1 mA" } },
+    });
     await expect422(res, "seriesOhms", /is a current, not a resistance/);
   });
 
@@ -179,11 +237,15 @@ test.describe("POST /api/netlist", () => {
     });
     expect(res.status()).toBe(422);
     const body = (await res.json()) as { fieldErrors: Record<string, string[]> };
-    expect(Object.keys(body.fieldErrors)).toEqual(expect.arrayContaining(["requirement.current.max", "candidate.shuntOhms"]));
+    expect(Object.keys(body.fieldErrors)).toEqual(
+      expect.arrayContaining(["requirement.current.max", "candidate.shuntOhms"]),
+    );
   });
 
   test("a bad offset query → 422 on offset", async () => {
-    const res = await designer.post("/api/netlist?offset=maybe", { data: { requirement: base, candidate: { shuntOhms: 0.1, gain: 10 } } });
+    const res = await designer.post("/api/netlist?offset=maybe", {
+      data: { requirement: base, candidate: { shuntOhms: 0.1, gain: 10 } },
+    });
     await expect422(res, "offset");
   });
 });

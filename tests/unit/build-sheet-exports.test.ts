@@ -7,11 +7,14 @@ import { evaluateCandidate, parseRequirement } from "@/lib/design";
 import { csvColumns, designExport, designImportSchema, exportFileName, partsCsv } from "@/lib/build-sheet/exports";
 import { fixtureView, loggerRequirement, pumpRequirement } from "@/lib/build-sheet/fixtures";
 import { partsList } from "@/lib/build-sheet/parts";
-import { evaluateDesign } from "@/lib/designs/service";
+import { evaluateDesign } from "@/lib/saved-designs/service";
 import { HttpError } from "@/lib/http";
 
 const logger = fixtureView(loggerRequirement, { name: "Soil logger, radio range", revision: 4 });
-const gainSet = fixtureView({ ...loggerRequirement, amplifier: { gains: { series: "E24", min: 20, max: 60 } } }, { name: "Logger \"gain set\", R2/R3" });
+const gainSet = fixtureView(
+  { ...loggerRequirement, amplifier: { gains: { series: "E24", min: 20, max: 60 } } },
+  { name: 'Logger "gain set", R2/R3' },
+);
 
 describe("parts CSV", () => {
   it.each([
@@ -94,7 +97,10 @@ describe("design JSON export and import", () => {
 
   it("refuses a requirement the engine refuses, with the dotted path under requirement", () => {
     const good = designExport(logger, new Date());
-    const body = designImportSchema.parse({ ...good, requirement: { ...good.requirement, current: { min: 0.001, max: "5 V" } } });
+    const body = designImportSchema.parse({
+      ...good,
+      requirement: { ...good.requirement, current: { min: 0.001, max: "5 V" } },
+    });
     try {
       evaluateDesign(body.requirement, body.choice);
       expect.unreachable("the service accepted a voltage as a current");

@@ -31,7 +31,13 @@ async function render(view: DesignView, pngName?: string): Promise<Rendered> {
   if (pngName && spawnSync("pdftoppm", ["-v"]).status === 0) {
     mkdirSync("test-results/build-sheet", { recursive: true });
     writeFileSync(`test-results/build-sheet/${pngName}.pdf`, pdf);
-    spawnSync("pdftoppm", ["-png", "-r", "80", `test-results/build-sheet/${pngName}.pdf`, `test-results/build-sheet/${pngName}`]);
+    spawnSync("pdftoppm", [
+      "-png",
+      "-r",
+      "80",
+      `test-results/build-sheet/${pngName}.pdf`,
+      `test-results/build-sheet/${pngName}`,
+    ]);
   }
   return { pdf, pages, all: pages.join(" ") };
 }
@@ -45,7 +51,10 @@ const highVoltage: RequirementInput = {
   accuracy: { percent: 3 },
 };
 
-const resistorSet: RequirementInput = { ...loggerRequirement, amplifier: { gains: { series: "E24", min: 20, max: 60 } } };
+const resistorSet: RequirementInput = {
+  ...loggerRequirement,
+  amplifier: { gains: { series: "E24", min: 20, max: 60 } },
+};
 
 describe("build sheet of a draft (soil logger, low side)", () => {
   const view = fixtureView(loggerRequirement, { name: "Soil logger, radio range", status: "draft", revision: 3 });
@@ -91,7 +100,13 @@ describe("build sheet of a draft (soil logger, low side)", () => {
 
   it("carries the engine's bench-check rows, formatted as the engine formats them", () => {
     const rows = benchCheck(view.requirement, view.choice);
-    expect(rows.map((x) => x.label)).toEqual(["Minimum current", "Typical current", "10 % of maximum current", "50 % of maximum current", "Maximum current"]);
+    expect(rows.map((x) => x.label)).toEqual([
+      "Minimum current",
+      "Typical current",
+      "10 % of maximum current",
+      "50 % of maximum current",
+      "Maximum current",
+    ]);
     for (const row of rows) {
       const line = `${row.label} ${formatSI(row.currentA, "A")} ${formatSI(row.expectedV, "V")} ${formatSI(row.minV, "V")} to ${formatSI(row.maxV, "V")}`;
       expectText(r.all, line);
@@ -114,7 +129,14 @@ describe("build sheet of a draft (soil logger, low side)", () => {
   });
 
   it("gives the cautions and defers to local codes and licensed practice", () => {
-    for (const words of ["Hot parts", "Fuse the measured path", "measurement category", "Never open a live inductive circuit", "local electrical codes", "licensed"]) {
+    for (const words of [
+      "Hot parts",
+      "Fuse the measured path",
+      "measurement category",
+      "Never open a live inductive circuit",
+      "local electrical codes",
+      "licensed",
+    ]) {
       expectText(r.all, words);
     }
   });
@@ -123,7 +145,11 @@ describe("build sheet of a draft (soil logger, low side)", () => {
     const covered = coveredCodePoints();
     const raw = (await extractText(new Uint8Array(r.pdf), { mergePages: true })).text;
     // Undo only the extraction's mu substitution; anything else must be drawable as is.
-    const missing = [...new Set([...raw.replace(/\u03bc/g, "\u00b5")].filter((ch) => !/\s/.test(ch) && !covered.has(ch.codePointAt(0)!)))];
+    const missing = [
+      ...new Set(
+        [...raw.replace(/\u03bc/g, "\u00b5")].filter((ch) => !/\s/.test(ch) && !covered.has(ch.codePointAt(0)!)),
+      ),
+    ];
     expect(missing).toEqual([]);
     expect(raw).toMatch(/[µμ]A/);
     expect(raw).toContain("Ω");
@@ -131,7 +157,12 @@ describe("build sheet of a draft (soil logger, low side)", () => {
 });
 
 describe("build sheet of an approved design (pump controller, high side)", () => {
-  const view = fixtureView(pumpRequirement, { name: "Pump controller, 6 A high side", project: "Pump controller", status: "approved", revision: 1 });
+  const view = fixtureView(pumpRequirement, {
+    name: "Pump controller, 6 A high side",
+    project: "Pump controller",
+    status: "approved",
+    revision: 1,
+  });
   let r: Rendered;
   beforeAll(async () => {
     r = await render(view, "pump-approved");
@@ -172,7 +203,10 @@ describe("build sheet cautions and parts that depend on the design", () => {
 
 describe("build sheet of a design with very long text", () => {
   it("still numbers every page consistently and keeps to four pages", async () => {
-    const long = "Bench adapter for the field logger's radio burst range, second build with the wider copper pour and the relocated amplifier ".repeat(2).slice(0, 200);
+    const long =
+      "Bench adapter for the field logger's radio burst range, second build with the wider copper pour and the relocated amplifier "
+        .repeat(2)
+        .slice(0, 200);
     const gains = Array.from({ length: 40 }, (_, i) => 2 + i * 5);
     const view = fixtureView({ ...loggerRequirement, amplifier: { gains } }, { name: long, project: long });
     const r = await render(view, "long-text");
@@ -199,4 +233,3 @@ describe("page numbers when a page overflows its plan", () => {
     text.map(squash).forEach((page, i) => expect(page).toContain(`Page ${i + 1} of ${text.length}`));
   });
 });
-

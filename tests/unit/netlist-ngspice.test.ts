@@ -12,7 +12,10 @@ import { designNetlist } from "@/lib/build-sheet/exports";
 import { fixtureView, loggerRequirement, pumpRequirement } from "@/lib/build-sheet/fixtures";
 
 const hasNgspice = spawnSync("ngspice", ["--version"], { encoding: "utf8" }).status === 0;
-if (!hasNgspice) console.warn("netlist-ngspice.test.ts skipped: ngspice is not installed (Debian package ngspice; .ci/run installs it)");
+if (!hasNgspice)
+  console.warn(
+    "netlist-ngspice.test.ts skipped: ngspice is not installed (Debian package ngspice; .ci/run installs it)",
+  );
 
 /** Node voltages of the `.op` analysis, as ngspice prints them in batch mode. */
 function operatingPoint(netlist: string): Record<string, number> {
@@ -22,7 +25,8 @@ function operatingPoint(netlist: string): Record<string, number> {
     writeFileSync(file, netlist);
     const out = execFileSync("ngspice", ["-b", file], { encoding: "utf8", stdio: ["ignore", "pipe", "pipe"] });
     const nodes: Record<string, number> = {};
-    for (const m of out.matchAll(/^\s*([a-z0-9_#]+)\s+(-?\d[\d.]*(?:e[+-]\d+)?)\s*$/gim)) nodes[(m[1] ?? "").toLowerCase()] = Number(m[2]);
+    for (const m of out.matchAll(/^\s*([a-z0-9_#]+)\s+(-?\d[\d.]*(?:e[+-]\d+)?)\s*$/gim))
+      nodes[(m[1] ?? "").toLowerCase()] = Number(m[2]);
     return nodes;
   } finally {
     rmSync(dir, { recursive: true, force: true });
@@ -41,9 +45,15 @@ const designs = [
 
 // A larger offset than the defaults' 10 µV, so that G·Vos is well above the 0.1 % tolerance.
 const withOffset = [
-// Same shunt and gain as above (the netlist does not care whether the pair still passes).
-  ["low side (soil logger)", fixtureView({ ...loggerRequirement, amplifier: { offset: "150 uV" } }, { choice: designs[0][1].choice })],
-  ["high side (pump controller)", fixtureView({ ...pumpRequirement, amplifier: { offset: "300 uV" } }, { choice: designs[1][1].choice })],
+  // Same shunt and gain as above (the netlist does not care whether the pair still passes).
+  [
+    "low side (soil logger)",
+    fixtureView({ ...loggerRequirement, amplifier: { offset: "150 uV" } }, { choice: designs[0][1].choice }),
+  ],
+  [
+    "high side (pump controller)",
+    fixtureView({ ...pumpRequirement, amplifier: { offset: "300 uV" } }, { choice: designs[1][1].choice }),
+  ],
 ] as const;
 
 describe.skipIf(!hasNgspice)("exported netlist in ngspice", () => {

@@ -15,9 +15,15 @@ const design = { shuntOhms: 0.1, gain: 20, supplyV: 3, fullScaleV: 2.5, lsbA: 1e
 
 beforeAll(async () => {
   const db = await getDb();
-  const [team] = await db.insert(teams).values({ name: `Profile store ${suffix}` }).returning();
+  const [team] = await db
+    .insert(teams)
+    .values({ name: `Profile store ${suffix}` })
+    .returning();
   teamId = team!.id;
-  const [user] = await db.insert(users).values({ email: `store-${suffix}@test.example`, name: "Store tester", passwordHash: "x" }).returning();
+  const [user] = await db
+    .insert(users)
+    .values({ email: `store-${suffix}@test.example`, name: "Store tester", passwordHash: "x" })
+    .returning();
   userId = user!.id;
   const [d] = await db.insert(designs).values({ teamId, name: "Store design", createdBy: userId }).returning();
   designId = d!.id;
@@ -30,13 +36,25 @@ describe("profile storage", () => {
 
   it("writes the samples as little-endian Float64 and reads them back", async () => {
     const summary = summarizeProfile(timesS, currentsA, design);
-    const { id } = await insertProfile({ teamId, designId, revision: 1, fileName: "a.csv", timesS, currentsA, summary, userId, userName: "Store tester" });
+    const { id } = await insertProfile({
+      teamId,
+      designId,
+      revision: 1,
+      fileName: "a.csv",
+      timesS,
+      currentsA,
+      summary,
+      userId,
+      userName: "Store tester",
+    });
     const db = await getDb();
     const [raw] = await db.select({ bytes: profiles.currentsA }).from(profiles).where(eq(profiles.id, id));
     // 1.5 = 0x3FF8000000000000, least significant byte first.
     expect(Array.from(raw!.bytes.subarray(0, 8))).toEqual([0, 0, 0, 0, 0, 0, 0xf8, 0x3f]);
     expect(raw!.bytes.byteLength).toBe(24);
-    const result = (await db.execute(sql`select encode(times_s, 'hex') as h from profiles where id = ${id}`)) as unknown as { rows: { h: string }[] };
+    const result = (await db.execute(
+      sql`select encode(times_s, 'hex') as h from profiles where id = ${id}`,
+    )) as unknown as { rows: { h: string }[] };
     const [hex] = result.rows;
     expect(hex!.h.slice(16, 32)).toBe("000000000000e03f"); // 0.5 little-endian
 
@@ -59,7 +77,17 @@ describe("profile storage", () => {
     const summary = summarizeProfile(timesS, currentsA, design);
     // An uploader who does not exist breaks the foreign key inside the transaction.
     await expect(
-      insertProfile({ teamId, designId, revision: 1, fileName: "b.csv", timesS, currentsA, summary, userId: "00000000-0000-4000-8000-000000000000", userName: "nobody" }),
+      insertProfile({
+        teamId,
+        designId,
+        revision: 1,
+        fileName: "b.csv",
+        timesS,
+        currentsA,
+        summary,
+        userId: "00000000-0000-4000-8000-000000000000",
+        userName: "nobody",
+      }),
     ).rejects.toThrow();
     expect([await count(), await audits()]).toEqual([p0, a0]);
   });

@@ -131,11 +131,15 @@ describe("every refusal names the row and the column", () => {
   });
 
   it("a decimal comma, with the fix in the message", () => {
-    expect(refused("time;current\n0;1\n1;0,5\n").message).toBe('Data row 2 (file line 3), column "current": "0,5" is not a number (write decimals with a point: 0.5)');
+    expect(refused("time;current\n0;1\n1;0,5\n").message).toBe(
+      'Data row 2 (file line 3), column "current": "0,5" is not a number (write decimals with a point: 0.5)',
+    );
   });
 
   it("NaN and infinity", () => {
-    expect(refused("time,current\n0,NaN\n1,2\n").message).toMatch(/^Data row 1 \(file line 2\), column "current": "NaN" is not a finite number/);
+    expect(refused("time,current\n0,NaN\n1,2\n").message).toMatch(
+      /^Data row 1 \(file line 2\), column "current": "NaN" is not a finite number/,
+    );
     expect(refused("time,current\n0,1\nInfinity,2\n").place).toEqual({ row: 2, line: 3, column: "time" });
     expect(refused("time,current\n0,1\n1,-inf\n").message).toMatch(/not a finite number/);
     expect(refused("time,current\n0,1\n1,1e999\n").message).toMatch(/too large/);

@@ -7,11 +7,15 @@ import { getDesignView } from "@/db/queries/designs";
 import { errorCurve, loadCurve } from "@/lib/design";
 import { requirePageCaller } from "@/lib/auth/gate";
 import type { DesignView } from "@/lib/design-view";
-import { compareQuery } from "@/lib/designs/compare";
+import { compareQuery } from "@/lib/saved-designs/compare";
 
 export const metadata: Metadata = { title: "Compare designs" };
 
-export default async function ComparePage({ searchParams }: { searchParams: Promise<Record<string, string | string[] | undefined>> }) {
+export default async function ComparePage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const sp = await searchParams;
   const raw = Array.isArray(sp.ids) ? sp.ids.join(",") : (sp.ids ?? "");
   const caller = await requirePageCaller(`/compare?ids=${encodeURIComponent(raw)}`);
@@ -19,7 +23,8 @@ export default async function ComparePage({ searchParams }: { searchParams: Prom
   if (!parsed.success) {
     return (
       <EmptyState title="Pick two to four designs to compare">
-        Open a design and use “Compare with…”, or give <code className="font-mono">?ids=</code> two to four design ids separated by commas.{" "}
+        Open a design and use “Compare with…”, or give <code className="font-mono">?ids=</code> two to four design ids
+        separated by commas.{" "}
         <Link href="/designs" className="text-copper underline">
           Go to the designs
         </Link>
@@ -55,13 +60,31 @@ export default async function ComparePage({ searchParams }: { searchParams: Prom
       <div>
         <h1 className="text-lg font-semibold">Compare {designs.length} designs</h1>
         <p className="text-ink-muted">
-          Each design is evaluated at its own requirement. In each figure row the best value is marked; rows whose values differ are in full ink.
-          {missing > 0 && ` ${missing} of the designs asked for ${missing === 1 ? "was" : "were"} not found and ${missing === 1 ? "is" : "are"} left out.`}
+          Each design is evaluated at its own requirement. In each figure row the best value is marked; rows whose
+          values differ are in full ink.
+          {missing > 0 &&
+            ` ${missing} of the designs asked for ${missing === 1 ? "was" : "were"} not found and ${missing === 1 ? "is" : "are"} left out.`}
         </p>
       </div>
       <div className="grid grid-cols-1 gap-4 overflow-x-auto rounded-panel border border-line bg-panel p-4 xl:grid-cols-2">
-        <CurveChart title="Worst-case error against current" series={errorSeries} yUnit="%" yLabel="Error, % of reading" width={580} height={280} testId="compare-error-chart" />
-        <CurveChart title="Burden voltage against current" series={burdenSeries} yUnit="V" yLabel="Burden" width={580} height={280} testId="compare-burden-chart" />
+        <CurveChart
+          title="Worst-case error against current"
+          series={errorSeries}
+          yUnit="%"
+          yLabel="Error, % of reading"
+          width={580}
+          height={280}
+          testId="compare-error-chart"
+        />
+        <CurveChart
+          title="Burden voltage against current"
+          series={burdenSeries}
+          yUnit="V"
+          yLabel="Burden"
+          width={580}
+          height={280}
+          testId="compare-burden-chart"
+        />
       </div>
       <CompareTable designs={designs} viewer={{ userId: caller.userId, role: caller.role }} />
     </div>

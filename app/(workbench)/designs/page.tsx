@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { ImportDesign } from "@/components/build-sheet/import-design";
+import { ImportDesign } from "@/components/designs-list/design-import";
 import { DesignsTable } from "@/components/designs-list/designs-table";
 import { buttonClass } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/panel";
@@ -19,7 +19,9 @@ export default async function DesignsPage() {
         <div>
           <h1 className="text-lg font-semibold">Designs</h1>
           <p className="text-ink-muted">
-            {caller.role === "maker" ? "The team's approved designs, ready to build." : `The shunt-and-amplifier designs of ${caller.teamName}, with their review status and revision.`}
+            {caller.role === "maker"
+              ? "The team's approved designs, ready to build."
+              : `The shunt-and-amplifier designs of ${caller.teamName}, with their review status and revision.`}
           </p>
         </div>
         {canCreate && (
@@ -33,7 +35,9 @@ export default async function DesignsPage() {
       </div>
       {designs.length === 0 ? (
         <EmptyState title={caller.role === "maker" ? "No approved designs yet" : "No designs yet"}>
-          {canCreate ? "Start one with “New design”: state the requirement and pick a shunt and gain from the sweep." : "Designs saved by the team's owners and designers appear here."}
+          {canCreate
+            ? "Start one with “New design”: state the requirement and pick a shunt and gain from the sweep."
+            : "Designs saved by the team's owners and designers appear here."}
         </EmptyState>
       ) : (
         <DesignsTable designs={designs} />

@@ -11,7 +11,8 @@ export default async function MeterPage() {
       <div>
         <h1 className="text-lg font-semibold">Meter check</h1>
         <p className="max-w-3xl text-ink-muted">
-          What does putting a meter&apos;s current range in series do to the circuit? Its range resistance takes a burden voltage from the load, and a load that is not constant-current draws a different current because of it.
+          What does putting a meter&apos;s current range in series do to the circuit? Its range resistance takes a
+          burden voltage from the load, and a load that is not constant-current draws a different current because of it.
         </p>
       </div>
       <MeterCheck />

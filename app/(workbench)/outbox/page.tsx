@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { EmptyState, Panel } from "@/components/ui/panel";
 import { listTeamMail } from "@/db/queries/mail";
 import { requirePageCaller } from "@/lib/auth/gate";
-import { formatWhen } from "@/lib/designs/when";
+import { formatWhen } from "@/lib/saved-designs/when";
 import { usesCatcher } from "@/lib/mail/transport";
 
 export const metadata: Metadata = { title: "Outbox" };
@@ -10,12 +10,17 @@ export const metadata: Metadata = { title: "Outbox" };
 export default async function OutboxPage() {
   const caller = await requirePageCaller("/outbox");
   if (caller.role !== "owner") {
-    return <EmptyState title="Only owners read the outbox">The outbox shows every mail the workbench sent for the team; ask an owner.</EmptyState>;
+    return (
+      <EmptyState title="Only owners read the outbox">
+        The outbox shows every mail the workbench sent for the team; ask an owner.
+      </EmptyState>
+    );
   }
   if (!usesCatcher()) {
     return (
       <EmptyState title="Mail goes out through your SMTP server">
-        SMTP_URL is set, so messages are delivered for real and there is no local outbox. Check that server&apos;s mailboxes.
+        SMTP_URL is set, so messages are delivered for real and there is no local outbox. Check that server&apos;s
+        mailboxes.
       </EmptyState>
     );
   }
@@ -25,11 +30,14 @@ export default async function OutboxPage() {
       <div>
         <h1 className="text-lg font-semibold">Outbox</h1>
         <p className="text-ink-muted">
-          No SMTP server is configured (SMTP_URL is unset), so the built-in mail catcher keeps every message the workbench sends for {caller.teamName}. Newest first.
+          No SMTP server is configured (SMTP_URL is unset), so the built-in mail catcher keeps every message the
+          workbench sends for {caller.teamName}. Newest first.
         </p>
       </div>
       {messages.length === 0 ? (
-        <EmptyState title="No mail yet">Submitting a design, a verdict, a comment or an invitation sends one.</EmptyState>
+        <EmptyState title="No mail yet">
+          Submitting a design, a verdict, a comment or an invitation sends one.
+        </EmptyState>
       ) : (
         <ul className="flex flex-col gap-3" data-testid="outbox">
           {messages.map((m) => (
@@ -39,7 +47,8 @@ export default async function OutboxPage() {
                 actions={<span className="text-xs text-ink-muted num">{formatWhen(m.sentAt)}</span>}
               >
                 <p className="mb-2 text-xs text-ink-muted">
-                  To <span className="font-mono text-ink">{m.to}</span> · from <span className="font-mono">{m.from}</span>
+                  To <span className="font-mono text-ink">{m.to}</span> · from{" "}
+                  <span className="font-mono">{m.from}</span>
                 </p>
                 <pre className="whitespace-pre-wrap break-words font-sans text-sm" data-testid="outbox-text">
                   {m.text}

@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { TeamAuditLog } from "@/components/team/audit-log";
 import { InvitationsPanel } from "@/components/team/invitations-panel";
-import { RemoveMembers } from "@/components/team/invitations-remove";
+import { RemoveMembers } from "@/components/team/member-removal";
 import { MemberTable } from "@/components/team/member-table";
 import { listTeamAudit } from "@/db/queries/audit";
 import { listDesigns } from "@/db/queries/designs";
@@ -36,8 +36,20 @@ export default async function TeamPage() {
 }
 
 /** Invitations, removing members, the outbox and the team's log: owners only. */
-async function OwnerSections({ teamId, selfId, members }: { teamId: string; selfId: string; members: Awaited<ReturnType<typeof listMembers>> }) {
-  const [invitations, audit, designs] = await Promise.all([listInvitations(teamId), listTeamAudit(teamId, 200), listDesigns(teamId)]);
+async function OwnerSections({
+  teamId,
+  selfId,
+  members,
+}: {
+  teamId: string;
+  selfId: string;
+  members: Awaited<ReturnType<typeof listMembers>>;
+}) {
+  const [invitations, audit, designs] = await Promise.all([
+    listInvitations(teamId),
+    listTeamAudit(teamId, 200),
+    listDesigns(teamId),
+  ]);
   return (
     <>
       <p className="text-xs text-ink-muted">

@@ -1,6 +1,6 @@
 import { apiRoute } from "@/lib/auth/gate";
-import { designViewFor } from "@/lib/designs/access";
-import { compareQuery } from "@/lib/designs/compare";
+import { designViewFor } from "@/lib/saved-designs/access";
+import { compareQuery } from "@/lib/saved-designs/compare";
 
 /** Two to four of the team's designs with their requirement, choice and figures. */
 export const GET = apiRoute({ doing: "compare designs", query: compareQuery }, async ({ caller, query }) => {

@@ -1,8 +1,8 @@
 import { listDesigns } from "@/db/queries/designs";
 import { apiRoute } from "@/lib/auth/gate";
 import { json } from "@/lib/http";
-import { saveNewDesign } from "@/lib/designs/create";
-import { createDesignSchema } from "@/lib/designs/service";
+import { saveNewDesign } from "@/lib/saved-designs/create";
+import { createDesignSchema } from "@/lib/saved-designs/service";
 
 export const GET = apiRoute({ doing: "list designs" }, async ({ caller }) => ({
   designs: await listDesigns(caller.teamId, { approvedOnly: caller.role === "maker" }),

@@ -8,12 +8,22 @@ import { roleSchema } from "@/lib/team-schemas";
 
 const body = z
   .object({
-    email: z.string({ error: "email: expected an e-mail address" }).trim().toLowerCase().pipe(z.email({ error: "email: not an e-mail address" })),
+    email: z
+      .string({ error: "email: expected an e-mail address" })
+      .trim()
+      .toLowerCase()
+      .pipe(z.email({ error: "email: not an e-mail address" })),
     role: roleSchema.optional(),
-    newTeam: z.string().trim().min(1, { error: "newTeam: give the new team a name" }).max(120, { error: "newTeam: at most 120 characters" }).optional(),
+    newTeam: z
+      .string()
+      .trim()
+      .min(1, { error: "newTeam: give the new team a name" })
+      .max(120, { error: "newTeam: at most 120 characters" })
+      .optional(),
   })
   .superRefine((v, ctx) => {
-    if (!v.newTeam && !v.role) ctx.addIssue({ code: "custom", path: ["role"], message: "Choose the role the new member gets" });
+    if (!v.newTeam && !v.role)
+      ctx.addIssue({ code: "custom", path: ["role"], message: "Choose the role the new member gets" });
     if (v.newTeam && v.role && v.role !== "owner")
       ctx.addIssue({ code: "custom", path: ["role"], message: "The first member of a new team is its owner" });
   });

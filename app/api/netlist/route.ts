@@ -4,7 +4,7 @@ import { z } from "zod";
 import { buildNetlist, type Choice, type Requirement } from "@/lib/design";
 import { apiRoute, parseWith } from "@/lib/auth/gate";
 import { HttpError, type FieldErrors } from "@/lib/http";
-import { objectBody, requirementOr422 } from "@/lib/wizard/engine-input";
+import { objectBody, requirementOr422 } from "@/lib/engine-requests";
 
 const positiveFinite = (label: string) =>
   z
@@ -30,15 +30,20 @@ function collect<T>(errors: FieldErrors, parse: () => T): T | null {
   }
 }
 
-export const POST = apiRoute({ body: z.unknown(), query: querySchema, doing: "write netlists" }, async ({ body, query }) => {
-  const raw = objectBody(body);
-  const errors: FieldErrors = {};
-  const requirement: Requirement | null = collect(errors, () => requirementOr422(raw.requirement ?? {}, "requirement"));
-  const candidate: Choice | null = collect(errors, () => parseWith(candidateSchema, raw.candidate, "candidate"));
-  if (!requirement || !candidate) {
-    const [path, messages] = Object.entries(errors)[0] ?? ["(body)", ["is invalid"]];
-    throw new HttpError(422, `Invalid input at ${path}: ${messages[0]}`, errors);
-  }
-  const text = buildNetlist(requirement, candidate, { includeOffset: query.offset !== "0" });
-  return new Response(text, { headers: { "content-type": "text/plain; charset=utf-8" } });
-});
+export const POST = apiRoute(
+  { body: z.unknown(), query: querySchema, doing: "write netlists" },
+  async ({ body, query }) => {
+    const raw = objectBody(body);
+    const errors: FieldErrors = {};
+    const requirement: Requirement | null = collect(errors, () =>
+      requirementOr422(raw.requirement ?? {}, "requirement"),
+    );
+    const candidate: Choice | null = collect(errors, () => parseWith(candidateSchema, raw.candidate, "candidate"));
+    if (!requirement || !candidate) {
+      const [path, messages] = Object.entries(errors)[0] ?? ["(body)", ["is invalid"]];
+      throw new HttpError(422, `Invalid input at ${path}: ${messages[0]}`, errors);
+    }
+    const text = buildNetlist(requirement, candidate, { includeOffset: query.offset !== "0" });
+    return new Response(text, { headers: { "content-type": "text/plain; charset=utf-8" } });
+  },
+);

@@ -6,7 +6,12 @@ import { usesCatcher } from "@/lib/mail/transport";
 /** The mail the built-in catcher received for this team (only while no SMTP_URL is set). */
 export const GET = apiRoute({ roles: ["owner"], doing: "read the outbox" }, async ({ caller }) => {
   if (!usesCatcher())
-    throw new HttpError(409, "Mail goes out through the SMTP server in SMTP_URL, so there is no local outbox to read; check that server's mailboxes.");
+    throw new HttpError(
+      409,
+      "Mail goes out through the SMTP server in SMTP_URL, so there is no local outbox to read; check that server's mailboxes.",
+    );
   const messages = await listTeamMail(caller.teamId);
-  return { messages: messages.map((m) => ({ to: m.to, from: m.from, subject: m.subject, text: m.text, sentAt: m.sentAt })) };
+  return {
+    messages: messages.map((m) => ({ to: m.to, from: m.from, subject: m.subject, text: m.text, sentAt: m.sentAt })),
+  };
 });

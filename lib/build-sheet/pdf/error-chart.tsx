@@ -18,7 +18,21 @@ function decades(lo: number, hi: number): number[] {
   return out;
 }
 
-function T({ x, y, anchor = "start", color = colors.muted, size = 6.5, children }: { x: number; y: number; anchor?: "start" | "middle" | "end"; color?: string; size?: number; children: string }) {
+function T({
+  x,
+  y,
+  anchor = "start",
+  color = colors.muted,
+  size = 6.5,
+  children,
+}: {
+  x: number;
+  y: number;
+  anchor?: "start" | "middle" | "end";
+  color?: string;
+  size?: number;
+  children: string;
+}) {
   const style = { fontFamily: FONT, fontSize: size } as unknown as Record<string, string>;
   return (
     <Text x={x} y={y} fill={color} textAnchor={anchor} style={style}>
@@ -39,7 +53,8 @@ export function ErrorChart({ req, curve }: { req: Requirement; curve: ErrorCurve
   const yHi = 10 ** Math.ceil(Math.log10(Math.max(...yVals)));
   const w = CHART_W - M.left - M.right;
   const h = CHART_H - M.top - M.bottom;
-  const sx = (v: number) => M.left + (xHi === xLo ? 0 : ((Math.log10(v) - Math.log10(xLo)) / (Math.log10(xHi) - Math.log10(xLo))) * w);
+  const sx = (v: number) =>
+    M.left + (xHi === xLo ? 0 : ((Math.log10(v) - Math.log10(xLo)) / (Math.log10(xHi) - Math.log10(xLo))) * w);
   const sy = (v: number) => M.top + h - ((Math.log10(v) - Math.log10(yLo)) / (Math.log10(yHi) - Math.log10(yLo))) * h;
   const line = (key: "worstPercent" | "rssPercent") =>
     pts.map((p, i) => `${i === 0 ? "M" : "L"} ${sx(p.currentA).toFixed(2)} ${sy(p[key]).toFixed(2)}`).join(" ");
@@ -90,11 +105,27 @@ export function ErrorChart({ req, curve }: { req: Requirement; curve: ErrorCurve
       <T x={legendX + 20} y={M.top + 10.5} color={colors.ink}>
         Worst case
       </T>
-      <Line x1={legendX} y1={M.top + 22} x2={legendX + 16} y2={M.top + 22} stroke={colors.signal} strokeWidth={1.2} strokeDasharray="3 2" />
+      <Line
+        x1={legendX}
+        y1={M.top + 22}
+        x2={legendX + 16}
+        y2={M.top + 22}
+        stroke={colors.signal}
+        strokeWidth={1.2}
+        strokeDasharray="3 2"
+      />
       <T x={legendX + 20} y={M.top + 24.5} color={colors.ink}>
         RSS
       </T>
-      <Line x1={legendX} y1={M.top + 36} x2={legendX + 16} y2={M.top + 36} stroke={colors.bad} strokeWidth={1} strokeDasharray="4 3" />
+      <Line
+        x1={legendX}
+        y1={M.top + 36}
+        x2={legendX + 16}
+        y2={M.top + 36}
+        stroke={colors.bad}
+        strokeWidth={1}
+        strokeDasharray="4 3"
+      />
       <T x={legendX + 20} y={M.top + 38.5} color={colors.ink}>
         {`Target ${f.percent(target)}`}
       </T>

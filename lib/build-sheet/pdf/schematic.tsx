@@ -10,7 +10,15 @@ import { colors, FONT } from "./theme";
 export const SCHEMATIC_W = 515;
 export const SCHEMATIC_H = 232;
 
-type Txt = { x: number; y: number; size?: number; anchor?: "start" | "middle" | "end"; color?: string; bold?: boolean; children: string };
+type Txt = {
+  x: number;
+  y: number;
+  size?: number;
+  anchor?: "start" | "middle" | "end";
+  color?: string;
+  bold?: boolean;
+  children: string;
+};
 
 function Label({ x, y, size = 7.5, anchor = "start", color = colors.ink, bold = false, children }: Txt) {
   // react-pdf's SVG text takes font settings in style; its types only list paint attributes.
@@ -34,7 +42,15 @@ function Shunt({ x, y0, y1, ohms }: { x: number; y0: number; y1: number; ohms: n
     <G>
       <Line x1={x} y1={y0} x2={x} y2={top} {...W} />
       <Line x1={x} y1={bottom} x2={x} y2={y1} {...W} />
-      <Rect x={x - 9} y={top} width={18} height={bottom - top} fill={colors.copperSoft} stroke={colors.copper} strokeWidth={1.2} />
+      <Rect
+        x={x - 9}
+        y={top}
+        width={18}
+        height={bottom - top}
+        fill={colors.copperSoft}
+        stroke={colors.copper}
+        strokeWidth={1.2}
+      />
       {/* Sense taps from the inner terminals, drawn apart from the current leads. */}
       <Line x1={x + 9} y1={tapTop} x2={x + 40} y2={tapTop} stroke={colors.signal} strokeWidth={1} />
       <Line x1={x + 9} y1={tapBottom} x2={x + 40} y2={tapBottom} stroke={colors.signal} strokeWidth={1} />
@@ -143,8 +159,18 @@ export function Schematic({ req, choice }: { req: Requirement; choice: Choice })
       <Shunt x={cx} y0={shuntAt.y0} y1={shuntAt.y1} ohms={choice.shuntOhms} />
       <Load x={cx} y0={loadAt.y0} y1={loadAt.y1} label={loadText} />
       {/* Sense pair to the amplifier */}
-      <Path d={`M ${cx + 49} ${tapTop} L ${ampX - 24} ${tapTop} L ${ampX - 24} ${inP} L ${ampX} ${inP}`} stroke={colors.signal} strokeWidth={1} fill="none" />
-      <Path d={`M ${cx + 49} ${tapBottom} L ${ampX - 16} ${tapBottom} L ${ampX - 16} ${inN} L ${ampX} ${inN}`} stroke={colors.signal} strokeWidth={1} fill="none" />
+      <Path
+        d={`M ${cx + 49} ${tapTop} L ${ampX - 24} ${tapTop} L ${ampX - 24} ${inP} L ${ampX} ${inP}`}
+        stroke={colors.signal}
+        strokeWidth={1}
+        fill="none"
+      />
+      <Path
+        d={`M ${cx + 49} ${tapBottom} L ${ampX - 16} ${tapBottom} L ${ampX - 16} ${inN} L ${ampX} ${inN}`}
+        stroke={colors.signal}
+        strokeWidth={1}
+        fill="none"
+      />
       <Line x1={cx + 40} y1={tapTop} x2={cx + 49} y2={tapTop} stroke={colors.signal} strokeWidth={1} />
       <Line x1={cx + 40} y1={tapBottom} x2={cx + 49} y2={tapBottom} stroke={colors.signal} strokeWidth={1} />
       <Label x={cx + 50} y={tapTop - 3} size={6.5} color={colors.signal}>
@@ -154,7 +180,12 @@ export function Schematic({ req, choice }: { req: Requirement; choice: Choice })
         sense −
       </Label>
       {/* Amplifier */}
-      <Polygon points={`${ampX},${ampCy - 30} ${ampX},${ampCy + 30} ${outX},${ampCy}`} fill="#ffffff" stroke={colors.ink} strokeWidth={1.2} />
+      <Polygon
+        points={`${ampX},${ampCy - 30} ${ampX},${ampCy + 30} ${outX},${ampCy}`}
+        fill="#ffffff"
+        stroke={colors.ink}
+        strokeWidth={1.2}
+      />
       <Label x={ampX + 4} y={inP + 3} size={8}>
         +
       </Label>

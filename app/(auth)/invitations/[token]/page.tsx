@@ -3,7 +3,7 @@ import Link from "next/link";
 import { AcceptInvitationForm } from "@/components/team/invitations-accept";
 import { Logo } from "@/components/logo";
 import { findInvitationByToken } from "@/db/queries/invitations";
-import { formatWhen } from "@/lib/designs/when";
+import { formatWhen } from "@/lib/saved-designs/when";
 
 export const metadata: Metadata = { title: "Invitation" };
 export const dynamic = "force-dynamic";
@@ -26,7 +26,9 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
         {!invitation ? (
           <>
             <h1 className="mb-2 text-base font-semibold">This invitation link is not valid</h1>
-            <p className="text-ink-muted">Check that the whole link was copied from the mail, or ask the team&apos;s owner for a new one.</p>
+            <p className="text-ink-muted">
+              Check that the whole link was copied from the mail, or ask the team&apos;s owner for a new one.
+            </p>
           </>
         ) : invitation.status !== "pending" ? (
           <>
@@ -39,7 +41,8 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
           <>
             <h1 className="mb-1 text-base font-semibold">Join {invitation.teamName}</h1>
             <p className="mb-4 text-xs text-ink-muted">
-              You are invited as a <strong className="text-ink">{invitation.role}</strong>. The link works once and expires {formatWhen(invitation.expiresAt)}.
+              You are invited as a <strong className="text-ink">{invitation.role}</strong>. The link works once and
+              expires {formatWhen(invitation.expiresAt)}.
             </p>
             <AcceptInvitationForm token={token} email={invitation.email} hasAccount={invitation.hasAccount} />
           </>

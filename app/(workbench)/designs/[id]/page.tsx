@@ -13,7 +13,7 @@ import { listReviews } from "@/db/queries/reviews";
 import { formatSI } from "@/lib/design";
 import { requirePageCaller } from "@/lib/auth/gate";
 import type { DesignViewer } from "@/lib/design-view";
-import { formatWhen } from "@/lib/designs/when";
+import { formatWhen } from "@/lib/saved-designs/when";
 
 export const metadata: Metadata = { title: "Design" };
 
@@ -50,7 +50,8 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
             </span>
           </h1>
           <p className="mt-0.5 text-xs text-ink-muted">
-            {statusExplained[design.status]} Revision {design.revision} by {design.authorName}, saved {formatWhen(design.updatedAt)}.
+            {statusExplained[design.status]} Revision {design.revision} by {design.authorName}, saved{" "}
+            {formatWhen(design.updatedAt)}.
             {design.approval && (
               <>
                 {" "}
@@ -75,7 +76,9 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
       {caller.role === "maker" && <BuildSheetPanel design={design} viewer={viewer} />}
       <ComparePicker
         current={{ id: design.id, name: design.name }}
-        others={others.filter((d) => d.id !== design.id).map((d) => ({ id: d.id, name: d.name, project: d.project, status: d.status }))}
+        others={others
+          .filter((d) => d.id !== design.id)
+          .map((d) => ({ id: d.id, name: d.name, project: d.project, status: d.status }))}
       />
       <DesignFigures design={design} />
       <ReviewPanel

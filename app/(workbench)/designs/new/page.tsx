@@ -12,7 +12,8 @@ export default async function NewDesignPage() {
       <div>
         <h1 className="text-lg font-semibold">New design</h1>
         <p className="max-w-3xl text-ink-muted">
-          State what the front end must do, step by step. Every change re-runs the sweep of standard shunt values and amplifier gains; pick a candidate from the chart or the table, study it across the whole span, and save it.
+          State what the front end must do, step by step. Every change re-runs the sweep of standard shunt values and
+          amplifier gains; pick a candidate from the chart or the table, study it across the whole span, and save it.
         </p>
       </div>
       <Wizard canSave={canSave} />

@@ -2,9 +2,9 @@ import { listRevisions, reviseDesign } from "@/db/queries/designs";
 import { listReviews } from "@/db/queries/reviews";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
-import { designFor } from "@/lib/designs/access";
-import { changedFields } from "@/lib/designs/diff";
-import { evaluateDesign, patchDesignSchema } from "@/lib/designs/service";
+import { designFor } from "@/lib/saved-designs/access";
+import { changedFields } from "@/lib/saved-designs/diff";
+import { evaluateDesign, patchDesignSchema } from "@/lib/saved-designs/service";
 
 export const GET = apiRoute({ doing: "open designs" }, async ({ caller, params }) => {
   const { design, current, authorName } = await designFor(caller, params.id ?? "");
@@ -46,7 +46,12 @@ export const PATCH = apiRoute(
         `Someone else saved this design first: it is at revision ${design.revision}, you edited revision ${body.revision}. Nothing was saved; reload to see their changes.`,
       );
     }
-    if (body.name === undefined && body.project === undefined && body.requirement === undefined && body.choice === undefined) {
+    if (
+      body.name === undefined &&
+      body.project === undefined &&
+      body.requirement === undefined &&
+      body.choice === undefined
+    ) {
       throw new HttpError(422, "Nothing to change: send name, project, requirement or choice.", {
         "(body)": ["send at least one of name, project, requirement, choice"],
       });

@@ -3,7 +3,7 @@
 // re-evaluates it, so the figures are the engine's, not the file's).
 import { apiRoute } from "@/lib/auth/gate";
 import { designImportSchema } from "@/lib/build-sheet/exports";
-import { saveNewDesign } from "@/lib/designs/create";
+import { saveNewDesign } from "@/lib/saved-designs/create";
 import { json } from "@/lib/http";
 
 export const POST = apiRoute(

@@ -5,9 +5,15 @@ import { parseWith, publicRoute } from "@/lib/auth/gate";
 import { HttpError, json } from "@/lib/http";
 
 const acceptSchema = z.object({
-  token: z.string({ error: "token: the invitation link's code is missing" }).min(20, { error: "token: that is not an invitation code" }).max(200),
+  token: z
+    .string({ error: "token: the invitation link's code is missing" })
+    .min(20, { error: "token: that is not an invitation code" })
+    .max(200),
   name: z.string().trim().max(100, { error: "name: at most 100 characters" }).default(""),
-  password: z.string({ error: "password: choose a password" }).min(10, { error: "password: at least 10 characters" }).max(200, { error: "password: at most 200 characters" }),
+  password: z
+    .string({ error: "password: choose a password" })
+    .min(10, { error: "password: at least 10 characters" })
+    .max(200, { error: "password: at most 200 characters" }),
 });
 
 /** Public: the invitee (signed out) sets a name and password, or proves an existing account's password. */
@@ -30,7 +36,11 @@ export const POST = publicRoute(async (request) => {
   });
   if (!result.ok) {
     if (result.status === 410) throw new HttpError(409, result.message);
-    throw new HttpError(result.status, result.message, result.status === 422 ? { name: ["give your name"] } : undefined);
+    throw new HttpError(
+      result.status,
+      result.message,
+      result.status === 422 ? { name: ["give your name"] } : undefined,
+    );
   }
   return json({ email: result.email, teamName: result.teamName, role: result.role }, 201);
 });

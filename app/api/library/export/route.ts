@@ -6,7 +6,10 @@ import { partKinds } from "@/lib/library/schema";
 
 /** `?kind=amplifiers|shunts` → text/csv with the API's field names as the header. */
 export const GET = apiRoute(
-  { doing: "export the parts library", query: z.object({ kind: z.enum(partKinds, { error: 'kind: expected "amplifiers" or "shunts"' }) }) },
+  {
+    doing: "export the parts library",
+    query: z.object({ kind: z.enum(partKinds, { error: 'kind: expected "amplifiers" or "shunts"' }) }),
+  },
   async ({ caller, query }) => {
     const library = await listLibrary(caller.teamId);
     const csv = libraryToCsv(query.kind, query.kind === "amplifiers" ? library.amplifiers : library.shunts);

@@ -5,7 +5,7 @@ import { HttpError, json } from "@/lib/http";
 import { parseLibraryCsv } from "@/lib/library/csv";
 import { partKinds } from "@/lib/library/schema";
 import { editorRoles } from "@/lib/library/service";
-import { readCsvUpload } from "@/lib/profile/upload";
+import { readCsvUpload } from "@/lib/read-upload";
 
 const MAX_LIBRARY_CSV_BYTES = 2_000_000;
 const kindSchema = z.enum(partKinds, { error: 'kind: expected "amplifiers" or "shunts"' });
@@ -14,12 +14,19 @@ const kindSchema = z.enum(partKinds, { error: 'kind: expected "amplifiers" or "s
  * Imports a CSV of amplifiers or shunts, all or nothing: multipart with `file` and `kind`
  * (or `?kind=`). A part whose name is already in the library is updated; the rest are added.
  */
-export const POST = apiRoute({ roles: editorRoles, doing: "import parts into the library" }, async ({ caller, request }) => {
-  const upload = await readCsvUpload(request, MAX_LIBRARY_CSV_BYTES);
-  const kind = kindSchema.safeParse(upload.fields.kind ?? new URL(request.url).searchParams.get("kind") ?? undefined);
-  if (!kind.success) throw new HttpError(422, 'Say which list the file holds: kind "amplifiers" or "shunts".', { kind: ['expected "amplifiers" or "shunts"'] });
-  const parsed = parseLibraryCsv(kind.data, upload.text);
-  if (!parsed.ok) return json({ ...parsed.refusal.toJson(), message: `${parsed.refusal.message}. Nothing was imported.` }, 422);
-  const result = await importParts(caller.teamId, parsed.parts, caller.userId);
-  return { kind: kind.data, fileName: upload.fileName, ...result };
-});
+export const POST = apiRoute(
+  { roles: editorRoles, doing: "import parts into the library" },
+  async ({ caller, request }) => {
+    const upload = await readCsvUpload(request, MAX_LIBRARY_CSV_BYTES);
+    const kind = kindSchema.safeParse(upload.fields.kind ?? new URL(request.url).searchParams.get("kind") ?? undefined);
+    if (!kind.success)
+      throw new HttpError(422, 'Say which list the file holds: kind "amplifiers" or "shunts".', {
+        kind: ['expected "amplifiers" or "shunts"'],
+      });
+    const parsed = parseLibraryCsv(kind.data, upload.text);
+    if (!parsed.ok)
+      return json({ ...parsed.refusal.toJson(), message: `${parsed.refusal.message}. Nothing was imported.` }, 422);
+    const result = await importParts(caller.teamId, parsed.parts, caller.userId);
+    return { kind: kind.data, fileName: upload.fileName, ...result };
+  },
+);

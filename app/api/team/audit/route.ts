@@ -2,7 +2,14 @@ import { z } from "zod";
 import { listTeamAudit } from "@/db/queries/audit";
 import { apiRoute } from "@/lib/auth/gate";
 
-const query = z.object({ limit: z.coerce.number().int().min(1, { error: "limit: at least 1" }).max(1000, { error: "limit: at most 1000" }).default(200) });
+const query = z.object({
+  limit: z.coerce
+    .number()
+    .int()
+    .min(1, { error: "limit: at least 1" })
+    .max(1000, { error: "limit: at most 1000" })
+    .default(200),
+});
 
 /** The team's audit log, newest first (owners). */
 export const GET = apiRoute({ roles: ["owner"], doing: "read the team's log", query }, async ({ caller, query }) => ({

@@ -4,7 +4,7 @@
 import { apiRoute } from "@/lib/auth/gate";
 import { attachment, exportFileName } from "@/lib/build-sheet/exports";
 import { renderBuildSheet } from "@/lib/build-sheet/render";
-import { designViewFor } from "@/lib/designs/access";
+import { designViewFor } from "@/lib/saved-designs/access";
 
 export const GET = apiRoute({ doing: "download build sheets" }, async ({ caller, params }) => {
   const view = await designViewFor(caller, params.id ?? "");

@@ -3,7 +3,7 @@
 // which POST /api/designs/import reads back as a new design.
 import { apiRoute } from "@/lib/auth/gate";
 import { attachment, designExport, exportFileName } from "@/lib/build-sheet/exports";
-import { designViewFor } from "@/lib/designs/access";
+import { designViewFor } from "@/lib/saved-designs/access";
 
 export const GET = apiRoute({ doing: "export designs" }, async ({ caller, params }) => {
   const view = await designViewFor(caller, params.id ?? "");

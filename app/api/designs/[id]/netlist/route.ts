@@ -3,7 +3,7 @@
 import { z } from "zod";
 import { apiRoute } from "@/lib/auth/gate";
 import { attachment, designNetlist, exportFileName } from "@/lib/build-sheet/exports";
-import { designViewFor } from "@/lib/designs/access";
+import { designViewFor } from "@/lib/saved-designs/access";
 
 const querySchema = z.object({
   offset: z.enum(["0", "1"], { error: 'offset: expected "0" (leave the offset out) or "1"' }).optional(),

@@ -1,7 +1,7 @@
 // GET /api/designs/[id]/parts.csv: the parts list (designators, values, ratings, notes) as CSV.
 import { apiRoute } from "@/lib/auth/gate";
 import { attachment, exportFileName, partsCsv } from "@/lib/build-sheet/exports";
-import { designViewFor } from "@/lib/designs/access";
+import { designViewFor } from "@/lib/saved-designs/access";
 
 export const GET = apiRoute({ doing: "download parts lists" }, async ({ caller, params }) => {
   const view = await designViewFor(caller, params.id ?? "");

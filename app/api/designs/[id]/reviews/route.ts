@@ -5,21 +5,33 @@ import { verdictEnum } from "@/db/schema";
 import { apiRoute, assertRole } from "@/lib/auth/gate";
 import { HttpError, json } from "@/lib/http";
 import type { CandidateDetail } from "@/lib/design";
-import { designFor } from "@/lib/designs/access";
-import { mailReviewed } from "@/lib/designs/notify";
+import { designFor } from "@/lib/saved-designs/access";
+import { mailReviewed } from "@/lib/saved-designs/notify";
 
 const verdicts = verdictEnum.enumValues;
 const body = z
   .object({
     verdict: z.enum(verdicts, { error: `verdict must be one of: ${verdicts.join(", ")}` }),
-    body: z.string({ error: "body: expected text" }).max(10_000, { error: "body: at most 10000 characters" }).default(""),
+    body: z
+      .string({ error: "body: expected text" })
+      .max(10_000, { error: "body: at most 10000 characters" })
+      .default(""),
     parentId: z.uuid({ error: "parentId: expected the id of a comment on this design" }).nullish(),
     revision: z.number().int().min(1).optional(),
   })
   .superRefine((v, ctx) => {
     if (v.verdict !== "approve" && !v.body.trim())
-      ctx.addIssue({ code: "custom", path: ["body"], message: v.verdict === "return" ? "Say why the design goes back" : "A comment needs some text" });
-    if (v.verdict !== "comment" && v.parentId) ctx.addIssue({ code: "custom", path: ["parentId"], message: "Only comments are replies; a verdict stands on its own" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["body"],
+        message: v.verdict === "return" ? "Say why the design goes back" : "A comment needs some text",
+      });
+    if (v.verdict !== "comment" && v.parentId)
+      ctx.addIssue({
+        code: "custom",
+        path: ["parentId"],
+        message: "Only comments are replies; a verdict stands on its own",
+      });
   });
 
 export const GET = apiRoute({ doing: "read reviews" }, async ({ caller, params }) => {
@@ -48,7 +60,14 @@ export const POST = apiRoute({ doing: "review designs", body }, async ({ caller,
   const mailed = await mailReviewed(
     caller.teamId,
     caller,
-    { id: design.id, name: design.name, project: design.project, revision: design.revision, choice: current.choice, metrics: current.metrics as unknown as CandidateDetail },
+    {
+      id: design.id,
+      name: design.name,
+      project: design.project,
+      revision: design.revision,
+      choice: current.choice,
+      metrics: current.metrics as unknown as CandidateDetail,
+    },
     { verdict: body.verdict, body: body.body, revision: result.revision },
     recipients,
   );

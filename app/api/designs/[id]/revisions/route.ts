@@ -2,10 +2,13 @@ import { z } from "zod";
 import { listRevisions } from "@/db/queries/designs";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
-import { designFor } from "@/lib/designs/access";
-import { diffRevisions } from "@/lib/designs/diff";
+import { designFor } from "@/lib/saved-designs/access";
+import { diffRevisions } from "@/lib/saved-designs/diff";
 
-const revisionNumber = z.coerce.number({ error: "expected a revision number" }).int({ error: "expected a whole revision number" }).min(1, { error: "revisions start at 1" });
+const revisionNumber = z.coerce
+  .number({ error: "expected a revision number" })
+  .int({ error: "expected a whole revision number" })
+  .min(1, { error: "revisions start at 1" });
 const query = z.object({ a: revisionNumber.optional(), b: revisionNumber.optional() });
 
 /** Every revision with its figures; with ?a=&b= also what changed from a to b. */
@@ -14,12 +17,18 @@ export const GET = apiRoute({ doing: "read revisions", query }, async ({ caller,
   const revisions = await listRevisions(design.id);
   if (query.a === undefined && query.b === undefined) return { id: design.id, revision: design.revision, revisions };
   if (query.a === undefined || query.b === undefined)
-    throw new HttpError(422, "Give both revisions to compare: ?a=1&b=2.", { [query.a === undefined ? "a" : "b"]: ["is needed with the other"] });
+    throw new HttpError(422, "Give both revisions to compare: ?a=1&b=2.", {
+      [query.a === undefined ? "a" : "b"]: ["is needed with the other"],
+    });
   const a = revisions.find((r) => r.revision === query.a);
   const b = revisions.find((r) => r.revision === query.b);
   if (!a || !b) {
     const missing = !a ? "a" : "b";
-    throw new HttpError(404, `This design has no revision ${!a ? query.a : query.b} (it has 1 to ${design.revision}).`, { [missing]: ["no such revision"] });
+    throw new HttpError(
+      404,
+      `This design has no revision ${!a ? query.a : query.b} (it has 1 to ${design.revision}).`,
+      { [missing]: ["no such revision"] },
+    );
   }
   return { id: design.id, a, b, changes: diffRevisions(a, b) };
 });

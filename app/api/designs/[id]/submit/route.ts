@@ -3,8 +3,8 @@ import { changeDesignStatus } from "@/db/queries/designs";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
 import type { CandidateDetail } from "@/lib/design";
-import { designFor } from "@/lib/designs/access";
-import { mailSubmitted } from "@/lib/designs/notify";
+import { designFor } from "@/lib/saved-designs/access";
+import { mailSubmitted } from "@/lib/saved-designs/notify";
 
 const body = z.object({ revision: z.number().int().min(1).optional() });
 
@@ -14,10 +14,16 @@ export const POST = apiRoute(
   async ({ caller, params, body }) => {
     const { design, current } = await designFor(caller, params.id ?? "");
     if (body.revision !== undefined && body.revision !== design.revision)
-      throw new HttpError(409, `The design is at revision ${design.revision} now, not ${body.revision}; reload before submitting.`);
+      throw new HttpError(
+        409,
+        `The design is at revision ${design.revision} now, not ${body.revision}; reload before submitting.`,
+      );
     if (design.status === "in-review") throw new HttpError(409, "The design is already in review.");
     if (design.status === "approved")
-      throw new HttpError(409, `Revision ${design.revision} is already approved; edit the design to start a new revision.`);
+      throw new HttpError(
+        409,
+        `Revision ${design.revision} is already approved; edit the design to start a new revision.`,
+      );
     const changed = await changeDesignStatus({
       designId: design.id,
       teamId: caller.teamId,

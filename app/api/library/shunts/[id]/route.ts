@@ -15,8 +15,12 @@ export const PATCH = apiRoute(
   },
 );
 
-export const DELETE = apiRoute({ roles: editorRoles, doing: "remove parts from the library" }, async ({ caller, params }) => {
-  const id = partId(params.id, "shunt");
-  if (!(await deletePart("shunts", caller.teamId, id, caller.userId))) throw new HttpError(404, "That shunt was not found in the library.");
-  return { deleted: true, id };
-});
+export const DELETE = apiRoute(
+  { roles: editorRoles, doing: "remove parts from the library" },
+  async ({ caller, params }) => {
+    const id = partId(params.id, "shunt");
+    if (!(await deletePart("shunts", caller.teamId, id, caller.userId)))
+      throw new HttpError(404, "That shunt was not found in the library.");
+    return { deleted: true, id };
+  },
+);

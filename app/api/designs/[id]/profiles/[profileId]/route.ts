@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { deleteProfile, getProfile, profileUploader } from "@/db/queries/profiles";
 import { apiRoute } from "@/lib/auth/gate";
-import { designViewFor } from "@/lib/designs/access";
+import { designViewFor } from "@/lib/saved-designs/access";
 import { HttpError } from "@/lib/http";
 import { clipCurrent, decimateMinMax, profileDesignOf, summarizeProfile } from "@/lib/profile";
 
@@ -14,40 +14,54 @@ function profileIdOf(raw: string | undefined): string {
 }
 
 const seconds = (label: string) =>
-  z.coerce.number({ error: `${label}: expected a time in seconds` }).refine(Number.isFinite, { error: `${label}: expected a finite time in seconds` }).optional();
+  z.coerce
+    .number({ error: `${label}: expected a time in seconds` })
+    .refine(Number.isFinite, { error: `${label}: expected a finite time in seconds` })
+    .optional();
 
 const windowQuery = z.object({
   from: seconds("from"),
   to: seconds("to"),
-  width: z.coerce.number({ error: "width: expected a number of pixels" }).int({ error: "width must be a whole number of pixels" }).min(10, { error: "width must be at least 10" }).max(4000, { error: "width must be at most 4000" }).default(800),
+  width: z.coerce
+    .number({ error: "width: expected a number of pixels" })
+    .int({ error: "width must be a whole number of pixels" })
+    .min(10, { error: "width must be at least 10" })
+    .max(4000, { error: "width must be at most 4000" })
+    .default(800),
 });
 
 /**
  * One profile: the summary stored at upload, the summary against the design's current revision, and
  * the series decimated to `width` pixel columns over `from`..`to` seconds (the whole recording by default).
  */
-export const GET = apiRoute({ doing: "read current profiles", query: windowQuery }, async ({ caller, params, query }) => {
-  const design = await designViewFor(caller, params.id ?? "");
-  const profile = await getProfile(design.id, profileIdOf(params.profileId));
-  if (!profile) throw profileNotFound();
-  const judged = profileDesignOf(design);
-  const { timesS, currentsA, ...item } = profile;
-  const series = decimateMinMax(timesS, currentsA, {
-    fromS: query.from,
-    toS: query.to,
-    width: query.width,
-    clipA: clipCurrent(judged),
-    lsbA: judged.lsbA,
-  });
-  return {
-    ...item,
-    startS: timesS[0],
-    endS: timesS[timesS.length - 1],
-    current: { revision: design.revision, summary: item.revision === design.revision ? item.summary : summarizeProfile(timesS, currentsA, judged) },
-    design: judged,
-    series,
-  };
-});
+export const GET = apiRoute(
+  { doing: "read current profiles", query: windowQuery },
+  async ({ caller, params, query }) => {
+    const design = await designViewFor(caller, params.id ?? "");
+    const profile = await getProfile(design.id, profileIdOf(params.profileId));
+    if (!profile) throw profileNotFound();
+    const judged = profileDesignOf(design);
+    const { timesS, currentsA, ...item } = profile;
+    const series = decimateMinMax(timesS, currentsA, {
+      fromS: query.from,
+      toS: query.to,
+      width: query.width,
+      clipA: clipCurrent(judged),
+      lsbA: judged.lsbA,
+    });
+    return {
+      ...item,
+      startS: timesS[0],
+      endS: timesS[timesS.length - 1],
+      current: {
+        revision: design.revision,
+        summary: item.revision === design.revision ? item.summary : summarizeProfile(timesS, currentsA, judged),
+      },
+      design: judged,
+      series,
+    };
+  },
+);
 
 /** Its uploader or an owner removes a profile. */
 export const DELETE = apiRoute({ doing: "delete current profiles" }, async ({ caller, params }) => {
@@ -56,7 +70,10 @@ export const DELETE = apiRoute({ doing: "delete current profiles" }, async ({ ca
   const found = await profileUploader(design.id, profileId);
   if (!found) throw profileNotFound();
   if (found.uploadedBy !== caller.userId && caller.role !== "owner") {
-    throw new HttpError(403, `Only the member who uploaded "${found.fileName}" or an owner may delete it; you are signed in as a ${caller.role}.`);
+    throw new HttpError(
+      403,
+      `Only the member who uploaded "${found.fileName}" or an owner may delete it; you are signed in as a ${caller.role}.`,
+    );
   }
   await deleteProfile({ teamId: caller.teamId, designId: design.id, profileId, actorId: caller.userId });
   return { deleted: true, id: profileId };

@@ -86,7 +86,12 @@ export const metricFields: Record<string, FieldInfo> = {
   errorAtTypicalPercent: { label: "Worst-case error at typical current", kind: "percent", better: "lower" },
   errorAtMaxPercent: { label: "Worst-case error at maximum current", kind: "percent", better: "lower" },
   accuracyBandPercent: { label: "Worst error in the accuracy band", kind: "percent", better: "lower" },
-  lowestAccurateCurrentA: { label: "Lowest current meeting the accuracy target", kind: "si", unit: "A", better: "lower" },
+  lowestAccurateCurrentA: {
+    label: "Lowest current meeting the accuracy target",
+    kind: "si",
+    unit: "A",
+    better: "lower",
+  },
 };
 
 /** A number without SI prefixes (for %, dB, °C, ppm where a prefix would read wrong). */

@@ -2,14 +2,17 @@
 // Too large is refused from Content-Length before reading, and again while the bytes stream in,
 // so an 11 MB body never gets parsed (a missing or lying Content-Length cannot get around it).
 import { HttpError } from "@/lib/http";
-import { MULTIPART_SLACK_BYTES } from "./limits";
+import { MULTIPART_SLACK_BYTES } from "@/lib/profile/limits";
 
 export type UploadedText = { fileName: string; text: string; fields: Record<string, string> };
 
 const megabytes = (bytes: number) => `${Number((bytes / 1e6).toPrecision(3))} MB`;
 
 function tooLarge(maxBytes: number, size?: number): HttpError {
-  return new HttpError(413, `The file is larger than ${megabytes(maxBytes)}${size !== undefined ? ` (it is ${megabytes(size)})` : ""}; nothing was stored.`);
+  return new HttpError(
+    413,
+    `The file is larger than ${megabytes(maxBytes)}${size !== undefined ? ` (it is ${megabytes(size)})` : ""}; nothing was stored.`,
+  );
 }
 
 /** The body, counted as it arrives: over `limit` bytes stops the read with 413. */
@@ -38,9 +41,13 @@ async function countedBody(request: Request, limit: number, maxBytes: number): P
     }
   } catch (e) {
     if (over) throw tooLarge(maxBytes);
-    throw new HttpError(422, "The upload was interrupted before the whole file arrived; nothing was stored.", { file: ["upload interrupted"] });
+    throw new HttpError(422, "The upload was interrupted before the whole file arrived; nothing was stored.", {
+      file: ["upload interrupted"],
+    });
   }
-  return new Response(new Blob(chunks as BlobPart[]), { headers: { "content-type": request.headers.get("content-type") ?? "" } });
+  return new Response(new Blob(chunks as BlobPart[]), {
+    headers: { "content-type": request.headers.get("content-type") ?? "" },
+  });
 }
 
 export async function readCsvUpload(request: Request, maxBytes: number, fieldName = "file"): Promise<UploadedText> {
@@ -56,11 +63,15 @@ export async function readCsvUpload(request: Request, maxBytes: number, fieldNam
     try {
       form = await body.formData();
     } catch {
-      throw new HttpError(422, "The request is not a readable multipart form; send the CSV in the form field \"file\".", { [fieldName]: ["unreadable form"] });
+      throw new HttpError(422, 'The request is not a readable multipart form; send the CSV in the form field "file".', {
+        [fieldName]: ["unreadable form"],
+      });
     }
     const file = form.get(fieldName);
     if (!(file instanceof Blob)) {
-      throw new HttpError(422, `No file in the form field "${fieldName}"; attach the CSV file there.`, { [fieldName]: ["a CSV file is required"] });
+      throw new HttpError(422, `No file in the form field "${fieldName}"; attach the CSV file there.`, {
+        [fieldName]: ["a CSV file is required"],
+      });
     }
     if (file.size > maxBytes) throw tooLarge(maxBytes, file.size);
     const fields: Record<string, string> = {};

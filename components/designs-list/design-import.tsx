@@ -33,8 +33,14 @@ export function ImportDesign({ role }: { role: Role }) {
         setRefusal({ message: `${file.name} is not a JSON file; choose a design file exported from Sensewright.` });
         return;
       }
-      const res = await fetch("/api/designs/import", { method: "POST", headers: { "content-type": "application/json" }, body: text });
-      const body = (await res.json().catch(() => ({ message: `The server answered ${res.status}.` }))) as Refusal & { id?: string };
+      const res = await fetch("/api/designs/import", {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: text,
+      });
+      const body = (await res.json().catch(() => ({ message: `The server answered ${res.status}.` }))) as Refusal & {
+        id?: string;
+      };
       if (res.status === 201 && body.id) {
         router.push(`/designs/${body.id}`);
         router.refresh();

@@ -20,14 +20,19 @@ export function RemoveMembers({ members, selfId }: { members: Member[]; selfId: 
     const res = await fetch(`/api/team/members/${m.userId}`, { method: "DELETE" });
     const data = (await res.json().catch(() => ({}))) as { message?: string };
     setConfirming(null);
-    setMessage(res.ok ? { tone: "ok", text: `${m.name} is no longer a member of the team.` } : { tone: "bad", text: data.message ?? `Refused (${res.status}).` });
+    setMessage(
+      res.ok
+        ? { tone: "ok", text: `${m.name} is no longer a member of the team.` }
+        : { tone: "bad", text: data.message ?? `Refused (${res.status}).` },
+    );
     router.refresh();
   }
 
   return (
     <Panel title="Remove members">
       <p className="mb-2 text-xs text-ink-muted">
-        A removed member can no longer sign in to this team; what they wrote stays, under their name. The last owner cannot be removed.
+        A removed member can no longer sign in to this team; what they wrote stays, under their name. The last owner
+        cannot be removed.
       </p>
       <ul className="flex flex-col divide-y divide-line text-sm">
         {members.map((m) => {

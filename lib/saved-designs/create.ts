@@ -5,7 +5,12 @@ import { createDesign } from "@/db/queries/designs";
 import type { Caller } from "@/lib/auth/gate";
 import { evaluateDesign } from "./service";
 
-export type NewDesign = { name: string; project?: string | null; requirement: unknown; choice: { shuntOhms: number; gain: number } };
+export type NewDesign = {
+  name: string;
+  project?: string | null;
+  requirement: unknown;
+  choice: { shuntOhms: number; gain: number };
+};
 
 export async function saveNewDesign(caller: Pick<Caller, "teamId" | "userId">, body: NewDesign) {
   const evaluated = evaluateDesign(body.requirement, body.choice);

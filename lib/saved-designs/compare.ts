@@ -6,7 +6,14 @@ import { formatField, type FieldInfo } from "./figures";
 export const compareQuery = z.object({
   ids: z
     .string({ error: "ids: give two to four design ids separated by commas" })
-    .transform((s) => [...new Set(s.split(",").map((x) => x.trim()).filter(Boolean))])
+    .transform((s) => [
+      ...new Set(
+        s
+          .split(",")
+          .map((x) => x.trim())
+          .filter(Boolean),
+      ),
+    ])
     .refine((ids) => ids.length >= 2 && ids.length <= 4, { error: "ids: compare two to four different designs" }),
 });
 

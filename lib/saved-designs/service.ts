@@ -20,8 +20,16 @@ export const choiceSchema = z.object({
   gain: z.number({ error: "Gain: expected a number" }).positive({ error: "Gain must be above zero" }),
 });
 
-const nameSchema = z.string({ error: "Name: expected text" }).trim().min(1, { error: "Give the design a name" }).max(200, { error: "Name: at most 200 characters" });
-const projectSchema = z.string({ error: "Project: expected text" }).trim().max(200, { error: "Project: at most 200 characters" }).nullish();
+const nameSchema = z
+  .string({ error: "Name: expected text" })
+  .trim()
+  .min(1, { error: "Give the design a name" })
+  .max(200, { error: "Name: at most 200 characters" });
+const projectSchema = z
+  .string({ error: "Project: expected text" })
+  .trim()
+  .max(200, { error: "Project: at most 200 characters" })
+  .nullish();
 
 export const createDesignSchema = z.object({
   name: nameSchema,
@@ -64,10 +72,17 @@ export function evaluateDesign(requirementInput: unknown, choice: Choice): Evalu
       ];
     }
     if (!req.amplifier.gains.some((g) => Math.abs(g - choice.gain) <= 1e-9 * g)) {
-      const list = req.amplifier.gains.length > 12 ? `${req.amplifier.gains.length} gains from ${req.amplifier.gains[0]} to ${req.amplifier.gains.at(-1)}` : req.amplifier.gains.join(", ");
+      const list =
+        req.amplifier.gains.length > 12
+          ? `${req.amplifier.gains.length} gains from ${req.amplifier.gains[0]} to ${req.amplifier.gains.at(-1)}`
+          : req.amplifier.gains.join(", ");
       fieldErrors["choice.gain"] = [`Gain ${choice.gain} is not one of the swept gains (${list})`];
     }
-    throw new HttpError(422, "The choice is outside the requirement's sweep: pick a shunt and gain the solver examines.", fieldErrors);
+    throw new HttpError(
+      422,
+      "The choice is outside the requirement's sweep: pick a shunt and gain the solver examines.",
+      fieldErrors,
+    );
   }
   const metrics = evaluateCandidate(req, choice);
   if (!metrics.feasible) {

@@ -15,7 +15,13 @@ type Side = { name?: string; project?: string | null; requirement: unknown; choi
 
 const same = (x: unknown, y: unknown) => JSON.stringify(x ?? null) === JSON.stringify(y ?? null);
 
-function compareGroup(group: Change["group"], a: unknown, b: unknown, fields: Record<string, FieldInfo>, onlyKnown: boolean): Change[] {
+function compareGroup(
+  group: Change["group"],
+  a: unknown,
+  b: unknown,
+  fields: Record<string, FieldInfo>,
+  onlyKnown: boolean,
+): Change[] {
   const fa = flatten(a);
   const fb = flatten(b);
   const paths = [...new Set([...Object.keys(fields), ...Object.keys(fa), ...Object.keys(fb)])];
@@ -25,7 +31,15 @@ function compareGroup(group: Change["group"], a: unknown, b: unknown, fields: Re
     if (onlyKnown && !info) continue;
     if (!(path in fa) && !(path in fb)) continue;
     if (same(fa[path], fb[path])) continue;
-    out.push({ group, path, label: info?.label ?? path, a: fa[path], b: fb[path], aText: formatField(fa[path], info), bText: formatField(fb[path], info) });
+    out.push({
+      group,
+      path,
+      label: info?.label ?? path,
+      a: fa[path],
+      b: fb[path],
+      aText: formatField(fa[path], info),
+      bText: formatField(fb[path], info),
+    });
   }
   return out;
 }
@@ -36,14 +50,24 @@ export function diffRevisions(a: Side, b: Side): Change[] {
   for (const key of ["name", "project"] as const) {
     if (a[key] !== undefined && b[key] !== undefined && !same(a[key], b[key])) {
       const label = key === "name" ? "Name" : "Project";
-      design.push({ group: "design", path: key, label, a: a[key], b: b[key], aText: String(a[key] ?? "—"), bText: String(b[key] ?? "—") });
+      design.push({
+        group: "design",
+        path: key,
+        label,
+        a: a[key],
+        b: b[key],
+        aText: String(a[key] ?? "—"),
+        bText: String(b[key] ?? "—"),
+      });
     }
   }
   return [
     ...design,
     ...compareGroup("requirement", a.requirement, b.requirement, requirementFields, false),
     ...compareGroup("choice", a.choice, b.choice, choiceFields, false),
-    ...(a.metrics !== undefined && b.metrics !== undefined ? compareGroup("figures", a.metrics, b.metrics, metricFields, true) : []),
+    ...(a.metrics !== undefined && b.metrics !== undefined
+      ? compareGroup("figures", a.metrics, b.metrics, metricFields, true)
+      : []),
   ];
 }
 

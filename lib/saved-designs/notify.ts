@@ -4,7 +4,14 @@ import { listMembers } from "@/db/queries/users";
 import { formatPercent, formatSI, type CandidateDetail, type Choice } from "@/lib/design";
 import { sendMail } from "@/lib/mail/send";
 
-type DesignRef = { id: string; name: string; project: string | null; revision: number; choice: Choice; metrics: CandidateDetail };
+type DesignRef = {
+  id: string;
+  name: string;
+  project: string | null;
+  revision: number;
+  choice: Choice;
+  metrics: CandidateDetail;
+};
 
 const summary = (d: DesignRef) =>
   [
@@ -46,7 +53,9 @@ export async function mailReviewed(
     review.verdict === "comment"
       ? `Comment on ${d.name} (revision ${review.revision})`
       : `${d.name} ${what} (revision ${review.revision})`;
-  const reason = review.body.trim() ? `\n\n${review.verdict === "return" ? "Reason" : review.verdict === "approve" ? "Note" : "Comment"}:\n${review.body.trim()}` : "";
+  const reason = review.body.trim()
+    ? `\n\n${review.verdict === "return" ? "Reason" : review.verdict === "approve" ? "Note" : "Comment"}:\n${review.body.trim()}`
+    : "";
   return sendMail({
     teamId,
     actorId: actor.userId,

@@ -8,7 +8,10 @@ import { HttpError } from "@/lib/http";
 
 export const designNotFound = () => new HttpError(404, "That design was not found in your team.");
 const notApprovedForMakers = () =>
-  new HttpError(404, "That design was not found among your team's approved designs (makers see approved designs only).");
+  new HttpError(
+    404,
+    "That design was not found among your team's approved designs (makers see approved designs only).",
+  );
 
 /** The design row and its current revision, or 404. */
 export async function designFor(caller: Caller, id: string) {
