@@ -33,6 +33,9 @@ export const users = pgTable(
     email: text("email").notNull(),
     name: text("name").notNull(),
     passwordHash: text("password_hash").notNull(),
+    // Put in the session token at sign-in and compared on every request: raising it ends every
+    // session of the user (sign-out, password change, removal from a team).
+    sessionVersion: integer("session_version").notNull().default(0),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex("users_email_unique").on(sql`lower(${t.email})`)],
@@ -159,15 +162,30 @@ export const invitations = pgTable(
   (t) => [uniqueIndex("invitations_token_hash").on(t.tokenHash)],
 );
 
-// Messages received by the built-in mail catcher (only used when SMTP_URL is unset).
-export const mailMessages = pgTable("mail_messages", {
-  id: uuid("id").primaryKey().defaultRandom(),
-  to: text("to").notNull(),
-  from: text("from").notNull(),
-  subject: text("subject").notNull(),
-  text: text("text").notNull(),
-  raw: text("raw").notNull(),
-  sentAt: timestamp("sent_at", { withTimezone: true }).notNull().defaultNow(),
+// Messages kept by the built-in outbox (only used when SMTP_URL is unset). `team_id` is the team the
+// mail was sent for, set by the sender (never read back from the message text); null on rows stored
+// before the column existed, which no outbox shows.
+export const mailMessages = pgTable(
+  "mail_messages",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    teamId: uuid("team_id").references(() => teams.id, { onDelete: "cascade" }),
+    to: text("to").notNull(),
+    from: text("from").notNull(),
+    subject: text("subject").notNull(),
+    text: text("text").notNull(),
+    raw: text("raw").notNull(),
+    sentAt: timestamp("sent_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [index("mail_messages_team_sent").on(t.teamId, t.sentAt)],
+);
+
+// Failed sign-ins counted per bucket ("pair:<e-mail> <address>" or "address:<address>") in a fixed
+// window, so throttling holds across restarts and across processes sharing one database.
+export const signInFailures = pgTable("sign_in_failures", {
+  bucket: text("bucket").primaryKey(),
+  failures: integer("failures").notNull(),
+  windowStartedAt: timestamp("window_started_at", { withTimezone: true }).notNull(),
 });
 
 // A measured current recording; samples kept as little-endian Float64 arrays.

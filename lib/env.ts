@@ -13,6 +13,8 @@ const envSchema = z.object({
   SMTP_URL: z.string().url().optional(),
   SEED_DEMO: z.enum(["0", "1"]).optional(),
   PUBLIC_URL: z.string().url().optional(),
+  // 1: a reverse proxy in front of the app appends the client's address to X-Forwarded-For.
+  TRUST_PROXY: z.enum(["0", "1"]).optional(),
 });
 
 export type Env = z.infer<typeof envSchema>;

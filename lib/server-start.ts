@@ -1,11 +1,13 @@
 // Node-only start-up work, imported by instrumentation.ts.
 import { getDb, databaseKind } from "@/db/client";
 import { seedDemoIfEmpty } from "@/db/seed";
+import { stampPeerAddresses } from "@/lib/auth/client-address";
 import { ensureAuthSecret } from "@/lib/auth/secret";
 import { env } from "@/lib/env";
 
 export async function startServer() {
   const e = env();
+  stampPeerAddresses();
   ensureAuthSecret();
   if (!process.env.NEXTAUTH_URL && !process.env.AUTH_TRUST_HOST) {
     process.env.NEXTAUTH_URL = e.PUBLIC_URL ?? `http://localhost:${e.PORT}`;

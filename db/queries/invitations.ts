@@ -5,6 +5,7 @@ import { and, desc, eq, gt, isNull, sql } from "drizzle-orm";
 import { getDb } from "../client";
 import { invitations, memberships, teams, users, type Role } from "../schema";
 import { recordAudit } from "./audit";
+import { bumpSessionVersion } from "./users";
 
 export const INVITATION_DAYS = 7;
 const DAY_MS = 24 * 60 * 60 * 1000;
@@ -219,63 +220,91 @@ export async function findInvitationByToken(token: string) {
 }
 
 export type AcceptResult =
-  | { ok: true; userId: string; teamId: string; teamName: string; email: string; role: Role }
-  | { ok: false; status: 403 | 404 | 409 | 410 | 422; message: string };
+  | { ok: true; userId: string; teamId: string; teamName: string; email: string; role: Role; newAccount: boolean }
+  | { ok: false; status: 401 | 403 | 404 | 409 | 410 | 422; message: string; field?: string };
 
 /**
- * Accepts an invitation once: a new account gets the name and password hash given; an existing
- * account must prove its password (`checkPassword`). Marking it accepted is a compare-and-set.
+ * Accepts an invitation once. An invitation for an existing account is accepted only by a caller
+ * signed in as that account (`signedInUserId`): no password is ever checked here, so the call cannot
+ * be used to guess one. A new account gets the name and password hash given. The token is looked up
+ * first; every refusal is audited in the same transaction; marking it accepted is a compare-and-set.
  */
 export async function acceptInvitation(input: {
   token: string;
-  name: string;
-  passwordHash: string;
-  checkPassword: (hash: string) => Promise<boolean>;
+  signedInUserId: string | null;
+  /** Whether the request carried a password (refused for an existing account). */
+  passwordOffered: boolean;
+  newAccount?: { name: string; passwordHash: string };
 }): Promise<AcceptResult> {
   const db = await getDb();
   return db.transaction(async (tx): Promise<AcceptResult> => {
-    const [inv] = await tx
-      .select()
-      .from(invitations)
-      .where(eq(invitations.tokenHash, hashToken(input.token)))
-      .for("update");
-    if (!inv) return { ok: false, status: 404, message: "That invitation link is not valid." };
+    const tokenHash = hashToken(input.token);
+    const [inv] = await tx.select().from(invitations).where(eq(invitations.tokenHash, tokenHash)).for("update");
+    const refuse = async (
+      status: 401 | 403 | 404 | 409 | 410 | 422,
+      message: string,
+      reason: string,
+      field?: string,
+    ): Promise<AcceptResult> => {
+      await recordAudit(
+        {
+          teamId: inv?.teamId ?? null,
+          actorId: input.signedInUserId,
+          action: "invitation.refused",
+          targetType: "invitation",
+          targetId: inv?.id ?? `token:${tokenHash.slice(0, 16)}`,
+          details: { reason, email: inv?.email ?? null, passwordOffered: input.passwordOffered },
+        },
+        tx,
+      );
+      return { ok: false, status, message, ...(field ? { field } : {}) };
+    };
+    if (!inv) return refuse(404, "That invitation link is not valid.", "unknown token");
     const status = statusOf(inv);
     if (status === "accepted")
-      return { ok: false, status: 409, message: "That invitation has been used already; sign in instead." };
-    if (status === "revoked")
-      return { ok: false, status: 410, message: "That invitation was revoked by the team's owner." };
+      return refuse(409, "That invitation has been used already; sign in instead.", "already accepted");
+    if (status === "revoked") return refuse(410, "That invitation was revoked by the team's owner.", "revoked");
     if (status === "expired")
-      return {
-        ok: false,
-        status: 410,
-        message: `That invitation expired on ${inv.expiresAt.toISOString().slice(0, 10)}; ask the owner for a new one.`,
-      };
+      return refuse(
+        410,
+        `That invitation expired on ${inv.expiresAt.toISOString().slice(0, 10)}; ask the owner for a new one.`,
+        "expired",
+      );
     const [team] = await tx.select({ name: teams.name }).from(teams).where(eq(teams.id, inv.teamId));
     const [existing] = await tx
-      .select()
+      .select({ id: users.id })
       .from(users)
       .where(sql`lower(${users.email}) = ${inv.email.toLowerCase()}`);
     let userId: string;
     if (existing) {
-      if (!(await input.checkPassword(existing.passwordHash)))
-        return {
-          ok: false,
-          status: 403,
-          message: "An account with this e-mail exists: enter its password to join the team.",
-        };
+      if (input.signedInUserId !== existing.id) {
+        const how = `sign in as ${inv.email}, open the invitation link again and press Join`;
+        return input.signedInUserId
+          ? refuse(
+              403,
+              `This invitation is for ${inv.email}, not for the account you are signed in as: ${how}.`,
+              "signed in as another account",
+            )
+          : refuse(
+              401,
+              `An account with ${inv.email} exists: ${how}. A password is never accepted here.`,
+              input.passwordOffered ? "password offered for an existing account" : "not signed in",
+            );
+      }
       const member = await tx
         .select({ id: memberships.id })
         .from(memberships)
         .where(and(eq(memberships.teamId, inv.teamId), eq(memberships.userId, existing.id)));
-      if (member[0]) return { ok: false, status: 409, message: "You are a member of this team already." };
+      if (member[0]) return refuse(409, "You are a member of this team already.", "already a member");
       userId = existing.id;
     } else {
-      if (!input.name.trim())
-        return { ok: false, status: 422, message: "Give your name: it is how the team sees you." };
+      if (!input.newAccount)
+        return refuse(422, "Choose a password for your new account.", "no password for a new account", "password");
+      if (!input.newAccount.name.trim())
+        return refuse(422, "Give your name: it is how the team sees you.", "no name", "name");
       const [u] = await tx
         .insert(users)
-        .values({ email: inv.email, name: input.name.trim(), passwordHash: input.passwordHash })
+        .values({ email: inv.email, name: input.newAccount.name.trim(), passwordHash: input.newAccount.passwordHash })
         .returning({ id: users.id });
       if (!u) throw new Error("user not created");
       userId = u.id;
@@ -296,7 +325,15 @@ export async function acceptInvitation(input: {
       },
       tx,
     );
-    return { ok: true, userId, teamId: inv.teamId, teamName: team?.name ?? "", email: inv.email, role: inv.role };
+    return {
+      ok: true,
+      userId,
+      teamId: inv.teamId,
+      teamName: team?.name ?? "",
+      email: inv.email,
+      role: inv.role,
+      newAccount: !existing,
+    };
   });
 }
 
@@ -326,6 +363,8 @@ export async function removeMember(teamId: string, userId: string, actorId: stri
         };
     }
     await tx.delete(memberships).where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)));
+    // Their sessions end everywhere (a session carries one team; the others sign in again).
+    await bumpSessionVersion(userId, tx);
     await recordAudit(
       {
         teamId,

@@ -1,15 +1,20 @@
-// What the built-in mail catcher received.
-import { desc, sql } from "drizzle-orm";
+// The built-in outbox: every message the app sent while no SMTP_URL is set, with the team it was sent
+// for as a column of its own (never read back from the message, which can carry user text).
+import { desc, eq } from "drizzle-orm";
 import { getDb } from "../client";
 import { mailMessages } from "../schema";
 
-export async function storeMail(m: { to: string; from: string; subject: string; text: string; raw: string }) {
+export async function storeMail(m: {
+  teamId: string;
+  to: string;
+  from: string;
+  subject: string;
+  text: string;
+  raw: string;
+}) {
   const db = await getDb();
   await db.insert(mailMessages).values(m);
 }
-
-/** The team's header that every mail carries, so an outbox shows one team's mail only. */
-export const TEAM_HEADER = "X-Sensewright-Team";
 
 /** Messages sent on behalf of a team, newest first. */
 export async function listTeamMail(teamId: string, limit = 200) {
@@ -24,7 +29,7 @@ export async function listTeamMail(teamId: string, limit = 200) {
       sentAt: mailMessages.sentAt,
     })
     .from(mailMessages)
-    .where(sql`position(${`${TEAM_HEADER}: ${teamId}`} in ${mailMessages.raw}) > 0`)
+    .where(eq(mailMessages.teamId, teamId))
     .orderBy(desc(mailMessages.sentAt))
     .limit(limit);
   return rows.map((r) => ({ ...r, sentAt: r.sentAt.toISOString() }));

@@ -1,4 +1,5 @@
 import { and, asc, eq, sql } from "drizzle-orm";
+import type { Db, Tx } from "../client";
 import { getDb } from "../client";
 import { memberships, teams, users, type Role } from "../schema";
 import { recordAudit } from "./audit";
@@ -26,7 +27,10 @@ export async function firstMembership(userId: string) {
   return rows[0] ?? null;
 }
 
-/** The caller as the database sees them now: identity, team and current role (or null if no longer a member). */
+/**
+ * The caller as the database sees them now: identity, team, current role and session version (or null
+ * if no longer a member).
+ */
 export async function getMember(userId: string, teamId: string) {
   const db = await getDb();
   const rows = await db
@@ -37,6 +41,7 @@ export async function getMember(userId: string, teamId: string) {
       teamId: teams.id,
       teamName: teams.name,
       role: memberships.role,
+      sessionVersion: users.sessionVersion,
     })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
@@ -110,5 +115,67 @@ export async function changeMemberRole(
       tx,
     );
     return { ok: true } as const;
+  });
+}
+
+/**
+ * Ends every session of the user: tokens carrying an older version are refused from now on. With
+ * `onlyIfVersion`, only when that is still the current version (a dead session cannot end live ones).
+ */
+export async function bumpSessionVersion(
+  userId: string,
+  tx?: Tx | Db,
+  onlyIfVersion?: number,
+): Promise<number | null> {
+  const db = tx ?? (await getDb());
+  const [row] = await db
+    .update(users)
+    .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(
+      onlyIfVersion === undefined
+        ? eq(users.id, userId)
+        : and(eq(users.id, userId), eq(users.sessionVersion, onlyIfVersion)),
+    )
+    .returning({ sessionVersion: users.sessionVersion });
+  return row?.sessionVersion ?? null;
+}
+
+export async function findUserById(userId: string) {
+  const db = await getDb();
+  const rows = await db.select().from(users).where(eq(users.id, userId)).limit(1);
+  return rows[0] ?? null;
+}
+
+/**
+ * Sets a new password hash if the stored one is still `expectedHash` (a concurrent change wins once),
+ * ends every session (the version goes up) and audits it, in one transaction. Returns the new session
+ * version, or null when the password changed meanwhile.
+ */
+export async function changePassword(input: {
+  userId: string;
+  teamId: string;
+  expectedHash: string;
+  newHash: string;
+}): Promise<number | null> {
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    const [row] = await tx
+      .update(users)
+      .set({ passwordHash: input.newHash, sessionVersion: sql`${users.sessionVersion} + 1` })
+      .where(and(eq(users.id, input.userId), eq(users.passwordHash, input.expectedHash)))
+      .returning({ sessionVersion: users.sessionVersion });
+    if (!row) return null;
+    await recordAudit(
+      {
+        teamId: input.teamId,
+        actorId: input.userId,
+        action: "password.changed",
+        targetType: "user",
+        targetId: input.userId,
+        details: { sessionsEnded: true },
+      },
+      tx,
+    );
+    return row.sessionVersion;
   });
 }

@@ -19,13 +19,16 @@ export type Caller = {
   role: Role;
 };
 
-type SessionShape = { userId?: string; teamId?: string } | null;
+type SessionShape = { userId?: string; teamId?: string; sessionVersion?: number } | null;
 
-/** The signed-in caller, or null. */
+/** The signed-in caller, or null (also when the session was ended: sign-out, password change, removal). */
 export async function currentCaller(): Promise<Caller | null> {
   const session = (await getServerSession(authOptions)) as SessionShape;
   if (!session?.userId || !session.teamId) return null;
-  return getMember(session.userId, session.teamId);
+  const member = await getMember(session.userId, session.teamId);
+  if (!member || member.sessionVersion !== (session.sessionVersion ?? 0)) return null;
+  const { sessionVersion: _version, ...caller } = member;
+  return caller;
 }
 
 const roleNames: Record<Role, string> = {

@@ -3,7 +3,7 @@ import { EmptyState, Panel } from "@/components/ui/panel";
 import { listTeamMail } from "@/db/queries/mail";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { formatWhen } from "@/lib/saved-designs/when";
-import { usesCatcher } from "@/lib/mail/transport";
+import { usesOutbox } from "@/lib/mail/transport";
 
 export const metadata: Metadata = { title: "Outbox" };
 
@@ -16,7 +16,7 @@ export default async function OutboxPage() {
       </EmptyState>
     );
   }
-  if (!usesCatcher()) {
+  if (!usesOutbox()) {
     return (
       <EmptyState title="Mail goes out through your SMTP server">
         SMTP_URL is set, so messages are delivered for real and there is no local outbox. Check that server&apos;s
@@ -30,7 +30,7 @@ export default async function OutboxPage() {
       <div>
         <h1 className="text-lg font-semibold">Outbox</h1>
         <p className="text-ink-muted">
-          No SMTP server is configured (SMTP_URL is unset), so the built-in mail catcher keeps every message the
+          No SMTP server is configured (SMTP_URL is unset), so the built-in outbox keeps every message the
           workbench sends for {caller.teamName}. Newest first.
         </p>
       </div>

@@ -1,11 +1,11 @@
 import { listTeamMail } from "@/db/queries/mail";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
-import { usesCatcher } from "@/lib/mail/transport";
+import { usesOutbox } from "@/lib/mail/transport";
 
-/** The mail the built-in catcher received for this team (only while no SMTP_URL is set). */
+/** The mail the built-in outbox kept for this team (only while no SMTP_URL is set), by its team column. */
 export const GET = apiRoute({ roles: ["owner"], doing: "read the outbox" }, async ({ caller }) => {
-  if (!usesCatcher())
+  if (!usesOutbox())
     throw new HttpError(
       409,
       "Mail goes out through the SMTP server in SMTP_URL, so there is no local outbox to read; check that server's mailboxes.",

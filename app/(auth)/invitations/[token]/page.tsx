@@ -1,8 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { AcceptInvitationForm } from "@/components/team/invitations-accept";
+import { redirect } from "next/navigation";
+import { JoinTeamButton } from "@/components/auth/join-team-button";
+import { NewAccountForm } from "@/components/auth/new-account-form";
+import { SwitchAccountButton } from "@/components/auth/switch-account-button";
 import { Logo } from "@/components/logo";
 import { findInvitationByToken } from "@/db/queries/invitations";
+import { currentCaller } from "@/lib/auth/gate";
 import { formatWhen } from "@/lib/saved-designs/when";
 
 export const metadata: Metadata = { title: "Invitation" };
@@ -17,6 +21,13 @@ const why = {
 export default async function InvitationPage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
   const invitation = token.length >= 20 && token.length <= 200 ? await findInvitationByToken(token) : null;
+  const here = `/invitations/${encodeURIComponent(token)}`;
+  const caller = await currentCaller();
+  const signedInAsInvitee = !!caller && !!invitation && caller.email.toLowerCase() === invitation.email.toLowerCase();
+  // An existing account joins while signed in as itself: send a signed-out invitee to sign in first.
+  if (invitation?.status === "pending" && invitation.hasAccount && !caller) {
+    redirect(`/sign-in?next=${encodeURIComponent(here)}`);
+  }
   return (
     <main className="mx-auto flex min-h-screen max-w-md flex-col justify-center gap-6 px-6 py-10">
       <div className="flex items-center gap-2 text-lg font-semibold">
@@ -44,15 +55,30 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
               You are invited as a <strong className="text-ink">{invitation.role}</strong>. The link works once and
               expires {formatWhen(invitation.expiresAt)}.
             </p>
-            <AcceptInvitationForm token={token} email={invitation.email} hasAccount={invitation.hasAccount} />
+            {!invitation.hasAccount ? (
+              <NewAccountForm token={token} email={invitation.email} />
+            ) : signedInAsInvitee && caller ? (
+              <JoinTeamButton token={token} teamName={invitation.teamName} currentTeam={caller.teamName} />
+            ) : (
+              <div className="flex flex-col gap-3" data-testid="wrong-account">
+                <p>
+                  This invitation is for <code className="font-mono">{invitation.email}</code>, and you are signed in as{" "}
+                  <code className="font-mono">{caller?.email}</code>. Sign in as {invitation.email} to join; you will
+                  come back to this page.
+                </p>
+                <SwitchAccountButton next={here} label={`Sign in as ${invitation.email}`} />
+              </div>
+            )}
           </>
         )}
       </div>
-      <p className="text-center text-xs text-ink-muted">
-        <Link href="/sign-in" className="hover:text-ink">
-          Sign in instead
-        </Link>
-      </p>
+      {!caller && (
+        <p className="text-center text-xs text-ink-muted">
+          <Link href="/sign-in" className="hover:text-ink">
+            Sign in instead
+          </Link>
+        </p>
+      )}
     </main>
   );
 }

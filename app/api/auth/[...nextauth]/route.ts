@@ -1,5 +1,51 @@
+// next-auth's routes, behind two checks of our own: a sign-in from a throttled e-mail-and-address pair
+// or address gets 429 with Retry-After before any password is hashed, and nothing here ends in a 500
+// (a malformed body or callbackUrl is a 400).
 import NextAuth from "next-auth";
+import type { NextRequest } from "next/server";
+import { clientAddress } from "@/lib/auth/client-address";
 import { authOptions } from "@/lib/auth/options";
+import { safeRedirectUrl } from "@/lib/auth/safe-redirect";
+import { retryAfterSeconds, signInWaitMs, tryAgainIn } from "@/lib/auth/sign-in-throttle";
+import { json } from "@/lib/http";
 
 const handler = NextAuth(authOptions);
-export { handler as GET, handler as POST };
+
+type Context = { params: Promise<{ nextauth: string[] }> };
+
+/** The e-mail a credentials sign-in names, read the way next-auth reads the body (form or JSON). */
+async function emailOf(request: Request): Promise<string> {
+  const type = request.headers.get("content-type") ?? "";
+  const body: unknown = type.includes("application/json")
+    ? await request.json()
+    : type.includes("application/x-www-form-urlencoded")
+      ? Object.fromEntries(new URLSearchParams(await request.text()))
+      : {};
+  const email = (body as { email?: unknown } | null)?.email;
+  return typeof email === "string" ? email.trim().toLowerCase().slice(0, 320) : "";
+}
+
+async function throttled(request: NextRequest): Promise<Response | null> {
+  const wait = await signInWaitMs(await emailOf(request.clone()), clientAddress(request.headers));
+  if (wait <= 0) return null;
+  const message = tryAgainIn(wait);
+  // `url` carries the message the way next-auth's client reads a refusal (`?error=`).
+  const url = safeRedirectUrl(`/sign-in?error=${encodeURIComponent(message)}`, request.nextUrl.origin);
+  return json({ message, url }, { status: 429, headers: { "Retry-After": String(retryAfterSeconds(wait)) } });
+}
+
+async function guarded(request: NextRequest, context: Context): Promise<Response> {
+  try {
+    if (request.method === "POST" && request.nextUrl.pathname.endsWith("/callback/credentials")) {
+      const refusal = await throttled(request);
+      if (refusal) return refusal;
+    }
+    return await handler(request, context);
+  } catch (e) {
+    if (e instanceof SyntaxError) return json({ message: "The request body is not valid JSON." }, 400);
+    console.error("[auth] unexpected error", e);
+    return json({ message: "The sign-in service could not read that request; nothing was changed." }, 400);
+  }
+}
+
+export { guarded as GET, guarded as POST };

@@ -1,22 +1,28 @@
-import bcrypt from "bcryptjs";
 import { z } from "zod";
-import { acceptInvitation } from "@/db/queries/invitations";
-import { parseWith, publicRoute } from "@/lib/auth/gate";
+import { acceptInvitation, findInvitationByToken } from "@/db/queries/invitations";
+import { currentCaller, parseWith, publicRoute } from "@/lib/auth/gate";
+import { hashPassword } from "@/lib/auth/password-hash";
+import { passwordProblems, PASSWORD_MAX_LENGTH } from "@/lib/auth/password-rules";
 import { HttpError, json } from "@/lib/http";
 
 const acceptSchema = z.object({
   token: z
     .string({ error: "token: the invitation link's code is missing" })
     .min(20, { error: "token: that is not an invitation code" })
-    .max(200),
+    .max(200, { error: "token: that is not an invitation code" }),
   name: z.string().trim().max(100, { error: "name: at most 100 characters" }).default(""),
+  // Only for a new account; an existing account joins by being signed in, never with a password.
   password: z
-    .string({ error: "password: choose a password" })
-    .min(10, { error: "password: at least 10 characters" })
-    .max(200, { error: "password: at most 200 characters" }),
+    .string()
+    .max(PASSWORD_MAX_LENGTH, { error: `at most ${PASSWORD_MAX_LENGTH} characters` })
+    .optional(),
 });
 
-/** Public: the invitee (signed out) sets a name and password, or proves an existing account's password. */
+/**
+ * Public. A new account: the invitee sets a name and a password (the app's password rules). An
+ * existing account: the caller must be signed in as it, and sends the token alone. The token is
+ * looked up before any password is hashed, and every refusal is audited.
+ */
 export const POST = publicRoute(async (request) => {
   const text = await request.text();
   if (text.length > 100_000) throw new HttpError(413, "The request body is too large.");
@@ -27,20 +33,33 @@ export const POST = publicRoute(async (request) => {
     throw new HttpError(422, "The request body is not valid JSON.", { "(body)": ["is not valid JSON"] });
   }
   const body = parseWith(acceptSchema, raw);
-  const passwordHash = await bcrypt.hash(body.password, 10);
+  const caller = await currentCaller();
+  const invitation = await findInvitationByToken(body.token);
+
+  let newAccount: { name: string; passwordHash: string } | undefined;
+  if (invitation?.status === "pending" && !invitation.hasAccount && body.password !== undefined) {
+    const fieldErrors: Record<string, string[]> = {};
+    const problems = passwordProblems(body.password, invitation.email);
+    if (problems.length) fieldErrors.password = problems;
+    if (!body.name) fieldErrors.name = ["give your name: it is how the team sees you"];
+    const [first] = Object.entries(fieldErrors);
+    if (first) throw new HttpError(422, `Invalid input at ${first[0]}: ${first[1][0]}`, fieldErrors);
+    newAccount = { name: body.name, passwordHash: await hashPassword(body.password) };
+  }
+
   const result = await acceptInvitation({
     token: body.token,
-    name: body.name,
-    passwordHash,
-    checkPassword: (hash) => bcrypt.compare(body.password, hash),
+    signedInUserId: caller?.userId ?? null,
+    passwordOffered: body.password !== undefined,
+    newAccount,
   });
   if (!result.ok) {
-    if (result.status === 410) throw new HttpError(409, result.message);
-    throw new HttpError(
-      result.status,
-      result.message,
-      result.status === 422 ? { name: ["give your name"] } : undefined,
-    );
+    // 410 (revoked, expired) reads as 409 to clients: the invitation exists but cannot be used.
+    const status = result.status === 410 ? 409 : result.status;
+    throw new HttpError(status, result.message, result.field ? { [result.field]: [result.message] } : undefined);
   }
-  return json({ email: result.email, teamName: result.teamName, role: result.role }, 201);
+  return json(
+    { email: result.email, teamName: result.teamName, role: result.role, newAccount: result.newAccount },
+    201,
+  );
 });

@@ -6,25 +6,19 @@ import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
 
-/** The invitee's form: a name and password for a new account, or the existing account's password. */
-export function AcceptInvitationForm({
-  token,
-  email,
-  hasAccount,
-}: {
-  token: string;
-  email: string;
-  hasAccount: boolean;
-}) {
+type Refusal = { message: string; fieldErrors?: Record<string, string[]> };
+
+/** An invitation for an e-mail with no account yet: choose a name and a password, then sign in. */
+export function NewAccountForm({ token, email }: { token: string; email: string }) {
   const router = useRouter();
-  const [error, setError] = useState<{ message: string; fieldErrors?: Record<string, string[]> } | null>(null);
+  const [error, setError] = useState<Refusal | null>(null);
   const [busy, setBusy] = useState(false);
 
   async function onSubmit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const password = String(form.get("password") ?? "");
-    if (!hasAccount && password !== String(form.get("confirm") ?? "")) {
+    if (password !== String(form.get("confirm") ?? "")) {
       setError({ message: "The two passwords differ.", fieldErrors: { confirm: ["does not match the password"] } });
       return;
     }
@@ -35,7 +29,7 @@ export function AcceptInvitationForm({
       headers: { "content-type": "application/json" },
       body: JSON.stringify({ token, name: String(form.get("name") ?? ""), password }),
     });
-    const data = (await res.json().catch(() => ({}))) as { message?: string; fieldErrors?: Record<string, string[]> };
+    const data = (await res.json().catch(() => ({}))) as Partial<Refusal>;
     if (!res.ok) {
       setBusy(false);
       setError({ message: data.message ?? `The server refused (${res.status}).`, fieldErrors: data.fieldErrors });
@@ -43,11 +37,7 @@ export function AcceptInvitationForm({
     }
     const signedIn = await signIn("credentials", { email, password, redirect: false });
     setBusy(false);
-    if (!signedIn || signedIn.error) {
-      router.replace("/sign-in");
-      return;
-    }
-    router.replace("/designs");
+    router.replace(signedIn && !signedIn.error ? "/designs" : "/sign-in");
     router.refresh();
   }
 
@@ -57,43 +47,39 @@ export function AcceptInvitationForm({
       <Field id="invite-email" label="E-mail">
         <TextInput id="invite-email" value={email} readOnly aria-readonly className="text-ink-muted" />
       </Field>
-      {!hasAccount && (
-        <Field id="name" label="Your name" hint="How your team sees you." error={fe("name")}>
-          <TextInput id="name" name="name" autoComplete="name" required aria-invalid={!!fe("name")} />
-        </Field>
-      )}
+      <Field id="name" label="Your name" hint="How your team sees you." error={fe("name")}>
+        <TextInput id="name" name="name" autoComplete="name" required aria-invalid={!!fe("name")} />
+      </Field>
       <Field
         id="password"
-        label={hasAccount ? "Your existing password" : "Choose a password"}
-        hint={hasAccount ? "You already have an account with this e-mail." : "At least 10 characters."}
+        label="Choose a password"
+        hint="At least 12 characters; not your e-mail address and not a commonly used password."
         error={fe("password")}
       >
         <TextInput
           id="password"
           name="password"
           type="password"
-          autoComplete={hasAccount ? "current-password" : "new-password"}
+          autoComplete="new-password"
           required
           aria-invalid={!!fe("password")}
         />
       </Field>
-      {!hasAccount && (
-        <Field id="confirm" label="Password again" error={fe("confirm")}>
-          <TextInput
-            id="confirm"
-            name="confirm"
-            type="password"
-            autoComplete="new-password"
-            required
-            aria-invalid={!!fe("confirm")}
-          />
-        </Field>
-      )}
+      <Field id="confirm" label="Password again" error={fe("confirm")}>
+        <TextInput
+          id="confirm"
+          name="confirm"
+          type="password"
+          autoComplete="new-password"
+          required
+          aria-invalid={!!fe("confirm")}
+        />
+      </Field>
       <p aria-live="polite" className="text-xs font-medium text-bad" data-testid="accept-error">
         {error?.message}
       </p>
       <Button type="submit" variant="primary" disabled={busy}>
-        {busy ? "Joining…" : "Join the team"}
+        {busy ? "Joining…" : "Create the account and join"}
       </Button>
     </form>
   );
