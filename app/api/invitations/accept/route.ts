@@ -1,15 +1,16 @@
 import bcrypt from "bcryptjs";
 import { z } from "zod";
 import { acceptInvitation } from "@/db/queries/invitations";
-import { parseWith, publicRoute } from "@/lib/auth/gate";
+import { parseWith, publicRoute, readJson } from "@/lib/auth/gate";
 import { HttpError, json } from "@/lib/http";
+import { textField } from "@/lib/text-field";
 
 const acceptSchema = z.object({
   token: z
     .string({ error: "token: the invitation link's code is missing" })
     .min(20, { error: "token: that is not an invitation code" })
     .max(200),
-  name: z.string().trim().max(100, { error: "name: at most 100 characters" }).default(""),
+  name: textField({ label: "name", max: 100 }).default(""),
   password: z
     .string({ error: "password: choose a password" })
     .min(10, { error: "password: at least 10 characters" })
@@ -18,14 +19,8 @@ const acceptSchema = z.object({
 
 /** Public: the invitee (signed out) sets a name and password, or proves an existing account's password. */
 export const POST = publicRoute(async (request) => {
-  const text = await request.text();
-  if (text.length > 100_000) throw new HttpError(413, "The request body is too large.");
-  let raw: unknown;
-  try {
-    raw = JSON.parse(text || "{}");
-  } catch {
-    throw new HttpError(422, "The request body is not valid JSON.", { "(body)": ["is not valid JSON"] });
-  }
+  // Streamed with the gate's limits and 415 rule: a chunked body is never read whole first.
+  const raw = await readJson(request);
   const body = parseWith(acceptSchema, raw);
   const passwordHash = await bcrypt.hash(body.password, 10);
   const result = await acceptInvitation({
