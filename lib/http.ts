@@ -1,11 +1,11 @@
-// The API's error shape: { message, fieldErrors? } with 401, 403, 404, 409, 413 or 422.
+// The API's error shape: { message, fieldErrors? } with 400, 401, 403, 404, 409, 413, 415, 422, 429 or 503.
 import { z } from "zod";
 
 export type FieldErrors = Record<string, string[]>;
 
 export class HttpError extends Error {
   constructor(
-    readonly status: 400 | 401 | 403 | 404 | 409 | 413 | 422 | 429 | 503,
+    readonly status: 400 | 401 | 403 | 404 | 409 | 413 | 415 | 422 | 429 | 503,
     message: string,
     readonly fieldErrors?: FieldErrors,
   ) {
@@ -17,9 +17,12 @@ export class HttpError extends Error {
 export const notFound = (what = "That design") => new HttpError(404, `${what} was not found.`);
 export const forbidden = (why: string) => new HttpError(403, why);
 
+/** A JSON answer; API JSON holds a team's data, so no cache keeps it (next.config.ts says so too). */
 export function json(data: unknown, init?: number | ResponseInit): Response {
-  const options = typeof init === "number" ? { status: init } : init;
-  return Response.json(data, options);
+  const options: ResponseInit = typeof init === "number" ? { status: init } : { ...init };
+  const headers = new Headers(options.headers);
+  if (!headers.has("cache-control")) headers.set("cache-control", "no-store");
+  return Response.json(data, { ...options, headers });
 }
 
 export function errorResponse(error: HttpError): Response {

@@ -8,6 +8,8 @@ import type { z } from "zod";
 import { getMember } from "@/db/queries/users";
 import type { Role } from "@/db/schema";
 import { HttpError, errorResponse, invalid, json } from "@/lib/http";
+import { readBodyText } from "@/lib/read-upload";
+import { assertSameOrigin } from "./same-origin";
 import { authOptions } from "./options";
 
 export type Caller = {
@@ -49,13 +51,32 @@ export function assertRole(caller: Caller, roles: readonly Role[] | undefined, d
   }
 }
 
-const MAX_JSON_BYTES = 1_000_000;
+/** The largest JSON body read (API.md: 413 above it), in decimal bytes. */
+export const MAX_JSON_BYTES = 1_000_000;
 
-async function readJson(request: Request): Promise<unknown> {
-  const length = Number(request.headers.get("content-length") ?? "0");
-  if (length > MAX_JSON_BYTES) throw new HttpError(413, "The request body is larger than 1 MB.");
-  const text = await request.text();
-  if (text.length > MAX_JSON_BYTES) throw new HttpError(413, "The request body is larger than 1 MB.");
+const jsonTooLarge = () => new HttpError(413, "The request body is larger than 1 MB.");
+
+/** Whether a request carries a body at all (declared length above zero, or chunked). */
+function hasBody(request: Request): boolean {
+  const length = request.headers.get("content-length");
+  if (length !== null) return Number(length) !== 0;
+  return request.headers.has("transfer-encoding") || request.body !== null;
+}
+
+/**
+ * A JSON body: 415 unless it says application/json (a cross-site form can only send text/plain,
+ * form-urlencoded or multipart without asking first), 413 past 1 MB however it is framed, 422 when
+ * not JSON. No body at all reads as {} (a bare POST to submit).
+ */
+export async function readJson(request: Request): Promise<unknown> {
+  if (!hasBody(request)) return {};
+  const type = (request.headers.get("content-type") ?? "").split(";")[0]!.trim().toLowerCase();
+  if (type !== "application/json" && !/^application\/[a-z0-9.+-]*\+json$/.test(type))
+    throw new HttpError(
+      415,
+      `Send the body as JSON with Content-Type: application/json${type ? ` (this request says ${truncateType(type)})` : ""}.`,
+    );
+  const text = await readBodyText(request, MAX_JSON_BYTES, jsonTooLarge);
   if (!text.trim()) return {};
   try {
     return JSON.parse(text);
@@ -63,6 +84,8 @@ async function readJson(request: Request): Promise<unknown> {
     throw new HttpError(422, "The request body is not valid JSON.", { "(body)": ["is not valid JSON"] });
   }
 }
+
+const truncateType = (type: string) => (type.length > 60 ? `${type.slice(0, 60)}…` : type);
 
 type RouteContext = { params: Promise<Record<string, string | string[]>> };
 
@@ -87,6 +110,7 @@ type Handler<B, Q> = (ctx: {
 export function apiRoute<B = undefined, Q = undefined>(options: Options<B, Q>, handler: Handler<B, Q>) {
   return async (request: Request, context: RouteContext): Promise<Response> => {
     try {
+      assertSameOrigin(request);
       const caller = await currentCaller();
       if (!caller) throw new HttpError(401, "Sign in first.");
       assertRole(caller, options.roles, options.doing ?? "do this");
@@ -110,6 +134,7 @@ export function apiRoute<B = undefined, Q = undefined>(options: Options<B, Q>, h
 export function publicRoute(handler: (request: Request) => Promise<Response | object>) {
   return async (request: Request): Promise<Response> => {
     try {
+      assertSameOrigin(request);
       const result = await handler(request);
       return result instanceof Response ? result : json(result);
     } catch (e) {

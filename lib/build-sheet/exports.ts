@@ -1,11 +1,13 @@
 // The plain-file exports of a saved design: the parts list as CSV, the whole design as JSON
 // (our own versioned format, which imports back as a new design), and their file names.
 import { z } from "zod";
+import { writeCsv, type CsvCell } from "@/lib/csv-write";
 import { buildNetlist } from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
 import { choiceSchema } from "@/lib/saved-designs/service";
 import { designSlug } from "./slug";
 import { partsList, type Part } from "./parts";
+import { textField } from "@/lib/text-field";
 
 export const EXPORT_FORMAT = "sensewright-design";
 export const EXPORT_VERSION = 1;
@@ -39,21 +41,23 @@ export const csvColumns = [
   "unit",
 ] as const;
 
-function csvField(v: string): string {
-  return /[",\r\n]/.test(v) ? `"${v.replace(/"/g, '""')}"` : v;
-}
-
-function csvCell(p: Part, col: (typeof csvColumns)[number]): string {
-  if (col === "value_si") return p.valueSI === null ? "" : String(p.valueSI);
+function csvCell(p: Part, col: (typeof csvColumns)[number]): CsvCell {
+  if (col === "value_si") return p.valueSI;
   if (col === "unit") return p.unit ?? "";
   return p[col];
 }
 
-/** RFC 4180: a header row, CRLF line ends, fields quoted when they hold a comma, quote or line break. */
+/**
+ * RFC 4180: a header row, CRLF line ends, fields quoted when they hold a comma, quote or line break;
+ * text that a spreadsheet would run as a formula gets a leading apostrophe (writeCsv).
+ */
 export function partsCsv(view: Pick<DesignView, "requirement" | "choice">): string {
   const rows = partsList(view.requirement, view.choice);
-  const lines = [csvColumns.join(","), ...rows.map((p) => csvColumns.map((c) => csvField(csvCell(p, c))).join(","))];
-  return lines.join("\r\n") + "\r\n";
+  return writeCsv(
+    csvColumns,
+    rows.map((p) => csvColumns.map((c) => csvCell(p, c))),
+    "\r\n",
+  );
 }
 
 export type DesignExport = {
@@ -88,16 +92,8 @@ export const designImportSchema = z.object(
   {
     format: z.literal(EXPORT_FORMAT, { error: `format: expected "${EXPORT_FORMAT}" (a file exported from a design)` }),
     version: z.literal(EXPORT_VERSION, { error: `version: this build reads version ${EXPORT_VERSION} files` }),
-    name: z
-      .string({ error: "name: expected text" })
-      .trim()
-      .min(1, { error: "name: give the design a name" })
-      .max(200, { error: "name: at most 200 characters" }),
-    project: z
-      .string({ error: "project: expected text" })
-      .trim()
-      .max(200, { error: "project: at most 200 characters" })
-      .nullish(),
+    name: textField({ label: "name", min: 1, minMessage: "name: give the design a name", max: 200 }),
+    project: textField({ label: "project", max: 200 }).nullish(),
     requirement: z.record(z.string(), z.unknown(), { error: "requirement: expected an object" }),
     choice: choiceSchema,
   },

@@ -5,7 +5,8 @@ import type { DesignView } from "@/lib/design-view";
 import { sheetFonts } from "./font";
 import { BuildSheetDocument, PLANNED_PAGES, type SheetMeta } from "./pdf/document";
 import { FONT } from "./pdf/theme";
-import { sheetData, type SheetData } from "./sheet-data";
+import { oneLine } from "@/lib/text-field";
+import { namesOnOneLine, sheetData, type SheetData } from "./sheet-data";
 
 function registerFonts() {
   // Asked of react-pdf itself: a module reload in development gives it a fresh, empty registry.
@@ -37,6 +38,8 @@ export async function renderBuildSheet(view: DesignView, opts: SheetMeta): Promi
 /** The same, from sheet data already worked out (tests feed it oversized data). */
 export async function renderSheet(view: DesignView, data: SheetData, opts: SheetMeta): Promise<Buffer> {
   registerFonts();
+  view = namesOnOneLine(view);
+  opts = { ...opts, team: oneLine(opts.team) };
   // Page numbers written in advance spare react-pdf a second layout of every page; if some
   // page's content overflowed (a very long name, say), the count is off, so lay it out again
   // with numbers the layout works out.

@@ -12,6 +12,7 @@ import {
   type Requirement,
 } from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
+import { oneLine } from "@/lib/text-field";
 import * as f from "./format";
 import { kelvinAdvice, partsList, readoutText, type Part } from "./parts";
 
@@ -32,6 +33,20 @@ export type SheetData = {
   cautions: string[];
   metrics: CandidateDetail;
 };
+
+/**
+ * The view with every name on one line (design, project, author, approver): a name holding a line
+ * break could otherwise print a line of its own on the sheet, such as a fake "APPROVED by …".
+ */
+export function namesOnOneLine<V extends Pick<DesignView, "name" | "project" | "authorName" | "approval">>(view: V): V {
+  return {
+    ...view,
+    name: oneLine(view.name),
+    project: view.project === null ? null : oneLine(view.project),
+    authorName: oneLine(view.authorName),
+    approval: view.approval ? { ...view.approval, byName: oneLine(view.approval.byName) } : view.approval,
+  };
+}
 
 /** Above this common-mode voltage the isolation caution leads (a DC touch-safety limit often quoted as 60 V; common practice, from memory). */
 export const HAZARDOUS_VOLTAGE_V = 60;

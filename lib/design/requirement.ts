@@ -4,7 +4,7 @@
 import { z } from "zod";
 import { isSeriesName, seriesNames, seriesValues, type SeriesName } from "./eseries";
 import { commonFixedGains, resistorPairGains, type GainSet } from "./gains";
-import { quantity } from "./units";
+import { parsePercent, quantity } from "./units";
 
 export const loadModels = ["constant-current", "resistive", "constant-power"] as const;
 export type LoadModel = (typeof loadModels)[number];
@@ -116,13 +116,12 @@ const baseSchema = z.object(
         percent: z
           .union([z.number(), z.string()])
           .transform((v, ctx) => {
-            if (typeof v === "number") return v;
-            const m = /^\s*([+-]?\d*\.?\d+(?:e[+-]?\d+)?)\s*%?\s*$/i.exec(v);
-            if (!m) {
-              ctx.addIssue({ code: "custom", message: `Accuracy target: cannot read "${v}" as a percentage` });
+            const r = parsePercent(v, "Accuracy target");
+            if (!r.ok) {
+              ctx.addIssue({ code: "custom", message: r.message });
               return z.NEVER;
             }
-            return Number(m[1]);
+            return r.value;
           })
           .check(
             z.superRefine((v: number, ctx) => {
@@ -169,7 +168,7 @@ const baseSchema = z.object(
           .nullable()
           .default(null),
         ratedRise: q(
-          "temperature",
+          "temperatureRise",
           "Temperature rise at full rating",
           positive("Temperature rise at full rating"),
         ).default(85),

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { formatPercent, formatSI, parseQuantity, roundSig } from "./units";
+import { parseRequirement } from "./requirement";
+import { MAX_QUANTITY_CHARS, formatPercent, formatSI, parsePercent, parseQuantity, roundSig } from "./units";
 
 const value = (input: number | string, dim: Parameters<typeof parseQuantity>[1]) => {
   const r = parseQuantity(input, dim);
@@ -59,6 +60,108 @@ describe("parseQuantity", () => {
     expect(parseQuantity("Infinity", "current").ok).toBe(false);
     expect(parseQuantity("lots", "current").ok).toBe(false);
     expect(parseQuantity("", "current").ok).toBe(false);
+  });
+});
+
+/** The fastest of `runs` timings of `fn` repeated `reps` times (the minimum is the least noisy). */
+function fastest(fn: () => unknown, reps = 20, runs = 5): number {
+  let best = Infinity;
+  for (let r = 0; r < runs; r++) {
+    const start = performance.now();
+    for (let k = 0; k < reps; k++) fn();
+    best = Math.min(best, performance.now() - start);
+  }
+  return best;
+}
+
+describe("parseQuantity on hostile text (issue 10, item 1)", () => {
+  it(`refuses text over ${MAX_QUANTITY_CHARS} characters before reading it`, () => {
+    const r = parseQuantity("1".repeat(100_000) + "x", "current", "Maximum current");
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.message).toMatch(/^Maximum current: at most 64 characters \(this is 100001\)/);
+    // 64 characters of an honest number still read.
+    expect(value(`0.${"1".repeat(62)}`, "current")).toBeCloseTo(0.111111111111, 12);
+  });
+
+  it("40,000 digits and an x cost about what a short refusal does (a ratio, not a time)", () => {
+    const long = "1".repeat(40_000) + "x";
+    const short = "1x";
+    for (const dim of ["current", "fraction", "noiseDensity"] as const) {
+      const ratio =
+        fastest(() => parseQuantity(long, dim)) /
+        Math.max(
+          fastest(() => parseQuantity(short, dim)),
+          1e-3,
+        );
+      // Linear or better: a quadratic regex made this ratio tens of thousands.
+      expect(ratio, dim).toBeLessThan(20);
+    }
+  });
+
+  it('refuses "1e999" and other text that reads as infinity (item 9)', () => {
+    for (const text of ["1e999", "-1e999", "1e999 %", "1e999 mA", "1e400 ppm/K"]) {
+      const dim = text.includes("ppm") ? "tempco" : text.includes("%") ? "fraction" : "current";
+      const r = parseQuantity(text, dim, "Field");
+      expect(r.ok, text).toBe(false);
+      if (!r.ok) expect(r.message, text).toMatch(/^Field: .*not a finite/);
+    }
+  });
+});
+
+describe("parsing slips (issue 11, item 9)", () => {
+  // A kelvin and a degree Celsius are the same size, so a rise of 85 K is a rise of 85 °C
+  // (SI Brochure, 9th ed., on the degree Celsius: a temperature difference may be expressed in
+  // either unit; section from memory).
+  it.each([
+    ["85 K", 85],
+    ["85 degC", 85],
+    ["85 °C", 85],
+    [85, 85],
+    ["40", 40],
+  ] as const)("a temperature rise %s is %d K", (input, expected) => {
+    expect(value(input, "temperatureRise")).toBe(expected);
+  });
+
+  it("a rise in °F is refused with a message rather than read with its offset", () => {
+    const r = parseQuantity("150 degF", "temperatureRise", "Temperature rise at full rating");
+    expect(r.ok).toBe(false);
+  });
+
+  it("an absolute temperature still reads 300 K as 26.85 °C", () => {
+    expect(value("300 K", "temperature")).toBe(26.85);
+  });
+
+  it("percent and fraction fields read a signed value the same way; a bare one by the field's name", () => {
+    const percent = (v: number | string) => {
+      const r = parsePercent(v);
+      if (!r.ok) throw new Error(r.message);
+      return r.value;
+    };
+    // "2 %" is 2 % in both (accuracy.percent holds percent, drop.fraction a ratio).
+    expect(percent("2 %")).toBe(2);
+    expect(value("2 %", "fraction")).toBe(0.02);
+    expect(percent("20000 ppm")).toBe(2);
+    // Bare: the unit is the one in the field's name (API.md's rule for every field).
+    expect(percent(2)).toBe(2);
+    expect(percent("0.5")).toBe(0.5);
+    expect(value(0.02, "fraction")).toBe(0.02);
+    expect(parsePercent("2 mA").ok).toBe(false);
+  });
+
+  it('the requirement reads ratedRise 85 K as a rise and accuracy "2 %" as 2', () => {
+    const base = { current: { min: "2 mA", max: "180 mA" }, supply: { voltage: "3 V" } };
+    const r = parseRequirement({ ...base, shunt: { ratedRise: "85 K" }, accuracy: { percent: "2 %" } });
+    expect(r.ok).toBe(true);
+    if (r.ok) {
+      expect(r.requirement.shunt.ratedRise).toBe(85);
+      expect(r.requirement.accuracy.percent).toBe(2);
+    }
+    const fraction = parseRequirement({ ...base, drop: { fraction: "2 %" }, accuracy: { percent: 2 } });
+    expect(fraction.ok).toBe(true);
+    if (fraction.ok) {
+      expect(fraction.requirement.drop.fraction).toBe(0.02);
+      expect(fraction.requirement.accuracy.percent).toBe(2);
+    }
   });
 });
 

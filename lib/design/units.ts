@@ -21,6 +21,8 @@ export type Dimension =
   | "power"
   | "time"
   | "temperature"
+  /** A temperature difference (a rise): "85 K" and "85 degC" are both 85. */
+  | "temperatureRise"
   | "frequency"
   | "charge"
   | "fraction"
@@ -38,6 +40,7 @@ const referenceUnit: Record<Dimension, string | null> = {
   power: "W",
   time: "s",
   temperature: "K",
+  temperatureRise: "K",
   frequency: "Hz",
   charge: "C",
   fraction: null,
@@ -55,6 +58,7 @@ const dimensionWords: Record<Dimension, string> = {
   power: "a power",
   time: "a time",
   temperature: "a temperature",
+  temperatureRise: "a temperature difference",
   frequency: "a frequency",
   charge: "a charge",
   fraction: "a plain ratio or percentage",
@@ -97,21 +101,30 @@ export function roundSig(value: number, digits = 12): number {
   return Number(value.toPrecision(digits));
 }
 
+/**
+ * The longest quantity text read: "-12.345678e-12 mV/rtHz" is 22 characters, so 64 leaves room
+ * for any honest entry while keeping every regex and mathjs call below on short input.
+ */
+export const MAX_QUANTITY_CHARS = 64;
+
 /** Spellings engineers type that mathjs does not know, rewritten to ones it does. */
 function normalizeText(text: string): string {
   return text
     .trim()
+    .replace(/\s+/g, " ")
     .replace(/[\u00b5\u03bc]/g, "u") // micro sign and Greek mu
     .replace(/[\u03a9\u2126]/g, "ohm") // Greek capital omega and ohm sign
     .replace(/Ohm/g, "ohm")
-    .replace(/\u00b0\s*C/g, "degC")
-    .replace(/\/\s*(?:\u221a|rt|sqrt\s*)\(?\s*Hz\s*\)?/g, "/Hz^0.5")
-    .replace(/\s+/g, " ");
+    .replace(/\u00b0 ?C/g, "degC")
+    .replace(/\/ ?(?:\u221a|rt|sqrt ?)\(? ?Hz ?\)?/g, "/Hz^0.5");
 }
 
 export type ParseResult = { ok: true; value: number } | { ok: false; message: string };
 
-const plainNumber = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
+// Each regex below has one way to match any text (no nested or adjacent repeats of the same
+// characters), so it runs in time linear in the input, which the length cap keeps short anyway.
+const plainNumber = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
+const ratioText = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?) ?(%|ppm)(?: ?\/ ?(K|degC))?$/i;
 
 /**
  * Parse a number (already SI) or a unit string into an SI number of the wanted dimension.
@@ -125,17 +138,29 @@ export function parseQuantity(input: number | string, dim: Dimension, label?: st
   }
   if (typeof input !== "string")
     return { ok: false, message: `${prefix}expected a number or a quantity such as "150 mA"` };
+  // Refused before any regex or mathjs sees it (issue 10: a long string must not stall the server).
+  if (input.length > MAX_QUANTITY_CHARS)
+    return {
+      ok: false,
+      message: `${prefix}at most ${MAX_QUANTITY_CHARS} characters (this is ${input.length}); write a number with its unit, e.g. ${example(dim)}`,
+    };
   const raw = input.trim();
   if (raw === "") return { ok: false, message: `${prefix}a value is required` };
   const text = normalizeText(raw);
-  if (plainNumber.test(text)) return { ok: true, value: Number(text) };
+  if (plainNumber.test(text)) {
+    const value = Number(text);
+    // "1e999" reads as Infinity: refused like the number itself.
+    if (!Number.isFinite(value)) return { ok: false, message: `${prefix}${raw} is not a finite number` };
+    return { ok: true, value };
+  }
 
   // Ratios: percent and parts per million, optionally per kelvin for tempcos.
-  const ratio = /^([+-]?(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?)\s*(%|ppm)(?:\s*\/\s*(K|degC))?$/i.exec(text);
+  const ratio = ratioText.exec(text);
   if (ratio) {
     const scale = ratio[2] === "%" ? 1e-2 : 1e-6;
     const perKelvin = ratio[3] !== undefined;
     const value = roundSig(Number(ratio[1]) * scale);
+    if (!Number.isFinite(value)) return { ok: false, message: `${prefix}${raw} is not a finite number` };
     if (dim === "fraction" && !perKelvin) return { ok: true, value };
     if (dim === "tempco" && (perKelvin || ratio[2] === "ppm")) return { ok: true, value };
     return {
@@ -143,8 +168,15 @@ export function parseQuantity(input: number | string, dim: Dimension, label?: st
       message: `${prefix}${raw} is ${perKelvin ? "a temperature coefficient" : "a ratio"}, not ${dimensionWords[dim]}`,
     };
   }
-  // A drift per degree Celsius is the same per kelvin.
-  const unitText = dim === "temperature" ? text : text.replace(/\/\s*degC/g, "/K");
+  // A drift per degree Celsius is the same per kelvin; so is a rise of one degree Celsius.
+  const unitText =
+    dim === "temperature"
+      ? text
+      : dim === "temperatureRise"
+        ? text.replace(/degC$/, "K")
+        : text.replace(/\/ ?degC/g, "/K");
+  if (dim === "temperatureRise" && /deg[FR]/.test(unitText))
+    return { ok: false, message: `${prefix}write a temperature difference in K or °C (e.g. ${example(dim)})` };
   let parsed: Unit;
   try {
     parsed = mathUnit(unitText);
@@ -179,6 +211,18 @@ export function parseQuantity(input: number | string, dim: Dimension, label?: st
   return { ok: true, value };
 }
 
+/**
+ * A field whose name says "percent" (accuracy.percent): a bare number, or text holding only a
+ * number, is in percent as the name says ("2" is 2 %); text with a sign reads as in any ratio
+ * field ("2 %", "20000 ppm"), so "2 %" means the same here and in drop.fraction. DEFAULTS.md.
+ */
+export function parsePercent(input: number | string, label?: string): ParseResult {
+  const r = parseQuantity(input, "fraction", label);
+  if (!r.ok) return r;
+  if (typeof input === "number" || plainNumber.test(normalizeText(input))) return r;
+  return { ok: true, value: roundSig(r.value * 100) };
+}
+
 function example(dim: Dimension): string {
   const examples: Record<Dimension, string> = {
     current: '"150 mA"',
@@ -187,6 +231,7 @@ function example(dim: Dimension): string {
     power: '"0.25 W"',
     time: '"10 us"',
     temperature: '"85 degC"',
+    temperatureRise: '"85 K"',
     frequency: '"10 kHz"',
     charge: '"1 mC"',
     fraction: '"1 %"',

@@ -1,8 +1,8 @@
 // Library CSV, in and out. Export writes the API's field names (SI, unit in the name) so an exported
 // file imports back unchanged; import also takes plain names with a unit in the header
 // ("offset [uV]") or in the cell ("10 uV"). The same refusals as profiles: row, line and column named.
-import Papa from "papaparse";
 import type { z } from "zod";
+import { unneutralise, writeCsv, type CsvCell } from "@/lib/csv-write";
 import { parseQuantity, type Dimension } from "@/lib/design";
 import {
   CsvRefusal,
@@ -150,7 +150,7 @@ function readCell(col: HeaderColumn, raw: string): CellResult {
   const { cell } = col.spec;
   switch (cell) {
     case "text":
-      return { ok: true, value: raw.trim() };
+      return { ok: true, value: unneutralise(raw.trim()) };
     case "number":
       return readNumberCell(raw);
     case "bool": {
@@ -248,15 +248,22 @@ export function parseLibraryCsv(
   };
 }
 
-function cellText(value: unknown): string {
+function cellValue(value: unknown): CsvCell {
   if (Array.isArray(value)) return value.map((v) => String(v)).join(";");
   if (typeof value === "boolean") return value ? "yes" : "no";
-  return String(value);
+  if (typeof value === "number") return value;
+  return value === undefined || value === null ? "" : String(value);
 }
 
-/** CSV of the parts with the API's field names as the header (SI, unit in the name). */
+/**
+ * CSV of the parts with the API's field names as the header (SI, unit in the name). Text cells
+ * that a spreadsheet would run as a formula get a leading apostrophe (writeCsv); import drops it.
+ */
 export function libraryToCsv(kind: PartKind, parts: readonly Record<string, unknown>[]): string {
   const columns = columnsOf[kind].map((c) => c.key);
-  const data = parts.map((p) => columns.map((k) => cellText(p[k])));
-  return `${Papa.unparse({ fields: columns, data }, { newline: "\n" })}\n`;
+  return writeCsv(
+    columns,
+    parts.map((p) => columns.map((k) => cellValue(p[k]))),
+    "\n",
+  );
 }

@@ -2,6 +2,7 @@
 // Quantities may be SI numbers or unit strings ("10 uV", "2 MHz"), as everywhere in the API.
 import { z } from "zod";
 import { isSeriesName, quantity, seriesNames, type Dimension } from "@/lib/design";
+import { textField } from "@/lib/text-field";
 
 export const gainModes = ["fixed", "resistor-set"] as const;
 export type GainMode = (typeof gainModes)[number];
@@ -26,11 +27,7 @@ const fractionBelowHalf = (label: string) =>
     }),
   );
 
-const partName = z
-  .string({ error: "Name: expected text" })
-  .trim()
-  .min(1, { error: "Name is required" })
-  .max(120, { error: "Name must be at most 120 characters" });
+const partName = textField({ label: "Name", min: 1, minMessage: "Name is required", max: 120 });
 
 export const amplifierObject = z.object({
   name: partName,
@@ -103,11 +100,9 @@ export type AmplifierValues = z.output<typeof amplifierInput>;
 
 export const shuntObject = z.object({
   name: partName,
-  series: z
-    .string({ error: "Series: expected a series name such as E96" })
-    .refine(isSeriesName, {
-      error: (iss) => `Series: unknown series "${String(iss.input)}"; use one of ${seriesNames.join(", ")}`,
-    }),
+  series: z.string({ error: "Series: expected a series name such as E96" }).refine(isSeriesName, {
+    error: (iss) => `Series: unknown series "${String(iss.input)}"; use one of ${seriesNames.join(", ")}`,
+  }),
   minOhms: positive("resistance", "Smallest value"),
   maxOhms: positive("resistance", "Largest value"),
   toleranceFraction: fractionBelowHalf("Tolerance"),

@@ -43,16 +43,30 @@ function describePlace({ row, line, column }: CsvPlace): string {
   return parts.length ? `${parts.join(", ")}: ` : "";
 }
 
-const numberText = /^[+-]?(\d+\.?\d*|\.\d+)(e[+-]?\d+)?$/i;
-const notFinite = /^[+-]?(nan|inf|infinity|∞)$/i;
+// One way to match any text (no adjacent repeats that can trade characters), so linear time.
+const numberText = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?$/i;
+const notFinite = /^[+-]?(?:nan|inf|infinity|∞)$/i;
+const decimalComma = /^[+-]?\d+,\d+$/;
+
+/** The longest number cell read (issue 10): far more digits than a double holds, and no regex sees more. */
+export const MAX_NUMBER_CELL_CHARS = 64;
+/** The longest header cell: a column name with its unit. */
+export const MAX_HEADER_CELL_CHARS = 200;
+/** The longest data cell of any kind (a list of ratings, a part name). */
+export const MAX_DATA_CELL_CHARS = 1000;
 
 /** A cell as a finite number, or the reason it is not one. */
 export function readNumberCell(raw: string): { ok: true; value: number } | { ok: false; reason: string } {
+  if (raw.length > MAX_NUMBER_CELL_CHARS)
+    return {
+      ok: false,
+      reason: `the cell has ${raw.length} characters; a number takes at most ${MAX_NUMBER_CELL_CHARS}`,
+    };
   const text = raw.trim();
   if (text === "") return { ok: false, reason: "the cell is empty; expected a number" };
   if (notFinite.test(text))
     return { ok: false, reason: `"${text}" is not a finite number (NaN and infinity are refused)` };
-  if (/^[+-]?\d+,\d+$/.test(text))
+  if (decimalComma.test(text))
     return { ok: false, reason: `"${text}" is not a number (write decimals with a point: ${text.replace(",", ".")})` };
   if (!numberText.test(text)) return { ok: false, reason: `"${truncate(text)}" is not a number` };
   const value = Number(text);
@@ -87,12 +101,20 @@ export class LineCounter {
   }
 }
 
-/** `Time (ms)` → { name: "Time", unit: "ms" }; `current [uA]` → { name: "current", unit: "uA" }. */
+/**
+ * `Time (ms)` → { name: "Time", unit: "ms" }; `current [uA]` → { name: "current", unit: "uA" }.
+ * Read by hand from the end (no regex), so a long header cannot cost more than one pass.
+ */
 export function splitHeaderUnit(cell: string): { name: string; unit: string | null } {
   const text = cell.trim().replace(/^\uFEFF/, "");
-  const m = /^(.*?)\s*(?:\(([^()]*)\)|\[([^[\]]*)\])\s*$/.exec(text);
-  if (!m) return { name: text, unit: null };
-  return { name: (m[1] ?? "").trim(), unit: (m[2] ?? m[3] ?? "").trim() };
+  const close = text.at(-1);
+  const open = close === ")" ? "(" : close === "]" ? "[" : null;
+  if (!open || !close) return { name: text, unit: null };
+  const start = text.lastIndexOf(open, text.length - 2);
+  const unit = start === -1 ? null : text.slice(start + 1, -1);
+  // The unit holds no bracket of its own kind: "a (b (c))" is a name, not a unit.
+  if (unit === null || unit.includes(close)) return { name: text, unit: null };
+  return { name: text.slice(0, start).trim(), unit: unit.trim() };
 }
 
 /** How many SI base units one of `unit` is, through the engine's quantity parser. */
@@ -171,6 +193,7 @@ export function walkCsv(
   const lines = new LineCounter(text);
   let refusal = null as CsvRefusal | null;
   let sawHeader = false;
+  let header: string[] = [];
   let row = 0;
   Papa.parse<string[]>(text, {
     comments: "#",
@@ -195,9 +218,27 @@ export function walkCsv(
       if (cells.length === 0 || (cells.length === 1 && (cells[0] ?? "").trim() === "")) return; // blank line
       if (!sawHeader) {
         sawHeader = true;
+        header = cells;
+        const long = cells.findIndex((c) => c.length > MAX_HEADER_CELL_CHARS);
+        if (long !== -1)
+          return stop(
+            new CsvRefusal(
+              `the header cell has ${cells[long]!.length} characters; a column name with its unit takes at most ${MAX_HEADER_CELL_CHARS}`,
+              { line, column: `column ${long + 1}` },
+            ),
+          );
         return stop(visit.header(cells, line));
       }
       row += 1;
+      const long = cells.findIndex((c) => c.length > MAX_DATA_CELL_CHARS);
+      if (long !== -1)
+        return stop(
+          new CsvRefusal(`the cell has ${cells[long]!.length} characters; at most ${MAX_DATA_CELL_CHARS} are read`, {
+            row,
+            line,
+            column: truncate((header[long] ?? "").trim()) || `column ${long + 1}`,
+          }),
+        );
       stop(visit.row(cells, row, line));
     },
   });

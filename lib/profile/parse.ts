@@ -87,6 +87,7 @@ export function parseProfileCsv(text: string): ParseOutcome {
   const currents = new Float64Builder();
   let header = null as { time: Column; current: Column } | null;
   let width = 0;
+  let charge = 0;
 
   const walk = walkCsv(text, {
     header(cells, line) {
@@ -126,6 +127,16 @@ export function parseProfileCsv(text: string): ParseOutcome {
           },
         );
       }
+      // The summary's charge is this trapezoid sum: refuse the row where it stops being finite.
+      if (times.length > 0) {
+        charge += ((currents.last() + iA) / 2) * (tS - times.last());
+        if (!Number.isFinite(charge))
+          return new CsvRefusal("the charge up to this row is too large to be a finite number of coulombs", {
+            row,
+            line,
+            column: header.current.label,
+          });
+      }
       times.push(tS);
       currents.push(iA);
     },
@@ -151,4 +162,14 @@ export function parseProfileCsv(text: string): ParseOutcome {
       columns: { time: h.time.label, current: h.current.label },
     },
   };
+}
+
+/**
+ * The first figure of a summary that is not a finite number (a recording of 1e308 A gives an
+ * infinite burden on a real shunt), or null when all are: such a profile is refused, not stored.
+ */
+export function nonFiniteFigure(summary: Record<string, unknown>): string | null {
+  for (const [key, value] of Object.entries(summary))
+    if (typeof value === "number" && !Number.isFinite(value)) return key;
+  return null;
 }

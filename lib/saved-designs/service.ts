@@ -14,22 +14,15 @@ import {
   type Requirement,
 } from "@/lib/design";
 import { HttpError, type FieldErrors } from "@/lib/http";
+import { textField } from "@/lib/text-field";
 
 export const choiceSchema = z.object({
   shuntOhms: quantity("resistance", "Shunt"),
   gain: z.number({ error: "Gain: expected a number" }).positive({ error: "Gain must be above zero" }),
 });
 
-const nameSchema = z
-  .string({ error: "Name: expected text" })
-  .trim()
-  .min(1, { error: "Give the design a name" })
-  .max(200, { error: "Name: at most 200 characters" });
-const projectSchema = z
-  .string({ error: "Project: expected text" })
-  .trim()
-  .max(200, { error: "Project: at most 200 characters" })
-  .nullish();
+const nameSchema = textField({ label: "Name", min: 1, minMessage: "Give the design a name", max: 200 });
+const projectSchema = textField({ label: "Project", max: 200 }).nullish();
 
 export const createDesignSchema = z.object({
   name: nameSchema,

@@ -20,7 +20,7 @@ type Method = "GET" | "POST" | "PATCH" | "DELETE";
 type Cell = {
   path: string;
   data?: unknown;
-  multipart?: Record<string, { name: string; mimeType: string; buffer: Buffer }>;
+  multipart?: Record<string, string | { name: string; mimeType: string; buffer: Buffer }>;
 };
 type Row = {
   name: string;
@@ -31,7 +31,7 @@ type Row = {
 };
 
 let c: Contexts;
-const f = { draft: "", approved: "", approvedB: "", reviewerId: "", makerId: "" };
+const f = { draft: "", approved: "", approvedB: "", reviewerId: "", makerId: "", amplifierId: "", shuntId: "" };
 const NO_SUCH = "00000000-0000-4000-8000-000000000000";
 
 const fixed = (path: string, data?: unknown) => async (): Promise<Cell> => ({ path, data });
@@ -100,6 +100,50 @@ const csv = {
     buffer: Buffer.from("time (s),current (A)\n0,0.01\n0.001,0.02\n0.002,0.015\n"),
   },
 };
+
+const amplifierBody = (name: string) => ({
+  name,
+  gainMode: "fixed",
+  gains: [20, 50],
+  offsetV: "25 uV",
+  offsetDriftVPerK: "0.1 uV/K",
+  gainErrorFraction: "0.2 %",
+  gainDriftPerK: "10 ppm/K",
+  biasCurrentA: "15 nA",
+  noiseDensityVPerRtHz: "35 nV/rtHz",
+  gbwHz: "500 kHz",
+  swingLowV: "10 mV",
+  swingHighV: "30 mV",
+  cmrrDb: 105,
+  supplyMinV: "2.7 V",
+  supplyMaxV: "5.5 V",
+});
+const shuntBody = (name: string) => ({
+  name,
+  series: "E24",
+  minOhms: "1 mohm",
+  maxOhms: "100 mohm",
+  toleranceFraction: "1 %",
+  tempcoPerK: "50 ppm/K",
+  ratingsW: ["0.5 W", "1 W"],
+  fourTerminal: false,
+});
+const shuntCsv = (name: string) => ({
+  kind: "shunts",
+  file: {
+    name: "shunts.csv",
+    mimeType: "text/csv",
+    buffer: Buffer.from(
+      `name,series,minOhms,maxOhms,toleranceFraction,tempcoPerK,ratingsW,fourTerminal\n${name},E24,0.001,0.1,0.01,0.00005,0.5;1,no\n`,
+    ),
+  },
+});
+/** A profile the designer uploads to the Harbourline draft, for one caller to try to delete. */
+async function freshProfile(): Promise<string> {
+  const res = await c.designer.post(`/api/designs/${f.draft}/profiles`, { multipart: csv });
+  expect(res.status(), await res.text()).toBe(201);
+  return ((await res.json()) as { id: string }).id;
+}
 
 const routes: Row[] = [
   { name: "GET /api/health", method: "GET", setup: fixed("/api/health"), expect: { ...members(200), anon: 200 } },
@@ -338,6 +382,42 @@ const routes: Row[] = [
     expect: members(200),
   },
   {
+    name: "POST /api/library/amplifiers",
+    method: "POST",
+    setup: async (who) => ({ path: "/api/library/amplifiers", data: amplifierBody(`Matrix amp ${who} ${unique()}`) }),
+    expect: editors(201),
+  },
+  {
+    name: "PATCH /api/library/amplifiers/[id]",
+    method: "PATCH",
+    setup: async () => ({ path: `/api/library/amplifiers/${f.amplifierId}`, data: { gbwHz: "600 kHz" } }),
+    expect: editors(200, 404),
+  },
+  {
+    name: "POST /api/library/shunts",
+    method: "POST",
+    setup: async (who) => ({ path: "/api/library/shunts", data: shuntBody(`Matrix shunt ${who} ${unique()}`) }),
+    expect: editors(201),
+  },
+  {
+    name: "PATCH /api/library/shunts/[id]",
+    method: "PATCH",
+    setup: async () => ({ path: `/api/library/shunts/${f.shuntId}`, data: { tempcoPerK: "75 ppm/K" } }),
+    expect: editors(200, 404),
+  },
+  {
+    name: "POST /api/library/import",
+    method: "POST",
+    setup: async (who) => ({ path: "/api/library/import", multipart: shuntCsv(`Matrix import ${who} ${unique()}`) }),
+    expect: editors(200),
+  },
+  {
+    name: "DELETE /api/designs/[draft]/profiles/[id] (uploaded by the designer)",
+    method: "DELETE",
+    setup: async () => ({ path: `/api/designs/${f.draft}/profiles/${await freshProfile()}` }),
+    expect: { anon: 401, owner: 200, designer: 200, reviewer: 403, maker: 404, outsider: 404 },
+  },
+  {
     name: "DELETE /api/library/amplifiers/[unknown]",
     method: "DELETE",
     setup: fixed(`/api/library/amplifiers/${NO_SUCH}`),
@@ -369,6 +449,12 @@ test.describe.serial("authorization matrix", () => {
     const team = (await (await c.owner.get("/api/team")).json()) as { members: { userId: string; email: string }[] };
     f.reviewerId = team.members.find((m) => m.email === "reviewer@harbourline.example")!.userId;
     f.makerId = team.members.find((m) => m.email === "maker@harbourline.example")!.userId;
+    const amp = await c.designer.post("/api/library/amplifiers", { data: amplifierBody(`Matrix amp ${unique()}`) });
+    expect(amp.status(), await amp.text()).toBe(201);
+    f.amplifierId = ((await amp.json()) as { id: string }).id;
+    const shunt = await c.designer.post("/api/library/shunts", { data: shuntBody(`Matrix shunt ${unique()}`) });
+    expect(shunt.status(), await shunt.text()).toBe(201);
+    f.shuntId = ((await shunt.json()) as { id: string }).id;
   });
 
   test.afterAll(async () => {

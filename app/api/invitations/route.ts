@@ -5,6 +5,7 @@ import { HttpError, json } from "@/lib/http";
 import { invitationPath, mailInvitation } from "@/lib/mail/invitation";
 import { linkTo } from "@/lib/mail/send";
 import { roleSchema } from "@/lib/team-schemas";
+import { textField } from "@/lib/text-field";
 
 const body = z
   .object({
@@ -14,12 +15,12 @@ const body = z
       .toLowerCase()
       .pipe(z.email({ error: "email: not an e-mail address" })),
     role: roleSchema.optional(),
-    newTeam: z
-      .string()
-      .trim()
-      .min(1, { error: "newTeam: give the new team a name" })
-      .max(120, { error: "newTeam: at most 120 characters" })
-      .optional(),
+    newTeam: textField({
+      label: "newTeam",
+      min: 1,
+      minMessage: "newTeam: give the new team a name",
+      max: 120,
+    }).optional(),
   })
   .superRefine((v, ctx) => {
     if (!v.newTeam && !v.role)

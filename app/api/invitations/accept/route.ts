@@ -1,16 +1,17 @@
 import { z } from "zod";
 import { acceptInvitation, findInvitationByToken } from "@/db/queries/invitations";
-import { currentCaller, parseWith, publicRoute } from "@/lib/auth/gate";
+import { currentCaller, parseWith, publicRoute, readJson } from "@/lib/auth/gate";
 import { hashPassword } from "@/lib/auth/password-hash";
 import { passwordProblems, PASSWORD_MAX_LENGTH } from "@/lib/auth/password-rules";
 import { HttpError, json } from "@/lib/http";
+import { textField } from "@/lib/text-field";
 
 const acceptSchema = z.object({
   token: z
     .string({ error: "token: the invitation link's code is missing" })
     .min(20, { error: "token: that is not an invitation code" })
     .max(200, { error: "token: that is not an invitation code" }),
-  name: z.string().trim().max(100, { error: "name: at most 100 characters" }).default(""),
+  name: textField({ label: "name", max: 100 }).default(""),
   // Only for a new account; an existing account joins by being signed in, never with a password.
   password: z
     .string()
@@ -24,14 +25,8 @@ const acceptSchema = z.object({
  * looked up before any password is hashed, and every refusal is audited.
  */
 export const POST = publicRoute(async (request) => {
-  const text = await request.text();
-  if (text.length > 100_000) throw new HttpError(413, "The request body is too large.");
-  let raw: unknown;
-  try {
-    raw = JSON.parse(text || "{}");
-  } catch {
-    throw new HttpError(422, "The request body is not valid JSON.", { "(body)": ["is not valid JSON"] });
-  }
+  // Streamed with the gate's limits and 415 rule: a chunked body is never read whole first.
+  const raw = await readJson(request);
   const body = parseWith(acceptSchema, raw);
   const caller = await currentCaller();
   const invitation = await findInvitationByToken(body.token);

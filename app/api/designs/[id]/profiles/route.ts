@@ -2,7 +2,7 @@ import { insertProfile, listProfiles } from "@/db/queries/profiles";
 import { apiRoute } from "@/lib/auth/gate";
 import { designViewFor } from "@/lib/saved-designs/access";
 import { json } from "@/lib/http";
-import { MAX_PROFILE_BYTES, parseProfileCsv, profileDesignOf, summarizeProfile } from "@/lib/profile";
+import { MAX_PROFILE_BYTES, nonFiniteFigure, parseProfileCsv, profileDesignOf, summarizeProfile } from "@/lib/profile";
 import { readCsvUpload } from "@/lib/read-upload";
 
 /** The design's stored profiles, newest first (members; makers for approved designs). */
@@ -27,6 +27,11 @@ export const POST = apiRoute(
     }
     const { timesS, currentsA } = parsed.series;
     const summary = summarizeProfile(timesS, currentsA, profileDesignOf(design));
+    const infinite = nonFiniteFigure(summary);
+    if (infinite) {
+      const message = `The recording's ${infinite} on this design is not a finite number (are the currents in amperes?). Nothing was stored.`;
+      return json({ message, fieldErrors: { file: [message] } }, 422);
+    }
     const { id } = await insertProfile({
       teamId: caller.teamId,
       designId: design.id,

@@ -7,15 +7,13 @@ import { HttpError, json } from "@/lib/http";
 import type { CandidateDetail } from "@/lib/design";
 import { designFor } from "@/lib/saved-designs/access";
 import { mailReviewed } from "@/lib/saved-designs/notify";
+import { textField } from "@/lib/text-field";
 
 const verdicts = verdictEnum.enumValues;
 const body = z
   .object({
     verdict: z.enum(verdicts, { error: `verdict must be one of: ${verdicts.join(", ")}` }),
-    body: z
-      .string({ error: "body: expected text" })
-      .max(10_000, { error: "body: at most 10000 characters" })
-      .default(""),
+    body: textField({ label: "body", max: 10_000, multiline: true }).default(""),
     parentId: z.uuid({ error: "parentId: expected the id of a comment on this design" }).nullish(),
     revision: z.number().int().min(1).optional(),
   })
