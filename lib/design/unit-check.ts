@@ -102,6 +102,23 @@ export function floorTolerance(req: Requirement): number {
   return Math.max(3 * m.lsbV, 0.5 * req.amplifier.swingLow, 1e-4);
 }
 
+/** y = slope·x + intercept by ordinary least squares, from the normal equations; null when x does not vary. */
+export function straightLine(xs: number[], ys: number[]): { slope: number; intercept: number } | null {
+  const n = xs.length;
+  if (n < 2) return null;
+  const mx = xs.reduce((s, x) => s + x, 0) / n;
+  const my = ys.reduce((s, y) => s + y, 0) / n;
+  let sxx = 0;
+  let sxy = 0;
+  xs.forEach((x, i) => {
+    sxx += (x - mx) ** 2;
+    sxy += (x - mx) * ((ys[i] as number) - my);
+  });
+  if (!(sxx > 0)) return null;
+  const slope = sxy / sxx;
+  return { slope, intercept: my - slope * mx };
+}
+
 /**
  * Ordinary least squares of expected on raw (two points: the line through both; one: gain only).
  * Closed form from the normal equations: gain = Sxy/Sxx, offset = ȳ − gain·x̄.
@@ -116,16 +133,12 @@ export function fitCalibration(points: { rawV: number; expectedV: number }[]): C
     gain = p.rawV !== 0 ? p.expectedV / p.rawV : 1;
     offsetV = 0;
   } else {
-    const mx = points.reduce((s, p) => s + p.rawV, 0) / n;
-    const my = points.reduce((s, p) => s + p.expectedV, 0) / n;
-    let sxx = 0;
-    let sxy = 0;
-    for (const p of points) {
-      sxx += (p.rawV - mx) ** 2;
-      sxy += (p.rawV - mx) * (p.expectedV - my);
-    }
-    gain = sxx > 0 ? sxy / sxx : 1;
-    offsetV = my - gain * mx;
+    const line = straightLine(
+      points.map((p) => p.rawV),
+      points.map((p) => p.expectedV),
+    );
+    gain = line?.slope ?? 1;
+    offsetV = line?.intercept ?? 0;
   }
   let residual = 0;
   for (const p of points) {
@@ -266,18 +279,12 @@ function patternOf(
   const best = fits.reduce((a, b) => (b.residual < a.residual ? b : a));
   const explained = total > 0 ? 1 - best.residual / total : 0;
   if (explained < 0.9) {
-    // e = a + b·I from the normal equations.
-    const n = rows.length;
-    const mx = rows.reduce((s, r) => s + r.currentA, 0) / n;
-    const my = rows.reduce((s, r) => s + r.errorV, 0) / n;
-    let sxx = 0;
-    let sxy = 0;
-    for (const r of rows) {
-      sxx += (r.currentA - mx) ** 2;
-      sxy += (r.currentA - mx) * (r.errorV - my);
-    }
-    const b = sxx > 0 ? sxy / sxx : 0;
-    const a = my - b * mx;
+    const line = straightLine(
+      rows.map((r) => r.currentA),
+      rows.map((r) => r.errorV),
+    );
+    const a = line?.intercept ?? 0;
+    const b = line?.slope ?? 0;
     return {
       kind: "mixed",
       text:
