@@ -4,6 +4,7 @@ import { sql } from "drizzle-orm";
 import {
   boolean,
   customType,
+  date,
   doublePrecision,
   index,
   integer,
@@ -259,6 +260,48 @@ export const libraryShunts = pgTable(
   (t) => [uniqueIndex("library_shunts_team_name").on(t.teamId, t.name)],
 );
 
+// Built units (the maker's loop): one row per unit built from an approved revision, its bench
+// readings in their own rows. Judgements are worked out by the engine on read, never stored.
+export const builtUnits = pgTable(
+  "built_units",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    designId: uuid("design_id")
+      .notNull()
+      .references(() => designs.id, { onDelete: "cascade" }),
+    // The approved revision the unit was built from (its bench check judges the readings).
+    revision: integer("revision").notNull(),
+    serial: text("serial").notNull(),
+    builtOn: date("built_on", { mode: "string" }).notNull(),
+    recordedBy: uuid("recorded_by")
+      .notNull()
+      .references(() => users.id),
+    createdAt: createdAt(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [
+    uniqueIndex("built_units_design_serial").on(t.designId, sql`lower(${t.serial})`),
+    index("built_units_design").on(t.designId),
+  ],
+);
+
+export const unitReadings = pgTable(
+  "unit_readings",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    unitId: uuid("unit_id")
+      .notNull()
+      .references(() => builtUnits.id, { onDelete: "cascade" }),
+    // Which range's bench check (0 on a single-pair design; one set per range on a plan).
+    rangeIndex: integer("range_index").notNull().default(0),
+    // The test point's place in that bench check.
+    pointIndex: integer("point_index").notNull(),
+    currentA: doublePrecision("current_a").notNull(),
+    outputV: doublePrecision("output_v").notNull(),
+  },
+  (t) => [uniqueIndex("unit_readings_unit_point").on(t.unitId, t.rangeIndex, t.pointIndex)],
+);
+
 export type User = typeof users.$inferSelect;
 export type Team = typeof teams.$inferSelect;
 export type Membership = typeof memberships.$inferSelect;
@@ -274,4 +317,6 @@ export type MailMessage = typeof mailMessages.$inferSelect;
 export type Profile = typeof profiles.$inferSelect;
 export type LibraryAmplifier = typeof libraryAmplifiers.$inferSelect;
 export type LibraryShunt = typeof libraryShunts.$inferSelect;
+export type BuiltUnit = typeof builtUnits.$inferSelect;
+export type UnitReadingRow = typeof unitReadings.$inferSelect;
 export const roles = roleEnum.enumValues;

@@ -1,5 +1,6 @@
 // The demo designs build through the design service with choices from the solver's front, and
-// land in the states the demo promises: one approved, one in review (after a return), one draft.
+// land in the states the demo promises: the logger approved, the pump controller approved at revision 2
+// after a return (and built: db/seed/units.ts), the bench adapter a draft.
 import { afterAll, describe, expect, it } from "vitest";
 import { evaluateCandidate, parseRequirement } from "@/lib/design";
 import { closeDb, getDb } from "../client";
@@ -11,14 +12,14 @@ import { seedDemoIfEmpty } from "./index";
 afterAll(closeDb);
 
 describe("demo designs", () => {
-  it("seed one approved, one in review at revision 2 and one draft, figures equal to the engine's", async () => {
+  it("seed two approved (the pump controller at revision 2, after a return) and one draft, figures equal to the engine's", async () => {
     expect(await seedDemoIfEmpty()).toBe(true);
     const db = await getDb();
     const [team] = await db.select().from(teams);
     const designs = await listDesigns(team!.id);
     expect(designs.map((d) => [d.project, d.status, d.revision]).sort()).toEqual([
       ["Bench adapter", "draft", 1],
-      ["Pump controller", "in-review", 2],
+      ["Pump controller", "approved", 2],
       ["Soil-moisture logger", "approved", 1],
     ]);
     for (const d of designs) {
@@ -38,6 +39,7 @@ describe("demo designs", () => {
     expect(verdicts).toEqual([
       [1, "return"],
       [1, "comment"],
+      [2, "approve"],
     ]);
     const [r1, r2] = await listRevisions(pump.id);
     expect(r2!.metrics.burdenV).toBeLessThan(r1!.metrics.burdenV);

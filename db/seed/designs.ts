@@ -23,6 +23,8 @@ type DemoDesign = {
   pick: (front: Candidate[]) => Candidate | undefined;
   revisedPick?: (front: Candidate[]) => Candidate | undefined;
   state: "draft" | "in-review" | "approved";
+  /** The reviewer's words when approving (the final revision). */
+  approvalNote?: string;
 };
 
 export const demoDesigns: DemoDesign[] = [
@@ -53,7 +55,9 @@ export const demoDesigns: DemoDesign[] = [
     pick: (front) => front[0],
     // Returned once (too much drop at 6 A), revised to the front's lowest-burden pair, submitted again.
     revisedPick: (front) => [...front].sort((a, b) => a.burdenV - b.burdenV)[0],
-    state: "in-review",
+    // Approved at revision 2 and built: twelve units recorded (db/seed/units.ts).
+    state: "approved",
+    approvalNote: "The drop at 6 A now leaves the motor its headroom; approved for a first batch of twelve.",
   },
   {
     name: "Meter adapter, 1 mV per µA",
@@ -114,8 +118,10 @@ export async function seedDemoDesigns(ids: DemoIds): Promise<void> {
         teamId: ids.teamId,
         actorId: ids.userIds.reviewer,
         verdict: "approve",
-        body: "Burden and error at the bottom of the burst range are within target; approved for the first build.",
-        revision: 1,
+        body:
+          d.approvalNote ??
+          "Burden and error at the bottom of the burst range are within target; approved for the first build.",
+        revision: d.revisedPick ? 2 : 1,
       });
       if (!approved.ok) throw new Error(`demo design "${d.name}": ${approved.message}`);
     }

@@ -2,6 +2,7 @@
 import { seedDemoDesigns } from "./designs";
 import { seedDemoLibrary } from "./library";
 import { isDatabaseEmpty, seedDemoTeam } from "./team";
+import { seedDemoUnits } from "./units";
 
 export { DEMO_ACCOUNTS, DEMO_PASSWORD, DEMO_TEAM, demoLoaded } from "./team";
 
@@ -11,5 +12,6 @@ export async function seedDemoIfEmpty(): Promise<boolean> {
   const ids = await seedDemoTeam();
   await seedDemoLibrary(ids);
   await seedDemoDesigns(ids);
+  await seedDemoUnits(ids);
   return true;
 }

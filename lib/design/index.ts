@@ -24,3 +24,6 @@ export * from "./insertion";
 export * from "./netlist";
 export * from "./monte-carlo";
 export { mulberry32 } from "./prng";
+export * from "./unit-check";
+export * from "./unit-prediction";
+export * from "./calibrated-accuracy";

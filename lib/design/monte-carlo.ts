@@ -1,6 +1,6 @@
 // Monte Carlo spread of the reading error for one pair: every part drawn uniformly within
 // its tolerance band, noise Gaussian, the output quantised and clipped as the readout sees it.
-import { buildModel, noiseRmsA, REFERENCE_C } from "./model";
+import { buildModel, type Model, noiseRmsA, REFERENCE_C } from "./model";
 import { shuntFigures } from "./pair";
 import { gaussian, mulberry32 } from "./prng";
 import type { Requirement } from "./requirement";
@@ -48,41 +48,68 @@ export function defaultMonteCarloCurrents(req: Requirement): number[] {
   return [...new Set(list)].sort((a, b) => a - b);
 }
 
+/** What a built unit deviates by from its drawing; the demo and the tests build faulty units with it. */
+export type UnitFault = {
+  /** The shunt actually fitted, Ω (a wrong value from the reel). */
+  shuntOhms?: number;
+  /** A fixed voltage added at the amplifier input, V (a sense-line fault, a leaky joint). */
+  inputOffsetV?: number;
+};
+
+/**
+ * One built unit: its parts and ambient drawn once from `rnd` (uniform within each tolerance band),
+ * then its output voltage at any current — noise Gaussian per reading, clipped to the amplifier's
+ * swing and the readout's full scale, quantised to one readout step.
+ */
+export function drawUnit(
+  req: Requirement,
+  m: Model,
+  choice: Choice,
+  rnd: () => number,
+  normal: () => number,
+  fault: UnitFault = {},
+): (currentA: number) => number {
+  const { shuntOhms: R, gain: G } = choice;
+  const fitted = fault.shuntOhms ?? R;
+  const theta = shuntFigures(m, fitted).theta;
+  const a = req.amplifier;
+  const s = req.shunt;
+  const noiseV = noiseRmsA(m, R, G) * R;
+  const u = (half: number) => (2 * rnd() - 1) * half;
+  const ambient = req.temperature.min + rnd() * (req.temperature.max - req.temperature.min);
+  const dT = ambient - REFERENCE_C;
+  const epsR = u(s.tolerance);
+  const alphaR = u(s.tempco);
+  const epsG = u(a.gainError);
+  const alphaG = u(a.gainDrift);
+  const vos = u(a.offset) + u(a.offsetDrift) * dT;
+  const ib = u(a.biasCurrent);
+  const cm = u(m.cmV);
+  const gainActual = G * (1 + epsG + alphaG * dT);
+  const extra = fault.inputOffsetV ?? 0;
+  return (I) => {
+    const dTs = I * I * fitted * theta;
+    const vShunt = I * fitted * (1 + epsR + alphaR * (dT + dTs));
+    const vIn = vShunt + vos + ib * fitted + cm + extra + normal() * noiseV;
+    const vOut = Math.min(m.outCeil, Math.max(a.swingLow, gainActual * vIn));
+    return Math.round(vOut / m.lsbV) * m.lsbV;
+  };
+}
+
 export function monteCarlo(req: Requirement, choice: Choice, opts: MonteCarloOptions = {}): MonteCarloResult {
   const draws = Math.max(1, Math.min(200_000, Math.floor(opts.draws ?? DEFAULT_DRAWS)));
   const seed = opts.seed ?? DEFAULT_SEED;
   const currents = opts.currentsA ?? defaultMonteCarloCurrents(req);
   const m = buildModel(req);
   const { shuntOhms: R, gain: G } = choice;
-  const theta = shuntFigures(m, R).theta;
-  const a = req.amplifier;
-  const s = req.shunt;
-  const noiseV = noiseRmsA(m, R, G) * R;
   const rnd = mulberry32(seed);
   const normal = gaussian(rnd);
-  const u = (half: number) => (2 * rnd() - 1) * half;
-  const floorV = a.swingLow;
-  const ceilV = m.outCeil;
   const errors = currents.map(() => new Float64Array(draws));
   for (let d = 0; d < draws; d++) {
     // One built unit: parts and ambient drawn once, then read at every current.
-    const ambient = req.temperature.min + rnd() * (req.temperature.max - req.temperature.min);
-    const dT = ambient - REFERENCE_C;
-    const epsR = u(s.tolerance);
-    const alphaR = u(s.tempco);
-    const epsG = u(a.gainError);
-    const alphaG = u(a.gainDrift);
-    const vos = u(a.offset) + u(a.offsetDrift) * dT;
-    const ib = u(a.biasCurrent);
-    const cm = u(m.cmV);
-    const gainActual = G * (1 + epsG + alphaG * dT);
+    const unit = drawUnit(req, m, choice, rnd, normal);
     currents.forEach((I, k) => {
-      const dTs = I * I * R * theta;
-      const vShunt = I * R * (1 + epsR + alphaR * (dT + dTs));
-      const vIn = vShunt + vos + ib * R + cm + normal() * noiseV;
-      const vOut = Math.min(ceilV, Math.max(floorV, gainActual * vIn));
-      const quantised = Math.round(vOut / m.lsbV) * m.lsbV;
-      const reading = quantised / (R * G);
+      const reading = unit(I) / (R * G);
       (errors[k] as Float64Array)[d] = (100 * (reading - I)) / I;
     });
   }

@@ -3,6 +3,7 @@ import { listReviews } from "@/db/queries/reviews";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
 import { designFor } from "@/lib/saved-designs/access";
+import { savedBenchCheck } from "@/lib/saved-designs/bench";
 import { changedFields } from "@/lib/saved-designs/diff";
 import { evaluateDesign, patchDesignSchema } from "@/lib/saved-designs/service";
 
@@ -19,6 +20,7 @@ export const GET = apiRoute({ doing: "open designs" }, async ({ caller, params }
     requirement: current.requirement,
     choice: current.choice,
     metrics: current.metrics,
+    benchCheck: savedBenchCheck(current.requirement, current.choice),
     authorId: current.authorId,
     authorName,
     createdAt: design.createdAt.toISOString(),

@@ -1,0 +1,96 @@
+// What a per-unit gain-and-offset calibration at the bench can and cannot remove from the error
+// budget, and the accuracy a calibrated unit can reach across the span.
+import { budgetSourceLabels, budgetTerms, logSpace, type BudgetSource } from "./error-budget";
+import { buildModel } from "./model";
+import type { Requirement } from "./requirement";
+import type { Choice } from "./types";
+
+/**
+ * Terms fixed once the unit is built and read at 25 °C on the bench at the operating common mode:
+ * a fitted gain and offset take them out. Everything that moves after calibration stays.
+ */
+export const removedByCalibration: readonly BudgetSource[] = [
+  "gainError",
+  "shuntTolerance",
+  "offset",
+  "biasCurrent",
+  "commonMode",
+];
+
+/** Why each remaining term survives calibration (shown beside it). */
+export const remainsBecause: Partial<Record<BudgetSource, string>> = {
+  shuntTempco: "drifts with ambient temperature, and self-heating grows as I³, which a straight-line fit cannot follow",
+  gainDrift: "drifts with ambient temperature after calibration",
+  offsetDrift: "drifts with ambient temperature after calibration",
+  readout: "quantisation: half a readout step on every reading",
+  noise: "random from reading to reading",
+};
+
+export type CalibratedAccuracy = {
+  removed: { source: BudgetSource; label: string }[];
+  remaining: { source: BudgetSource; label: string; why: string }[];
+  /** Worst-case error of a calibrated unit, % of reading, at the span's ends and over the accuracy band. */
+  atMinPercent: number;
+  atMaxPercent: number;
+  bandWorstPercent: number;
+  /** The same for an uncalibrated unit, for comparison. */
+  uncalibratedBandWorstPercent: number;
+  /** Lowest current at which a calibrated unit meets the accuracy target (null: nowhere in the span). */
+  lowestAccurateCurrentA: number | null;
+  curve: { currentA: number; calibratedPercent: number; uncalibratedPercent: number }[];
+};
+
+/** Worst-case (sum) error of a calibrated unit at current I, A: the budget without the removed terms. */
+export function calibratedErrorA(req: Requirement, choice: Choice, currentA: number): number {
+  const m = buildModel(req);
+  return budgetTerms(req, m, choice, currentA)
+    .filter((t) => !removedByCalibration.includes(t.source))
+    .reduce((s, t) => s + Math.abs(t.errorA), 0);
+}
+
+export function calibratedAccuracy(req: Requirement, choice: Choice, points = 80): CalibratedAccuracy {
+  const m = buildModel(req);
+  const at = (I: number) => {
+    const terms = budgetTerms(req, m, choice, I);
+    let all = 0;
+    let left = 0;
+    for (const t of terms) {
+      all += Math.abs(t.errorA);
+      if (!removedByCalibration.includes(t.source)) left += Math.abs(t.errorA);
+    }
+    return { calibratedPercent: (100 * left) / I, uncalibratedPercent: (100 * all) / I };
+  };
+  const curve = logSpace(req.current.min, req.current.max, points).map((I) => ({ currentA: I, ...at(I) }));
+  const band = logSpace(req.accuracy.bandMin, req.accuracy.bandMax, points).map(at);
+  // The calibrated ratio is still a + b·I² + c/I (convex in I): scan finely, then bisect the crossing.
+  const target = req.accuracy.percent;
+  let lowest: number | null = null;
+  const fine = logSpace(req.current.min, req.current.max, 400);
+  const firstOk = fine.findIndex((I) => at(I).calibratedPercent <= target);
+  if (firstOk === 0) lowest = req.current.min;
+  else if (firstOk > 0) {
+    let a = fine[firstOk - 1]!;
+    let b = fine[firstOk]!;
+    for (let k = 0; k < 60; k++) {
+      const mid = Math.sqrt(a * b);
+      if (at(mid).calibratedPercent <= target) b = mid;
+      else a = mid;
+    }
+    lowest = b;
+  }
+  const sources = Object.keys(budgetSourceLabels) as BudgetSource[];
+  return {
+    removed: sources
+      .filter((s) => removedByCalibration.includes(s))
+      .map((s) => ({ source: s, label: budgetSourceLabels[s] })),
+    remaining: sources
+      .filter((s) => !removedByCalibration.includes(s))
+      .map((s) => ({ source: s, label: budgetSourceLabels[s], why: remainsBecause[s] ?? "" })),
+    atMinPercent: at(req.current.min).calibratedPercent,
+    atMaxPercent: at(req.current.max).calibratedPercent,
+    bandWorstPercent: Math.max(...band.map((b) => b.calibratedPercent)),
+    uncalibratedBandWorstPercent: Math.max(...band.map((b) => b.uncalibratedPercent)),
+    lowestAccurateCurrentA: lowest,
+    curve,
+  };
+}
