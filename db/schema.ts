@@ -98,7 +98,14 @@ export const designs = pgTable(
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [index("designs_team").on(t.teamId)],
+  // The designs list pages by keyset on (updated_at desc, id desc) within a team, optionally one status.
+  (t) => [
+    index("designs_team").on(t.teamId),
+    // Ascending, read backwards: `order by updated_at desc, id desc` is NULLS FIRST, which an index
+    // declared DESC (NULLS LAST) would not serve.
+    index("designs_team_updated").on(t.teamId, t.updatedAt, t.id),
+    index("designs_team_status_updated").on(t.teamId, t.status, t.updatedAt, t.id),
+  ],
 );
 
 // Immutable: a save writes a new row, never updates one.

@@ -1,9 +1,12 @@
 #!/usr/bin/env node
 // `npm test`: unit and database tests (Vitest), a production build, then HTTP and browser tests
 // (Playwright, Debian's Chromium). Ends with one line: "N passed, N failed".
+// First it checks the system tools the suites need (scripts/system-tools.mjs): installs them when
+// root with apt-get, otherwise stops before running anything with the command to type.
 import { spawnSync } from "node:child_process";
 import fs from "node:fs";
 import path from "node:path";
+import { ensureSystemTools } from "./system-tools.mjs";
 
 const root = path.resolve(path.dirname(new URL(import.meta.url).pathname), "..");
 process.chdir(root);
@@ -16,6 +19,12 @@ const noBuild = args.includes("--no-build");
 const files = args.filter((a) => a !== "--no-build");
 
 const totals = { passed: 0, failed: 0, skipped: 0 };
+const suites = only ? [only] : ["unit", "e2e"];
+if (!ensureSystemTools(suites, { install: true, tag: "[test]" })) {
+  fs.writeFileSync(path.join(out, "totals.json"), JSON.stringify({ passed: 0, failed: 1, skipped: 0 }));
+  console.log("\n0 passed, 1 failed");
+  process.exit(1);
+}
 const run = (cmd, args, env = {}) =>
   spawnSync(cmd, args, { stdio: "inherit", env: { ...process.env, ...env } }).status ?? 1;
 

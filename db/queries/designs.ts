@@ -1,6 +1,6 @@
 // Designs and their immutable revisions. Every write is one transaction with its audit event;
 // an edit is a compare-and-set on designs.revision, so a stale edit writes nothing.
-import { and, asc, desc, eq, sql } from "drizzle-orm";
+import { and, asc, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { parseRequirement, type CandidateDetail, type Choice, type Requirement } from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
@@ -100,8 +100,78 @@ export async function listDesigns(teamId: string, opts: { approvedOnly?: boolean
     )
     .innerJoin(author, eq(author.id, designRevisions.authorId))
     .where(where)
-    .orderBy(desc(designs.updatedAt));
+    .orderBy(desc(designs.updatedAt), desc(designs.id));
   return rows.map((r) => ({ ...r, updatedAt: r.updatedAt.toISOString() }));
+}
+
+/**
+ * A position in the designs list: the last row's `updated_at` as PostgreSQL writes it (microseconds
+ * kept, which a JS Date would round away) and its id, the tie-breaker.
+ */
+export type DesignListKey = { updatedAt: string; id: string };
+
+export type DesignListQuery = {
+  approvedOnly?: boolean;
+  status?: DesignStatus;
+  /** Matched anywhere in the name or the project, case-insensitively. */
+  q?: string;
+  limit: number;
+  after?: DesignListKey;
+};
+
+/** `q` as a literal ILIKE pattern: its own %, _ and \ match themselves. */
+const containsPattern = (q: string) => `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+
+/**
+ * One page of the team's designs, newest change first, by keyset: rows strictly after `after` in
+ * (updated_at desc, id desc), read along the index designs_team_updated (or designs_team_status_updated
+ * when filtered by status), so a page costs the same at row 10 as at row 10,000 and designs added
+ * meanwhile (newer, so before the first page) shift nothing.
+ */
+export async function pageDesigns(teamId: string, opts: DesignListQuery) {
+  const db = await getDb();
+  const status = opts.approvedOnly ? "approved" : opts.status;
+  const where: (SQL | undefined)[] = [eq(designs.teamId, teamId)];
+  if (opts.approvedOnly && opts.status && opts.status !== "approved") return { designs: [], next: null };
+  if (status) where.push(eq(designs.status, status));
+  if (opts.q) {
+    const pattern = containsPattern(opts.q);
+    where.push(or(ilike(designs.name, pattern), ilike(designs.project, pattern)));
+  }
+  if (opts.after) {
+    where.push(
+      sql`(${designs.updatedAt}, ${designs.id}) < (${opts.after.updatedAt}::timestamptz, ${opts.after.id}::uuid)`,
+    );
+  }
+  const rows = await db
+    .select({
+      id: designs.id,
+      name: designs.name,
+      project: designs.project,
+      status: designs.status,
+      revision: designs.revision,
+      updatedAt: designs.updatedAt,
+      sortKey: sql<string>`to_char(${designs.updatedAt} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`,
+      authorName: author.name,
+      shuntOhms: sql<number>`(${designRevisions.choice}->>'shuntOhms')::float8`,
+      gain: sql<number>`(${designRevisions.choice}->>'gain')::float8`,
+    })
+    .from(designs)
+    .innerJoin(
+      designRevisions,
+      and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)),
+    )
+    .innerJoin(author, eq(author.id, designRevisions.authorId))
+    .where(and(...where))
+    .orderBy(desc(designs.updatedAt), desc(designs.id))
+    .limit(opts.limit + 1);
+  const more = rows.length > opts.limit;
+  const page = more ? rows.slice(0, opts.limit) : rows;
+  const last = page.at(-1);
+  return {
+    designs: page.map(({ sortKey: _key, ...r }) => ({ ...r, updatedAt: r.updatedAt.toISOString() })),
+    next: more && last ? { updatedAt: last.sortKey, id: last.id } : null,
+  };
 }
 
 /** The design with its current revision, scoped by team: another team's design is null. */

@@ -28,7 +28,9 @@ async function render(view: DesignView, pngName?: string): Promise<Rendered> {
   const pdf = await renderBuildSheet(view, meta);
   const { text } = await extractText(new Uint8Array(pdf), { mergePages: false });
   const pages = text.map(squash);
-  if (pngName && spawnSync("pdftoppm", ["-v"]).status === 0) {
+  if (pngName) {
+    // Never skipped quietly: `npm test` installs poppler-utils (scripts/system-tools.mjs).
+    expect(spawnSync("pdftoppm", ["-v"]).status, "pdftoppm is not installed: apt-get install -y poppler-utils").toBe(0);
     mkdirSync("test-results/build-sheet", { recursive: true });
     writeFileSync(`test-results/build-sheet/${pngName}.pdf`, pdf);
     spawnSync("pdftoppm", [

@@ -2,21 +2,45 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { ImportDesign } from "@/components/designs-list/design-import";
 import { DesignsTable } from "@/components/designs-list/designs-table";
+import { readListParams } from "@/components/designs-list/list-params";
 import { buttonClass } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/panel";
-import { listDesigns } from "@/db/queries/designs";
+import { pageDesigns } from "@/db/queries/designs";
 import { requirePageCaller } from "@/lib/auth/gate";
+import { decodeListCursor, encodeListCursor } from "@/lib/saved-designs/list-cursor";
 
 export const metadata: Metadata = { title: "Designs" };
 
-export default async function DesignsPage() {
+const PAGE_SIZE = 50;
+
+export default async function DesignsPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | string[] | undefined>>;
+}) {
   const caller = await requirePageCaller("/designs");
-  const designs = await listDesigns(caller.teamId, { approvedOnly: caller.role === "maker" });
+  const params = readListParams(await searchParams);
+  // The page the URL names, rendered here so the first paint has rows; the table takes over in the
+  // browser through GET /api/designs. A cursor this team's list did not give out starts at page 1.
+  const after = params.cursor ? decodeListCursor(caller.teamId, params.cursor) : undefined;
+  if (after === null) params.cursor = "";
+  const page = await pageDesigns(caller.teamId, {
+    approvedOnly: caller.role === "maker",
+    status: params.status || undefined,
+    q: params.q || undefined,
+    limit: PAGE_SIZE,
+    after: after ?? undefined,
+  });
+  const initial = {
+    designs: page.designs,
+    nextCursor: page.next ? encodeListCursor(caller.teamId, page.next) : null,
+  };
+  const teamHasNone = !params.q && !params.status && !params.cursor && page.designs.length === 0;
   const canCreate = caller.role === "owner" || caller.role === "designer";
   return (
-    <div className="flex flex-col gap-4">
+    <div className="flex min-w-0 flex-col gap-4">
       <div className="flex flex-wrap items-end justify-between gap-3">
-        <div>
+        <div className="min-w-0">
           <h1 className="text-lg font-semibold">Designs</h1>
           <p className="text-ink-muted">
             {caller.role === "maker"
@@ -33,14 +57,14 @@ export default async function DesignsPage() {
           </div>
         )}
       </div>
-      {designs.length === 0 ? (
+      {teamHasNone ? (
         <EmptyState title={caller.role === "maker" ? "No approved designs yet" : "No designs yet"}>
           {canCreate
             ? "Start one with “New design”: state the requirement and pick a shunt and gain from the sweep."
             : "Designs saved by the team's owners and designers appear here."}
         </EmptyState>
       ) : (
-        <DesignsTable designs={designs} />
+        <DesignsTable initial={initial} initialParams={params} />
       )}
     </div>
   );

@@ -1,12 +1,43 @@
-import { listDesigns } from "@/db/queries/designs";
+import { z } from "zod";
+import { pageDesigns } from "@/db/queries/designs";
+import { designStatusEnum } from "@/db/schema";
 import { apiRoute } from "@/lib/auth/gate";
-import { json } from "@/lib/http";
+import { HttpError, json } from "@/lib/http";
+import { decodeListCursor, encodeListCursor } from "@/lib/saved-designs/list-cursor";
 import { saveNewDesign } from "@/lib/saved-designs/create";
 import { createDesignSchema } from "@/lib/saved-designs/service";
 
-export const GET = apiRoute({ doing: "list designs" }, async ({ caller }) => ({
-  designs: await listDesigns(caller.teamId, { approvedOnly: caller.role === "maker" }),
-}));
+const listQuery = z.object({
+  limit: z.coerce
+    .number({ error: "limit must be a whole number from 1 to 200" })
+    .int("limit must be a whole number from 1 to 200")
+    .min(1, "limit must be at least 1")
+    .max(200, "limit must be at most 200")
+    .default(50),
+  cursor: z.string().max(400, "cursor is not one this list gave out").optional(),
+  q: z.string().trim().max(200, "q must be at most 200 characters").optional(),
+  status: z
+    .enum(designStatusEnum.enumValues, { error: `status must be one of ${designStatusEnum.enumValues.join(", ")}` })
+    .optional(),
+});
+
+// Paged newest change first (API v2): {designs, nextCursor}; makers page approved designs only.
+export const GET = apiRoute({ doing: "list designs", query: listQuery }, async ({ caller, query }) => {
+  const after = query.cursor ? decodeListCursor(caller.teamId, query.cursor) : undefined;
+  if (after === null) {
+    throw new HttpError(422, "Invalid input at cursor: it was not given out by this team's designs list.", {
+      cursor: ["was not given out by this team's designs list; start again without a cursor"],
+    });
+  }
+  const page = await pageDesigns(caller.teamId, {
+    approvedOnly: caller.role === "maker",
+    status: query.status,
+    q: query.q || undefined,
+    limit: query.limit,
+    after,
+  });
+  return { designs: page.designs, nextCursor: page.next ? encodeListCursor(caller.teamId, page.next) : null };
+});
 
 export const POST = apiRoute(
   { roles: ["owner", "designer"], doing: "save designs", body: createDesignSchema },

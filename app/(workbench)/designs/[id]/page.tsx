@@ -8,7 +8,7 @@ import { ComparePicker } from "@/components/review/compare-picker";
 import { ReviewPanel } from "@/components/review/review-panel";
 import { StatusBadge, statusExplained } from "@/components/review/status-badge";
 import { listTargetAudit } from "@/db/queries/audit";
-import { getDesignView, isUuid, listDesigns, listRevisions } from "@/db/queries/designs";
+import { getDesignView, isUuid, listRevisions, pageDesigns } from "@/db/queries/designs";
 import { listReviews } from "@/db/queries/reviews";
 import { formatSI } from "@/lib/design";
 import { requirePageCaller } from "@/lib/auth/gate";
@@ -29,7 +29,8 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
     listRevisions(design.id),
     listReviews(design.id),
     listTargetAudit(caller.teamId, "design", design.id),
-    listDesigns(caller.teamId, { approvedOnly: caller.role === "maker" }),
+    // The picker offers the team's 50 most recently changed designs; the list page reaches the rest.
+    pageDesigns(caller.teamId, { approvedOnly: caller.role === "maker", limit: 50 }).then((p) => p.designs),
   ]);
   const { metrics, choice } = design;
   return (

@@ -1,0 +1,2 @@
+CREATE INDEX "designs_team_updated" ON "designs" USING btree ("team_id","updated_at","id");--> statement-breakpoint
+CREATE INDEX "designs_team_status_updated" ON "designs" USING btree ("team_id","status","updated_at","id");
