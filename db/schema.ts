@@ -108,6 +108,22 @@ export const designs = pgTable(
   ],
 );
 
+// The first answer to a request sent with an Idempotency-Key (API v2), kept 24 h per user, key and
+// route; claimed in the same transaction as the write it guards, so a repeat creates nothing.
+export const idempotencyKeys = pgTable(
+  "idempotency_keys",
+  {
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    scope: text("scope").notNull(),
+    key: text("key").notNull(),
+    response: jsonb("response").$type<Record<string, unknown>>().notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("idempotency_keys_user_scope_key").on(t.userId, t.scope, t.key)],
+);
+
 // Immutable: a save writes a new row, never updates one.
 export const designRevisions = pgTable(
   "design_revisions",

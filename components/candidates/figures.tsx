@@ -90,7 +90,7 @@ export function Figures({ req, m }: { req: Requirement; m: CandidateDetail }) {
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
         {figureGroups(req, m).map((g) => (
           <div key={g.title}>
-            <h4 className="mb-1 text-2xs font-semibold uppercase tracking-wide text-ink-faint">{g.title}</h4>
+            <h4 className="mb-1 text-2xs font-semibold tracking-wide text-ink-faint">{g.title}</h4>
             <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-xs">
               {g.rows.map(([label, value, note]) => (
                 <div key={label} className="contents">

@@ -3,7 +3,7 @@ import { flexRender, type Table } from "@tanstack/react-table";
 
 export function SortableHead<T>({ table, cellClass = "px-2 py-1.5" }: { table: Table<T>; cellClass?: string }) {
   return (
-    <thead className="bg-sunken text-left text-2xs uppercase tracking-wide text-ink-muted">
+    <thead className="bg-sunken text-left text-2xs tracking-wide text-ink-muted">
       {table.getHeaderGroups().map((hg) => (
         <tr key={hg.id}>
           {hg.headers.map((h) => {

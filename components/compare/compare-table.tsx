@@ -53,7 +53,7 @@ function Section({ title, list, mark }: { title: string; list: Row[]; mark: bool
       <tr>
         <th
           colSpan={99}
-          className="bg-sunken px-3 py-1 text-left text-2xs font-semibold uppercase tracking-wide text-ink-muted"
+          className="bg-sunken px-3 py-1 text-left text-2xs font-semibold tracking-wide text-ink-muted"
         >
           {title}
         </th>

@@ -29,7 +29,7 @@ export function BuildSheetPanel({ design, viewer }: { design: DesignView; viewer
           <h2
             id="build-sheet-heading"
             className={
-              maker ? "text-base font-semibold" : "text-xs font-semibold uppercase tracking-wide text-ink-muted"
+              maker ? "text-base font-semibold" : "text-xs font-semibold tracking-wide text-ink-muted"
             }
           >
             Build and bench check

@@ -197,7 +197,7 @@ export function MeterCheck() {
         </Panel>
         <Panel title="The three load behaviours side by side">
           <table className="w-full text-xs" aria-label="Figures by load behaviour">
-            <thead className="text-left text-2xs uppercase tracking-wide text-ink-muted">
+            <thead className="text-left text-2xs tracking-wide text-ink-muted">
               <tr>
                 <th className="py-1">Load</th>
                 <th>Current</th>

@@ -11,7 +11,7 @@ const pct = (p: number) => `${String(Number(p.toPrecision(3)))} %`;
 function Figure({ label, value, note, tone }: { label: string; value: string; note?: string; tone?: "bad" | "warn" }) {
   return (
     <div className="rounded border border-line bg-panel px-3 py-2">
-      <dt className="text-2xs font-medium text-ink-muted uppercase">{label}</dt>
+      <dt className="text-2xs font-medium text-ink-muted">{label}</dt>
       <dd className={`num text-base font-semibold ${tone === "bad" ? "text-bad" : tone === "warn" ? "text-warn" : ""}`}>
         {value}
       </dd>

@@ -15,7 +15,7 @@ export function Panel({
     <section className={`rounded-panel border border-line bg-panel ${className}`}>
       {(title || actions) && (
         <header className="flex items-center justify-between gap-2 border-b border-line px-4 py-2">
-          {title && <h2 className="text-xs font-semibold uppercase tracking-wide text-ink-muted">{title}</h2>}
+          {title && <h2 className="text-xs font-semibold tracking-wide text-ink-muted">{title}</h2>}
           {actions}
         </header>
       )}

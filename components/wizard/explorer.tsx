@@ -256,7 +256,7 @@ const Results = memo(function Results({
           <div className="flex flex-col gap-3 text-xs">
             <RangePlanChart plan={result.rangePlan} minA={req.current.min} maxA={req.current.max} />
             <table className="w-full">
-              <thead className="text-left text-2xs uppercase tracking-wide text-ink-muted">
+              <thead className="text-left text-2xs tracking-wide text-ink-muted">
                 <tr>
                   <th className="py-1">Range</th>
                   <th>Shunt</th>

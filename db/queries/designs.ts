@@ -49,9 +49,11 @@ function insertRevision(
 }
 
 /** Creates the design and its revision 1 together. */
-export async function createDesign(input: NewDesign): Promise<{ id: string; revision: 1; status: "draft" }> {
+/** A new design and its first revision; inside `inTx` when the caller holds a transaction (idempotency). */
+export async function createDesign(input: NewDesign, inTx?: Tx): Promise<{ id: string; revision: 1; status: "draft" }> {
   const db = await getDb();
-  return db.transaction(async (tx) => {
+  const run = <T>(fn: (tx: Tx) => Promise<T>) => (inTx ? fn(inTx) : db.transaction(fn));
+  return run(async (tx) => {
     const [row] = await tx
       .insert(designs)
       .values({ teamId: input.teamId, name: input.name, project: input.project ?? null, createdBy: input.userId })

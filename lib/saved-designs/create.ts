@@ -2,7 +2,9 @@
 // the requirement and choice (422 when the choice is outside the sweep or infeasible), then one
 // transaction writes the design and its first revision.
 import { createDesign } from "@/db/queries/designs";
+import { withIdempotencyKey } from "@/db/queries/idempotency";
 import type { Caller } from "@/lib/auth/gate";
+import { HttpError } from "@/lib/http";
 import { evaluateDesign } from "./service";
 
 export type NewDesign = {
@@ -12,13 +14,36 @@ export type NewDesign = {
   choice: { shuntOhms: number; gain: number };
 };
 
-export async function saveNewDesign(caller: Pick<Caller, "teamId" | "userId">, body: NewDesign) {
+export async function saveNewDesign(
+  caller: Pick<Caller, "teamId" | "userId">,
+  body: NewDesign,
+  idempotencyKey?: string,
+) {
   const evaluated = evaluateDesign(body.requirement, body.choice);
-  return createDesign({
+  const input = {
     ...evaluated,
     teamId: caller.teamId,
     userId: caller.userId,
     name: body.name,
     project: body.project ?? null,
-  });
+  };
+  if (idempotencyKey === undefined) return createDesign(input);
+  const { answer } = await withIdempotencyKey(
+    { userId: caller.userId, scope: "POST /api/designs", key: idempotencyKey },
+    (tx) => createDesign(input, tx),
+  );
+  return answer;
+}
+
+/** The Idempotency-Key header, if sent: 1 to 255 visible characters, else 422 naming the header. */
+export function idempotencyKeyOf(request: Request): string | undefined {
+  const raw = request.headers.get("idempotency-key");
+  if (raw === null) return undefined;
+  const key = raw.trim();
+  if (!/^[\x21-\x7e]{1,255}$/.test(key)) {
+    throw new HttpError(422, "Idempotency-Key: send 1 to 255 visible characters, such as a UUID.", {
+      "Idempotency-Key": ["1 to 255 visible characters, such as a UUID"],
+    });
+  }
+  return key;
 }

@@ -4,7 +4,7 @@ import { designStatusEnum } from "@/db/schema";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError, json } from "@/lib/http";
 import { decodeListCursor, encodeListCursor } from "@/lib/saved-designs/list-cursor";
-import { saveNewDesign } from "@/lib/saved-designs/create";
+import { idempotencyKeyOf, saveNewDesign } from "@/lib/saved-designs/create";
 import { createDesignSchema } from "@/lib/saved-designs/service";
 
 const listQuery = z.object({
@@ -41,7 +41,8 @@ export const GET = apiRoute({ doing: "list designs", query: listQuery }, async (
 
 export const POST = apiRoute(
   { roles: ["owner", "designer"], doing: "save designs", body: createDesignSchema },
-  async ({ caller, body }) => {
-    return json(await saveNewDesign(caller, body), 201);
+  async ({ caller, body, request }) => {
+    // A repeat with the same Idempotency-Key answers as the first time (201, same id) and creates nothing.
+    return json(await saveNewDesign(caller, body, idempotencyKeyOf(request)), 201);
   },
 );

@@ -65,6 +65,8 @@ export const PATCH = apiRoute(
       { name: design.name, project: design.project, requirement: current.requirement, choice: current.choice },
       { name, project, requirement: evaluated.requirement, choice: evaluated.choice },
     );
+    // API v2: a PATCH that changes nothing (a rename to the same name included) makes no revision.
+    if (changed.length === 0) return { revision: design.revision, unchanged: true };
     const result = await reviseDesign({
       ...evaluated,
       designId: design.id,
