@@ -4,7 +4,7 @@
 // out or signed out for the specs that run after this one.
 import { expect, request as playwrightRequest, test, type APIRequestContext } from "@playwright/test";
 import { baseURL } from "../../playwright.config";
-import { apiAs, signInApi } from "../fixtures/auth";
+import { apiAs, signInApi, signInPage } from "../fixtures/auth";
 import { createDesign, makeOutsider, unique } from "./authz-helpers";
 
 const shots = process.env.PW_OUTPUT_DIR ?? "test-results/security-accounts";
@@ -302,4 +302,20 @@ test("on screen: a signed-out invitee with an account signs in, comes back, and 
     }
     await ctx.close();
   }
+
+  // Signed in as someone else: the page says whose invitation it is and offers to switch accounts.
+  const other = await newAccount(owner);
+  const second = (await (
+    await outsider.post("/api/invitations", { data: { email: other.email, role: "maker" } })
+  ).json()) as {
+    link: string;
+  };
+  const ctx = await browser.newContext({ viewport: { width: 1440, height: 900 } });
+  const page = await ctx.newPage();
+  await signInPage(page, "maker");
+  await page.goto(new URL(second.link).pathname);
+  await expect(page.getByTestId("wrong-account")).toContainText(other.email);
+  await expect(page.getByRole("button", { name: `Sign in as ${other.email}` })).toBeVisible();
+  await page.screenshot({ path: `${shots}/invitation-wrong-account-1440.png`, fullPage: true });
+  await ctx.close();
 });
