@@ -9,10 +9,12 @@ export function JoinTeamButton({
   token,
   teamName,
   currentTeam,
+  email,
 }: {
   token: string;
   teamName: string;
   currentTeam: string;
+  email: string;
 }) {
   const [state, setState] = useState<"idle" | "busy" | "joined">("idle");
   const [error, setError] = useState<string | null>(null);
@@ -45,12 +47,15 @@ export function JoinTeamButton({
   }
   return (
     <div className="flex flex-col gap-3">
-      <p aria-live="polite" className="min-h-4 text-xs font-medium text-bad" data-testid="accept-error">
-        {error}
+      <p className="text-sm">
+        You are signed in as <code className="font-mono">{email}</code>, the invited account.
       </p>
       <Button variant="primary" onClick={join} disabled={state === "busy"}>
         {state === "busy" ? "Joining…" : `Join ${teamName}`}
       </Button>
+      <p aria-live="polite" className="text-xs font-medium text-bad empty:hidden" data-testid="accept-error">
+        {error}
+      </p>
     </div>
   );
 }

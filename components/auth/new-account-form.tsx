@@ -79,7 +79,7 @@ export function NewAccountForm({ token, email }: { token: string; email: string 
         {error?.message}
       </p>
       <Button type="submit" variant="primary" disabled={busy}>
-        {busy ? "Joining…" : "Create the account and join"}
+        {busy ? "Joining…" : "Join the team"}
       </Button>
     </form>
   );

@@ -240,23 +240,44 @@ export async function acceptInvitation(input: {
   return db.transaction(async (tx): Promise<AcceptResult> => {
     const tokenHash = hashToken(input.token);
     const [inv] = await tx.select().from(invitations).where(eq(invitations.tokenHash, tokenHash)).for("update");
+    const [account] = inv
+      ? await tx
+          .select({ id: users.id })
+          .from(users)
+          .where(sql`lower(${users.email}) = ${inv.email.toLowerCase()}`)
+      : [];
+    // A refusal is recorded in the invitation's team and, when the invited e-mail has an account, in
+    // that account's teams too: their owners see who tried to pull their member elsewhere.
     const refuse = async (
       status: 401 | 403 | 404 | 409 | 410 | 422,
       message: string,
       reason: string,
       field?: string,
     ): Promise<AcceptResult> => {
-      await recordAudit(
-        {
-          teamId: inv?.teamId ?? null,
-          actorId: input.signedInUserId,
-          action: "invitation.refused",
-          targetType: "invitation",
-          targetId: inv?.id ?? `token:${tokenHash.slice(0, 16)}`,
-          details: { reason, email: inv?.email ?? null, passwordOffered: input.passwordOffered },
-        },
-        tx,
-      );
+      const accountTeams = account
+        ? (
+            await tx.select({ teamId: memberships.teamId }).from(memberships).where(eq(memberships.userId, account.id))
+          ).map((m) => m.teamId)
+        : [];
+      const teamIds = [...new Set([inv?.teamId ?? null, ...accountTeams])];
+      for (const teamId of teamIds) {
+        await recordAudit(
+          {
+            teamId,
+            actorId: input.signedInUserId,
+            action: "invitation.refused",
+            targetType: "invitation",
+            targetId: inv?.id ?? `token:${tokenHash.slice(0, 16)}`,
+            details: {
+              reason,
+              email: inv?.email ?? null,
+              invitingTeamId: inv?.teamId ?? null,
+              passwordOffered: input.passwordOffered,
+            },
+          },
+          tx,
+        );
+      }
       return { ok: false, status, message, ...(field ? { field } : {}) };
     };
     if (!inv) return refuse(404, "That invitation link is not valid.", "unknown token");
@@ -271,10 +292,7 @@ export async function acceptInvitation(input: {
         "expired",
       );
     const [team] = await tx.select({ name: teams.name }).from(teams).where(eq(teams.id, inv.teamId));
-    const [existing] = await tx
-      .select({ id: users.id })
-      .from(users)
-      .where(sql`lower(${users.email}) = ${inv.email.toLowerCase()}`);
+    const existing = account;
     let userId: string;
     if (existing) {
       if (input.signedInUserId !== existing.id) {

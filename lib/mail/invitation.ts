@@ -25,7 +25,7 @@ export function mailInvitation(input: {
     subject: input.newTeam
       ? `You are invited to own ${input.teamName} on Sensewright`
       : `You are invited to join ${input.teamName} on Sensewright`,
-    text: `${what}\n\nThe link below works once and expires in ${INVITATION_DAYS} days. Open it to choose your name and password:`,
+    text: `${what}\n\nThe link below works once and expires in ${INVITATION_DAYS} days. Open it to join: without an account you choose your name and password there; with one, you sign in as it and press Join:`,
     path: invitationPath(input.token),
     about: { type: "invitation", id: input.invitationId, kind: "invitation" },
   });

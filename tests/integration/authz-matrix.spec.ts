@@ -16,7 +16,7 @@ import {
 } from "./authz-helpers";
 import { acceptAndSignIn } from "./authz-helpers";
 
-type Method = "GET" | "POST" | "PATCH" | "DELETE";
+type Method = "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
 type Cell = {
   path: string;
   data?: unknown;
@@ -302,6 +302,13 @@ const routes: Row[] = [
     method: "DELETE",
     setup: async () => ({ path: `/api/invitations/${await pendingInvitation()}` }),
     expect: ownerOnly(200, 404),
+  },
+  {
+    // A wrong current password: 422 on that field for any signed-in member, changing nothing.
+    name: "PUT /api/me/password",
+    method: "PUT",
+    setup: fixed("/api/me/password", { currentPassword: "not-the-password", newPassword: "tall-copper-kettle-41" }),
+    expect: members(422),
   },
   {
     name: "POST /api/invitations/accept (bad token)",

@@ -1,5 +1,5 @@
 // Designs over HTTP: engine checks on save, stale-write refusal, the review flow's rules, and the
-// mail the local catcher receives (read back through the owner's outbox).
+// mail the built-in outbox keeps (read back through the owner's outbox).
 import { expect, test } from "@playwright/test";
 import { apiAs } from "../fixtures/auth";
 import { choice, createDesign, requirement, unique } from "./authz-helpers";
@@ -125,8 +125,11 @@ test("review flow: submit mails reviewers, a verdict mails the author, and the r
   expect(approved.reviews.find((r: { body: string }) => r.body === "Thanks.").parentId).toBe((await comment.json()).id);
   expect((await designer.post(`/api/designs/${id}/submit`, { data: {} })).status()).toBe(409); // approved already
 
-  const outbox = (await (await owner.get("/api/outbox")).json()) as Outbox;
-  const mine = outbox.messages.filter((m) => m.subject.includes(name));
+  // Mail goes out after each response (Next's after()): wait, bounded, until the last of it is kept.
+  const readMine = async () =>
+    ((await (await owner.get("/api/outbox")).json()) as Outbox).messages.filter((m) => m.subject.includes(name));
+  await expect.poll(async () => (await readMine()).length, { timeout: 10_000 }).toBeGreaterThanOrEqual(6);
+  const mine = await readMine();
   const toReviewer = mine.filter(
     (m) => m.to === "reviewer@harbourline.example" && m.subject.startsWith("Review requested"),
   );
@@ -163,7 +166,10 @@ test("invitations: single use, revocable, and the outbox carries the link", asyn
   expect(res.status()).toBe(201);
   const { link, id } = await res.json();
   expect((await owner.post("/api/invitations", { data: { email, role: "reviewer" } })).status()).toBe(409);
-  const mail = ((await (await owner.get("/api/outbox")).json()) as Outbox).messages.find((m) => m.to === email)!;
+  const findMail = async () =>
+    ((await (await owner.get("/api/outbox")).json()) as Outbox).messages.find((m) => m.to === email);
+  await expect.poll(findMail, { timeout: 10_000 }).toBeDefined();
+  const mail = (await findMail())!;
   expect(mail.text).toContain(link);
   const token = new URL(link).pathname.split("/").pop();
   expect(

@@ -58,7 +58,12 @@ export default async function InvitationPage({ params }: { params: Promise<{ tok
             {!invitation.hasAccount ? (
               <NewAccountForm token={token} email={invitation.email} />
             ) : signedInAsInvitee && caller ? (
-              <JoinTeamButton token={token} teamName={invitation.teamName} currentTeam={caller.teamName} />
+              <JoinTeamButton
+                token={token}
+                teamName={invitation.teamName}
+                currentTeam={caller.teamName}
+                email={caller.email}
+              />
             ) : (
               <div className="flex flex-col gap-3" data-testid="wrong-account">
                 <p>

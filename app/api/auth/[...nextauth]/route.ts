@@ -34,8 +34,43 @@ async function throttled(request: NextRequest): Promise<Response | null> {
   return json({ message, url }, { status: 429, headers: { "Retry-After": String(retryAfterSeconds(wait)) } });
 }
 
+const CALLBACK_COOKIES = ["next-auth.callback-url", "__Secure-next-auth.callback-url"];
+
+function parsesAsHttp(value: string, base: string): boolean {
+  try {
+    return /^https?:$/.test(new URL(value, base).protocol);
+  } catch {
+    return false;
+  }
+}
+
+/**
+ * next-auth answers a callbackUrl it cannot parse (a port of 99999) with a 500 before any of our
+ * callbacks run; we answer 400 first, and drop such a value left in its cookie.
+ */
+function badCallbackUrl(request: NextRequest): Response | null {
+  const base = request.nextUrl.origin;
+  const param = request.nextUrl.searchParams.get("callbackUrl");
+  const badCookies = CALLBACK_COOKIES.filter((name) => {
+    const value = request.cookies.get(name)?.value;
+    return value !== undefined && !parsesAsHttp(value, base);
+  });
+  if ((param === null || parsesAsHttp(param, base)) && badCookies.length === 0) return null;
+  const response = json(
+    {
+      message: "callbackUrl is not a valid address on this app; it was ignored. Try again.",
+      fieldErrors: { callbackUrl: ["is not a valid address on this app"] },
+    },
+    400,
+  );
+  for (const name of badCookies) response.headers.append("Set-Cookie", `${name}=; Path=/; Max-Age=0; SameSite=Lax`);
+  return response;
+}
+
 async function guarded(request: NextRequest, context: Context): Promise<Response> {
   try {
+    const badCallback = badCallbackUrl(request);
+    if (badCallback) return badCallback;
     if (request.method === "POST" && request.nextUrl.pathname.endsWith("/callback/credentials")) {
       const refusal = await throttled(request);
       if (refusal) return refusal;
