@@ -16,6 +16,34 @@ export const requirement = {
 };
 export const choice = { shuntOhms: "274 mohm", gain: 50 };
 
+/** A valid library amplifier and shunt (unit strings, as a person types them). */
+export const amplifierBody = (name: string) => ({
+  name,
+  gainMode: "fixed",
+  gains: [20, 50],
+  offsetV: "25 uV",
+  offsetDriftVPerK: "0.1 uV/K",
+  gainErrorFraction: "0.2 %",
+  gainDriftPerK: "10 ppm/K",
+  biasCurrentA: "15 nA",
+  noiseDensityVPerRtHz: "35 nV/rtHz",
+  gbwHz: "500 kHz",
+  swingLowV: "10 mV",
+  swingHighV: "30 mV",
+  cmrrDb: 105,
+  supplyMinV: "2.7 V",
+  supplyMaxV: "5.5 V",
+});
+export const shuntBody = (name: string) => ({
+  name,
+  series: "E24",
+  minOhms: "1 mohm",
+  maxOhms: "100 mohm",
+  toleranceFraction: "1 %",
+  tempcoPerK: "50 ppm/K",
+  ratingsW: ["0.5 W", "1 W"],
+  fourTerminal: false,
+});
 export const unique = () => `${Date.now().toString(36)}${Math.random().toString(36).slice(2, 7)}`;
 
 /** Joins through an invitation link as a new account; returns the signed-in context. */

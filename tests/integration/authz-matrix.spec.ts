@@ -11,6 +11,8 @@ import {
   requirement,
   submitDesign,
   unique,
+  amplifierBody,
+  shuntBody,
   type Contexts,
   type Who,
 } from "./authz-helpers";
@@ -101,33 +103,6 @@ const csv = {
   },
 };
 
-const amplifierBody = (name: string) => ({
-  name,
-  gainMode: "fixed",
-  gains: [20, 50],
-  offsetV: "25 uV",
-  offsetDriftVPerK: "0.1 uV/K",
-  gainErrorFraction: "0.2 %",
-  gainDriftPerK: "10 ppm/K",
-  biasCurrentA: "15 nA",
-  noiseDensityVPerRtHz: "35 nV/rtHz",
-  gbwHz: "500 kHz",
-  swingLowV: "10 mV",
-  swingHighV: "30 mV",
-  cmrrDb: 105,
-  supplyMinV: "2.7 V",
-  supplyMaxV: "5.5 V",
-});
-const shuntBody = (name: string) => ({
-  name,
-  series: "E24",
-  minOhms: "1 mohm",
-  maxOhms: "100 mohm",
-  toleranceFraction: "1 %",
-  tempcoPerK: "50 ppm/K",
-  ratingsW: ["0.5 W", "1 W"],
-  fourTerminal: false,
-});
 const shuntCsv = (name: string) => ({
   kind: "shunts",
   file: {

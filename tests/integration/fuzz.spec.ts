@@ -8,7 +8,7 @@
 import fc from "fast-check";
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { apiAs } from "../fixtures/auth";
-import { acceptAndSignIn, choice, requirement, unique } from "./authz-helpers";
+import { acceptAndSignIn, amplifierBody, choice, requirement, shuntBody, unique } from "./authz-helpers";
 
 type Route = {
   name: string;
@@ -21,33 +21,8 @@ type Route = {
 
 const ids = { design: "", amplifier: "", shunt: "", member: "" };
 
-const amplifier = () => ({
-  name: `Fuzz amp ${unique()}`,
-  gainMode: "fixed",
-  gains: [20, 50],
-  offsetV: "25 uV",
-  offsetDriftVPerK: "0.1 uV/K",
-  gainErrorFraction: "0.2 %",
-  gainDriftPerK: "10 ppm/K",
-  biasCurrentA: "15 nA",
-  noiseDensityVPerRtHz: "35 nV/rtHz",
-  gbwHz: "500 kHz",
-  swingLowV: "10 mV",
-  swingHighV: "30 mV",
-  cmrrDb: 105,
-  supplyMinV: "2.7 V",
-  supplyMaxV: "5.5 V",
-});
-const shunt = () => ({
-  name: `Fuzz shunt ${unique()}`,
-  series: "E24",
-  minOhms: "1 mohm",
-  maxOhms: "100 mohm",
-  toleranceFraction: "1 %",
-  tempcoPerK: "50 ppm/K",
-  ratingsW: ["0.5 W", "1 W"],
-  fourTerminal: false,
-});
+const amplifier = () => amplifierBody(`Fuzz amp ${unique()}`);
+const shunt = () => shuntBody(`Fuzz shunt ${unique()}`);
 // The default sweep (no shunt or gain bounds given): a mutation can narrow it or break it, not widen it.
 const smallRequirement = requirement;
 

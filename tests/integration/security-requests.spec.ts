@@ -4,8 +4,8 @@
 import http from "node:http";
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { baseURL } from "../../playwright.config";
-import { apiAs } from "../fixtures/auth";
-import { choice, requirement, unique } from "./authz-helpers";
+import { apiAs, signInPage } from "../fixtures/auth";
+import { choice, requirement, shuntBody, unique } from "./authz-helpers";
 import { pidListeningOn, rssBytes } from "./server-process";
 
 let designer: APIRequestContext;
@@ -301,18 +301,7 @@ test.describe("no 500 on bad text (item 8)", () => {
     });
     expect(comment.status()).toBe(422);
     expect(Object.keys(await fieldErrors(comment))).toContain("body");
-    const part = await designer.post("/api/library/shunts", {
-      data: {
-        name: "Strip\u0000",
-        series: "E24",
-        minOhms: 0.001,
-        maxOhms: 0.1,
-        toleranceFraction: 0.01,
-        tempcoPerK: 5e-5,
-        ratingsW: [1],
-        fourTerminal: false,
-      },
-    });
+    const part = await designer.post("/api/library/shunts", { data: shuntBody("Strip\u0000") });
     expect(part.status()).toBe(422);
     expect(Object.keys(await fieldErrors(part))).toContain("name");
     const team = await owner.post("/api/invitations", {
@@ -370,16 +359,7 @@ test.describe("non-finite numbers (item 9)", () => {
     expect(literal.status()).toBe(422);
     expect(Object.keys(await fieldErrors(literal))).toContain("current.max");
     const part = await designer.post("/api/library/shunts", {
-      data: {
-        name: `Infinite ${unique()}`,
-        series: "E24",
-        minOhms: "1 mohm",
-        maxOhms: "1e999",
-        toleranceFraction: 0.01,
-        tempcoPerK: 5e-5,
-        ratingsW: ["1e999"],
-        fourTerminal: false,
-      },
+      data: { ...shuntBody(`Infinite ${unique()}`), maxOhms: "1e999", ratingsW: ["1e999"] },
     });
     expect(part.status()).toBe(422);
     expect(Object.keys(await fieldErrors(part))).toEqual(expect.arrayContaining(["maxOhms", "ratingsW.0"]));
@@ -400,18 +380,7 @@ test.describe("non-finite numbers (item 9)", () => {
 test.describe("spreadsheet formulas (item 10)", () => {
   test("an exported library cell starting with = is written as '=", async () => {
     const name = `=HYPERLINK("http://x.example","${unique()}")`;
-    const created = await designer.post("/api/library/shunts", {
-      data: {
-        name,
-        series: "E24",
-        minOhms: "1 mohm",
-        maxOhms: "100 mohm",
-        toleranceFraction: "1 %",
-        tempcoPerK: "50 ppm/K",
-        ratingsW: ["0.5 W"],
-        fourTerminal: false,
-      },
-    });
+    const created = await designer.post("/api/library/shunts", { data: shuntBody(name) });
     expect(created.status(), await created.text()).toBe(201);
     const csv = await (await designer.get("/api/library/export?kind=shunts")).text();
     const line = csv.split("\n").find((l) => l.includes("HYPERLINK"))!;
@@ -460,4 +429,45 @@ test.describe("headers (item 12)", () => {
       expect(res.headers()["x-content-type-options"], path).toBe("nosniff");
     }
   });
+});
+
+test.describe("the CSP leaves the screens working (item 12)", () => {
+  for (const width of [1440, 390]) {
+    test(`sign-in, designs, a design with its charts and the wizard load with no CSP violation at ${width} px`, async ({
+      page,
+    }) => {
+      test.setTimeout(90_000);
+      await page.setViewportSize({ width, height: 900 });
+      const violations: string[] = [];
+      page.on("console", (m) => {
+        if (/Content Security Policy/i.test(m.text())) violations.push(m.text());
+      });
+      await page.addInitScript(() => {
+        document.addEventListener("securitypolicyviolation", (e) => {
+          console.error(`Content Security Policy violation: ${e.violatedDirective} ${e.blockedURI}`);
+        });
+      });
+      await signInPage(page, "designer");
+      const list = (await (await designer.get("/api/designs")).json()) as { designs: { id: string; status: string }[] };
+      const approved = list.designs.find((d) => d.status === "approved") ?? list.designs[0]!;
+      await page.goto(`/designs/${approved.id}`);
+      await expect(page.getByTestId("design-name")).toBeVisible();
+      await expect(page.locator("svg").first()).toBeVisible();
+      // next/font: the page's own font files load (a blocked one would be a violation above).
+      await page.evaluate(() => document.fonts.ready);
+      expect(await page.evaluate(() => [...document.fonts].some((f) => f.status === "loaded"))).toBe(true);
+      await page.screenshot({
+        path: `${process.env.PW_OUTPUT_DIR ?? "test-results"}/csp-design-${width}.png`,
+        fullPage: false,
+      });
+      await page.goto("/designs/new");
+      await expect(page.getByLabel("Minimum current", { exact: true })).toBeVisible();
+      // The solver's Web Worker, the charts and the save under this policy: tests/e2e/wizard.spec.ts.
+      await page.screenshot({
+        path: `${process.env.PW_OUTPUT_DIR ?? "test-results"}/csp-wizard-${width}.png`,
+        fullPage: false,
+      });
+      expect(violations).toEqual([]);
+    });
+  }
 });
