@@ -33,7 +33,7 @@ export type CreateInvitationResult =
       role: Role;
       expiresAt: string;
     }
-  | { ok: false; status: 409; message: string };
+  | { ok: false; reason: "conflict"; message: string };
 
 /**
  * Invites `email` to the caller's team with `role` — or, with `newTeam`, creates that team and
@@ -64,7 +64,7 @@ export async function createInvitation(input: {
         .from(memberships)
         .innerJoin(users, eq(users.id, memberships.userId))
         .where(and(eq(memberships.teamId, teamId), sql`lower(${users.email}) = ${email}`));
-      if (member[0]) return { ok: false, status: 409, message: `${email} is already a member of this team.` };
+      if (member[0]) return { ok: false, reason: "conflict", message: `${email} is already a member of this team.` };
       const pending = await tx
         .select({ id: invitations.id })
         .from(invitations)
@@ -80,7 +80,7 @@ export async function createInvitation(input: {
       if (pending[0])
         return {
           ok: false,
-          status: 409,
+          reason: "conflict",
           message: `${email} already has a pending invitation; revoke it first to send a new one.`,
         };
       const [team] = await tx.select({ name: teams.name }).from(teams).where(eq(teams.id, teamId));
@@ -157,7 +157,8 @@ export async function listInvitations(teamId: string) {
   }));
 }
 
-export type RevokeResult = { ok: true; revokedAt: string } | { ok: false; status: 404 | 409; message: string };
+export type RevokeResult =
+  { ok: true; revokedAt: string } | { ok: false; reason: "not-found" | "conflict"; message: string };
 
 export async function revokeInvitation(teamId: string, id: string, actorId: string): Promise<RevokeResult> {
   const db = await getDb();
@@ -167,9 +168,10 @@ export async function revokeInvitation(teamId: string, id: string, actorId: stri
       .from(invitations)
       .where(and(eq(invitations.id, id), eq(invitations.teamId, teamId)))
       .for("update");
-    if (!inv) return { ok: false, status: 404, message: "That invitation was not found in your team." };
+    if (!inv) return { ok: false, reason: "not-found", message: "That invitation was not found in your team." };
     const status = statusOf(inv);
-    if (status !== "pending") return { ok: false, status: 409, message: `That invitation is already ${status}.` };
+    if (status !== "pending")
+      return { ok: false, reason: "conflict", message: `That invitation is already ${status}.` };
     const [row] = await tx
       .update(invitations)
       .set({ revokedAt: sql`now()` })
@@ -220,7 +222,7 @@ export async function findInvitationByToken(token: string) {
 
 export type AcceptResult =
   | { ok: true; userId: string; teamId: string; teamName: string; email: string; role: Role }
-  | { ok: false; status: 403 | 404 | 409 | 410 | 422; message: string };
+  | { ok: false; reason: "denied" | "not-found" | "conflict" | "gone" | "invalid"; message: string };
 
 /**
  * Accepts an invitation once: a new account gets the name and password hash given; an existing
@@ -239,16 +241,16 @@ export async function acceptInvitation(input: {
       .from(invitations)
       .where(eq(invitations.tokenHash, hashToken(input.token)))
       .for("update");
-    if (!inv) return { ok: false, status: 404, message: "That invitation link is not valid." };
+    if (!inv) return { ok: false, reason: "not-found", message: "That invitation link is not valid." };
     const status = statusOf(inv);
     if (status === "accepted")
-      return { ok: false, status: 409, message: "That invitation has been used already; sign in instead." };
+      return { ok: false, reason: "conflict", message: "That invitation has been used already; sign in instead." };
     if (status === "revoked")
-      return { ok: false, status: 410, message: "That invitation was revoked by the team's owner." };
+      return { ok: false, reason: "gone", message: "That invitation was revoked by the team's owner." };
     if (status === "expired")
       return {
         ok: false,
-        status: 410,
+        reason: "gone",
         message: `That invitation expired on ${inv.expiresAt.toISOString().slice(0, 10)}; ask the owner for a new one.`,
       };
     const [team] = await tx.select({ name: teams.name }).from(teams).where(eq(teams.id, inv.teamId));
@@ -261,18 +263,18 @@ export async function acceptInvitation(input: {
       if (!(await input.checkPassword(existing.passwordHash)))
         return {
           ok: false,
-          status: 403,
+          reason: "denied",
           message: "An account with this e-mail exists: enter its password to join the team.",
         };
       const member = await tx
         .select({ id: memberships.id })
         .from(memberships)
         .where(and(eq(memberships.teamId, inv.teamId), eq(memberships.userId, existing.id)));
-      if (member[0]) return { ok: false, status: 409, message: "You are a member of this team already." };
+      if (member[0]) return { ok: false, reason: "conflict", message: "You are a member of this team already." };
       userId = existing.id;
     } else {
       if (!input.name.trim())
-        return { ok: false, status: 422, message: "Give your name: it is how the team sees you." };
+        return { ok: false, reason: "invalid", message: "Give your name: it is how the team sees you." };
       const [u] = await tx
         .insert(users)
         .values({ email: inv.email, name: input.name.trim(), passwordHash: input.passwordHash })
@@ -300,7 +302,7 @@ export async function acceptInvitation(input: {
   });
 }
 
-export type RemoveResult = { ok: true } | { ok: false; status: 404 | 409; message: string };
+export type RemoveResult = { ok: true } | { ok: false; reason: "not-found" | "conflict"; message: string };
 
 /** Removes a member from the team (not their account); refuses to remove the last owner. */
 export async function removeMember(teamId: string, userId: string, actorId: string): Promise<RemoveResult> {
@@ -312,7 +314,7 @@ export async function removeMember(teamId: string, userId: string, actorId: stri
       .innerJoin(users, eq(users.id, memberships.userId))
       .where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)))
       .for("update", { of: memberships });
-    if (!m) return { ok: false, status: 404, message: "That person is not a member of this team." };
+    if (!m) return { ok: false, reason: "not-found", message: "That person is not a member of this team." };
     if (m.role === "owner") {
       const [owners] = await tx
         .select({ n: sql<number>`count(*)::int` })
@@ -321,7 +323,7 @@ export async function removeMember(teamId: string, userId: string, actorId: stri
       if ((owners?.n ?? 0) <= 1)
         return {
           ok: false,
-          status: 409,
+          reason: "conflict",
           message: "A team must keep at least one owner: make someone else owner first.",
         };
     }

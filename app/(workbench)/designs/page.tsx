@@ -6,27 +6,29 @@ import { buttonClass } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/panel";
 import { listDesigns } from "@/db/queries/designs";
 import { requirePageCaller } from "@/lib/auth/gate";
+import { can } from "@/lib/auth/policy";
 
 export const metadata: Metadata = { title: "Designs" };
 
 export default async function DesignsPage() {
   const caller = await requirePageCaller("/designs");
-  const designs = await listDesigns(caller.teamId, { approvedOnly: caller.role === "maker" });
-  const canCreate = caller.role === "owner" || caller.role === "designer";
+  const approvedOnly = !can(caller, "design.read-unapproved");
+  const designs = await listDesigns(caller.teamId, { approvedOnly });
+  const canCreate = can(caller, "design.create");
   return (
     <div className="flex flex-col gap-4">
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <h1 className="text-lg font-semibold">Designs</h1>
           <p className="text-ink-muted">
-            {caller.role === "maker"
+            {approvedOnly
               ? "The team's approved designs, ready to build."
               : `The shunt-and-amplifier designs of ${caller.teamName}, with their review status and revision.`}
           </p>
         </div>
         {canCreate && (
           <div className="flex items-center gap-2">
-            <ImportDesign role={caller.role} />
+            <ImportDesign />
             <Link href="/designs/new" className={buttonClass("primary")}>
               New design
             </Link>
@@ -34,7 +36,7 @@ export default async function DesignsPage() {
         )}
       </div>
       {designs.length === 0 ? (
-        <EmptyState title={caller.role === "maker" ? "No approved designs yet" : "No designs yet"}>
+        <EmptyState title={approvedOnly ? "No approved designs yet" : "No designs yet"}>
           {canCreate
             ? "Start one with “New design”: state the requirement and pick a shunt and gain from the sweep."
             : "Designs saved by the team's owners and designers appear here."}

@@ -4,7 +4,7 @@ import { HttpError } from "@/lib/http";
 import { usesCatcher } from "@/lib/mail/transport";
 
 /** The mail the built-in catcher received for this team (only while no SMTP_URL is set). */
-export const GET = apiRoute({ roles: ["owner"], doing: "read the outbox" }, async ({ caller }) => {
+export const GET = apiRoute({ action: "team.read-outbox" }, async ({ caller }) => {
   if (!usesCatcher())
     throw new HttpError(
       409,

@@ -12,7 +12,8 @@ import { getDesignView, isUuid, listDesigns, listRevisions } from "@/db/queries/
 import { listReviews } from "@/db/queries/reviews";
 import { formatSI } from "@/lib/design";
 import { requirePageCaller } from "@/lib/auth/gate";
-import type { DesignViewer } from "@/lib/design-view";
+import { can } from "@/lib/auth/policy";
+import { designViewerFor } from "@/lib/design-view";
 import { formatWhen } from "@/lib/saved-designs/when";
 
 export const metadata: Metadata = { title: "Design" };
@@ -23,13 +24,13 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
   if (!isUuid(id)) notFound();
   const design = await getDesignView(id, caller.teamId);
   // Makers see approved designs only; anything else is "not found" for them, as in the API.
-  if (!design || (caller.role === "maker" && design.status !== "approved")) notFound();
-  const viewer: DesignViewer = { userId: caller.userId, role: caller.role };
+  if (!design || !can(caller, "design.read", design)) notFound();
+  const viewer = designViewerFor(caller, design);
   const [revisions, reviews, audit, others] = await Promise.all([
     listRevisions(design.id),
     listReviews(design.id),
     listTargetAudit(caller.teamId, "design", design.id),
-    listDesigns(caller.teamId, { approvedOnly: caller.role === "maker" }),
+    listDesigns(caller.teamId, { approvedOnly: !can(caller, "design.read-unapproved") }),
   ]);
   const { metrics, choice } = design;
   return (
@@ -73,7 +74,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
         </dl>
       </header>
       {/* A maker comes to build: the download, parts list and bench check lead the page. */}
-      {caller.role === "maker" && <BuildSheetPanel design={design} viewer={viewer} />}
+      {viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} />}
       <ComparePicker
         current={{ id: design.id, name: design.name }}
         others={others
@@ -88,7 +89,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
         reviews={reviews}
         audit={audit.map((e) => ({ ...e, at: e.at.toISOString() }))}
       />
-      {caller.role !== "maker" && <BuildSheetPanel design={design} viewer={viewer} />}
+      {!viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} />}
       <ProfilesPanel design={design} viewer={viewer} />
     </div>
   );

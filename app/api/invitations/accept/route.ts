@@ -2,7 +2,7 @@ import bcrypt from "bcryptjs";
 import { z } from "zod";
 import { acceptInvitation } from "@/db/queries/invitations";
 import { parseWith, publicRoute } from "@/lib/auth/gate";
-import { HttpError, json } from "@/lib/http";
+import { HttpError, json, refused } from "@/lib/http";
 
 const acceptSchema = z.object({
   token: z
@@ -35,12 +35,7 @@ export const POST = publicRoute(async (request) => {
     checkPassword: (hash) => bcrypt.compare(body.password, hash),
   });
   if (!result.ok) {
-    if (result.status === 410) throw new HttpError(409, result.message);
-    throw new HttpError(
-      result.status,
-      result.message,
-      result.status === 422 ? { name: ["give your name"] } : undefined,
-    );
+    throw refused(result.reason === "invalid" ? { ...result, fieldErrors: { name: ["give your name"] } } : result);
   }
   return json({ email: result.email, teamName: result.teamName, role: result.role }, 201);
 });
