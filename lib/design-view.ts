@@ -1,6 +1,7 @@
 // What a saved design looks like to the screens: one shape shared by the design page's sections.
 import type { CandidateDetail, Choice, Requirement } from "@/lib/design";
-import type { DesignStatus, Role } from "@/db/schema";
+import type { DesignStatus } from "@/db/schema";
+import { can, leadsWithBuildSheet, type PolicyCaller } from "@/lib/auth/policy";
 
 export type RevisionSummary = {
   revision: number;
@@ -24,5 +25,30 @@ export type DesignView = {
   revisions: RevisionSummary[];
 };
 
-/** What the viewer may do on the design page. */
-export type DesignViewer = { userId: string; role: Role };
+/** What the viewer may do with one design: booleans from the policy, computed on the server. */
+export type DesignViewer = {
+  userId: string;
+  may: {
+    edit: boolean;
+    /** The role gives verdicts at all … */
+    judge: boolean;
+    /** … and on this design's current revision (not its author). */
+    judgeThis: boolean;
+    uploadProfiles: boolean;
+  };
+  /** A maker comes to build: the build sheet leads the page. */
+  leadsWithBuildSheet: boolean;
+};
+
+export function designViewerFor(caller: PolicyCaller, design: { authorId: string }): DesignViewer {
+  return {
+    userId: caller.userId,
+    may: {
+      edit: can(caller, "design.edit"),
+      judge: can(caller, "design.judge"),
+      judgeThis: can(caller, "design.judge", { authorId: design.authorId }),
+      uploadProfiles: can(caller, "profile.upload"),
+    },
+    leadsWithBuildSheet: leadsWithBuildSheet(caller),
+  };
+}

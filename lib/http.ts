@@ -8,6 +8,8 @@ export class HttpError extends Error {
     readonly status: 400 | 401 | 403 | 404 | 409 | 413 | 415 | 422 | 429 | 503,
     message: string,
     readonly fieldErrors?: FieldErrors,
+    /** Extra response headers (Retry-After on a 429). */
+    readonly headers?: Record<string, string>,
   ) {
     super(message);
     this.name = "HttpError";
@@ -16,6 +18,21 @@ export class HttpError extends Error {
 
 export const notFound = (what = "That design") => new HttpError(404, `${what} was not found.`);
 export const forbidden = (why: string) => new HttpError(403, why);
+
+/** Why a query wrote nothing, in its own words (db/queries return these, not statuses). */
+export type QueryRefusal = {
+  ok: false;
+  reason: "unauthenticated" | "not-found" | "conflict" | "gone" | "invalid" | "denied";
+  message: string;
+  fieldErrors?: FieldErrors;
+};
+
+const statusOfReason = { unauthenticated: 401, "not-found": 404, conflict: 409, gone: 409, invalid: 422, denied: 403 } as const;
+
+/** A query's refusal as the API's error: not-found 404, conflict and gone 409, invalid 422, denied 403. */
+export function refused(refusal: QueryRefusal): HttpError {
+  return new HttpError(statusOfReason[refusal.reason], refusal.message, refusal.fieldErrors);
+}
 
 /** A JSON answer; API JSON holds a team's data, so no cache keeps it (next.config.ts says so too). */
 export function json(data: unknown, init?: number | ResponseInit): Response {
@@ -28,7 +45,7 @@ export function json(data: unknown, init?: number | ResponseInit): Response {
 export function errorResponse(error: HttpError): Response {
   return json(
     error.fieldErrors ? { message: error.message, fieldErrors: error.fieldErrors } : { message: error.message },
-    error.status,
+    error.headers ? { status: error.status, headers: error.headers } : error.status,
   );
 }
 

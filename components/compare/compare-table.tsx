@@ -99,7 +99,14 @@ function Section({ title, list, mark }: { title: string; list: Row[]; mark: bool
 }
 
 /** Requirement, choice and every figure side by side, the best value in each figure row marked. */
-export function CompareTable({ designs, viewer }: { designs: DesignView[]; viewer: DesignViewer }) {
+export function CompareTable({
+  designs,
+  viewers,
+}: {
+  designs: DesignView[];
+  /** Per design id, from the policy on the server. */
+  viewers: Record<string, DesignViewer>;
+}) {
   const requirementRows = rows(
     requirementFields,
     designs.map((d) => d.requirement),
@@ -127,7 +134,7 @@ export function CompareTable({ designs, viewer }: { designs: DesignView[]; viewe
                     {d.project ?? "no project"} · revision {d.revision} · {d.authorName}
                   </span>
                   <StatusBadge status={d.status} />
-                  <CompareVerdict design={d} viewer={viewer} />
+                  {viewers[d.id] && <CompareVerdict design={d} viewer={viewers[d.id]!} />}
                 </div>
               </th>
             ))}

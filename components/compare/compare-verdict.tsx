@@ -4,7 +4,8 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { SendMessage } from "@/components/review/send-message";
 import { useSend } from "@/components/review/use-send";
-import type { DesignStatus, Role } from "@/db/schema";
+import type { DesignStatus } from "@/db/schema";
+import type { DesignViewer } from "@/lib/design-view";
 
 /** Approve or return one compared design, for owners and reviewers who did not write it. */
 export function CompareVerdict({
@@ -12,12 +13,12 @@ export function CompareVerdict({
   viewer,
 }: {
   design: { id: string; name: string; status: DesignStatus; revision: number; authorId: string };
-  viewer: { userId: string; role: Role };
+  viewer: DesignViewer;
 }) {
   const s = useSend();
   const [returning, setReturning] = useState(false);
   const [reason, setReason] = useState("");
-  if (viewer.role !== "owner" && viewer.role !== "reviewer") return null;
+  if (!viewer.may.judge) return null;
   // After a verdict the page refreshes into the new status: keep saying what just happened.
   if (design.status !== "in-review")
     return (
@@ -26,7 +27,7 @@ export function CompareVerdict({
         {s.ok && <SendMessage state={s} reload={s.reload} />}
       </div>
     );
-  if (design.authorId === viewer.userId)
+  if (!viewer.may.judgeThis)
     return <p className="text-xs text-ink-faint">You wrote this revision; another reviewer gives the verdict.</p>;
   const post = (verdict: "approve" | "return", body: string, ok: string) =>
     s.send(`/api/designs/${design.id}/reviews`, "POST", { verdict, body, revision: design.revision }, ok);

@@ -13,7 +13,7 @@ import { buttonClass } from "@/components/ui/button";
 export function BuildSheetPanel({ design, viewer }: { design: DesignView; viewer: DesignViewer }) {
   const base = `/api/designs/${design.id}`;
   const approved = design.status === "approved";
-  const maker = viewer.role === "maker";
+  const maker = viewer.leadsWithBuildSheet;
   const parts = partsList(design.requirement, design.choice);
   const bench = benchRows(design.requirement, design.choice);
   const howTo = benchHowTo(design.requirement);

@@ -21,6 +21,8 @@ type ListItem = {
   uploadedBy: string;
   uploadedByName: string;
   createdAt: string;
+  /** From the policy on the server: the uploader or an owner. */
+  canDelete: boolean;
 };
 
 type Detail = ListItem & {
@@ -40,7 +42,7 @@ async function getJson<T>(url: string): Promise<T> {
 
 /** Current-profile uploads of a saved design: upload, the list, the summary and the chart. */
 export function ProfilesPanel({ design, viewer }: { design: DesignView; viewer: DesignViewer }) {
-  const canUpload = viewer.role === "owner" || viewer.role === "designer";
+  const canUpload = viewer.may.uploadProfiles;
   const qc = useQueryClient();
   const listKey = ["profiles", design.id];
   const list = useQuery({
@@ -126,7 +128,7 @@ export function ProfilesPanel({ design, viewer }: { design: DesignView; viewer: 
                         (rev. {p.revision})
                       </td>
                       <td className="px-2 py-1 text-right">
-                        {(p.uploadedBy === viewer.userId || viewer.role === "owner") && (
+                        {p.canDelete && (
                           <Button variant="ghost" onClick={() => remove(p)} aria-label={`Delete ${p.fileName}`}>
                             Delete
                           </Button>

@@ -14,10 +14,8 @@ export function ReviewActions({ design, viewer }: { design: DesignView; viewer: 
   const [reason, setReason] = useState("");
   const [name, setName] = useState(design.name);
   const [project, setProject] = useState(design.project ?? "");
-  const canEdit = viewer.role === "owner" || viewer.role === "designer";
+  const canEdit = viewer.may.edit;
   const canSubmit = canEdit && (design.status === "draft" || design.status === "returned");
-  const mayJudge = viewer.role === "owner" || viewer.role === "reviewer";
-  const isAuthor = viewer.userId === design.authorId;
   const url = `/api/designs/${design.id}`;
 
   return (
@@ -46,12 +44,12 @@ export function ReviewActions({ design, viewer }: { design: DesignView; viewer: 
         )}
       </div>
 
-      {design.status === "in-review" && mayJudge && isAuthor && (
+      {design.status === "in-review" && viewer.may.judge && !viewer.may.judgeThis && (
         <p className="text-xs text-ink-muted">
           You wrote this revision, so the verdict must come from another reviewer or owner. You can still comment.
         </p>
       )}
-      {design.status === "in-review" && mayJudge && !isAuthor && (
+      {design.status === "in-review" && viewer.may.judgeThis && (
         <form
           className="flex flex-col gap-2 rounded border border-line bg-sunken p-3"
           onSubmit={(e) => e.preventDefault()}

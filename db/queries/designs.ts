@@ -277,11 +277,12 @@ export type ReviseInput = SavedFigures & {
   changed: string[];
 };
 
-export type ReviseResult = { ok: true; revision: number } | { ok: false; status: 404 | 409; message: string };
+export type ReviseResult =
+  { ok: true; revision: number } | { ok: false; reason: "not-found" | "conflict"; message: string };
 
 /** Writes a new revision in draft, or nothing at all when the caller's revision is stale. */
 export async function reviseDesign(input: ReviseInput): Promise<ReviseResult> {
-  if (!isUuid(input.designId)) return { ok: false, status: 404, message: "That design was not found." };
+  if (!isUuid(input.designId)) return { ok: false, reason: "not-found", message: "That design was not found." };
   const db = await getDb();
   return db.transaction(async (tx) => {
     const updated = await tx
@@ -307,10 +308,10 @@ export async function reviseDesign(input: ReviseInput): Promise<ReviseResult> {
         .select({ revision: designs.revision })
         .from(designs)
         .where(and(eq(designs.id, input.designId), eq(designs.teamId, input.teamId)));
-      if (!exists[0]) return { ok: false, status: 404, message: "That design was not found." } as const;
+      if (!exists[0]) return { ok: false, reason: "not-found", message: "That design was not found." } as const;
       return {
         ok: false,
-        status: 409,
+        reason: "conflict",
         message: `Someone else saved this design first: it is at revision ${exists[0].revision}, you edited revision ${input.expectedRevision}. Nothing was saved; reload to see their changes.`,
       } as const;
     }
@@ -330,11 +331,11 @@ export async function reviseDesign(input: ReviseInput): Promise<ReviseResult> {
   });
 }
 
-export type StatusChange = { ok: true } | { ok: false; status: 404 | 409; message: string };
+export type StatusChange = { ok: true } | { ok: false; reason: "not-found" | "conflict"; message: string };
 
 /**
  * Moves a design to `to` only if it is still at `revision` and in one of `from`; audited with the
- * change. Returns 409 when someone changed it meanwhile.
+ * change. Refuses (conflict) when someone changed it meanwhile.
  */
 export async function changeDesignStatus(input: {
   designId: string;
@@ -366,7 +367,7 @@ export async function changeDesignStatus(input: {
     if (!updated[0])
       return {
         ok: false,
-        status: 409,
+        reason: "conflict",
         message: "The design changed while you were looking at it; reload and try again.",
       };
     await recordAudit(

@@ -34,7 +34,7 @@ export type CreateInvitationResult =
       role: Role;
       expiresAt: string;
     }
-  | { ok: false; status: 409; message: string };
+  | { ok: false; reason: "conflict"; message: string };
 
 /**
  * Invites `email` to the caller's team with `role` — or, with `newTeam`, creates that team and
@@ -65,7 +65,7 @@ export async function createInvitation(input: {
         .from(memberships)
         .innerJoin(users, eq(users.id, memberships.userId))
         .where(and(eq(memberships.teamId, teamId), sql`lower(${users.email}) = ${email}`));
-      if (member[0]) return { ok: false, status: 409, message: `${email} is already a member of this team.` };
+      if (member[0]) return { ok: false, reason: "conflict", message: `${email} is already a member of this team.` };
       const pending = await tx
         .select({ id: invitations.id })
         .from(invitations)
@@ -81,7 +81,7 @@ export async function createInvitation(input: {
       if (pending[0])
         return {
           ok: false,
-          status: 409,
+          reason: "conflict",
           message: `${email} already has a pending invitation; revoke it first to send a new one.`,
         };
       const [team] = await tx.select({ name: teams.name }).from(teams).where(eq(teams.id, teamId));
@@ -158,7 +158,8 @@ export async function listInvitations(teamId: string) {
   }));
 }
 
-export type RevokeResult = { ok: true; revokedAt: string } | { ok: false; status: 404 | 409; message: string };
+export type RevokeResult =
+  { ok: true; revokedAt: string } | { ok: false; reason: "not-found" | "conflict"; message: string };
 
 export async function revokeInvitation(teamId: string, id: string, actorId: string): Promise<RevokeResult> {
   const db = await getDb();
@@ -168,9 +169,10 @@ export async function revokeInvitation(teamId: string, id: string, actorId: stri
       .from(invitations)
       .where(and(eq(invitations.id, id), eq(invitations.teamId, teamId)))
       .for("update");
-    if (!inv) return { ok: false, status: 404, message: "That invitation was not found in your team." };
+    if (!inv) return { ok: false, reason: "not-found", message: "That invitation was not found in your team." };
     const status = statusOf(inv);
-    if (status !== "pending") return { ok: false, status: 409, message: `That invitation is already ${status}.` };
+    if (status !== "pending")
+      return { ok: false, reason: "conflict", message: `That invitation is already ${status}.` };
     const [row] = await tx
       .update(invitations)
       .set({ revokedAt: sql`now()` })
@@ -221,7 +223,7 @@ export async function findInvitationByToken(token: string) {
 
 export type AcceptResult =
   | { ok: true; userId: string; teamId: string; teamName: string; email: string; role: Role; newAccount: boolean }
-  | { ok: false; status: 401 | 403 | 404 | 409 | 410 | 422; message: string; field?: string };
+  | { ok: false; reason: "unauthenticated" | "denied" | "not-found" | "conflict" | "gone" | "invalid"; message: string; field?: string };
 
 /**
  * Accepts an invitation once. An invitation for an existing account is accepted only by a caller
@@ -249,7 +251,7 @@ export async function acceptInvitation(input: {
     // A refusal is recorded in the invitation's team and, when the invited e-mail has an account, in
     // that account's teams too: their owners see who tried to pull their member elsewhere.
     const refuse = async (
-      status: 401 | 403 | 404 | 409 | 410 | 422,
+      refusal: "unauthenticated" | "denied" | "not-found" | "conflict" | "gone" | "invalid",
       message: string,
       reason: string,
       field?: string,
@@ -278,16 +280,16 @@ export async function acceptInvitation(input: {
           tx,
         );
       }
-      return { ok: false, status, message, ...(field ? { field } : {}) };
+      return { ok: false, reason: refusal, message, ...(field ? { field } : {}) };
     };
-    if (!inv) return refuse(404, "That invitation link is not valid.", "unknown token");
+    if (!inv) return refuse("not-found", "That invitation link is not valid.", "unknown token");
     const status = statusOf(inv);
     if (status === "accepted")
-      return refuse(409, "That invitation has been used already; sign in instead.", "already accepted");
-    if (status === "revoked") return refuse(410, "That invitation was revoked by the team's owner.", "revoked");
+      return refuse("conflict", "That invitation has been used already; sign in instead.", "already accepted");
+    if (status === "revoked") return refuse("gone", "That invitation was revoked by the team's owner.", "revoked");
     if (status === "expired")
       return refuse(
-        410,
+        "gone",
         `That invitation expired on ${inv.expiresAt.toISOString().slice(0, 10)}; ask the owner for a new one.`,
         "expired",
       );
@@ -299,12 +301,12 @@ export async function acceptInvitation(input: {
         const how = `sign in as ${inv.email}, open the invitation link again and press Join`;
         return input.signedInUserId
           ? refuse(
-              403,
+              "denied",
               `This invitation is for ${inv.email}, not for the account you are signed in as: ${how}.`,
               "signed in as another account",
             )
           : refuse(
-              401,
+              "unauthenticated",
               `An account with ${inv.email} exists: ${how}. A password is never accepted here.`,
               input.passwordOffered ? "password offered for an existing account" : "not signed in",
             );
@@ -313,13 +315,13 @@ export async function acceptInvitation(input: {
         .select({ id: memberships.id })
         .from(memberships)
         .where(and(eq(memberships.teamId, inv.teamId), eq(memberships.userId, existing.id)));
-      if (member[0]) return refuse(409, "You are a member of this team already.", "already a member");
+      if (member[0]) return refuse("conflict", "You are a member of this team already.", "already a member");
       userId = existing.id;
     } else {
       if (!input.newAccount)
-        return refuse(422, "Choose a password for your new account.", "no password for a new account", "password");
+        return refuse("invalid", "Choose a password for your new account.", "no password for a new account", "password");
       if (!input.newAccount.name.trim())
-        return refuse(422, "Give your name: it is how the team sees you.", "no name", "name");
+        return refuse("invalid", "Give your name: it is how the team sees you.", "no name", "name");
       const [u] = await tx
         .insert(users)
         .values({ email: inv.email, name: input.newAccount.name.trim(), passwordHash: input.newAccount.passwordHash })
@@ -355,7 +357,7 @@ export async function acceptInvitation(input: {
   });
 }
 
-export type RemoveResult = { ok: true } | { ok: false; status: 404 | 409; message: string };
+export type RemoveResult = { ok: true } | { ok: false; reason: "not-found" | "conflict"; message: string };
 
 /** Removes a member from the team (not their account); refuses to remove the last owner. */
 export async function removeMember(teamId: string, userId: string, actorId: string): Promise<RemoveResult> {
@@ -367,7 +369,7 @@ export async function removeMember(teamId: string, userId: string, actorId: stri
       .innerJoin(users, eq(users.id, memberships.userId))
       .where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)))
       .for("update", { of: memberships });
-    if (!m) return { ok: false, status: 404, message: "That person is not a member of this team." };
+    if (!m) return { ok: false, reason: "not-found", message: "That person is not a member of this team." };
     if (m.role === "owner") {
       const [owners] = await tx
         .select({ n: sql<number>`count(*)::int` })
@@ -376,7 +378,7 @@ export async function removeMember(teamId: string, userId: string, actorId: stri
       if ((owners?.n ?? 0) <= 1)
         return {
           ok: false,
-          status: 409,
+          reason: "conflict",
           message: "A team must keep at least one owner: make someone else owner first.",
         };
     }

@@ -58,12 +58,12 @@ async function nameTaken(tx: Tx, kind: PartKind, teamId: string, name: string, e
 }
 
 export type WriteResult<T> =
-  { ok: true; row: T } | { ok: false; status: 404 | 409 | 422; message: string; field?: string };
+  { ok: true; row: T } | { ok: false; reason: "not-found" | "conflict" | "invalid"; message: string; field?: string };
 
 const duplicate = (name: string) =>
   ({
     ok: false,
-    status: 422,
+    reason: "invalid",
     message: `A part named "${name}" is already in the library; choose another name.`,
     field: "name",
   }) as const;
@@ -124,7 +124,7 @@ export async function createShunt(
 
 /**
  * Replaces a part's fields (already merged and checked). With `expectedUpdatedAt`, a part changed
- * by someone else since it was read is refused (409) rather than overwritten.
+ * by someone else since it was read is refused (conflict) rather than overwritten.
  */
 export async function updateAmplifier(
   teamId: string,
@@ -140,11 +140,11 @@ export async function updateAmplifier(
       .from(libraryAmplifiers)
       .where(and(eq(libraryAmplifiers.teamId, teamId), eq(libraryAmplifiers.id, id)))
       .for("update");
-    if (!current) return { ok: false, status: 404, message: "That amplifier was not found in the library." };
+    if (!current) return { ok: false, reason: "not-found", message: "That amplifier was not found in the library." };
     if (expectedUpdatedAt && current.updatedAt.toISOString() !== expectedUpdatedAt)
       return {
         ok: false,
-        status: 409,
+        reason: "conflict",
         message: "Someone changed this amplifier since you opened it; reload and make your change again.",
       };
     if (await nameTaken(tx, "amplifiers", teamId, values.name, id)) return duplicate(values.name);
@@ -182,11 +182,11 @@ export async function updateShunt(
       .from(libraryShunts)
       .where(and(eq(libraryShunts.teamId, teamId), eq(libraryShunts.id, id)))
       .for("update");
-    if (!current) return { ok: false, status: 404, message: "That shunt was not found in the library." };
+    if (!current) return { ok: false, reason: "not-found", message: "That shunt was not found in the library." };
     if (expectedUpdatedAt && current.updatedAt.toISOString() !== expectedUpdatedAt)
       return {
         ok: false,
-        status: 409,
+        reason: "conflict",
         message: "Someone changed this shunt since you opened it; reload and make your change again.",
       };
     if (await nameTaken(tx, "shunts", teamId, values.name, id)) return duplicate(values.name);

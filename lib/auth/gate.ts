@@ -11,6 +11,7 @@ import { HttpError, errorResponse, invalid, json } from "@/lib/http";
 import { readBodyText } from "@/lib/read-upload";
 import { assertSameOrigin } from "./same-origin";
 import { authOptions } from "./options";
+import { can, doingOf, rolesFor, type Action, type ResourceArg } from "./policy";
 
 export type Caller = {
   userId: string;
@@ -19,6 +20,10 @@ export type Caller = {
   teamId: string;
   teamName: string;
   role: Role;
+  /** How the request proved who it is: a session cookie or a personal API token. */
+  via: "session" | "token";
+  /** What the request may do: a session always writes; a token as its access says. */
+  access: "read" | "write";
 };
 
 type SessionShape = { userId?: string; teamId?: string; sessionVersion?: number } | null;
@@ -30,7 +35,7 @@ export async function currentCaller(): Promise<Caller | null> {
   const member = await getMember(session.userId, session.teamId);
   if (!member || member.sessionVersion !== (session.sessionVersion ?? 0)) return null;
   const { sessionVersion: _version, ...caller } = member;
-  return caller;
+  return { ...caller, via: "session", access: "write" };
 }
 
 const roleNames: Record<Role, string> = {
@@ -45,9 +50,44 @@ export function describeRoles(roles: readonly Role[]): string {
   return names.length <= 1 ? (names[0] ?? "nobody") : `${names.slice(0, -1).join(", ")} and ${names.at(-1)}`;
 }
 
-export function assertRole(caller: Caller, roles: readonly Role[] | undefined, doing: string) {
-  if (roles && !roles.includes(caller.role)) {
-    throw new HttpError(403, `Only ${describeRoles(roles)} may ${doing}; you are signed in as a ${caller.role}.`);
+/**
+ * 403 unless the policy allows the action (lib/auth/policy.ts). `refusal` words a refusal that
+ * comes from the resource rather than the role ("you wrote this revision").
+ */
+export function authorize<A extends Action>(
+  caller: Caller,
+  action: A,
+  options: { doing?: string; refusal?: string } = {},
+  ...resource: ResourceArg<A>
+) {
+  const doing = options.doing ?? doingOf(action);
+  if (!rolesFor(action).includes(caller.role)) {
+    throw new HttpError(
+      403,
+      `Only ${describeRoles(rolesFor(action))} may ${doing}; you are signed in as a ${caller.role}.`,
+    );
+  }
+  if (!can(caller, action, ...resource)) {
+    throw new HttpError(403, options.refusal ?? `You may not ${doing}.`);
+  }
+}
+
+/** The gate's own checks: a read-only token only reads; then the action's (or legacy roles') rule. */
+function checkOptions(
+  caller: Caller,
+  options: { action?: Action; roles?: readonly Role[]; doing?: string },
+  method: string,
+) {
+  if (caller.access === "read" && !["GET", "HEAD"].includes(method.toUpperCase())) {
+    throw new HttpError(403, "This API token is read-only: it may only GET. Create a token with write access.");
+  }
+  if (options.action) authorize(caller, options.action, { doing: options.doing });
+  if (options.roles && !options.roles.includes(caller.role)) {
+    const doing = options.doing ?? "do this";
+    throw new HttpError(
+      403,
+      `Only ${describeRoles(options.roles)} may ${doing}; you are signed in as a ${caller.role}.`,
+    );
   }
 }
 
@@ -90,9 +130,11 @@ const truncateType = (type: string) => (type.length > 60 ? `${type.slice(0, 60)}
 type RouteContext = { params: Promise<Record<string, string | string[]>> };
 
 type Options<B, Q> = {
-  /** Roles allowed; omit for any team member. */
+  /** The policy action the route performs (lib/auth/policy.ts); omit for any team member. */
+  action?: Action;
+  /** @deprecated name an `action` instead; kept so a route written before the policy still checks roles. */
   roles?: readonly Role[];
-  /** What the caller is trying to do, for the 403 message ("save designs"). */
+  /** What the caller is trying to do, for the 403 message (defaults to the action's own words). */
   doing?: string;
   body?: z.ZodType<B>;
   query?: z.ZodType<Q>;
@@ -113,7 +155,7 @@ export function apiRoute<B = undefined, Q = undefined>(options: Options<B, Q>, h
       assertSameOrigin(request);
       const caller = await currentCaller();
       if (!caller) throw new HttpError(401, "Sign in first.");
-      assertRole(caller, options.roles, options.doing ?? "do this");
+      checkOptions(caller, options, request.method);
       const rawParams = context?.params ? await context.params : {};
       const params = Object.fromEntries(
         Object.entries(rawParams).map(([k, v]) => [k, Array.isArray(v) ? v.join("/") : v]),
@@ -167,14 +209,14 @@ export type ActionResult<T> =
 
 /** Wraps a server action the same way apiRoute wraps a route. */
 export function serverAction<I, T>(
-  options: { roles?: readonly Role[]; doing?: string; input: z.ZodType<I> },
+  options: { action?: Action; roles?: readonly Role[]; doing?: string; input: z.ZodType<I> },
   fn: (ctx: { caller: Caller; input: I }) => Promise<T>,
 ) {
   return async (raw: unknown): Promise<ActionResult<T>> => {
     try {
       const caller = await currentCaller();
       if (!caller) throw new HttpError(401, "Sign in first.");
-      assertRole(caller, options.roles, options.doing ?? "do this");
+      checkOptions(caller, options, "POST");
       const input = parseWith(options.input, raw);
       return { ok: true, data: await fn({ caller, input }) };
     } catch (e) {

@@ -3,9 +3,7 @@
 import "server-only";
 import type { z } from "zod";
 import type { WriteResult } from "@/db/queries/library";
-import { HttpError, invalid } from "@/lib/http";
-
-export const editorRoles = ["owner", "designer"] as const;
+import { HttpError, invalid, refused } from "@/lib/http";
 
 /** The stored part with the patch's fields over it, checked by the full schema (422 on a bad mix). */
 export function mergePatch<T>(
@@ -23,7 +21,7 @@ export function mergePatch<T>(
 /** The written row, or the refusal as an HttpError. */
 export function written<T>(result: WriteResult<T>): T {
   if (result.ok) return result.row;
-  throw new HttpError(result.status, result.message, result.field ? { [result.field]: [result.message] } : undefined);
+  throw refused(result.field ? { ...result, fieldErrors: { [result.field]: [result.message] } } : result);
 }
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;

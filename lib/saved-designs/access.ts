@@ -4,6 +4,7 @@
 import "server-only";
 import { getDesign, getDesignView } from "@/db/queries/designs";
 import type { Caller } from "@/lib/auth/gate";
+import { can } from "@/lib/auth/policy";
 import { HttpError } from "@/lib/http";
 
 export const designNotFound = () => new HttpError(404, "That design was not found in your team.");
@@ -17,7 +18,7 @@ const notApprovedForMakers = () =>
 export async function designFor(caller: Caller, id: string) {
   const found = await getDesign(id, caller.teamId);
   if (!found) throw designNotFound();
-  if (caller.role === "maker" && found.design.status !== "approved") throw notApprovedForMakers();
+  if (!can(caller, "design.read", found.design)) throw notApprovedForMakers();
   return found;
 }
 
@@ -25,6 +26,6 @@ export async function designFor(caller: Caller, id: string) {
 export async function designViewFor(caller: Caller, id: string) {
   const view = await getDesignView(id, caller.teamId);
   if (!view) throw designNotFound();
-  if (caller.role === "maker" && view.status !== "approved") throw notApprovedForMakers();
+  if (!can(caller, "design.read", view)) throw notApprovedForMakers();
   return view;
 }

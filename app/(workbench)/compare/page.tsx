@@ -6,7 +6,8 @@ import { EmptyState } from "@/components/ui/panel";
 import { getDesignView } from "@/db/queries/designs";
 import { errorCurve, loadCurve } from "@/lib/design";
 import { requirePageCaller } from "@/lib/auth/gate";
-import type { DesignView } from "@/lib/design-view";
+import { can } from "@/lib/auth/policy";
+import { designViewerFor, type DesignView } from "@/lib/design-view";
 import { compareQuery } from "@/lib/saved-designs/compare";
 
 export const metadata: Metadata = { title: "Compare designs" };
@@ -32,13 +33,13 @@ export default async function ComparePage({
     );
   }
   const found = await Promise.all(parsed.data.ids.map((id) => getDesignView(id, caller.teamId)));
-  const designs = found.filter((d): d is DesignView => !!d && (caller.role !== "maker" || d.status === "approved"));
+  const designs = found.filter((d): d is DesignView => !!d && can(caller, "design.read", d));
   const missing = found.length - designs.length;
   if (designs.length < 2) {
     return (
       <EmptyState title="Not enough designs to compare">
         {missing} of the designs asked for {missing === 1 ? "was" : "were"} not found in your team
-        {caller.role === "maker" ? " among the approved ones" : ""}.{" "}
+        {can(caller, "design.read-unapproved") ? "" : " among the approved ones"}.{" "}
         <Link href="/designs" className="text-copper underline">
           Go to the designs
         </Link>
@@ -86,7 +87,10 @@ export default async function ComparePage({
           testId="compare-burden-chart"
         />
       </div>
-      <CompareTable designs={designs} viewer={{ userId: caller.userId, role: caller.role }} />
+      <CompareTable
+        designs={designs}
+        viewers={Object.fromEntries(designs.map((d) => [d.id, designViewerFor(caller, d)]))}
+      />
     </div>
   );
 }

@@ -8,6 +8,7 @@ import { EmptyState } from "@/components/ui/panel";
 import { pageDesigns } from "@/db/queries/designs";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { decodeListCursor, encodeListCursor } from "@/lib/saved-designs/list-cursor";
+import { can } from "@/lib/auth/policy";
 
 export const metadata: Metadata = { title: "Designs" };
 
@@ -19,13 +20,14 @@ export default async function DesignsPage({
   searchParams: Promise<Record<string, string | string[] | undefined>>;
 }) {
   const caller = await requirePageCaller("/designs");
+  const approvedOnly = !can(caller, "design.read-unapproved");
   const params = readListParams(await searchParams);
   // The page the URL names, rendered here so the first paint has rows; the table takes over in the
   // browser through GET /api/designs. A cursor this team's list did not give out starts at page 1.
   const after = params.cursor ? decodeListCursor(caller.teamId, params.cursor) : undefined;
   if (after === null) params.cursor = "";
   const page = await pageDesigns(caller.teamId, {
-    approvedOnly: caller.role === "maker",
+    approvedOnly,
     status: params.status || undefined,
     q: params.q || undefined,
     limit: PAGE_SIZE,
@@ -36,21 +38,21 @@ export default async function DesignsPage({
     nextCursor: page.next ? encodeListCursor(caller.teamId, page.next) : null,
   };
   const teamHasNone = !params.q && !params.status && !params.cursor && page.designs.length === 0;
-  const canCreate = caller.role === "owner" || caller.role === "designer";
+  const canCreate = can(caller, "design.create");
   return (
     <div className="flex min-w-0 flex-col gap-4">
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div className="min-w-0">
           <h1 className="text-lg font-semibold">Designs</h1>
           <p className="text-ink-muted">
-            {caller.role === "maker"
+            {approvedOnly
               ? "The team's approved designs, ready to build."
               : `The shunt-and-amplifier designs of ${caller.teamName}, with their review status and revision.`}
           </p>
         </div>
         {canCreate && (
           <div className="flex items-center gap-2">
-            <ImportDesign role={caller.role} />
+            <ImportDesign />
             <Link href="/designs/new" className={buttonClass("primary")}>
               New design
             </Link>
@@ -58,7 +60,7 @@ export default async function DesignsPage({
         )}
       </div>
       {teamHasNone ? (
-        <EmptyState title={caller.role === "maker" ? "No approved designs yet" : "No designs yet"}>
+        <EmptyState title={approvedOnly ? "No approved designs yet" : "No designs yet"}>
           {canCreate
             ? "Start one with “New design”: state the requirement and pick a shunt and gain from the sweep."
             : "Designs saved by the team's owners and designers appear here."}

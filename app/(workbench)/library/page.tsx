@@ -2,13 +2,14 @@ import type { Metadata } from "next";
 import { LibraryWorkbench } from "@/components/library/library-workbench";
 import { listLibrary } from "@/db/queries/library";
 import { requirePageCaller } from "@/lib/auth/gate";
+import { can } from "@/lib/auth/policy";
 
 export const metadata: Metadata = { title: "Library" };
 
 export default async function LibraryPage() {
   const caller = await requirePageCaller("/library");
   const library = await listLibrary(caller.teamId);
-  const canEdit = caller.role === "owner" || caller.role === "designer";
+  const canEdit = can(caller, "library.edit");
   return (
     <div className="flex flex-col gap-2">
       <div>

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { EmptyState, Panel } from "@/components/ui/panel";
 import { listTeamMail } from "@/db/queries/mail";
 import { requirePageCaller } from "@/lib/auth/gate";
+import { can } from "@/lib/auth/policy";
 import { formatWhen } from "@/lib/saved-designs/when";
 import { usesOutbox } from "@/lib/mail/transport";
 
@@ -9,7 +10,7 @@ export const metadata: Metadata = { title: "Outbox" };
 
 export default async function OutboxPage() {
   const caller = await requirePageCaller("/outbox");
-  if (caller.role !== "owner") {
+  if (!can(caller, "team.read-outbox")) {
     return (
       <EmptyState title="Only owners read the outbox">
         The outbox shows every mail the workbench sent for the team; ask an owner.

@@ -9,28 +9,30 @@ import { listDesigns } from "@/db/queries/designs";
 import { listInvitations } from "@/db/queries/invitations";
 import { listMembers } from "@/db/queries/users";
 import { requirePageCaller } from "@/lib/auth/gate";
+import { can } from "@/lib/auth/policy";
 
 export const metadata: Metadata = { title: "Team" };
 
 export default async function TeamPage() {
   const caller = await requirePageCaller("/team");
   const members = await listMembers(caller.teamId);
+  const manages = can(caller, "team.manage-members");
   return (
     <div className="flex flex-col gap-4">
       <div>
         <h1 className="text-lg font-semibold">{caller.teamName}</h1>
         <p className="text-ink-muted">
-          {caller.role === "owner"
+          {manages
             ? "You are an owner: you can change each member's role. A team always keeps at least one owner."
             : "Members and their roles. Only owners change roles."}
         </p>
       </div>
       <MemberTable
         members={members.map((m) => ({ ...m, joinedAt: m.joinedAt.toISOString() }))}
-        canEdit={caller.role === "owner"}
+        canEdit={manages}
         selfId={caller.userId}
       />
-      {caller.role === "owner" && <OwnerSections teamId={caller.teamId} selfId={caller.userId} members={members} />}
+      {manages && <OwnerSections teamId={caller.teamId} selfId={caller.userId} members={members} />}
     </div>
   );
 }

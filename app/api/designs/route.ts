@@ -2,6 +2,7 @@ import { z } from "zod";
 import { pageDesigns } from "@/db/queries/designs";
 import { designStatusEnum } from "@/db/schema";
 import { apiRoute } from "@/lib/auth/gate";
+import { can } from "@/lib/auth/policy";
 import { HttpError, json } from "@/lib/http";
 import { decodeListCursor, encodeListCursor } from "@/lib/saved-designs/list-cursor";
 import { idempotencyKeyOf, saveNewDesign } from "@/lib/saved-designs/create";
@@ -22,7 +23,7 @@ const listQuery = z.object({
 });
 
 // Paged newest change first (API v2): {designs, nextCursor}; makers page approved designs only.
-export const GET = apiRoute({ doing: "list designs", query: listQuery }, async ({ caller, query }) => {
+export const GET = apiRoute({ action: "design.read", doing: "list designs", query: listQuery }, async ({ caller, query }) => {
   const after = query.cursor ? decodeListCursor(caller.teamId, query.cursor) : undefined;
   if (after === null) {
     throw new HttpError(422, "Invalid input at cursor: it was not given out by this team's designs list.", {
@@ -30,7 +31,7 @@ export const GET = apiRoute({ doing: "list designs", query: listQuery }, async (
     });
   }
   const page = await pageDesigns(caller.teamId, {
-    approvedOnly: caller.role === "maker",
+    approvedOnly: !can(caller, "design.read-unapproved"),
     status: query.status,
     q: query.q || undefined,
     limit: query.limit,
@@ -39,10 +40,7 @@ export const GET = apiRoute({ doing: "list designs", query: listQuery }, async (
   return { designs: page.designs, nextCursor: page.next ? encodeListCursor(caller.teamId, page.next) : null };
 });
 
-export const POST = apiRoute(
-  { roles: ["owner", "designer"], doing: "save designs", body: createDesignSchema },
-  async ({ caller, body, request }) => {
-    // A repeat with the same Idempotency-Key answers as the first time (201, same id) and creates nothing.
-    return json(await saveNewDesign(caller, body, idempotencyKeyOf(request)), 201);
-  },
-);
+export const POST = apiRoute({ action: "design.create", body: createDesignSchema }, async ({ caller, body, request }) => {
+  // A repeat with the same Idempotency-Key answers as the first time (201, same id) and creates nothing.
+  return json(await saveNewDesign(caller, body, idempotencyKeyOf(request)), 201);
+});

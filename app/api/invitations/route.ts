@@ -1,7 +1,7 @@
 import { z } from "zod";
 import { createInvitation, listInvitations } from "@/db/queries/invitations";
 import { apiRoute } from "@/lib/auth/gate";
-import { HttpError, json } from "@/lib/http";
+import { HttpError, json, refused } from "@/lib/http";
 import { invitationPath, mailInvitation } from "@/lib/mail/invitation";
 import { linkTo } from "@/lib/mail/send";
 import { roleSchema } from "@/lib/team-schemas";
@@ -29,12 +29,12 @@ const body = z
       ctx.addIssue({ code: "custom", path: ["role"], message: "The first member of a new team is its owner" });
   });
 
-export const GET = apiRoute({ roles: ["owner"], doing: "see invitations" }, async ({ caller }) => ({
+export const GET = apiRoute({ action: "team.manage-invitations", doing: "see invitations" }, async ({ caller }) => ({
   invitations: await listInvitations(caller.teamId),
 }));
 
 /** Invites someone by e-mail (or founds a new team whose first owner they become); mails the single-use link. */
-export const POST = apiRoute({ roles: ["owner"], doing: "invite people", body }, async ({ caller, body }) => {
+export const POST = apiRoute({ action: "team.manage-invitations", body }, async ({ caller, body }) => {
   const created = await createInvitation({
     teamId: caller.teamId,
     invitedBy: caller.userId,
@@ -42,7 +42,7 @@ export const POST = apiRoute({ roles: ["owner"], doing: "invite people", body },
     role: body.role ?? "owner",
     newTeam: body.newTeam,
   });
-  if (!created.ok) throw new HttpError(created.status, created.message);
+  if (!created.ok) throw refused(created);
   const mailed = await mailInvitation({
     inviterTeamId: caller.teamId,
     actor: caller,

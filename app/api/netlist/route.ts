@@ -31,7 +31,7 @@ function collect<T>(errors: FieldErrors, parse: () => T): T | null {
 }
 
 export const POST = apiRoute(
-  { body: z.unknown(), query: querySchema, doing: "write netlists" },
+  { action: "engine.use", body: z.unknown(), query: querySchema, doing: "write netlists" },
   async ({ body, query }) => {
     const raw = objectBody(body);
     const errors: FieldErrors = {};

@@ -4,7 +4,7 @@ import { HttpError } from "@/lib/http";
 import { usesOutbox } from "@/lib/mail/transport";
 
 /** The mail the built-in outbox kept for this team (only while no SMTP_URL is set), by its team column. */
-export const GET = apiRoute({ roles: ["owner"], doing: "read the outbox" }, async ({ caller }) => {
+export const GET = apiRoute({ action: "team.read-outbox" }, async ({ caller }) => {
   if (!usesOutbox())
     throw new HttpError(
       409,

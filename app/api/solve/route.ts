@@ -6,7 +6,7 @@ import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
 import { objectBody, requirementOr422 } from "@/lib/engine-requests";
 
-export const POST = apiRoute({ body: z.unknown(), doing: "run the solver" }, async ({ body }) => {
+export const POST = apiRoute({ action: "engine.use", body: z.unknown(), doing: "run the solver" }, async ({ body }) => {
   const { rank, ...rest } = objectBody(body);
   if (rank !== undefined && typeof rank !== "string") {
     throw new HttpError(422, "Invalid input at rank: expected a ranking expression as text", {

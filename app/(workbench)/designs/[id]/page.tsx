@@ -12,7 +12,8 @@ import { getDesignView, isUuid, listRevisions, pageDesigns } from "@/db/queries/
 import { listReviews } from "@/db/queries/reviews";
 import { formatSI } from "@/lib/design";
 import { requirePageCaller } from "@/lib/auth/gate";
-import type { DesignViewer } from "@/lib/design-view";
+import { can } from "@/lib/auth/policy";
+import { designViewerFor } from "@/lib/design-view";
 import { formatWhen } from "@/lib/saved-designs/when";
 
 export const metadata: Metadata = { title: "Design" };
@@ -23,14 +24,14 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
   if (!isUuid(id)) notFound();
   const design = await getDesignView(id, caller.teamId);
   // Makers see approved designs only; anything else is "not found" for them, as in the API.
-  if (!design || (caller.role === "maker" && design.status !== "approved")) notFound();
-  const viewer: DesignViewer = { userId: caller.userId, role: caller.role };
+  if (!design || !can(caller, "design.read", design)) notFound();
+  const viewer = designViewerFor(caller, design);
   const [revisions, reviews, audit, others] = await Promise.all([
     listRevisions(design.id),
     listReviews(design.id),
     listTargetAudit(caller.teamId, "design", design.id),
     // The picker offers the team's 50 most recently changed designs; the list page reaches the rest.
-    pageDesigns(caller.teamId, { approvedOnly: caller.role === "maker", limit: 50 }).then((p) => p.designs),
+    pageDesigns(caller.teamId, { approvedOnly: !can(caller, "design.read-unapproved"), limit: 50 }).then((p) => p.designs),
   ]);
   const { metrics, choice } = design;
   return (
@@ -74,7 +75,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
         </dl>
       </header>
       {/* A maker comes to build: the download, parts list and bench check lead the page. */}
-      {caller.role === "maker" && <BuildSheetPanel design={design} viewer={viewer} />}
+      {viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} />}
       <ComparePicker
         current={{ id: design.id, name: design.name }}
         others={others
@@ -89,7 +90,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
         reviews={reviews}
         audit={audit.map((e) => ({ ...e, at: e.at.toISOString() }))}
       />
-      {caller.role !== "maker" && <BuildSheetPanel design={design} viewer={viewer} />}
+      {!viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} />}
       <ProfilesPanel design={design} viewer={viewer} />
     </div>
   );

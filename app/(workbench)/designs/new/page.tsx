@@ -1,12 +1,13 @@
 import type { Metadata } from "next";
 import { Wizard } from "@/components/wizard/wizard";
 import { requirePageCaller } from "@/lib/auth/gate";
+import { can } from "@/lib/auth/policy";
 
 export const metadata: Metadata = { title: "New design" };
 
 export default async function NewDesignPage() {
   const caller = await requirePageCaller("/designs/new");
-  const canSave = caller.role === "owner" || caller.role === "designer";
+  const canSave = can(caller, "design.create");
   return (
     <div className="flex flex-col gap-4">
       <div>

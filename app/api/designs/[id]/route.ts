@@ -1,13 +1,13 @@
 import { listRevisions, reviseDesign } from "@/db/queries/designs";
 import { listReviews } from "@/db/queries/reviews";
 import { apiRoute } from "@/lib/auth/gate";
-import { HttpError } from "@/lib/http";
+import { HttpError, refused } from "@/lib/http";
 import { designFor } from "@/lib/saved-designs/access";
 import { savedBenchCheck } from "@/lib/saved-designs/bench";
 import { changedFields } from "@/lib/saved-designs/diff";
 import { evaluateDesign, patchDesignSchema } from "@/lib/saved-designs/service";
 
-export const GET = apiRoute({ doing: "open designs" }, async ({ caller, params }) => {
+export const GET = apiRoute({ action: "design.read", doing: "open designs" }, async ({ caller, params }) => {
   const { design, current, authorName } = await designFor(caller, params.id ?? "");
   const revisions = await listRevisions(design.id);
   const approval = revisions.find((r) => r.revision === design.revision)?.approval ?? null;
@@ -38,46 +38,43 @@ export const GET = apiRoute({ doing: "open designs" }, async ({ caller, params }
   };
 });
 
-export const PATCH = apiRoute(
-  { roles: ["owner", "designer"], doing: "edit designs", body: patchDesignSchema },
-  async ({ caller, body, params }) => {
-    const { design, current } = await designFor(caller, params.id ?? "");
-    if (body.revision !== design.revision) {
-      throw new HttpError(
-        409,
-        `Someone else saved this design first: it is at revision ${design.revision}, you edited revision ${body.revision}. Nothing was saved; reload to see their changes.`,
-      );
-    }
-    if (
-      body.name === undefined &&
-      body.project === undefined &&
-      body.requirement === undefined &&
-      body.choice === undefined
-    ) {
-      throw new HttpError(422, "Nothing to change: send name, project, requirement or choice.", {
-        "(body)": ["send at least one of name, project, requirement, choice"],
-      });
-    }
-    const evaluated = evaluateDesign(body.requirement ?? current.requirement, body.choice ?? current.choice);
-    const name = body.name ?? design.name;
-    const project = body.project === undefined ? design.project : (body.project ?? null);
-    const changed = changedFields(
-      { name: design.name, project: design.project, requirement: current.requirement, choice: current.choice },
-      { name, project, requirement: evaluated.requirement, choice: evaluated.choice },
+export const PATCH = apiRoute({ action: "design.edit", body: patchDesignSchema }, async ({ caller, body, params }) => {
+  const { design, current } = await designFor(caller, params.id ?? "");
+  if (body.revision !== design.revision) {
+    throw new HttpError(
+      409,
+      `Someone else saved this design first: it is at revision ${design.revision}, you edited revision ${body.revision}. Nothing was saved; reload to see their changes.`,
     );
-    // API v2: a PATCH that changes nothing (a rename to the same name included) makes no revision.
-    if (changed.length === 0) return { revision: design.revision, unchanged: true };
-    const result = await reviseDesign({
-      ...evaluated,
-      designId: design.id,
-      teamId: caller.teamId,
-      userId: caller.userId,
-      expectedRevision: body.revision,
-      name,
-      project,
-      changed,
+  }
+  if (
+    body.name === undefined &&
+    body.project === undefined &&
+    body.requirement === undefined &&
+    body.choice === undefined
+  ) {
+    throw new HttpError(422, "Nothing to change: send name, project, requirement or choice.", {
+      "(body)": ["send at least one of name, project, requirement, choice"],
     });
-    if (!result.ok) throw new HttpError(result.status, result.message);
-    return { revision: result.revision };
-  },
-);
+  }
+  const evaluated = evaluateDesign(body.requirement ?? current.requirement, body.choice ?? current.choice);
+  const name = body.name ?? design.name;
+  const project = body.project === undefined ? design.project : (body.project ?? null);
+  const changed = changedFields(
+    { name: design.name, project: design.project, requirement: current.requirement, choice: current.choice },
+    { name, project, requirement: evaluated.requirement, choice: evaluated.choice },
+  );
+  // API v2: a PATCH that changes nothing (a rename to the same name included) makes no revision.
+  if (changed.length === 0) return { revision: design.revision, unchanged: true };
+  const result = await reviseDesign({
+    ...evaluated,
+    designId: design.id,
+    teamId: caller.teamId,
+    userId: caller.userId,
+    expectedRevision: body.revision,
+    name,
+    project,
+    changed,
+  });
+  if (!result.ok) throw refused(result);
+  return { revision: result.revision };
+});

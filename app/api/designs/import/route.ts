@@ -7,7 +7,7 @@ import { saveNewDesign } from "@/lib/saved-designs/create";
 import { json } from "@/lib/http";
 
 export const POST = apiRoute(
-  { roles: ["owner", "designer"], doing: "import designs", body: designImportSchema },
+  { action: "design.create", doing: "import designs", body: designImportSchema },
   async ({ caller, body }) => {
     const created = await saveNewDesign(caller, body);
     return json({ ...created, name: body.name }, 201);

@@ -3,7 +3,7 @@ import { acceptInvitation, findInvitationByToken } from "@/db/queries/invitation
 import { currentCaller, parseWith, publicRoute, readJson } from "@/lib/auth/gate";
 import { hashPassword } from "@/lib/auth/password-hash";
 import { passwordProblems, PASSWORD_MAX_LENGTH } from "@/lib/auth/password-rules";
-import { HttpError, json } from "@/lib/http";
+import { HttpError, json, refused } from "@/lib/http";
 import { textField } from "@/lib/text-field";
 
 const acceptSchema = z.object({
@@ -49,9 +49,7 @@ export const POST = publicRoute(async (request) => {
     newAccount,
   });
   if (!result.ok) {
-    // 410 (revoked, expired) reads as 409 to clients: the invitation exists but cannot be used.
-    const status = result.status === 410 ? 409 : result.status;
-    throw new HttpError(status, result.message, result.field ? { [result.field]: [result.message] } : undefined);
+    throw refused(result.field ? { ...result, fieldErrors: { [result.field]: [result.message] } } : result);
   }
   return json(
     { email: result.email, teamName: result.teamName, role: result.role, newAccount: result.newAccount },

@@ -7,6 +7,7 @@ import { partKinds } from "@/lib/library/schema";
 /** `?kind=amplifiers|shunts` → text/csv with the API's field names as the header. */
 export const GET = apiRoute(
   {
+    action: "library.read",
     doing: "export the parts library",
     query: z.object({ kind: z.enum(partKinds, { error: 'kind: expected "amplifiers" or "shunts"' }) }),
   },

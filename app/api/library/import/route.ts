@@ -4,7 +4,6 @@ import { apiRoute } from "@/lib/auth/gate";
 import { HttpError, json } from "@/lib/http";
 import { parseLibraryCsv } from "@/lib/library/csv";
 import { partKinds } from "@/lib/library/schema";
-import { editorRoles } from "@/lib/library/service";
 import { readCsvUpload } from "@/lib/read-upload";
 
 const MAX_LIBRARY_CSV_BYTES = 2_000_000;
@@ -15,7 +14,7 @@ const kindSchema = z.enum(partKinds, { error: 'kind: expected "amplifiers" or "s
  * (or `?kind=`). A part whose name is already in the library is updated; the rest are added.
  */
 export const POST = apiRoute(
-  { roles: editorRoles, doing: "import parts into the library" },
+  { action: "library.edit", doing: "import parts into the library" },
   async ({ caller, request }) => {
     const upload = await readCsvUpload(request, MAX_LIBRARY_CSV_BYTES);
     const kind = kindSchema.safeParse(upload.fields.kind ?? new URL(request.url).searchParams.get("kind") ?? undefined);

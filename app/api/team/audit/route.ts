@@ -12,6 +12,6 @@ const query = z.object({
 });
 
 /** The team's audit log, newest first (owners). */
-export const GET = apiRoute({ roles: ["owner"], doing: "read the team's log", query }, async ({ caller, query }) => ({
+export const GET = apiRoute({ action: "team.read-log", query }, async ({ caller, query }) => ({
   events: (await listTeamAudit(caller.teamId, query.limit)).map((e) => ({ ...e, at: e.at.toISOString() })),
 }));

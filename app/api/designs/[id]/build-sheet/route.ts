@@ -6,7 +6,7 @@ import { attachment, exportFileName } from "@/lib/build-sheet/exports";
 import { renderBuildSheet } from "@/lib/build-sheet/render";
 import { designViewFor } from "@/lib/saved-designs/access";
 
-export const GET = apiRoute({ doing: "download build sheets" }, async ({ caller, params }) => {
+export const GET = apiRoute({ action: "design.read", doing: "download build sheets" }, async ({ caller, params }) => {
   const view = await designViewFor(caller, params.id ?? "");
   const pdf = await renderBuildSheet(view, { team: caller.teamName, generatedAt: new Date() });
   return new Response(new Uint8Array(pdf), {

@@ -5,7 +5,7 @@ import { apiRoute } from "@/lib/auth/gate";
 import { attachment, designExport, exportFileName } from "@/lib/build-sheet/exports";
 import { designViewFor } from "@/lib/saved-designs/access";
 
-export const GET = apiRoute({ doing: "export designs" }, async ({ caller, params }) => {
+export const GET = apiRoute({ action: "design.read", doing: "export designs" }, async ({ caller, params }) => {
   const view = await designViewFor(caller, params.id ?? "");
   return Response.json(designExport(view, new Date()), {
     headers: {

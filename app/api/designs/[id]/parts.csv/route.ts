@@ -3,7 +3,7 @@ import { apiRoute } from "@/lib/auth/gate";
 import { attachment, exportFileName, partsCsv } from "@/lib/build-sheet/exports";
 import { designViewFor } from "@/lib/saved-designs/access";
 
-export const GET = apiRoute({ doing: "download parts lists" }, async ({ caller, params }) => {
+export const GET = apiRoute({ action: "design.read", doing: "download parts lists" }, async ({ caller, params }) => {
   const view = await designViewFor(caller, params.id ?? "");
   return new Response(partsCsv(view), {
     headers: {

@@ -1,58 +1,57 @@
 import { insertProfile, listProfiles } from "@/db/queries/profiles";
 import { apiRoute } from "@/lib/auth/gate";
+import { can } from "@/lib/auth/policy";
 import { designViewFor } from "@/lib/saved-designs/access";
 import { json } from "@/lib/http";
 import { MAX_PROFILE_BYTES, nonFiniteFigure, parseProfileCsv, profileDesignOf, summarizeProfile } from "@/lib/profile";
 import { readCsvUpload } from "@/lib/read-upload";
 
 /** The design's stored profiles, newest first (members; makers for approved designs). */
-export const GET = apiRoute({ doing: "read current profiles" }, async ({ caller, params }) => {
+export const GET = apiRoute({ action: "design.read", doing: "read current profiles" }, async ({ caller, params }) => {
   const design = await designViewFor(caller, params.id ?? "");
-  return { profiles: await listProfiles(design.id) };
+  const profiles = await listProfiles(design.id);
+  return { profiles: profiles.map((p) => ({ ...p, canDelete: can(caller, "profile.delete", p) })) };
 });
 
 /**
  * Uploads a recording: multipart, field `file` (CSV). 201 {id, samples, summary}; a refused file
  * is 422 naming the row and column, over 10 MB is 413, and nothing is stored either way.
  */
-export const POST = apiRoute(
-  { roles: ["owner", "designer"], doing: "upload current profiles" },
-  async ({ caller, params, request }) => {
-    const design = await designViewFor(caller, params.id ?? "");
-    const upload = await readCsvUpload(request, MAX_PROFILE_BYTES);
-    const parsed = parseProfileCsv(upload.text);
-    if (!parsed.ok) {
-      const body = parsed.refusal.toJson();
-      return json({ ...body, message: `${body.message}. Nothing was stored.` }, 422);
-    }
-    const { timesS, currentsA } = parsed.series;
-    const summary = summarizeProfile(timesS, currentsA, profileDesignOf(design));
-    const infinite = nonFiniteFigure(summary);
-    if (infinite) {
-      const message = `The recording's ${infinite} on this design is not a finite number (are the currents in amperes?). Nothing was stored.`;
-      return json({ message, fieldErrors: { file: [message] } }, 422);
-    }
-    const { id } = await insertProfile({
-      teamId: caller.teamId,
-      designId: design.id,
-      revision: design.revision,
-      fileName: upload.fileName,
-      timesS,
-      currentsA,
+export const POST = apiRoute({ action: "profile.upload" }, async ({ caller, params, request }) => {
+  const design = await designViewFor(caller, params.id ?? "");
+  const upload = await readCsvUpload(request, MAX_PROFILE_BYTES);
+  const parsed = parseProfileCsv(upload.text);
+  if (!parsed.ok) {
+    const body = parsed.refusal.toJson();
+    return json({ ...body, message: `${body.message}. Nothing was stored.` }, 422);
+  }
+  const { timesS, currentsA } = parsed.series;
+  const summary = summarizeProfile(timesS, currentsA, profileDesignOf(design));
+  const infinite = nonFiniteFigure(summary);
+  if (infinite) {
+    const message = `The recording's ${infinite} on this design is not a finite number (are the currents in amperes?). Nothing was stored.`;
+    return json({ message, fieldErrors: { file: [message] } }, 422);
+  }
+  const { id } = await insertProfile({
+    teamId: caller.teamId,
+    designId: design.id,
+    revision: design.revision,
+    fileName: upload.fileName,
+    timesS,
+    currentsA,
+    summary,
+    userId: caller.userId,
+    userName: caller.name,
+  });
+  return json(
+    {
+      id,
+      samples: summary.samples,
       summary,
-      userId: caller.userId,
-      userName: caller.name,
-    });
-    return json(
-      {
-        id,
-        samples: summary.samples,
-        summary,
-        fileName: upload.fileName,
-        revision: design.revision,
-        columns: parsed.series.columns,
-      },
-      201,
-    );
-  },
-);
+      fileName: upload.fileName,
+      revision: design.revision,
+      columns: parsed.series.columns,
+    },
+    201,
+  );
+});

@@ -2,10 +2,10 @@ import { deletePart, getAmplifier, updateAmplifier } from "@/db/queries/library"
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
 import { amplifierInput, amplifierPatch } from "@/lib/library/schema";
-import { editorRoles, mergePatch, partId, written } from "@/lib/library/service";
+import { mergePatch, partId, written } from "@/lib/library/service";
 
 export const PATCH = apiRoute(
-  { roles: editorRoles, doing: "edit the parts library", body: amplifierPatch },
+  { action: "library.edit", doing: "edit the parts library", body: amplifierPatch },
   async ({ caller, body, params }) => {
     const id = partId(params.id, "amplifier");
     const stored = await getAmplifier(caller.teamId, id);
@@ -16,7 +16,7 @@ export const PATCH = apiRoute(
 );
 
 export const DELETE = apiRoute(
-  { roles: editorRoles, doing: "remove parts from the library" },
+  { action: "library.edit", doing: "remove parts from the library" },
   async ({ caller, params }) => {
     const id = partId(params.id, "amplifier");
     if (!(await deletePart("amplifiers", caller.teamId, id, caller.userId)))

@@ -1,7 +1,7 @@
 import { removeMember } from "@/db/queries/invitations";
 import { changeMemberRole } from "@/db/queries/users";
 import { apiRoute } from "@/lib/auth/gate";
-import { HttpError } from "@/lib/http";
+import { HttpError, refused } from "@/lib/http";
 import { roleChangeSchema } from "@/lib/team-schemas";
 
 function memberId(params: Record<string, string>): string {
@@ -11,19 +11,22 @@ function memberId(params: Record<string, string>): string {
 }
 
 export const PATCH = apiRoute(
-  { roles: ["owner"], doing: "change roles", body: roleChangeSchema },
+  { action: "team.manage-members", doing: "change roles", body: roleChangeSchema },
   async ({ caller, body, params }) => {
     const userId = memberId(params);
     const result = await changeMemberRole(caller.teamId, userId, body.role, caller.userId);
-    if (!result.ok) throw new HttpError(result.status, result.message);
+    if (!result.ok) throw refused(result);
     return { userId, role: body.role };
   },
 );
 
 // A team always keeps at least one owner: removeMember refuses the last one (409).
-export const DELETE = apiRoute({ roles: ["owner"], doing: "remove members" }, async ({ caller, params }) => {
-  const userId = memberId(params);
-  const result = await removeMember(caller.teamId, userId, caller.userId);
-  if (!result.ok) throw new HttpError(result.status, result.message);
-  return { userId, removed: true };
-});
+export const DELETE = apiRoute(
+  { action: "team.manage-members", doing: "remove members" },
+  async ({ caller, params }) => {
+    const userId = memberId(params);
+    const result = await removeMember(caller.teamId, userId, caller.userId);
+    if (!result.ok) throw refused(result);
+    return { userId, removed: true };
+  },
+);

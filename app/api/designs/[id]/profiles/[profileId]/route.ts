@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { deleteProfile, getProfile, profileUploader } from "@/db/queries/profiles";
-import { apiRoute } from "@/lib/auth/gate";
+import { apiRoute, authorize } from "@/lib/auth/gate";
 import { designViewFor } from "@/lib/saved-designs/access";
 import { HttpError } from "@/lib/http";
 import { clipCurrent, decimateMinMax, profileDesignOf, summarizeProfile } from "@/lib/profile";
@@ -35,7 +35,7 @@ const windowQuery = z.object({
  * the series decimated to `width` pixel columns over `from`..`to` seconds (the whole recording by default).
  */
 export const GET = apiRoute(
-  { doing: "read current profiles", query: windowQuery },
+  { action: "design.read", doing: "read current profiles", query: windowQuery },
   async ({ caller, params, query }) => {
     const design = await designViewFor(caller, params.id ?? "");
     const profile = await getProfile(design.id, profileIdOf(params.profileId));
@@ -64,17 +64,19 @@ export const GET = apiRoute(
 );
 
 /** Its uploader or an owner removes a profile. */
-export const DELETE = apiRoute({ doing: "delete current profiles" }, async ({ caller, params }) => {
+export const DELETE = apiRoute({ action: "profile.delete" }, async ({ caller, params }) => {
   const design = await designViewFor(caller, params.id ?? "");
   const profileId = profileIdOf(params.profileId);
   const found = await profileUploader(design.id, profileId);
   if (!found) throw profileNotFound();
-  if (found.uploadedBy !== caller.userId && caller.role !== "owner") {
-    throw new HttpError(
-      403,
-      `Only the member who uploaded "${found.fileName}" or an owner may delete it; you are signed in as a ${caller.role}.`,
-    );
-  }
+  authorize(
+    caller,
+    "profile.delete",
+    {
+      refusal: `Only the member who uploaded "${found.fileName}" or an owner may delete it; you are signed in as a ${caller.role}.`,
+    },
+    found,
+  );
   await deleteProfile({ teamId: caller.teamId, designId: design.id, profileId, actorId: caller.userId });
   return { deleted: true, id: profileId };
 });
