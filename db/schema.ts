@@ -256,6 +256,13 @@ export const libraryAmplifiers = pgTable(
     cmrrDb: doublePrecision("cmrr_db").notNull(),
     supplyMinV: doublePrecision("supply_min_v").notNull(),
     supplyMaxV: doublePrecision("supply_max_v").notNull(),
+    topology: text("topology")
+      .$type<"current-sense" | "difference" | "non-inverting" | "instrumentation">()
+      .notNull()
+      .default("current-sense"),
+    /** Null: the topology's usual input common-mode range. */
+    commonModeMinV: doublePrecision("common_mode_min_v"),
+    commonModeMaxV: doublePrecision("common_mode_max_v"),
     createdAt: createdAt(),
     updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
   },

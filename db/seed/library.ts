@@ -55,6 +55,8 @@ export const demoAmplifiers: AmplifierInput[] = [
     cmrrDb: 120,
     supplyMinV: "2.2 V",
     supplyMaxV: "5.5 V",
+    // G = 1 + Rf/Rg around an op-amp: ground-referenced, low side only.
+    topology: "non-inverting",
   },
   {
     name: "SW-HV-10 high-side amp (36 V common mode)",
@@ -72,6 +74,8 @@ export const demoAmplifiers: AmplifierInput[] = [
     cmrrDb: 95,
     supplyMinV: "2.7 V",
     supplyMaxV: "5.5 V",
+    commonModeMinV: "-0.3 V",
+    commonModeMaxV: "36 V",
   },
 ];
 

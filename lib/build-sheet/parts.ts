@@ -42,7 +42,7 @@ export const kelvinAdviceText = (shuntOhms: number) => kelvinText[kelvinAdvice(s
 export function gainResistors(req: Requirement, choice: Choice): { rfOhms: number; rgOhms: number } | null {
   const set = req.amplifier.gainSet;
   if (!set) return null;
-  return resistorPairFor(choice.gain, set.series);
+  return resistorPairFor(choice.gain, set.series, req.amplifier.topology === "difference" ? 0 : 1);
 }
 
 export function partsList(

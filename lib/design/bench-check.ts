@@ -6,7 +6,10 @@ import type { Choice } from "./types";
 
 export type BenchCheckRow = { label: string; currentA: number; expectedV: number; minV: number; maxV: number };
 
-/** Rows at Imin, the typical current (if given), 10 %, 50 % and 100 % of Imax. */
+/**
+ * Rows at Imin, the typical current (if given), 10 %, 50 % and 100 % of Imax: expected I·R·G and
+ * the band (I ∓ worst-case error)·R·G, clamped to what the output can show.
+ */
 export function benchCheck(req: Requirement, choice: Choice): BenchCheckRow[] {
   const { min, max, typical } = req.current;
   const points: { label: string; currentA: number }[] = [{ label: "Minimum current", currentA: min }];
@@ -20,13 +23,15 @@ export function benchCheck(req: Requirement, choice: Choice): BenchCheckRow[] {
   const m = buildModel(req);
   return points.map(({ label, currentA }) => {
     const { worstA } = errorAtWith(req, m, choice, currentA);
+    // The band stops where the output can go: no lower than the amplifier's lowest output, no
+    // higher than the readout can show or the amplifier can swing.
+    const clamp = (v: number) => Math.min(m.outCeil, Math.max(m.swingLow, v));
     return {
       label,
       currentA,
       expectedV: currentA * tz,
-      // The output cannot go below ground on a single supply.
-      minV: Math.max(0, (currentA - worstA) * tz),
-      maxV: (currentA + worstA) * tz,
+      minV: clamp((currentA - worstA) * tz),
+      maxV: clamp((currentA + worstA) * tz),
     };
   });
 }

@@ -1,7 +1,17 @@
 // One candidate's figures (DESIGN.md §3), in the API's field names.
 import { errorAtWith, lowestAccurateCurrent } from "./error-budget";
 import { seriesValues } from "./eseries";
-import { type Model, buildModel, largestRating, noiseRmsA, operatingBurden, signalBandwidth } from "./model";
+import {
+  type Model,
+  buildModel,
+  deadZoneA,
+  largestRating,
+  noiseRmsA,
+  operatingBurden,
+  outputWorstV,
+  resolvableStepA,
+  signalBandwidth,
+} from "./model";
 import { pairMask, reasonsOf, shuntFigures } from "./pair";
 import type { Requirement } from "./requirement";
 import type { Candidate, CandidateDetail, Choice } from "./types";
@@ -12,15 +22,21 @@ export { rejectReasonLabels, rejectReasons, type RejectReason } from "./pair";
 export function candidateFigures(m: Model, R: number, G: number): Candidate {
   const { mask, errMinRatio, sf } = pairMask(m, R, G);
   const rg = R * G;
+  // No operating point (a constant-power load that cannot be fed through R): report at Imax.
+  const iOp = Number.isNaN(sf.iOp) ? m.iMax : sf.iOp;
   return {
     shuntOhms: R,
     gain: G,
     transimpedanceVPerA: rg,
     burdenV: m.iMax * R,
-    dissipationW: m.iMax * m.iMax * R,
+    operatingCurrentA: iOp,
+    dissipationW: iOp * iOp * R,
     ratingW: Number.isNaN(sf.rating) ? largestRating(m) : sf.rating,
-    outputAtMaxV: m.iMax * rg,
+    outputAtMaxV: iOp * rg,
+    outputAtMaxWorstV: outputWorstV(m, R, G, sf.theta, iOp),
     lsbA: m.lsbV / rg,
+    resolvableStepA: resolvableStepA(m, R, G),
+    deadZoneA: deadZoneA(m, R, G),
     offsetErrorA: m.vosRef / R,
     errorAtMinPercent: 100 * errMinRatio,
     feasible: mask === 0,
@@ -42,8 +58,8 @@ export function evaluateCandidate(req: Requirement, choice: Choice): CandidateDe
     loadVoltageV: Number.isNaN(burdenOp) ? 0 : m.vBus - burdenOp,
     selfHeatingK: base.dissipationW * sf.theta,
     bandwidthHz: signalBandwidth(m, G),
-    deadZoneA: m.swingLow / (R * G),
-    countsAtMin: (m.iMin * R * G) / m.lsbV,
+    countsAtMin: m.iMin / base.resolvableStepA,
+    hotSpotC: m.tAmbMax + base.dissipationW * sf.theta,
     noiseA: noiseRmsA(m, R, G),
     headroomV: m.outCeil - base.outputAtMaxV,
     errorAtTypicalPercent: typical === undefined ? null : pct(typical),

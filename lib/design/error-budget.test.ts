@@ -30,9 +30,9 @@ describe("error budget across the span", () => {
   });
   it("labels every source in plain words", () => {
     const t = errorAt(r, choice, 0.01).terms;
-    expect(t).toHaveLength(10);
+    expect(t).toHaveLength(11);
     for (const term of t) expect(term.label).toMatch(/^[A-Z][a-z]/);
-    expect(errorBreakdownCurve(r, choice, 5)[0]?.terms).toHaveLength(10);
+    expect(errorBreakdownCurve(r, choice, 5)[0]?.terms).toHaveLength(11);
   });
   it("the lowest accurate current meets the target, and a slightly lower one does not", () => {
     expect(solve(r).feasibleCount).toBeGreaterThan(0);

@@ -1,12 +1,22 @@
 // The error budget of one pair across the current span: each source in amps, the worst
 // case (sum) and the root-sum-square, as % of reading.
-import { type Model, buildModel, noiseRmsA, operatingBurden, REFERENCE_C, worstErrorA } from "./model";
+import {
+  type Model,
+  buildModel,
+  commonModeErrorV,
+  gainSetError,
+  noiseRmsA,
+  operatingBurden,
+  REFERENCE_C,
+  worstErrorA,
+} from "./model";
 import { shuntFigures } from "./pair";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
 
 export type BudgetSource =
   | "gainError"
+  | "gainSetResistors"
   | "shuntTolerance"
   | "shuntTempco"
   | "gainDrift"
@@ -19,13 +29,14 @@ export type BudgetSource =
 
 export const budgetSourceLabels: Record<BudgetSource, string> = {
   gainError: "Amplifier gain error",
+  gainSetResistors: "Gain-setting resistors' tolerance",
   shuntTolerance: "Shunt tolerance",
   shuntTempco: "Shunt tempco (ambient and self-heating)",
   gainDrift: "Amplifier gain drift",
   offset: `Amplifier offset at ${REFERENCE_C} °C`,
   offsetDrift: "Offset drift over temperature",
   biasCurrent: "Input bias current",
-  commonMode: "Common-mode error (CMRR)",
+  commonMode: "Common-mode error (CMRR, resistor matching in a difference stage)",
   readout: "Readout step (half an LSB)",
   noise: "Noise (crest factor × RMS)",
 };
@@ -46,13 +57,14 @@ export function budgetTerms(req: Requirement, m: Model, choice: Choice, I: numbe
   const a = req.amplifier;
   const values: Record<BudgetSource, number> = {
     gainError: I * a.gainError,
+    gainSetResistors: I * gainSetError(m, G),
     shuntTolerance: I * req.shunt.tolerance,
     shuntTempco: I * m.alphaR * (m.dTamb + I * I * R * theta),
     gainDrift: I * a.gainDrift * m.dTamb,
     offset: a.offset / R,
     offsetDrift: (a.offsetDrift * m.dTamb) / R,
     biasCurrent: a.biasCurrent,
-    commonMode: m.cmV / R,
+    commonMode: commonModeErrorV(m, G) / R,
     readout: m.lsbV / (2 * R * G),
     noise: m.crest * noiseRmsA(m, R, G),
   };

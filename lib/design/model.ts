@@ -9,6 +9,24 @@ export const REFERENCE_C = 25;
 /** Noise-equivalent bandwidth of a single pole over its −3 dB bandwidth. */
 export const SINGLE_POLE_NBW = Math.PI / 2;
 
+/**
+ * The smallest current step a reading can tell apart through noise is taken as this many times
+ * the RMS noise: one σ, the rms-based "effective resolution" of ADC textbooks (log2(FS/σ)).
+ * The stricter peak-to-peak "noise-free" figure (about 6.6 σ) would suit single readings; the
+ * accuracy budget counts noise separately as crest factor × RMS.
+ */
+export const RESOLVABLE_NOISE_SIGMAS = 1;
+/**
+ * An ADC input's anti-alias filter is taken with its corner at half the sample rate (the Nyquist
+ * frequency): every real ADC input has one (common practice, no source).
+ */
+export const ANTI_ALIAS_FRACTION = 0.5;
+
+export const TOPO_CS = 0;
+export const TOPO_DIFF = 1;
+export const TOPO_NONINV = 2;
+export const TOPO_INST = 3;
+
 export const LOAD_CC = 0;
 export const LOAD_RES = 1;
 export const LOAD_CP = 2;
@@ -29,8 +47,25 @@ export type Model = {
   dTamb: number;
   /** Temperature for Johnson noise: the hottest ambient, K. */
   tNoiseK: number;
-  /** Gain-type error that does not depend on current: εG + εR + αR·ΔT + αG·ΔT. */
+  /** Gain-type error that does not depend on current or gain: εG + εR + αR·ΔT + αG·ΔT. */
   gainConst: number;
+  topology: number;
+  /** Tolerance of the gain-setting resistors (0: fixed gains, no resistors). */
+  gainSetTol: number;
+  high: boolean;
+  /** The amplifier input's allowed common-mode range, V. */
+  cmMin: number;
+  cmMax: number;
+  /** 10^(−CMRR/20) of the amplifier itself. */
+  cmrrLin: number;
+  /** Common-mode voltage the error model uses: the supply on the high side, 0 on the low side, V. */
+  vCm: number;
+  /** Hottest ambient, °C; the shunt's derating knee and maximum temperature, °C. */
+  tAmbMax: number;
+  kneeC: number;
+  maxTempC: number;
+  /** Share of its rating a shunt may carry at the hottest ambient (linear derating above the knee). */
+  ambientDerate: number;
   alphaR: number;
   ratings: number[];
   derating: number;
@@ -39,8 +74,6 @@ export type Model = {
   vosRef: number;
   vosWorst: number;
   ib: number;
-  /** Common-mode voltage times 10^(−CMRR/20), V. */
-  cmV: number;
   en2: number;
   fourKT: number;
   gbw: number;
@@ -66,6 +99,14 @@ export function buildModel(req: Requirement): Model {
   const dTamb = Math.max(Math.abs(req.temperature.max - REFERENCE_C), Math.abs(req.temperature.min - REFERENCE_C));
   const tNoiseK = req.temperature.max + 273.15;
   const vCm = req.supply.side === "high" ? req.supply.voltage : 0;
+  const topology = {
+    "current-sense": TOPO_CS,
+    difference: TOPO_DIFF,
+    "non-inverting": TOPO_NONINV,
+    instrumentation: TOPO_INST,
+  }[a.topology];
+  const antiAlias =
+    req.readout.kind === "adc" ? ANTI_ALIAS_FRACTION * req.readout.sampleRateHz : req.readout.bandwidthHz;
   return {
     iMin: req.current.min,
     iMax: req.current.max,
@@ -79,6 +120,17 @@ export function buildModel(req: Requirement): Model {
     dTamb,
     tNoiseK,
     gainConst: a.gainError + s.tolerance + s.tempco * dTamb + a.gainDrift * dTamb,
+    topology,
+    gainSetTol: a.gainSet ? a.gainSet.tolerance : 0,
+    high: req.supply.side === "high",
+    cmMin: a.commonMode.min,
+    cmMax: a.commonMode.max,
+    cmrrLin: 10 ** (-a.cmrrDb / 20),
+    vCm,
+    tAmbMax: req.temperature.max,
+    kneeC: s.deratingKneeC,
+    maxTempC: s.maxTempC,
+    ambientDerate: derateAt(req.temperature.max, s.deratingKneeC, s.maxTempC),
     alphaR: s.tempco,
     ratings: [...s.ratings].sort((x, y) => x - y),
     derating: s.derating,
@@ -87,11 +139,10 @@ export function buildModel(req: Requirement): Model {
     vosRef: a.offset,
     vosWorst: a.offset + a.offsetDrift * dTamb,
     ib: a.biasCurrent,
-    cmV: vCm * 10 ** (-a.cmrrDb / 20),
     en2: a.noiseDensity * a.noiseDensity,
     fourKT: 4 * BOLTZMANN * tNoiseK,
     gbw: a.gbw,
-    filterHz: Math.min(a.filterHz ?? Infinity, req.readout.kind === "meter" ? req.readout.bandwidthHz : Infinity),
+    filterHz: Math.min(a.filterHz ?? Infinity, antiAlias),
     crest: req.accuracy.crestFactor,
     swingLow: a.swingLow,
     bwReq: req.bandwidth.min,
@@ -101,9 +152,20 @@ export function buildModel(req: Requirement): Model {
   };
 }
 
-/** Smallest offered rating ≥ P/derating, or NaN when none covers it. */
+/**
+ * Share of its rating a resistor may dissipate at ambient T: full up to the knee, falling on a
+ * straight line to none at its maximum temperature (the usual resistor derating curve).
+ */
+export function derateAt(tC: number, kneeC: number, maxC: number): number {
+  if (tC <= kneeC) return 1;
+  if (tC >= maxC) return 0;
+  return (maxC - tC) / (maxC - kneeC);
+}
+
+/** Smallest offered rating ≥ P/(derating · ambient derating), or NaN when none covers it. */
 export function ratingFor(m: Model, powerW: number): number {
-  const need = powerW / m.derating;
+  if (!(m.ambientDerate > 0)) return NaN;
+  const need = powerW / (m.derating * m.ambientDerate);
   for (const r of m.ratings) if (r >= need * (1 - 1e-12)) return r;
   return NaN;
 }
@@ -117,6 +179,50 @@ export function thetaFor(m: Model, ratingW: number): number {
   if (m.thetaFixed !== null) return m.thetaFixed;
   const r = Number.isFinite(ratingW) ? ratingW : largestRating(m);
   return m.ratedRise / r;
+}
+
+/**
+ * Current through R at full load in the requirement's load model (the load drawing iMax at the
+ * full supply): iMax for constant current, V/(V/Imax + R) for a resistive load, P/V_load for a
+ * constant-power load. NaN: a constant-power load has no operating point through R.
+ */
+export function operatingCurrent(m: Model, R: number): number {
+  if (m.loadModel === LOAD_CC) return m.iMax;
+  if (m.loadModel === LOAD_RES) return m.vBus / (m.vBus / m.iMax + R);
+  const p = m.vBus * m.iMax;
+  const disc = m.vBus * m.vBus - 4 * p * R;
+  if (disc < 0) return NaN;
+  return p / ((m.vBus + Math.sqrt(disc)) / 2);
+}
+
+/**
+ * Gain error from the gain-setting resistors' tolerance t, worst case (standard op-amp circuit
+ * analysis): non-inverting G = 1 + Rf/Rg gives 2·t·(G − 1)/G; a difference stage G = Rf/Rg
+ * 2·t; an instrumentation amplifier's single gain resistor t·(G − 1)/G.
+ */
+export function gainSetError(m: Model, G: number): number {
+  if (m.gainSetTol === 0) return 0;
+  if (m.topology === TOPO_DIFF) return 2 * m.gainSetTol;
+  if (m.topology === TOPO_INST) return (m.gainSetTol * (G - 1)) / G;
+  return (2 * m.gainSetTol * (G - 1)) / G;
+}
+
+/** What the amplifier's own inputs see of the stage's input voltage: Rf/(Rf + Rg) = G/(1 + G) in a difference stage. */
+export function commonModeScale(m: Model, G: number): number {
+  return m.topology === TOPO_DIFF ? G / (1 + G) : 1;
+}
+
+/**
+ * Common-mode error referred to the input, V. A difference stage adds its resistors' mismatch:
+ * CMRR = (1 + G)/(4·t) worst case (standard op-amp circuit analysis), i.e. Vcm·4·t/(1 + G),
+ * on top of the op-amp's own CMRR at the common mode its inputs see. A non-inverting stage is
+ * single-ended (ground-referenced, low side only): no common-mode term.
+ */
+export function commonModeErrorV(m: Model, G: number): number {
+  if (m.topology === TOPO_NONINV) return 0;
+  const own = m.vCm * commonModeScale(m, G) * m.cmrrLin;
+  if (m.topology === TOPO_DIFF) return own + (m.vCm * 4 * m.gainSetTol) / (1 + G);
+  return own;
 }
 
 /**
@@ -135,9 +241,9 @@ export function operatingBurden(m: Model, R: number): number {
   return m.vBus - (m.vBus + Math.sqrt(disc)) / 2;
 }
 
-/** Offset-type error referred to current, A: (Vos + αVos·ΔT)/R + Ib + Vcm·10^(−CMRR/20)/R. */
-export function offsetTermA(m: Model, R: number): number {
-  return (m.vosWorst + m.cmV) / R + m.ib;
+/** Offset-type error referred to current, A: (Vos + αVos·ΔT)/R + Ib + common-mode error/R. */
+export function offsetTermA(m: Model, R: number, G: number): number {
+  return (m.vosWorst + commonModeErrorV(m, G)) / R + m.ib;
 }
 
 /** RMS input noise density including the shunt's Johnson noise, V/√Hz. */
@@ -162,11 +268,30 @@ export function noiseRmsA(m: Model, R: number, G: number): number {
 
 /** Worst-case error at current I, A (DESIGN.md §3's default model). */
 export function worstErrorA(m: Model, R: number, G: number, theta: number, I: number): number {
-  const gainPart = I * (m.gainConst + m.alphaR * I * I * R * theta);
-  return gainPart + offsetTermA(m, R) + m.lsbV / (2 * R * G) + m.crest * noiseRmsA(m, R, G);
+  const gainPart = I * (m.gainConst + gainSetError(m, G) + m.alphaR * I * I * R * theta);
+  return gainPart + offsetTermA(m, R, G) + m.lsbV / (2 * R * G) + m.crest * noiseRmsA(m, R, G);
+}
+
+/** The smallest current step the readout can tell apart: one readout step, or the noise where larger, A. */
+export function resolvableStepA(m: Model, R: number, G: number): number {
+  return Math.max(m.lsbV / (R * G), RESOLVABLE_NOISE_SIGMAS * noiseRmsA(m, R, G));
+}
+
+/** Below this current the output sits at its floor even with the worst offset, A. */
+export function deadZoneA(m: Model, R: number, G: number): number {
+  return m.swingLow / (R * G) + offsetTermA(m, R, G);
 }
 
 /** The default ranking score: dimensionless, each objective measured against what the requirement allows. */
 export function defaultScore(m: Model, burdenV: number, lsbA: number, errMinRatio: number): number {
   return errMinRatio / m.accRatio + burdenV / m.dropMax + (lsbA * m.countsAtMin) / m.iMin;
+}
+
+/**
+ * Highest output the error budget allows at full load, V: the operating current plus every
+ * error that moves the output (all but the readout's own half step), times R·G.
+ */
+export function outputWorstV(m: Model, R: number, G: number, theta: number, iOp: number): number {
+  const err = worstErrorA(m, R, G, theta, iOp) - m.lsbV / (2 * R * G);
+  return (iOp + err) * R * G;
 }

@@ -1,6 +1,6 @@
 // Monte Carlo spread of the reading error for one pair: every part drawn uniformly within
 // its tolerance band, noise Gaussian, the output quantised and clipped as the readout sees it.
-import { buildModel, type Model, noiseRmsA, REFERENCE_C } from "./model";
+import { buildModel, commonModeErrorV, gainSetError, type Model, noiseRmsA, REFERENCE_C } from "./model";
 import { shuntFigures } from "./pair";
 import { gaussian, mulberry32 } from "./prng";
 import type { Requirement } from "./requirement";
@@ -80,11 +80,11 @@ export function drawUnit(
   const dT = ambient - REFERENCE_C;
   const epsR = u(s.tolerance);
   const alphaR = u(s.tempco);
-  const epsG = u(a.gainError);
+  const epsG = u(a.gainError) + u(gainSetError(m, G));
   const alphaG = u(a.gainDrift);
   const vos = u(a.offset) + u(a.offsetDrift) * dT;
   const ib = u(a.biasCurrent);
-  const cm = u(m.cmV);
+  const cm = u(commonModeErrorV(m, G));
   const gainActual = G * (1 + epsG + alphaG * dT);
   const extra = fault.inputOffsetV ?? 0;
   return (I) => {

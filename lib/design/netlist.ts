@@ -16,7 +16,21 @@ export function spiceNumber(x: number): string {
   return e === 0 ? m : `${m}e${e}`;
 }
 
-export function buildNetlist(req: Requirement, choice: Choice, opts: { includeOffset?: boolean } = {}): string {
+/** Gain-setting resistors of a difference stage: Rg from each input, Rf to the output and to ground. */
+export const DIFFERENCE_RG_OHMS = 10_000;
+/** Open-loop gain of the op-amp in a difference stage's netlist (an ideal-enough op-amp). */
+export const OPAMP_OPEN_LOOP_GAIN = 1e7;
+
+export type NetlistOptions = {
+  includeOffset?: boolean;
+  /**
+   * Difference stage only: skew its four resistors by ± the gain-set tolerance in the pattern
+   * that spoils common-mode rejection most (Rg1·(1+t), Rf1·(1−t), Rg2·(1−t), Rf2·(1+t)).
+   */
+  worstMismatch?: boolean;
+};
+
+export function buildNetlist(req: Requirement, choice: Choice, opts: NetlistOptions = {}): string {
   const includeOffset = opts.includeOffset ?? true;
   const { shuntOhms: R, gain: G } = choice;
   const vBus = req.supply.voltage;
@@ -58,6 +72,13 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: { includeOf
       lines.push(high ? `.nodeset V(sn)=${spiceNumber(vBus - burden)}` : `.nodeset V(sp)=${spiceNumber(burden)}`);
     }
   }
+  if (req.amplifier.topology === "difference") {
+    differenceStage(lines, req, G, includeOffset, opts.worstMismatch ? (req.amplifier.gainSet?.tolerance ?? 0) : 0);
+    lines.push("RREAD out 0 1e6");
+    lines.push(".op");
+    lines.push(".end");
+    return lines.join("\n") + "\n";
+  }
   lines.push("* Amplifier: an ideal voltage-controlled voltage source across the shunt,");
   if (includeOffset) {
     lines.push(
@@ -74,4 +95,26 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: { includeOf
   lines.push(".op");
   lines.push(".end");
   return lines.join("\n") + "\n";
+}
+
+/** A difference amplifier, G = Rf/Rg: an op-amp (a high-gain source) and its four resistors. */
+function differenceStage(lines: string[], req: Requirement, G: number, includeOffset: boolean, t: number) {
+  const rg = DIFFERENCE_RG_OHMS;
+  const rf = G * rg;
+  lines.push(
+    `* Amplifier: difference stage, G = Rf/Rg = ${spiceNumber(rf)}/${spiceNumber(rg)}, an op-amp with four resistors.`,
+  );
+  if (t > 0)
+    lines.push(`* Resistors skewed by ${spiceNumber(t)} in the pattern that spoils common-mode rejection most.`);
+  lines.push(`RG1 sn inn ${spiceNumber(rg * (1 + t))}`);
+  lines.push(`RF1 inn out ${spiceNumber(rf * (1 - t))}`);
+  lines.push(`RG2 sp inp ${spiceNumber(rg * (1 - t))}`);
+  lines.push(`RF2 inp 0 ${spiceNumber(rf * (1 + t))}`);
+  if (includeOffset) {
+    lines.push(`* Input offset ${spiceNumber(req.amplifier.offset)} V in series with the op-amp's + input.`);
+    lines.push(`VOS inpo inp DC ${spiceNumber(req.amplifier.offset)}`);
+    lines.push(`EOA out 0 inpo inn ${spiceNumber(OPAMP_OPEN_LOOP_GAIN)}`);
+  } else {
+    lines.push(`EOA out 0 inp inn ${spiceNumber(OPAMP_OPEN_LOOP_GAIN)}`);
+  }
 }

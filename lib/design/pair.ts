@@ -2,44 +2,67 @@
 // two can never disagree. Per-shunt figures are computed once per value, per-gain once per gain.
 import {
   type Model,
+  TOPO_NONINV,
+  commonModeErrorV,
+  commonModeScale,
+  gainSetError,
   inputNoiseDensity,
   noiseBandwidth,
-  offsetTermA,
   operatingBurden,
+  operatingCurrent,
   ratingFor,
   signalBandwidth,
   thetaFor,
+  RESOLVABLE_NOISE_SIGMAS,
 } from "./model";
 
 /** Constraint order: a rejected pair is counted under the first one it fails. */
-export const rejectReasons = ["drop", "output", "counts", "power", "bandwidth", "accuracy", "deadZone"] as const;
+export const rejectReasons = [
+  "drop",
+  "commonMode",
+  "output",
+  "counts",
+  "power",
+  "bandwidth",
+  "accuracy",
+  "deadZone",
+] as const;
 export type RejectReason = (typeof rejectReasons)[number];
 
 export const rejectReasonLabels: Record<RejectReason, string> = {
   drop: "Drop over the limit, or load voltage under its minimum",
-  output: "Output beyond the readout's full scale or the amplifier's swing",
-  counts: "Too few readout counts at the minimum current",
-  power: "Dissipation beyond the largest power rating on offer",
+  commonMode: "Amplifier inputs outside their common-mode range (or a single-ended stage on the high side)",
+  output: "Output, with its worst-case errors, beyond the readout's full scale or the amplifier's swing",
+  counts: "Too few steps the readout can tell apart (through the noise) at the minimum current",
+  power: "Dissipation beyond the largest rating on offer at the hottest ambient, or the shunt too hot",
   bandwidth: "Bandwidth short of the requirement",
   accuracy: "Accuracy target missed in the accuracy band",
-  deadZone: "Dead zone (output stuck at its floor) above the minimum current",
+  deadZone: "Dead zone (output stuck at its floor, offset included) above the minimum current",
 };
 
 export const BIT_DROP = 1;
-export const BIT_OUTPUT = 2;
-export const BIT_COUNTS = 4;
-export const BIT_POWER = 8;
-export const BIT_BANDWIDTH = 16;
-export const BIT_ACCURACY = 32;
-export const BIT_DEADZONE = 64;
+export const BIT_CM = 2;
+export const BIT_OUTPUT = 4;
+export const BIT_COUNTS = 8;
+export const BIT_POWER = 16;
+export const BIT_BANDWIDTH = 32;
+export const BIT_ACCURACY = 64;
+export const BIT_DEADZONE = 128;
 
 /** Figures that depend on the shunt alone. */
 export type ShuntFigures = {
   dropFails: boolean;
-  /** Chosen rating, NaN when no offered rating covers the dissipation. */
+  /** Current through the shunt at full load in the load model (NaN: no operating point). */
+  iOp: number;
+  /** Chosen rating at iOp, NaN when no offered rating covers the dissipation at the hottest ambient. */
   rating: number;
   theta: number;
-  /** Offset-type error, A. */
+  /** Hot spot above the shunt's maximum temperature at the hottest ambient. */
+  hot: boolean;
+  /** The amplifier's inputs sit between these two voltages at full load, V. */
+  vInLo: number;
+  vInHi: number;
+  /** Offset-type error without the common-mode term, A: (Vos + αVos·ΔT)/R + Ib. */
   offsetA: number;
   /** Input noise density divided by R, A/√Hz. */
   noisePerR: number;
@@ -51,29 +74,56 @@ export function shuntFigures(m: Model, R: number): ShuntFigures {
   const burden = operatingBurden(m, R);
   const dropFails =
     !(burden <= m.dropMax * slack) || m.iMax * R > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
-  const rating = ratingFor(m, m.iMax * m.iMax * R);
+  const iOp = operatingCurrent(m, R);
+  // With no operating point the pair fails on drop; rate it at Imax so that only drop is reported.
+  const iHeat = Number.isNaN(iOp) ? m.iMax : iOp;
+  const power = iHeat * iHeat * R;
+  const rating = ratingFor(m, power);
+  const theta = thetaFor(m, rating);
+  const b = Number.isNaN(burden) ? m.iMax * R : burden;
   return {
     dropFails,
+    iOp,
     rating,
-    theta: thetaFor(m, rating),
-    offsetA: offsetTermA(m, R),
+    theta,
+    hot: m.tAmbMax + power * theta > m.maxTempC * slack,
+    vInLo: m.high ? m.vBus - b : 0,
+    vInHi: m.high ? m.vBus : b,
+    offsetA: m.vosWorst / R + m.ib,
     noisePerR: inputNoiseDensity(m, R) / R,
   };
 }
 
 /** Figures that depend on the gain alone, for every gain swept. */
-export type GainFigures = { gains: Float64Array; bandwidth: Float64Array; sqrtNbw: Float64Array };
+export type GainFigures = {
+  gains: Float64Array;
+  bandwidth: Float64Array;
+  sqrtNbw: Float64Array;
+  /** Gain-setting resistors' gain error (ratio). */
+  epsG: Float64Array;
+  /** Share of the input voltage the amplifier's own inputs see. */
+  cmScale: Float64Array;
+  /** Common-mode error referred to the input, V. */
+  cmErrV: Float64Array;
+};
 
 export function gainFigures(m: Model, gains: ArrayLike<number>): GainFigures {
   const n = gains.length;
   const g = Float64Array.from(gains);
   const bandwidth = new Float64Array(n);
   const sqrtNbw = new Float64Array(n);
+  const epsG = new Float64Array(n);
+  const cmScale = new Float64Array(n);
+  const cmErrV = new Float64Array(n);
   for (let j = 0; j < n; j++) {
-    bandwidth[j] = signalBandwidth(m, g[j] as number);
-    sqrtNbw[j] = Math.sqrt(noiseBandwidth(m, g[j] as number));
+    const G = g[j] as number;
+    bandwidth[j] = signalBandwidth(m, G);
+    sqrtNbw[j] = Math.sqrt(noiseBandwidth(m, G));
+    epsG[j] = gainSetError(m, G);
+    cmScale[j] = commonModeScale(m, G);
+    cmErrV[j] = commonModeErrorV(m, G);
   }
-  return { gains: g, bandwidth, sqrtNbw };
+  return { gains: g, bandwidth, sqrtNbw, epsG, cmScale, cmErrV };
 }
 
 /**
@@ -92,38 +142,57 @@ export function sweepRow(
   offset: number,
   rejected: Int32Array,
 ): number {
-  const { gains, bandwidth, sqrtNbw } = gf;
+  const { gains, bandwidth, sqrtNbw, epsG, cmScale, cmErrV } = gf;
   const nG = gains.length;
-  const rowBits = (sf.dropFails ? BIT_DROP : 0) | (Number.isNaN(sf.rating) ? BIT_POWER : 0);
-  // Worst-case ratio at I: gainConst + heat·I² + fixed/I, with fixed the current-independent error (A).
+  const cmAll = m.topology === TOPO_NONINV && m.high;
+  const rowBits =
+    (sf.dropFails ? BIT_DROP : 0) | (cmAll ? BIT_CM : 0) | (Number.isNaN(sf.rating) || sf.hot ? BIT_POWER : 0);
+  // Worst-case ratio at I: gainConst + εset + heat·I² + fixed/I, with fixed the current-independent error (A).
   const heat = m.alphaR * R * sf.theta;
   const gainLo = m.gainConst + heat * m.bandLo * m.bandLo;
   const gainHi = m.gainConst + heat * m.bandHi * m.bandHi;
   const gainMin = m.gainConst + heat * m.iMin * m.iMin;
+  const iOp = sf.iOp;
+  const gainOp = 1 + m.gainConst + heat * iOp * iOp;
   const outLimit = m.outCeil * slack;
   const countsNeed = m.countsAtMin / slack;
   const bwNeed = m.bwReq / slack;
   const accLimit = m.accRatio * slack;
   const deadLimit = m.iMin * slack;
   const halfStep = m.lsbV / 2;
+  const noiseSigmaPerNbw = RESOLVABLE_NOISE_SIGMAS * sf.noisePerR;
   const noiseK = m.crest * sf.noisePerR;
+  const cmLo = m.cmMin / slack;
+  const cmHi = m.cmMax * slack;
+  const invR = 1 / R;
   let feasible = 0;
   for (let j = 0; j < nG; j++) {
     const rg = R * (gains[j] as number);
+    const eps = epsG[j] as number;
+    const k = cmScale[j] as number;
+    const nbw = sqrtNbw[j] as number;
     let bits = rowBits;
-    if (m.iMax * rg > outLimit) bits |= BIT_OUTPUT;
-    if ((m.iMin * rg) / m.lsbV < countsNeed) bits |= BIT_COUNTS;
+    if (k * sf.vInHi > cmHi || k * sf.vInLo < cmLo) bits |= BIT_CM;
+    const offA = sf.offsetA + (cmErrV[j] as number) * invR;
+    const noiseA = noiseK * nbw;
+    // Highest output at full load with every output error, against the ceiling.
+    if ((iOp * (gainOp + eps) + offA + noiseA) * rg > outLimit) bits |= BIT_OUTPUT;
+    // Steps at Imin: the readout step, or the noise where that is larger.
+    const lsbA = m.lsbV / rg;
+    const noiseStep = noiseSigmaPerNbw * nbw;
+    if (m.iMin < countsNeed * (lsbA > noiseStep ? lsbA : noiseStep)) bits |= BIT_COUNTS;
     if ((bandwidth[j] as number) < bwNeed) bits |= BIT_BANDWIDTH;
-    const fixedA = sf.offsetA + halfStep / rg + noiseK * (sqrtNbw[j] as number);
+    const fixedA = offA + halfStep / rg + noiseA;
     // a + b·I² + c/I is convex in I, so its largest value over the band is at an end.
-    if (gainLo + fixedA / m.bandLo > accLimit || gainHi + fixedA / m.bandHi > accLimit) bits |= BIT_ACCURACY;
-    if (m.swingLow / rg > deadLimit) bits |= BIT_DEADZONE;
+    if (gainLo + eps + fixedA / m.bandLo > accLimit || gainHi + eps + fixedA / m.bandHi > accLimit)
+      bits |= BIT_ACCURACY;
+    if (m.swingLow / rg + offA > deadLimit) bits |= BIT_DEADZONE;
     mask[offset + j] = bits;
-    errMin[offset + j] = gainMin + fixedA / m.iMin;
+    errMin[offset + j] = gainMin + eps + fixedA / m.iMin;
     if (bits === 0) feasible++;
     else {
-      const k = 31 - Math.clz32(bits & -bits);
-      rejected[k] = (rejected[k] ?? 0) + 1;
+      const b = 31 - Math.clz32(bits & -bits);
+      rejected[b] = (rejected[b] ?? 0) + 1;
     }
   }
   return feasible;

@@ -99,7 +99,7 @@ describe("parseRequirement: defaults and normalisation", () => {
     expect(Math.max(...g)).toBeLessThanOrEqual(11);
     expect(g).toContain(11); // 1 + 10k/1k
     expect(g).toContain(5.7); // 1 + 4.7k/1k
-    expect(r.requirement.amplifier.gainSet).toEqual({ series: "E6", min: 2, max: 11 });
+    expect(r.requirement.amplifier.gainSet).toEqual({ series: "E6", min: 2, max: 11, tolerance: 0.001 });
   });
   it("sorts and deduplicates a gain list", () => {
     const r = parseRequirement({ ...base, amplifier: { gains: [100, 20, 100, 50] } });

@@ -9,6 +9,36 @@ import { parsePercent, quantity } from "./units";
 export const loadModels = ["constant-current", "resistive", "constant-power"] as const;
 export type LoadModel = (typeof loadModels)[number];
 
+/** How the amplifier is built (API.md v2): an integrated part, or an op-amp stage with its resistors. */
+export const topologies = ["current-sense", "difference", "non-inverting", "instrumentation"] as const;
+export type Topology = (typeof topologies)[number];
+
+/** The topologies in the trade's words, for forms and tables. */
+export const topologyLabels: Record<Topology, string> = {
+  "current-sense": "Current-sense amplifier (integrated, fixed gains)",
+  difference: "Difference amplifier (op-amp and four resistors)",
+  "non-inverting": "Non-inverting op-amp stage (ground-referenced, low side only)",
+  instrumentation: "Instrumentation amplifier",
+};
+
+/**
+ * Input common-mode range by topology when the request gives none, V (from memory: typical of
+ * each class, to replace with the chosen part's figures). `supply` is the amplifier's own supply.
+ */
+export function defaultCommonMode(topology: Topology, supply: number): { min: number; max: number } {
+  switch (topology) {
+    case "current-sense":
+      return { min: -0.3, max: 26 }; // integrated current-sense parts commonly take 0–26 V
+    case "instrumentation":
+      return { min: -0.1, max: supply - 1 }; // in-amp inputs commonly stop about 1 V below the supply
+    default:
+      return { min: -0.1, max: supply + 0.1 }; // a rail-to-rail-input op-amp
+  }
+}
+
+/** Tolerance of gain-setting resistors when the request gives none (from memory: thin-film 0.1 %). */
+export const defaultGainSetTolerance = 0.001;
+
 /** Largest grid the solver will sweep in one request (values × gains). */
 export const maxSweepPairs = 2_000_000;
 
@@ -43,6 +73,8 @@ const adcReadout = z.object({
   kind: z.literal("adc"),
   bits: count("ADC resolution (bits)", 4, 32),
   fullScale: q("voltage", "ADC full scale", positive("ADC full scale")),
+  // The ADC input's anti-alias corner is taken at half this (DEFAULTS.md): it bounds the noise bandwidth.
+  sampleRateHz: q("frequency", "ADC sample rate", positive("ADC sample rate")).default(1000),
 });
 const meterReadout = z.object({
   kind: z.literal("meter"),
@@ -56,6 +88,11 @@ const gainSetSchema = z.object({
   series: seriesField,
   min: z.number().min(1, { error: "Lowest gain must be at least 1 (a non-inverting stage)" }).default(2),
   max: z.number().max(100_000, { error: "Highest gain must be at most 100000" }).default(1000),
+  tolerance: q(
+    "fraction",
+    "Gain-setting resistor tolerance",
+    (v) => (v >= 0 && v < 0.2) || "Gain-setting resistor tolerance must be between 0 and 20 %",
+  ).default(defaultGainSetTolerance),
 });
 
 const group = (what: string) => ({
@@ -101,7 +138,7 @@ const baseSchema = z.object(
       .prefault({}),
     readout: z
       .discriminatedUnion("kind", [adcReadout, meterReadout], { error: 'Readout: kind must be "adc" or "meter"' })
-      .default({ kind: "adc", bits: 12, fullScale: 2.5 }),
+      .default({ kind: "adc", bits: 12, fullScale: 2.5, sampleRateHz: 1000 }),
     resolution: z
       .object({
         countsAtMin: z
@@ -172,6 +209,8 @@ const baseSchema = z.object(
           "Temperature rise at full rating",
           positive("Temperature rise at full rating"),
         ).default(85),
+        deratingKneeC: quantity("temperature", "Derating knee (full power up to)").default(70),
+        maxTempC: quantity("temperature", "Shunt maximum temperature").default(155),
       })
       .prefault({}),
     amplifier: z
@@ -198,6 +237,15 @@ const baseSchema = z.object(
         ),
         filterHz: q("frequency", "Output filter corner", positive("Output filter corner")).nullable().default(null),
         cmrrDb: z.number().min(0, { error: "CMRR cannot be negative" }).max(200).default(120),
+        topology: z
+          .enum(topologies, { error: `Amplifier topology: expected one of ${topologies.join(", ")}` })
+          .optional(),
+        commonMode: z
+          .object({
+            min: quantity("voltage", "Lowest input common-mode voltage"),
+            max: quantity("voltage", "Highest input common-mode voltage"),
+          })
+          .optional(),
       })
       .prefault({}),
     limit: z
@@ -219,7 +267,12 @@ export type RequirementInput = z.input<typeof baseSchema>;
 export type Requirement = Omit<Base, "drop" | "accuracy" | "amplifier"> & {
   drop: { max: number; fraction?: number; loadMin?: number };
   accuracy: { percent: number; bandMin: number; bandMax: number; crestFactor: number };
-  amplifier: Omit<Base["amplifier"], "gains" | "gainSet"> & { gains: number[]; gainSet: GainSet | null };
+  amplifier: Omit<Base["amplifier"], "gains" | "gainSet" | "topology" | "commonMode"> & {
+    gains: number[];
+    gainSet: GainSet | null;
+    topology: Topology;
+    commonMode: { min: number; max: number };
+  };
 };
 
 function dedupeSorted(gains: number[]): number[] {
@@ -230,10 +283,17 @@ function dedupeSorted(gains: number[]): number[] {
   return out;
 }
 
+/** A resistor-pair gain set makes a single-ended non-inverting stage unless the request says otherwise. */
+function topologyOf(a: Base["amplifier"]): Topology {
+  if (a.topology) return a.topology;
+  return !Array.isArray(a.gains) && (a.gains ?? a.gainSet) ? "non-inverting" : "current-sense";
+}
+
 function gainsOf(a: Base["amplifier"]): { gains: number[]; gainSet: GainSet | null } {
   if (Array.isArray(a.gains)) return { gains: dedupeSorted(a.gains), gainSet: a.gainSet ?? null };
   const set = a.gains ?? a.gainSet ?? null;
-  if (set) return { gains: resistorPairGains(set), gainSet: set };
+  // A difference stage's gain is Rf/Rg; the others' 1 + Rf/Rg.
+  if (set) return { gains: resistorPairGains(set, topologyOf(a) === "difference" ? 0 : 1), gainSet: set };
   return { gains: [...commonFixedGains], gainSet: null };
 }
 
@@ -249,13 +309,19 @@ function normalize(b: Base): Requirement {
   if (loadMin !== undefined) drop.loadMin = loadMin;
   const bandMin = b.accuracy.bandMin ?? Math.max(b.current.min, 0.1 * b.current.max);
   const bandMax = b.accuracy.bandMax ?? b.current.max;
-  const { gains: _g, gainSet: _s, ...amp } = b.amplifier;
+  const { gains: _g, gainSet: _s, topology: _t, commonMode, ...amp } = b.amplifier;
+  const topology = topologyOf(b.amplifier);
   return {
     ...b,
     drop,
     accuracy: { percent: b.accuracy.percent, bandMin, bandMax, crestFactor: b.accuracy.crestFactor },
     shunt: { ...b.shunt, ratings: [...b.shunt.ratings].sort((x, y) => x - y) },
-    amplifier: { ...amp, ...gainsOf(b.amplifier) },
+    amplifier: {
+      ...amp,
+      ...gainsOf(b.amplifier),
+      topology,
+      commonMode: commonMode ?? defaultCommonMode(topology, amp.supply),
+    },
   };
 }
 
@@ -314,6 +380,10 @@ function crossFieldRules(b: Base, ctx: z.RefinementCtx) {
     issue(["amplifier", "gains"], "At most 10000 gains");
   if (!Array.isArray(amplifier.gains) && amplifier.gains && amplifier.gains.min > amplifier.gains.max)
     issue(["amplifier", "gains", "min"], "Lowest gain must not be above the highest");
+  if (amplifier.commonMode && amplifier.commonMode.min >= amplifier.commonMode.max)
+    issue(["amplifier", "commonMode", "min"], "Lowest input common-mode voltage must be below the highest");
+  if (shunt.deratingKneeC >= shunt.maxTempC)
+    issue(["shunt", "deratingKneeC"], "Derating knee must be below the shunt's maximum temperature");
   if (amplifier.swingLow >= amplifier.supply - amplifier.swingHigh)
     issue(["amplifier", "swingLow"], "Lowest output must be below the highest output the amplifier reaches");
 }

@@ -47,11 +47,28 @@ function independentChecks(r: Requirement, c: ReturnType<typeof evaluateCandidat
   const m = buildModel(r);
   const failed: string[] = [];
   const tol = 1 + 1e-9;
-  if (c.burdenV > r.drop.max * tol || operatingBurden(m, c.shuntOhms) > r.drop.max * tol) failed.push("drop");
-  if (c.outputAtMaxV > Math.min(r.readout.fullScale, r.amplifier.supply - r.amplifier.swingHigh) * tol)
+  const burdenOp = operatingBurden(m, c.shuntOhms);
+  if (c.burdenV > r.drop.max * tol || burdenOp > r.drop.max * tol) failed.push("drop");
+  // Inputs between the two ends of the shunt; a difference stage's op-amp sees G/(1 + G) of them.
+  const vIn = r.supply.side === "high" ? [r.supply.voltage - burdenOp, r.supply.voltage] : [0, burdenOp];
+  const k = r.amplifier.topology === "difference" ? c.gain / (1 + c.gain) : 1;
+  const cm = r.amplifier.commonMode;
+  if (
+    (r.amplifier.topology === "non-inverting" && r.supply.side === "high") ||
+    vIn.some((v) => k * v > cm.max * tol || k * v * tol < cm.min)
+  )
+    failed.push("commonMode");
+  if (c.outputAtMaxWorstV > Math.min(r.readout.fullScale, r.amplifier.supply - r.amplifier.swingHigh) * tol)
     failed.push("output");
-  if (c.countsAtMin * tol < r.resolution.countsAtMin) failed.push("counts");
-  if (c.ratingW * r.shunt.derating * tol < c.dissipationW) failed.push("power");
+  if ((r.current.min / Math.max(c.lsbA, c.noiseA)) * tol < r.resolution.countsAtMin) failed.push("counts");
+  // Linear derating above the knee to none at the maximum temperature (the resistor derating curve).
+  const tMax = r.temperature.max;
+  const ambient =
+    tMax <= r.shunt.deratingKneeC
+      ? 1
+      : Math.max(0, (r.shunt.maxTempC - tMax) / (r.shunt.maxTempC - r.shunt.deratingKneeC));
+  if (c.ratingW * r.shunt.derating * ambient * tol < c.dissipationW || c.hotSpotC > r.shunt.maxTempC * tol)
+    failed.push("power");
   if (c.bandwidthHz * tol < r.bandwidth.min) failed.push("bandwidth");
   if (c.accuracyBandPercent > r.accuracy.percent * tol) failed.push("accuracy");
   if (c.deadZoneA > r.current.min * tol) failed.push("deadZone");
@@ -156,12 +173,12 @@ describe("solve: the listing", () => {
   });
 
   it("orders by a rank expression when one is given", () => {
-    const s = solve({ ...logger, limit: 50 }, { rankExpression: "burdenV" });
+    const s = solve({ ...logger, limit: 400 }, { rankExpression: "burdenV" });
     const rest = s.candidates.filter((c) => c.feasible && !c.pareto);
     expect(rest.length).toBeGreaterThan(5);
     for (let i = 1; i < rest.length; i++)
       expect((rest[i] as Candidate).burdenV).toBeGreaterThanOrEqual((rest[i - 1] as Candidate).burdenV);
-    const t = solve({ ...logger, limit: 50 }, { rankExpression: "-lsbA" }).candidates.filter(
+    const t = solve({ ...logger, limit: 400 }, { rankExpression: "-lsbA" }).candidates.filter(
       (c) => c.feasible && !c.pareto,
     );
     for (let i = 1; i < t.length; i++)

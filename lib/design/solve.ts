@@ -2,7 +2,15 @@
 // single pair can cover the span.
 import { candidateFigures } from "./candidate";
 import { decadePairs, decadeScaleLabel } from "./decade";
-import { buildModel, defaultScore, signalBandwidth, type Model } from "./model";
+import {
+  buildModel,
+  deadZoneA,
+  defaultScore,
+  operatingCurrent,
+  resolvableStepA,
+  signalBandwidth,
+  type Model,
+} from "./model";
 import { paretoFrontSorted } from "./pareto";
 import { rejectReasons, type RejectReason } from "./pair";
 import { compileRankExpression, type CompiledRank, type RankScope } from "./rank";
@@ -76,17 +84,19 @@ function rankScope(m: Model, sw: SweepArrays, p: number, scope: RankScope): Rank
   scope.shuntOhms = R;
   scope.gain = G;
   scope.transimpedanceVPerA = rg;
+  const iOpRaw = operatingCurrent(m, R);
+  const iOp = Number.isNaN(iOpRaw) ? m.iMax : iOpRaw;
   scope.burdenV = m.iMax * R;
-  scope.dissipationW = m.iMax * m.iMax * R;
+  scope.dissipationW = iOp * iOp * R;
   scope.ratingW = Number.isNaN(rating) ? (m.ratings[m.ratings.length - 1] ?? NaN) : rating;
-  scope.outputAtMaxV = m.iMax * rg;
+  scope.outputAtMaxV = iOp * rg;
   scope.lsbA = m.lsbV / rg;
   scope.offsetErrorA = m.vosRef / R;
   scope.errorAtMinPercent = 100 * (sw.errMin[p] as number);
-  scope.countsAtMin = (m.iMin * rg) / m.lsbV;
+  scope.countsAtMin = m.iMin / resolvableStepA(m, R, G);
   scope.bandwidthHz = signalBandwidth(m, G);
-  scope.deadZoneA = m.swingLow / rg;
-  scope.headroomV = m.outCeil - m.iMax * rg;
+  scope.deadZoneA = deadZoneA(m, R, G);
+  scope.headroomV = m.outCeil - iOp * rg;
   scope.selfHeatingK = scope.dissipationW * (sw.theta[i] as number);
   return scope;
 }

@@ -9,10 +9,20 @@ export type Candidate = {
   gain: number;
   transimpedanceVPerA: number;
   burdenV: number;
+  /** Current through the shunt at full load in the requirement's load model, A. */
+  operatingCurrentA: number;
+  /** At operatingCurrentA. */
   dissipationW: number;
   ratingW: number;
+  /** Ideal output at operatingCurrentA: I·R·G, V. */
   outputAtMaxV: number;
+  /** Highest output the error budget allows at full load (the output constraint uses it), V. */
+  outputAtMaxWorstV: number;
   lsbA: number;
+  /** The smallest current step the readout can tell apart through the noise (the counts constraint uses it), A. */
+  resolvableStepA: number;
+  /** Below this current the output sits at its floor, offset included, A. */
+  deadZoneA: number;
   offsetErrorA: number;
   errorAtMinPercent: number;
   feasible: boolean;
@@ -24,8 +34,10 @@ export type CandidateDetail = Candidate & {
   loadVoltageV: number;
   selfHeatingK: number;
   bandwidthHz: number;
-  deadZoneA: number;
+  /** Steps the readout can tell apart at Imin: Imin / resolvableStepA. */
   countsAtMin: number;
+  /** Hot spot of the shunt at the hottest ambient and full load, °C. */
+  hotSpotC: number;
   noiseA: number;
   headroomV: number;
   errorAtTypicalPercent: number | null;

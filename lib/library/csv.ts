@@ -25,6 +25,8 @@ type ColumnSpec = {
   /** For a list of quantities, the dimension of each. */
   dim?: Dimension;
   label: string;
+  /** A column a file may leave out (added after the first files were written); an empty cell means unset. */
+  optional?: boolean;
 };
 
 export const amplifierColumns: ColumnSpec[] = [
@@ -53,6 +55,21 @@ export const amplifierColumns: ColumnSpec[] = [
   { key: "cmrrDb", aliases: ["cmrr"], cell: "number", label: "CMRR (dB)" },
   { key: "supplyMinV", aliases: ["supplymin", "minsupply"], cell: "voltage", label: "Lowest supply" },
   { key: "supplyMaxV", aliases: ["supplymax", "maxsupply"], cell: "voltage", label: "Highest supply" },
+  { key: "topology", aliases: [], cell: "text", label: "Topology", optional: true },
+  {
+    key: "commonModeMinV",
+    aliases: ["commonmodemin", "cmmin"],
+    cell: "voltage",
+    label: "Lowest input common-mode voltage",
+    optional: true,
+  },
+  {
+    key: "commonModeMaxV",
+    aliases: ["commonmodemax", "cmmax"],
+    cell: "voltage",
+    label: "Highest input common-mode voltage",
+    optional: true,
+  },
 ];
 
 export const shuntColumns: ColumnSpec[] = [
@@ -105,7 +122,7 @@ function readHeader(kind: PartKind, cells: string[], line: number): HeaderColumn
     }
     found.push({ spec, index, label, scale });
   }
-  const missing = specs.filter((s) => !found.some((f) => f.spec === s));
+  const missing = specs.filter((s) => !s.optional && !found.some((f) => f.spec === s));
   if (missing.length) {
     return new CsvRefusal(
       `the column${missing.length > 1 ? "s" : ""} ${missing.map((m) => `"${m.key}"`).join(", ")} ${missing.length > 1 ? "are" : "is"} missing`,
@@ -204,7 +221,9 @@ export function parseLibraryCsv(
         });
       const values: Record<string, unknown> = {};
       for (const col of header) {
-        const r = readCell(col, cells[col.index] ?? "");
+        const raw = cells[col.index] ?? "";
+        if (col.spec.optional && raw.trim() === "") continue;
+        const r = readCell(col, raw);
         if (!r.ok) return new CsvRefusal(r.reason, { row, line, column: col.label });
         values[col.spec.key] = r.value;
       }

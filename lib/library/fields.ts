@@ -1,6 +1,6 @@
 // How each library field is shown and typed on the screen: the label in the trade's words, the
 // SI value formatted with a prefix for the table and the form, and how the form's text goes to the API.
-import { formatSI } from "@/lib/design";
+import { formatSI, topologies, topologyLabels, type Topology } from "@/lib/design";
 import type { PartKind } from "./schema";
 
 export type FieldKind = "text" | "quantity" | "numberList" | "quantityList" | "select" | "checkbox" | "number";
@@ -61,6 +61,27 @@ export const amplifierFields: FieldSpec[] = [
   { key: "cmrrDb", label: "CMRR (dB)", kind: "number", show: (v) => (typeof v === "number" ? `${v} dB` : "") },
   { key: "supplyMinV", label: "Lowest supply", kind: "quantity", show: si("V"), hint: "e.g. 2.7 V" },
   { key: "supplyMaxV", label: "Highest supply", kind: "quantity", show: si("V"), hint: "e.g. 5.5 V" },
+  {
+    key: "topology",
+    label: "Topology",
+    kind: "select",
+    show: (v) => topologyLabels[v as Topology] ?? plain(v),
+    options: topologies.map((t) => ({ value: t, label: topologyLabels[t] })),
+  },
+  {
+    key: "commonModeMinV",
+    label: "Lowest input common-mode voltage",
+    kind: "quantity",
+    show: si("V"),
+    hint: "e.g. -0.3 V; blank: the topology's usual range",
+  },
+  {
+    key: "commonModeMaxV",
+    label: "Highest input common-mode voltage",
+    kind: "quantity",
+    show: si("V"),
+    hint: "e.g. 26 V; blank: the topology's usual range",
+  },
 ];
 
 export const shuntFields: FieldSpec[] = [
@@ -107,6 +128,14 @@ export const tableColumnsOf: Record<PartKind, TableColumn[]> = {
     column("amplifiers", "biasCurrentA", "Bias current"),
     column("amplifiers", "noiseDensityVPerRtHz", "Noise"),
     column("amplifiers", "gbwHz", "GBW"),
+    {
+      key: "commonMode",
+      label: "Common mode",
+      show: (p) =>
+        typeof p.commonModeMinV === "number" && typeof p.commonModeMaxV === "number"
+          ? `${si("V")(p.commonModeMinV)} – ${si("V")(p.commonModeMaxV)}`
+          : "usual for its topology",
+    },
     { key: "supply", label: "Supply", show: (p) => `${si("V")(p.supplyMinV)} – ${si("V")(p.supplyMaxV)}` },
   ],
   shunts: [

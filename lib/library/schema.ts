@@ -1,7 +1,7 @@
 // The parts library's inputs: one zod schema per part kind, used by the API, the forms and CSV import.
 // Quantities may be SI numbers or unit strings ("10 uV", "2 MHz"), as everywhere in the API.
 import { z } from "zod";
-import { isSeriesName, quantity, seriesNames, type Dimension } from "@/lib/design";
+import { isSeriesName, quantity, seriesNames, topologies, type Dimension } from "@/lib/design";
 import { textField } from "@/lib/text-field";
 
 export const gainModes = ["fixed", "resistor-set"] as const;
@@ -26,6 +26,12 @@ const fractionBelowHalf = (label: string) =>
         ctx.addIssue({ code: "custom", message: `${label} must be between 0 and 50 % (e.g. 0.001 or "0.1 %")` });
     }),
   );
+
+const optionalVoltage = (label: string) =>
+  z
+    .preprocess((v) => (v === "" || v === undefined ? null : v), quantity("voltage", label).nullable())
+    .optional()
+    .transform((v) => v ?? null);
 
 const partName = textField({ label: "Name", min: 1, minMessage: "Name is required", max: 120 });
 
@@ -62,6 +68,12 @@ export const amplifierObject = z.object({
     .max(200, { error: "CMRR must be at most 200 dB" }),
   supplyMinV: positive("voltage", "Lowest supply"),
   supplyMaxV: positive("voltage", "Highest supply"),
+  topology: z
+    .enum(topologies, { error: `Topology: expected one of ${topologies.join(", ")}` })
+    .default("current-sense"),
+  // Blank: the topology's usual range (lib/design DEFAULTS.md).
+  commonModeMinV: optionalVoltage("Lowest input common-mode voltage"),
+  commonModeMaxV: optionalVoltage("Highest input common-mode voltage"),
 });
 
 function amplifierRules(a: z.output<typeof amplifierObject>, ctx: z.RefinementCtx) {
@@ -85,6 +97,18 @@ function amplifierRules(a: z.output<typeof amplifierObject>, ctx: z.RefinementCt
         message: "Resistor-set gains: the lowest must be at least 1 and not above the highest",
       });
   }
+  if ((a.commonModeMinV === null) !== (a.commonModeMaxV === null))
+    ctx.addIssue({
+      code: "custom",
+      path: [a.commonModeMinV === null ? "commonModeMinV" : "commonModeMaxV"],
+      message: "Give both ends of the common-mode range, or neither (the topology's usual range)",
+    });
+  else if (a.commonModeMinV !== null && a.commonModeMaxV !== null && a.commonModeMinV >= a.commonModeMaxV)
+    ctx.addIssue({
+      code: "custom",
+      path: ["commonModeMaxV"],
+      message: "Highest common-mode voltage must be above the lowest",
+    });
   if (a.swingLowV + a.swingHighV >= a.supplyMinV)
     ctx.addIssue({
       code: "custom",

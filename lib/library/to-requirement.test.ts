@@ -31,6 +31,19 @@ describe("library parts as requirement groups", () => {
     }
   });
 
+  it("carries the part's topology and common-mode range; blank means the topology's usual range", () => {
+    const hv = amplifierInput.parse(demoAmplifiers.find((a) => a.commonModeMaxV !== undefined)!);
+    const r = parseRequirement({ ...base, amplifier: amplifierRequirement(hv, 5) });
+    if (!r.ok) throw new Error(r.message);
+    expect(r.requirement.amplifier.commonMode).toEqual({ min: -0.3, max: 36 });
+    const rs = amplifierInput.parse(demoAmplifiers.find((a) => a.gainMode === "resistor-set")!);
+    const r2 = parseRequirement({ ...base, amplifier: amplifierRequirement(rs, 5) });
+    if (!r2.ok) throw new Error(r2.message);
+    expect(r2.requirement.amplifier.topology).toBe("non-inverting");
+    expect(r2.requirement.amplifier.commonMode).toEqual({ min: -0.1, max: 5.1 });
+    expect(amplifierInput.safeParse({ ...demoAmplifiers[0], commonModeMinV: "0 V" }).success).toBe(false);
+  });
+
   it("clamps the amplifier supply into the part's range", () => {
     const amp = amplifierInput.parse(demoAmplifiers[0]!);
     expect(amplifierRequirement(amp, 12).supply).toBe(amp.supplyMaxV);

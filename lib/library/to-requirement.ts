@@ -32,6 +32,10 @@ export function amplifierRequirement(amp: AmplifierValues, supplyV?: number): Am
     swingLow: amp.swingLowV,
     swingHigh: amp.swingHighV,
     cmrrDb: amp.cmrrDb,
+    topology: amp.topology,
+    ...(amp.commonModeMinV !== null && amp.commonModeMaxV !== null
+      ? { commonMode: { min: amp.commonModeMinV, max: amp.commonModeMaxV } }
+      : {}),
   };
 }
 

@@ -6,10 +6,11 @@ import { parseRequirement, type RequirementInput } from "../../lib/design/requir
 import { solve } from "../../lib/design/solve";
 import { sweepGrid, sweepValues } from "../../lib/design/sweep";
 
-/** The 24 V pump controller of the demo (DESIGN.md §6), swept wide on purpose. */
+/** A pump controller like the demo's (DESIGN.md §6), sensed on the low side (a resistor-pair
+ * gain is a non-inverting stage, ground-referenced), swept wide on purpose. */
 export const benchRequirement: RequirementInput = {
   current: { min: "20 mA", max: "2 A" },
-  supply: { voltage: "12 V", side: "high" },
+  supply: { voltage: "12 V", side: "low" },
   drop: { max: "100 mV" },
   readout: { kind: "adc", bits: 16, fullScale: "2.5 V" },
   resolution: { countsAtMin: 10 },
@@ -43,40 +44,62 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
   const nG = gains.length;
   const mask = new Uint8Array(values.length * nG);
   const errMin = new Float64Array(values.length * nG);
-  const rejected = new Int32Array(7);
+  const rejected = new Int32Array(8);
   const sqrtNbw = new Float64Array(nG);
   const bw = new Float64Array(nG);
+  const epsG = new Float64Array(nG);
+  const cmK = new Float64Array(nG);
+  const cmErr = new Float64Array(nG);
+  const tol = m.gainSetTol;
   for (let j = 0; j < nG; j++) {
     const g = gains[j] as number;
     bw[j] = Math.min(m.gbw / g, m.filterHz);
     sqrtNbw[j] = Math.sqrt((Math.PI / 2) * (bw[j] as number));
+    const diff = m.topology === 1;
+    epsG[j] = tol === 0 ? 0 : diff ? 2 * tol : m.topology === 3 ? (tol * (g - 1)) / g : (2 * tol * (g - 1)) / g;
+    cmK[j] = diff ? g / (1 + g) : 1;
+    cmErr[j] = m.topology === 2 ? 0 : m.vCm * (cmK[j] as number) * m.cmrrLin + (diff ? (m.vCm * 4 * tol) / (1 + g) : 0);
   }
   const ratings = Float64Array.from(m.ratings);
   const slack = 1 + 1e-12;
   let feasible = 0;
   for (let i = 0; i < values.length; i++) {
     const R = values[i] as number;
-    // drop at the operating point, for the three load models
+    // drop and current at the operating point, for the three load models
     let burden: number;
-    if (m.loadModel === 0) burden = m.iMax * R;
-    else if (m.loadModel === 1) burden = (m.vBus * R) / (m.vBus / m.iMax + R);
-    else {
+    let iOp: number;
+    if (m.loadModel === 0) {
+      burden = m.iMax * R;
+      iOp = m.iMax;
+    } else if (m.loadModel === 1) {
+      burden = (m.vBus * R) / (m.vBus / m.iMax + R);
+      iOp = m.vBus / (m.vBus / m.iMax + R);
+    } else {
       const disc = m.vBus * m.vBus - 4 * m.vBus * m.iMax * R;
       burden = disc < 0 ? NaN : m.vBus - (m.vBus + Math.sqrt(disc)) / 2;
+      iOp = disc < 0 ? NaN : (m.vBus * m.iMax) / ((m.vBus + Math.sqrt(disc)) / 2);
     }
     const dropFails =
       !(burden <= m.dropMax * slack) || m.iMax * R > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
-    const need = (m.iMax * m.iMax * R) / m.derating;
+    const iHeat = Number.isNaN(iOp) ? m.iMax : iOp;
+    const power = iHeat * iHeat * R;
     let rating = NaN;
-    for (let k = 0; k < ratings.length; k++) {
-      if ((ratings[k] as number) >= need * (1 - 1e-12)) {
-        rating = ratings[k] as number;
-        break;
+    if (m.ambientDerate > 0) {
+      const need = power / (m.derating * m.ambientDerate);
+      for (let k = 0; k < ratings.length; k++) {
+        if ((ratings[k] as number) >= need * (1 - 1e-12)) {
+          rating = ratings[k] as number;
+          break;
+        }
       }
     }
     const theta =
       m.thetaFixed ?? m.ratedRise / (Number.isNaN(rating) ? (ratings[ratings.length - 1] as number) : rating);
-    const offsetA = (m.vosWorst + m.cmV) / R + m.ib;
+    const hot = m.tAmbMax + power * theta > m.maxTempC * slack;
+    const b = Number.isNaN(burden) ? m.iMax * R : burden;
+    const vLo = m.high ? m.vBus - b : 0;
+    const vHi = m.high ? m.vBus : b;
+    const offsetBase = m.vosWorst / R + m.ib;
     const noisePerR = Math.sqrt(m.en2 + m.fourKT * R) / R;
     const heat = m.alphaR * R * theta;
     const gainLo = m.gainConst + heat * m.bandLo * m.bandLo;
@@ -85,23 +108,30 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
     for (let j = 0; j < nG; j++) {
       const G = gains[j] as number;
       const rg = R * G;
+      const eps = epsG[j] as number;
       let bits = dropFails ? 1 : 0;
-      if (m.iMax * rg > m.outCeil * slack) bits |= 2;
-      if ((m.iMin * rg) / m.lsbV < m.countsAtMin / slack) bits |= 4;
-      if (Number.isNaN(rating)) bits |= 8;
-      if ((bw[j] as number) < m.bwReq / slack) bits |= 16;
-      const fixedA = offsetA + m.lsbV / (2 * rg) + m.crest * noisePerR * (sqrtNbw[j] as number);
-      const lo = gainLo + fixedA / m.bandLo;
-      const hi = gainHi + fixedA / m.bandHi;
-      if (lo > m.accRatio * slack || hi > m.accRatio * slack) bits |= 32;
-      if (m.swingLow / rg > m.iMin * slack) bits |= 64;
+      const k = cmK[j] as number;
+      if ((m.topology === 2 && m.high) || k * vHi > m.cmMax * slack || k * vLo < m.cmMin / slack) bits |= 2;
+      const offA = offsetBase + (cmErr[j] as number) / R;
+      const noiseRms = noisePerR * (sqrtNbw[j] as number);
+      const outWorst = (iOp + iOp * (m.gainConst + eps + heat * iOp * iOp) + offA + m.crest * noiseRms) * rg;
+      if (outWorst > m.outCeil * slack) bits |= 4;
+      const step = Math.max(m.lsbV / rg, noiseRms);
+      if (m.iMin < (m.countsAtMin / slack) * step) bits |= 8;
+      if (Number.isNaN(rating) || hot) bits |= 16;
+      if ((bw[j] as number) < m.bwReq / slack) bits |= 32;
+      const fixedA = offA + m.lsbV / (2 * rg) + m.crest * noiseRms;
+      const lo = gainLo + eps + fixedA / m.bandLo;
+      const hi = gainHi + eps + fixedA / m.bandHi;
+      if (lo > m.accRatio * slack || hi > m.accRatio * slack) bits |= 64;
+      if (m.swingLow / rg + offA > m.iMin * slack) bits |= 128;
       const p = i * nG + j;
       mask[p] = bits;
-      errMin[p] = gainMin + fixedA / m.iMin;
+      errMin[p] = gainMin + eps + fixedA / m.iMin;
       if (bits === 0) feasible++;
       else {
-        const k = 31 - Math.clz32(bits & -bits);
-        rejected[k] = (rejected[k] ?? 0) + 1;
+        const kk = 31 - Math.clz32(bits & -bits);
+        rejected[kk] = (rejected[kk] ?? 0) + 1;
       }
     }
   }

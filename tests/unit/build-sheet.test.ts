@@ -51,6 +51,8 @@ const highVoltage: RequirementInput = {
   readout: { kind: "adc", bits: 12, fullScale: "3.3 V" },
   resolution: { countsAtMin: 10 },
   accuracy: { percent: 3 },
+  // 120 V is beyond the default current-sense part's common-mode range: name a high-voltage one.
+  amplifier: { commonMode: { min: "0 V", max: "150 V" } },
 };
 
 const resistorSet: RequirementInput = {
