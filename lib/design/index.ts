@@ -19,8 +19,10 @@ export { solve, defaultRankingText, type SolveResult, type SolveOptions } from "
 export { RankExpressionError, compileRankExpression, rankFields, type RankField } from "./rank";
 export { planRanges, SWITCH_DOWN_FRACTION, MAX_RANGES, type RangePlan, type PlannedRange } from "./range-plan";
 export * from "./bench-check";
-export { decadeScaleLabel } from "./decade";
+export { decadeScale, decadeScaleLabel } from "./decade";
 export * from "./insertion";
 export * from "./netlist";
 export * from "./monte-carlo";
 export { mulberry32 } from "./prng";
+export * from "./cautions";
+export * from "./profile";

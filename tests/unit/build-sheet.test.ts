@@ -9,7 +9,14 @@ import { tmpdir } from "node:os";
 import path from "node:path";
 import { extractText } from "unpdf";
 import { beforeAll, describe, expect, it } from "vitest";
-import { benchCheck, evaluateCandidate, formatSI, type RequirementInput } from "@/lib/design";
+import {
+  benchCheck,
+  decadeScale,
+  designCautions,
+  evaluateCandidate,
+  formatSI,
+  type RequirementInput,
+} from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
 import { Font } from "@react-pdf/renderer";
 import { sheetFonts } from "@/lib/build-sheet/fonts";
@@ -121,7 +128,7 @@ describe("build sheet of a draft (soil logger, low side)", () => {
   it("shows the performance figures from the engine", () => {
     const m = evaluateCandidate(view.requirement, view.choice);
     expectText(r.all, formatSI(m.burdenV, "V"));
-    expectText(r.all, `${formatSI(m.transimpedanceVPerA, "V/A")}: ${f.decadeScale(m.transimpedanceVPerA)}`);
+    expectText(r.all, `${formatSI(m.transimpedanceVPerA, "V/A")}: ${decadeScale(m.transimpedanceVPerA)}`);
     expectText(r.all, formatSI(m.lsbA, "A"));
     expectText(r.all, f.percent(m.errorAtMinPercent));
     expectText(r.all, f.percent(m.errorAtMaxPercent));
@@ -131,9 +138,15 @@ describe("build sheet of a draft (soil logger, low side)", () => {
     expectText(r.all, "Error versus current");
   });
 
+  it("prints the engine's cautions, the list the candidate study shows", () => {
+    const m = evaluateCandidate(view.requirement, view.choice);
+    const lines = designCautions(view.requirement, m).map((c) => `${c.title}: ${c.text}`);
+    expect(sheetData(view).cautions).toEqual(lines);
+    for (const line of lines) expectText(r.all, line.slice(0, 40));
+  });
+
   it("gives the cautions and defers to local codes and licensed practice", () => {
     for (const words of [
-      "Hot parts",
       "Fuse the measured path",
       "measurement category",
       "Never open a live inductive circuit",
