@@ -17,7 +17,8 @@ import { ErrorCurveChart, type ErrorSeries } from "@/components/charts/error-cur
 import { LoadChart } from "@/components/charts/load-chart";
 import { Panel } from "@/components/ui/panel";
 import { candidateKey } from "@/lib/wizard/candidate-key";
-import { Cautions, cautionsFor } from "./cautions";
+import { designCautions } from "@/lib/design/cautions";
+import { Cautions } from "./cautions";
 import { Figures } from "./figures";
 
 const label = (c: Choice) => `${formatSI(c.shuntOhms, "Ω")} × ${Number(c.gain.toPrecision(4))}`;
@@ -62,7 +63,7 @@ export function CandidateStudy({
         ? req.current.typical
         : req.current.min;
   const budget = useMemo(() => errorAt(req, choice, budgetCurrent), [req, choice, budgetCurrent]);
-  const cautions = cautionsFor(req, detail);
+  const cautions = designCautions(req, detail);
 
   return (
     <div className="flex flex-col gap-4">

@@ -10,7 +10,7 @@ import { Panel } from "@/components/ui/panel";
 import { formatSI } from "@/lib/design/units";
 import type { DesignView, DesignViewer } from "@/lib/design-view";
 import type { DecimatedSeries } from "@/lib/profile/decimate";
-import type { ProfileSummary } from "@/lib/profile/summary";
+import type { ProfileSummary } from "@/lib/design/profile";
 
 type ListItem = {
   id: string;

@@ -2,6 +2,7 @@
 
 import { useEffect, useRef, useState } from "react";
 import { formatSI } from "@/lib/design/units";
+import { burdenV, loadVoltageV } from "@/lib/design/profile";
 import type { DecimatedSeries } from "@/lib/profile/decimate";
 import { linearTicks, logTicks } from "@/lib/profile/ticks";
 
@@ -82,7 +83,7 @@ export function ProfileChart({
   // Load voltage = supply − I·R; the burden I·R reads on the right axis of the same curve.
   const vTop = M.top + CURRENT_H + M.gap;
   const supply = design.supplyV;
-  const maxBurden = Math.max(peak * design.shuntOhms, 1e-12);
+  const maxBurden = Math.max(burdenV(peak, design.shuntOhms), 1e-12);
   // The required minimum load voltage is drawn when it is near enough not to flatten the curve.
   const loadMin =
     design.loadMinV !== undefined && design.loadMinV >= supply - 4 * maxBurden ? design.loadMinV : undefined;
@@ -94,7 +95,7 @@ export function ProfileChart({
   const currentPath = pathOf(series.tS, values, x, yCurrent);
   const loadPath = pathOf(
     series.tS,
-    values.map((i) => supply - i * design.shuntOhms),
+    values.map((i) => loadVoltageV(i, design)),
     x,
     yVolt,
   );
@@ -300,7 +301,7 @@ export function ProfileChart({
           right={M.left + plotW}
           t={series.tS[hover]!}
           i={series.currentA[hover]!}
-          loadV={supply - series.currentA[hover]! * design.shuntOhms}
+          loadV={loadVoltageV(series.currentA[hover]!, design)}
         />
       )}
       {/* Catches the pointer over the plots. */}

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { Field, TextInput } from "@/components/ui/field";
 import { formatSI } from "@/lib/design/units";
-import { batteryLifeS, type ProfileSummary } from "@/lib/profile/summary";
+import { batteryLifeS, type ProfileSummary } from "@/lib/design/profile";
 import { formatDuration, parseCapacityC } from "@/lib/profile/ticks";
 
 const pct = (p: number) => `${String(Number(p.toPrecision(3)))} %`;

@@ -25,24 +25,5 @@ export function ppmPerK(perK: number): string {
 /** Noise density; the sheet's typeface has no root sign, so the trade's "rtHz" spelling. */
 export const noiseDensity = (vPerRtHz: number) => formatSI(vPerRtHz, "V/rtHz");
 
-const currentUnits: { scale: number; name: string }[] = [
-  { scale: 1, name: "A" },
-  { scale: 1e-3, name: "mA" },
-  { scale: 1e-6, name: "µA" },
-  { scale: 1e-9, name: "nA" },
-  { scale: 1e-12, name: "pA" },
-];
-
-/**
- * The scale factor as "output per unit of current" (DESIGN.md §3: decade factors such as
- * "1 mV per mA" are the easiest to read off a meter): the largest current unit for which
- * the output stays below 1 V.
- */
-export function decadeScale(vPerA: number): string {
-  if (!(vPerA > 0) || !Number.isFinite(vPerA)) return "—";
-  const unit = currentUnits.find((u) => vPerA * u.scale < 1 * (1 - 1e-12)) ?? currentUnits[currentUnits.length - 1]!;
-  return `${formatSI(vPerA * unit.scale, "V")} per ${unit.name}`;
-}
-
 export const decibels = (db: number) => formatSI(db, "dB", 4);
 export const farads = (v: number) => formatSI(v, "F");

@@ -1,27 +1,16 @@
-// Renders a saved design's build sheet to PDF bytes, with the sheet's own embedded typeface.
+// Renders a saved design's build sheet to PDF bytes, in typefaces embedded from npm font files.
 import { createElement } from "react";
 import { Font, renderToBuffer } from "@react-pdf/renderer";
 import type { DesignView } from "@/lib/design-view";
-import { sheetFonts } from "./font";
+import { breakPoints, sheetFonts } from "./fonts";
 import { BuildSheetDocument, PLANNED_PAGES, type SheetMeta } from "./pdf/document";
-import { FONT } from "./pdf/theme";
 import { oneLine } from "@/lib/text-field";
 import { namesOnOneLine, sheetData, type SheetData } from "./sheet-data";
 
-function registerFonts() {
-  // Asked of react-pdf itself: a module reload in development gives it a fresh, empty registry.
-  if (Font.getRegisteredFontFamilies().includes(FONT)) return;
-  const { regular, bold } = sheetFonts();
-  const url = (b: Uint8Array) => `data:font/ttf;base64,${Buffer.from(b).toString("base64")}`;
-  Font.register({
-    family: FONT,
-    fonts: [
-      { src: url(regular), fontWeight: 400 },
-      { src: url(bold), fontWeight: 700 },
-    ],
-  });
-  // Words are not split across lines: a part number or a value cut in two is a misreading.
-  Font.registerHyphenationCallback((word) => [word]);
+/** Registers the typefaces a sheet's text needs and answers the family list to set it in. */
+function fontsFor(view: DesignView, data: SheetData, meta: SheetMeta): string[] {
+  Font.registerHyphenationCallback(breakPoints);
+  return sheetFonts(JSON.stringify([view, data, meta.team]));
 }
 
 /** Pages in a finished PDF (react-pdf writes each page object uncompressed). */
@@ -37,14 +26,14 @@ export async function renderBuildSheet(view: DesignView, opts: SheetMeta): Promi
 
 /** The same, from sheet data already worked out (tests feed it oversized data). */
 export async function renderSheet(view: DesignView, data: SheetData, opts: SheetMeta): Promise<Buffer> {
-  registerFonts();
   view = namesOnOneLine(view);
   opts = { ...opts, team: oneLine(opts.team) };
+  const fonts = fontsFor(view, data, opts);
   // Page numbers written in advance spare react-pdf a second layout of every page; if some
   // page's content overflowed (a very long name, say), the count is off, so lay it out again
   // with numbers the layout works out.
   const planned = await renderToBuffer(
-    createElement(BuildSheetDocument, { view, data, meta: opts }) as unknown as DocElement,
+    createElement(BuildSheetDocument, { view, data, meta: opts, fonts }) as unknown as DocElement,
   );
   if (pdfPageCount(planned) === PLANNED_PAGES) return planned;
   return renderToBuffer(
@@ -52,6 +41,7 @@ export async function renderSheet(view: DesignView, data: SheetData, opts: Sheet
       view,
       data,
       meta: opts,
+      fonts,
       numbering: { kind: "dynamic" },
     }) as unknown as DocElement,
   );

@@ -2,6 +2,8 @@
 // formats. Shared by the PDF, the design page's panel and the tests (which compare against it).
 import {
   benchCheck,
+  designCautions,
+  decadeScale,
   errorAt,
   errorCurve,
   evaluateCandidate,
@@ -47,11 +49,6 @@ export function namesOnOneLine<V extends Pick<DesignView, "name" | "project" | "
     approval: view.approval ? { ...view.approval, byName: oneLine(view.approval.byName) } : view.approval,
   };
 }
-
-/** Above this common-mode voltage the isolation caution leads (a DC touch-safety limit often quoted as 60 V; common practice, from memory). */
-export const HAZARDOUS_VOLTAGE_V = 60;
-/** A shunt surface hotter than this can burn on touch (common practice, no source). */
-export const HOT_SURFACE_C = 60;
 
 /** A longer gain list is summarised, so the requirement table stays one table. */
 const MAX_LISTED_GAINS = 12;
@@ -106,7 +103,7 @@ export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
     { label: "Load voltage at maximum current", value: f.volts(m.loadVoltageV) },
     {
       label: "Scale factor",
-      value: `${f.transimpedance(m.transimpedanceVPerA)}: ${f.decadeScale(m.transimpedanceVPerA)}`,
+      value: `${f.transimpedance(m.transimpedanceVPerA)}: ${decadeScale(m.transimpedanceVPerA)}`,
     },
     { label: "Output at maximum current", value: `${f.volts(m.outputAtMaxV)} (headroom ${f.volts(m.headroomV)})` },
     { label: "Readout step (LSB) in current", value: f.amps(m.lsbA) },
@@ -203,19 +200,9 @@ export function layoutNotes(req: Requirement, choice: Choice): string[] {
   ];
 }
 
+/** The engine's cautions for this design, one line each (the same list the candidate study shows). */
 export function cautions(req: Requirement, m: CandidateDetail): string[] {
-  const vCm = req.supply.side === "high" ? req.supply.voltage : 0;
-  const hot = req.temperature.max + m.selfHeatingK;
-  const out = [
-    `Hot parts: at full current R1 runs about ${f.kelvin(m.selfHeatingK)} above ambient (up to about ${f.celsius(hot)})${hot >= HOT_SURFACE_C ? ", hot enough to burn: do not touch it while or just after it carries current" : ""}.`,
-    "Fuse the measured path: put a fuse or current limit rated for the circuit ahead of the shunt, so a fault cannot turn the shunt or its traces into the fuse.",
-    vCm >= HAZARDOUS_VOLTAGE_V
-      ? `High common-mode voltage: the sense lines sit at ${f.volts(vCm)}. Use an isolated amplifier or one rated for that common-mode voltage, and bench instruments rated for the measurement category of the circuit.`
-      : "High common-mode voltage or mains: if this front end is ever used on mains-connected or high-voltage circuits, it needs an isolated amplifier, isolated readout and instruments rated for the circuit's measurement category; this design does not provide them.",
-    "Never open a live inductive circuit (motors, coils, long supply leads): the current keeps flowing and the voltage spike can arc or destroy the amplifier. Switch off before connecting or disconnecting the shunt.",
-    "Follow local electrical codes and your organisation's safety rules; work on mains or hazardous voltages belongs to suitably qualified, licensed people.",
-  ];
-  return out;
+  return designCautions(req, m).map((c) => `${c.title}: ${c.text}`);
 }
 
 export function sheetData(view: Pick<DesignView, "requirement" | "choice">): SheetData {

@@ -1,6 +1,7 @@
 // Decade scale factors (1 mV per mA, 1 mV per µA, …): the readouts a bench meter user can read
 // without arithmetic. DESIGN.md §3 asks the solver to offer them.
 import type { SweepArrays } from "./sweep";
+import { formatSI } from "./units";
 
 const perUnit = ["A", "mA", "µA", "nA", "pA"];
 
@@ -32,4 +33,23 @@ export function decadePairs(sw: SweepArrays, scores: Float64Array): number[] {
     }
   }
   return [...best.entries()].sort((a, b) => a[0] - b[0]).map(([, p]) => p);
+}
+
+const currentUnits: { scale: number; name: string }[] = [
+  { scale: 1, name: "A" },
+  { scale: 1e-3, name: "mA" },
+  { scale: 1e-6, name: "µA" },
+  { scale: 1e-9, name: "nA" },
+  { scale: 1e-12, name: "pA" },
+];
+
+/**
+ * Any scale factor as "output per unit of current" (DESIGN.md §3: decade factors such as
+ * "1 mV per mA" are the easiest to read off a meter): the largest current unit for which the
+ * output stays below 1 V. 2.5 V/A → "2.5 mV per mA".
+ */
+export function decadeScale(vPerA: number): string {
+  if (!(vPerA > 0) || !Number.isFinite(vPerA)) return "—";
+  const unit = currentUnits.find((u) => vPerA * u.scale < 1 * (1 - 1e-12)) ?? currentUnits[currentUnits.length - 1]!;
+  return `${formatSI(vPerA * unit.scale, "V")} per ${unit.name}`;
 }

@@ -19,7 +19,7 @@ export { solve, defaultRankingText, type SolveResult, type SolveOptions } from "
 export { RankExpressionError, compileRankExpression, rankFields, type RankField } from "./rank";
 export { planRanges, SWITCH_DOWN_FRACTION, MAX_RANGES, type RangePlan, type PlannedRange } from "./range-plan";
 export * from "./bench-check";
-export { decadeScaleLabel } from "./decade";
+export { decadeScale, decadeScaleLabel } from "./decade";
 export * from "./insertion";
 export * from "./netlist";
 export * from "./monte-carlo";
@@ -27,3 +27,5 @@ export { mulberry32 } from "./prng";
 export * from "./unit-check";
 export * from "./unit-prediction";
 export * from "./calibrated-accuracy";
+export * from "./cautions";
+export * from "./profile";

@@ -2,7 +2,8 @@
 // Pure TypeScript (papaparse and the engine only): no database, no React.
 export * from "./csv";
 export * from "./parse";
-export * from "./summary";
+// The summary's arithmetic is the engine's (lib/design/profile.ts); re-exported for the routes.
+export * from "@/lib/design/profile";
 export * from "./decimate";
 export * from "./samples";
 export * from "./limits";

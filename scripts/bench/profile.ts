@@ -3,7 +3,7 @@
 // (split lines and Number(), one pass of sums, one pass of min/max). Reported as ratios.
 import { decimateMinMax } from "../../lib/profile/decimate";
 import { parseProfileCsv } from "../../lib/profile/parse";
-import { summarizeProfile } from "../../lib/profile/summary";
+import { summarizeProfile } from "../../lib/design/profile";
 
 const median = (xs: number[]) => {
   const s = [...xs].sort((a, b) => a - b);

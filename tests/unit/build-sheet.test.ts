@@ -4,12 +4,22 @@
 // uses is one its embedded typeface can draw. Pages are also rendered to PNG (pdftoppm) into
 // test-results/build-sheet/ for a person to look at.
 import { spawnSync } from "node:child_process";
-import { mkdirSync, writeFileSync } from "node:fs";
+import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import path from "node:path";
 import { extractText } from "unpdf";
 import { beforeAll, describe, expect, it } from "vitest";
-import { benchCheck, evaluateCandidate, formatSI, type RequirementInput } from "@/lib/design";
+import {
+  benchCheck,
+  decadeScale,
+  designCautions,
+  evaluateCandidate,
+  formatSI,
+  type RequirementInput,
+} from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
-import { coveredCodePoints } from "@/lib/build-sheet/font";
+import { Font } from "@react-pdf/renderer";
+import { sheetFonts } from "@/lib/build-sheet/fonts";
 import { fixtureView, loggerRequirement, pumpRequirement } from "@/lib/build-sheet/fixtures";
 import * as f from "@/lib/build-sheet/format";
 import { notApprovedNotice } from "@/lib/build-sheet/pdf/document";
@@ -122,7 +132,7 @@ describe("build sheet of a draft (soil logger, low side)", () => {
   it("shows the performance figures from the engine", () => {
     const m = evaluateCandidate(view.requirement, view.choice);
     expectText(r.all, formatSI(m.burdenV, "V"));
-    expectText(r.all, `${formatSI(m.transimpedanceVPerA, "V/A")}: ${f.decadeScale(m.transimpedanceVPerA)}`);
+    expectText(r.all, `${formatSI(m.transimpedanceVPerA, "V/A")}: ${decadeScale(m.transimpedanceVPerA)}`);
     expectText(r.all, formatSI(m.lsbA, "A"));
     expectText(r.all, f.percent(m.errorAtMinPercent));
     expectText(r.all, f.percent(m.errorAtMaxPercent));
@@ -132,9 +142,15 @@ describe("build sheet of a draft (soil logger, low side)", () => {
     expectText(r.all, "Error versus current");
   });
 
+  it("prints the engine's cautions, the list the candidate study shows", () => {
+    const m = evaluateCandidate(view.requirement, view.choice);
+    const lines = designCautions(view.requirement, m).map((c) => `${c.title}: ${c.text}`);
+    expect(sheetData(view).cautions).toEqual(lines);
+    for (const line of lines) expectText(r.all, line.slice(0, 40));
+  });
+
   it("gives the cautions and defers to local codes and licensed practice", () => {
     for (const words of [
-      "Hot parts",
       "Fuse the measured path",
       "measurement category",
       "Never open a live inductive circuit",
@@ -145,20 +161,28 @@ describe("build sheet of a draft (soil logger, low side)", () => {
     }
   });
 
-  it("uses only characters its embedded typeface has (µ and Ω included)", async () => {
-    const covered = coveredCodePoints();
+  it("draws every character it prints with a typeface that has it (µ and Ω included)", async () => {
     const raw = (await extractText(new Uint8Array(r.pdf), { mergePages: true })).text;
     // Undo only the extraction's mu substitution; anything else must be drawable as is.
-    const missing = [
-      ...new Set(
-        [...raw.replace(/\u03bc/g, "\u00b5")].filter((ch) => !/\s/.test(ch) && !covered.has(ch.codePointAt(0)!)),
-      ),
-    ];
+    const missing = [...new Set([...raw.replace(/\u03bc/g, "\u00b5")].filter((ch) => !/\s/.test(ch)))].filter(
+      (ch) => !drawable(ch, raw),
+    );
     expect(missing).toEqual([]);
     expect(raw).toMatch(/[µμ]A/);
     expect(raw).toContain("Ω");
   });
 });
+
+/** Whether one of the families a sheet with this text is set in has a glyph for `ch` (react-pdf's own font objects). */
+function drawable(ch: string, text: string): boolean {
+  const cp = ch.codePointAt(0) ?? 0;
+  return sheetFonts(text).some((fontFamily) => {
+    const data: unknown = Font.getFont({ fontFamily, fontWeight: 400 })?.data;
+    return typeof data === "object" && data !== null && "hasGlyphForCodePoint" in data
+      ? (data as { hasGlyphForCodePoint(c: number): boolean }).hasGlyphForCodePoint(cp)
+      : false;
+  });
+}
 
 describe("build sheet of an approved design (pump controller, high side)", () => {
   const view = fixtureView(pumpRequirement, {
@@ -235,5 +259,98 @@ describe("page numbers when a page overflows its plan", () => {
     expect(pdfPageCount(pdf)).toBe(text.length);
     expect(text.length).toBeGreaterThan(3);
     text.map(squash).forEach((page, i) => expect(page).toContain(`Page ${i + 1} of ${text.length}`));
+  });
+});
+
+// Poppler's pdftotext reads the text layer as a viewer's copy and search would (CI installs it).
+function pdftotext(pdf: Buffer, args: string[]): string {
+  const dir = mkdtempSync(path.join(tmpdir(), "sheet-text-"));
+  const file = path.join(dir, "sheet.pdf");
+  writeFileSync(file, pdf);
+  const out = spawnSync("pdftotext", [...args, "-enc", "UTF-8", file, "-"], { encoding: "utf8" });
+  rmSync(dir, { recursive: true, force: true });
+  if (out.status !== 0) throw new Error(`pdftotext failed (is poppler-utils installed?): ${out.stderr}`);
+  return out.stdout;
+}
+
+type Word = { page: number; text: string; xMin: number; xMax: number; yMin: number; yMax: number };
+
+/** Every word on every page with its box, in PDF points from the top-left corner. */
+function words(pdf: Buffer): Word[] {
+  const html = pdftotext(pdf, ["-bbox"]);
+  const out: Word[] = [];
+  let page = 0;
+  for (const m of html.matchAll(
+    /<page [^>]*>|<word xMin="([\d.]+)" yMin="([\d.]+)" xMax="([\d.]+)" yMax="([\d.]+)">([^<]*)<\/word>/g,
+  )) {
+    if (m[0].startsWith("<page")) {
+      page += 1;
+      continue;
+    }
+    out.push({ page, text: m[5] ?? "", xMin: +m[1]!, yMin: +m[2]!, xMax: +m[3]!, yMax: +m[4]! });
+  }
+  return out;
+}
+
+describe("names in any script", () => {
+  // Latin with «», Greek (µ is the micro sign, Ω the ohm letter), Cyrillic and Chinese.
+  const name = "Shunt «µΩ» Проверка тока 测试电流 Δ-Messung";
+  let pdf: Buffer;
+  beforeAll(async () => {
+    const view = fixtureView(loggerRequirement, { name, project: "Проект 电源 «Nord»", status: "approved" });
+    pdf = (await render(view, "scripts")).pdf;
+  });
+
+  it("come back from the PDF's text layer exactly, character for character", () => {
+    const text = pdftotext(pdf, []);
+    expect(text).toContain(name);
+    expect(text).toContain("Проект 电源 «Nord»");
+  });
+
+  it("are drawn from typefaces that have their glyphs (Inter, then Noto Sans SC for the Chinese)", () => {
+    for (const ch of new Set(name.replace(/\s/g, ""))) expect(drawable(ch, name), ch).toBe(true);
+    const dir = mkdtempSync(path.join(tmpdir(), "sheet-fonts-"));
+    writeFileSync(path.join(dir, "sheet.pdf"), pdf);
+    const fonts = spawnSync("pdffonts", [path.join(dir, "sheet.pdf")], { encoding: "utf8" }).stdout;
+    rmSync(dir, { recursive: true, force: true });
+    expect(fonts).toMatch(/Inter/);
+    expect(fonts).toMatch(/NotoSansSC/);
+  });
+});
+
+describe("a 300-character name", () => {
+  // Typed without a single space: the worst case for a line breaker.
+  const name = "FieldLoggerBenchAdapterSecondBuild".repeat(9).slice(0, 300);
+  let all: Word[];
+  beforeAll(async () => {
+    expect([...name]).toHaveLength(300);
+    all = words((await render(fixtureView(loggerRequirement, { name, status: "draft" }), "name-300")).pdf);
+  });
+
+  it("stays inside the page's margins on every page (A4, 40 pt each side)", () => {
+    const pageWidth = 595.28;
+    for (const w of all) {
+      expect(w.xMin, `${w.text} on page ${w.page}`).toBeGreaterThanOrEqual(40 - 0.5);
+      expect(w.xMax, `${w.text} on page ${w.page}`).toBeLessThanOrEqual(pageWidth - 40 + 0.5);
+    }
+  });
+
+  it("wraps inside its column of the title block and leaves the next column clear", () => {
+    const p1 = all.filter((w) => w.page === 1);
+    const label = (t: string) => p1.find((w) => w.text === t && w.xMin < 60);
+    const design = label("Design");
+    const project = label("Project");
+    expect(design && project).toBeTruthy();
+    // The title block's left column: half the 515 pt text width less half the 12 pt gap.
+    const columnRight = 40 + (515.28 - 12) / 2;
+    const row = p1.filter((w) => w.yMin >= design!.yMin - 1 && w.yMax <= project!.yMin + 1);
+    const value = row.filter((w) => w.xMin > design!.xMax && w.xMin < columnRight);
+    expect(value.length).toBeGreaterThan(3); // the name, wrapped over several lines
+    expect(value.map((w) => w.text.replace(/-$/, "")).join("")).toBe(name);
+    for (const w of value) expect(w.xMax, w.text).toBeLessThanOrEqual(columnRight + 0.5);
+    // Nothing of the name reaches the right-hand column (Status, Approved, ...).
+    const right = row.filter((w) => w.xMin >= columnRight);
+    expect(right.map((w) => w.text)).toContain("Approved");
+    expect(right.map((w) => w.text).join(" ")).not.toMatch(/FieldLogger/);
   });
 });

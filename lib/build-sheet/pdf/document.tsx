@@ -1,18 +1,19 @@
 // The build sheet as a react-pdf document: what a maker needs to build and bench-check the front
 // end from paper alone. Every figure comes from sheetData (the engine, formatted with formatSI).
-import { Document, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
+import { Document, Page, StyleSheet, View } from "@react-pdf/renderer";
 import type { ReactNode } from "react";
 import type { DesignView } from "@/lib/design-view";
 import type { SheetData } from "../sheet-data";
 import { ErrorChart } from "./error-chart";
 import { Schematic } from "./schematic";
-import { colors, FONT } from "./theme";
+import { Text } from "./text";
+import { colors } from "./theme";
 
 export type SheetMeta = { team: string; generatedAt: Date };
 
 const s = StyleSheet.create({
   // No lineHeight on the page itself: with one there, react-pdf drops the page-number text.
-  page: { fontFamily: FONT, fontSize: 8, color: colors.ink, paddingTop: 62, paddingBottom: 40, paddingHorizontal: 40 },
+  page: { fontSize: 8, color: colors.ink, paddingTop: 62, paddingBottom: 40, paddingHorizontal: 40 },
   body: { fontSize: 8, lineHeight: 1.3 },
   header: {
     position: "absolute",
@@ -223,19 +224,21 @@ export type Numbering = { kind: "static"; total: number } | { kind: "dynamic" };
 function SheetPage({
   view,
   meta,
+  fonts,
   number,
   numbering,
   children,
 }: {
   view: DesignView;
   meta: SheetMeta;
+  fonts: string[];
   number: number;
   numbering: Numbering;
   children: ReactNode;
 }) {
   const approved = view.status === "approved";
   return (
-    <Page size="A4" style={[s.page, approved ? {} : { paddingTop: 74 }]}>
+    <Page size="A4" style={[s.page, { fontFamily: fonts }, approved ? {} : { paddingTop: 74 }]}>
       <View style={s.header} fixed>
         <View>
           <Text style={s.brand}>SENSEWRIGHT BUILD SHEET</Text>
@@ -275,16 +278,19 @@ export function BuildSheetDocument({
   view,
   data,
   meta,
+  fonts,
   numbering = { kind: "static", total: PLANNED_PAGES },
 }: {
   view: DesignView;
   data: SheetData;
   meta: SheetMeta;
+  /** Font families in fallback order (lib/build-sheet/fonts.ts). */
+  fonts: string[];
   numbering?: Numbering;
 }) {
   const req = view.requirement;
   const page = (n: number, children: ReactNode) => (
-    <SheetPage view={view} meta={meta} number={n} numbering={numbering}>
+    <SheetPage view={view} meta={meta} fonts={fonts} number={n} numbering={numbering}>
       {children}
     </SheetPage>
   );

@@ -3,7 +3,7 @@
 import { G, Line, Path, Rect, Svg, Text } from "@react-pdf/renderer";
 import { formatSI, type ErrorCurvePoint, type Requirement } from "@/lib/design";
 import * as f from "../format";
-import { colors, FONT } from "./theme";
+import { colors, LABEL_FONTS } from "./theme";
 
 export const CHART_W = 515;
 export const CHART_H = 170;
@@ -33,7 +33,7 @@ function T({
   size?: number;
   children: string;
 }) {
-  const style = { fontFamily: FONT, fontSize: size } as unknown as Record<string, string>;
+  const style = { fontFamily: LABEL_FONTS, fontSize: size } as unknown as Record<string, string>;
   return (
     <Text x={x} y={y} fill={color} textAnchor={anchor} style={style}>
       {children}

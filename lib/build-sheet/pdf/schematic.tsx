@@ -5,7 +5,7 @@ import { Circle, G, Line, Path, Polygon, Rect, Svg, Text } from "@react-pdf/rend
 import type { Choice, Requirement } from "@/lib/design";
 import * as f from "../format";
 import { gainResistors, kelvinAdvice, readoutText } from "../parts";
-import { colors, FONT } from "./theme";
+import { colors, LABEL_FONTS } from "./theme";
 
 export const SCHEMATIC_W = 515;
 export const SCHEMATIC_H = 232;
@@ -22,7 +22,10 @@ type Txt = {
 
 function Label({ x, y, size = 7.5, anchor = "start", color = colors.ink, bold = false, children }: Txt) {
   // react-pdf's SVG text takes font settings in style; its types only list paint attributes.
-  const style = { fontFamily: FONT, fontSize: size, fontWeight: bold ? 700 : 400 } as unknown as Record<string, string>;
+  const style = { fontFamily: LABEL_FONTS, fontSize: size, fontWeight: bold ? 700 : 400 } as unknown as Record<
+    string,
+    string
+  >;
   return (
     <Text x={x} y={y} fill={color} textAnchor={anchor} style={style}>
       {children}

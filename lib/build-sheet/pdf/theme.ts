@@ -1,5 +1,5 @@
-// The sheet's colours (the app's palette, from app/globals.css) and its font family name.
-export const FONT = "SensewrightSheet";
+// The sheet's colours (the app's palette, from app/globals.css) and the families its own labels use.
+export { LABEL_FONTS } from "../fonts";
 
 export const colors = {
   ink: "#1c1e21",

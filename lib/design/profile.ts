@@ -1,6 +1,7 @@
-// What a recording says about a design: the issue fixes these definitions so scripts can rely on them.
-// Plain arithmetic over the samples; the physics (lsbA) comes from the engine's figures of the design.
-import type { Amps, Ohms, Seconds, Volts } from "@/lib/design";
+// What a recorded current profile says about a design: charge, average and peak current, the
+// burden and the load voltage it leaves, clipping and sub-step samples. The definitions are fixed
+// (docs/model.md, "Current profiles") so scripts reading the summary can rely on them.
+import type { Amps, Ohms, Seconds, Volts } from "./units";
 
 /** The few figures of a design a profile is judged against. */
 export type ProfileDesign = {
@@ -28,6 +29,16 @@ export type ProfileSummary = {
   /** The current below which a sample reads under one step (= lsbA). */
   lsbA: Amps;
 };
+
+/** The voltage a current drops across the shunt (Ohm's law). */
+export function burdenV(currentA: Amps, shuntOhms: Ohms): Volts {
+  return currentA * shuntOhms;
+}
+
+/** What the load is left with at that current: the supply less the burden. */
+export function loadVoltageV(currentA: Amps, d: Pick<ProfileDesign, "shuntOhms" | "supplyV">): Volts {
+  return d.supplyV - burdenV(currentA, d.shuntOhms);
+}
 
 /** The current at which the ideal output I·R·G reaches the readout's full scale. */
 export function clipCurrent(d: ProfileDesign): Amps {
@@ -59,7 +70,7 @@ export function summarizeProfile(timesS: Float64Array, currentsA: Float64Array, 
     if (k > 0) charge += ((currentsA[k - 1]! + i) / 2) * (timesS[k]! - timesS[k - 1]!);
   }
   const durationS = timesS[n - 1]! - timesS[0]!;
-  const maxBurdenV = peak * d.shuntOhms;
+  const maxBurdenV = burdenV(peak, d.shuntOhms);
   return {
     samples: n,
     durationS,
@@ -67,7 +78,7 @@ export function summarizeProfile(timesS: Float64Array, currentsA: Float64Array, 
     averageCurrentA: charge / durationS,
     peakCurrentA: peak,
     maxBurdenV,
-    minLoadVoltageV: d.supplyV - maxBurdenV,
+    minLoadVoltageV: loadVoltageV(peak, d),
     clippedPercent: (100 * clipped) / n,
     belowResolutionPercent: (100 * below) / n,
     clipCurrentA: clipCurrent(d),

@@ -1,0 +1,113 @@
+// The build sheet's typefaces: static WOFF files from npm that react-pdf reads as they are.
+// Inter (a real regular and a real bold, one file each for Latin, Greek and Cyrillic together)
+// sets the sheet; Noto Sans SC draws the Chinese and Japanese a design's name or project may
+// hold. react-pdf picks, character by character, the first family of a list that has the glyph.
+//
+// Inter must be one file: where a word changes font, react-pdf may break the line there with a
+// hyphen, so "mΩ" set from two files could print as "m-" and "Ω" on two lines. Noto Sans SC
+// comes only in unicode-range slices (about a hundred, as web fonts are cut), so each slice is
+// a family of its own and a sheet lists only the slices its text needs.
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import { Font } from "@react-pdf/renderer";
+
+const WEIGHTS = [400, 700] as const;
+
+const modules = (...parts: string[]) => path.join(process.cwd(), "node_modules", ...parts);
+
+const INTER = "Sheet Inter";
+const interFile = (weight: number) =>
+  modules("inter-ui", "Inter (web)", weight === 700 ? "Inter-Bold.woff" : "Inter-Regular.woff");
+
+const CJK_PKG = ["@fontsource", "noto-sans-sc"];
+// The package's table names the numbered slices "[12]"; the file names say "12".
+const cjkFile = (slice: string, weight: number) =>
+  modules(...CJK_PKG, "files", `noto-sans-sc-${slice.replace(/[[\]]/g, "")}-${weight}-normal.woff`);
+
+/** The families the sheet's own words and figures are set in (charts, schematic): µ and Ω included. */
+export const LABEL_FONTS = [INTER];
+
+type Slice = { name: string; family: string; ranges: [number, number][] };
+
+function parseRanges(css: string): [number, number][] {
+  return css.split(",").map((part) => {
+    const [lo, hi] = part.trim().replace(/^U\+/i, "").split("-");
+    const a = parseInt(lo ?? "", 16);
+    return [a, hi ? parseInt(hi, 16) : a];
+  });
+}
+
+let cjkSlices: Slice[] | undefined;
+
+/** Noto Sans SC's numbered slices, read once from the package's own unicode-range table. */
+function slices(): Slice[] {
+  if (cjkSlices) return cjkSlices;
+  const table = modules(...CJK_PKG, "unicode.json");
+  let ranges: Record<string, string>;
+  try {
+    ranges = JSON.parse(readFileSync(table, "utf8")) as Record<string, string>;
+  } catch {
+    throw new Error(`The build sheet's CJK typeface is missing (${table}); install the app's dependencies.`);
+  }
+  // Its latin, cyrillic, ... slices are Inter's job; only the numbered ones hold CJK.
+  cjkSlices = Object.entries(ranges)
+    .filter(([name]) => name.startsWith("["))
+    .map(([name, css]) => ({ name, family: `Sheet CJK ${name}`, ranges: parseRanges(css) }));
+  return cjkSlices;
+}
+
+function register(family: string, file: (weight: number) => string) {
+  // Asked of react-pdf itself: a module reload in development gives it a fresh, empty registry.
+  if (Font.getRegisteredFontFamilies().includes(family)) return;
+  Font.register({ family, fonts: WEIGHTS.map((fontWeight) => ({ src: file(fontWeight), fontWeight })) });
+}
+
+/**
+ * The family list for a sheet whose text is `text`: Inter, then the CJK slices that hold one of
+ * its non-ASCII characters, in the package's order (a slice listed for a character Inter has is
+ * loaded but never used). Registers the families it names. A character no family holds is drawn
+ * as Inter's missing-glyph box.
+ */
+export function sheetFonts(text: string): string[] {
+  register(INTER, interFile);
+  const all = slices();
+  const picked = new Set<Slice>();
+  for (const ch of new Set(text)) {
+    const cp = ch.codePointAt(0) ?? 0;
+    if (cp < 0x80) continue;
+    const slice = all.find((s) => s.ranges.some(([lo, hi]) => cp >= lo && cp <= hi));
+    if (slice) picked.add(slice);
+  }
+  const cjk = all.filter((s) => picked.has(s));
+  cjk.forEach((s) => register(s.family, (w) => cjkFile(s.name, w)));
+  return [INTER, ...cjk.map((s) => s.family)];
+}
+
+/** Longest run of characters kept on one line; longer runs break (with a hyphen) where they must. */
+const LONGEST_UNBROKEN = 16;
+const wide = /[\p{Script=Han}\p{Script=Hiragana}\p{Script=Katakana}\p{Script=Hangul}]/u;
+
+/**
+ * Where react-pdf may break a word. Ordinary words and values are never split (a part number or
+ * a figure cut in two is a misreading); a run longer than any such word (a name typed without
+ * spaces) and CJK text, which has no spaces, may break between characters rather than run
+ * over the next column.
+ */
+export function breakPoints(word: string): string[] {
+  const chars = [...word];
+  if (chars.length <= LONGEST_UNBROKEN && !wide.test(word)) return [word];
+  const parts: string[] = [];
+  let run = "";
+  let count = 0;
+  for (const ch of chars) {
+    run += ch;
+    count += 1;
+    if (wide.test(ch) || count >= LONGEST_UNBROKEN / 2) {
+      parts.push(run);
+      run = "";
+      count = 0;
+    }
+  }
+  if (run) parts.push(run);
+  return parts;
+}
