@@ -23,4 +23,30 @@ export async function startServer() {
   if (e.SEED_DEMO === "1" && (await seedDemoIfEmpty())) console.log("[db] demo team Harbourline Labs loaded");
   const { startMail } = await import("@/lib/mail/start");
   await startMail();
+  await warmUp();
+}
+
+/**
+ * First-use costs paid before the first request rather than by it: the engine's first sweep (JIT,
+ * unit tables), the database's first reads, and the build sheet's typeface and PDF modules (the
+ * typeface is built once per process and shared). A failure here is logged and never stops the start.
+ */
+async function warmUp() {
+  const t0 = performance.now();
+  try {
+    const { parseRequirement, solve } = await import("@/lib/design");
+    const { fixtureView, loggerRequirement } = await import("@/lib/build-sheet/fixtures");
+    const parsed = parseRequirement(loggerRequirement);
+    if (parsed.ok) solve(parsed.requirement);
+    const { pingDatabase } = await import("@/db/queries/health");
+    await pingDatabase();
+    const { renderBuildSheet } = await import("@/lib/build-sheet/render");
+    await renderBuildSheet(fixtureView(loggerRequirement, { status: "draft" }), {
+      team: "warm-up",
+      generatedAt: new Date(),
+    });
+    console.log(`[start] engine, database and build sheet warmed in ${Math.round(performance.now() - t0)} ms`);
+  } catch (err) {
+    console.warn(`[start] warm-up skipped: ${(err as Error).message}`);
+  }
 }

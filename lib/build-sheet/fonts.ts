@@ -24,6 +24,9 @@ const CJK_PKG = ["@fontsource", "noto-sans-sc"];
 const cjkFile = (slice: string, weight: number) =>
   modules(...CJK_PKG, "files", `noto-sans-sc-${slice.replace(/[[\]]/g, "")}-${weight}-normal.woff`);
 
+/** Inter's regular and bold files, for a baseline that writes the same text without react-pdf (bench). */
+export const interFontFiles = () => ({ regular: interFile(400), bold: interFile(700) });
+
 /** The families the sheet's own words and figures are set in (charts, schematic): µ and Ω included. */
 export const LABEL_FONTS = [INTER];
 

@@ -1,0 +1,239 @@
+// Server benchmark, on the built app serving the scale team (`npm run seed:scale`; seeded here into
+// BENCH_SCALE_DIR, default .data/scale, when that directory is empty). Every figure is a ratio
+// measured side by side in this one run, against /api/health on the same server, or first ÷ warm:
+//   first use after start: solve.first.ratio, pdf.first.ratio, profile.firstChart.ratio
+//   at scale (p50 ÷ health p50): designs.list.ratio, designs.search.ratio, design.page.ratio,
+//     compare.ratio, and designs.list.scaleVsDemo (the scale team's first page ÷ the demo team's)
+//   under load: health.underSheets.p99Ratio (20 concurrent sheets), server.rss.MB after 20 connections
+// Build first (`npx next build`, or with NEXT_DIST_DIR). Nothing here asserts.
+import { spawn, spawnSync, type ChildProcess } from "node:child_process";
+import fs from "node:fs";
+import path from "node:path";
+import { request } from "@playwright/test";
+
+const PORT = Number(process.env.BENCH_SERVER_PORT ?? 3319);
+const BASE = `http://localhost:${PORT}`;
+const DIR = path.resolve(process.env.BENCH_SCALE_DIR ?? ".data/scale");
+const PASSWORD = "sensewright-demo";
+
+const quantile = (xs: number[], q: number) => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s[Math.min(s.length - 1, Math.max(0, Math.ceil(q * s.length) - 1))] as number;
+};
+const median = (xs: number[]) => quantile(xs, 0.5);
+
+async function waitForHealth(server: ChildProcess, timeoutMs = 180_000) {
+  const until = Date.now() + timeoutMs;
+  while (Date.now() < until) {
+    if (server.exitCode !== null) throw new Error(`the app exited with ${server.exitCode} before it was ready`);
+    try {
+      if ((await fetch(`${BASE}/api/health`)).ok) return;
+    } catch {
+      /* not up yet */
+    }
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  throw new Error(`the app did not answer on ${BASE} within ${timeoutMs / 1000} s`);
+}
+
+/** A session cookie for `email`, through next-auth's credentials flow. */
+async function sessionCookie(email: string): Promise<string> {
+  const ctx = await request.newContext({ baseURL: BASE });
+  try {
+    const { csrfToken } = (await (await ctx.get("/api/auth/csrf")).json()) as { csrfToken: string };
+    const res = await ctx.post("/api/auth/callback/credentials", {
+      form: { csrfToken, email, password: PASSWORD, json: "true" },
+      maxRedirects: 0,
+    });
+    if (res.status() !== 200) throw new Error(`sign-in as ${email} answered ${res.status()}`);
+    const { cookies } = await ctx.storageState();
+    return cookies.map((c) => `${c.name}=${c.value}`).join("; ");
+  } finally {
+    await ctx.dispose();
+  }
+}
+
+type Call = { path: string; method?: "GET" | "POST"; body?: unknown; cookie?: string };
+
+/** Milliseconds for one request, body read to the end; throws on a non-2xx answer. */
+async function timed(call: Call): Promise<number> {
+  const t0 = performance.now();
+  const res = await fetch(`${BASE}${call.path}`, {
+    method: call.method ?? "GET",
+    headers: {
+      ...(call.cookie ? { cookie: call.cookie } : {}),
+      ...(call.body ? { "content-type": "application/json" } : {}),
+    },
+    body: call.body ? JSON.stringify(call.body) : undefined,
+  });
+  await res.arrayBuffer();
+  const ms = performance.now() - t0;
+  if (!res.ok) throw new Error(`${call.method ?? "GET"} ${call.path} answered ${res.status}`);
+  return ms;
+}
+
+/** The resident memory of a process and all its descendants, in MB (Linux /proc). */
+function treeRssMB(pid: number): number {
+  const ps = spawnSync("ps", ["-eo", "pid=,ppid=,rss="], { encoding: "utf8" }).stdout;
+  const rows = ps
+    .trim()
+    .split("\n")
+    .map((l) => l.trim().split(/\s+/).map(Number) as [number, number, number]);
+  const inTree = new Set([pid]);
+  for (let grew = true; grew;) {
+    grew = false;
+    for (const [p, pp] of rows)
+      if (inTree.has(pp) && !inTree.has(p)) {
+        inTree.add(p);
+        grew = true;
+      }
+  }
+  return rows.filter(([p]) => inTree.has(p)).reduce((kb, [, , rss]) => kb + rss, 0) / 1024;
+}
+
+function ensureScaleData() {
+  if (fs.existsSync(path.join(DIR, "PG_VERSION"))) return;
+  console.error(`[bench] seeding the scale team into ${DIR} (once; a minute or two)…`);
+  const seeded = spawnSync(process.execPath, ["--import", "tsx", "scripts/seed-scale.ts", "--dir", DIR], {
+    stdio: "inherit",
+  });
+  if (seeded.status !== 0) throw new Error("npm run seed:scale failed");
+}
+
+/** `calls` sampled round-robin, one request at a time, so load from elsewhere falls on all alike. */
+async function interleaved(calls: Record<string, Call>, rounds: number) {
+  const out: Record<string, number[]> = Object.fromEntries(Object.keys(calls).map((k) => [k, []]));
+  for (let r = 0; r < rounds; r++) for (const [k, c] of Object.entries(calls)) out[k]!.push(await timed(c));
+  return out;
+}
+
+const solveBody = {
+  current: { min: "2 mA", max: "180 mA" },
+  supply: { voltage: "3.0 V", side: "low" },
+  drop: { max: "60 mV" },
+  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+  resolution: { countsAtMin: 10 },
+};
+
+export async function run(): Promise<Record<string, number>> {
+  ensureScaleData();
+  const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", String(PORT)], {
+    env: { ...process.env, PORT: String(PORT), PGLITE_DIR: DIR, SEED_DEMO: "0", NEXTAUTH_URL: BASE },
+    stdio: "ignore",
+    detached: true,
+  });
+  try {
+    await waitForHealth(server);
+    const rssStartMB = treeRssMB(server.pid!);
+    const designer = await sessionCookie("designer@scale.example");
+    const demo = await sessionCookie("designer@harbourline.example");
+    const as = (c: Omit<Call, "cookie">): Call => ({ ...c, cookie: designer });
+
+    // Ids to open: the deep design (50 revisions), two more, and the profiles of the newest one.
+    const first = (await (await fetch(`${BASE}/api/designs?limit=3`, { headers: { cookie: designer } })).json()) as {
+      designs: { id: string }[];
+    };
+    const deep = (await (
+      await fetch(`${BASE}/api/designs?q=${encodeURIComponent("long-running revision history")}`, {
+        headers: { cookie: designer },
+      })
+    ).json()) as { designs: { id: string }[] };
+    const deepId = deep.designs[0]?.id;
+    if (!deepId || first.designs.length < 3) throw new Error("the scale data lack the designs the bench opens");
+    const three = [deepId, ...first.designs.map((d) => d.id).filter((id) => id !== deepId)].slice(0, 3);
+    const withProfiles = (await (
+      await fetch(`${BASE}/api/designs/${first.designs[0]!.id}/profiles`, { headers: { cookie: designer } })
+    ).json()) as { profiles: { id: string }[] };
+    const profileIds = withProfiles.profiles.map((p) => p.id);
+    if (profileIds.length < 2) throw new Error("the scale data lack profiles on the newest design");
+    const chart = (pid: string) => as({ path: `/api/designs/${first.designs[0]!.id}/profiles/${pid}?width=800` });
+
+    // First use of each after start, then the same warm (a chart of another profile, so no cache helps).
+    const firsts = {
+      solve: await timed(as({ path: "/api/solve", method: "POST", body: solveBody })),
+      pdf: await timed(as({ path: `/api/designs/${deepId}/build-sheet` })),
+      chart: await timed(chart(profileIds[0]!)),
+    };
+    const warmSolve: number[] = [];
+    const warmPdf: number[] = [];
+    const warmChart: number[] = [];
+    for (let k = 0; k < 7; k++) {
+      warmSolve.push(await timed(as({ path: "/api/solve", method: "POST", body: solveBody })));
+      warmPdf.push(await timed(as({ path: `/api/designs/${deepId}/build-sheet` })));
+      warmChart.push(await timed(chart(profileIds[1 + (k % (profileIds.length - 1))]!)));
+    }
+
+    // At scale, side by side with health. A warm-up round first (routes and pages load on first use).
+    const calls: Record<string, Call> = {
+      health: { path: "/api/health" },
+      list: as({ path: "/api/designs" }),
+      search: as({ path: `/api/designs?q=${encodeURIComponent("tide")}` }),
+      searchRare: as({ path: `/api/designs?q=${encodeURIComponent("radio burst 0997")}` }),
+      demoList: { path: "/api/designs", cookie: demo },
+      designPage: as({ path: `/designs/${deepId}` }),
+      compare: as({ path: `/compare?ids=${three.join(",")}` }),
+    };
+    await interleaved(calls, 2);
+    const t = await interleaved(calls, 21);
+    const health = median(t.health!);
+
+    // Health while 20 build sheets render at once, against health idle (p99 of each).
+    const idle = (await interleaved({ health: calls.health! }, 100)).health!;
+    const sheetLoad = Promise.all(
+      Array.from({ length: 20 }, () =>
+        timed(as({ path: `/api/designs/${three[1 + Math.floor(Math.random() * 2)]}/build-sheet` })),
+      ),
+    );
+    const busy: number[] = [];
+    let loading = true;
+    void sheetLoad.finally(() => (loading = false));
+    while (loading || busy.length < 20) busy.push(await timed(calls.health!));
+    await sheetLoad;
+
+    // 20 connections on the busiest routes, then the memory the server keeps.
+    const mix = [
+      calls.list!,
+      calls.search!,
+      as({ path: "/api/solve", method: "POST", body: solveBody }),
+      calls.designPage!,
+    ];
+    await Promise.all(
+      Array.from({ length: 20 }, async (_, w) => {
+        for (let k = 0; k < 10; k++) await timed(mix[(w + k) % mix.length]!);
+      }),
+    );
+    await new Promise((r) => setTimeout(r, 1000));
+    const rssAfterMB = treeRssMB(server.pid!);
+
+    return {
+      "solve.first.ms": firsts.solve,
+      "solve.first.ratio": firsts.solve / median(warmSolve),
+      "pdf.first.ms": firsts.pdf,
+      "pdf.warm.ms": median(warmPdf),
+      "pdf.first.ratio": firsts.pdf / median(warmPdf),
+      "profile.firstChart.ratio": firsts.chart / median(warmChart),
+      "health.p50.ms": health,
+      "designs.list.ratio": median(t.list!) / health,
+      "designs.search.ratio": median(t.search!) / health,
+      "designs.searchRare.ratio": median(t.searchRare!) / health,
+      "designs.list.scaleVsDemo": median(t.list!) / median(t.demoList!),
+      "design.page.ratio": median(t.designPage!) / health,
+      "compare.ratio": median(t.compare!) / health,
+      "health.idle.p99.ms": quantile(idle, 0.99),
+      "health.underSheets.p99Ratio": quantile(busy, 0.99) / quantile(idle, 0.99),
+      "server.rss.start.MB": Math.round(rssStartMB),
+      "server.rss.MB": Math.round(rssAfterMB),
+    };
+  } finally {
+    try {
+      if (server.pid) process.kill(-server.pid, "SIGTERM");
+    } catch {
+      /* already gone */
+    }
+    await new Promise((r) => setTimeout(r, 1000));
+  }
+}
+
+if (import.meta.url === `file://${process.argv[1]}`) {
+  run().then((r) => console.log(JSON.stringify(r, null, 2)));
+}
