@@ -119,6 +119,26 @@ async function freshProfile(): Promise<string> {
   expect(res.status(), await res.text()).toBe(201);
   return ((await res.json()) as { id: string }).id;
 }
+// Built units (issue 18): a unit's readings at the approved design's own test points, a fresh serial each call.
+async function unitBody() {
+  const d = (await (await c.designer.get(`/api/designs/${f.approved}`)).json()) as {
+    benchCheck: { currentA: number; expectedV: number }[];
+  };
+  return {
+    serial: `MX-${unique()}`,
+    readings: d.benchCheck.map((b) => ({ currentA: b.currentA, outputV: b.expectedV })),
+  };
+}
+async function unitsCsv() {
+  const { serial, readings } = await unitBody();
+  const text = `serial,${readings.map((r) => `${r.currentA} A`).join(",")}\n${serial},${readings.map((r) => r.outputV).join(",")}\n`;
+  return { file: { name: "units.csv", mimeType: "text/csv", buffer: Buffer.from(text) } };
+}
+async function unitBy(as: APIRequestContext) {
+  const res = await as.post(`/api/designs/${f.approved}/units`, { data: await unitBody() });
+  expect(res.status(), await res.text()).toBe(201);
+  return ((await res.json()) as { id: string }).id;
+}
 
 const routes: Row[] = [
   { name: "GET /api/health", method: "GET", setup: fixed("/api/health"), expect: { ...members(200), anon: 200 } },
@@ -410,6 +430,92 @@ const routes: Row[] = [
     method: "DELETE",
     setup: fixed(`/api/library/shunts/${NO_SUCH}`),
     expect: editors(404),
+  },
+
+  // --- Built units (issue 18): record, import, read, edit, delete, export. ---
+  {
+    name: "GET /api/designs/[approved]/units",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.approved}/units` }),
+    expect: members(200, 404),
+  },
+  {
+    name: "POST /api/designs/[approved]/units",
+    method: "POST",
+    setup: async () => ({ path: `/api/designs/${f.approved}/units`, data: await unitBody() }),
+    expect: { anon: 401, owner: 201, designer: 201, reviewer: 403, maker: 201, outsider: 404 },
+  },
+  {
+    name: "POST /api/designs/[draft]/units",
+    method: "POST",
+    setup: async () => ({ path: `/api/designs/${f.draft}/units`, data: await unitBody() }),
+    expect: { anon: 401, owner: 422, designer: 422, reviewer: 403, maker: 404, outsider: 404 },
+  },
+  {
+    name: "POST /api/designs/[approved]/units/import",
+    method: "POST",
+    setup: async () => ({ path: `/api/designs/${f.approved}/units/import`, multipart: await unitsCsv() }),
+    expect: { anon: 401, owner: 201, designer: 201, reviewer: 403, maker: 201, outsider: 404 },
+  },
+  {
+    name: "GET /api/designs/[approved]/units/calibration.csv",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.approved}/units/calibration.csv` }),
+    expect: members(200, 404),
+  },
+  {
+    name: "GET /api/designs/[approved]/units/calibration.json",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.approved}/units/calibration.json` }),
+    expect: members(200, 404),
+  },
+  {
+    name: "GET /api/designs/[approved]/units/template.csv",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.approved}/units/template.csv` }),
+    expect: members(200, 404),
+  },
+  {
+    name: "GET /api/designs/[approved]/units/[maker's unit]",
+    method: "GET",
+    setup: async () => ({ path: `/api/designs/${f.approved}/units/${await unitBy(c.maker)}` }),
+    expect: members(200, 404),
+  },
+  {
+    name: "PATCH /api/designs/[approved]/units/[designer's unit]",
+    method: "PATCH",
+    setup: async () => ({
+      path: `/api/designs/${f.approved}/units/${await unitBy(c.designer)}`,
+      data: { builtOn: "2026-11-30" },
+    }),
+    expect: { anon: 401, owner: 200, designer: 200, reviewer: 403, maker: 403, outsider: 404 },
+  },
+  {
+    name: "PATCH /api/designs/[approved]/units/[maker's unit]",
+    method: "PATCH",
+    setup: async () => ({
+      path: `/api/designs/${f.approved}/units/${await unitBy(c.maker)}`,
+      data: { builtOn: "2026-11-30" },
+    }),
+    expect: { anon: 401, owner: 200, designer: 200, reviewer: 403, maker: 200, outsider: 404 },
+  },
+  {
+    name: "DELETE /api/designs/[approved]/units/[designer's unit]",
+    method: "DELETE",
+    setup: async () => ({ path: `/api/designs/${f.approved}/units/${await unitBy(c.designer)}` }),
+    expect: { anon: 401, owner: 200, designer: 200, reviewer: 403, maker: 403, outsider: 404 },
+  },
+  {
+    name: "DELETE /api/designs/[approved]/units/[maker's unit]",
+    method: "DELETE",
+    setup: async () => ({ path: `/api/designs/${f.approved}/units/${await unitBy(c.maker)}` }),
+    expect: { anon: 401, owner: 200, designer: 200, reviewer: 403, maker: 200, outsider: 404 },
+  },
+  {
+    name: "DELETE /api/designs/[approved]/units/[unknown]",
+    method: "DELETE",
+    setup: async () => ({ path: `/api/designs/${f.approved}/units/${NO_SUCH}` }),
+    expect: { anon: 401, owner: 404, designer: 404, reviewer: 403, maker: 404, outsider: 404 },
   },
 ];
 
