@@ -2,6 +2,7 @@
 // wrong shunt and the broken sense line caught with their likely causes, and the batch consistent
 // with the design's predicted spread (no flag: two build faults are not evidence against the model).
 import { afterAll, describe, expect, it } from "vitest";
+import { formatSI, nearestInSeries } from "@/lib/design";
 import { summarizeUnits } from "@/lib/built-units/judge";
 import { closeDb, getDb } from "../client";
 import { listDesigns, listRevisions } from "../queries/designs";
@@ -33,7 +34,12 @@ describe("demo units", () => {
     expect(failing.map((u) => u.serial)).toEqual(["PC-2611-007", "PC-2611-011"]);
     const [shunt, sense] = failing;
     expect(shunt!.causeKind).toBe("gain");
-    expect(shunt!.cause).toMatch(/the shunt may be the next value up \(15 mΩ instead of 14\.7 mΩ\)/);
+    // The fitted shunt is the next E96 value above the approved one (IEC 60063), whatever pair the engine chose.
+    const approvedR = revisions.find((r) => r.revision === 2)!.choice.shuntOhms;
+    const nextUp = nearestInSeries("E96", approvedR * 1.02);
+    expect(shunt!.cause).toContain(
+      `the shunt may be the next value up (${formatSI(nextUp, "Ω")} instead of ${formatSI(approvedR, "Ω")})`,
+    );
     expect(sense!.causeKind).toBe("offset");
     expect(sense!.cause).toMatch(/at every current .*a constant offset/);
     expect(s.yield).toMatchObject({ measured: 10 / 12, units: 12, passing: 10, revision: 2 });

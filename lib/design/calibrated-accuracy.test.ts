@@ -6,7 +6,7 @@ import { calibratedAccuracy, calibratedErrorA } from "./calibrated-accuracy";
 import { req } from "./test-helpers";
 
 const pump = req({
-  current: { min: "100 mA", max: "6 A" },
+  current: { min: "10 mA", max: "6 A" }, // low enough that the calibrated crossing lies inside the span
   supply: { voltage: "24 V", side: "high" },
   drop: { max: "150 mV" },
   readout: { kind: "adc", bits: 12, fullScale: "3.3 V" },
@@ -36,6 +36,7 @@ describe("what calibration removes and what remains", () => {
     const c = calibratedAccuracy(pump, choice);
     expect(c.removed.map((r) => r.source)).toEqual([
       "gainError",
+      "gainSetResistors",
       "shuntTolerance",
       "offset",
       "biasCurrent",

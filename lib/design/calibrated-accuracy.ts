@@ -11,6 +11,7 @@ import type { Choice } from "./types";
  */
 export const removedByCalibration: readonly BudgetSource[] = [
   "gainError",
+  "gainSetResistors",
   "shuntTolerance",
   "offset",
   "biasCurrent",
