@@ -85,6 +85,11 @@ test("an existing account never joins by a password sent to the accept route; ev
   const joined = await victimCtx.post("/api/invitations/accept", { data: { token } });
   expect(joined.status(), await joined.text()).toBe(201);
   expect(await joined.json()).toMatchObject({ email: victim.email, role: "designer", newAccount: false });
+
+  // Removal from a team ends every session of the user, the one working in their other team included.
+  expect((await victimCtx.get("/api/designs")).status()).toBe(200);
+  expect((await outsider.delete(`/api/team/members/${victim.userId}`)).status()).toBe(200);
+  expect((await victimCtx.get("/api/designs")).status()).toBe(401);
 });
 
 test("rotating X-Forwarded-For does not reset the limit; a locked pair gets 429 with Retry-After", async () => {
@@ -101,6 +106,16 @@ test("rotating X-Forwarded-For does not reset the limit; a locked pair gets 429 
   expect(seconds).toBeGreaterThan(0);
   expect(seconds).toBeLessThanOrEqual(15 * 60);
   expect(JSON.parse(held.body).message).toContain("Too many failed sign-ins");
+
+  // The failures were counted against the connection's own address, never the claimed ones.
+  const log = (await (await owner.get("/api/team/audit?limit=200")).json()) as {
+    events: { action: string; targetId: string; details: { address?: string } }[];
+  };
+  const addresses = log.events
+    .filter((e) => e.action === "sign-in.failed" && e.targetId === account.userId)
+    .map((e) => e.details.address);
+  expect(addresses).toHaveLength(5);
+  for (const address of addresses) expect(address).toMatch(/^(127\.0\.0\.1|::1)$/);
 });
 
 test("a stranger's failures on made-up e-mails do not lock a real user out", async () => {
