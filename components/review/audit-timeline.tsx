@@ -54,6 +54,9 @@ const words: Record<string, (d: Record<string, unknown>) => string> = {
   "invitation.accepted": (d) => `accepted the invitation for ${String(d.email)} and joined as ${String(d.role)}`,
   "team.created": (d) => `started the team “${String(d.name)}” for ${String(d.firstOwner)}`,
   "sign-in.failed": (d) => `failed sign-in for ${String(d.email)} (${String(d.reason)})`,
+  "invitation.refused": (d) =>
+    `was refused accepting the invitation for ${String(d.email ?? "an unknown link")} (${String(d.reason)})`,
+  "password.changed": () => "changed their password; every other session of theirs ended",
 };
 
 export function describeAudit(e: AuditEntry): string {

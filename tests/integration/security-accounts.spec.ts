@@ -85,6 +85,11 @@ test("an existing account never joins by a password sent to the accept route; ev
   const joined = await victimCtx.post("/api/invitations/accept", { data: { token } });
   expect(joined.status(), await joined.text()).toBe(201);
   expect(await joined.json()).toMatchObject({ email: victim.email, role: "designer", newAccount: false });
+
+  // Removal from a team ends every session of the user, the one working in their other team included.
+  expect((await victimCtx.get("/api/designs")).status()).toBe(200);
+  expect((await outsider.delete(`/api/team/members/${victim.userId}`)).status()).toBe(200);
+  expect((await victimCtx.get("/api/designs")).status()).toBe(401);
 });
 
 test("rotating X-Forwarded-For does not reset the limit; a locked pair gets 429 with Retry-After", async () => {
@@ -101,6 +106,16 @@ test("rotating X-Forwarded-For does not reset the limit; a locked pair gets 429 
   expect(seconds).toBeGreaterThan(0);
   expect(seconds).toBeLessThanOrEqual(15 * 60);
   expect(JSON.parse(held.body).message).toContain("Too many failed sign-ins");
+
+  // The failures were counted against the connection's own address, never the claimed ones.
+  const log = (await (await owner.get("/api/team/audit?limit=200")).json()) as {
+    events: { action: string; targetId: string; details: { address?: string } }[];
+  };
+  const addresses = log.events
+    .filter((e) => e.action === "sign-in.failed" && e.targetId === account.userId)
+    .map((e) => e.details.address);
+  expect(addresses).toHaveLength(5);
+  for (const address of addresses) expect(address).toMatch(/^(127\.0\.0\.1|::1)$/);
 });
 
 test("a stranger's failures on made-up e-mails do not lock a real user out", async () => {
@@ -317,5 +332,21 @@ test("on screen: a signed-out invitee with an account signs in, comes back, and 
   await expect(page.getByTestId("wrong-account")).toContainText(other.email);
   await expect(page.getByRole("button", { name: `Sign in as ${other.email}` })).toBeVisible();
   await page.screenshot({ path: `${shots}/invitation-wrong-account-1440.png`, fullPage: true });
+  await ctx.close();
+});
+
+test("on screen: a held-back sign-in says how long to wait", async ({ browser }) => {
+  const email = `locked-${unique()}@nowhere.example`;
+  for (let i = 0; i < 5; i++) expect((await attempt(email, `wrong-${i}-guess`)).status).toBe(401);
+  const ctx = await browser.newContext({ viewport: { width: 390, height: 844 } });
+  const page = await ctx.newPage();
+  await page.goto("/sign-in");
+  await page.getByLabel("E-mail").fill(email);
+  await page.getByLabel("Password").fill("any-password-at-all");
+  await page.getByRole("button", { name: "Sign in" }).click();
+  await expect(page.getByTestId("sign-in-error")).toHaveText(
+    /^Too many failed sign-ins from this address\. Try again in 1[45] minutes\.$/,
+  );
+  await page.screenshot({ path: `${shots}/sign-in-held-back-390.png`, fullPage: true });
   await ctx.close();
 });

@@ -1,9 +1,10 @@
 // next-auth's routes, behind two checks of our own: a sign-in from a throttled e-mail-and-address pair
 // or address gets 429 with Retry-After before any password is hashed, and nothing here ends in a 500
-// (a malformed body or callbackUrl is a 400).
+// for bad input (a malformed body or callbackUrl is a 400).
 import NextAuth from "next-auth";
 import type { NextRequest } from "next/server";
 import { clientAddress } from "@/lib/auth/client-address";
+import { toErrorResponse } from "@/lib/auth/gate";
 import { authOptions } from "@/lib/auth/options";
 import { safeRedirectUrl } from "@/lib/auth/safe-redirect";
 import { retryAfterSeconds, signInWaitMs, tryAgainIn } from "@/lib/auth/sign-in-throttle";
@@ -77,9 +78,12 @@ async function guarded(request: NextRequest, context: Context): Promise<Response
     }
     return await handler(request, context);
   } catch (e) {
-    if (e instanceof SyntaxError) return json({ message: "The request body is not valid JSON." }, 400);
-    console.error("[auth] unexpected error", e);
-    return json({ message: "The sign-in service could not read that request; nothing was changed." }, 400);
+    // Malformed input (a body that does not parse, a URL that does not) is the client's: 400.
+    if (e instanceof SyntaxError || e instanceof TypeError) {
+      console.warn("[auth] refused a malformed request:", e.message);
+      return json({ message: "The sign-in service could not read that request; nothing was changed." }, 400);
+    }
+    return toErrorResponse(e);
   }
 }
 

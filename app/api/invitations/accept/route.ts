@@ -2,7 +2,7 @@ import { z } from "zod";
 import { acceptInvitation, findInvitationByToken } from "@/db/queries/invitations";
 import { currentCaller, parseWith, publicRoute, readJson } from "@/lib/auth/gate";
 import { hashPassword } from "@/lib/auth/password-hash";
-import { passwordProblems, PASSWORD_MAX_LENGTH } from "@/lib/auth/password-rules";
+import { newPasswordSchema, PASSWORD_MAX_LENGTH } from "@/lib/auth/password-rules";
 import { HttpError, json, refused } from "@/lib/http";
 import { textField } from "@/lib/text-field";
 
@@ -19,6 +19,12 @@ const acceptSchema = z.object({
     .optional(),
 });
 
+const newAccountSchema = (email: string) =>
+  z.object({
+    name: z.string().trim().min(1, { error: "give your name: it is how the team sees you" }),
+    password: newPasswordSchema(email),
+  });
+
 /**
  * Public. A new account: the invitee sets a name and a password (the app's password rules). An
  * existing account: the caller must be signed in as it, and sends the token alone. The token is
@@ -33,13 +39,8 @@ export const POST = publicRoute(async (request) => {
 
   let newAccount: { name: string; passwordHash: string } | undefined;
   if (invitation?.status === "pending" && !invitation.hasAccount && body.password !== undefined) {
-    const fieldErrors: Record<string, string[]> = {};
-    const problems = passwordProblems(body.password, invitation.email);
-    if (problems.length) fieldErrors.password = problems;
-    if (!body.name) fieldErrors.name = ["give your name: it is how the team sees you"];
-    const [first] = Object.entries(fieldErrors);
-    if (first) throw new HttpError(422, `Invalid input at ${first[0]}: ${first[1][0]}`, fieldErrors);
-    newAccount = { name: body.name, passwordHash: await hashPassword(body.password) };
+    const chosen = parseWith(newAccountSchema(invitation.email), { name: body.name, password: body.password });
+    newAccount = { name: chosen.name, passwordHash: await hashPassword(chosen.password) };
   }
 
   const result = await acceptInvitation({

@@ -1,9 +1,9 @@
 import { z } from "zod";
 import { changePassword, findUserById } from "@/db/queries/users";
 import { clientAddress } from "@/lib/auth/client-address";
-import { apiRoute } from "@/lib/auth/gate";
+import { apiRoute, parseWith } from "@/lib/auth/gate";
 import { hashPassword, verifyPassword } from "@/lib/auth/password-hash";
-import { PASSWORD_MAX_LENGTH, passwordProblems } from "@/lib/auth/password-rules";
+import { newPasswordSchema, PASSWORD_MAX_LENGTH } from "@/lib/auth/password-rules";
 import { renewedSessionCookie } from "@/lib/auth/session-cookie";
 import { recordSignInFailure, retryAfterSeconds, signInWaitMs, tryAgainIn } from "@/lib/auth/sign-in-throttle";
 import { HttpError, json } from "@/lib/http";
@@ -40,8 +40,7 @@ export const PUT = apiRoute({ doing: "change your password", body }, async ({ ca
     await recordSignInFailure(user.email, address);
     throw refuse("currentPassword", ["that is not your current password"]);
   }
-  const problems = passwordProblems(body.newPassword, user.email);
-  if (problems.length) throw refuse("newPassword", problems);
+  parseWith(z.object({ newPassword: newPasswordSchema(user.email) }), { newPassword: body.newPassword });
   if (await verifyPassword(body.newPassword, user.passwordHash))
     throw refuse("newPassword", ["is the password you have now; choose a different one"]);
   const sessionVersion = await changePassword({
