@@ -1,3 +1,4 @@
+import "@/lib/design/zod-jitless";
 import { z } from "zod";
 import { roles } from "@/db/schema";
 

@@ -3,6 +3,7 @@
 // surrogate is not valid UTF-8, so either would fail the save deep in the database as a 500;
 // they are refused here as a 422 on the field instead. Names are one line: line breaks collapse to
 // a space, so a name cannot start a line of its own on a build sheet or in a mail.
+import "@/lib/design/zod-jitless";
 import { z } from "zod";
 
 /** Control characters other than tab, line feed and carriage return (and DEL). */

@@ -1,5 +1,6 @@
 // Quantities at the edges: unit strings in, SI numbers out (and back to SI-prefixed text).
 // mathjs parses units here only; the sweep never sees a Unit.
+import "./zod-jitless";
 import { unit as mathUnit, type Unit } from "mathjs";
 import { z } from "zod";
 

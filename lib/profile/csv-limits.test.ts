@@ -5,6 +5,7 @@ import { libraryToCsv, parseLibraryCsv } from "@/lib/library/csv";
 import { FORMULA_START, writeCsv } from "@/lib/csv-write";
 import { readNumberCell, splitHeaderUnit } from "./csv";
 import { parseProfileCsv } from "./parse";
+import { parseCapacityC } from "./ticks";
 
 function fastest(fn: () => unknown, reps = 10, runs = 5): number {
   let best = Infinity;
@@ -114,5 +115,17 @@ describe("CSV written by the app (item 10)", () => {
     const r = parseLibraryCsv("shunts", `${header}\nA,E24,${"9".repeat(70)} mohm,0.1,0.01,0.00005,1,no\n`);
     expect(r.ok).toBe(false);
     if (!r.ok) expect(r.refusal.toJson()).toMatchObject({ row: 1, column: "minOhms" });
+  });
+});
+
+describe("battery capacity text", () => {
+  it("reads what it read before (1 mAh = 3.6 C) and refuses long text at once", () => {
+    expect(parseCapacityC(" 220 mAh ")).toBeCloseTo(792, 9);
+    expect(parseCapacityC("2.4Ah")).toBeCloseTo(8640, 9);
+    expect(parseCapacityC("800   C")).toBe(800);
+    expect(parseCapacityC("220")).toBeCloseTo(792, 9);
+    expect(parseCapacityC("1" + " ".repeat(40_000) + "x")).toBeNull();
+    const ratio = fastest(() => parseCapacityC("1" + " ".repeat(40_000) + "x")) / fastest(() => parseCapacityC("1 x"));
+    expect(ratio).toBeLessThan(200); // trimming 40,000 characters is linear; the regex never sees them
   });
 });

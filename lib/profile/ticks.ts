@@ -20,7 +20,12 @@ export function logTicks(min: number, max: number): number[] {
 
 /** A battery capacity typed by the user ("220 mAh", "2.4 Ah", "800 C") in coulombs, or null. */
 export function parseCapacityC(text: string): number | null {
-  const m = /^\s*([+-]?(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?)\s*(uAh|µAh|mAh|Ah|kC|C|mC)?\s*$/i.exec(text);
+  // Trimmed and capped first; one way to match, so linear time (issue 10, item 1).
+  const trimmed = text.trim();
+  if (trimmed.length > 64) return null;
+  const m = /^([+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:e[+-]?\d+)?) ?(uAh|µAh|mAh|Ah|kC|C|mC)?$/i.exec(
+    trimmed.replace(/\s+/g, " "),
+  );
   if (!m) return null;
   const value = Number(m[1]);
   const unit = (m[2] ?? "mAh").toLowerCase().replace("µ", "u");

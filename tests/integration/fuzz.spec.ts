@@ -181,7 +181,8 @@ type Attempt = { text: string; type: string };
 
 function attemptFor(route: Route): fc.Arbitrary<Attempt> {
   const valid = route.valid();
-  const paths = leaves(valid);
+  // The root too: the whole body swapped for a hostile value (and the only path of an empty body).
+  const paths: Path[] = [[], ...leaves(valid)];
   const json = (v: unknown) => ({ text: JSON.stringify(v), type: "application/json" });
   return fc.oneof(
     {

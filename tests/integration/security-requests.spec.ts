@@ -448,7 +448,9 @@ test.describe("the CSP leaves the screens working (item 12)", () => {
         });
       });
       await signInPage(page, "designer");
-      const list = (await (await designer.get("/api/designs")).json()) as { designs: { id: string; status: string }[] };
+      const list = (await (await page.request.get("/api/designs")).json()) as {
+        designs: { id: string; status: string }[];
+      };
       const approved = list.designs.find((d) => d.status === "approved") ?? list.designs[0]!;
       await page.goto(`/designs/${approved.id}`);
       await expect(page.getByTestId("design-name")).toBeVisible();
