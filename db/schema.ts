@@ -33,6 +33,11 @@ export const users = pgTable(
     email: text("email").notNull(),
     name: text("name").notNull(),
     passwordHash: text("password_hash").notNull(),
+    // Which review mail the person wants (the /account page); all on by default.
+    mailOnSubmitted: boolean("mail_on_submitted").notNull().default(true),
+    mailOnReturned: boolean("mail_on_returned").notNull().default(true),
+    mailOnApproved: boolean("mail_on_approved").notNull().default(true),
+    mailOnComments: boolean("mail_on_comments").notNull().default(true),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex("users_email_unique").on(sql`lower(${t.email})`)],
@@ -241,7 +246,37 @@ export const libraryShunts = pgTable(
   (t) => [uniqueIndex("library_shunts_team_name").on(t.teamId, t.name)],
 );
 
+export const tokenAccessEnum = pgEnum("token_access", ["read", "write"]);
+
+// Personal API tokens: a script acts as its owner, in the team the token was made in, never above
+// the owner's current role there. Only the SHA-256 of the secret is kept (the secret is 32 random
+// bytes, so a fast hash is enough: there is nothing to guess).
+export const apiTokens = pgTable(
+  "api_tokens",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    teamId: uuid("team_id")
+      .notNull()
+      .references(() => teams.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    access: tokenAccessEnum("access").notNull(),
+    secretHash: text("secret_hash").notNull(),
+    /** The first characters of the secret, to tell tokens apart in a list (too few to guess from). */
+    hint: text("hint").notNull(),
+    createdAt: createdAt(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }),
+    lastUsedAt: timestamp("last_used_at", { withTimezone: true }),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+  },
+  (t) => [uniqueIndex("api_tokens_secret_hash").on(t.secretHash), index("api_tokens_user").on(t.userId)],
+);
+
 export type User = typeof users.$inferSelect;
+export type ApiToken = typeof apiTokens.$inferSelect;
+export type TokenAccess = (typeof tokenAccessEnum.enumValues)[number];
 export type Team = typeof teams.$inferSelect;
 export type Membership = typeof memberships.$inferSelect;
 export type Role = (typeof roleEnum.enumValues)[number];

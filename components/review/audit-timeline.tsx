@@ -54,6 +54,9 @@ const words: Record<string, (d: Record<string, unknown>) => string> = {
   "invitation.accepted": (d) => `accepted the invitation for ${String(d.email)} and joined as ${String(d.role)}`,
   "team.created": (d) => `started the team “${String(d.name)}” for ${String(d.firstOwner)}`,
   "sign-in.failed": (d) => `failed sign-in for ${String(d.email)} (${String(d.reason)})`,
+  "token.created": (d) => `created the ${String(d.access)} API token “${String(d.name)}”`,
+  "token.revoked": (d) => `revoked the API token “${String(d.name)}”`,
+  "account.updated": () => "changed their name or mail choices",
 };
 
 export function describeAudit(e: AuditEntry): string {
