@@ -37,6 +37,12 @@ export const users = pgTable(
     // Put in the session token at sign-in and compared on every request: raising it ends every
     // session of the user (sign-out, password change, removal from a team).
     sessionVersion: integer("session_version").notNull().default(0),
+
+    // Which review mail the person wants (the /account page); all on by default.
+    mailOnSubmitted: boolean("mail_on_submitted").notNull().default(true),
+    mailOnReturned: boolean("mail_on_returned").notNull().default(true),
+    mailOnApproved: boolean("mail_on_approved").notNull().default(true),
+    mailOnComments: boolean("mail_on_comments").notNull().default(true),
     createdAt: createdAt(),
   },
   (t) => [uniqueIndex("users_email_unique").on(sql`lower(${t.email})`)],
@@ -332,7 +338,37 @@ export const unitReadings = pgTable(
   (t) => [uniqueIndex("unit_readings_unit_point").on(t.unitId, t.rangeIndex, t.pointIndex)],
 );
 
+export const tokenAccessEnum = pgEnum("token_access", ["read", "write"]);
+
+// Personal API tokens: a script acts as its owner, in the team the token was made in, never above
+// the owner's current role there. Only the SHA-256 of the secret is kept (the secret is 32 random
+// bytes, so a fast hash is enough: there is nothing to guess).
+export const apiTokens = pgTable(
+  "api_tokens",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    userId: uuid("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    teamId: uuid("team_id")
+      .notNull()
+      .references(() => teams.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    access: tokenAccessEnum("access").notNull(),
+    secretHash: text("secret_hash").notNull(),
+    /** The first characters of the secret, to tell tokens apart in a list (too few to guess from). */
+    hint: text("hint").notNull(),
+    createdAt: createdAt(),
+    expiresAt: timestamp("expires_at", { withTimezone: true }),
+    lastUsedAt: timestamp("last_used_at", { withTimezone: true }),
+    revokedAt: timestamp("revoked_at", { withTimezone: true }),
+  },
+  (t) => [uniqueIndex("api_tokens_secret_hash").on(t.secretHash), index("api_tokens_user").on(t.userId)],
+);
+
 export type User = typeof users.$inferSelect;
+export type ApiToken = typeof apiTokens.$inferSelect;
+export type TokenAccess = (typeof tokenAccessEnum.enumValues)[number];
 export type Team = typeof teams.$inferSelect;
 export type Membership = typeof memberships.$inferSelect;
 export type Role = (typeof roleEnum.enumValues)[number];

@@ -3,17 +3,20 @@ import type { ReactNode } from "react";
 import { Logo } from "@/components/logo";
 import { NavLink } from "@/components/shell/nav-link";
 import { SignOutButton } from "@/components/shell/sign-out-button";
+import { TeamSwitcher } from "@/components/shell/team-switcher";
 import { Badge } from "@/components/ui/badge";
+import { listTeamsOf } from "@/db/queries/users";
 import { requirePageCaller } from "@/lib/auth/gate";
 
 export const dynamic = "force-dynamic";
 
 export default async function WorkbenchLayout({ children }: { children: ReactNode }) {
   const caller = await requirePageCaller();
+  const teams = await listTeamsOf(caller.userId);
   return (
     <div className="flex min-h-screen flex-col">
       <header className="border-b border-line bg-panel">
-        <div className="mx-auto flex max-w-7xl items-center gap-4 px-4 py-2">
+        <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2">
           <Link href="/designs" className="flex items-center gap-1.5 font-semibold">
             <Logo /> Sensewright
           </Link>
@@ -24,10 +27,15 @@ export default async function WorkbenchLayout({ children }: { children: ReactNod
             <NavLink href="/team">Team</NavLink>
           </nav>
           <div className="ml-auto flex items-center gap-3 text-xs">
-            <span className="text-ink-muted">{caller.teamName}</span>
-            <span className="font-medium" data-testid="current-user">
+            <TeamSwitcher teams={teams} currentTeamId={caller.teamId} />
+            <Link
+              href="/account"
+              className="font-medium hover:text-copper"
+              data-testid="current-user"
+              title="Your account"
+            >
               {caller.name}
-            </span>
+            </Link>
             <Badge tone="copper">
               <span data-testid="current-role">{caller.role}</span>
             </Badge>

@@ -57,6 +57,10 @@ const words: Record<string, (d: Record<string, unknown>) => string> = {
   "invitation.refused": (d) =>
     `was refused accepting the invitation for ${String(d.email ?? "an unknown link")} (${String(d.reason)})`,
   "password.changed": () => "changed their password; every other session of theirs ended",
+
+  "token.created": (d) => `created the ${String(d.access)} API token “${String(d.name)}”`,
+  "token.revoked": (d) => `revoked the API token “${String(d.name)}”`,
+  "account.updated": () => "changed their name or mail choices",
 };
 
 export function describeAudit(e: AuditEntry): string {

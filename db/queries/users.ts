@@ -1,4 +1,4 @@
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import type { Db, Tx } from "../client";
 import { getDb } from "../client";
 import { memberships, teams, users, type Role } from "../schema";
@@ -179,4 +179,84 @@ export async function changePassword(input: {
     );
     return row.sessionVersion;
   });
+}
+
+/** Every team the user belongs to, with their role there, oldest membership first. */
+export async function listTeamsOf(userId: string) {
+  const db = await getDb();
+  return db
+    .select({ id: teams.id, name: teams.name, role: memberships.role })
+    .from(memberships)
+    .innerJoin(teams, eq(teams.id, memberships.teamId))
+    .where(eq(memberships.userId, userId))
+    .orderBy(asc(memberships.createdAt));
+}
+
+export type MailPreferences = { submitted: boolean; returned: boolean; approved: boolean; comments: boolean };
+
+/** The account as the /account page and GET /api/me show it. */
+export async function getAccount(userId: string) {
+  const db = await getDb();
+  const [row] = await db
+    .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
+      submitted: users.mailOnSubmitted,
+      returned: users.mailOnReturned,
+      approved: users.mailOnApproved,
+      comments: users.mailOnComments,
+    })
+    .from(users)
+    .where(eq(users.id, userId));
+  if (!row) return null;
+  const { submitted, returned, approved, comments, ...user } = row;
+  return { user, mail: { submitted, returned, approved, comments } satisfies MailPreferences };
+}
+
+/** Display name and mail choices; audited in the team the change was made from. */
+export async function updateAccount(
+  userId: string,
+  teamId: string,
+  change: { name?: string; mail?: Partial<MailPreferences> },
+): Promise<void> {
+  const db = await getDb();
+  await db.transaction(async (tx) => {
+    const set: Partial<typeof users.$inferInsert> = {};
+    if (change.name !== undefined) set.name = change.name;
+    if (change.mail?.submitted !== undefined) set.mailOnSubmitted = change.mail.submitted;
+    if (change.mail?.returned !== undefined) set.mailOnReturned = change.mail.returned;
+    if (change.mail?.approved !== undefined) set.mailOnApproved = change.mail.approved;
+    if (change.mail?.comments !== undefined) set.mailOnComments = change.mail.comments;
+    if (Object.keys(set).length === 0) return;
+    await tx.update(users).set(set).where(eq(users.id, userId));
+    await recordAudit(
+      {
+        teamId,
+        actorId: userId,
+        action: "account.updated",
+        targetType: "user",
+        targetId: userId,
+        details: { changed: Object.keys(change).filter((k) => change[k as keyof typeof change] !== undefined) },
+      },
+      tx,
+    );
+  });
+}
+
+/** Who of these users wants this kind of review mail. */
+export async function wantingMail(userIds: string[], kind: keyof MailPreferences): Promise<Set<string>> {
+  if (userIds.length === 0) return new Set();
+  const db = await getDb();
+  const column = {
+    submitted: users.mailOnSubmitted,
+    returned: users.mailOnReturned,
+    approved: users.mailOnApproved,
+    comments: users.mailOnComments,
+  }[kind];
+  const rows = await db
+    .select({ id: users.id })
+    .from(users)
+    .where(and(inArray(users.id, userIds), eq(column, true)));
+  return new Set(rows.map((r) => r.id));
 }

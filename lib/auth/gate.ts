@@ -3,6 +3,7 @@
 // checks the role, and parses the input with zod.
 import "server-only";
 import { getServerSession } from "next-auth";
+import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import type { z } from "zod";
 import { getMember } from "@/db/queries/users";
@@ -11,6 +12,7 @@ import { HttpError, errorResponse, invalid, json } from "@/lib/http";
 import { readBodyText } from "@/lib/read-upload";
 import { assertSameOrigin } from "./same-origin";
 import { authOptions } from "./options";
+import { bearerSecret, callerFromToken } from "./tokens";
 import { can, doingOf, rolesFor, type Action, type ResourceArg } from "./policy";
 
 export type Caller = {
@@ -28,8 +30,17 @@ export type Caller = {
 
 type SessionShape = { userId?: string; teamId?: string; sessionVersion?: number } | null;
 
-/** The signed-in caller, or null (also when the session was ended: sign-out, password change, removal). */
+/**
+ * The caller: the owner of a bearer token (lib/auth/tokens.ts: 401 when the token is not valid),
+ * else the signed-in session's member, else null (also when the session was ended: sign-out,
+ * password change, removal).
+ */
 export async function currentCaller(): Promise<Caller | null> {
+  const bearer = bearerSecret((await headers()).get("authorization"));
+  if (bearer !== null) {
+    const { tokenId: _tokenId, ...caller } = await callerFromToken(bearer);
+    return caller;
+  }
   const session = (await getServerSession(authOptions)) as SessionShape;
   if (!session?.userId || !session.teamId) return null;
   const member = await getMember(session.userId, session.teamId);

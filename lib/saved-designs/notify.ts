@@ -1,6 +1,7 @@
 // Who hears about a design's review, and what the mail says. Plain text, numbers via formatSI.
 import "server-only";
-import { listMembers } from "@/db/queries/users";
+import { listMembers, wantingMail, type MailPreferences } from "@/db/queries/users";
+import { can } from "@/lib/auth/policy";
 import { formatPercent, formatSI, type CandidateDetail, type Choice } from "@/lib/design";
 import { sendMail } from "@/lib/mail/send";
 
@@ -20,11 +21,23 @@ const summary = (d: DesignRef) =>
     `worst-case error ${formatPercent(d.metrics.errorAtMinPercent / 100)} at minimum current.`,
   ].join("\n");
 
-/** Submit: the team's reviewers (the owners when there is no reviewer). */
+/** Only the people who want this kind of review mail (their choice on /account). */
+async function keepWanting<M extends { userId: string }>(members: M[], kind: keyof MailPreferences) {
+  const wanting = await wantingMail(
+    members.map((m) => m.userId),
+    kind,
+  );
+  return members.filter((m) => wanting.has(m.userId));
+}
+
+/**
+ * Submit: whoever may give this revision its verdict, reviewers first (the owners only when the
+ * team has no reviewer who may) — then only those who want "submitted" mail.
+ */
 export async function mailSubmitted(teamId: string, actor: { userId: string; name: string }, d: DesignRef) {
-  const members = await listMembers(teamId);
-  let to = members.filter((m) => m.role === "reviewer" && m.userId !== actor.userId);
-  if (to.length === 0) to = members.filter((m) => m.role === "owner" && m.userId !== actor.userId);
+  const judges = (await listMembers(teamId)).filter((m) => can(m, "design.judge", { authorId: actor.userId }));
+  const reviewers = judges.filter((m) => m.role === "reviewer");
+  const to = await keepWanting(reviewers.length > 0 ? reviewers : judges, "submitted");
   return sendMail({
     teamId,
     actorId: actor.userId,
@@ -36,6 +49,7 @@ export async function mailSubmitted(teamId: string, actor: { userId: string; nam
   });
 }
 
+const mailKindOf = { approve: "approved", return: "returned", comment: "comments" } as const;
 const verdictWords = { approve: "approved", return: "returned", comment: "commented on" } as const;
 
 /** A verdict or comment: the revision's author and, for a reply, the author of the comment replied to. */
@@ -47,7 +61,10 @@ export async function mailReviewed(
   recipientIds: string[],
 ) {
   const members = await listMembers(teamId);
-  const to = members.filter((m) => recipientIds.includes(m.userId) && m.userId !== actor.userId);
+  const to = await keepWanting(
+    members.filter((m) => recipientIds.includes(m.userId) && m.userId !== actor.userId),
+    mailKindOf[review.verdict],
+  );
   const what = verdictWords[review.verdict];
   const subject =
     review.verdict === "comment"

@@ -95,3 +95,43 @@ export async function approveDesign(as: APIRequestContext, id: string) {
   const res = await as.post(`/api/designs/${id}/reviews`, { data: { verdict: "approve", body: "fine" } });
   expect(res.status(), await res.text()).toBe(201);
 }
+
+/** A context that calls the API with a fresh personal token of `owner` (bearer header, no cookie). */
+export async function tokenContext(owner: APIRequestContext, access: "read" | "write"): Promise<APIRequestContext> {
+  const res = await owner.post("/api/tokens", { data: { name: `matrix ${access} ${unique()}`, access } });
+  expect(res.status(), await res.text()).toBe(201);
+  const { token } = (await res.json()) as { token: string };
+  return playwrightRequest.newContext({ baseURL, extraHTTPHeaders: { authorization: `Bearer ${token}` } });
+}
+
+/**
+ * A person who is a maker in Harbourline (joined first, so sign-in lands there) and the owner of a
+ * team they founded through a second invitation — both made through the product's own invitations.
+ */
+export async function makeTwoTeamMember(owner: APIRequestContext) {
+  const email = `two-teams-${unique()}@bench.example`;
+  const password = `pw-${unique()}-long`;
+  const invite = async (data: Record<string, string>) => {
+    const res = await owner.post("/api/invitations", { data: { email, ...data } });
+    expect(res.status(), await res.text()).toBe(201);
+    return new URL(((await res.json()) as { link: string }).link).pathname.split("/").pop()!;
+  };
+  const ctx = await playwrightRequest.newContext({ baseURL });
+  const joined = await ctx.post("/api/invitations/accept", {
+    data: { token: await invite({ role: "maker" }), name: "Two Teams", password },
+  });
+  expect(joined.status(), await joined.text()).toBe(201);
+  const founded = await ctx.post("/api/invitations/accept", {
+    data: { token: await invite({ newTeam: `Second Bench ${unique()}` }), name: "Two Teams", password },
+  });
+  expect(founded.status(), await founded.text()).toBe(201);
+  expect(await signInApi(ctx, email, password)).toBe(true);
+  const me = (await (await ctx.get("/api/me")).json()) as {
+    teams: { id: string; name: string; role: string }[];
+    currentTeamId: string;
+  };
+  const harbourline = me.teams.find((t) => t.role === "maker")!;
+  const own = me.teams.find((t) => t.role === "owner")!;
+  expect(me.currentTeamId).toBe(harbourline.id);
+  return { ctx, email, password, harbourlineId: harbourline.id, ownTeamId: own.id };
+}

@@ -16,7 +16,7 @@ import {
   type Contexts,
   type Who,
 } from "./authz-helpers";
-import { acceptAndSignIn } from "./authz-helpers";
+import { acceptAndSignIn, makeTwoTeamMember, tokenContext } from "./authz-helpers";
 
 type Method = "GET" | "POST" | "PUT" | "PATCH" | "DELETE";
 type Cell = {
@@ -556,6 +556,55 @@ test.describe.serial("authorization matrix", () => {
       expect(got, `${row.method} statuses by caller`).toEqual(row.expect);
     });
   }
+
+  // A person in two teams: maker in Harbourline (where sign-in lands), owner of a team of their
+  // own. In each team every route answers them exactly as it answers that team's role.
+  test("a member of two teams gets a maker's answers in one and an owner's in the other", async () => {
+    const two = await makeTwoTeamMember(c.owner);
+    try {
+      const asMaker: Partial<Record<string, number>> = {};
+      const asOwner: Partial<Record<string, number>> = {};
+      for (const row of routes) asMaker[row.name] = await call(two.ctx, row.method, await row.setup("maker"));
+      expect(asMaker).toEqual(Object.fromEntries(routes.map((r) => [r.name, r.expect.maker])));
+      const switched = await two.ctx.put("/api/me/team", { data: { teamId: two.ownTeamId } });
+      expect(switched.status(), await switched.text()).toBe(200);
+      // The outsider column is an owner of another team: the same place this person now stands.
+      for (const row of routes) asOwner[row.name] = await call(two.ctx, row.method, await row.setup("outsider"));
+      expect(asOwner).toEqual(Object.fromEntries(routes.map((r) => [r.name, r.expect.outsider])));
+      // …and back: the switch is the session's, and it goes both ways.
+      expect((await two.ctx.put("/api/me/team", { data: { teamId: two.harbourlineId } })).status()).toBe(200);
+      expect((await two.ctx.get("/api/team/audit")).status()).toBe(403);
+    } finally {
+      await two.ctx.dispose();
+    }
+  });
+
+  // A read token may only GET: every route of the table that writes refuses it with 403.
+  test("an owner's read token is refused on every write route", async () => {
+    const token = await tokenContext(c.owner, "read");
+    try {
+      const got: Record<string, number> = {};
+      const writes = routes.filter((r) => r.method !== "GET" && r.expect.anon === 401);
+      expect(writes.length).toBeGreaterThan(10);
+      for (const row of writes) got[row.name] = await call(token, row.method, await row.setup("owner"));
+      expect(got).toEqual(Object.fromEntries(writes.map((r) => [r.name, 403])));
+    } finally {
+      await token.dispose();
+    }
+  });
+
+  // A write token acts as its owner: the designer's token gets the designer's column on every row.
+  test("a designer's write token gets the designer's answers on every route", async () => {
+    const token = await tokenContext(c.designer, "write");
+    try {
+      const got: Record<string, number> = {};
+      const rows = routes.filter((r) => r.expect.anon === 401);
+      for (const row of rows) got[row.name] = await call(token, row.method, await row.setup("designer"));
+      expect(got).toEqual(Object.fromEntries(rows.map((r) => [r.name, r.expect.designer])));
+    } finally {
+      await token.dispose();
+    }
+  });
 
   test("another team's owner sees none of Harbourline's designs in lists", async () => {
     const list = (await (await c.outsider.get("/api/designs")).json()) as { designs: { id: string }[] };
