@@ -17,7 +17,15 @@ export {
 export * from "./error-budget";
 export { solve, defaultRankingText, type SolveResult, type SolveOptions } from "./solve";
 export { RankExpressionError, compileRankExpression, rankFields, type RankField } from "./rank";
-export { planRanges, SWITCH_DOWN_FRACTION, MAX_RANGES, type RangePlan, type PlannedRange } from "./range-plan";
+export { diagnose, e24Ladder, CLOSEST_COUNT, type Diagnosis, type RelaxSuggestion, type Violations } from "./diagnosis";
+export {
+  planRanges,
+  whyNoPlan,
+  SWITCH_DOWN_FRACTION,
+  MAX_RANGES,
+  type RangePlan,
+  type PlannedRange,
+} from "./range-plan";
 export * from "./bench-check";
 export { decadeScale, decadeScaleLabel } from "./decade";
 export * from "./insertion";

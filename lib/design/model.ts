@@ -66,6 +66,13 @@ export type Model = {
   maxTempC: number;
   /** Share of its rating a shunt may carry at the hottest ambient (linear derating above the knee). */
   ambientDerate: number;
+  /** On-resistance in series with the shunt (a range switch; 0 for a single range), Ω. */
+  switchOhms: number;
+  /**
+   * A range below the top: a protective bypass closes when the path's drop reaches this (V), so the
+   * shunt must be rated for the current that takes it there. 0: no such duty.
+   */
+  clampV: number;
   alphaR: number;
   ratings: number[];
   derating: number;
@@ -131,6 +138,8 @@ export function buildModel(req: Requirement): Model {
     kneeC: s.deratingKneeC,
     maxTempC: s.maxTempC,
     ambientDerate: derateAt(req.temperature.max, s.deratingKneeC, s.maxTempC),
+    switchOhms: 0,
+    clampV: 0,
     alphaR: s.tempco,
     ratings: [...s.ratings].sort((x, y) => x - y),
     derating: s.derating,

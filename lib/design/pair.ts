@@ -71,12 +71,16 @@ export type ShuntFigures = {
 const slack = 1 + 1e-12;
 
 export function shuntFigures(m: Model, R: number): ShuntFigures {
-  const burden = operatingBurden(m, R);
+  // The load sees the shunt and any range switch in series with it.
+  const path = R + m.switchOhms;
+  const burden = operatingBurden(m, path);
   const dropFails =
-    !(burden <= m.dropMax * slack) || m.iMax * R > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
-  const iOp = operatingCurrent(m, R);
+    !(burden <= m.dropMax * slack) || m.iMax * path > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
+  const iOp = operatingCurrent(m, path);
   // With no operating point the pair fails on drop; rate it at Imax so that only drop is reported.
-  const iHeat = Number.isNaN(iOp) ? m.iMax : iOp;
+  // A lower range's shunt carries up to the current at which its protection closes.
+  const iRun = Number.isNaN(iOp) ? m.iMax : iOp;
+  const iHeat = m.clampV > 0 ? Math.max(iRun, m.clampV / path) : iRun;
   const power = iHeat * iHeat * R;
   const rating = ratingFor(m, power);
   const theta = thetaFor(m, rating);

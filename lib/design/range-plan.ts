@@ -1,7 +1,17 @@
 // A multi-range plan for spans too wide for one shunt and gain: two or three ranges, each
 // feasible on its own sub-span, overlapping so that switching has hysteresis.
-import { defaultScore, signalBandwidth, type Model } from "./model";
-import { pairMask } from "./pair";
+import {
+  deadZoneA,
+  defaultScore,
+  largestRating,
+  operatingBurden,
+  ratingFor,
+  resolvableStepA,
+  signalBandwidth,
+  worstErrorA,
+  type Model,
+} from "./model";
+import { pairMask, shuntFigures } from "./pair";
 import type { Requirement } from "./requirement";
 import { sweepGrid, type SweepArrays } from "./sweep";
 import { formatSI } from "./units";
@@ -17,7 +27,18 @@ export type PlannedRange = {
   gain: number;
   /** Drop across this range's shunt at its own top current, V. */
   burdenAtTopV: number;
-  /** Readout counts at this range's bottom current. */
+  /** On-resistance of the element that switches this range in, Ω. */
+  switchOhms: number;
+  /** Largest drop this range puts on the load while in use (shunt and switch, at its top), V. */
+  worstBurdenV: number;
+  /**
+   * The most current this range's shunt can carry: its own top for the top range; for a lower
+   * range, the current at which its path's drop reaches the allowed drop and the protection closes.
+   */
+  faultCurrentA: number;
+  /** Power rating chosen for this range's shunt at faultCurrentA (after derating), W. */
+  ratingW: number;
+  /** Resolvable steps (readout step or noise, the larger) at this range's bottom current. */
   countsAtBottom: number;
   /** Time for the amplifier to settle within half a readout step after a switch, s. */
   settlingS: number;
@@ -30,6 +51,8 @@ export type RangePlan = {
   switchPoints: { upA: number; downA: number }[];
   switchOver: string;
   adds: string;
+  /** How a low range survives the span's full current, in words. */
+  protection: string;
 };
 
 type Pick = { p: number; bottom: number };
@@ -44,7 +67,17 @@ function subModel(req: Requirement, m: Model, lo: number, hi: number): Model {
   const bHi = Math.min(req.accuracy.bandMax, hi);
   // Outside the accuracy band nothing is asked of accuracy.
   const band = bLo <= bHi ? { bandLo: bLo, bandHi: bHi } : { bandLo: hi, bandHi: hi, accRatio: Infinity };
-  return { ...m, iMin: lo, iMax: hi, ...band };
+  // Every range has its switch in series; a range below the top must also be rated for the
+  // current at which the protection closes (the path's drop at the allowed drop).
+  const top = hi >= m.iMax * (1 - 1e-12);
+  return {
+    ...m,
+    iMin: lo,
+    iMax: hi,
+    ...band,
+    switchOhms: req.rangeSwitch.onResistance,
+    clampV: top ? 0 : m.dropMax,
+  };
 }
 
 /** The best-scoring feasible pair for the range [lo, hi], through the sweep's own loop. */
@@ -87,13 +120,30 @@ function balancedPlan(req: Requirement, m: Model, sw: SweepArrays, n: number): S
 function bestRangeBelow(req: Requirement, m: Model, sw: SweepArrays, top: number): Pick | null {
   const nG = sw.gains.length;
   const bottoms: Pick[] = [];
+  const ron = req.rangeSwitch.onResistance;
+  const atTop = subModel(req, m, top * SWITCH_DOWN_FRACTION, top);
+  // The accuracy band's part that can fall inside a range ending at `top`.
+  const bandTop = Math.min(top, req.accuracy.bandMax);
+  const bandReached = bandTop >= req.accuracy.bandMin;
   for (let i = 0; i < sw.values.length; i++) {
     const R = sw.values[i] as number;
-    if (top * R > m.dropMax * (1 + 1e-12)) break; // values ascend: larger shunts drop more
+    if (top * (R + ron) > m.dropMax * (1 + 1e-12)) break; // values ascend: larger shunts drop more
+    const theta = shuntFigures(atTop, R).theta;
     for (let j = 0; j < nG; j++) {
-      const rg = R * (sw.gains[j] as number);
+      const G = sw.gains[j] as number;
+      const rg = R * G;
       if (top * rg > m.outCeil) continue;
-      const bottom = Math.max(m.iMin, (m.countsAtMin * m.lsbV) / rg, m.swingLow / rg);
+      // The lowest this pair reads: counts through the noise, or the dead zone with its offset.
+      let bottom = Math.max(m.iMin, m.countsAtMin * resolvableStepA(m, R, G), deadZoneA(m, R, G));
+      if (bandReached) {
+        // Worst-case error is c + I·k(I) with k rising in I: below c/(target − k(top)) the ratio
+        // meets the target everywhere up to the band's top (a safe, closed-form bound).
+        const c = worstErrorA(atTop, R, G, theta, 0);
+        const k = (worstErrorA(atTop, R, G, theta, bandTop) - c) / bandTop;
+        if (k >= m.accRatio) continue;
+        const accurateFrom = c / (m.accRatio - k);
+        if (accurateFrom > req.accuracy.bandMin) bottom = Math.max(bottom, accurateFrom);
+      }
       if (bottom < top * SWITCH_DOWN_FRACTION) bottoms.push({ p: i * nG + j, bottom });
     }
   }
@@ -128,6 +178,26 @@ function greedyPlan(req: Requirement, m: Model, sw: SweepArrays): Span[] | null 
 }
 
 /**
+ * Why no plan exists, in words, when three ranges cannot cover the span: how low the greedy
+ * ranges from the top reach, or that no pair works at the top at all.
+ */
+export function whyNoPlan(req: Requirement, m: Model, sw: SweepArrays): string {
+  let top = m.iMax;
+  const reached: number[] = [];
+  for (let k = 0; k < MAX_RANGES; k++) {
+    const pick = bestRangeBelow(req, m, sw, top);
+    if (!pick) break;
+    reached.push(pick.bottom);
+    top = pick.bottom / SWITCH_DOWN_FRACTION;
+  }
+  const ron = formatSI(req.rangeSwitch.onResistance, "Ω");
+  if (reached.length === 0)
+    return `No range plan: no shunt and gain works even for a range just below ${formatSI(m.iMax, "A")} (with a ${ron} range switch in series), so splitting the span cannot help; relax the requirement at the top (drop, output, accuracy or power).`;
+  const lowest = reached[reached.length - 1] as number;
+  return `No range plan: ${reached.length === MAX_RANGES ? `${MAX_RANGES} ranges` : `the ranges below ${formatSI(top, "A")} find no pair and`} reach down only to ${formatSI(lowest, "A")}, short of the minimum current ${formatSI(m.iMin, "A")}. Below that, counts through the noise, the dead zone or the drop limit (with a ${ron} range switch in series) rule every pair out.`;
+}
+
+/**
  * Two or three ranges covering the span, ascending: an even split in ratio when one works
  * (two ranges first), else the greedy plan; null when three ranges cannot cover it.
  */
@@ -137,17 +207,25 @@ export function planRanges(req: Requirement, m: Model, sw: SweepArrays): RangePl
   spans ??= greedyPlan(req, m, sw);
   if (!spans) return null;
   const nG = sw.gains.length;
-  const ranges: PlannedRange[] = spans.map(({ p, minA, maxA }) => {
+  const ron = req.rangeSwitch.onResistance;
+  const ranges: PlannedRange[] = spans.map(({ p, minA, maxA }, k) => {
     const i = Math.floor(p / nG);
     const R = sw.values[i] as number;
     const G = sw.gains[p - i * nG] as number;
+    const sub = subModel(req, m, minA, maxA);
+    const top = k === spans.length - 1;
+    const fault = top ? maxA : m.dropMax / (R + ron);
     return {
       minA,
       maxA,
       shuntOhms: R,
       gain: G,
       burdenAtTopV: maxA * R,
-      countsAtBottom: (minA * R * G) / m.lsbV,
+      switchOhms: ron,
+      worstBurdenV: operatingBurden(sub, R + ron),
+      faultCurrentA: fault,
+      ratingW: ratingFor(sub, fault * fault * R) || largestRating(sub),
+      countsAtBottom: minA / resolvableStepA(sub, R, G),
       settlingS: settlingTime(req, m, G),
     };
   });
@@ -165,5 +243,27 @@ export function planRanges(req: Requirement, m: Model, sw: SweepArrays): RangePl
     adds:
       "Each range switch (a MOSFET or relay selecting the shunt) puts its on-resistance in series with the measured path: keep it well below the shunt it switches, or count it in the allowed drop, and use make-before-break switching so the load never sees an open circuit. " +
       `After a switch the amplifier needs about ${formatSI(slowest, "s")} to settle within half a readout step; discard readings taken in that time.`,
+    protection: protectionText(req, m, ranges),
   };
+}
+
+/** How the lower ranges survive the span's full current, and what the protecting element carries. */
+function protectionText(req: Requirement, m: Model, ranges: PlannedRange[]): string {
+  const topRange = ranges[ranges.length - 1] as PlannedRange;
+  const lower = ranges.slice(0, -1);
+  const ron = req.rangeSwitch.onResistance;
+  const iFull = m.iMax;
+  const lowerText = lower
+    .map(
+      (r) =>
+        `the ${formatSI(r.shuntOhms, "Ω")} shunt carries at most ${formatSI(r.faultCurrentA, "A")} (${formatSI(r.faultCurrentA * r.faultCurrentA * r.shuntOhms, "W")}, within its ${formatSI(r.ratingW, "W")} rating after derating)`,
+    )
+    .join("; ");
+  return (
+    `A lower range's shunt would drop far more than the allowed ${formatSI(m.dropMax, "V")} at the full ${formatSI(iFull, "A")}. ` +
+    `A comparator across the shunt in use closes the top range's switch in hardware, without waiting for the firmware, when the drop reaches ${formatSI(m.dropMax, "V")}; ` +
+    `the top range (${formatSI(topRange.shuntOhms, "Ω")} and its ${formatSI(ron, "Ω")} switch) then carries the current at no more than ${formatSI(topRange.worstBurdenV, "V")}. ` +
+    `Until it closes, ${lowerText}. ` +
+    `The top range's switch must carry ${formatSI(iFull, "A")} continuously (${formatSI(iFull * iFull * ron, "W")} in ${formatSI(ron, "Ω")}), and the comparator must act faster than the load's current can rise past the range; for inductive or fast-rising loads add a clamp diode across the lower shunts as a back-up.`
+  );
 }

@@ -248,6 +248,16 @@ const baseSchema = z.object(
           .optional(),
       })
       .prefault({}),
+    rangeSwitch: z
+      .object({
+        // Left out: sized to take a tenth of the allowed drop at full current (DEFAULTS.md).
+        onResistance: q(
+          "resistance",
+          "Range switch on-resistance",
+          nonNegative("Range switch on-resistance"),
+        ).optional(),
+      })
+      .prefault({}),
     limit: z
       .number()
       .int({ error: "Limit must be a whole number" })
@@ -264,7 +274,11 @@ type Base = z.output<typeof baseSchema>;
 export type RequirementInput = z.input<typeof baseSchema>;
 
 /** Normalized: SI numbers, every default filled in, gains listed exactly as swept. */
-export type Requirement = Omit<Base, "drop" | "accuracy" | "amplifier"> & {
+/** Share of the allowed drop a range switch may take at full current when none is named. */
+export const RANGE_SWITCH_DROP_SHARE = 0.1;
+
+export type Requirement = Omit<Base, "drop" | "accuracy" | "amplifier" | "rangeSwitch"> & {
+  rangeSwitch: { onResistance: number };
   drop: { max: number; fraction?: number; loadMin?: number };
   accuracy: { percent: number; bandMin: number; bandMax: number; crestFactor: number };
   amplifier: Omit<Base["amplifier"], "gains" | "gainSet" | "topology" | "commonMode"> & {
@@ -316,6 +330,7 @@ function normalize(b: Base): Requirement {
     drop,
     accuracy: { percent: b.accuracy.percent, bandMin, bandMax, crestFactor: b.accuracy.crestFactor },
     shunt: { ...b.shunt, ratings: [...b.shunt.ratings].sort((x, y) => x - y) },
+    rangeSwitch: { onResistance: b.rangeSwitch.onResistance ?? (RANGE_SWITCH_DROP_SHARE * dropMax) / b.current.max },
     amplifier: {
       ...amp,
       ...gainsOf(b.amplifier),

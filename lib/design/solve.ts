@@ -14,7 +14,8 @@ import {
 import { paretoFrontSorted } from "./pareto";
 import { rejectReasons, type RejectReason } from "./pair";
 import { compileRankExpression, type CompiledRank, type RankScope } from "./rank";
-import { planRanges, type RangePlan } from "./range-plan";
+import { diagnose, type Diagnosis } from "./diagnosis";
+import { planRanges, whyNoPlan, type RangePlan } from "./range-plan";
 import type { Requirement } from "./requirement";
 import { sweepGrid, sweepValues, type SweepArrays } from "./sweep";
 import type { Candidate } from "./types";
@@ -26,13 +27,16 @@ export type SolveResult = {
   rejected: Record<RejectReason, number>;
   candidates: Candidate[];
   rangePlan: RangePlan | null;
+  /** Present when no pair is feasible: what fails, the nearest pairs, and changes that work. */
+  diagnosis?: Diagnosis;
   /** How the candidates after the front were ordered. */
   ranking: string;
   /** Feasible pairs with a decade scale factor (1 mV per mA, …), the best per decade. */
   decadeScales: (Candidate & { scale: string })[];
 };
 
-export type SolveOptions = { rankExpression?: string };
+/** `diagnose: false` skips the diagnosis (its relaxations re-run the sweep many times). */
+export type SolveOptions = { rankExpression?: string; diagnose?: boolean };
 
 export const defaultRankingText =
   "Sum of each objective as a share of its limit: errorAtMinPercent / accuracy target + burdenV / allowed drop + lsbA / (Imin / counts at Imin); lower first.";
@@ -185,14 +189,18 @@ export function solve(req: Requirement, opts: SolveOptions = {}): SolveResult {
     RejectReason,
     number
   >;
-  return {
+  const rangePlan = sw.feasibleCount === 0 ? planRanges(req, m, sw) : null;
+  const result: SolveResult = {
     requirement: req,
     evaluated: nPairs,
     feasibleCount: sw.feasibleCount,
     rejected,
     candidates,
-    rangePlan: sw.feasibleCount === 0 ? planRanges(req, m, sw) : null,
+    rangePlan,
     ranking: rank ? `By the expression ${rank.source}; lower first.` : defaultRankingText,
     decadeScales,
   };
+  if (sw.feasibleCount === 0 && opts.diagnose !== false)
+    result.diagnosis = diagnose(req, m, sw, rangePlan ? null : whyNoPlan(req, m, sw));
+  return result;
 }

@@ -1,0 +1,296 @@
+// When no pair is feasible: which constraints fail and how often, the pairs that come closest
+// and by how much, and the smallest single changes to the requirement that make pairs feasible.
+// Every suggestion is checked by re-running the sweep with the change applied, never estimated.
+import { candidateFigures } from "./candidate";
+import { seriesTables } from "./eseries";
+import {
+  buildModel,
+  commonModeScale,
+  deadZoneA,
+  largestRating,
+  operatingBurden,
+  outputWorstV,
+  resolvableStepA,
+  signalBandwidth,
+  TOPO_NONINV,
+  worstErrorA,
+  type Model,
+} from "./model";
+import { rejectReasons, shuntFigures, type RejectReason } from "./pair";
+import type { Requirement } from "./requirement";
+import { sweepGrid, type SweepArrays } from "./sweep";
+import type { Candidate } from "./types";
+import { formatSI } from "./units";
+
+/** How far a pair misses each constraint it fails, as a ratio to that constraint's limit. */
+export type Violations = Partial<Record<RejectReason, number>>;
+
+export type RelaxSuggestion = {
+  /** Dotted path of the requirement field to change. */
+  field: string;
+  /** The value it had (SI), and the value that makes pairs feasible (SI). */
+  from: number;
+  to: number;
+  /** Feasible pairs with that one change, from a sweep with it applied. */
+  feasibleCount: number;
+  /** The change in words. */
+  says: string;
+};
+
+export type Diagnosis = {
+  /** Every constraint with the number of pairs failing it, each failure counted. */
+  failing: Record<RejectReason, number>;
+  /** The pairs with the smallest total violation, nearest first. */
+  closest: (Candidate & { violations: Violations })[];
+  relax: RelaxSuggestion[];
+  /** Why no range plan could be made, in words; null when there is a plan or no plan was asked. */
+  rangePlan: string | null;
+};
+
+/** The closest pairs listed. */
+export const CLOSEST_COUNT = 5;
+/** At most this many pairs are scored for closeness (those with the fewest failures first). */
+const CLOSEST_POOL = 20_000;
+/** Relaxation stops trying further fields once its sweeps have examined this many pairs in all. */
+export const RELAX_PAIR_BUDGET = 60_000_000;
+
+/** Every failure counted, not only the first per pair. */
+function failingCounts(sw: SweepArrays): Record<RejectReason, number> {
+  const counts = new Int32Array(rejectReasons.length);
+  for (let p = 0; p < sw.mask.length; p++) {
+    let bits = sw.mask[p] as number;
+    while (bits) {
+      const k = 31 - Math.clz32(bits & -bits);
+      counts[k] = (counts[k] ?? 0) + 1;
+      bits &= bits - 1;
+    }
+  }
+  return Object.fromEntries(rejectReasons.map((r, k) => [r, counts[k] ?? 0])) as Record<RejectReason, number>;
+}
+
+/** Over by how much, as a share of the limit (0 when within). */
+const over = (value: number, limit: number) => (value > limit ? (value - limit) / Math.abs(limit) : 0);
+const under = (value: number, need: number) => (value < need ? (need - value) / Math.abs(need) : 0);
+
+/** The violation of every constraint the pair fails, as a ratio to its limit. */
+export function pairViolations(m: Model, R: number, G: number, mask: number): Violations {
+  const sf = shuntFigures(m, R);
+  const v: Violations = {};
+  const put = (reason: RejectReason, x: number) => {
+    if (mask & (1 << rejectReasons.indexOf(reason))) v[reason] = Number.isFinite(x) && x > 0 ? x : 1;
+  };
+  const path = R + m.switchOhms;
+  const burden = operatingBurden(m, path);
+  put(
+    "drop",
+    Math.max(
+      over(Number.isNaN(burden) ? m.vBus : burden, m.dropMax),
+      over(m.iMax * path, m.dropMax),
+      under(m.vBus - burden, m.loadMin),
+    ),
+  );
+  const k = commonModeScale(m, G);
+  const span = Math.max(m.cmMax - m.cmMin, 1e-9);
+  const cmOut = Math.max(0, k * sf.vInHi - m.cmMax, m.cmMin - k * sf.vInLo);
+  put("commonMode", m.topology === TOPO_NONINV && m.high ? Math.max(cmOut, m.vBus) / span : cmOut / span);
+  const iOp = Number.isNaN(sf.iOp) ? m.iMax : sf.iOp;
+  put("output", over(outputWorstV(m, R, G, sf.theta, iOp), m.outCeil));
+  put("counts", under(m.iMin / resolvableStepA(m, R, G), m.countsAtMin));
+  const need = (iOp * iOp * R) / (m.derating * m.ambientDerate);
+  const hot = m.tAmbMax + iOp * iOp * R * sf.theta;
+  put("power", Math.max(over(need, largestRating(m)), over(hot, m.maxTempC)));
+  put("bandwidth", under(signalBandwidth(m, G), m.bwReq));
+  const band = Math.max(
+    worstErrorA(m, R, G, sf.theta, m.bandLo) / m.bandLo,
+    worstErrorA(m, R, G, sf.theta, m.bandHi) / m.bandHi,
+  );
+  put("accuracy", over(band, m.accRatio));
+  put("deadZone", over(deadZoneA(m, R, G), m.iMin));
+  return v;
+}
+
+function closestPairs(m: Model, sw: SweepArrays): (Candidate & { violations: Violations })[] {
+  const nG = sw.gains.length;
+  const n = sw.mask.length;
+  // Score the pairs with the fewest failures first; closeness by total violation.
+  const byCount: number[][] = rejectReasons.map(() => []);
+  for (let p = 0; p < n; p++) {
+    let c = 0;
+    for (let b = sw.mask[p] as number; b; b &= b - 1) c++;
+    if (c > 0) (byCount[c - 1] as number[]).push(p);
+  }
+  const pool: number[] = [];
+  for (const group of byCount) {
+    if (pool.length >= CLOSEST_POOL) break;
+    const room = CLOSEST_POOL - pool.length;
+    // Spread a sample evenly over a group too large to score whole.
+    const step = group.length > room ? group.length / room : 1;
+    for (let x = 0; x < group.length && pool.length < CLOSEST_POOL; x += step)
+      pool.push(group[Math.floor(x)] as number);
+  }
+  const scored = pool.map((p) => {
+    const i = Math.floor(p / nG);
+    const R = sw.values[i] as number;
+    const G = sw.gains[p - i * nG] as number;
+    const violations = pairViolations(m, R, G, sw.mask[p] as number);
+    const total = Object.values(violations).reduce((a, b) => a + b, 0);
+    return { p, R, G, violations, total };
+  });
+  scored.sort((a, b) => a.total - b.total || a.p - b.p);
+  return scored.slice(0, CLOSEST_COUNT).map(({ R, G, violations }) => ({ ...candidateFigures(m, R, G), violations }));
+}
+
+/** E24 steps (IEC 60063) across the decades from lo to hi, ascending, inside (lo, hi]. */
+export function e24Ladder(lo: number, hi: number): number[] {
+  const out: number[] = [];
+  if (!(hi > lo) || !(lo > 0)) return out;
+  for (let e = Math.floor(Math.log10(lo)) - 1; e <= Math.ceil(Math.log10(hi)); e++) {
+    for (const v of seriesTables.E24) {
+      const x = Number((v * 10 ** e).toPrecision(6));
+      if (x > lo * (1 + 1e-9) && x <= hi * (1 + 1e-12)) out.push(x);
+    }
+  }
+  return out;
+}
+
+/** 1-2-5 steps below hi down to lo, descending. */
+function decadeStepsDown(hi: number, lo: number): number[] {
+  const out: number[] = [];
+  for (let e = Math.ceil(Math.log10(hi)); e >= Math.floor(Math.log10(lo)) - 1; e--) {
+    for (const v of [5, 2, 1]) {
+      const x = Number((v * 10 ** e).toPrecision(6));
+      if (x < hi * (1 - 1e-9) && x >= lo) out.push(x);
+    }
+  }
+  return out;
+}
+
+type Relaxable = {
+  field: string;
+  from: number;
+  /** Candidate values, from the smallest change to the largest. */
+  steps: number[];
+  apply: (r: Requirement, x: number) => Requirement;
+  says: (x: number, n: number) => string;
+};
+
+function pairsWord(n: number): string {
+  return `${n.toLocaleString("en")} feasible pair${n === 1 ? "" : "s"}`;
+}
+
+function relaxables(req: Requirement, m: Model): Relaxable[] {
+  const list: Relaxable[] = [];
+  const pct = req.accuracy.percent;
+  const bandText =
+    req.accuracy.bandMin === req.current.min && req.accuracy.bandMax === req.current.max
+      ? "over the whole span"
+      : `from ${formatSI(req.accuracy.bandMin, "A")} up`;
+  list.push({
+    field: "accuracy.percent",
+    from: pct,
+    steps: e24Ladder(pct, 100),
+    apply: (r, x) => ({ ...r, accuracy: { ...r.accuracy, percent: x } }),
+    says: (x, n) => `${x} % is reachable ${bandText} (${pairsWord(n)})`,
+  });
+  list.push({
+    field: "accuracy.bandMin",
+    from: req.accuracy.bandMin,
+    steps: e24Ladder(req.accuracy.bandMin, req.accuracy.bandMax),
+    apply: (r, x) => ({ ...r, accuracy: { ...r.accuracy, bandMin: x } }),
+    says: (x, n) => `${pct} % is reachable from ${formatSI(x, "A")} up (${pairsWord(n)})`,
+  });
+  // With a drop fraction the tighter of the two wins, so raising drop.max alone would change nothing.
+  if (req.drop.fraction === undefined)
+    list.push({
+      field: "drop.max",
+      from: req.drop.max,
+      steps: e24Ladder(req.drop.max, 0.5 * req.supply.voltage),
+      apply: (r, x) => ({ ...r, drop: { ...r.drop, max: x } }),
+      says: (x, n) => `allow a drop of ${formatSI(x, "V")} (${pairsWord(n)})`,
+    });
+  // The minimum current may rise as far as the accuracy band's start and the typical current.
+  const minCap = Math.min(req.accuracy.bandMin, req.current.typical ?? Infinity, req.current.max);
+  list.push({
+    field: "current.min",
+    from: req.current.min,
+    steps: e24Ladder(req.current.min, minCap),
+    apply: (r, x) => ({ ...r, current: { ...r.current, min: x } }),
+    says: (x, n) => `start the span at ${formatSI(x, "A")} (${pairsWord(n)})`,
+  });
+  const counts = req.resolution.countsAtMin;
+  list.push({
+    field: "resolution.countsAtMin",
+    from: counts,
+    steps: e24Ladder(Math.min(1, counts / 10), counts)
+      .filter((x) => x < counts * (1 - 1e-9) && x >= 1)
+      .reverse(),
+    apply: (r, x) => ({ ...r, resolution: { ...r.resolution, countsAtMin: x } }),
+    says: (x, n) => `ask for ${x} counts at the minimum current (${pairsWord(n)})`,
+  });
+  if (req.readout.kind === "adc") {
+    const bits = req.readout.bits;
+    const readout = req.readout;
+    list.push({
+      field: "readout.bits",
+      from: bits,
+      steps: Array.from({ length: Math.max(0, Math.min(24, 32) - bits) }, (_, i) => bits + 1 + i),
+      apply: (r, x) => ({ ...r, readout: { ...readout, bits: x } }),
+      says: (x, n) => `use a ${x}-bit ADC (${pairsWord(n)})`,
+    });
+  }
+  // The band the noise sees now, at the lowest gain: a filter only helps below it.
+  const minGain = req.amplifier.gains[0] ?? 1;
+  const corner = signalBandwidth(m, minGain);
+  const hasFilter = req.amplifier.filterHz !== null;
+  list.push({
+    field: "amplifier.filterHz",
+    from: req.amplifier.filterHz ?? corner,
+    steps: decadeStepsDown(corner, Math.max(req.bandwidth.min, 0.1)),
+    apply: (r, x) => ({ ...r, amplifier: { ...r.amplifier, filterHz: x } }),
+    says: (x, n) =>
+      `${hasFilter ? "lower the output filter to" : "add an output filter at"} ${formatSI(x, "Hz")} (${pairsWord(n)})`,
+  });
+  return list;
+}
+
+/**
+ * The smallest step that gives feasible pairs, by bisection over the steps (feasibility grows
+ * with each step: every field here only loosens constraints as it moves). Null when even the
+ * last step gives none.
+ */
+function smallestWorkingStep(
+  steps: number[],
+  count: (x: number) => number,
+): { to: number; feasibleCount: number } | null {
+  if (steps.length === 0) return null;
+  const last = steps[steps.length - 1] as number;
+  const lastCount = count(last);
+  if (lastCount === 0) return null;
+  let lo = -1; // known to give none (the requirement as it stands)
+  let hi = steps.length - 1; // known to give some
+  let hiCount = lastCount;
+  while (hi - lo > 1) {
+    const mid = (lo + hi) >> 1;
+    const c = count(steps[mid] as number);
+    if (c > 0) {
+      hi = mid;
+      hiCount = c;
+    } else lo = mid;
+  }
+  return { to: steps[hi] as number, feasibleCount: hiCount };
+}
+
+export function diagnose(req: Requirement, m: Model, sw: SweepArrays, rangePlan: string | null): Diagnosis {
+  const relax: RelaxSuggestion[] = [];
+  let budget = RELAX_PAIR_BUDGET;
+  const pairs = sw.mask.length;
+  for (const r of relaxables(req, m)) {
+    if (budget <= 0) break;
+    const found = smallestWorkingStep(r.steps, (x) => {
+      budget -= pairs;
+      return sweepGrid(buildModel(r.apply(req, x)), sw.values, sw.gains).feasibleCount;
+    });
+    if (found) relax.push({ field: r.field, from: r.from, ...found, says: r.says(found.to, found.feasibleCount) });
+  }
+  return { failing: failingCounts(sw), closest: closestPairs(m, sw), relax, rangePlan };
+}
