@@ -25,6 +25,7 @@ const coarser: SeriesName[] = ["E24", "E12", "E6"];
 export function CandidateTable({
   candidates,
   selected,
+  recommended = null,
   onSelect,
   pinned,
   onTogglePin,
@@ -32,6 +33,8 @@ export function CandidateTable({
 }: {
   candidates: Candidate[];
   selected: string | null;
+  /** The top-ranked pair's key, marked in its row. */
+  recommended?: string | null;
   onSelect: (key: string) => void;
   pinned: string[];
   onTogglePin: (key: string) => void;
@@ -93,6 +96,13 @@ export function CandidateTable({
         header: "Status",
         cell: ({ row }) => {
           const c = row.original;
+          if (recommended !== null && candidateKey(c) === recommended)
+            return (
+              <span className="inline-flex gap-1">
+                <Badge tone="copper">front</Badge>
+                <Badge tone="good">recommended</Badge>
+              </span>
+            );
           if (c.pareto) return <Badge tone="copper">front</Badge>;
           if (c.feasible) return <Badge tone="good">feasible</Badge>;
           return (
@@ -103,7 +113,7 @@ export function CandidateTable({
         },
       }),
     ],
-    [pinned, onTogglePin],
+    [pinned, onTogglePin, recommended],
   );
 
   const table = useReactTable({

@@ -1,24 +1,12 @@
 // The error budget at one current as a single bar split by source, with the figures beside it.
 import { formatPercent, formatSI, type BudgetTerm } from "@/lib/design";
-
-const tones = [
-  "bg-copper",
-  "bg-copper/60",
-  "bg-signal",
-  "bg-signal/60",
-  "bg-warn",
-  "bg-warn/60",
-  "bg-good",
-  "bg-good/60",
-  "bg-bad/70",
-  "bg-ink-faint",
-];
+import { budgetBackground } from "./palette";
 
 export function BudgetBar({ terms, currentA, label }: { terms: BudgetTerm[]; currentA: number; label: string }) {
   const total = terms.reduce((s, t) => s + Math.abs(t.errorA), 0);
   const shown = terms.map((t, i) => ({
     ...t,
-    tone: tones[i % tones.length]!,
+    tone: budgetBackground(i),
     share: total > 0 ? Math.abs(t.errorA) / total : 0,
   }));
   return (
@@ -37,8 +25,8 @@ export function BudgetBar({ terms, currentA, label }: { terms: BudgetTerm[]; cur
           .map((t) => (
             <div
               key={t.source}
-              className={t.tone}
-              style={{ width: `${t.share * 100}%` }}
+              className="border-r border-panel last:border-r-0"
+              style={{ width: `${t.share * 100}%`, background: t.tone }}
               title={`${t.label}: ${formatSI(t.errorA, "A")}`}
             />
           ))}
@@ -48,7 +36,11 @@ export function BudgetBar({ terms, currentA, label }: { terms: BudgetTerm[]; cur
           {shown.map((t) => (
             <tr key={t.source} className="border-b border-line/60 last:border-0">
               <td className="py-0.5 pr-2">
-                <span className={`mr-1.5 inline-block h-2 w-2 rounded-sm align-middle ${t.tone}`} aria-hidden />
+                <span
+                  className="mr-1.5 inline-block h-2.5 w-2.5 rounded-sm align-middle"
+                  style={{ background: t.tone }}
+                  aria-hidden
+                />
                 {t.label}
               </td>
               <td className="whitespace-nowrap py-0.5 pr-2 text-right">{formatSI(t.errorA, "A")}</td>

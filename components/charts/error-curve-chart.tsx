@@ -1,9 +1,10 @@
 "use client";
 // Worst-case error (% of reading) against current across the span, log–log, for the selected
 // candidate and pinned ones, with the accuracy target drawn over its band.
-import { Axis, Grid, LineSeries, Tooltip, XYChart } from "@visx/xychart";
-import { useMemo } from "react";
+import { Axis, Grid, LineSeries, XYChart } from "@visx/xychart";
+import { useId, useMemo } from "react";
 import { formatPercent, formatSI, type ErrorCurvePoint } from "@/lib/design";
+import { ChartTooltip } from "./chart-tooltip";
 import { SeriesTip } from "./series-tip";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, percentTick, siTick } from "./axes";
 import { chartTheme, usePalette } from "./palette";
@@ -34,8 +35,17 @@ export function ErrorCurveChart({
     all.map((q) => q.currentA),
     0.02,
   );
-  const yd = logDomain([...all.map((q) => q.worstPercent), ...all.map((q) => q.rssPercent), targetPercent]);
-  const yClamp = (v: number) => Math.max(yd[0], Math.min(yd[1], v));
+  // Near zero current the error grows without bound; the axis stops at 100 % of reading (or well
+  // above the target) and the curves leave through the top of the plot, clipped to it.
+  const ceiling = Math.max(100, 20 * targetPercent);
+  const yd = logDomain(
+    [...all.map((q) => q.worstPercent), ...all.map((q) => q.rssPercent), targetPercent].map((v) =>
+      Math.min(v, ceiling),
+    ),
+  );
+  const clipId = `err-clip-${useId().replace(/:/g, "")}`;
+  const clip = `url(#${clipId})`;
+  const yClamp = (v: number) => (Number.isFinite(v) && v > 0 ? v : Number.NaN);
   return (
     <div>
       <div ref={ref} style={{ height: HEIGHT }} data-testid="error-curve-chart">
@@ -49,6 +59,16 @@ export function ErrorCurveChart({
             yScale={{ type: "log", domain: yd }}
             accessibilityLabel="Worst-case error against current"
           >
+            <defs>
+              <clipPath id={clipId}>
+                <rect
+                  x={chartMargin.left}
+                  y={chartMargin.top}
+                  width={Math.max(0, width - chartMargin.left - chartMargin.right)}
+                  height={Math.max(0, HEIGHT - chartMargin.top - chartMargin.bottom)}
+                />
+              </clipPath>
+            </defs>
             <Grid columns rows numTicks={6} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
             <Axis
               orientation="bottom"
@@ -82,8 +102,9 @@ export function ErrorCurveChart({
                 key={s.key}
                 dataKey={`${s.label} (worst case)`}
                 data={s.points.map((q) => ({ currentA: q.currentA, v: yClamp(q.worstPercent), label: s.label }))}
-                xAccessor={(d) => d.currentA}
-                yAccessor={(d) => d.v}
+                xAccessor={(d) => d?.currentA ?? Number.NaN}
+                yAccessor={(d) => d?.v ?? Number.NaN}
+                clipPath={clip}
                 stroke={colours[i % colours.length]}
                 strokeWidth={s.primary ? 2 : 1.2}
               />
@@ -96,26 +117,29 @@ export function ErrorCurveChart({
                   v: yClamp(q.rssPercent),
                   label: `${series[0]!.label} RSS`,
                 }))}
-                xAccessor={(d) => d.currentA}
-                yAccessor={(d) => d.v}
+                xAccessor={(d) => d?.currentA ?? Number.NaN}
+                yAccessor={(d) => d?.v ?? Number.NaN}
+                clipPath={clip}
                 stroke={colours[0]}
                 strokeWidth={1}
                 strokeDasharray="2 2"
               />
             )}
-            <Tooltip<Pt>
+            <ChartTooltip
+              palette={p}
+              frame={ref}
               snapTooltipToDatumX
               showVerticalCrosshair
               showSeriesGlyphs
               renderTooltip={({ tooltipData }) => {
-                const near = tooltipData?.nearestDatum?.datum;
+                const near = tooltipData?.nearestDatum?.datum as Pt | undefined;
                 if (!near) return null;
                 return (
                   <SeriesTip
                     title={`at ${formatSI(near.currentA, "A")}`}
-                    byKey={tooltipData.datumByKey}
+                    byKey={(tooltipData?.datumByKey ?? {}) as Record<string, { datum: Pt }>}
                     skip={["Accuracy target"]}
-                    value={(d) => formatPercent(d.v / 100)}
+                    value={(d) => (Number.isFinite(d.v) ? formatPercent(d.v / 100) : "off the chart")}
                   />
                 );
               }}

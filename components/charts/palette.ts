@@ -69,7 +69,8 @@ export function usePalette(): Palette {
 
 export function chartTheme(p: Palette) {
   return buildChartTheme({
-    backgroundColor: "transparent",
+    // Also the tooltips' background: transparent left their text floating over the plot.
+    backgroundColor: p.panel,
     colors: [p.signal, p.copper, p.good, p.warn, p.bad, p.muted],
     gridColor: p.line,
     gridColorDark: p.faint,
@@ -85,4 +86,25 @@ export function shade(p: Palette, t: number): string {
   const [r, g, b] = m ? [Number(m[1]), Number(m[2]), Number(m[3])] : [18, 122, 128];
   const k = 0.35 + 0.65 * Math.max(0, Math.min(1, t));
   return `rgb(${Math.round(r * k + 200 * (1 - k))} ${Math.round(g * k + 200 * (1 - k))} ${Math.round(b * k + 200 * (1 - k))})`;
+}
+
+/**
+ * Error-budget colours, in bar order. The hues are the Okabe–Ito set (Okabe and Ito, "Color
+ * Universal Design", 2008; the hex values recalled from memory), ordered so that each colour
+ * differs from its neighbours in lightness too (WCAG relative-luminance contrast at least 1.3,
+ * checked in palette.test.ts): lightness is what readers with any colour-vision deficiency still
+ * see. Dark mode lightens the blue and swaps the near-black for a light grey. Past eight sources
+ * the colours repeat striped.
+ */
+export const budgetColours = {
+  light: ["#0072B2", "#E69F00", "#009E73", "#F0E442", "#D55E00", "#56B4E9", "#CC79A7", "#333333"],
+  dark: ["#3A9AD9", "#E69F00", "#009E73", "#F0E442", "#D55E00", "#56B4E9", "#CC79A7", "#DDDDDD"],
+} as const;
+
+/** A CSS background for budget source `i`, following the page's colour scheme (light-dark()). */
+export function budgetBackground(i: number): string {
+  const n = budgetColours.light.length;
+  const k = i % n;
+  const colour = `light-dark(${budgetColours.light[k]}, ${budgetColours.dark[k]})`;
+  return i < n ? colour : `repeating-linear-gradient(45deg, ${colour} 0 3px, light-dark(#ffffff, #1d1f22) 3px 5px)`;
 }

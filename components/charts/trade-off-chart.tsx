@@ -1,19 +1,23 @@
 "use client";
 // Burden at Imax against worst-case error at Imin, both log: every listed feasible candidate,
 // the Pareto front as a line, gains told apart by shape and shade; click a point to select it.
-import { Axis, GlyphSeries, Grid, LineSeries, Tooltip, XYChart } from "@visx/xychart";
+import { Axis, GlyphSeries, Grid, LineSeries, XYChart } from "@visx/xychart";
 import { useMemo } from "react";
 import { formatPercent, formatSI, type Candidate } from "@/lib/design";
 import { candidateKey } from "@/lib/wizard/candidate-key";
 import { gainGroups } from "@/lib/wizard/gain-groups";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, percentTick, siTick } from "./axes";
+import { ChartTooltip } from "./chart-tooltip";
 import { Shape, ShapeIcon, shapeNames } from "./glyphs";
 import { chartTheme, shade, usePalette } from "./palette";
 import { useWidth } from "./use-width";
 
 const HEIGHT = 300;
-const x = (c: Candidate) => c.burdenV;
-const y = (c: Candidate) => c.errorAtMinPercent;
+// visx may ask for a datum that has just left the data (pointer moves while the list changes):
+// an accessor must not throw on it.
+const x = (c: Candidate | undefined) => c?.burdenV ?? Number.NaN;
+const y = (c: Candidate | undefined) => c?.errorAtMinPercent ?? Number.NaN;
+const isCandidate = (d: unknown): d is Candidate => !!d && typeof d === "object" && "shuntOhms" in d;
 
 export function TradeOffChart({
   candidates,
@@ -60,8 +64,7 @@ export function TradeOffChart({
             yScale={{ type: "log", domain: yd }}
             accessibilityLabel="Trade-off: burden voltage at the maximum current against worst-case error at the minimum current"
             onPointerUp={({ datum }) => {
-              const d = datum as Candidate | undefined;
-              if (d && "shuntOhms" in d) onSelect(candidateKey(d));
+              if (isCandidate(datum)) onSelect(candidateKey(datum));
             }}
             pointerEventsDataKey="nearest"
           >
@@ -86,8 +89,8 @@ export function TradeOffChart({
                 { v: dropMaxV, e: yd[0] },
                 { v: dropMaxV, e: yd[1] },
               ]}
-              xAccessor={(d) => d.v}
-              yAccessor={(d) => d.e}
+              xAccessor={(d) => d?.v ?? Number.NaN}
+              yAccessor={(d) => d?.e ?? Number.NaN}
               stroke={p.warn}
               strokeDasharray="4 3"
               strokeWidth={1}
@@ -150,14 +153,15 @@ export function TradeOffChart({
                 )}
               />
             )}
-            <Tooltip<Candidate>
+            <ChartTooltip
+              palette={p}
+              frame={ref}
               snapTooltipToDatumX
               snapTooltipToDatumY
               showDatumGlyph={false}
               renderTooltip={({ tooltipData }) => {
                 const d = tooltipData?.nearestDatum?.datum;
-                if (!d || !("shuntOhms" in d)) return null;
-                return <CandidateTip c={d} />;
+                return isCandidate(d) ? <CandidateTip c={d} /> : null;
               }}
             />
           </XYChart>

@@ -3,6 +3,7 @@
 // The series are computed by the engine on the server; this only draws them.
 import { Axis, Grid, LineSeries, XYChart, buildChartTheme } from "@visx/xychart";
 import { formatPercent, formatSI } from "@/lib/design";
+import { useWidth } from "@/components/charts/use-width";
 import { seriesColours } from "./colours";
 
 export type CurveSeries = { key: string; label: string; points: { x: number; y: number }[] };
@@ -53,14 +54,17 @@ export function CurveChart({
   height: number;
   testId: string;
 }) {
+  // Up to `width`, narrower when the frame is (a phone): never wider than what holds it.
+  const { ref, width: room } = useWidth<HTMLElement>();
+  const drawn = room > 0 ? Math.min(width, Math.max(280, room)) : width;
   const xd = logDomain(series.flatMap((s) => s.points.map((p) => p.x)));
   const yd = logDomain(series.flatMap((s) => s.points.map((p) => p.y)));
   const fmtY = (v: number) => (yUnit === "%" ? formatPercent(v / 100) : formatSI(v, yUnit));
   return (
-    <figure className="flex flex-col gap-1" data-testid={testId}>
+    <figure ref={ref} className="flex min-w-0 flex-col gap-1" data-testid={testId}>
       <figcaption className="text-xs font-semibold text-ink-muted">{title}</figcaption>
       <XYChart
-        width={width}
+        width={drawn}
         height={height}
         margin={margin}
         theme={theme}

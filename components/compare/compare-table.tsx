@@ -2,6 +2,7 @@ import Link from "next/link";
 import { StatusBadge } from "@/components/review/status-badge";
 import type { DesignView, DesignViewer } from "@/lib/design-view";
 import { bestIndexes } from "@/lib/saved-designs/compare";
+import { againstOwnLimit, basisDiffers } from "@/lib/saved-designs/figure-basis";
 import {
   choiceFields,
   flatten,
@@ -47,26 +48,47 @@ function SameRows({ list, columns }: { list: Row[]; columns: number }) {
   );
 }
 
-function Section({ title, list, mark }: { title: string; list: Row[]; mark: boolean }) {
+/**
+ * One block of rows. With `requirements` (the figures), a row is ranked only where the figures are
+ * taken at the same points in every design; otherwise each value is read against its own limit.
+ */
+function Section({
+  title,
+  list,
+  mark,
+  requirements,
+}: {
+  title: string;
+  list: Row[];
+  mark: boolean;
+  requirements?: DesignView["requirement"][];
+}) {
   return (
     <>
       <tr>
-        <th
-          colSpan={99}
-          className="bg-sunken px-3 py-1 text-left text-2xs font-semibold tracking-wide text-ink-muted"
-        >
+        <th colSpan={99} className="bg-sunken px-3 py-1 text-left text-2xs font-semibold tracking-wide text-ink-muted">
           {title}
         </th>
       </tr>
       {list.map((r) => {
-        const best = mark ? bestIndexes(r.values, r.info) : [];
+        const apart = requirements ? basisDiffers(r.key, requirements) : [];
+        const best = mark && apart.length === 0 ? bestIndexes(r.values, r.info) : [];
         return (
           <tr key={r.key} className="border-b border-line last:border-0" data-testid={`row-${r.key}`}>
-            <th scope="row" className={`px-3 py-1 text-left font-normal ${differs(r) ? "text-ink" : "text-ink-muted"}`}>
+            <th
+              scope="row"
+              className={`sticky left-0 z-10 bg-panel px-3 py-1 text-left font-normal ${differs(r) ? "text-ink" : "text-ink-muted"}`}
+            >
               {r.info.label}
-              {r.info.better && (
+              {r.info.better && apart.length === 0 && (
                 <span className="ml-1 whitespace-nowrap text-2xs text-ink-faint" title={`${r.info.better} is better`}>
                   {r.info.better === "lower" ? "↓ better" : "↑ better"}
+                </span>
+              )}
+              {r.info.better && apart.length > 0 && (
+                <span className="block text-2xs text-ink-faint" data-testid="not-ranked">
+                  not ranked: taken at a different{" "}
+                  {apart.map((p) => (requirementFields[p]?.label ?? p).toLowerCase()).join(", ")}
                 </span>
               )}
             </th>
@@ -77,6 +99,11 @@ function Section({ title, list, mark }: { title: string; list: Row[]; mark: bool
                 data-best={best.includes(i) || undefined}
               >
                 {formatField(v, r.info)}
+                {apart.length > 0 && requirements?.[i] && againstOwnLimit(r.key, v, requirements[i]) && (
+                  <span className="block text-2xs text-ink-muted" data-testid="own-limit">
+                    {againstOwnLimit(r.key, v, requirements[i])}
+                  </span>
+                )}
                 {best.includes(i) && (
                   <span className="ml-1 text-2xs" aria-label="best in this row">
                     best
@@ -112,11 +139,14 @@ export function CompareTable({
     designs.map((d) => d.requirement),
   );
   return (
-    <div className="overflow-x-auto rounded-panel border border-line bg-panel">
+    // Wider than a phone: the table scrolls inside its own frame, the row names stay in view.
+    <div className="overflow-x-auto rounded-panel border border-line bg-panel" data-testid="compare-frame">
       <table className="w-full text-sm">
         <thead>
           <tr className="border-b border-line align-top">
-            <th className="min-w-72 px-3 py-2 text-left text-xs font-medium text-ink-muted">Design</th>
+            <th className="sticky left-0 z-10 w-40 min-w-40 bg-panel px-3 py-2 text-left text-xs font-medium text-ink-muted sm:min-w-72">
+              Design
+            </th>
             {designs.map((d, i) => (
               <th key={d.id} className="px-3 py-2 text-right font-normal" data-testid="compare-column">
                 <div className="flex flex-col items-end gap-1">
@@ -156,6 +186,7 @@ export function CompareTable({
               designs.map((d) => d.metrics),
             )}
             mark
+            requirements={designs.map((d) => d.requirement)}
           />
           <Section title="Requirement: where the designs differ" list={requirementRows.filter(differs)} mark={false} />
           <SameRows list={requirementRows.filter((r) => !differs(r))} columns={designs.length} />

@@ -228,7 +228,7 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
 
   return (
     <Panel title="Import and export (CSV)">
-      <div className="grid gap-6 md:grid-cols-2">
+      <div className="grid grid-cols-1 gap-6 md:grid-cols-2">
         <div className="flex flex-col gap-2">
           <h3 className="text-sm font-medium">Export</h3>
           <p className="text-xs text-ink-muted">
@@ -252,7 +252,7 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
               already in the library is updated. Units may go in the header (<code>offset [uV]</code>) or the cell (
               <code>35 uV</code>); lists are separated by <code>;</code>.
             </p>
-            <div className="grid grid-cols-[10rem_1fr] items-end gap-2">
+            <div className="grid grid-cols-1 items-end gap-2 sm:grid-cols-[10rem_minmax(0,1fr)]">
               <Field id="import-kind" label="The file holds">
                 <Select id="import-kind" value={kind} onChange={(e) => setKind(e.target.value as PartKind)}>
                   <option value="amplifiers">Amplifiers</option>
@@ -265,7 +265,7 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
                   ref={fileRef}
                   type="file"
                   accept=".csv,text/csv"
-                  className="text-sm file:mr-2 file:rounded file:border file:border-line file:bg-panel file:px-2 file:py-1"
+                  className="w-full min-w-0 text-sm file:mr-2 file:rounded file:border file:border-line file:bg-panel file:px-2 file:py-1"
                 />
               </Field>
             </div>

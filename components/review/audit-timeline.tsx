@@ -30,7 +30,11 @@ export type AuditEntry = {
   actorEmail: string | null;
 };
 
-const words: Record<string, (d: Record<string, unknown>) => string> = {
+const partKind = (targetType: string | null) =>
+  targetType === "library-shunt" ? "shunt family" : targetType === "library-amplifier" ? "amplifier" : "part";
+const plural = (n: unknown, one: string, many: string) => `${String(n)} ${Number(n) === 1 ? one : many}`;
+
+const words: Record<string, (d: Record<string, unknown>, e: AuditEntry) => string> = {
   "design.created": (d) => `created the design (revision ${String(d.revision ?? 1)})`,
   "design.revised": (d) =>
     `saved revision ${String(d.revision)}${
@@ -61,10 +65,19 @@ const words: Record<string, (d: Record<string, unknown>) => string> = {
   "token.created": (d) => `created the ${String(d.access)} API token “${String(d.name)}”`,
   "token.revoked": (d) => `revoked the API token “${String(d.name)}”`,
   "account.updated": () => "changed their name or mail choices",
+  "library.create": (d, e) => `added the ${partKind(e.targetType)} “${String(d.name)}” to the library`,
+  "library.update": (d, e) => `changed the library ${partKind(e.targetType)} “${String(d.name)}”`,
+  "library.delete": (d, e) => `removed the ${partKind(e.targetType)} “${String(d.name)}” from the library`,
+  "library.import": (d, e) =>
+    `imported ${partKind(e.targetType) === "amplifier" ? "amplifiers" : "shunt families"} into the library: ${plural(d.created ?? 0, "new part", "new parts")}, ${plural(d.updated ?? 0, "part", "parts")} updated`,
+  "profile.upload": (d) =>
+    `uploaded the current profile “${String(d.fileName)}”${d.samples !== undefined ? ` (${plural(d.samples, "sample", "samples")})` : ""}`,
+  "profile.delete": (d) => `deleted the current profile “${String(d.fileName)}”`,
 };
 
+/** An event in words; one this list does not know yet still reads as words, never as its key. */
 export function describeAudit(e: AuditEntry): string {
-  return words[e.action]?.(e.details) ?? e.action;
+  return words[e.action]?.(e.details, e) ?? `recorded “${e.action.replace(/[.-]/g, " ")}”`;
 }
 
 /** Who did what, newest first. */

@@ -1,5 +1,6 @@
 "use client";
 
+import Link from "next/link";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
@@ -25,10 +26,18 @@ export function ReviewActions({ design, viewer }: { design: DesignView; viewer: 
         <span className="text-ink-muted">
           Revision {design.revision}: {statusExplained[design.status]}
         </span>
+        {canEdit && (
+          <Link
+            href={`/designs/${design.id}/revise`}
+            className="ml-auto rounded border border-line bg-panel px-3 py-1.5 text-sm font-medium hover:bg-sunken"
+            data-testid="revise-link"
+          >
+            Revise requirement or pair
+          </Link>
+        )}
         {canSubmit && (
           <Button
             variant="primary"
-            className="ml-auto"
             disabled={s.busy}
             onClick={() =>
               s.send(
@@ -107,21 +116,34 @@ export function ReviewActions({ design, viewer }: { design: DesignView; viewer: 
             className="mt-2 grid grid-cols-1 gap-2 sm:grid-cols-[1fr_1fr_auto] sm:items-end"
             onSubmit={(e) => {
               e.preventDefault();
-              void s.send(
-                url,
-                "PATCH",
-                { revision: design.revision, name, project: project.trim() || null },
-                "Saved as a new draft revision.",
+              void s.send(url, "PATCH", { revision: design.revision, name, project: project.trim() || null }, (a) =>
+                a.unchanged ? "Nothing changed, so no new revision was made." : "Saved as a new draft revision.",
               );
             }}
           >
             <Field id="design-name-input" label="Design name">
-              <TextInput id="design-name-input" value={name} onChange={(e) => setName(e.target.value)} />
+              <TextInput
+                id="design-name-input"
+                value={name}
+                maxLength={200}
+                onChange={(e) => setName(e.target.value)}
+              />
             </Field>
             <Field id="design-project-input" label="Project">
-              <TextInput id="design-project-input" value={project} onChange={(e) => setProject(e.target.value)} />
+              <TextInput
+                id="design-project-input"
+                value={project}
+                maxLength={200}
+                onChange={(e) => setProject(e.target.value)}
+              />
             </Field>
-            <Button type="submit" disabled={s.busy} className="mb-[1.05rem]">
+            <Button
+              type="submit"
+              disabled={
+                s.busy || (name.trim() === design.name && (project.trim() || null) === (design.project ?? null))
+              }
+              className="mb-[1.05rem]"
+            >
               Save revision {design.revision + 1}
             </Button>
           </form>

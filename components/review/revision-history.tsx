@@ -81,9 +81,7 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
                 {changes.map((c) => (
                   <tr key={`${c.group}.${c.path}`} className="border-b border-line last:border-0">
                     <td className="py-1 pr-3">
-                      <span className="mr-1 text-2xs tracking-wide text-ink-faint">
-                        {groupNames[c.group]}
-                      </span>
+                      <span className="mr-1 text-2xs tracking-wide text-ink-faint">{groupNames[c.group]}</span>
                       {c.label}
                     </td>
                     <td className="py-1 pr-3 text-right text-ink-muted">{c.aText}</td>

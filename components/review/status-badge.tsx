@@ -16,5 +16,5 @@ export const statusExplained: Record<DesignStatus, string> = {
   draft: "Being worked on; submit it when it is ready for review.",
   "in-review": "Waiting for a reviewer's verdict.",
   approved: "Signed off on this revision; makers may build it.",
-  returned: "Sent back with a reason; edit it or answer the comments, then submit again.",
+  returned: "Sent back with a reason; revise it or answer the comments, then submit again.",
 };

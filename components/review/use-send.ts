@@ -9,7 +9,12 @@ export type SendState = { busy: boolean; error: string | null; stale: boolean; o
 export function useSend() {
   const router = useRouter();
   const [state, setState] = useState<SendState>({ busy: false, error: null, stale: false, ok: null });
-  async function send(url: string, method: "POST" | "PATCH", body: unknown, okText: string): Promise<boolean> {
+  async function send(
+    url: string,
+    method: "POST" | "PATCH",
+    body: unknown,
+    okText: string | ((answer: Record<string, unknown>) => string),
+  ): Promise<boolean> {
     setState({ busy: true, error: null, stale: false, ok: null });
     try {
       const res = await fetch(url, {
@@ -32,7 +37,12 @@ export function useSend() {
         });
         return false;
       }
-      setState({ busy: false, error: null, stale: false, ok: okText });
+      setState({
+        busy: false,
+        error: null,
+        stale: false,
+        ok: typeof okText === "string" ? okText : okText(data as Record<string, unknown>),
+      });
       router.refresh();
       return true;
     } catch {

@@ -1,8 +1,15 @@
 "use client";
 // The live results beside the form: the trade-off, the refusals, the table, the selected
 // candidate in depth, the range plan when one range cannot do, and saving.
-import { memo, useEffect, useMemo, type RefObject } from "react";
-import { formatSI, type Candidate, type SolveResult } from "@/lib/design";
+import { memo, useCallback, useEffect, useMemo, type RefObject } from "react";
+import {
+  evaluateCandidate,
+  formatSI,
+  isInSweep,
+  rejectReasonLabels,
+  type Candidate,
+  type SolveResult,
+} from "@/lib/design";
 import { RangePlanChart } from "@/components/charts/range-plan-chart";
 import { TradeOffChart } from "@/components/charts/trade-off-chart";
 import { CandidateStudy } from "@/components/candidates/candidate-study";
@@ -10,8 +17,15 @@ import { CandidateTable } from "@/components/candidates/candidate-table";
 import { Rejections } from "@/components/candidates/rejections";
 import { Panel } from "@/components/ui/panel";
 import { candidateKey, choiceFromKey } from "@/lib/wizard/candidate-key";
+import { inWords } from "@/lib/wizard/form-errors";
+import { rankingInWords, recommendationReason, recommendedOf } from "@/lib/wizard/recommend";
 import type { useSolver } from "@/lib/wizard/use-solver";
-import { SavePanel } from "./save-panel";
+import { Button } from "@/components/ui/button";
+import { DefaultsSummary } from "./defaults-summary";
+import { SavePanel, type PickNote } from "./save-panel";
+
+const pairText = (c: { shuntOhms: number; gain: number }) =>
+  `${formatSI(c.shuntOhms, "Ω")} × ${Number(c.gain.toPrecision(4))}`;
 
 const decades = [
   { label: "1 mV per mA", vPerA: 1 },
@@ -24,6 +38,8 @@ export function Explorer({
   headingRef,
   selected,
   setSelected,
+  chosen,
+  setChosen,
   pinned,
   setPinned,
   canSave,
@@ -32,11 +48,14 @@ export function Explorer({
   project,
   setProject,
   onSaved,
+  revise,
 }: {
   solver: ReturnType<typeof useSolver>;
   headingRef: RefObject<HTMLHeadingElement | null>;
   selected: string | null;
   setSelected: (k: string | null) => void;
+  chosen: boolean;
+  setChosen: (b: boolean) => void;
   pinned: string[];
   setPinned: (p: string[]) => void;
   canSave: boolean;
@@ -45,6 +64,7 @@ export function Explorer({
   project: string;
   setProject: (s: string) => void;
   onSaved: () => void;
+  revise?: { id: string; revision: number };
 }) {
   const { state, busy, last: shown } = solver;
   const result = shown?.result ?? null;
@@ -57,13 +77,20 @@ export function Explorer({
       ),
     [result],
   );
-  // A selection that is no longer listed falls back to the best of the front.
+  // The selection follows the ranking after every solve, unless the designer picked a pair.
+  const recommended = recommendedOf(result);
+  const recommendedKey = recommended ? candidateKey(recommended) : null;
   useEffect(() => {
-    if (!result) return;
-    if (selected && byKey.has(selected)) return;
-    const best = result.candidates.find((c) => c.pareto) ?? result.candidates.find((c) => c.feasible) ?? null;
-    setSelected(best ? candidateKey(best) : null);
-  }, [result, byKey, selected, setSelected]);
+    if (!result || chosen) return;
+    if (selected !== recommendedKey) setSelected(recommendedKey);
+  }, [result, chosen, selected, recommendedKey, setSelected]);
+  const pick = useCallback(
+    (k: string | null) => {
+      setSelected(k);
+      setChosen(k !== null);
+    },
+    [setSelected, setChosen],
+  );
   useEffect(() => {
     const keep = pinned.filter((k) => byKey.has(k));
     if (keep.length !== pinned.length) setPinned(keep);
@@ -81,8 +108,48 @@ export function Explorer({
     }
   }, [solvedId, editAt]);
 
-  const candidate: Candidate | null = selected ? (byKey.get(selected) ?? null) : null;
   const req = result?.requirement;
+  // A picked pair that dropped out of the list is evaluated on its own, to say why.
+  const candidate: Candidate | null = useMemo(() => {
+    if (!selected || !req) return null;
+    const listed = byKey.get(selected);
+    if (listed) return listed;
+    const choice = choiceFromKey(selected);
+    if (!choice || !isInSweep(req, choice)) return null;
+    return { ...evaluateCandidate(req, choice), pareto: false };
+  }, [selected, req, byKey]);
+  const note: PickNote | null = useMemo(() => {
+    if (!result || !selected) return null;
+    const choice = choiceFromKey(selected);
+    if (!choice) return null;
+    const follow = recommended && selected !== recommendedKey ? recommended : null;
+    if (!chosen) return { tone: "info", text: "Following the ranking: the recommended pair is selected." };
+    if (!candidate)
+      return {
+        tone: "bad",
+        text: `Your pick, ${pairText(choice)}, is no longer in the sweep of this requirement.`,
+        follow,
+      };
+    if (!candidate.feasible)
+      return {
+        tone: "bad",
+        text: `Your pick, ${pairText(choice)}, no longer meets the requirement: ${candidate.reasons.map((r) => rejectReasonLabels[r]).join("; ")}.`,
+        follow,
+      };
+    if (!candidate.pareto)
+      return {
+        tone: "warn",
+        text: `Your pick, ${pairText(choice)}, is feasible but no longer on the Pareto front: another pair is at least as good on drop, step and error, and better on one.`,
+        follow,
+      };
+    return follow
+      ? {
+          tone: "info",
+          text: `Your pick, ${pairText(choice)}, stays selected; the ranking now puts another pair first.`,
+          follow,
+        }
+      : { tone: "info", text: "Your pick is the recommended pair." };
+  }, [result, selected, chosen, candidate, recommended, recommendedKey]);
   const frontCount = result ? result.candidates.filter((c) => c.pareto).length : 0;
 
   return (
@@ -119,8 +186,8 @@ export function Explorer({
               : "The requirement is not complete yet."}
           </p>
           <ul className="mt-1 list-disc pl-4 text-ink-muted">
-            {Object.values(state.fieldErrors)
-              .flat()
+            {Object.entries(state.fieldErrors)
+              .flatMap(([path, msgs]) => msgs.map((m) => inWords(path, m)))
               .slice(0, 6)
               .map((m) => (
                 <li key={m}>{m}</li>
@@ -132,17 +199,45 @@ export function Explorer({
 
       {result && req && (
         <>
+          {recommended ? (
+            <div
+              className="rounded-panel border border-copper/40 bg-copper-soft/40 px-4 py-3 text-xs"
+              data-testid="recommended"
+            >
+              <p className="text-sm">
+                <span className="font-semibold">Recommended pair: </span>
+                <span className="num font-semibold">{pairText(recommended)}</span>
+                {selected === recommendedKey ? (
+                  <span className="ml-2 text-ink-muted">(selected)</span>
+                ) : (
+                  <Button variant="ghost" className="ml-2" onClick={() => pick(recommendedKey)}>
+                    Select it
+                  </Button>
+                )}
+              </p>
+              <p className="mt-1 text-ink-muted num">{recommendationReason(recommended, result)}</p>
+            </div>
+          ) : null}
           <Results
             result={result}
             selected={selected}
-            setSelected={setSelected}
+            recommendedKey={recommendedKey}
+            setSelected={pick}
             pinned={pinned}
             setPinned={setPinned}
           />
-          <Panel title="Save">
+          <Panel title={revise ? `Save revision ${revise.revision + 1}` : "Save"}>
+            <DefaultsSummary requirement={req} />
+            <div className="mt-3" />
             <SavePanel
               requirement={req}
               candidate={candidate}
+              note={note}
+              onFollow={() => {
+                setChosen(false);
+                setSelected(recommendedKey);
+              }}
+              revise={revise}
               canSave={canSave}
               name={name}
               setName={setName}
@@ -161,12 +256,14 @@ export function Explorer({
 const Results = memo(function Results({
   result,
   selected,
+  recommendedKey,
   setSelected,
   pinned,
   setPinned,
 }: {
   result: SolveResult;
   selected: string | null;
+  recommendedKey: string | null;
   setSelected: (k: string | null) => void;
   pinned: string[];
   setPinned: (p: string[]) => void;
@@ -297,6 +394,7 @@ const Results = memo(function Results({
         <CandidateTable
           candidates={listed}
           selected={selected}
+          recommended={recommendedKey}
           onSelect={setSelected}
           pinned={pinned}
           onTogglePin={(k) =>
@@ -304,7 +402,7 @@ const Results = memo(function Results({
           }
           transimpedanceFilter={null}
         />
-        <p className="mt-2 text-2xs text-ink-faint">{result.ranking}</p>
+        <p className="mt-2 text-2xs text-ink-faint">{rankingInWords(result)}</p>
       </Panel>
 
       {choice && selected && listedKeys.has(selected) && (

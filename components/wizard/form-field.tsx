@@ -5,6 +5,7 @@ import { useFormContext, useWatch, type RegisterOptions } from "react-hook-form"
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { errorText } from "@/lib/wizard/form-errors";
 import type { WizardValues } from "@/lib/wizard/form-values";
+import { isBareNumber, normaliseTyped, type BaseUnit } from "@/lib/wizard/typed-quantity";
 
 const fieldId = (name: string) => `f-${name.replace(/\./g, "-")}`;
 
@@ -48,6 +49,7 @@ export function FormField({
   extraError,
   transform,
   suffix,
+  unit,
 }: {
   name: string;
   label: ReactNode;
@@ -58,13 +60,18 @@ export function FormField({
   extraError?: string;
   transform?: (v: unknown) => unknown;
   suffix?: ReactNode;
+  /** The unit a bare number is read in; shown beside the box while the entry is a bare number. */
+  unit?: BaseUnit;
 }) {
   const { register, formState, trigger } = useFormContext<WizardValues>();
   const id = fieldId(name);
   const own = errorText(formState.errors, name);
   const error = own ?? extraError;
-  const setValueAs = transform ?? setValueAsFor[kind];
+  const read = transform ?? setValueAsFor[kind];
+  const setValueAs = (v: unknown) => read?.(normaliseTyped(v, unit));
   const base = register(name as never, { setValueAs });
+  const typed = useWatch({ name: name as never }) as unknown;
+  const shownUnit = unit && !suffix && isBareNumber(typeof typed === "number" ? String(typed) : typed) ? unit : null;
   // A refused entry is re-checked as it is corrected, before the field is ever left.
   const reg = {
     ...base,
@@ -86,6 +93,15 @@ export function FormField({
           aria-describedby={`${id}-error${hint ? ` ${id}-hint` : ""}`}
         />
         {suffix && <span className="shrink-0 text-2xs text-ink-faint">{suffix}</span>}
+        {shownUnit && (
+          <span
+            className="shrink-0 text-xs text-ink-muted"
+            data-testid={`${id}-unit`}
+            title="A bare number is read in this unit"
+          >
+            {shownUnit}
+          </span>
+        )}
       </div>
     </Field>
   );

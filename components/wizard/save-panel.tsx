@@ -1,16 +1,28 @@
 "use client";
-// Name the design and save the chosen pair: POST /api/designs, then its own page.
+// Name the design and save the chosen pair: POST /api/designs (a new design, with one
+// Idempotency-Key per attempt so a repeated request creates nothing more) or, when revising,
+// PATCH /api/designs/[id] with the revision it started from (409 when someone saved first).
 import { useMutation } from "@tanstack/react-query";
+import Link from "next/link";
 import { useRouter } from "next/navigation";
+import { useRef } from "react";
 import { formatSI, type Candidate, type Requirement } from "@/lib/design";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
 
-type SaveError = { message: string; fieldErrors?: Record<string, string[]> };
+type SaveError = { message: string; fieldErrors?: Record<string, string[]>; status?: number };
+
+/** What to say beside Save about the selected pair: followed from the ranking, or the designer's own pick. */
+export type PickNote = { tone: "info" | "warn" | "bad"; text: string; follow?: Candidate | null };
+
+const noteTone = { info: "text-ink-muted", warn: "text-warn", bad: "text-bad" } as const;
 
 export function SavePanel({
   requirement,
   candidate,
+  note = null,
+  onFollow,
+  revise,
   canSave,
   name,
   setName,
@@ -20,6 +32,10 @@ export function SavePanel({
 }: {
   requirement: Requirement;
   candidate: Candidate | null;
+  note?: PickNote | null;
+  onFollow?: () => void;
+  /** Saving makes the next revision of this design instead of a new design. */
+  revise?: { id: string; revision: number };
   canSave: boolean;
   name: string;
   setName: (s: string) => void;
@@ -28,24 +44,36 @@ export function SavePanel({
   onSaved: () => void;
 }) {
   const router = useRouter();
-  const save = useMutation<{ id: string }, SaveError>({
-    mutationFn: async () => {
-      const res = await fetch("/api/designs", {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: JSON.stringify({
-          name: name.trim(),
-          ...(project.trim() ? { project: project.trim() } : {}),
-          requirement,
-          choice: { shuntOhms: candidate!.shuntOhms, gain: candidate!.gain },
-        }),
-      });
+  const saving = useRef(false);
+  const save = useMutation<{ id: string }, SaveError, string>({
+    mutationFn: async (idempotencyKey) => {
+      const design = {
+        name: name.trim(),
+        requirement,
+        choice: { shuntOhms: candidate!.shuntOhms, gain: candidate!.gain },
+      };
+      const res = revise
+        ? await fetch(`/api/designs/${revise.id}`, {
+            method: "PATCH",
+            headers: { "content-type": "application/json" },
+            body: JSON.stringify({ ...design, project: project.trim() || null, revision: revise.revision }),
+          })
+        : await fetch("/api/designs", {
+            method: "POST",
+            headers: { "content-type": "application/json", "idempotency-key": idempotencyKey },
+            body: JSON.stringify({ ...design, ...(project.trim() ? { project: project.trim() } : {}) }),
+          });
       const body = (await res.json().catch(() => ({ message: `The server answered ${res.status}` }))) as {
         id?: string;
+        revision?: number;
       } & SaveError;
-      if (!res.ok || !body.id)
-        throw { message: body.message ?? `The server answered ${res.status}`, fieldErrors: body.fieldErrors };
-      return { id: body.id };
+      if (!res.ok || (!revise && !body.id))
+        throw {
+          message: body.message ?? `The server answered ${res.status}`,
+          fieldErrors: body.fieldErrors,
+          status: res.status,
+        };
+      return { id: revise?.id ?? body.id! };
     },
     onSuccess: ({ id }) => {
       onSaved();
@@ -71,7 +99,11 @@ export function SavePanel({
           save.reset();
           return;
         }
-        save.mutate();
+        // A second click lands before React has drawn the button disabled: a ref guards the attempt.
+        // One key per attempt: a repeated request of this attempt creates nothing more.
+        if (saving.current) return;
+        saving.current = true;
+        save.mutate(crypto.randomUUID(), { onSettled: () => (saving.current = false) });
       }}
       aria-label="Save the design"
     >
@@ -102,16 +134,40 @@ export function SavePanel({
         <Button type="submit" variant="primary" disabled={!candidate || !candidate.feasible || save.isPending}>
           {save.isPending
             ? "Saving…"
-            : candidate
-              ? `Save ${formatSI(candidate.shuntOhms, "Ω")} × ${Number(candidate.gain.toPrecision(4))}`
-              : "Save"}
+            : `${revise ? `Save as revision ${revise.revision + 1}` : "Save"}${
+                candidate
+                  ? ` with ${formatSI(candidate.shuntOhms, "Ω")} × ${Number(candidate.gain.toPrecision(4))}`
+                  : ""
+              }`}
         </Button>
         {!candidate && <span className="text-xs text-ink-muted">Select a candidate first.</span>}
         {candidate && !candidate.feasible && (
           <span className="text-xs text-bad">Only a feasible candidate can be saved.</span>
         )}
+        {note && (
+          <span className={`text-xs ${noteTone[note.tone]}`} data-testid="pick-note">
+            {note.text}
+            {note.follow && onFollow && (
+              <>
+                {" "}
+                <button type="button" className="text-copper-strong underline" onClick={onFollow}>
+                  Follow the ranking ({formatSI(note.follow.shuntOhms, "Ω")} × {Number(note.follow.gain.toPrecision(4))}
+                  )
+                </button>
+              </>
+            )}
+          </span>
+        )}
         <p aria-live="polite" className="text-xs text-bad" data-testid="save-error">
           {save.isError && !nameError ? save.error.message : ""}
+          {save.isError && save.error.status === 409 && revise && (
+            <>
+              {" "}
+              <Link href={`/designs/${revise.id}`} className="text-copper-strong underline">
+                Open the design as it is now
+              </Link>
+            </>
+          )}
         </p>
       </div>
     </form>

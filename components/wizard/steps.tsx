@@ -75,6 +75,7 @@ export function SpanStep({ live }: { live: LiveErrors }) {
     <div className="grid grid-cols-2 gap-3">
       <FormField
         name="current.min"
+        unit="A"
         label="Minimum current"
         placeholder="3 uA"
         hint="e.g. 3 uA (sleep current)"
@@ -82,6 +83,7 @@ export function SpanStep({ live }: { live: LiveErrors }) {
       />
       <FormField
         name="current.max"
+        unit="A"
         label="Maximum current"
         placeholder="180 mA"
         hint="e.g. 180 mA (peak)"
@@ -89,6 +91,7 @@ export function SpanStep({ live }: { live: LiveErrors }) {
       />
       <FormField
         name="current.typical"
+        unit="A"
         label="Typical current (optional)"
         kind="optional"
         placeholder="20 mA"
@@ -117,7 +120,13 @@ export function SupplyStep({
 }) {
   return (
     <div className="grid grid-cols-2 gap-3">
-      <FormField name="supply.voltage" label="Supply voltage" placeholder="3.0 V" extraError={live("supply.voltage")} />
+      <FormField
+        name="supply.voltage"
+        unit="V"
+        label="Supply voltage"
+        placeholder="3.0 V"
+        extraError={live("supply.voltage")}
+      />
       <RadioField
         legend="Shunt position"
         name="supply.side"
@@ -140,6 +149,7 @@ export function SupplyStep({
         {dropMode === "volts" ? (
           <FormField
             name="drop.max"
+            unit="V"
             label="Allowed drop"
             placeholder="60 mV"
             hint="Largest voltage the shunt may take at the maximum current"
@@ -158,6 +168,7 @@ export function SupplyStep({
       </div>
       <FormField
         name="drop.loadMin"
+        unit="V"
         label="Minimum load voltage (optional)"
         kind="optional"
         placeholder="2.7 V"
@@ -186,6 +197,7 @@ export function ReadoutStep({ live }: { live: LiveErrors }) {
         <>
           <FormField
             name="readout.fullScale"
+            unit="V"
             label="Meter range (full scale)"
             placeholder="200 mV"
             extraError={live("readout.fullScale")}
@@ -203,6 +215,7 @@ export function ReadoutStep({ live }: { live: LiveErrors }) {
         <>
           <FormField
             name="readout.fullScale"
+            unit="V"
             label="ADC full scale"
             placeholder="2.5 V"
             extraError={live("readout.fullScale")}
@@ -234,6 +247,7 @@ export function ReadoutStep({ live }: { live: LiveErrors }) {
       />
       <FormField
         name="accuracy.bandMin"
+        unit="A"
         label="Accuracy band from (optional)"
         kind="optional"
         placeholder="18 mA"
@@ -242,6 +256,7 @@ export function ReadoutStep({ live }: { live: LiveErrors }) {
       />
       <FormField
         name="accuracy.bandMax"
+        unit="A"
         label="Accuracy band to (optional)"
         kind="optional"
         placeholder="180 mA"
@@ -288,13 +303,20 @@ export function ShuntStep({ live }: { live: LiveErrors }) {
       />
       <FormField
         name="shunt.tolerance"
+        unit="ratio"
         label="Shunt tolerance"
         placeholder="0.5 %"
         extraError={live("shunt.tolerance")}
       />
-      <FormField name="shunt.min" label="Smallest shunt" placeholder="1 mohm" extraError={live("shunt.min")} />
-      <FormField name="shunt.max" label="Largest shunt" placeholder="1 kohm" extraError={live("shunt.max")} />
-      <FormField name="shunt.tempco" label="Shunt tempco" placeholder="50 ppm/K" extraError={live("shunt.tempco")} />
+      <FormField name="shunt.min" unit="Ω" label="Smallest shunt" placeholder="1 mohm" extraError={live("shunt.min")} />
+      <FormField name="shunt.max" unit="Ω" label="Largest shunt" placeholder="1 kohm" extraError={live("shunt.max")} />
+      <FormField
+        name="shunt.tempco"
+        unit="1/K"
+        label="Shunt tempco"
+        placeholder="50 ppm/K"
+        extraError={live("shunt.tempco")}
+      />
       <FormField
         name="shunt.derating"
         label="Share of rating used"
@@ -427,41 +449,53 @@ export function AmplifierStep({
       )}
       <FormField
         name="amplifier.offset"
+        unit="V"
         label="Input offset (at 25 °C)"
         placeholder="10 uV"
         extraError={live("amplifier.offset")}
       />
       <FormField
         name="amplifier.offsetDrift"
+        unit="V/K"
         label="Offset drift"
         placeholder="0.1 uV/K"
         extraError={live("amplifier.offsetDrift")}
       />
       <FormField
         name="amplifier.gainError"
+        unit="ratio"
         label="Gain error"
         placeholder="0.1 %"
         extraError={live("amplifier.gainError")}
       />
       <FormField
         name="amplifier.gainDrift"
+        unit="1/K"
         label="Gain drift"
         placeholder="10 ppm/K"
         extraError={live("amplifier.gainDrift")}
       />
       <FormField
         name="amplifier.biasCurrent"
+        unit="A"
         label="Input bias current"
         placeholder="20 nA"
         extraError={live("amplifier.biasCurrent")}
       />
       <FormField
         name="amplifier.noiseDensity"
+        unit="V/√Hz"
         label="Input noise density"
         placeholder="40 nV/rtHz"
         extraError={live("amplifier.noiseDensity")}
       />
-      <FormField name="amplifier.gbw" label="Gain-bandwidth" placeholder="2 MHz" extraError={live("amplifier.gbw")} />
+      <FormField
+        name="amplifier.gbw"
+        unit="Hz"
+        label="Gain-bandwidth"
+        placeholder="2 MHz"
+        extraError={live("amplifier.gbw")}
+      />
       <FormField
         name="amplifier.cmrrDb"
         label="CMRR (dB)"
@@ -471,12 +505,14 @@ export function AmplifierStep({
       />
       <FormField
         name="amplifier.supply"
+        unit="V"
         label="Amplifier supply"
         placeholder="5 V"
         extraError={live("amplifier.supply")}
       />
       <FormField
         name="amplifier.swingLow"
+        unit="V"
         label="Lowest output (above ground)"
         placeholder="10 mV"
         hint="0 V on a split supply"
@@ -484,6 +520,7 @@ export function AmplifierStep({
       />
       <FormField
         name="amplifier.swingHigh"
+        unit="V"
         label="Output headroom below its supply"
         placeholder="50 mV"
         extraError={live("amplifier.swingHigh")}
@@ -497,12 +534,14 @@ export function TemperatureStep({ live }: { live: LiveErrors }) {
     <div className="grid grid-cols-2 gap-3">
       <FormField
         name="temperature.min"
+        unit="°C"
         label="Lowest ambient temperature"
         placeholder="0 °C"
         extraError={live("temperature.min")}
       />
       <FormField
         name="temperature.max"
+        unit="°C"
         label="Highest ambient temperature"
         placeholder="70 °C"
         extraError={live("temperature.max")}

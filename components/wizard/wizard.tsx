@@ -5,8 +5,13 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useForm, type Resolver } from "react-hook-form";
-import { requirementSchema } from "@/lib/design";
-import { clearDraft, deepMerge, loadDraft, saveDraft, type Draft } from "@/lib/wizard/draft";
+import { requirementSchema, type Choice, type Requirement } from "@/lib/design";
+import { candidateKey } from "@/lib/wizard/candidate-key";
+import { clearDraft, deepMerge, draftKey, loadDraft, saveDraft, type Draft } from "@/lib/wizard/draft";
+import { errorPaths, inWords, valueAt } from "@/lib/wizard/form-errors";
+import { revisionStart } from "@/lib/wizard/from-requirement";
+import { outOfRange, outOfRangeTyped } from "@/lib/wizard/ranges";
+import { convertDrop } from "@/lib/wizard/drop-mode";
 import { engineErrorsFor } from "@/lib/wizard/form-errors";
 import { readableDefaults, valuesFrom, type WizardValues } from "@/lib/wizard/form-values";
 import { scenarios } from "@/lib/wizard/scenarios";
@@ -15,14 +20,16 @@ import { Button } from "@/components/ui/button";
 import { Explorer } from "./explorer";
 import { AmplifierStep, ReadoutStep, ShuntStep, SpanStep, SupplyStep, TemperatureStep, steps } from "./steps";
 
-const freshDraft = (key = scenarios[0]!.key): Draft => {
-  const s = scenarios.find((x) => x.key === key) ?? scenarios[0]!;
-  const values = valuesFrom(s.input);
+/** A new design starts from the documented defaults (lib/design/DEFAULTS.md), the span and supply
+ * blank; `scenario` loads one of the examples instead. */
+const freshDraft = (scenario?: string): Draft => {
+  const s = scenario ? scenarios.find((x) => x.key === scenario) : undefined;
   return {
     version: 1,
-    values,
+    values: s ? valuesFrom(s.input) : readableDefaults,
     step: 0,
-    dropMode: (s.input.drop as { fraction?: unknown } | undefined)?.fraction !== undefined ? "share" : "volts",
+    visited: s ? steps.length - 1 : 0,
+    dropMode: (s?.input.drop as { fraction?: unknown } | undefined)?.fraction !== undefined ? "share" : "volts",
     gainMode: "list",
     partName: null,
     selected: null,
@@ -32,14 +39,81 @@ const freshDraft = (key = scenarios[0]!.key): Draft => {
   };
 };
 
-export function Wizard({ canSave }: { canSave: boolean }) {
+/** The saved design a revision starts from. */
+export type ReviseTarget = {
+  id: string;
+  revision: number;
+  name: string;
+  project: string | null;
+  requirement: Requirement;
+  choice: Choice;
+};
+
+/** The saved requirement and pair, as the wizard shows them; the saved pair stays picked. */
+function revisionDraft(t: ReviseTarget): Draft {
+  const start = revisionStart(t.requirement);
+  return {
+    version: 1,
+    values: start.values,
+    step: 0,
+    dropMode: start.dropMode,
+    gainMode: start.gainMode,
+    partName: null,
+    selected: candidateKey(t.choice),
+    chosen: true,
+    pinned: [],
+    name: t.name,
+    project: t.project ?? "",
+  };
+}
+
+const parse = zodResolver(requirementSchema) as unknown as Resolver<WizardValues>;
+/** The engine's schema, then the working range (an absurd 1e30 A gets a plain message on its field). */
+const withinRange: Resolver<WizardValues> = async (values, context, options) => {
+  const r = await parse(values, context, options);
+  if (Object.keys(r.errors).length > 0) {
+    // Stock schema messages become the field's own words, quoting what was typed.
+    for (const path of errorPaths(r.errors)) {
+      const walk = (node: unknown, at: string) => {
+        const n = node as { message?: unknown } & Record<string, unknown>;
+        if (!n || typeof n !== "object") return;
+        if (typeof n.message === "string") n.message = inWords(at, n.message, valueAt(values, at));
+        else for (const [k, v] of Object.entries(n)) if (k !== "ref") walk(v, `${at}.${k}`);
+      };
+      walk(valueAt(r.errors, path), path);
+    }
+    // A field typed far out of range says so even while another field is still incomplete.
+    const far = outOfRangeTyped(values);
+    for (const [path, msgs] of Object.entries(far)) {
+      if (valueAt(r.errors, path)) continue;
+      const keys = path.split(".");
+      let node = r.errors as Record<string, unknown>;
+      for (const k of keys.slice(0, -1)) node = (node[k] ??= {}) as Record<string, unknown>;
+      node[keys.at(-1)!] = { type: "range", message: msgs[0] };
+    }
+    return r;
+  }
+  const far = outOfRange(r.values as unknown as Requirement);
+  if (Object.keys(far).length === 0) return r;
+  const errors: Record<string, unknown> = {};
+  for (const [path, msgs] of Object.entries(far)) {
+    const keys = path.split(".");
+    let node = errors;
+    for (const k of keys.slice(0, -1)) node = (node[k] ??= {}) as Record<string, unknown>;
+    node[keys.at(-1)!] = { type: "range", message: msgs[0] };
+  }
+  return { values: {}, errors: errors as never };
+};
+
+export function Wizard({ canSave, revise }: { canSave: boolean; revise?: ReviseTarget }) {
   const [draft, setDraft] = useState<Draft | null>(null);
   const [generation, setGeneration] = useState(0);
+  const key = draftKey(revise);
   useEffect(() => {
     // localStorage exists only in the browser, after mount.
     // eslint-disable-next-line react-hooks/set-state-in-effect
-    setDraft(loadDraft() ?? freshDraft());
-  }, []);
+    setDraft(loadDraft(key) ?? (revise ? revisionDraft(revise) : freshDraft()));
+  }, [key, revise]);
   if (!draft) {
     return (
       <p className="text-ink-muted" role="status">
@@ -47,37 +121,53 @@ export function Wizard({ canSave }: { canSave: boolean }) {
       </p>
     );
   }
-  const restart = (key: string) => {
-    const d = freshDraft(key);
-    saveDraft(d);
+  const restart = (scenario?: string) => {
+    const d = freshDraft(scenario);
+    saveDraft(d, key);
     setDraft(d);
     setGeneration((g) => g + 1);
   };
-  return <WizardForm key={generation} initial={draft} canSave={canSave} onRestart={restart} />;
+  return (
+    <WizardForm
+      key={generation}
+      initial={draft}
+      canSave={canSave}
+      onRestart={restart}
+      revise={revise}
+      storageKey={key}
+    />
+  );
 }
 
 function WizardForm({
   initial,
   canSave,
   onRestart,
+  revise,
+  storageKey,
 }: {
   initial: Draft;
   canSave: boolean;
-  onRestart: (scenario: string) => void;
+  onRestart: (scenario?: string) => void;
+  revise?: ReviseTarget;
+  storageKey: string;
 }) {
   const methods = useForm<WizardValues>({
-    resolver: zodResolver(requirementSchema) as unknown as Resolver<WizardValues>,
+    resolver: withinRange,
     defaultValues: deepMerge(readableDefaults, initial.values),
     mode: "onTouched",
     shouldUnregister: true,
   });
   const { watch, trigger, getValues, formState } = methods;
   const [step, setStep] = useState(Math.min(initial.step, steps.length - 1));
-  const [visited, setVisited] = useState(Math.max(step, 0));
+  const { setValue, clearErrors } = methods;
+  // A saved requirement is complete: every step of a revision is open from the start.
+  const [visited, setVisited] = useState(revise ? steps.length - 1 : Math.max(step, initial.visited ?? 0));
   const [dropMode, setDropMode] = useState(initial.dropMode);
   const [gainMode, setGainMode] = useState(initial.gainMode);
   const [partName, setPartName] = useState(initial.partName);
   const [selected, setSelected] = useState<string | null>(initial.selected);
+  const [chosen, setChosen] = useState(initial.chosen ?? false);
   const [pinned, setPinned] = useState<string[]>(initial.pinned);
   const [name, setName] = useState(initial.name);
   const [project, setProject] = useState(initial.project);
@@ -86,8 +176,11 @@ function WizardForm({
   const stepHeading = useRef<HTMLHeadingElement>(null);
   const resultsHeading = useRef<HTMLHeadingElement>(null);
 
-  // Every edit: re-solve (coalesced in the worker hook) and keep the draft.
-  const { request } = solver;
+  // Every edit: re-solve (coalesced in the worker hook) and keep the draft. A revision keeps the
+  // saved requirement's fields the steps do not show.
+  const { request: solve } = solver;
+  const base = useMemo(() => (revise ? revisionStart(revise.requirement).base : null), [revise]);
+  const request = useCallback((values: unknown) => solve(base ? deepMerge(base, values) : values), [solve, base]);
   useEffect(() => {
     request(getValues());
     const sub = watch((values) => {
@@ -103,19 +196,24 @@ function WizardForm({
 
   const persist = useCallback(
     () =>
-      saveDraft({
-        version: 1,
-        values: getValues(),
-        step,
-        dropMode,
-        gainMode,
-        partName,
-        selected,
-        pinned,
-        name,
-        project,
-      }),
-    [getValues, step, dropMode, gainMode, partName, selected, pinned, name, project],
+      saveDraft(
+        {
+          version: 1,
+          values: getValues(),
+          step,
+          visited,
+          dropMode,
+          gainMode,
+          partName,
+          selected,
+          chosen,
+          pinned,
+          name,
+          project,
+        },
+        storageKey,
+      ),
+    [getValues, step, visited, dropMode, gainMode, partName, selected, chosen, pinned, name, project, storageKey],
   );
   // Keep the draft on every change of the screen's own state and of the form's values.
   useEffect(() => {
@@ -144,10 +242,53 @@ function WizardForm({
     [fieldErrors, touched],
   );
 
-  const go = (to: number) => {
+  const show = useCallback((to: number) => {
     setStep(to);
     setVisited((v) => Math.max(v, to));
     requestAnimationFrame(() => stepHeading.current?.focus());
+  }, []);
+  // Each step is a history entry (#supply, …): the browser's Back and Forward move between steps.
+  const go = (to: number) => {
+    if (to === step || to < 0 || to >= steps.length) return;
+    window.history.pushState(window.history.state, "", `#${steps[to]!.key}`);
+    show(to);
+  };
+  useEffect(() => {
+    const fromHash = () => {
+      const at = steps.findIndex((s) => `#${s.key}` === window.location.hash);
+      return at >= 0 ? at : 0;
+    };
+    if (window.location.hash) {
+      const at = fromHash();
+      // eslint-disable-next-line react-hooks/set-state-in-effect -- the URL exists only after mount
+      if (at <= visited) setStep(at);
+    } else window.history.replaceState(window.history.state, "", `#${steps[step]!.key}`);
+    const onPop = () => show(fromHash());
+    window.addEventListener("popstate", onPop);
+    return () => window.removeEventListener("popstate", onPop);
+    // Once on mount: later steps come from go() and popstate.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, []);
+
+  // A cross-field message goes as soon as its cause is fixed: every field showing an error is
+  // checked again whenever any value changes (supply 3.3 V clears "drop must be below the supply").
+  useEffect(() => {
+    const sub = watch((_, { name }) => {
+      const shown = errorPaths(methods.formState.errors).filter((p) => p !== name);
+      if (shown.length) void trigger(shown as never);
+    });
+    return () => sub.unsubscribe();
+  }, [watch, trigger, methods.formState]);
+
+  // Switching how the allowed drop is given converts the value: 60 mV of 3 V is 2 %.
+  const switchDropMode = (to: "volts" | "share") => {
+    if (to === dropMode) return;
+    const converted = convertDrop(getValues(), to);
+    setDropMode(to);
+    clearErrors(["drop.max", "drop.fraction"] as never);
+    if (converted !== null)
+      // Let the other input mount before filling it.
+      setTimeout(() => setValue(to === "share" ? "drop.fraction" : "drop.max", converted, { shouldDirty: true }), 0);
   };
   const next = async () => {
     const def = steps[step]!;
@@ -164,7 +305,7 @@ function WizardForm({
   const stepBodies = useMemo(
     () => ({
       span: <SpanStep live={live} />,
-      supply: <SupplyStep live={live} dropMode={dropMode} setDropMode={setDropMode} />,
+      supply: <SupplyStep live={live} dropMode={dropMode} setDropMode={switchDropMode} />,
       readout: <ReadoutStep live={live} />,
       shunt: <ShuntStep live={live} />,
       amplifier: (
@@ -178,6 +319,8 @@ function WizardForm({
       ),
       temperature: <TemperatureStep live={live} />,
     }),
+    // switchDropMode reads the form when called; it need not rebuild the steps.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
     [live, dropMode, gainMode, partName],
   );
 
@@ -194,25 +337,27 @@ function WizardForm({
             }}
             className="rounded-panel border border-line bg-panel"
           >
-            <ol className="flex border-b border-line text-2xs" aria-label="Steps">
+            <ol
+              className="grid grid-cols-3 border-b border-line text-2xs sm:grid-cols-6 lg:grid-cols-3"
+              aria-label="Steps"
+            >
               {steps.map((s, i) => (
-                <li key={s.key} className="flex-1">
+                <li key={s.key} className="min-w-0">
                   <button
                     type="button"
                     onClick={() => i <= visited && go(i)}
                     disabled={i > visited}
                     aria-current={i === step ? "step" : undefined}
-                    className={`w-full border-b-2 px-1 py-2 text-center ${
+                    className={`flex w-full items-baseline justify-center gap-1 border-b-2 px-1 py-1.5 text-center leading-tight ${
                       i === step
                         ? "border-copper font-semibold text-ink"
                         : i <= visited
                           ? "border-transparent text-ink-muted hover:text-ink"
                           : "border-transparent text-ink-faint"
                     }`}
-                    title={s.title}
                   >
-                    <span className="num">{i + 1}</span>
-                    <span className="sr-only">. {s.title}</span>
+                    <span className="num text-ink-faint">{i + 1}</span>
+                    <span>{s.title}</span>
                   </button>
                 </li>
               ))}
@@ -249,7 +394,7 @@ function WizardForm({
             </div>
           </form>
           <details className="rounded-panel border border-line bg-panel px-4 py-2 text-xs">
-            <summary className="cursor-pointer text-ink-muted">Start again from an example</summary>
+            <summary className="cursor-pointer text-ink-muted">Start from an example</summary>
             <ul className="mt-2 flex flex-col gap-2">
               {scenarios.map((s) => (
                 <li key={s.key}>
@@ -257,7 +402,11 @@ function WizardForm({
                     type="button"
                     className="text-left text-copper-strong underline-offset-2 hover:underline"
                     onClick={() => {
-                      if (window.confirm(`Replace the current requirement with "${s.title}"?`)) onRestart(s.key);
+                      if (
+                        !getValues("current.max") ||
+                        window.confirm(`Replace the current requirement with "${s.title}"?`)
+                      )
+                        onRestart(s.key);
                     }}
                   >
                     {s.title}
@@ -265,6 +414,20 @@ function WizardForm({
                   <p className="text-2xs text-ink-faint">{s.summary}</p>
                 </li>
               ))}
+              {!revise && (
+                <li>
+                  <button
+                    type="button"
+                    className="text-left text-copper-strong underline-offset-2 hover:underline"
+                    onClick={() => {
+                      if (window.confirm("Clear every step back to the defaults?")) onRestart();
+                    }}
+                  >
+                    Clear to the defaults
+                  </button>
+                  <p className="text-2xs text-ink-faint">Blank span and supply; every other value as documented.</p>
+                </li>
+              )}
             </ul>
           </details>
         </div>
@@ -273,6 +436,8 @@ function WizardForm({
           headingRef={resultsHeading}
           selected={selected}
           setSelected={setSelected}
+          chosen={chosen}
+          setChosen={setChosen}
           pinned={pinned}
           setPinned={setPinned}
           canSave={canSave}
@@ -280,7 +445,8 @@ function WizardForm({
           setName={setName}
           project={project}
           setProject={setProject}
-          onSaved={clearDraft}
+          onSaved={() => clearDraft(storageKey)}
+          revise={revise ? { id: revise.id, revision: revise.revision } : undefined}
         />
       </div>
     </FormProvider>

@@ -5,20 +5,27 @@ export type Draft = {
   version: 1;
   values: Partial<WizardValues>;
   step: number;
+  /** The furthest step open to the tabs (an example or a saved design opens them all). */
+  visited?: number;
   dropMode: "volts" | "share";
   gainMode: "list" | "pair";
   partName: string | null;
   selected: string | null;
+  /** The designer picked `selected` themselves; otherwise the selection follows the ranking. */
+  chosen?: boolean;
   pinned: string[];
   name: string;
   project: string;
 };
 
-const KEY = "sensewright.wizard.draft";
+const NEW_KEY = "sensewright.wizard.draft";
+/** New designs share one draft; a revision in progress has its own, per design and revision. */
+export const draftKey = (revising?: { id: string; revision: number }) =>
+  revising ? `sensewright.wizard.revise.${revising.id}.${revising.revision}` : NEW_KEY;
 
-export function loadDraft(): Draft | null {
+export function loadDraft(key = NEW_KEY): Draft | null {
   try {
-    const raw = window.localStorage.getItem(KEY);
+    const raw = window.localStorage.getItem(key);
     if (!raw) return null;
     const d = JSON.parse(raw) as Draft;
     return d && d.version === 1 && typeof d.values === "object" ? d : null;
@@ -27,17 +34,17 @@ export function loadDraft(): Draft | null {
   }
 }
 
-export function saveDraft(d: Draft) {
+export function saveDraft(d: Draft, key = NEW_KEY) {
   try {
-    window.localStorage.setItem(KEY, JSON.stringify(d));
+    window.localStorage.setItem(key, JSON.stringify(d));
   } catch {
     /* storage full or disabled: the form still works, only the reload safety is lost */
   }
 }
 
-export function clearDraft() {
+export function clearDraft(key = NEW_KEY) {
   try {
-    window.localStorage.removeItem(KEY);
+    window.localStorage.removeItem(key);
   } catch {
     /* nothing to clear */
   }

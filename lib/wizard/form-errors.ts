@@ -1,5 +1,6 @@
 // Reading react-hook-form's nested error tree by the engine's dotted paths.
 import type { FieldErrors as RhfErrors, FieldValues } from "react-hook-form";
+import { requirementFields } from "@/lib/saved-designs/figures";
 
 type Node = { message?: unknown; [k: string]: unknown } | undefined;
 
@@ -29,6 +30,50 @@ export function errorText(errors: RhfErrors<FieldValues>, path: string): string 
 export function engineErrorsFor(fieldErrors: Record<string, string[]>, path: string): string | undefined {
   const msgs = Object.entries(fieldErrors)
     .filter(([k]) => k === path || k.startsWith(`${path}.`))
-    .flatMap(([, v]) => v);
+    .flatMap(([k, v]) => v.map((m) => inWords(k, m)));
   return msgs.length ? [...new Set(msgs)].join("; ") : undefined;
+}
+
+/** The dotted paths of every field that holds a message now (list items as their list). */
+export function errorPaths(errors: RhfErrors<FieldValues>): string[] {
+  const out: string[] = [];
+  const walk = (node: unknown, path: string) => {
+    if (!node || typeof node !== "object") return;
+    const n = node as Record<string, unknown>;
+    if (typeof n.message === "string" && n.message) {
+      out.push(path);
+      return;
+    }
+    for (const [k, v] of Object.entries(n)) {
+      if (k === "ref" || k === "type" || k === "types") continue;
+      if (/^\d+$/.test(k)) {
+        if (!out.includes(path)) out.push(path);
+        continue;
+      }
+      walk(v, path ? `${path}.${k}` : k);
+    }
+  };
+  walk(errors, "");
+  return out;
+}
+
+const zodDefault = /^Invalid input: expected (\w+), received (\w+)$/;
+
+/** A schema's stock message ("Invalid input: expected number, received string") in the field's words. */
+export function inWords(path: string, message: string, typed?: unknown): string {
+  const m = zodDefault.exec(message);
+  if (!m) return message;
+  const listPath = path.replace(/\.\d+$/, "");
+  const label = requirementFields[listPath]?.label ?? requirementFields[path]?.label ?? "This field";
+  const shown = typed === undefined || typed === null || typed === "" ? "" : `“${String(typed)}” `;
+  if (m[1] === "number")
+    return `${label}: ${shown}is not a number${listPath !== path ? "; give numbers separated by commas" : ""}`;
+  return `${label}: ${shown}is not ${m[1] === "string" ? "text" : `a ${m[1]}`}`;
+}
+
+/** The value at a dotted path of the form's values (for quoting what was typed). */
+export function valueAt(values: unknown, path: string): unknown {
+  let node = values;
+  for (const k of path.split(".")) node = (node as Record<string, unknown> | undefined)?.[k];
+  return node;
 }

@@ -81,5 +81,11 @@ export const readableDefaults: WizardValues = {
 export function valuesFrom(input: RequirementInput): WizardValues {
   const i = JSON.parse(JSON.stringify(input)) as Record<string, Record<string, unknown>>;
   if (i.accuracy?.percent !== undefined) i.accuracy.percent = String(i.accuracy.percent);
+  // Temperatures read as the trade writes them: "0 °C", never "0 degC".
+  for (const k of ["min", "max"] as const) {
+    const t = i.temperature?.[k];
+    if (typeof t === "string") i.temperature![k] = t.replace(/\s*deg\s*C$/i, " °C");
+    else if (typeof t === "number") i.temperature![k] = `${t} °C`;
+  }
   return deepMerge(readableDefaults, i);
 }

@@ -15,7 +15,7 @@ export const loggerOneRange: RequirementInput = {
   readout: { kind: "adc", bits: 24, fullScale: "2.5 V" },
   resolution: { countsAtMin: 10 },
   accuracy: { percent: 2 },
-  temperature: { min: "0 degC", max: "70 degC" },
+  temperature: { min: "0 °C", max: "70 °C" },
   amplifier: { swingLow: "0 V" },
 };
 

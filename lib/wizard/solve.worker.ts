@@ -1,6 +1,7 @@
 // The solver off the main thread: parse the raw form values with the engine's schema, sweep,
 // and post the result back. Only the latest request matters; the page drops stale replies.
 import { parseRequirement, solve } from "@/lib/design";
+import { outOfRange } from "./ranges";
 import type { SolveReply, SolveRequest } from "./solver-protocol";
 
 const post = (reply: SolveReply) => (self as unknown as { postMessage(m: SolveReply): void }).postMessage(reply);
@@ -11,6 +12,11 @@ self.addEventListener("message", (event: MessageEvent<SolveRequest>) => {
     const parsed = parseRequirement(input);
     if (!parsed.ok) {
       post({ id, ok: false, fieldErrors: parsed.fieldErrors, message: parsed.message });
+      return;
+    }
+    const far = outOfRange(parsed.requirement);
+    if (Object.keys(far).length > 0) {
+      post({ id, ok: false, fieldErrors: far, message: Object.values(far)[0]![0]! });
       return;
     }
     const t0 = performance.now();

@@ -61,13 +61,17 @@ export default async function ComparePage({
       <div>
         <h1 className="text-lg font-semibold">Compare {designs.length} designs</h1>
         <p className="text-ink-muted">
-          Each design is evaluated at its own requirement. In each figure row the best value is marked; rows whose
-          values differ are in full ink.
+          Each design is evaluated at its own requirement. A figure row marks the best value only where every design
+          takes that figure at the same points (the same span, supply and readout it rests on); otherwise each value is
+          shown against its own design&apos;s limit. Rows whose values differ are in full ink.
           {missing > 0 &&
             ` ${missing} of the designs asked for ${missing === 1 ? "was" : "were"} not found and ${missing === 1 ? "is" : "are"} left out.`}
         </p>
       </div>
-      <div className="grid grid-cols-1 gap-4 overflow-x-auto rounded-panel border border-line bg-panel p-4 xl:grid-cols-2">
+      <div
+        className="grid grid-cols-1 gap-4 overflow-x-auto rounded-panel border border-line bg-panel p-4 xl:grid-cols-2"
+        data-testid="compare-charts"
+      >
         <CurveChart
           title="Worst-case error against current"
           series={errorSeries}

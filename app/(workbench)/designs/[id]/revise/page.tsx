@@ -1,0 +1,52 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { Wizard } from "@/components/wizard/wizard";
+import { getDesignView, isUuid } from "@/db/queries/designs";
+import { requirePageCaller } from "@/lib/auth/gate";
+
+export const metadata: Metadata = { title: "Revise design" };
+
+/** The wizard on a saved design's requirement and pair; saving makes its next revision. */
+export default async function ReviseDesignPage({ params }: { params: Promise<{ id: string }> }) {
+  const { id } = await params;
+  const caller = await requirePageCaller(`/designs/${id}/revise`);
+  if (!isUuid(id)) notFound();
+  const design = await getDesignView(id, caller.teamId);
+  if (!design || (caller.role === "maker" && design.status !== "approved")) notFound();
+  const canSave = caller.role === "owner" || caller.role === "designer";
+  return (
+    <div className="flex flex-col gap-4">
+      <div>
+        <p className="text-xs text-ink-muted">
+          <Link href="/designs" className="hover:text-ink">
+            Designs
+          </Link>{" "}
+          /{" "}
+          <Link href={`/designs/${design.id}`} className="hover:text-ink">
+            {design.name}
+          </Link>
+        </p>
+        <h1 className="text-lg font-semibold break-words">
+          Revise <span data-testid="design-name">{design.name}</span>
+        </h1>
+        <p className="max-w-3xl text-ink-muted">
+          The wizard starts from revision {design.revision}&apos;s requirement with its saved pair picked. Change what
+          the review asked for; saving makes revision {design.revision + 1} as a draft, to submit again. If someone else
+          saves first, nothing of yours is written and the page says so.
+        </p>
+      </div>
+      <Wizard
+        canSave={canSave}
+        revise={{
+          id: design.id,
+          revision: design.revision,
+          name: design.name,
+          project: design.project,
+          requirement: design.requirement,
+          choice: design.choice,
+        }}
+      />
+    </div>
+  );
+}

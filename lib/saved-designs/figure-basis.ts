@@ -1,0 +1,69 @@
+// Whether a figure means the same thing across compared designs. A figure is taken at points set
+// by the requirement (the burden at the maximum current, the error at the minimum current); two
+// designs made for different spans or supplies put the same label on different things, so "best"
+// is marked only when the requirement fields a figure rests on agree. Otherwise each value is
+// shown against its own design's limit.
+import { formatPercent, formatSI, type Requirement } from "@/lib/design";
+import { flatten } from "./figures";
+
+/** The requirement paths each figure is taken at (load model: the current itself depends on it). */
+export const figureBasis: Record<string, string[]> = {
+  burdenV: ["current.max", "supply.voltage", "load.model"],
+  loadVoltageV: ["current.max", "supply.voltage", "load.model"],
+  dissipationW: ["current.max", "supply.voltage", "load.model"],
+  ratingW: ["current.max", "supply.voltage", "load.model", "shunt.derating"],
+  selfHeatingK: ["current.max", "supply.voltage", "load.model"],
+  headroomV: ["current.max", "supply.voltage", "load.model", "amplifier.supply", "amplifier.swingHigh"],
+  lsbA: ["readout.kind", "readout.bits", "readout.counts", "readout.fullScale"],
+  countsAtMin: ["current.min", "readout.kind", "readout.bits", "readout.counts", "readout.fullScale"],
+  deadZoneA: ["amplifier.swingLow"],
+  offsetErrorA: ["temperature.min", "temperature.max", "supply.voltage", "supply.side"],
+  noiseA: [],
+  bandwidthHz: [],
+  errorAtMinPercent: ["current.min", "temperature.min", "temperature.max", "supply.voltage", "supply.side"],
+  rssAtMinPercent: ["current.min", "temperature.min", "temperature.max", "supply.voltage", "supply.side"],
+  errorAtTypicalPercent: ["current.typical", "temperature.min", "temperature.max", "supply.voltage", "supply.side"],
+  errorAtMaxPercent: ["current.max", "temperature.min", "temperature.max", "supply.voltage", "supply.side"],
+  accuracyBandPercent: ["accuracy.bandMin", "accuracy.bandMax", "temperature.min", "temperature.max"],
+  lowestAccurateCurrentA: ["accuracy.percent", "temperature.min", "temperature.max", "supply.voltage", "supply.side"],
+};
+
+/** The requirement fields, among a figure's basis, on which the designs differ (empty: comparable). */
+export function basisDiffers(figure: string, requirements: Requirement[]): string[] {
+  const basis = figureBasis[figure] ?? [];
+  const flat = requirements.map((r) => flatten(r));
+  return basis.filter((path) => new Set(flat.map((f) => JSON.stringify(f[path] ?? null))).size > 1);
+}
+
+const share = (x: number, limit: number) => (limit > 0 ? ` (${Math.round((100 * x) / limit)} %)` : "");
+
+/** A figure against its own design's limit, in words; null when the requirement sets no limit for it. */
+export function againstOwnLimit(figure: string, value: unknown, req: Requirement): string | null {
+  if (typeof value !== "number" || !Number.isFinite(value)) return null;
+  switch (figure) {
+    case "burdenV":
+      return `of ${formatSI(req.drop.max, "V")} allowed${share(value, req.drop.max)}`;
+    case "loadVoltageV":
+      return req.drop.loadMin !== undefined
+        ? `${formatSI(req.drop.loadMin, "V")} needed, from ${formatSI(req.supply.voltage, "V")}`
+        : `from a ${formatSI(req.supply.voltage, "V")} supply`;
+    case "outputAtMaxV":
+      return `of ${formatSI(req.readout.fullScale, "V")} full scale${share(value, req.readout.fullScale)}`;
+    case "countsAtMin":
+      return `${req.resolution.countsAtMin} wanted at ${formatSI(req.current.min, "A")}`;
+    case "lsbA":
+      return `${formatSI(req.current.min / req.resolution.countsAtMin, "A")} needed`;
+    case "errorAtMinPercent":
+    case "rssAtMinPercent":
+    case "errorAtTypicalPercent":
+    case "errorAtMaxPercent":
+    case "accuracyBandPercent":
+      return `target ${formatPercent(req.accuracy.percent / 100)}`;
+    case "lowestAccurateCurrentA":
+      return `span from ${formatSI(req.current.min, "A")}`;
+    case "dissipationW":
+      return `at ${formatSI(req.current.max, "A")}`;
+    default:
+      return null;
+  }
+}

@@ -1,0 +1,101 @@
+// A saved (normalized, SI) requirement back into the wizard's typed form, for revising a design.
+// Values are written with 12 significant figures so the round trip through the parser is exact and
+// an untouched field never shows up as a change in the next revision.
+import { formatSI, type Requirement } from "@/lib/design";
+import { readableDefaults, type WizardValues } from "./form-values";
+
+const exact = (x: number, unit: string) => formatSI(x, unit, 12);
+const plain = (x: number) => String(Number(x.toPrecision(12)));
+const percent = (ratio: number) => `${plain(ratio * 100)} %`;
+const ppm = (perK: number) => `${plain(perK * 1e6)} ppm/K`;
+
+export type RevisionStart = {
+  values: WizardValues;
+  dropMode: "volts" | "share";
+  gainMode: "list" | "pair";
+  /** Fields the wizard does not show, kept as saved so a revision does not silently reset them. */
+  base: Record<string, unknown>;
+};
+
+/** Paths the wizard's steps own; everything else in a saved requirement is carried over as it is. */
+function withoutShown(req: Requirement): Record<string, unknown> {
+  const copy = JSON.parse(JSON.stringify(req)) as Record<string, Record<string, unknown> | unknown>;
+  const drop = (group: string, keys: string[]) => {
+    const g = copy[group];
+    if (g && typeof g === "object") for (const k of keys) delete (g as Record<string, unknown>)[k];
+  };
+  for (const [group, shown] of Object.entries(readableDefaults)) {
+    if (shown && typeof shown === "object" && !Array.isArray(shown)) drop(group, Object.keys(shown));
+    else delete copy[group];
+  }
+  drop("current", ["typical"]);
+  drop("drop", ["fraction", "loadMin"]);
+  drop("accuracy", ["bandMin", "bandMax"]);
+  drop("readout", ["bits", "counts"]);
+  drop("amplifier", ["gainSet"]);
+  return copy;
+}
+
+export function revisionStart(req: Requirement): RevisionStart {
+  const a = req.amplifier;
+  const share = req.drop.fraction !== undefined;
+  const values: WizardValues = {
+    current: {
+      min: exact(req.current.min, "A"),
+      max: exact(req.current.max, "A"),
+      ...(req.current.typical !== undefined ? { typical: exact(req.current.typical, "A") } : {}),
+    },
+    supply: { voltage: exact(req.supply.voltage, "V"), side: req.supply.side },
+    drop: {
+      ...(share ? { fraction: percent(req.drop.fraction!) } : { max: exact(req.drop.max, "V") }),
+      ...(req.drop.loadMin !== undefined ? { loadMin: exact(req.drop.loadMin, "V") } : {}),
+    },
+    load: { model: req.load.model },
+    readout:
+      req.readout.kind === "adc"
+        ? { kind: "adc", bits: req.readout.bits, fullScale: exact(req.readout.fullScale, "V") }
+        : { kind: "meter", counts: req.readout.counts, fullScale: exact(req.readout.fullScale, "V") },
+    resolution: { countsAtMin: req.resolution.countsAtMin },
+    accuracy: {
+      percent: plain(req.accuracy.percent),
+      // A band left at its default follows the span; only a band the designer set is written out.
+      ...(Math.abs(req.accuracy.bandMin - Math.max(req.current.min, 0.1 * req.current.max)) > 1e-12 * req.current.max
+        ? { bandMin: exact(req.accuracy.bandMin, "A") }
+        : {}),
+      ...(Math.abs(req.accuracy.bandMax - req.current.max) > 1e-12 * req.current.max
+        ? { bandMax: exact(req.accuracy.bandMax, "A") }
+        : {}),
+    },
+    temperature: { min: `${plain(req.temperature.min)} °C`, max: `${plain(req.temperature.max)} °C` },
+    shunt: {
+      series: req.shunt.series,
+      min: exact(req.shunt.min, "Ω"),
+      max: exact(req.shunt.max, "Ω"),
+      tolerance: percent(req.shunt.tolerance),
+      tempco: ppm(req.shunt.tempco),
+      ratings: req.shunt.ratings.map((w) => exact(w, "W")),
+      derating: req.shunt.derating,
+    },
+    amplifier: {
+      ...(a.gainSet ? { gainSet: { ...a.gainSet } } : { gains: [...a.gains] }),
+      offset: exact(a.offset, "V"),
+      offsetDrift: exact(a.offsetDrift, "V/K"),
+      gainError: percent(a.gainError),
+      gainDrift: ppm(a.gainDrift),
+      biasCurrent: exact(a.biasCurrent, "A"),
+      noiseDensity: exact(a.noiseDensity, "V/rtHz"),
+      gbw: exact(a.gbw, "Hz"),
+      supply: exact(a.supply, "V"),
+      swingLow: exact(a.swingLow, "V"),
+      swingHigh: exact(a.swingHigh, "V"),
+      cmrrDb: a.cmrrDb,
+    },
+    limit: req.limit,
+  };
+  return {
+    values,
+    dropMode: share ? "share" : "volts",
+    gainMode: a.gainSet ? "pair" : "list",
+    base: withoutShown(req),
+  };
+}
