@@ -13,7 +13,7 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import { SortableHead } from "@/components/candidates/sortable-head";
-import { formatSI } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Button } from "@/components/ui/button";
 

@@ -2,7 +2,9 @@
 // The live results beside the form: the trade-off, the refusals, the table, the selected
 // candidate in depth, the range plan when one range cannot do, and saving.
 import { memo, useEffect, useMemo, type RefObject } from "react";
-import { formatSI, type Candidate, type SolveResult } from "@/lib/design";
+import type { SolveResult } from "@/lib/design/solve";
+import type { Candidate } from "@/lib/design/types";
+import { formatSI } from "@/lib/design/format";
 import { RangePlanChart } from "@/components/charts/range-plan-chart";
 import { TradeOffChart } from "@/components/charts/trade-off-chart";
 import { CandidateStudy } from "@/components/candidates/candidate-study";

@@ -2,7 +2,9 @@
 // Name the design and save the chosen pair: POST /api/designs, then its own page.
 import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
-import { formatSI, type Candidate, type Requirement } from "@/lib/design";
+import type { Requirement } from "@/lib/design/requirement";
+import type { Candidate } from "@/lib/design/types";
+import { formatSI } from "@/lib/design/format";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
 

@@ -5,8 +5,9 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useForm, type Resolver } from "react-hook-form";
-import { requirementSchema } from "@/lib/design";
-import { clearDraft, deepMerge, loadDraft, saveDraft, type Draft } from "@/lib/wizard/draft";
+import { requirementSchema } from "@/lib/design/requirement";
+import { deepMerge } from "@/lib/wizard/deep-merge";
+import { clearDraft, loadDraft, saveDraft, type Draft } from "@/lib/wizard/draft";
 import { engineErrorsFor } from "@/lib/wizard/form-errors";
 import { readableDefaults, valuesFrom, type WizardValues } from "@/lib/wizard/form-values";
 import { scenarios } from "@/lib/wizard/scenarios";

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { formatPercent, formatSI, parseQuantity, roundSig } from "./units";
+import { formatPercent, formatSI } from "./format";
+import { parseQuantity, roundSig } from "./units";
 
 const value = (input: number | string, dim: Parameters<typeof parseQuantity>[1]) => {
   const r = parseQuantity(input, dim);

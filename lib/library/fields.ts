@@ -1,6 +1,6 @@
 // How each library field is shown and typed on the screen: the label in the trade's words, the
 // SI value formatted with a prefix for the table and the form, and how the form's text goes to the API.
-import { formatSI } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
 import type { PartKind } from "./schema";
 
 export type FieldKind = "text" | "quantity" | "numberList" | "quantityList" | "select" | "checkbox" | "number";
