@@ -103,11 +103,9 @@ export type AmplifierValues = z.output<typeof amplifierInput>;
 
 export const shuntObject = z.object({
   name: partName,
-  series: z
-    .string({ error: "Series: expected a series name such as E96" })
-    .refine(isSeriesName, {
-      error: (iss) => `Series: unknown series "${String(iss.input)}"; use one of ${seriesNames.join(", ")}`,
-    }),
+  series: z.string({ error: "Series: expected a series name such as E96" }).refine(isSeriesName, {
+    error: (iss) => `Series: unknown series "${String(iss.input)}"; use one of ${seriesNames.join(", ")}`,
+  }),
   minOhms: positive("resistance", "Smallest value"),
   maxOhms: positive("resistance", "Largest value"),
   toleranceFraction: fractionBelowHalf("Tolerance"),
