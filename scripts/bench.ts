@@ -5,7 +5,7 @@ import path from "node:path";
 
 type Section = { run: () => Promise<Record<string, number>> };
 
-const order = ["engine", "pdf", "profile", "wizard", "server"];
+const order = ["engine", "pdf", "profile", "wizard", "server", "pages"];
 const dir = path.join(process.cwd(), "scripts", "bench");
 const only = process.argv.slice(2);
 

@@ -2,16 +2,11 @@
 // One candidate examined across the span: error against current (with pinned comparisons),
 // what it does to the load, every figure, the error budget and the cautions.
 import { useMemo, useState } from "react";
-import {
-  errorAt,
-  errorCurve,
-  evaluateCandidate,
-  formatSI,
-  loadCurve,
-  type CandidateDetail,
-  type Choice,
-  type Requirement,
-} from "@/lib/design";
+import { evaluateCandidate } from "@/lib/design/candidate";
+import { errorAt, errorCurve, loadCurve } from "@/lib/design/error-budget";
+import type { Requirement } from "@/lib/design/requirement";
+import type { CandidateDetail, Choice } from "@/lib/design/types";
+import { formatSI } from "@/lib/design/format";
 import { BudgetBar } from "@/components/charts/budget-bar";
 import { ErrorCurveChart, type ErrorSeries } from "@/components/charts/error-curve-chart";
 import { LoadChart } from "@/components/charts/load-chart";

@@ -13,7 +13,10 @@ import {
 } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
 import { SortableHead } from "@/components/candidates/sortable-head";
-import { formatPercent, formatSI, isInSeries, rejectReasonLabels, type Candidate, type SeriesName } from "@/lib/design";
+import { isInSeries, type SeriesName } from "@/lib/design/eseries";
+import { rejectReasonLabels } from "@/lib/design/pair";
+import type { Candidate } from "@/lib/design/types";
+import { formatPercent, formatSI } from "@/lib/design/format";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { candidateKey } from "@/lib/wizard/candidate-key";

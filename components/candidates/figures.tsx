@@ -1,5 +1,8 @@
 // Every figure of one candidate, grouped, in SI with prefixes.
-import { formatPercent, formatSI, rejectReasonLabels, type CandidateDetail, type Requirement } from "@/lib/design";
+import { rejectReasonLabels } from "@/lib/design/pair";
+import type { Requirement } from "@/lib/design/requirement";
+import type { CandidateDetail } from "@/lib/design/types";
+import { formatPercent, formatSI } from "@/lib/design/format";
 
 type Row = [label: string, value: string, note?: string];
 

@@ -1,5 +1,5 @@
 // Why pairs were refused: counts by first failing constraint, in plain words.
-import { rejectReasonLabels, rejectReasons, type RejectReason } from "@/lib/design";
+import { rejectReasonLabels, rejectReasons, type RejectReason } from "@/lib/design/pair";
 
 export function Rejections({
   rejected,

@@ -1,5 +1,5 @@
 // Tick values and labels for log axes: decades (and 2, 5 within them when the span is short).
-import { formatPercent, formatSI } from "@/lib/design";
+import { formatPercent, formatSI } from "@/lib/design/format";
 
 export function logTicks(lo: number, hi: number, max = 7): number[] {
   if (!(lo > 0 && hi > lo)) return [lo];

@@ -1,5 +1,6 @@
 // The error budget at one current as a single bar split by source, with the figures beside it.
-import { formatPercent, formatSI, type BudgetTerm } from "@/lib/design";
+import type { BudgetTerm } from "@/lib/design/error-budget";
+import { formatPercent, formatSI } from "@/lib/design/format";
 import { budgetBackground } from "./palette";
 
 export function BudgetBar({ terms, currentA, label }: { terms: BudgetTerm[]; currentA: number; label: string }) {

@@ -3,7 +3,8 @@
 // candidate and pinned ones, with the accuracy target drawn over its band.
 import { Axis, Grid, LineSeries, XYChart } from "@visx/xychart";
 import { useId, useMemo } from "react";
-import { formatPercent, formatSI, type ErrorCurvePoint } from "@/lib/design";
+import type { ErrorCurvePoint } from "@/lib/design/error-budget";
+import { formatPercent, formatSI } from "@/lib/design/format";
 import { ChartTooltip } from "./chart-tooltip";
 import { SeriesTip } from "./series-tip";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, percentTick, siTick } from "./axes";

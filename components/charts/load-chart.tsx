@@ -3,7 +3,8 @@
 // the load (log current, linear volts) with the load's minimum.
 import { Axis, Grid, LineSeries, Tooltip, XYChart } from "@visx/xychart";
 import { useMemo } from "react";
-import { formatSI, type LoadCurvePoint } from "@/lib/design";
+import type { LoadCurvePoint } from "@/lib/design/error-budget";
+import { formatSI } from "@/lib/design/format";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, siTick } from "./axes";
 import { chartTheme, usePalette } from "./palette";
 import { useWidth } from "./use-width";

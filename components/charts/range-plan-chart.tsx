@@ -1,7 +1,8 @@
 "use client";
 // A multi-range plan drawn on the current axis: each range a bar from its bottom to its top
 // current, overlaps visible, the required span marked.
-import { formatSI, type RangePlan } from "@/lib/design";
+import type { RangePlan } from "@/lib/design/range-plan";
+import { formatSI } from "@/lib/design/format";
 import { logTicks } from "./axes";
 import { usePalette } from "./palette";
 import { useWidth } from "./use-width";

@@ -3,7 +3,8 @@
 // the Pareto front as a line, gains told apart by shape and shade; click a point to select it.
 import { Axis, GlyphSeries, Grid, LineSeries, XYChart } from "@visx/xychart";
 import { useMemo } from "react";
-import { formatPercent, formatSI, type Candidate } from "@/lib/design";
+import type { Candidate } from "@/lib/design/types";
+import { formatPercent, formatSI } from "@/lib/design/format";
 import { candidateKey } from "@/lib/wizard/candidate-key";
 import { gainGroups } from "@/lib/wizard/gain-groups";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, percentTick, siTick } from "./axes";

@@ -2,7 +2,7 @@
 // Overlaid curves of the compared designs: worst-case error and burden against current, log–log.
 // The series are computed by the engine on the server; this only draws them.
 import { Axis, Grid, LineSeries, XYChart, buildChartTheme } from "@visx/xychart";
-import { formatPercent, formatSI } from "@/lib/design";
+import { formatPercent, formatSI } from "@/lib/design/format";
 import { useWidth } from "@/components/charts/use-width";
 import { seriesColours } from "./colours";
 

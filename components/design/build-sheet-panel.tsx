@@ -1,7 +1,7 @@
 import type { DesignView, DesignViewer } from "@/lib/design-view";
 import { benchHowTo, benchRows, cautions } from "@/lib/build-sheet/sheet-data";
 import { partsList } from "@/lib/build-sheet/parts";
-import { evaluateCandidate } from "@/lib/design";
+import { evaluateCandidate } from "@/lib/design/candidate";
 import { Badge } from "@/components/ui/badge";
 import { buttonClass } from "@/components/ui/button";
 

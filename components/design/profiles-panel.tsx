@@ -7,7 +7,7 @@ import { ProfileSummaryView } from "@/components/profile/profile-summary";
 import { UploadForm } from "@/components/profile/upload-form";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
-import { formatSI } from "@/lib/design/units";
+import { formatSI } from "@/lib/design/format";
 import type { DesignView, DesignViewer } from "@/lib/design-view";
 import type { DecimatedSeries } from "@/lib/profile/decimate";
 import type { ProfileSummary } from "@/lib/design/profile";

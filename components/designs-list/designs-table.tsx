@@ -9,7 +9,7 @@ import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useCallback, useEffect, useMemo, useState } from "react";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Button } from "@/components/ui/button";
-import { formatSI } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
 import {
   designStatuses,
   listSearch,

@@ -4,15 +4,9 @@
 import { useQueries } from "@tanstack/react-query";
 import { Axis, Grid, LineSeries, Tooltip, XYChart } from "@visx/xychart";
 import { useEffect, useMemo, useState } from "react";
-import {
-  formatPercent,
-  formatSI,
-  insertionCurve,
-  insertionSchema,
-  loadModels,
-  type InsertionResult,
-  type LoadModel,
-} from "@/lib/design";
+import { insertionCurve, insertionSchema, type InsertionResult } from "@/lib/design/insertion";
+import { loadModels, type LoadModel } from "@/lib/design/requirement";
+import { formatPercent, formatSI } from "@/lib/design/format";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, siTick } from "@/components/charts/axes";
 import { SeriesTip } from "@/components/charts/series-tip";
 import { chartTheme, usePalette } from "@/components/charts/palette";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useRef, useState } from "react";
-import { formatSI } from "@/lib/design/units";
+import { formatSI } from "@/lib/design/format";
 import { burdenV, loadVoltageV } from "@/lib/design/profile";
 import type { DecimatedSeries } from "@/lib/profile/decimate";
 import { linearTicks, logTicks } from "@/lib/profile/ticks";

@@ -2,7 +2,7 @@
 
 import { useState } from "react";
 import { Field, TextInput } from "@/components/ui/field";
-import { formatSI } from "@/lib/design/units";
+import { formatSI } from "@/lib/design/format";
 import { batteryLifeS, type ProfileSummary } from "@/lib/design/profile";
 import { formatDuration, parseCapacityC } from "@/lib/profile/ticks";
 

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { Badge } from "@/components/ui/badge";
 import type { RevisionRecord } from "@/db/queries/designs";
-import { formatSI } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
 import { diffRevisions } from "@/lib/saved-designs/diff";
 import { formatWhen } from "@/lib/saved-designs/when";
 

@@ -2,14 +2,11 @@
 // The live results beside the form: the trade-off, the refusals, the table, the selected
 // candidate in depth, the range plan when one range cannot do, and saving.
 import { memo, useCallback, useEffect, useMemo, type RefObject } from "react";
-import {
-  evaluateCandidate,
-  formatSI,
-  isInSweep,
-  rejectReasonLabels,
-  type Candidate,
-  type SolveResult,
-} from "@/lib/design";
+import { evaluateCandidate, isInSweep } from "@/lib/design/candidate";
+import { rejectReasonLabels } from "@/lib/design/pair";
+import type { SolveResult } from "@/lib/design/solve";
+import type { Candidate } from "@/lib/design/types";
+import { formatSI } from "@/lib/design/format";
 import { RangePlanChart } from "@/components/charts/range-plan-chart";
 import { TradeOffChart } from "@/components/charts/trade-off-chart";
 import { CandidateStudy } from "@/components/candidates/candidate-study";

@@ -1,5 +1,6 @@
 // A saved requirement in words and SI figures, for the design page.
-import { formatPercent, formatSI, type Requirement } from "@/lib/design";
+import type { Requirement } from "@/lib/design/requirement";
+import { formatPercent, formatSI } from "@/lib/design/format";
 
 const loadWords = {
   "constant-current": "constant current",

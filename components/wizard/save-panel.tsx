@@ -6,7 +6,9 @@ import { useMutation } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useRef } from "react";
-import { formatSI, type Candidate, type Requirement } from "@/lib/design";
+import type { Requirement } from "@/lib/design/requirement";
+import type { Candidate } from "@/lib/design/types";
+import { formatSI } from "@/lib/design/format";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
 

@@ -2,7 +2,7 @@
 // The wizard's steps: what each asks for, and which fields it checks before moving on.
 import { useState } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
-import { seriesNames } from "@/lib/design";
+import { seriesNames } from "@/lib/design/eseries";
 import type { WizardValues } from "@/lib/wizard/form-values";
 import { LibraryPicker, useLibrary } from "./library-picker";
 import {

@@ -5,9 +5,11 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useForm, type Resolver } from "react-hook-form";
-import { requirementSchema, type Choice, type Requirement } from "@/lib/design";
+import { requirementSchema, type Requirement } from "@/lib/design/requirement";
+import type { Choice } from "@/lib/design/types";
 import { candidateKey } from "@/lib/wizard/candidate-key";
-import { clearDraft, deepMerge, draftKey, loadDraft, saveDraft, type Draft } from "@/lib/wizard/draft";
+import { deepMerge } from "@/lib/wizard/deep-merge";
+import { clearDraft, draftKey, loadDraft, saveDraft, type Draft } from "@/lib/wizard/draft";
 import { errorPaths, inWords, valueAt } from "@/lib/wizard/form-errors";
 import { revisionStart } from "@/lib/wizard/from-requirement";
 import { outOfRange, outOfRangeTyped } from "@/lib/wizard/ranges";

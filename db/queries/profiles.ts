@@ -1,7 +1,8 @@
 // Stored current profiles of a design: samples as little-endian Float64 bytea, written in one
 // transaction with the audit event. Callers scope the design by team first (lib/saved-designs/access).
 import { and, desc, eq } from "drizzle-orm";
-import { bytesToFloat64, float64ToBytes, type ProfileSummary } from "@/lib/profile";
+import type { ProfileSummary } from "@/lib/profile";
+import { bytesToFloat64, float64ToBytes } from "../float64-bytes";
 import { getDb } from "../client";
 import { profiles, users } from "../schema";
 import { recordAudit } from "./audit";

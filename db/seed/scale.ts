@@ -6,7 +6,8 @@ import bcrypt from "bcryptjs";
 import { eq } from "drizzle-orm";
 import { demoDesigns, demoChoice } from "./designs";
 import { evaluateDesign, type EvaluatedDesign } from "@/lib/saved-designs/service";
-import { float64ToBytes, profileDesignOf, summarizeProfile } from "@/lib/profile";
+import { profileDesignOf, summarizeProfile } from "@/lib/profile";
+import { float64ToBytes } from "../float64-bytes";
 import { getDb, type Tx } from "../client";
 import {
   designRevisions,

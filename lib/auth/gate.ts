@@ -4,7 +4,8 @@
 import "server-only";
 import { getServerSession } from "next-auth";
 import { headers } from "next/headers";
-import { redirect } from "next/navigation";
+import { notFound, redirect } from "next/navigation";
+import { cache } from "react";
 import type { z } from "zod";
 import { getMember } from "@/db/queries/users";
 import type { Role } from "@/db/schema";
@@ -208,12 +209,19 @@ export function toErrorResponse(e: unknown): Response {
   return json({ message: "Something went wrong on the server; nothing was changed. The error has been logged." }, 500);
 }
 
-/** For signed-in pages: redirects to /sign-in when signed out. */
-export async function requirePageCaller(next?: string): Promise<Caller> {
-  const caller = await currentCaller();
+const pageCaller = cache(currentCaller);
+
+/**
+ * For signed-in pages: redirects to /sign-in when signed out, answers the not-found page to a
+ * role outside `roles`. Wrapped in React's cache(), with the session read cached on its own, so
+ * a layout and its page share one session and membership read per request.
+ */
+export const requirePageCaller = cache(async (next?: string, roles?: readonly Role[]): Promise<Caller> => {
+  const caller = await pageCaller();
   if (!caller) redirect(next ? `/sign-in?next=${encodeURIComponent(next)}` : "/sign-in");
+  if (roles && !roles.includes(caller.role)) notFound();
   return caller;
-}
+});
 
 export type ActionResult<T> =
   { ok: true; data: T } | { ok: false; message: string; fieldErrors?: Record<string, string[]> };

@@ -1,6 +1,6 @@
 // How the build sheet, the parts CSV and the panel write numbers: always through the engine's
 // formatSI / formatPercent, so a figure reads the same on paper and on screen.
-import { formatPercent, formatSI } from "@/lib/design";
+import { formatPercent, formatSI } from "@/lib/design/format";
 
 export const ohms = (v: number) => formatSI(v, "Ω");
 export const volts = (v: number) => formatSI(v, "V");

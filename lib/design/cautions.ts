@@ -3,7 +3,7 @@
 import { REFERENCE_C } from "./model";
 import type { Requirement } from "./requirement";
 import type { CandidateDetail } from "./types";
-import { formatSI } from "./units";
+import { formatSI } from "./format";
 
 export type CautionKey = "hot" | "hazardous" | "common-mode" | "mains" | "fuse" | "inductive" | "codes";
 

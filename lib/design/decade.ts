@@ -1,7 +1,7 @@
 // Decade scale factors (1 mV per mA, 1 mV per µA, …): the readouts a bench meter user can read
 // without arithmetic. DESIGN.md §3 asks the solver to offer them.
 import type { SweepArrays } from "./sweep";
-import { formatSI } from "./units";
+import { formatSI } from "./format";
 
 const perUnit = ["A", "mA", "µA", "nA", "pA"];
 

@@ -20,7 +20,7 @@ import { rejectReasons, shuntFigures, type RejectReason } from "./pair";
 import type { Requirement } from "./requirement";
 import { sweepGrid, type SweepArrays } from "./sweep";
 import type { Candidate } from "./types";
-import { formatSI } from "./units";
+import { formatSI } from "./format";
 
 /** How far a pair misses each constraint it fails, as a ratio to that constraint's limit. */
 export type Violations = Partial<Record<RejectReason, number>>;

@@ -1,6 +1,7 @@
 // The engine's public surface (see .notes/engine-contract.md). Pure TypeScript: mathjs, zod
 // and this folder only, so it runs in a route handler and in a browser worker alike.
 export * from "./units";
+export * from "./format";
 export * from "./eseries";
 export * from "./gains";
 export * from "./requirement";

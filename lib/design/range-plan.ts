@@ -14,7 +14,7 @@ import {
 import { pairMask, shuntFigures } from "./pair";
 import type { Requirement } from "./requirement";
 import { sweepGrid, type SweepArrays } from "./sweep";
-import { formatSI } from "./units";
+import { formatSI } from "./format";
 
 /** Switch down once the current falls below this share of the lower range's top. */
 export const SWITCH_DOWN_FRACTION = 0.8;

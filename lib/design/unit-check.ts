@@ -6,7 +6,7 @@ import { nearestInSeries, seriesValues } from "./eseries";
 import { buildModel } from "./model";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
-import { formatSI } from "./units";
+import { formatSI } from "./format";
 
 export type UnitReading = { currentA: number; outputV: number };
 

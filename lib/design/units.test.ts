@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { parseRequirement } from "./requirement";
-import { MAX_QUANTITY_CHARS, formatPercent, formatSI, parsePercent, parseQuantity, roundSig } from "./units";
+import { formatPercent, formatSI } from "./format";
+import { MAX_QUANTITY_CHARS, parsePercent, parseQuantity, roundSig } from "./units";
 
 const value = (input: number | string, dim: Parameters<typeof parseQuantity>[1]) => {
   const r = parseQuantity(input, dim);

@@ -5,7 +5,6 @@ export * from "./parse";
 // The summary's arithmetic is the engine's (lib/design/profile.ts); re-exported for the routes.
 export * from "@/lib/design/profile";
 export * from "./decimate";
-export * from "./samples";
 export * from "./limits";
 export * from "./design";
 export * from "./ticks";

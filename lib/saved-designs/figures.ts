@@ -1,6 +1,6 @@
 // Labels, units and "which way is better" for the fields of a saved design, shared by the
 // revision diff, the compare page and the mails. Pure: runs on the server and in the browser.
-import { formatPercent, formatSI } from "@/lib/design";
+import { formatPercent, formatSI } from "@/lib/design/format";
 
 export type FieldKind = "si" | "percent" | "fraction" | "ppm" | "plain" | "db" | "celsius" | "count" | "text";
 

@@ -1,4 +1,4 @@
-import type { Choice } from "@/lib/design";
+import type { Choice } from "@/lib/design/types";
 
 /** A stable key for a (shunt, gain) pair. */
 export const candidateKey = (c: Choice) => `${c.shuntOhms}|${c.gain}`;

@@ -1,7 +1,7 @@
 // The wizard's form shape: what the designer types (unit strings), one field per input.
 // The engine's requirement schema validates it as it stands (extra keys are ignored).
-import type { LoadModel, RequirementInput } from "@/lib/design";
-import { deepMerge } from "./draft";
+import type { LoadModel, RequirementInput } from "@/lib/design/requirement";
+import { deepMerge } from "./deep-merge";
 
 export type WizardValues = {
   current: { min: string; max: string; typical?: string };

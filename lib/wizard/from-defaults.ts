@@ -2,7 +2,7 @@
 // grouped by the wizard step that asks for it, for the summary shown before saving.
 import { parseRequirement, type Requirement } from "@/lib/design";
 import { diffRevisions, type Change } from "@/lib/saved-designs/diff";
-import { deepMerge } from "./draft";
+import { deepMerge } from "./deep-merge";
 import { readableDefaults } from "./form-values";
 
 const stepOfGroup: Record<string, string> = {

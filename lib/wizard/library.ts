@@ -1,6 +1,6 @@
 // The team library as the wizard reads it (GET /api/library, db/schema.ts columns), and an
 // amplifier row turned into the wizard's amplifier fields.
-import { formatSI } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
 import { resistorSetGains } from "@/lib/library/to-requirement";
 import type { WizardValues } from "./form-values";
 

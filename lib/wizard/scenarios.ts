@@ -1,5 +1,5 @@
 // Start points for the wizard, from the invented demo scenario (DESIGN.md §6).
-import { defaultRequirementInput, type RequirementInput } from "@/lib/design";
+import { defaultRequirementInput, type RequirementInput } from "@/lib/design/requirement";
 
 export type Scenario = { key: string; title: string; summary: string; input: RequirementInput };
 

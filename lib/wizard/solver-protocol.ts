@@ -1,5 +1,6 @@
 // Messages between the wizard and its solver worker.
-import type { FieldErrors, SolveResult } from "@/lib/design";
+import type { FieldErrors } from "@/lib/design/requirement";
+import type { SolveResult } from "@/lib/design/solve";
 
 export type SolveRequest = { id: number; input: unknown };
 

@@ -2,7 +2,8 @@
 // Runs the engine's sweep in a Web Worker, coalescing edits: at most one sweep runs, and
 // only the latest input waits behind it, so typing never queues stale work or blocks the page.
 import { useCallback, useEffect, useRef, useState } from "react";
-import type { FieldErrors, SolveResult } from "@/lib/design";
+import type { FieldErrors } from "@/lib/design/requirement";
+import type { SolveResult } from "@/lib/design/solve";
 import type { SolveReply, SolveRequest } from "./solver-protocol";
 
 export type SolverState =

@@ -1,11 +1,19 @@
 // A designer drops a recording on a saved design's page and reads the chart; the library page
 // is looked at too. Screenshots go to the run's output directory for a person to look at.
-import { expect, test } from "@playwright/test";
+import { expect, test, type Page } from "@playwright/test";
 import { apiAs, signInPage } from "../fixtures/auth";
 import { createProfileDesign, uploadCsv } from "../integration/profiles-helpers";
 
 // Outside Playwright's output directory, which each run empties.
 const shots = process.env.SHOTS_DIR ?? "test-results/screens";
+
+/** Before a screenshot: the web fonts loaded and the browser has painted the last change. */
+async function settled(page: Page) {
+  await page.evaluate(async () => {
+    await document.fonts.ready;
+    await new Promise((resolve) => requestAnimationFrame(() => requestAnimationFrame(resolve)));
+  });
+}
 
 /** A logger-like recording: 20 000 samples of sleep with radio bursts, in ms and µA. */
 function loggerCsv(clipA: number): string {
@@ -54,7 +62,7 @@ test("a designer uploads a recording through the form and sees the chart", async
 
   await page.getByLabel("Battery capacity").fill("220 mAh");
   await expect(page.getByTestId("battery-life")).toContainText(/h\)/);
-  await page.waitForTimeout(300);
+  await settled(page);
   await page.getByTestId("profiles-panel").screenshot({ path: `${shots}/profile-panel.png` });
 
   // Point to read a sample; drag across the chart to zoom, then reset.
@@ -68,7 +76,7 @@ test("a designer uploads a recording through the form and sees the chart", async
   await page.mouse.move(box.x + box.width * 0.5, box.y + 120, { steps: 5 });
   await page.mouse.up();
   await expect(page.getByTestId("chart-window")).not.toHaveText(before ?? "");
-  await page.waitForTimeout(300);
+  await settled(page);
   await page.getByTestId("profiles-panel").screenshot({ path: `${shots}/profile-zoomed.png` });
   await page.getByRole("button", { name: "Reset zoom" }).click();
   await expect(page.getByTestId("chart-window")).toHaveText(before ?? "");

@@ -1,7 +1,7 @@
 // The netlist a saved design exports (GET /api/designs/[id]/netlist), run through ngspice in batch
 // mode — a simulator the project did not write — must agree with the engine: the burden
 // V(sp) − V(sn) and the output V(out) within 0.1 %, low side and high side, with and without
-// the amplifier offset. Fails where ngspice is not installed.
+// the amplifier offset. A machine without ngspice fails here: the outside check must not go quiet.
 import { execFileSync, spawnSync } from "node:child_process";
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";

@@ -2,13 +2,12 @@ import { describe, expect, it } from "vitest";
 import {
   COULOMBS_PER_MAH,
   batteryLifeS,
-  bytesToFloat64,
   decimateMinMax,
-  float64ToBytes,
   parseProfileCsv,
   summarizeProfile,
   type ProfileDesign,
 } from "@/lib/profile";
+import { bytesToFloat64, float64ToBytes } from "@/db/float64-bytes";
 
 // A design to judge profiles against: 0.1 Ω shunt, gain 20, 3.0 V supply, 2.5 V full scale, lsbA 1 mA.
 // Clip current = 2.5 V / (0.1 Ω × 20) = 1.25 A.

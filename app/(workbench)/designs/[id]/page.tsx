@@ -10,7 +10,7 @@ import { StatusBadge, statusExplained } from "@/components/review/status-badge";
 import { listTargetAudit } from "@/db/queries/audit";
 import { getDesignView, isUuid, listRevisions, pageDesigns } from "@/db/queries/designs";
 import { listReviews } from "@/db/queries/reviews";
-import { formatSI } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
 import { designViewerFor } from "@/lib/design-view";
