@@ -24,6 +24,47 @@ export async function startServer() {
   const { startMail } = await import("@/lib/mail/start");
   await startMail();
   await warmUp();
+  void warmRoutes(e.PORT);
+}
+
+/**
+ * Next loads each route's code on its first request. Once the server answers, ask the slow
+ * first-use routes once without a session: the gate answers 401 (or the sign-in redirect) with no
+ * effect, and their modules, react-pdf's included, are loaded before a person's first request.
+ */
+async function warmRoutes(port: number) {
+  const base = `http://127.0.0.1:${port}`;
+  const none = "00000000-0000-4000-8000-000000000000";
+  let up = false;
+  for (let tries = 0; tries < 240 && !up; tries++) {
+    try {
+      // Our own health answer, not some other server's on that port (`next start -p` without PORT).
+      const health = (await (await fetch(`${base}/api/health`)).json()) as { ok?: unknown; database?: unknown };
+      up = health.ok === true && typeof health.database === "string";
+    } catch {
+      /* not listening yet */
+    }
+    if (!up) await new Promise((r) => setTimeout(r, 250));
+  }
+  if (!up) return;
+  const paths: [string, string][] = [
+    ["POST", "/api/solve"],
+    ["GET", "/api/designs"],
+    ["GET", `/api/designs/${none}/build-sheet`],
+    ["GET", `/api/designs/${none}/profiles/${none}?width=800`],
+    ["GET", `/designs/${none}`],
+    ["GET", "/designs"],
+    ["GET", `/compare?ids=${none},${none}`],
+  ];
+  const t0 = performance.now();
+  for (const [method, path] of paths) {
+    try {
+      await (await fetch(`${base}${path}`, { method, redirect: "manual" })).arrayBuffer();
+    } catch {
+      /* a route that cannot be reached now is simply not warmed */
+    }
+  }
+  console.log(`[start] ${paths.length} routes loaded in ${Math.round(performance.now() - t0)} ms`);
 }
 
 /**

@@ -197,13 +197,13 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
                     />
                   </td>
                   {/* A long unbroken name wraps anywhere rather than push the other columns out. */}
-                  <td className="min-w-[8rem] px-3 py-1.5 [overflow-wrap:anywhere]">
+                  <td className="min-w-[8rem] max-w-md px-3 py-1.5 [overflow-wrap:anywhere]">
                     <Link href={`/designs/${d.id}`} className="font-medium text-ink underline-offset-2 hover:underline">
                       {d.name}
                     </Link>
                     <span className="block text-xs text-ink-muted md:hidden">{d.project ?? "no project"}</span>
                   </td>
-                  <td className="hidden px-3 py-1.5 [overflow-wrap:anywhere] md:table-cell">
+                  <td className="hidden max-w-xs px-3 py-1.5 [overflow-wrap:anywhere] md:table-cell">
                     {d.project || <span className="text-ink-faint">—</span>}
                   </td>
                   <td className="whitespace-nowrap px-3 py-1.5">
@@ -215,7 +215,7 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
                       ? `${formatSI(d.shuntOhms, "Ω")} × ${Number(d.gain.toPrecision(4))}`
                       : "—"}
                   </td>
-                  <td className="hidden px-3 py-1.5 lg:table-cell">{d.authorName}</td>
+                  <td className="hidden whitespace-nowrap px-3 py-1.5 lg:table-cell">{d.authorName}</td>
                   <td className="whitespace-nowrap px-3 py-1.5 num">
                     {day(d.updatedAt)}
                     <span className="hidden sm:inline"> {time(d.updatedAt)}</span>

@@ -3,7 +3,8 @@
 // measured side by side in this one run, against /api/health on the same server, or first ÷ warm:
 //   first use after start: solve.first.ratio, pdf.first.ratio, profile.firstChart.ratio
 //   at scale (p50 ÷ health p50): designs.list.ratio, designs.search.ratio, design.page.ratio,
-//     compare.ratio, and designs.list.scaleVsDemo (the scale team's first page ÷ the demo team's)
+//     compare.ratio; and designs.list.scaleVsDemo, design.page.scaleVsDemo (the scale team's page ÷
+//     the demo team's, to tell the cost of scale from the cost of the page)
 //   under load: health.underSheets.p99Ratio (20 concurrent sheets), server.rss.MB after 20 connections
 // Build first (`npx next build`, or with NEXT_DIST_DIR). Nothing here asserts.
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
@@ -146,6 +147,11 @@ export async function run(): Promise<Record<string, number>> {
     ).json()) as { profiles: { id: string }[] };
     const profileIds = withProfiles.profiles.map((p) => p.id);
     if (profileIds.length < 2) throw new Error("the scale data lack profiles on the newest design");
+    const demoFirst = (await (await fetch(`${BASE}/api/designs?limit=1`, { headers: { cookie: demo } })).json()) as {
+      designs: { id: string }[];
+    };
+    const demoDesignId = demoFirst.designs[0]?.id;
+    if (!demoDesignId) throw new Error("the scale data lack the demo team's designs");
     const chart = (pid: string) => as({ path: `/api/designs/${first.designs[0]!.id}/profiles/${pid}?width=800` });
 
     // First use of each after start, then the same warm (a chart of another profile, so no cache helps).
@@ -171,6 +177,7 @@ export async function run(): Promise<Record<string, number>> {
       searchRare: as({ path: `/api/designs?q=${encodeURIComponent("radio burst 0997")}` }),
       demoList: { path: "/api/designs", cookie: demo },
       designPage: as({ path: `/designs/${deepId}` }),
+      demoDesignPage: { path: `/designs/${demoDesignId}`, cookie: demo },
       compare: as({ path: `/compare?ids=${three.join(",")}` }),
     };
     await interleaved(calls, 2);
@@ -218,6 +225,7 @@ export async function run(): Promise<Record<string, number>> {
       "designs.searchRare.ratio": median(t.searchRare!) / health,
       "designs.list.scaleVsDemo": median(t.list!) / median(t.demoList!),
       "design.page.ratio": median(t.designPage!) / health,
+      "design.page.scaleVsDemo": median(t.designPage!) / median(t.demoDesignPage!),
       "compare.ratio": median(t.compare!) / health,
       "health.idle.p99.ms": quantile(idle, 0.99),
       "health.underSheets.p99Ratio": quantile(busy, 0.99) / quantile(idle, 0.99),
