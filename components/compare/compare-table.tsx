@@ -98,8 +98,23 @@ function Section({ title, list, mark }: { title: string; list: Row[]; mark: bool
   );
 }
 
+// Measured against predicted yield of the units built so far (issue 18), shown when any design has units.
+const builtFields: Record<string, FieldInfo> = {
+  measuredYield: { label: "Measured yield (built units passing the bench check)", kind: "fraction", better: "higher" },
+  predictedYield: { label: "Predicted yield (Monte Carlo)", kind: "fraction" },
+  unitsBuilt: { label: "Units recorded", kind: "count" },
+};
+
 /** Requirement, choice and every figure side by side, the best value in each figure row marked. */
-export function CompareTable({ designs, viewer }: { designs: DesignView[]; viewer: DesignViewer }) {
+export function CompareTable({
+  designs,
+  viewer,
+  built = [],
+}: {
+  designs: DesignView[];
+  viewer: DesignViewer;
+  built?: (Record<keyof typeof builtFields, number | null> | null)[];
+}) {
   const requirementRows = rows(
     requirementFields,
     designs.map((d) => d.requirement),
@@ -150,6 +165,16 @@ export function CompareTable({ designs, viewer }: { designs: DesignView[]; viewe
             )}
             mark
           />
+          {built.some(Boolean) && (
+            <Section
+              title="Built units"
+              list={rows(
+                builtFields,
+                designs.map((_, i) => built[i] ?? {}),
+              )}
+              mark
+            />
+          )}
           <Section title="Requirement: where the designs differ" list={requirementRows.filter(differs)} mark={false} />
           <SameRows list={requirementRows.filter((r) => !differs(r))} columns={designs.length} />
         </tbody>

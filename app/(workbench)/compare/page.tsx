@@ -6,6 +6,7 @@ import { EmptyState } from "@/components/ui/panel";
 import { getDesignView } from "@/db/queries/designs";
 import { errorCurve, loadCurve } from "@/lib/design";
 import { requirePageCaller } from "@/lib/auth/gate";
+import { builtYieldOf } from "@/lib/built-units/record";
 import type { DesignView } from "@/lib/design-view";
 import { compareQuery } from "@/lib/saved-designs/compare";
 
@@ -86,7 +87,11 @@ export default async function ComparePage({
           testId="compare-burden-chart"
         />
       </div>
-      <CompareTable designs={designs} viewer={{ userId: caller.userId, role: caller.role }} />
+      <CompareTable
+        designs={designs}
+        viewer={{ userId: caller.userId, role: caller.role }}
+        built={await Promise.all(designs.map((d) => builtYieldOf(d.id)))}
+      />
     </div>
   );
 }

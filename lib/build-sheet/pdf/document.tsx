@@ -5,6 +5,7 @@ import type { ReactNode } from "react";
 import type { DesignView } from "@/lib/design-view";
 import type { SheetData } from "../sheet-data";
 import { ErrorChart } from "./error-chart";
+import { ReadingsLog } from "./readings-log";
 import { Schematic } from "./schematic";
 import { colors, FONT } from "./theme";
 
@@ -402,6 +403,7 @@ export function BuildSheetDocument({
             <Text style={s.h2}>Layout</Text>
             <Bullets items={data.layout} />
           </View>
+          <ReadingsLog bench={data.bench} />
         </>,
       )}
     </Document>

@@ -7,6 +7,7 @@ import { ProfilesPanel } from "@/components/design/profiles-panel";
 import { ComparePicker } from "@/components/review/compare-picker";
 import { ReviewPanel } from "@/components/review/review-panel";
 import { StatusBadge, statusExplained } from "@/components/review/status-badge";
+import { UnitsPanel } from "@/components/units/units-panel";
 import { listTargetAudit } from "@/db/queries/audit";
 import { getDesignView, isUuid, listDesigns, listRevisions } from "@/db/queries/designs";
 import { listReviews } from "@/db/queries/reviews";
@@ -74,6 +75,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
       </header>
       {/* A maker comes to build: the download, parts list and bench check lead the page. */}
       {caller.role === "maker" && <BuildSheetPanel design={design} viewer={viewer} />}
+      {caller.role === "maker" && <UnitsPanel design={design} viewer={viewer} />}
       <ComparePicker
         current={{ id: design.id, name: design.name }}
         others={others
@@ -90,6 +92,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
       />
       {caller.role !== "maker" && <BuildSheetPanel design={design} viewer={viewer} />}
       <ProfilesPanel design={design} viewer={viewer} />
+      {caller.role !== "maker" && <UnitsPanel design={design} viewer={viewer} />}
     </div>
   );
 }
