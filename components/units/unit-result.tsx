@@ -4,7 +4,9 @@ import { Badge } from "@/components/ui/badge";
 import type { UnitView } from "@/lib/built-units/judge";
 import { formatSI } from "@/lib/design";
 
-const pct = (x: number) => `${x >= 0 ? "+" : "−"}${String(Number(Math.abs(x).toPrecision(2)))} %`;
+/** Signed percent to two figures; below 0.001 % it is rounding, shown as 0. */
+const pct = (x: number) =>
+  Math.abs(x) < 1e-3 ? "0 %" : `${x >= 0 ? "+" : "−"}${String(Number(Math.abs(x).toPrecision(2)))} %`;
 
 export const methodWords: Record<UnitView["calibration"]["method"], string> = {
   "least-squares": "least-squares line through every reading",
@@ -89,7 +91,9 @@ export function UnitResult({ unit }: { unit: UnitView }) {
         {Number.isFinite(c.residualPercent) && (
           <>
             ; largest error left at the test points{" "}
-            <span className="num text-ink">{String(Number(c.residualPercent.toPrecision(2)))} %</span>
+            <span className="num text-ink">
+              {c.residualPercent < 1e-3 ? "0 %" : `${String(Number(c.residualPercent.toPrecision(2)))} %`}
+            </span>
           </>
         )}
         .

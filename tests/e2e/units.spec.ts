@@ -31,6 +31,8 @@ async function noSidewaysScroll(page: Page) {
   expect(scroll, "something in the section overflows it").toBeLessThanOrEqual(client);
 }
 
+test.setTimeout(120_000);
+
 test("a maker types in a unit's readings, sees one out of band with its cause, and exports the calibration", async ({
   page,
 }) => {
@@ -93,5 +95,18 @@ test("a maker types in a unit's readings, sees one out of band with its cause, a
   await page.waitForTimeout(400);
   await page.screenshot({ path: `${shots}/units-390.png`, fullPage: true });
   await page.getByTestId("units-panel").screenshot({ path: `${shots}/units-panel-390.png` });
+
+  // The reviewer's compare page shows measured yield beside the figures once units exist.
+  const logger = await apiAs("maker");
+  const approved = (await (await logger.get("/api/designs")).json()) as { designs: { id: string }[] };
+  await logger.dispose();
+  const other = approved.designs.find((d) => d.id !== id)!;
+  await page.setViewportSize({ width: 1440, height: 1000 });
+  await page.goto(`/compare?ids=${id},${other.id}`);
+  const measured = page.getByTestId("row-measuredYield");
+  await expect(measured).toContainText("Measured yield");
+  await expect(measured.locator("td").first()).toHaveText(/^76\.9 %/);
+  await expect(measured.locator("td").nth(1)).toHaveText("—");
+  await page.screenshot({ path: `${shots}/compare-built-yield.png`, fullPage: true });
   await noSidewaysScroll(page);
 });

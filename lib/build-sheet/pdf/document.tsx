@@ -270,7 +270,7 @@ function SheetPage({
 }
 
 /** The sheet's pages as planned; a page whose content overflows wraps onto another. */
-export const PLANNED_PAGES = 3;
+export const PLANNED_PAGES = 4;
 
 export function BuildSheetDocument({
   view,
@@ -403,9 +403,9 @@ export function BuildSheetDocument({
             <Text style={s.h2}>Layout</Text>
             <Bullets items={data.layout} />
           </View>
-          <ReadingsLog bench={data.bench} />
         </>,
       )}
+      {page(4, <ReadingsLog bench={data.bench} />)}
     </Document>
   );
 }
