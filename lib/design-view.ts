@@ -35,6 +35,10 @@ export type DesignViewer = {
     /** … and on this design's current revision (not its author). */
     judgeThis: boolean;
     uploadProfiles: boolean;
+    /** Record built units at all … */
+    recordUnits: boolean;
+    /** … and edit or delete units someone else recorded (else only one's own). */
+    changeOthersUnits: boolean;
   };
   /** A maker comes to build: the build sheet leads the page. */
   leadsWithBuildSheet: boolean;
@@ -48,6 +52,8 @@ export function designViewerFor(caller: PolicyCaller, design: { authorId: string
       judge: can(caller, "design.judge"),
       judgeThis: can(caller, "design.judge", { authorId: design.authorId }),
       uploadProfiles: can(caller, "profile.upload"),
+      recordUnits: can(caller, "unit.record"),
+      changeOthersUnits: can(caller, "unit.change", { recordedBy: "" }),
     },
     leadsWithBuildSheet: leadsWithBuildSheet(caller),
   };

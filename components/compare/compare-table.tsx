@@ -125,14 +125,23 @@ function Section({
   );
 }
 
+// Measured against predicted yield of the units built so far (issue 18), shown when any design has units.
+const builtFields: Record<string, FieldInfo> = {
+  measuredYield: { label: "Measured yield (built units passing the bench check)", kind: "fraction", better: "higher" },
+  predictedYield: { label: "Predicted yield (Monte Carlo)", kind: "fraction" },
+  unitsBuilt: { label: "Units recorded", kind: "count" },
+};
+
 /** Requirement, choice and every figure side by side, the best value in each figure row marked. */
 export function CompareTable({
   designs,
   viewers,
+  built = [],
 }: {
   designs: DesignView[];
   /** Per design id, from the policy on the server. */
   viewers: Record<string, DesignViewer>;
+  built?: (Record<keyof typeof builtFields, number | null> | null)[];
 }) {
   const requirementRows = rows(
     requirementFields,
@@ -188,6 +197,16 @@ export function CompareTable({
             mark
             requirements={designs.map((d) => d.requirement)}
           />
+          {built.some(Boolean) && (
+            <Section
+              title="Built units"
+              list={rows(
+                builtFields,
+                designs.map((_, i) => built[i] ?? {}),
+              )}
+              mark
+            />
+          )}
           <Section title="Requirement: where the designs differ" list={requirementRows.filter(differs)} mark={false} />
           <SameRows list={requirementRows.filter((r) => !differs(r))} columns={designs.length} />
         </tbody>

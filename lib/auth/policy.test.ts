@@ -26,6 +26,8 @@ const expectedRoles: Record<Action, Role[]> = {
   "design.judge": ["owner", "reviewer"],
   "profile.upload": ["owner", "designer"],
   "profile.delete": all,
+  "unit.record": ["owner", "designer", "maker"],
+  "unit.change": ["owner", "designer", "maker"],
   "library.read": all,
   "library.edit": ["owner", "designer"],
   "engine.use": all,
@@ -83,6 +85,15 @@ describe("rules on the resource", () => {
       expect(can(as(role), "profile.delete", { uploadedBy: me }), `${role}, own upload`).toBe(true);
       expect(can(as(role), "profile.delete", { uploadedBy: someoneElse }), `${role}, another's upload`).toBe(
         role === "owner",
+      );
+    }
+  });
+
+  it("a maker changes only the units they recorded; owners and designers any; reviewers none", () => {
+    for (const role of roles) {
+      expect(can(as(role), "unit.change", { recordedBy: me }), `${role}, own unit`).toBe(role !== "reviewer");
+      expect(can(as(role), "unit.change", { recordedBy: someoneElse }), `${role}, another's unit`).toBe(
+        role === "owner" || role === "designer",
       );
     }
   });

@@ -39,6 +39,8 @@ export type PolicyResources = {
   "design.judge": { authorId: string };
   "profile.upload": undefined;
   "profile.delete": { uploadedBy: string };
+  "unit.record": undefined;
+  "unit.change": { recordedBy: string };
   "library.read": undefined;
   "library.edit": undefined;
   "engine.use": undefined;
@@ -83,6 +85,15 @@ const table: { [A in Action]: Rule<NonNullable<PolicyResources[A]>> } = {
     writes: true,
     when: (caller, profile) => profile.uploadedBy === caller.userId || caller.role === "owner",
     doing: "delete current profiles",
+  },
+  // Built units: owners, designers and makers record them; a maker edits or deletes only the units
+  // they recorded, owners and designers any; reviewers read.
+  "unit.record": { roles: ["owner", "designer", "maker"], writes: true, doing: "record built units" },
+  "unit.change": {
+    roles: ["owner", "designer", "maker"],
+    writes: true,
+    when: (caller, unit) => caller.role !== "maker" || unit.recordedBy === caller.userId,
+    doing: "edit or delete built units",
   },
   "library.read": { roles: everyone, writes: false, doing: "read the parts library" },
   "library.edit": { roles: editors, writes: true, doing: "edit the parts library" },

@@ -9,15 +9,18 @@ import { HttpError, type FieldErrors } from "@/lib/http";
 import { designFor } from "@/lib/saved-designs/access";
 import { summarizeUnits, type RevisionBasis } from "./judge";
 
-export async function unitsContext(caller: Caller, designId: string) {
-  const { design } = await designFor(caller, designId);
-  const revisions: RevisionBasis[] = (await listRevisions(design.id)).map((r) => ({
+async function revisionBases(designId: string): Promise<RevisionBasis[]> {
+  return (await listRevisions(designId)).map((r) => ({
     revision: r.revision,
     requirement: r.requirement,
     choice: r.choice,
     approved: r.approval !== null,
   }));
-  return { design, revisions };
+}
+
+export async function unitsContext(caller: Caller, designId: string) {
+  const { design } = await designFor(caller, designId);
+  return { design, revisions: await revisionBases(design.id) };
 }
 
 export async function unitsSummaryFor(caller: Caller, designId: string) {
@@ -85,4 +88,14 @@ export function writeRefusal(result: Exclude<UnitWrite, { ok: true }>, field = "
       [field]: [`"${result.serial}" is already on this design`],
     },
   );
+}
+
+export type BuiltYield = { measuredYield: number | null; predictedYield: number | null; unitsBuilt: number };
+
+/** The yield figures the compare page shows beside a design's figures; null when no unit is recorded. */
+export async function builtYieldOf(designId: string): Promise<BuiltYield | null> {
+  const stored = await listUnits(designId);
+  if (stored.length === 0) return null;
+  const s = summarizeUnits(stored, await revisionBases(designId));
+  return { measuredYield: s.yield.measured, predictedYield: s.yield.predicted, unitsBuilt: s.yield.units };
 }

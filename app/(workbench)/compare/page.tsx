@@ -8,6 +8,7 @@ import { errorCurve, loadCurve } from "@/lib/design";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
 import { designViewerFor, type DesignView } from "@/lib/design-view";
+import { builtYieldOf } from "@/lib/built-units/record";
 import { compareQuery } from "@/lib/saved-designs/compare";
 
 export const metadata: Metadata = { title: "Compare designs" };
@@ -94,6 +95,7 @@ export default async function ComparePage({
       <CompareTable
         designs={designs}
         viewers={Object.fromEntries(designs.map((d) => [d.id, designViewerFor(caller, d)]))}
+        built={await Promise.all(designs.map((d) => builtYieldOf(d.id)))}
       />
     </div>
   );

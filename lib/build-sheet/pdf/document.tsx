@@ -5,6 +5,7 @@ import type { ReactNode } from "react";
 import type { DesignView } from "@/lib/design-view";
 import type { SheetData } from "../sheet-data";
 import { ErrorChart } from "./error-chart";
+import { ReadingsLog } from "./readings-log";
 import { Schematic } from "./schematic";
 import { Text } from "./text";
 import { colors } from "./theme";
@@ -272,7 +273,7 @@ function SheetPage({
 }
 
 /** The sheet's pages as planned; a page whose content overflows wraps onto another. */
-export const PLANNED_PAGES = 3;
+export const PLANNED_PAGES = 4;
 
 export function BuildSheetDocument({
   view,
@@ -410,6 +411,7 @@ export function BuildSheetDocument({
           </View>
         </>,
       )}
+      {page(4, <ReadingsLog bench={data.bench} />)}
     </Document>
   );
 }

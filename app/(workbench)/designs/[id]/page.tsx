@@ -7,6 +7,7 @@ import { ProfilesPanel } from "@/components/design/profiles-panel";
 import { ComparePicker } from "@/components/review/compare-picker";
 import { ReviewPanel } from "@/components/review/review-panel";
 import { StatusBadge, statusExplained } from "@/components/review/status-badge";
+import { UnitsPanel } from "@/components/units/units-panel";
 import { listTargetAudit } from "@/db/queries/audit";
 import { getDesignView, isUuid, listRevisions, pageDesigns } from "@/db/queries/designs";
 import { listReviews } from "@/db/queries/reviews";
@@ -31,7 +32,9 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
     listReviews(design.id),
     listTargetAudit(caller.teamId, "design", design.id),
     // The picker offers the team's 50 most recently changed designs; the list page reaches the rest.
-    pageDesigns(caller.teamId, { approvedOnly: !can(caller, "design.read-unapproved"), limit: 50 }).then((p) => p.designs),
+    pageDesigns(caller.teamId, { approvedOnly: !can(caller, "design.read-unapproved"), limit: 50 }).then(
+      (p) => p.designs,
+    ),
   ]);
   const { metrics, choice } = design;
   return (
@@ -76,6 +79,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
       </header>
       {/* A maker comes to build: the download, parts list and bench check lead the page. */}
       {viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} />}
+      {viewer.leadsWithBuildSheet && <UnitsPanel design={design} viewer={viewer} />}
       <ComparePicker
         current={{ id: design.id, name: design.name }}
         others={others
@@ -92,6 +96,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
       />
       {!viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} />}
       <ProfilesPanel design={design} viewer={viewer} />
+      {caller.role !== "maker" && <UnitsPanel design={design} viewer={viewer} />}
     </div>
   );
 }

@@ -11,7 +11,6 @@ import {
 } from "@/lib/built-units/record";
 import { recordUnitSchema, todayIso } from "@/lib/built-units/schemas";
 import { json } from "@/lib/http";
-import { assertUnitAllowed, unitRecorderRoles } from "./policy";
 
 /** The design's built units, each judged, with the yield measured and predicted and the spread check. */
 export const GET = apiRoute({ doing: "read built units" }, async ({ caller, params }) => {
@@ -20,23 +19,19 @@ export const GET = apiRoute({ doing: "read built units" }, async ({ caller, para
 });
 
 /** Records one unit's bench readings: 201 with its judgement, cause and calibration. */
-export const POST = apiRoute(
-  { roles: unitRecorderRoles, doing: "record built units", body: recordUnitSchema },
-  async ({ caller, params, body }) => {
-    assertUnitAllowed(caller, "record");
-    const { design, revisions } = await unitsContext(caller, params.id ?? "");
-    const basis = buildRevision(design, revisions, body.revision);
-    const readings = readingsToStore(benchOf(basis), body.readings);
-    const written = await insertUnits({
-      teamId: caller.teamId,
-      designId: design.id,
-      actorId: caller.userId,
-      source: "form",
-      units: [{ serial: body.serial, revision: basis.revision, builtOn: body.builtOn ?? todayIso(), readings }],
-    });
-    if (!written.ok) throw writeRefusal(written);
-    const stored = await getUnit(design.id, written.ids[0]!);
-    const view = summarizeUnits(stored ? [stored] : [], revisions).units[0];
-    return json(view, 201);
-  },
-);
+export const POST = apiRoute({ action: "unit.record", body: recordUnitSchema }, async ({ caller, params, body }) => {
+  const { design, revisions } = await unitsContext(caller, params.id ?? "");
+  const basis = buildRevision(design, revisions, body.revision);
+  const readings = readingsToStore(benchOf(basis), body.readings);
+  const written = await insertUnits({
+    teamId: caller.teamId,
+    designId: design.id,
+    actorId: caller.userId,
+    source: "form",
+    units: [{ serial: body.serial, revision: basis.revision, builtOn: body.builtOn ?? todayIso(), readings }],
+  });
+  if (!written.ok) throw writeRefusal(written);
+  const stored = await getUnit(design.id, written.ids[0]!);
+  const view = summarizeUnits(stored ? [stored] : [], revisions).units[0];
+  return json(view, 201);
+});

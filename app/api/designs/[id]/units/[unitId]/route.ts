@@ -1,10 +1,9 @@
 import { deleteUnit, getUnit, listUnits, updateUnit } from "@/db/queries/units";
-import { apiRoute } from "@/lib/auth/gate";
+import { apiRoute, authorize } from "@/lib/auth/gate";
 import { summarizeUnits } from "@/lib/built-units/judge";
 import { benchOf, readingsToStore, unitsContext, writeRefusal } from "@/lib/built-units/record";
 import { editUnitSchema } from "@/lib/built-units/schemas";
 import { HttpError } from "@/lib/http";
-import { assertUnitAllowed, unitRecorderRoles } from "../policy";
 
 const unitNotFound = () => new HttpError(404, "That unit was not found on this design.");
 
@@ -24,12 +23,15 @@ export const GET = apiRoute({ doing: "read built units" }, async ({ caller, para
   return view;
 });
 
+const refusalFor = (unit: { recordedByName: string; serial: string }, verb: string) =>
+  `Unit ${unit.serial} was recorded by ${unit.recordedByName}: a maker may ${verb} only the units they recorded (owners and designers may ${verb} any).`;
+
 /** Changes a unit's serial, date or readings; makers only their own units. */
 export const PATCH = apiRoute(
-  { roles: unitRecorderRoles, doing: "edit built units", body: editUnitSchema },
+  { action: "unit.change", doing: "edit built units", body: editUnitSchema },
   async ({ caller, params, body }) => {
     const { design, revisions, unit } = await found(caller, params.id ?? "", params.unitId ?? "");
-    assertUnitAllowed(caller, "edit", unit);
+    authorize(caller, "unit.change", { doing: "edit built units", refusal: refusalFor(unit, "edit") }, unit);
     if (body.serial === undefined && body.builtOn === undefined && body.readings === undefined)
       throw new HttpError(422, "Nothing to change: send serial, builtOn or readings.", {
         "(body)": ["send at least one of serial, builtOn, readings"],
@@ -53,19 +55,16 @@ export const PATCH = apiRoute(
 );
 
 /** Removes a unit and its readings; makers only their own units. */
-export const DELETE = apiRoute(
-  { roles: unitRecorderRoles, doing: "delete built units" },
-  async ({ caller, params }) => {
-    const { design, unit } = await found(caller, params.id ?? "", params.unitId ?? "");
-    assertUnitAllowed(caller, "delete", unit);
-    const gone = await deleteUnit({
-      teamId: caller.teamId,
-      designId: design.id,
-      unitId: unit.id,
-      actorId: caller.userId,
-      serial: unit.serial,
-    });
-    if (!gone) throw unitNotFound();
-    return { deleted: true, id: unit.id };
-  },
-);
+export const DELETE = apiRoute({ action: "unit.change", doing: "delete built units" }, async ({ caller, params }) => {
+  const { design, unit } = await found(caller, params.id ?? "", params.unitId ?? "");
+  authorize(caller, "unit.change", { doing: "delete built units", refusal: refusalFor(unit, "delete") }, unit);
+  const gone = await deleteUnit({
+    teamId: caller.teamId,
+    designId: design.id,
+    unitId: unit.id,
+    actorId: caller.userId,
+    serial: unit.serial,
+  });
+  if (!gone) throw unitNotFound();
+  return { deleted: true, id: unit.id };
+});

@@ -4,7 +4,6 @@ import { MAX_UNITS_CSV_BYTES, parseUnitsCsv } from "@/lib/built-units/csv";
 import { benchOf, buildRevision, readingsToStore, unitsContext } from "@/lib/built-units/record";
 import { HttpError, json } from "@/lib/http";
 import { readCsvUpload } from "@/lib/read-upload";
-import { assertUnitAllowed, unitRecorderRoles } from "../policy";
 
 /**
  * Many units from one CSV (multipart, field `file`; optional field `revision`): a header of `serial`,
@@ -12,9 +11,8 @@ import { assertUnitAllowed, unitRecorderRoles } from "../policy";
  * is 422 naming the row and column, and nothing is stored.
  */
 export const POST = apiRoute(
-  { roles: unitRecorderRoles, doing: "import built units" },
+  { action: "unit.record", doing: "import built units" },
   async ({ caller, params, request }) => {
-    assertUnitAllowed(caller, "record");
     const { design, revisions } = await unitsContext(caller, params.id ?? "");
     const upload = await readCsvUpload(request, MAX_UNITS_CSV_BYTES);
     const askedText = upload.fields.revision?.trim();
