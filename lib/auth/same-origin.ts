@@ -9,7 +9,8 @@
 //   - PUBLIC_URL and NEXTAUTH_URL, when set (the address behind a reverse proxy that rewrites Host).
 // A request with no Origin and no Sec-Fetch-Site comes from a script or a tool, not from a page in
 // a browser, so there is no victim whose cookie rides along; it passes. A request with
-// `Authorization: Bearer …` carries its own credential instead of a cookie and is not checked.
+// `Authorization: Bearer …` carries its own credential instead of a cookie and is not checked (a
+// page on another site cannot add that header without a CORS preflight, which the app never grants).
 import { HttpError } from "@/lib/http";
 
 const STATE_CHANGING = new Set(["POST", "PUT", "PATCH", "DELETE"]);
