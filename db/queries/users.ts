@@ -123,11 +123,7 @@ export async function changeMemberRole(
  * Ends every session of the user: tokens carrying an older version are refused from now on. With
  * `onlyIfVersion`, only when that is still the current version (a dead session cannot end live ones).
  */
-export async function bumpSessionVersion(
-  userId: string,
-  tx?: Tx | Db,
-  onlyIfVersion?: number,
-): Promise<number | null> {
+export async function bumpSessionVersion(userId: string, tx?: Tx | Db, onlyIfVersion?: number): Promise<number | null> {
   const db = tx ?? (await getDb());
   const [row] = await db
     .update(users)

@@ -41,5 +41,5 @@ export const retryAfterSeconds = (ms: number) => Math.max(1, Math.ceil(ms / 1000
 /** "Try again in 14 minutes." */
 export function tryAgainIn(ms: number): string {
   const minutes = Math.max(1, Math.ceil(ms / 60000));
-  return `Too many failed sign-ins from this address. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`;
+  return `Too many failed sign-ins. Try again in ${minutes} minute${minutes === 1 ? "" : "s"}.`;
 }

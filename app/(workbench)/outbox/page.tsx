@@ -31,8 +31,8 @@ export default async function OutboxPage() {
       <div>
         <h1 className="text-lg font-semibold">Outbox</h1>
         <p className="text-ink-muted">
-          No SMTP server is configured (SMTP_URL is unset), so the built-in outbox keeps every message the
-          workbench sends for {caller.teamName}. Newest first.
+          No SMTP server is configured (SMTP_URL is unset), so the built-in outbox keeps every message the workbench
+          sends for {caller.teamName}. Newest first.
         </p>
       </div>
       {messages.length === 0 ? (
