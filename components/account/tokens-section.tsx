@@ -62,7 +62,12 @@ export function TokensSection({ tokens, teamName }: { tokens: TokenRow[]; teamNa
       <p className="text-sm text-ink-muted">
         A script sends <code className="rounded bg-sunken px-1 text-xs">Authorization: Bearer &lt;token&gt;</code> and
         acts as you in <strong className="text-ink">{teamName}</strong> (the team you are in when you create it), never
-        with more than your role there now. A read token may only fetch; a write token may do what you may do.
+        with more than your role there now. A read token may only fetch; a write token may do what you may do. Every
+        route is described in the{" "}
+        <a href="/api-docs" className="text-copper hover:underline">
+          API reference
+        </a>
+        .
       </p>
       {created && (
         <div className="flex flex-col gap-2 rounded border border-copper bg-copper-soft/40 p-3" data-testid="new-token">

@@ -14,7 +14,7 @@ import { readBodyText } from "@/lib/read-upload";
 import { assertSameOrigin } from "./same-origin";
 import { authOptions } from "./options";
 import { bearerSecret, callerFromToken } from "./tokens";
-import { can, doingOf, rolesFor, type Action, type ResourceArg } from "./policy";
+import { can, describeRoles, doingOf, rolesFor, type Action, type ResourceArg } from "./policy";
 
 export type Caller = {
   userId: string;
@@ -50,17 +50,7 @@ export async function currentCaller(): Promise<Caller | null> {
   return { ...caller, via: "session", access: "write" };
 }
 
-const roleNames: Record<Role, string> = {
-  owner: "owners",
-  designer: "designers",
-  reviewer: "reviewers",
-  maker: "makers",
-};
-
-export function describeRoles(roles: readonly Role[]): string {
-  const names = roles.map((r) => roleNames[r]);
-  return names.length <= 1 ? (names[0] ?? "nobody") : `${names.slice(0, -1).join(", ")} and ${names.at(-1)}`;
-}
+export { describeRoles };
 
 /**
  * 403 unless the policy allows the action (lib/auth/policy.ts). `refusal` words a refusal that

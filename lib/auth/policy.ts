@@ -138,3 +138,16 @@ export function doingOf(action: Action): string {
 export function leadsWithBuildSheet(caller: PolicyCaller): boolean {
   return !can(caller, "design.read-unapproved");
 }
+
+const roleNames: Record<Role, string> = {
+  owner: "owners",
+  designer: "designers",
+  reviewer: "reviewers",
+  maker: "makers",
+};
+
+/** "owners and designers", for messages and the API description. */
+export function describeRoles(roles: readonly Role[]): string {
+  const names = roles.map((r) => roleNames[r]);
+  return names.length <= 1 ? (names[0] ?? "nobody") : `${names.slice(0, -1).join(", ")} and ${names.at(-1)}`;
+}

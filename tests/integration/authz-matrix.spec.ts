@@ -30,6 +30,8 @@ type Row = {
   /** Built once per caller (so a cell that changes state gets its own fresh design, invitation…). */
   setup: (who: Who) => Promise<Cell>;
   expect: Record<Who, number>;
+  /** Only a signed-in session may call it (an API token gets 403). */
+  sessionOnly?: boolean;
 };
 
 let c: Contexts;
@@ -143,6 +145,23 @@ async function unitBy(as: APIRequestContext) {
 const routes: Row[] = [
   { name: "GET /api/health", method: "GET", setup: fixed("/api/health"), expect: { ...members(200), anon: 200 } },
   { name: "GET /api/team", method: "GET", setup: fixed("/api/team"), expect: members(200) },
+  { name: "GET /api/me", method: "GET", setup: fixed("/api/me"), expect: members(200) },
+  { name: "PATCH /api/me (nothing)", method: "PATCH", setup: fixed("/api/me", {}), expect: members(200) },
+  { name: "GET /api/openapi.json", method: "GET", setup: fixed("/api/openapi.json"), expect: members(200) },
+  { name: "GET /api/tokens", method: "GET", setup: fixed("/api/tokens"), expect: members(200) },
+  {
+    name: "POST /api/tokens",
+    method: "POST",
+    setup: fixed("/api/tokens", { name: "matrix", access: "read", expiresInDays: 1 }),
+    expect: members(201),
+    sessionOnly: true,
+  },
+  {
+    name: "DELETE /api/tokens/[unknown]",
+    method: "DELETE",
+    setup: fixed(`/api/tokens/${NO_SUCH}`),
+    expect: members(404),
+  },
   {
     name: "PATCH /api/team/members/[id] (role unchanged)",
     method: "PATCH",
@@ -598,7 +617,7 @@ test.describe.serial("authorization matrix", () => {
     const token = await tokenContext(c.designer, "write");
     try {
       const got: Record<string, number> = {};
-      const rows = routes.filter((r) => r.expect.anon === 401);
+      const rows = routes.filter((r) => r.expect.anon === 401 && !r.sessionOnly);
       for (const row of rows) got[row.name] = await call(token, row.method, await row.setup("designer"));
       expect(got).toEqual(Object.fromEntries(rows.map((r) => [r.name, r.expect.designer])));
     } finally {

@@ -5,19 +5,7 @@ import { buildNetlist, type Choice, type Requirement } from "@/lib/design";
 import { apiRoute, parseWith } from "@/lib/auth/gate";
 import { HttpError, type FieldErrors } from "@/lib/http";
 import { objectBody, requirementOr422 } from "@/lib/engine-requests";
-
-const positiveFinite = (label: string) =>
-  z
-    .number({ error: `${label}: expected a number in SI units` })
-    .refine((v) => Number.isFinite(v) && v > 0, { error: `${label} must be a finite number above zero` });
-
-const candidateSchema = z.object(
-  { shuntOhms: positiveFinite("Shunt (ohms)"), gain: positiveFinite("Gain") },
-  { error: "Candidate: expected { shuntOhms, gain }" },
-);
-const querySchema = z.object({
-  offset: z.enum(["0", "1"], { error: 'offset: expected "0" (leave the offset out) or "1"' }).optional(),
-});
+import { netlistCandidateSchema, netlistQuery } from "@/lib/route-schemas";
 
 /** Runs a parser that throws a 422, keeping its field errors so both halves of the body are reported. */
 function collect<T>(errors: FieldErrors, parse: () => T): T | null {
@@ -31,14 +19,16 @@ function collect<T>(errors: FieldErrors, parse: () => T): T | null {
 }
 
 export const POST = apiRoute(
-  { action: "engine.use", body: z.unknown(), query: querySchema, doing: "write netlists" },
+  { action: "engine.use", body: z.unknown(), query: netlistQuery, doing: "write netlists" },
   async ({ body, query }) => {
     const raw = objectBody(body);
     const errors: FieldErrors = {};
     const requirement: Requirement | null = collect(errors, () =>
       requirementOr422(raw.requirement ?? {}, "requirement"),
     );
-    const candidate: Choice | null = collect(errors, () => parseWith(candidateSchema, raw.candidate, "candidate"));
+    const candidate: Choice | null = collect(errors, () =>
+      parseWith(netlistCandidateSchema, raw.candidate, "candidate"),
+    );
     if (!requirement || !candidate) {
       const [path, messages] = Object.entries(errors)[0] ?? ["(body)", ["is invalid"]];
       throw new HttpError(422, `Invalid input at ${path}: ${messages[0]}`, errors);

@@ -1,15 +1,14 @@
-import { z } from "zod";
 import { listLibrary } from "@/db/queries/library";
 import { apiRoute } from "@/lib/auth/gate";
 import { libraryToCsv } from "@/lib/library/csv";
-import { partKinds } from "@/lib/library/schema";
+import { libraryExportQuery } from "@/lib/route-schemas";
 
 /** `?kind=amplifiers|shunts` → text/csv with the API's field names as the header. */
 export const GET = apiRoute(
   {
     action: "library.read",
     doing: "export the parts library",
-    query: z.object({ kind: z.enum(partKinds, { error: 'kind: expected "amplifiers" or "shunts"' }) }),
+    query: libraryExportQuery,
   },
   async ({ caller, query }) => {
     const library = await listLibrary(caller.teamId);

@@ -3,11 +3,10 @@ import { importParts } from "@/db/queries/library";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError, json } from "@/lib/http";
 import { parseLibraryCsv } from "@/lib/library/csv";
-import { partKinds } from "@/lib/library/schema";
 import { readCsvUpload } from "@/lib/read-upload";
+import { libraryKindSchema } from "@/lib/route-schemas";
 
 const MAX_LIBRARY_CSV_BYTES = 2_000_000;
-const kindSchema = z.enum(partKinds, { error: 'kind: expected "amplifiers" or "shunts"' });
 
 /**
  * Imports a CSV of amplifiers or shunts, all or nothing: multipart with `file` and `kind`
@@ -17,7 +16,9 @@ export const POST = apiRoute(
   { action: "library.edit", doing: "import parts into the library" },
   async ({ caller, request }) => {
     const upload = await readCsvUpload(request, MAX_LIBRARY_CSV_BYTES);
-    const kind = kindSchema.safeParse(upload.fields.kind ?? new URL(request.url).searchParams.get("kind") ?? undefined);
+    const kind = libraryKindSchema.safeParse(
+      upload.fields.kind ?? new URL(request.url).searchParams.get("kind") ?? undefined,
+    );
     if (!kind.success)
       throw new HttpError(422, 'Say which list the file holds: kind "amplifiers" or "shunts".', {
         kind: ['expected "amplifiers" or "shunts"'],

@@ -1,36 +1,11 @@
-import { z } from "zod";
 import { listRevisions } from "@/db/queries/designs";
 import { addReview, listReviews } from "@/db/queries/reviews";
-import { verdictEnum } from "@/db/schema";
 import { apiRoute, authorize } from "@/lib/auth/gate";
 import { HttpError, json, refused } from "@/lib/http";
 import type { CandidateDetail } from "@/lib/design";
 import { designFor } from "@/lib/saved-designs/access";
 import { mailReviewed } from "@/lib/saved-designs/notify";
-import { textField } from "@/lib/text-field";
-
-const verdicts = verdictEnum.enumValues;
-const body = z
-  .object({
-    verdict: z.enum(verdicts, { error: `verdict must be one of: ${verdicts.join(", ")}` }),
-    body: textField({ label: "body", max: 10_000, multiline: true }).default(""),
-    parentId: z.uuid({ error: "parentId: expected the id of a comment on this design" }).nullish(),
-    revision: z.number().int().min(1).optional(),
-  })
-  .superRefine((v, ctx) => {
-    if (v.verdict !== "approve" && !v.body.trim())
-      ctx.addIssue({
-        code: "custom",
-        path: ["body"],
-        message: v.verdict === "return" ? "Say why the design goes back" : "A comment needs some text",
-      });
-    if (v.verdict !== "comment" && v.parentId)
-      ctx.addIssue({
-        code: "custom",
-        path: ["parentId"],
-        message: "Only comments are replies; a verdict stands on its own",
-      });
-  });
+import { reviewBodySchema } from "@/lib/route-schemas";
 
 export const GET = apiRoute({ action: "design.read", doing: "read reviews" }, async ({ caller, params }) => {
   const { design } = await designFor(caller, params.id ?? "");
@@ -39,7 +14,7 @@ export const GET = apiRoute({ action: "design.read", doing: "read reviews" }, as
 
 /** approve / return (owners and reviewers, never the revision's author, only in review) or comment (anyone). */
 export const POST = apiRoute(
-  { action: "design.comment", doing: "review designs", body },
+  { action: "design.comment", doing: "review designs", body: reviewBodySchema },
   async ({ caller, params, body }) => {
     const { design, current } = await designFor(caller, params.id ?? "");
     if (body.verdict !== "comment") {

@@ -1,19 +1,13 @@
-import { z } from "zod";
 import { listRevisions } from "@/db/queries/designs";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
 import { designFor } from "@/lib/saved-designs/access";
 import { diffRevisions } from "@/lib/saved-designs/diff";
-
-const revisionNumber = z.coerce
-  .number({ error: "expected a revision number" })
-  .int({ error: "expected a whole revision number" })
-  .min(1, { error: "revisions start at 1" });
-const query = z.object({ a: revisionNumber.optional(), b: revisionNumber.optional() });
+import { revisionsQuery } from "@/lib/route-schemas";
 
 /** Every revision with its figures; with ?a=&b= also what changed from a to b. */
 export const GET = apiRoute(
-  { action: "design.read", doing: "read revisions", query },
+  { action: "design.read", doing: "read revisions", query: revisionsQuery },
   async ({ caller, params, query }) => {
     const { design } = await designFor(caller, params.id ?? "");
     const revisions = await listRevisions(design.id);

@@ -1,15 +1,13 @@
-import { z } from "zod";
 import { changeDesignStatus } from "@/db/queries/designs";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError, refused } from "@/lib/http";
 import type { CandidateDetail } from "@/lib/design";
 import { designFor } from "@/lib/saved-designs/access";
 import { mailSubmitted } from "@/lib/saved-designs/notify";
-
-const body = z.object({ revision: z.number().int().min(1).optional() });
+import { submitBodySchema } from "@/lib/route-schemas";
 
 /** draft or returned → in-review; mails the team's reviewers. */
-export const POST = apiRoute({ action: "design.submit", body }, async ({ caller, params, body }) => {
+export const POST = apiRoute({ action: "design.submit", body: submitBodySchema }, async ({ caller, params, body }) => {
   const { design, current } = await designFor(caller, params.id ?? "");
   if (body.revision !== undefined && body.revision !== design.revision)
     throw new HttpError(

@@ -1,7 +1,7 @@
-import { z } from "zod";
 import { deleteProfile, getProfile, profileUploader } from "@/db/queries/profiles";
 import { apiRoute, authorize } from "@/lib/auth/gate";
 import { designViewFor } from "@/lib/saved-designs/access";
+import { profileWindowQuery } from "@/lib/route-schemas";
 import { HttpError } from "@/lib/http";
 import { clipCurrent, decimateMinMax, profileDesignOf, summarizeProfile } from "@/lib/profile";
 
@@ -13,29 +13,12 @@ function profileIdOf(raw: string | undefined): string {
   return raw;
 }
 
-const seconds = (label: string) =>
-  z.coerce
-    .number({ error: `${label}: expected a time in seconds` })
-    .refine(Number.isFinite, { error: `${label}: expected a finite time in seconds` })
-    .optional();
-
-const windowQuery = z.object({
-  from: seconds("from"),
-  to: seconds("to"),
-  width: z.coerce
-    .number({ error: "width: expected a number of pixels" })
-    .int({ error: "width must be a whole number of pixels" })
-    .min(10, { error: "width must be at least 10" })
-    .max(4000, { error: "width must be at most 4000" })
-    .default(800),
-});
-
 /**
  * One profile: the summary stored at upload, the summary against the design's current revision, and
  * the series decimated to `width` pixel columns over `from`..`to` seconds (the whole recording by default).
  */
 export const GET = apiRoute(
-  { action: "design.read", doing: "read current profiles", query: windowQuery },
+  { action: "design.read", doing: "read current profiles", query: profileWindowQuery },
   async ({ caller, params, query }) => {
     const design = await designViewFor(caller, params.id ?? "");
     const profile = await getProfile(design.id, profileIdOf(params.profileId));
