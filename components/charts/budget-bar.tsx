@@ -1,24 +1,26 @@
 // The error budget at one current as a single bar split by source, with the figures beside it.
-import { formatPercent, formatSI, type BudgetTerm } from "@/lib/design";
+import { formatPercent, formatSI, type BudgetSource, type BudgetTerm } from "@/lib/design";
 
-const tones = [
-  "bg-copper",
-  "bg-copper/60",
-  "bg-signal",
-  "bg-signal/60",
-  "bg-warn",
-  "bg-warn/60",
-  "bg-good",
-  "bg-good/60",
-  "bg-bad/70",
-  "bg-ink-faint",
-];
+/** One tone per source, by kind: gain-type in copper, offset-type in teal, common mode in red, readout and noise apart. */
+const tones: Record<BudgetSource, string> = {
+  gainError: "bg-copper",
+  gainSetResistors: "bg-copper-strong",
+  shuntTolerance: "bg-copper/60",
+  shuntTempco: "bg-copper/35",
+  gainDrift: "bg-warn/60",
+  offset: "bg-signal",
+  offsetDrift: "bg-signal/60",
+  biasCurrent: "bg-signal/35",
+  commonMode: "bg-bad/70",
+  readout: "bg-good",
+  noise: "bg-ink-faint",
+};
 
 export function BudgetBar({ terms, currentA, label }: { terms: BudgetTerm[]; currentA: number; label: string }) {
   const total = terms.reduce((s, t) => s + Math.abs(t.errorA), 0);
-  const shown = terms.map((t, i) => ({
+  const shown = terms.map((t) => ({
     ...t,
-    tone: tones[i % tones.length]!,
+    tone: tones[t.source],
     share: total > 0 ? Math.abs(t.errorA) / total : 0,
   }));
   return (

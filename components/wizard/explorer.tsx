@@ -11,6 +11,7 @@ import { Rejections } from "@/components/candidates/rejections";
 import { Panel } from "@/components/ui/panel";
 import { candidateKey, choiceFromKey } from "@/lib/wizard/candidate-key";
 import type { useSolver } from "@/lib/wizard/use-solver";
+import { DiagnosisView } from "./diagnosis";
 import { SavePanel } from "./save-panel";
 
 const decades = [
@@ -251,6 +252,12 @@ const Results = memo(function Results({
         )}
       </Panel>
 
+      {result.diagnosis && (
+        <Panel title="What would make it work">
+          <DiagnosisView diagnosis={result.diagnosis} evaluated={result.evaluated} />
+        </Panel>
+      )}
+
       {result.rangePlan && (
         <Panel title={`Range plan: ${result.rangePlan.ranges.length} ranges`}>
           <div className="flex flex-col gap-3 text-xs">
@@ -262,7 +269,7 @@ const Results = memo(function Results({
                   <th>Shunt</th>
                   <th>Gain</th>
                   <th>Covers</th>
-                  <th>Drop at its top</th>
+                  <th>Drop at its top (with switch)</th>
                   <th>Counts at its bottom</th>
                   <th>Settling</th>
                 </tr>
@@ -276,7 +283,10 @@ const Results = memo(function Results({
                     <td>
                       {formatSI(r.minA, "A")} – {formatSI(r.maxA, "A")}
                     </td>
-                    <td>{formatSI(r.burdenAtTopV, "V")}</td>
+                    <td>
+                      {formatSI(r.worstBurdenV, "V")}{" "}
+                      <span className="text-ink-faint">({formatSI(r.switchOhms, "Ω")} switch)</span>
+                    </td>
                     <td>{Number(r.countsAtBottom.toPrecision(3))}</td>
                     <td>{formatSI(r.settlingS, "s")}</td>
                   </tr>
@@ -285,6 +295,7 @@ const Results = memo(function Results({
             </table>
             <p className="text-ink-muted">{result.rangePlan.switchOver}</p>
             <p className="text-ink-muted">{result.rangePlan.adds}</p>
+            <p className="text-ink-muted">{result.rangePlan.protection}</p>
           </div>
         </Panel>
       )}
