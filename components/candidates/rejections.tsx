@@ -22,7 +22,15 @@ export function Rejections({
         <tbody>
           {rows.map(({ r, n }) => (
             <tr key={r}>
-              <td className="w-1/2 py-0.5 pr-2">{rejectReasonLabels[r]}</td>
+              <td className="w-1/2 py-0.5 pr-2">
+                {rejectReasonLabels[r]}
+                {r === "commonMode" && (
+                  <span className="block text-2xs text-ink-faint">
+                    The amplifier&apos;s inputs sit at the shunt&apos;s two ends: near 0 V on the low side, at the
+                    supply on the high side. Pick a topology and part whose common-mode range covers that.
+                  </span>
+                )}
+              </td>
               <td className="py-0.5">
                 <div className="flex items-center gap-2">
                   <div

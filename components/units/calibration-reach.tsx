@@ -1,7 +1,7 @@
 // What calibrating each unit buys: the error terms it removes, the ones that remain and why, and
 // the worst-case accuracy a calibrated unit can reach across the span (the engine's figures).
-import type { CalibratedAccuracy } from "@/lib/design";
-import { formatSI } from "@/lib/design";
+import type { CalibratedAccuracy } from "@/lib/design/calibrated-accuracy";
+import { formatSI } from "@/lib/design/format";
 
 const pct = (x: number) => `${String(Number(x.toPrecision(2)))} %`;
 

@@ -8,7 +8,8 @@ import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
 import type { UnitView } from "@/lib/built-units/judge";
 import { recordUnitSchema, todayIso } from "@/lib/built-units/schemas";
-import { formatSI, type BenchCheckRow } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
+import type { BenchCheckRow } from "@/lib/design/bench-check";
 
 type Values = { serial: string; builtOn: string; readings: { currentA: number; outputV: string }[] };
 

@@ -6,7 +6,8 @@ import { AreaSeries, Axis, GlyphSeries, LineSeries, XYChart } from "@visx/xychar
 import { useMemo } from "react";
 import { chartTheme, usePalette } from "@/components/charts/palette";
 import { useWidth } from "@/components/charts/use-width";
-import { formatSI, type PredictedPoint } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
+import type { PredictedPoint } from "@/lib/design/unit-prediction";
 
 export type PlottedReading = { serial: string; outputV: number; inBand: boolean; selected: boolean };
 

@@ -2,7 +2,7 @@
 // and the error left after correction at each test point.
 import { Badge } from "@/components/ui/badge";
 import type { UnitView } from "@/lib/built-units/judge";
-import { formatSI } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
 
 /** Signed percent to two figures; below 0.001 % it is rounding, shown as 0. */
 const pct = (x: number) =>

@@ -2,7 +2,8 @@
 // Before saving: the span and supply, then every value set differently from the documented
 // defaults, step by step — including steps never opened — so nothing hidden travels into a design.
 import { useMemo } from "react";
-import { formatSI, type Requirement } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
+import type { Requirement } from "@/lib/design/requirement";
 import { differencesFromDefaults } from "@/lib/wizard/from-defaults";
 
 export function DefaultsSummary({ requirement }: { requirement: Requirement }) {

@@ -19,6 +19,7 @@ import { rankingInWords, recommendationReason, recommendedOf } from "@/lib/wizar
 import type { useSolver } from "@/lib/wizard/use-solver";
 import { Button } from "@/components/ui/button";
 import { DefaultsSummary } from "./defaults-summary";
+import { DiagnosisView } from "./diagnosis";
 import { SavePanel, type PickNote } from "./save-panel";
 
 const pairText = (c: { shuntOhms: number; gain: number }) =>
@@ -345,6 +346,12 @@ const Results = memo(function Results({
         )}
       </Panel>
 
+      {result.diagnosis && (
+        <Panel title="What would make it work">
+          <DiagnosisView diagnosis={result.diagnosis} evaluated={result.evaluated} />
+        </Panel>
+      )}
+
       {result.rangePlan && (
         <Panel title={`Range plan: ${result.rangePlan.ranges.length} ranges`}>
           <div className="flex flex-col gap-3 text-xs">
@@ -356,7 +363,7 @@ const Results = memo(function Results({
                   <th>Shunt</th>
                   <th>Gain</th>
                   <th>Covers</th>
-                  <th>Drop at its top</th>
+                  <th>Drop at its top (with switch)</th>
                   <th>Counts at its bottom</th>
                   <th>Settling</th>
                 </tr>
@@ -370,7 +377,10 @@ const Results = memo(function Results({
                     <td>
                       {formatSI(r.minA, "A")} – {formatSI(r.maxA, "A")}
                     </td>
-                    <td>{formatSI(r.burdenAtTopV, "V")}</td>
+                    <td>
+                      {formatSI(r.worstBurdenV, "V")}{" "}
+                      <span className="text-ink-faint">({formatSI(r.switchOhms, "Ω")} switch)</span>
+                    </td>
                     <td>{Number(r.countsAtBottom.toPrecision(3))}</td>
                     <td>{formatSI(r.settlingS, "s")}</td>
                   </tr>
@@ -379,6 +389,7 @@ const Results = memo(function Results({
             </table>
             <p className="text-ink-muted">{result.rangePlan.switchOver}</p>
             <p className="text-ink-muted">{result.rangePlan.adds}</p>
+            <p className="text-ink-muted">{result.rangePlan.protection}</p>
           </div>
         </Panel>
       )}

@@ -3,6 +3,7 @@
 import { useState } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
 import { seriesNames } from "@/lib/design/eseries";
+import { topologies, topologyLabels } from "@/lib/design/requirement";
 import type { WizardValues } from "@/lib/wizard/form-values";
 import { LibraryPicker, useLibrary } from "./library-picker";
 import {
@@ -227,6 +228,13 @@ export function ReadoutStep({ live }: { live: LiveErrors }) {
             placeholder="12"
             extraError={live("readout.bits")}
           />
+          <FormField
+            name="readout.sampleRateHz"
+            label="ADC sample rate"
+            placeholder="1 kHz"
+            hint="Its anti-alias filter is taken at half this; it bounds the noise"
+            extraError={live("readout.sampleRateHz")}
+          />
         </>
       )}
       <FormField
@@ -324,6 +332,20 @@ export function ShuntStep({ live }: { live: LiveErrors }) {
         placeholder="0.5"
         hint="0.5 uses at most half the rating"
         extraError={live("shunt.derating")}
+      />
+      <FormField
+        name="shunt.deratingKneeC"
+        label="Full power up to (ambient)"
+        placeholder="70 °C"
+        hint="The derating curve's knee"
+        extraError={live("shunt.deratingKneeC")}
+      />
+      <FormField
+        name="shunt.maxTempC"
+        label="Shunt maximum temperature"
+        placeholder="155 °C"
+        hint="No power left at this ambient; the hot spot may not pass it"
+        extraError={live("shunt.maxTempC")}
       />
       <div className="col-span-2">
         <FormField
@@ -429,7 +451,14 @@ export function AmplifierStep({
             label="Resistor series for Rf and Rg"
             options={seriesNames.map((s) => ({ value: s, label: s }))}
           />
-          <div className="grid grid-cols-2 gap-2">
+          <FormField
+            name="amplifier.gainSet.tolerance"
+            label="Gain resistor tolerance"
+            placeholder="0.1 %"
+            hint="Each of Rf and Rg; sets the gain error"
+            extraError={live("amplifier.gainSet.tolerance")}
+          />
+          <div className="col-span-2 grid grid-cols-2 gap-2">
             <FormField
               name="amplifier.gainSet.min"
               label="Lowest gain"
@@ -447,6 +476,37 @@ export function AmplifierStep({
           </div>
         </>
       )}
+      <div className="col-span-2">
+        <SelectField
+          name="amplifier.topology"
+          label="Amplifier topology"
+          hint="Decides the common-mode range and how the gain resistors and their matching count"
+          options={[
+            {
+              value: "",
+              label:
+                gainMode === "pair" ? "From the gains: non-inverting stage" : "From the gains: current-sense amplifier",
+            },
+            ...topologies.map((t) => ({ value: t, label: topologyLabels[t] })),
+          ]}
+        />
+      </div>
+      <FormField
+        name="amplifier.commonMode.min"
+        label="Lowest input common-mode voltage (optional)"
+        kind="optional"
+        placeholder="-0.3 V"
+        hint="Blank: the topology's usual range"
+        extraError={live("amplifier.commonMode.min")}
+      />
+      <FormField
+        name="amplifier.commonMode.max"
+        label="Highest input common-mode voltage (optional)"
+        kind="optional"
+        placeholder="26 V"
+        hint="High side: must reach the supply voltage"
+        extraError={live("amplifier.commonMode.max")}
+      />
       <FormField
         name="amplifier.offset"
         unit="V"
@@ -495,6 +555,14 @@ export function AmplifierStep({
         label="Gain-bandwidth"
         placeholder="2 MHz"
         extraError={live("amplifier.gbw")}
+      />
+      <FormField
+        name="amplifier.filterHz"
+        label="Output filter corner (optional)"
+        kind="optional"
+        placeholder="1 kHz"
+        hint="An RC filter after the amplifier; limits the noise"
+        extraError={live("amplifier.filterHz")}
       />
       <FormField
         name="amplifier.cmrrDb"

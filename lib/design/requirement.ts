@@ -95,6 +95,10 @@ const gainSetSchema = z.object({
   ).default(defaultGainSetTolerance),
 });
 
+const blank = (v: unknown) => v === undefined || v === null || (typeof v === "string" && v.trim() === "");
+const isBlankRange = (v: unknown) =>
+  typeof v === "object" && v !== null && blank((v as { min?: unknown }).min) && blank((v as { max?: unknown }).max);
+
 const group = (what: string) => ({
   error: (iss: { input?: unknown }) =>
     iss.input === undefined ? `${what} is required` : `${what}: expected an object`,
@@ -235,17 +239,27 @@ const baseSchema = z.object(
         swingHigh: q("voltage", "Output headroom below the amplifier supply", nonNegative("Output headroom")).default(
           0.05,
         ),
-        filterHz: q("frequency", "Output filter corner", positive("Output filter corner")).nullable().default(null),
+        // A form's blank box means no filter, as leaving it out does.
+        filterHz: z.preprocess(
+          (v) => (blank(v) ? null : v),
+          q("frequency", "Output filter corner", positive("Output filter corner")).nullable().default(null),
+        ),
         cmrrDb: z.number().min(0, { error: "CMRR cannot be negative" }).max(200).default(120),
-        topology: z
-          .enum(topologies, { error: `Amplifier topology: expected one of ${topologies.join(", ")}` })
-          .optional(),
-        commonMode: z
-          .object({
-            min: quantity("voltage", "Lowest input common-mode voltage"),
-            max: quantity("voltage", "Highest input common-mode voltage"),
-          })
-          .optional(),
+        // A form's empty choice means "by the gains": the same as leaving it out.
+        topology: z.preprocess(
+          (v) => (v === "" ? undefined : v),
+          z.enum(topologies, { error: `Amplifier topology: expected one of ${topologies.join(", ")}` }).optional(),
+        ),
+        // Both ends left empty (a form's blank boxes) means the topology's usual range.
+        commonMode: z.preprocess(
+          (v) => (isBlankRange(v) ? undefined : v),
+          z
+            .object({
+              min: quantity("voltage", "Lowest input common-mode voltage"),
+              max: quantity("voltage", "Highest input common-mode voltage"),
+            })
+            .optional(),
+        ),
       })
       .prefault({}),
     rangeSwitch: z

@@ -1,6 +1,6 @@
 // The allowed drop is given in volts or as a share of the supply; switching converts the value
 // (60 mV of a 3 V supply is 2 %) so the requirement stays the same. Nothing to convert → null.
-import { parseQuantity } from "@/lib/design";
+import { parseQuantity } from "@/lib/design/units";
 import type { WizardValues } from "./form-values";
 
 const figures = (x: number) => String(Number(x.toPrecision(4)));

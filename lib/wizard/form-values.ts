@@ -1,5 +1,7 @@
 // The wizard's form shape: what the designer types (unit strings), one field per input.
 // The engine's requirement schema validates it as it stands (extra keys are ignored).
+import type { RelaxSuggestion } from "@/lib/design/diagnosis";
+import { formatSI } from "@/lib/design/format";
 import type { LoadModel, RequirementInput } from "@/lib/design/requirement";
 import { deepMerge } from "./deep-merge";
 
@@ -8,7 +10,7 @@ export type WizardValues = {
   supply: { voltage: string; side: "low" | "high" };
   drop: { max?: string; fraction?: string; loadMin?: string };
   load: { model: LoadModel };
-  readout: { kind: "adc" | "meter"; bits?: number; counts?: number; fullScale: string };
+  readout: { kind: "adc" | "meter"; bits?: number; counts?: number; fullScale: string; sampleRateHz?: string };
   resolution: { countsAtMin: number };
   accuracy: { percent: string; bandMin?: string; bandMax?: string };
   temperature: { min: string; max: string };
@@ -20,10 +22,16 @@ export type WizardValues = {
     tempco: string;
     ratings: string[];
     derating: number;
+    deratingKneeC: string;
+    maxTempC: string;
   };
   amplifier: {
     gains?: number[];
-    gainSet?: { series: string; min: number; max: number };
+    gainSet?: { series: string; min: number; max: number; tolerance?: string };
+    /** "" lets the engine decide from the gains (resistor pair: non-inverting; list: current-sense). */
+    topology?: string;
+    commonMode?: { min?: string; max?: string };
+    filterHz?: string;
     offset: string;
     offsetDrift: string;
     gainError: string;
@@ -45,7 +53,7 @@ export const readableDefaults: WizardValues = {
   supply: { voltage: "", side: "low" },
   drop: { max: "60 mV" },
   load: { model: "constant-current" },
-  readout: { kind: "adc", bits: 12, counts: 2000, fullScale: "2.5 V" },
+  readout: { kind: "adc", bits: 12, counts: 2000, fullScale: "2.5 V", sampleRateHz: "1 kHz" },
   resolution: { countsAtMin: 10 },
   accuracy: { percent: "2" },
   temperature: { min: "0 °C", max: "70 °C" },
@@ -57,10 +65,15 @@ export const readableDefaults: WizardValues = {
     tempco: "50 ppm/K",
     ratings: ["0.1 W", "0.125 W", "0.25 W", "0.5 W", "1 W", "2 W", "3 W"],
     derating: 0.5,
+    deratingKneeC: "70 °C",
+    maxTempC: "155 °C",
   },
   amplifier: {
     gains: [10, 20, 25, 50, 60, 100, 200, 500],
-    gainSet: { series: "E24", min: 2, max: 1000 },
+    gainSet: { series: "E24", min: 2, max: 1000, tolerance: "0.1 %" },
+    topology: "",
+    commonMode: { min: "", max: "" },
+    filterHz: "",
     offset: "10 µV",
     offsetDrift: "0.1 µV/K",
     gainError: "0.1 %",
@@ -88,4 +101,21 @@ export function valuesFrom(input: RequirementInput): WizardValues {
     else if (typeof t === "number") i.temperature![k] = `${t} °C`;
   }
   return deepMerge(readableDefaults, i);
+}
+
+/** A diagnosis suggestion as the form's own text, which the form reads back to exactly the value the engine tried. */
+export function formValueFor(s: Pick<RelaxSuggestion, "field" | "to">): string | number {
+  switch (s.field) {
+    case "accuracy.percent":
+      return String(s.to);
+    case "accuracy.bandMin":
+    case "current.min":
+      return formatSI(s.to, "A", 6);
+    case "drop.max":
+      return formatSI(s.to, "V", 6);
+    case "amplifier.filterHz":
+      return formatSI(s.to, "Hz", 6);
+    default:
+      return s.to;
+  }
 }

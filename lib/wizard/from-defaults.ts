@@ -1,6 +1,6 @@
 // What a requirement sets differently from the documented defaults (lib/design/DEFAULTS.md),
 // grouped by the wizard step that asks for it, for the summary shown before saving.
-import { parseRequirement, type Requirement } from "@/lib/design";
+import { parseRequirement, type Requirement } from "@/lib/design/requirement";
 import { diffRevisions, type Change } from "@/lib/saved-designs/diff";
 import { deepMerge } from "./deep-merge";
 import { readableDefaults } from "./form-values";

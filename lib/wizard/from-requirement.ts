@@ -1,7 +1,8 @@
 // A saved (normalized, SI) requirement back into the wizard's typed form, for revising a design.
 // Values are written with 12 significant figures so the round trip through the parser is exact and
 // an untouched field never shows up as a change in the next revision.
-import { formatSI, type Requirement } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
+import type { Requirement } from "@/lib/design/requirement";
 import { readableDefaults, type WizardValues } from "./form-values";
 
 const exact = (x: number, unit: string) => formatSI(x, unit, 12);
@@ -53,7 +54,12 @@ export function revisionStart(req: Requirement): RevisionStart {
     load: { model: req.load.model },
     readout:
       req.readout.kind === "adc"
-        ? { kind: "adc", bits: req.readout.bits, fullScale: exact(req.readout.fullScale, "V") }
+        ? {
+            kind: "adc",
+            bits: req.readout.bits,
+            fullScale: exact(req.readout.fullScale, "V"),
+            sampleRateHz: exact(req.readout.sampleRateHz, "Hz"),
+          }
         : { kind: "meter", counts: req.readout.counts, fullScale: exact(req.readout.fullScale, "V") },
     resolution: { countsAtMin: req.resolution.countsAtMin },
     accuracy: {
@@ -75,9 +81,14 @@ export function revisionStart(req: Requirement): RevisionStart {
       tempco: ppm(req.shunt.tempco),
       ratings: req.shunt.ratings.map((w) => exact(w, "W")),
       derating: req.shunt.derating,
+      deratingKneeC: `${plain(req.shunt.deratingKneeC)} °C`,
+      maxTempC: `${plain(req.shunt.maxTempC)} °C`,
     },
     amplifier: {
-      ...(a.gainSet ? { gainSet: { ...a.gainSet } } : { gains: [...a.gains] }),
+      ...(a.gainSet ? { gainSet: { ...a.gainSet, tolerance: percent(a.gainSet.tolerance) } } : { gains: [...a.gains] }),
+      topology: a.topology,
+      commonMode: { min: exact(a.commonMode.min, "V"), max: exact(a.commonMode.max, "V") },
+      filterHz: a.filterHz === null ? "" : exact(a.filterHz, "Hz"),
       offset: exact(a.offset, "V"),
       offsetDrift: exact(a.offsetDrift, "V/K"),
       gainError: percent(a.gainError),

@@ -21,6 +21,10 @@ export type LibraryAmplifierRow = {
   cmrrDb: number;
   supplyMinV: number;
   supplyMaxV: number;
+  /** Absent from rows written before parts had a topology. */
+  topology?: string;
+  commonModeMinV?: number | null;
+  commonModeMaxV?: number | null;
 };
 
 export type LibraryShuntRow = {
@@ -66,6 +70,11 @@ export function libraryAmplifierValues(a: LibraryAmplifierRow): Partial<WizardVa
     swingLow: si(a.swingLowV, "V"),
     swingHigh: si(a.swingHighV, "V"),
     cmrrDb: a.cmrrDb,
+    topology: a.topology ?? "",
+    commonMode: {
+      min: typeof a.commonModeMinV === "number" ? si(a.commonModeMinV, "V") : "",
+      max: typeof a.commonModeMaxV === "number" ? si(a.commonModeMaxV, "V") : "",
+    },
   };
   // The same rule as the library's own mapping (lib/library/to-requirement.ts).
   if (a.gainMode === "resistor-set" && gains.length > 0) return { ...base, gainSet: resistorSetGains(gains) };

@@ -1,6 +1,6 @@
 // The working range (common practice, no source): absurd entries get a plain message naming the field.
 import { describe, expect, it } from "vitest";
-import { parseRequirement } from "@/lib/design";
+import { parseRequirement } from "@/lib/design/requirement";
 import { outOfRange, outOfRangeTyped } from "./ranges";
 
 const req = (over: Record<string, unknown>) => {

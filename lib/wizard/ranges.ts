@@ -2,7 +2,9 @@
 // finite number; a typo such as 1e30 A would otherwise come back as figures in "PA". These are the
 // product's working range (common practice, no source), not physics: wide enough for a picoammeter
 // front end and a welding-current shunt alike.
-import { formatSI, parseQuantity, type Dimension, type FieldErrors, type Requirement } from "@/lib/design";
+import { formatSI } from "@/lib/design/format";
+import { parseQuantity, type Dimension } from "@/lib/design/units";
+import type { FieldErrors, Requirement } from "@/lib/design/requirement";
 
 type Bound = {
   path: string;

@@ -1,6 +1,8 @@
 // The recommended pair and why, in words: the top of the engine's ranking (lib/design/solve.ts
 // ranks the front by how much of each limit a pair uses), described by those same shares.
-import { defaultRankingText, formatPercent, formatSI, type Candidate, type SolveResult } from "@/lib/design";
+import { defaultRankingText, type SolveResult } from "@/lib/design/solve";
+import { formatPercent, formatSI } from "@/lib/design/format";
+import type { Candidate } from "@/lib/design/types";
 
 /** The top-ranked feasible pair of a solve, or null when none is feasible. */
 export function recommendedOf(result: SolveResult | null): Candidate | null {

@@ -1,6 +1,7 @@
 // The solver off the main thread: parse the raw form values with the engine's schema, sweep,
 // and post the result back. Only the latest request matters; the page drops stale replies.
-import { parseRequirement, solve } from "@/lib/design";
+import { parseRequirement } from "@/lib/design/requirement";
+import { solve } from "@/lib/design/solve";
 import { outOfRange } from "./ranges";
 import type { SolveReply, SolveRequest } from "./solver-protocol";
 

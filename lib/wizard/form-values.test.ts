@@ -1,0 +1,54 @@
+// A diagnosis suggestion applied through the form must reach the engine as the very value it tried.
+import { describe, expect, it } from "vitest";
+import { e24Ladder } from "@/lib/design/diagnosis";
+import { parseRequirement } from "@/lib/design/requirement";
+import { solve } from "@/lib/design/solve";
+import { formValueFor, readableDefaults } from "./form-values";
+
+describe("formValueFor", () => {
+  it.each([
+    ["current.min", "current", "min", e24Ladder(1e-7, 10)],
+    ["accuracy.bandMin", "accuracy", "bandMin", e24Ladder(1e-6, 1)],
+    ["drop.max", "drop", "max", e24Ladder(1e-4, 10)],
+    ["amplifier.filterHz", "amplifier", "filterHz", [0.1, 0.2, 0.5, 1, 2, 5, 10, 20e3, 50e3, 100e3]],
+    ["accuracy.percent", "accuracy", "percent", e24Ladder(0.1, 100)],
+  ] as const)("%s reads back exactly", (field, group, key, values) => {
+    for (const to of values) {
+      const input: Record<string, object> = {
+        current: { min: "1 nA", max: "20 A" },
+        supply: { voltage: "30 V" },
+      };
+      if (group === "accuracy") input.accuracy = { bandMin: "1 uA" };
+      input[group] = { ...input[group], [key]: formValueFor({ field, to }) };
+      const r = parseRequirement(input);
+      if (!r.ok) throw new Error(`${field} ${to}: ${r.message}`);
+      const back = (r.requirement as unknown as Record<string, Record<string, number>>)[group]?.[key];
+      expect(back).toBe(to);
+    }
+  });
+  it("a suggestion applied to the wizard's form gives the count it promised", () => {
+    const values = {
+      ...readableDefaults,
+      current: { min: "1 mA", max: "250 mA" },
+      supply: { voltage: "3.3 V", side: "low" as const },
+      drop: { max: "50 mV" },
+      readout: { kind: "adc" as const, bits: 12, fullScale: "3.3 V", sampleRateHz: "1 kHz" },
+      accuracy: { percent: "1", bandMin: "1 mA" },
+      temperature: { min: "-20 °C", max: "60 °C" },
+    };
+    const { gainSet: _pair, ...amplifier } = values.amplifier;
+    const form = { ...values, amplifier };
+    const first = parseRequirement(form);
+    if (!first.ok) throw new Error(first.message);
+    const relax = solve(first.requirement).diagnosis?.relax ?? [];
+    expect(relax.length).toBeGreaterThan(0);
+    for (const s of relax) {
+      const [group, key] = s.field.split(".") as [string, string];
+      const groups = form as unknown as Record<string, object>;
+      const changed = { ...form, [group]: { ...groups[group], [key]: formValueFor(s) } };
+      const again = parseRequirement(changed);
+      if (!again.ok) throw new Error(again.message);
+      expect(solve(again.requirement, { diagnose: false }).feasibleCount).toBe(s.feasibleCount);
+    }
+  });
+});
