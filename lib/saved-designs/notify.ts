@@ -14,6 +14,15 @@ type DesignRef = {
   metrics: CandidateDetail;
 };
 
+/** What the mail says about a design, from its row and current revision as designFor returns them. */
+export function designRefOf(
+  design: { id: string; name: string; project: string | null; revision: number },
+  current: { choice: Choice; metrics: unknown },
+): DesignRef {
+  const { id, name, project, revision } = design;
+  return { id, name, project, revision, choice: current.choice, metrics: current.metrics as CandidateDetail };
+}
+
 const summary = (d: DesignRef) =>
   [
     `Design: ${d.name}${d.project ? ` (${d.project})` : ""}, revision ${d.revision}`,

@@ -2,9 +2,8 @@ import { listRevisions } from "@/db/queries/designs";
 import { addReview, listReviews } from "@/db/queries/reviews";
 import { apiRoute, authorize } from "@/lib/auth/gate";
 import { HttpError, json, refused } from "@/lib/http";
-import type { CandidateDetail } from "@/lib/design";
 import { designFor } from "@/lib/saved-designs/access";
-import { mailReviewed } from "@/lib/saved-designs/notify";
+import { designRefOf, mailReviewed } from "@/lib/saved-designs/notify";
 import { reviewBodySchema } from "@/lib/route-schemas";
 
 export const GET = apiRoute({ action: "design.read", doing: "read reviews" }, async ({ caller, params }) => {
@@ -47,14 +46,7 @@ export const POST = apiRoute(
     const mailed = await mailReviewed(
       caller.teamId,
       caller,
-      {
-        id: design.id,
-        name: design.name,
-        project: design.project,
-        revision: design.revision,
-        choice: current.choice,
-        metrics: current.metrics as unknown as CandidateDetail,
-      },
+      designRefOf(design, current),
       { verdict: body.verdict, body: body.body, revision: result.revision },
       recipients,
     );

@@ -1,9 +1,8 @@
 import { changeDesignStatus } from "@/db/queries/designs";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError, refused } from "@/lib/http";
-import type { CandidateDetail } from "@/lib/design";
 import { designFor } from "@/lib/saved-designs/access";
-import { mailSubmitted } from "@/lib/saved-designs/notify";
+import { designRefOf, mailSubmitted } from "@/lib/saved-designs/notify";
 import { submitBodySchema } from "@/lib/route-schemas";
 
 /** draft or returned → in-review; mails the team's reviewers. */
@@ -30,13 +29,6 @@ export const POST = apiRoute({ action: "design.submit", body: submitBodySchema }
     action: "design.submitted",
   });
   if (!changed.ok) throw refused(changed);
-  const mailed = await mailSubmitted(caller.teamId, caller, {
-    id: design.id,
-    name: design.name,
-    project: design.project,
-    revision: design.revision,
-    choice: current.choice,
-    metrics: current.metrics as unknown as CandidateDetail,
-  });
+  const mailed = await mailSubmitted(caller.teamId, caller, designRefOf(design, current));
   return { id: design.id, revision: design.revision, status: "in-review", mailed };
 });
