@@ -24,6 +24,13 @@ export function AcceptInvitationForm({
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const password = String(form.get("password") ?? "");
+    if (!hasAccount && password.length < 10) {
+      setError({
+        message: "Choose a password of at least 10 characters.",
+        fieldErrors: { password: [`at least 10 characters (this one has ${password.length})`] },
+      });
+      return;
+    }
     if (!hasAccount && password !== String(form.get("confirm") ?? "")) {
       setError({ message: "The two passwords differ.", fieldErrors: { confirm: ["does not match the password"] } });
       return;
@@ -38,7 +45,19 @@ export function AcceptInvitationForm({
     const data = (await res.json().catch(() => ({}))) as { message?: string; fieldErrors?: Record<string, string[]> };
     if (!res.ok) {
       setBusy(false);
-      setError({ message: data.message ?? `The server refused (${res.status}).`, fieldErrors: data.fieldErrors });
+      // Field messages go beside their fields, in words; the line above the button says what to do.
+      const fieldErrors = data.fieldErrors
+        ? Object.fromEntries(
+            Object.entries(data.fieldErrors).map(([k, v]) => [
+              k,
+              v.map((m) => m.replace(new RegExp(`^${k}:\\s*`, "i"), "")),
+            ]),
+          )
+        : undefined;
+      setError({
+        message: fieldErrors ? "Check the marked fields." : (data.message ?? `The server refused (${res.status}).`),
+        fieldErrors,
+      });
       return;
     }
     const signedIn = await signIn("credentials", { email, password, redirect: false });
