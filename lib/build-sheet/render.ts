@@ -5,6 +5,7 @@ import type { DesignView } from "@/lib/design-view";
 import { sheetFonts } from "./font";
 import { BuildSheetDocument, PLANNED_PAGES, type SheetMeta } from "./pdf/document";
 import { FONT } from "./pdf/theme";
+import type { LibraryParts } from "./library-parts";
 import { sheetData, type SheetData } from "./sheet-data";
 
 function registerFonts() {
@@ -30,8 +31,8 @@ export function pdfPageCount(pdf: Buffer): number {
 
 type DocElement = Parameters<typeof renderToBuffer>[0];
 
-export async function renderBuildSheet(view: DesignView, opts: SheetMeta): Promise<Buffer> {
-  return renderSheet(view, sheetData(view), opts);
+export async function renderBuildSheet(view: DesignView, opts: SheetMeta, library?: LibraryParts): Promise<Buffer> {
+  return renderSheet(view, sheetData(view, library), opts);
 }
 
 /** The same, from sheet data already worked out (tests feed it oversized data). */

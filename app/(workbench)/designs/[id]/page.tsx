@@ -9,6 +9,7 @@ import { ReviewPanel } from "@/components/review/review-panel";
 import { StatusBadge, statusExplained } from "@/components/review/status-badge";
 import { listTargetAudit } from "@/db/queries/audit";
 import { getDesignView, isUuid, listDesigns, listRevisions } from "@/db/queries/designs";
+import { listLibrary } from "@/db/queries/library";
 import { listReviews } from "@/db/queries/reviews";
 import { formatSI } from "@/lib/design";
 import { requirePageCaller } from "@/lib/auth/gate";
@@ -25,11 +26,12 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
   // Makers see approved designs only; anything else is "not found" for them, as in the API.
   if (!design || (caller.role === "maker" && design.status !== "approved")) notFound();
   const viewer: DesignViewer = { userId: caller.userId, role: caller.role };
-  const [revisions, reviews, audit, others] = await Promise.all([
+  const [revisions, reviews, audit, others, library] = await Promise.all([
     listRevisions(design.id),
     listReviews(design.id),
     listTargetAudit(caller.teamId, "design", design.id),
     listDesigns(caller.teamId, { approvedOnly: caller.role === "maker" }),
+    listLibrary(caller.teamId),
   ]);
   const { metrics, choice } = design;
   return (
@@ -73,7 +75,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
         </dl>
       </header>
       {/* A maker comes to build: the download, parts list and bench check lead the page. */}
-      {caller.role === "maker" && <BuildSheetPanel design={design} viewer={viewer} />}
+      {caller.role === "maker" && <BuildSheetPanel design={design} viewer={viewer} library={library} />}
       <ComparePicker
         current={{ id: design.id, name: design.name }}
         others={others
@@ -88,7 +90,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
         reviews={reviews}
         audit={audit.map((e) => ({ ...e, at: e.at.toISOString() }))}
       />
-      {caller.role !== "maker" && <BuildSheetPanel design={design} viewer={viewer} />}
+      {caller.role !== "maker" && <BuildSheetPanel design={design} viewer={viewer} library={library} />}
       <ProfilesPanel design={design} viewer={viewer} />
     </div>
   );
