@@ -32,7 +32,19 @@ export function NewAccountForm({ token, email }: { token: string; email: string 
     const data = (await res.json().catch(() => ({}))) as Partial<Refusal>;
     if (!res.ok) {
       setBusy(false);
-      setError({ message: data.message ?? `The server refused (${res.status}).`, fieldErrors: data.fieldErrors });
+      // Field messages go beside their fields, in words; the line above the button says what to do.
+      const fieldErrors = data.fieldErrors
+        ? Object.fromEntries(
+            Object.entries(data.fieldErrors).map(([k, v]) => [
+              k,
+              v.map((m) => m.replace(new RegExp(`^${k}:\\s*`, "i"), "")),
+            ]),
+          )
+        : undefined;
+      setError({
+        message: fieldErrors ? "Check the marked fields." : (data.message ?? `The server refused (${res.status}).`),
+        fieldErrors,
+      });
       return;
     }
     const signedIn = await signIn("credentials", { email, password, redirect: false });

@@ -1,5 +1,6 @@
 import type { DesignView, DesignViewer } from "@/lib/design-view";
 import { benchHowTo, benchRows, cautions } from "@/lib/build-sheet/sheet-data";
+import { matchLibraryParts, nameLibraryParts, type LibraryParts } from "@/lib/build-sheet/library-parts";
 import { partsList } from "@/lib/build-sheet/parts";
 import { evaluateCandidate } from "@/lib/design/candidate";
 import { Badge } from "@/components/ui/badge";
@@ -10,14 +11,27 @@ import { buttonClass } from "@/components/ui/button";
  * design file), the parts list and the bench check, with the cautions. Figures from the engine,
  * worded by lib/build-sheet exactly as on the printed sheet.
  */
-export function BuildSheetPanel({ design, viewer }: { design: DesignView; viewer: DesignViewer }) {
+export function BuildSheetPanel({
+  design,
+  viewer,
+  library,
+}: {
+  design: DesignView;
+  viewer: DesignViewer;
+  /** The team library, to name the parts the pair came from. */
+  library?: LibraryParts;
+}) {
   const base = `/api/designs/${design.id}`;
   const approved = design.status === "approved";
   const maker = viewer.leadsWithBuildSheet;
-  const parts = partsList(design.requirement, design.choice);
+  const metrics = evaluateCandidate(design.requirement, design.choice);
+  const listed = partsList(design.requirement, design.choice, metrics);
+  const parts = library
+    ? nameLibraryParts(listed, matchLibraryParts(design.requirement, design.choice, metrics, library))
+    : listed;
   const bench = benchRows(design.requirement, design.choice);
   const howTo = benchHowTo(design.requirement);
-  const warnings = cautions(design.requirement, evaluateCandidate(design.requirement, design.choice));
+  const warnings = cautions(design.requirement, metrics);
   return (
     <section
       aria-labelledby="build-sheet-heading"
@@ -28,9 +42,7 @@ export function BuildSheetPanel({ design, viewer }: { design: DesignView; viewer
         <div className="min-w-0">
           <h2
             id="build-sheet-heading"
-            className={
-              maker ? "text-base font-semibold" : "text-xs font-semibold tracking-wide text-ink-muted"
-            }
+            className={maker ? "text-base font-semibold" : "text-xs font-semibold tracking-wide text-ink-muted"}
           >
             Build and bench check
           </h2>

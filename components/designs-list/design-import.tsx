@@ -5,7 +5,7 @@
 import { useRouter } from "next/navigation";
 import { useId, useRef, useState } from "react";
 
-type Refusal = { message: string; fieldErrors?: Record<string, string[]> };
+type Refusal = { message: string; fieldErrors?: Record<string, string[]>; suggestedName?: string };
 
 const MAX_BYTES = 1_000_000;
 
@@ -16,9 +16,49 @@ export function ImportDesign() {
   const input = useRef<HTMLInputElement>(null);
   const [busy, setBusy] = useState(false);
   const [refusal, setRefusal] = useState<Refusal | null>(null);
+  // A name already in the team: the file is kept to import again under the name chosen here.
+  const [retry, setRetry] = useState<{ file: Record<string, unknown>; name: string } | null>(null);
+
+  async function post(text: string) {
+    const res = await fetch("/api/designs/import", {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: text,
+    });
+    const body = (await res.json().catch(() => ({ message: `The server answered ${res.status}.` }))) as Refusal & {
+      id?: string;
+    };
+    if (res.status === 201 && body.id) {
+      setRetry(null);
+      router.push(`/designs/${body.id}`);
+      router.refresh();
+      return;
+    }
+    if (res.status === 409 && body.suggestedName) {
+      setRetry({ file: JSON.parse(text) as Record<string, unknown>, name: body.suggestedName });
+      setRefusal({ message: body.message });
+      return;
+    }
+    setRetry(null);
+    setRefusal({ message: body.message ?? `The server answered ${res.status}.`, fieldErrors: body.fieldErrors });
+  }
+
+  async function importAs(name: string) {
+    if (!retry) return;
+    setBusy(true);
+    setRefusal(null);
+    try {
+      await post(JSON.stringify({ ...retry.file, name: name.trim() }));
+    } catch {
+      setRefusal({ message: "Could not reach the server; nothing was imported." });
+    } finally {
+      setBusy(false);
+    }
+  }
 
   async function onFile(file: File) {
     setRefusal(null);
+    setRetry(null);
     if (file.size > MAX_BYTES) {
       setRefusal({ message: `${file.name} is larger than 1 MB; a design file is a few kilobytes.` });
       return;
@@ -32,20 +72,7 @@ export function ImportDesign() {
         setRefusal({ message: `${file.name} is not a JSON file; choose a design file exported from Sensewright.` });
         return;
       }
-      const res = await fetch("/api/designs/import", {
-        method: "POST",
-        headers: { "content-type": "application/json" },
-        body: text,
-      });
-      const body = (await res.json().catch(() => ({ message: `The server answered ${res.status}.` }))) as Refusal & {
-        id?: string;
-      };
-      if (res.status === 201 && body.id) {
-        router.push(`/designs/${body.id}`);
-        router.refresh();
-        return;
-      }
-      setRefusal({ message: body.message ?? `The server answered ${res.status}.`, fieldErrors: body.fieldErrors });
+      await post(text);
     } catch {
       setRefusal({ message: "Could not reach the server; nothing was imported." });
     } finally {
@@ -76,8 +103,35 @@ export function ImportDesign() {
         />
       </label>
       <div id={`${inputId}-status`} role="status" aria-live="polite" className="max-w-md text-right text-2xs">
+        {retry && (
+          <form
+            className="mt-1 flex flex-wrap items-center justify-end gap-1.5"
+            onSubmit={(e) => {
+              e.preventDefault();
+              void importAs(retry.name);
+            }}
+          >
+            <label htmlFor={`${inputId}-name`} className="text-ink-muted">
+              Import as
+            </label>
+            <input
+              id={`${inputId}-name`}
+              value={retry.name}
+              maxLength={200}
+              onChange={(e) => setRetry({ ...retry, name: e.target.value })}
+              className="w-56 max-w-full rounded border border-line bg-panel px-2 py-1 text-xs"
+            />
+            <button
+              type="submit"
+              disabled={busy || !retry.name.trim()}
+              className="rounded border border-line bg-panel px-2 py-1 text-xs font-medium hover:bg-sunken"
+            >
+              Import under this name
+            </button>
+          </form>
+        )}
         {refusal && (
-          <div className="text-bad" data-testid="import-error">
+          <div className={retry ? "text-warn" : "text-bad"} data-testid="import-error">
             <p className="font-medium">{refusal.message}</p>
             {refusal.fieldErrors && (
               <ul className="mt-0.5">

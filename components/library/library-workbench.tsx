@@ -205,6 +205,7 @@ type ImportResult = { created: number; updated: number; kind: PartKind; fileName
 function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message: string) => void }) {
   const [kind, setKind] = useState<PartKind>("amplifiers");
   const [error, setError] = useState<string | null>(null);
+  const [problems, setProblems] = useState<{ message: string }[]>([]);
   const [busy, setBusy] = useState(false);
   const fileRef = useRef<HTMLInputElement>(null);
 
@@ -220,7 +221,11 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
     const res = await fetch("/api/library/import", { method: "POST", body: form }).catch(() => null);
     setBusy(false);
     if (!res) return setError("The server could not be reached; nothing was imported.");
-    const data = (await res.json().catch(() => ({}))) as Partial<ImportResult> & { message?: string };
+    const data = (await res.json().catch(() => ({}))) as Partial<ImportResult> & {
+      message?: string;
+      problems?: { message: string }[];
+    };
+    setProblems(!res.ok && data.problems && data.problems.length > 1 ? data.problems : []);
     if (!res.ok) return setError(data.message ?? `The import was refused (${res.status}).`);
     if (fileRef.current) fileRef.current.value = "";
     onDone(`Imported ${data.fileName}: ${data.created} added, ${data.updated} updated.`);
@@ -277,6 +282,13 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
             <p role="alert" aria-live="assertive" className="text-sm font-medium text-bad" data-testid="import-error">
               {error}
             </p>
+            {problems.length > 0 && (
+              <ol className="list-decimal pl-5 text-xs text-bad" data-testid="import-problems">
+                {problems.map((p, i) => (
+                  <li key={i}>{p.message}</li>
+                ))}
+              </ol>
+            )}
           </form>
         ) : (
           <p className="text-sm text-ink-muted">

@@ -6,6 +6,7 @@ import { breakPoints, sheetFonts } from "./fonts";
 import { BuildSheetDocument, PLANNED_PAGES, type SheetMeta } from "./pdf/document";
 import { oneLine } from "@/lib/text-field";
 import { namesOnOneLine, sheetData, type SheetData } from "./sheet-data";
+import type { LibraryParts } from "./library-parts";
 
 /** Registers the typefaces a sheet's text needs and answers the family list to set it in. */
 function fontsFor(view: DesignView, data: SheetData, meta: SheetMeta): string[] {
@@ -20,8 +21,8 @@ export function pdfPageCount(pdf: Buffer): number {
 
 type DocElement = Parameters<typeof renderToBuffer>[0];
 
-export async function renderBuildSheet(view: DesignView, opts: SheetMeta): Promise<Buffer> {
-  return renderSheet(view, sheetData(view), opts);
+export async function renderBuildSheet(view: DesignView, opts: SheetMeta, library?: LibraryParts): Promise<Buffer> {
+  return renderSheet(view, sheetData(view, library), opts);
 }
 
 /** The same, from sheet data already worked out (tests feed it oversized data). */

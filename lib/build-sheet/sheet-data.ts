@@ -16,6 +16,7 @@ import {
 import type { DesignView } from "@/lib/design-view";
 import { oneLine } from "@/lib/text-field";
 import * as f from "./format";
+import { matchLibraryParts, nameLibraryParts, type LibraryParts } from "./library-parts";
 import { kelvinAdvice, partsList, readoutText, type Part } from "./parts";
 
 export type Row = { label: string; value: string };
@@ -205,13 +206,16 @@ export function cautions(req: Requirement, m: CandidateDetail): string[] {
   return designCautions(req, m).map((c) => `${c.title}: ${c.text}`);
 }
 
-export function sheetData(view: Pick<DesignView, "requirement" | "choice">): SheetData {
+/** `library`: the team's parts, to name the ones the pair came from. */
+export function sheetData(view: Pick<DesignView, "requirement" | "choice">, library?: LibraryParts): SheetData {
   const { requirement: req, choice } = view;
   const m = evaluateCandidate(req, choice);
   const budget = budgetRows(req, choice);
   return {
     requirement: requirementRows(req),
-    parts: partsList(req, choice, m),
+    parts: library
+      ? nameLibraryParts(partsList(req, choice, m), matchLibraryParts(req, choice, m, library))
+      : partsList(req, choice, m),
     performance: performanceRows(req, m),
     budget: budget.rows,
     budgetTotals: budget.totals,

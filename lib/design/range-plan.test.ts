@@ -68,6 +68,9 @@ describe("range plans for spans too wide for one range", () => {
     const plan = solve(cases[0][1]).rangePlan;
     expect(plan?.ranges.length).toBe(3);
     for (const x of plan?.ranges ?? []) expect(x.maxA / x.minA).toBeGreaterThan(10);
+    // Three ranges are not "both" (wording; common practice, no source).
+    expect(plan?.switchOver).not.toMatch(/Both ranges/);
+    expect(plan?.switchOver).toMatch(/neighbouring ranges \(all 3\)/);
   });
 
   it("proposes no plan when one range is enough", () => {

@@ -239,7 +239,9 @@ export function planRanges(req: Requirement, m: Model, sw: SweepArrays): RangePl
     switchPoints,
     switchOver:
       `Start on the lowest range. Switch to the next higher range when the current reaches the top of the range in use, and back down only when it falls below ${SWITCH_DOWN_FRACTION * 100} % of that top (${pointsText}). ` +
-      "Both ranges read within their limits in the overlap, so the reading does not chatter at a boundary.",
+      (ranges.length === 2
+        ? "Both ranges read within their limits in the overlap, so the reading does not chatter at a boundary."
+        : `Each pair of neighbouring ranges (all ${ranges.length}) reads within its limits where the two overlap, so the reading does not chatter at a boundary.`),
     adds:
       "Each range switch (a MOSFET or relay selecting the shunt) puts its on-resistance in series with the measured path: keep it well below the shunt it switches, or count it in the allowed drop, and use make-before-break switching so the load never sees an open circuit. " +
       `After a switch the amplifier needs about ${formatSI(slowest, "s")} to settle within half a readout step; discard readings taken in that time.`,

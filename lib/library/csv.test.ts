@@ -85,3 +85,26 @@ describe("library CSV", () => {
     });
   });
 });
+
+describe("library CSV problems", () => {
+  const good = "Bench strip,E24,1,100,1 %,50 ppm/K,0.5 W; 1 W,yes";
+  const head = "Name,Series,Min [mohm],Max (mohm),Tolerance,Tempco,Ratings,4-terminal";
+  it("reports every bad row, not only the first", () => {
+    const text = [head, good, "Bad one,E7,1,100,1 %,50 ppm/K,1 W,yes", "Bad two,E24,1,100,lots,50 ppm/K,1 W,yes"].join(
+      "\n",
+    );
+    const r = parseLibraryCsv("shunts", text);
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.problems?.map((p) => p.place.row)).toEqual([2, 3]);
+    expect(r.stopped).toBe(false);
+  });
+  it("stops after 50 bad rows", () => {
+    const bad = Array.from({ length: 80 }, (_, i) => `Bad ${i},E7,1,100,1 %,50 ppm/K,1 W,yes`);
+    const r = parseLibraryCsv("shunts", [head, ...bad].join("\n"));
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.problems).toHaveLength(50);
+    expect(r.stopped).toBe(true);
+  });
+});

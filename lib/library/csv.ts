@@ -195,15 +195,19 @@ function readCell(col: HeaderColumn, raw: string): CellResult {
 
 export type ImportedParts = { kind: "amplifiers"; rows: AmplifierValues[] } | { kind: "shunts"; rows: ShuntValues[] };
 
-/** Parses a whole library CSV; the first problem refuses the file (nothing is imported). */
+/** The most bad rows one refused import reports. */
+export const MAX_ROW_PROBLEMS = 50;
+
+/** Parses a whole library CSV; any problem refuses the file (nothing is imported), every bad row named. */
 export function parseLibraryCsv(
   kind: PartKind,
   text: string,
-): { ok: true; parts: ImportedParts } | { ok: false; refusal: CsvRefusal } {
+): { ok: true; parts: ImportedParts } | { ok: false; refusal: CsvRefusal; problems?: CsvRefusal[]; stopped?: boolean } {
   const schema: z.ZodType = kind === "amplifiers" ? amplifierInput : shuntInput;
   let header = null as HeaderColumn[] | null;
   const rows: unknown[] = [];
   const names = new Map<string, number>();
+  const problems: CsvRefusal[] = [];
 
   const walk = walkCsv(text, {
     header(cells, line) {
@@ -212,44 +216,55 @@ export function parseLibraryCsv(
       header = h;
     },
     row(cells, row, line) {
-      if (!header) return;
-      if (row > 10_000) return new CsvRefusal("the file has more than 10000 parts", { row, line });
-      if (cells.length !== header.length)
-        return new CsvRefusal(`the row has ${cells.length} cells but the header has ${header.length} columns`, {
-          row,
-          line,
-        });
-      const values: Record<string, unknown> = {};
-      for (const col of header) {
-        const raw = cells[col.index] ?? "";
-        if (col.spec.optional && raw.trim() === "") continue;
-        const r = readCell(col, raw);
-        if (!r.ok) return new CsvRefusal(r.reason, { row, line, column: col.label });
-        values[col.spec.key] = r.value;
-      }
-      const parsed = schema.safeParse(values);
-      const nameColumn = header.find((c) => c.spec.key === "name")!.label;
-      if (!parsed.success) {
-        const issue = parsed.error.issues[0]!;
-        const key = String(issue.path[0] ?? "name");
-        return new CsvRefusal(issue.message, {
-          row,
-          line,
-          column: header.find((c) => c.spec.key === key)?.label ?? key,
-        });
-      }
-      const name = String(values.name).toLowerCase();
-      const seen = names.get(name);
-      if (seen !== undefined) {
-        return new CsvRefusal(
-          `the name "${truncate(String(values.name))}" is already used by data row ${seen}; each part needs its own name`,
-          { row, line, column: nameColumn },
-        );
-      }
-      names.set(name, row);
-      rows.push(parsed.data);
+      // Every bad row is reported (up to MAX_ROW_PROBLEMS), not just the first; nothing is imported.
+      const problem = checkRow(cells, row, line);
+      if (!problem) return;
+      problems.push(problem);
+      if (problems.length >= MAX_ROW_PROBLEMS)
+        return new CsvRefusal(`${MAX_ROW_PROBLEMS} rows have problems; reading stopped there`, { row, line });
     },
   });
+
+  function checkRow(cells: string[], row: number, line: number): CsvRefusal | undefined {
+    if (!header) return;
+    if (row > 10_000) return new CsvRefusal("the file has more than 10000 parts", { row, line });
+    if (cells.length !== header.length)
+      return new CsvRefusal(`the row has ${cells.length} cells but the header has ${header.length} columns`, {
+        row,
+        line,
+      });
+    const values: Record<string, unknown> = {};
+    for (const col of header) {
+      const raw = cells[col.index] ?? "";
+      if (col.spec.optional && raw.trim() === "") continue;
+      const r = readCell(col, raw);
+      if (!r.ok) return new CsvRefusal(r.reason, { row, line, column: col.label });
+      values[col.spec.key] = r.value;
+    }
+    const parsed = schema.safeParse(values);
+    const nameColumn = header.find((c) => c.spec.key === "name")!.label;
+    if (!parsed.success) {
+      const issue = parsed.error.issues[0]!;
+      const key = String(issue.path[0] ?? "name");
+      return new CsvRefusal(issue.message, {
+        row,
+        line,
+        column: header.find((c) => c.spec.key === key)?.label ?? key,
+      });
+    }
+    const name = String(values.name).toLowerCase();
+    const seen = names.get(name);
+    if (seen !== undefined) {
+      return new CsvRefusal(
+        `the name "${truncate(String(values.name))}" is already used by data row ${seen}; each part needs its own name`,
+        { row, line, column: nameColumn },
+      );
+    }
+    names.set(name, row);
+    rows.push(parsed.data);
+  }
+  const stopped = walk.refusal;
+  if (problems.length > 0) return { ok: false, refusal: problems[0]!, problems, stopped: !!stopped };
   const refusal = walk.refusal;
   if (refusal) return { ok: false, refusal };
   if (!header)

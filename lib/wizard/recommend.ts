@@ -17,11 +17,13 @@ export function recommendationReason(c: Candidate, result: SolveResult): string 
   const req = result.requirement;
   const stepLimit = req.current.min / req.resolution.countsAtMin;
   return (
-    `It uses the least of the three limits taken together: its error at the smallest current is ` +
-    `${formatPercent(c.errorAtMinPercent / 100)} against a ${formatPercent(req.accuracy.percent / 100)} target ` +
-    `(${share(c.errorAtMinPercent, req.accuracy.percent)} of it), it drops ${formatSI(c.burdenV, "V")} of the ` +
-    `${formatSI(req.drop.max, "V")} allowed (${share(c.burdenV, req.drop.max)}), and one readout step is ` +
-    `${formatSI(c.lsbA, "A")} where ${formatSI(stepLimit, "A")} is needed (${share(c.lsbA, stepLimit)}).`
+    `It uses the least of the three limits taken together among the pairs on the Pareto front: it drops ` +
+    `${formatSI(c.burdenV, "V")} of the ${formatSI(req.drop.max, "V")} allowed (${share(c.burdenV, req.drop.max)}), ` +
+    `one readout step is ${formatSI(c.lsbA, "A")} where ${formatSI(stepLimit, "A")} is needed ` +
+    `(${share(c.lsbA, stepLimit)}), and its worst-case error at the smallest current, ` +
+    `${formatSI(req.current.min, "A")}, is ${formatPercent(c.errorAtMinPercent / 100)} of reading ` +
+    `(the ${formatPercent(req.accuracy.percent / 100)} target applies from ${formatSI(req.accuracy.bandMin, "A")} ` +
+    `to ${formatSI(req.accuracy.bandMax, "A")}).`
   );
 }
 

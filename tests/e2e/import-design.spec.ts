@@ -14,9 +14,13 @@ test("a designer imports an exported design file from the designs list and lands
   await page
     .getByLabel("Import design")
     .setInputFiles({ name: "copy.json", mimeType: "application/json", buffer: file });
+  // The name is already in the team: the page says so and offers a free one.
+  await expect(page.getByTestId("import-error")).toContainText(`already has a design named “${source.name}”`);
+  await expect(page.getByLabel("Import as")).toHaveValue(`${source.name} (2)`);
+  await page.getByRole("button", { name: "Import under this name" }).click();
   await expect(page).toHaveURL(/\/designs\/[0-9a-f-]{36}$/);
   expect(page.url()).not.toContain(source.id);
-  await expect(page.getByTestId("design-name")).toHaveText(source.name);
+  await expect(page.getByTestId("design-name")).toHaveText(`${source.name} (2)`);
 
   await page.goto("/designs");
   await page

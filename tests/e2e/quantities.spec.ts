@@ -8,6 +8,7 @@ import { checkScreen, shownText, widths } from "./screen-check";
 const shots = process.env.PW_OUTPUT_DIR ?? "test-results/quantities";
 
 test("SI prefixes stay intact on every screen the designer sees", async ({ browser }) => {
+  test.setTimeout(240_000);
   const designer = await apiAs("designer");
   const tag = Date.now().toString(36);
   const make = async (name: string, shuntOhms: string) => {
@@ -48,7 +49,7 @@ test("SI prefixes stay intact on every screen the designer sees", async ({ brows
     // The designs list at phone width belongs to the list's own rework (server paging, columns).
     for (const path of w === "phone" ? ["/library", "/meter", "/team"] : ["/designs", "/library", "/meter", "/team"]) {
       await page.goto(path);
-      await checkScreen(page, `${shots}${path.replace("/", "-")}-${w}.png`);
+      await checkScreen(page, `${shots}/screen${path.replace("/", "-")}-${w}.png`);
       expect(await shownText(page)).not.toMatch(/\d\s?MΩ/);
     }
     await ctx.close();

@@ -35,9 +35,10 @@ export async function checkScreen(page: Page, file: string) {
     clientWidth: document.documentElement.clientWidth,
   }));
   await page.screenshot({ path: file, fullPage: true });
-  expect(scrollWidth, `${file}: the page scrolls sideways (${scrollWidth} px in a ${clientWidth} px window)`).toBeLessThanOrEqual(
-    clientWidth,
-  );
+  expect(
+    scrollWidth,
+    `${file}: the page scrolls sideways (${scrollWidth} px in a ${clientWidth} px window)`,
+  ).toBeLessThanOrEqual(clientWidth);
   expect(await transformedQuantities(page), `${file}: quantities whose case CSS changes`).toEqual([]);
 }
 

@@ -185,12 +185,10 @@ const routes: Row[] = [
   {
     name: "POST /api/designs/import",
     method: "POST",
-    setup: fixed("/api/designs/import", {
-      format: "sensewright-design",
-      version: 1,
-      name: "Imported",
-      requirement,
-      choice,
+    // A fresh name each time: a name already in the team is refused with a suggestion (409).
+    setup: async () => ({
+      path: "/api/designs/import",
+      data: { format: "sensewright-design", version: 1, name: `Imported ${unique()}`, requirement, choice },
     }),
     expect: editors(201),
   },

@@ -175,7 +175,13 @@ test.describe("design export and import", () => {
       name: draftName,
       project: "Soil-moisture logger",
     });
-    const imported = await owner.post("/api/designs/import", { data: file });
+    // The same name again is refused with a free one offered; importing under it works.
+    const same = await owner.post("/api/designs/import", { data: file });
+    expect(same.status(), await same.text()).toBe(409);
+    const refused = (await same.json()) as { message: string; suggestedName: string };
+    expect(refused.message).toContain(`already has a design named “${draftName}”`);
+    expect(refused.suggestedName).toBe(`${draftName} (2)`);
+    const imported = await owner.post("/api/designs/import", { data: { ...file, name: refused.suggestedName } });
     expect(imported.status(), await imported.text()).toBe(201);
     const { id, revision, status } = (await imported.json()) as { id: string; revision: number; status: string };
     expect(id).not.toBe(draftId);
@@ -183,13 +189,18 @@ test.describe("design export and import", () => {
     const [a, b] = await Promise.all([designer.get(`/api/designs/${draftId}`), designer.get(`/api/designs/${id}`)]);
     const original = (await a.json()) as DesignBody;
     const copy = (await b.json()) as DesignBody;
-    expect(copy.name).toBe(original.name);
+    expect(copy.name).toBe(`${original.name} (2)`);
     expect(copy.requirement).toEqual(original.requirement);
     expect(copy.choice).toEqual(original.choice);
     expect(copy.metrics).toEqual(original.metrics);
     // And the copy exports to the same file, but for its own id.
     const again = (await (await designer.get(`/api/designs/${id}/export`)).json()) as Record<string, unknown>;
-    expect({ ...again, exportedAt: null, source: null }).toEqual({ ...file, exportedAt: null, source: null });
+    expect({ ...again, exportedAt: null, source: null }).toEqual({
+      ...file,
+      name: refused.suggestedName,
+      exportedAt: null,
+      source: null,
+    });
   });
 
   test("only owners and designers import; a bad file is 422 naming the field and saves nothing", async () => {

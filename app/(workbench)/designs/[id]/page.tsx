@@ -10,6 +10,7 @@ import { StatusBadge, statusExplained } from "@/components/review/status-badge";
 import { UnitsPanel } from "@/components/units/units-panel";
 import { listTargetAudit } from "@/db/queries/audit";
 import { getDesignView, isUuid, listRevisions, pageDesigns } from "@/db/queries/designs";
+import { listLibrary } from "@/db/queries/library";
 import { listReviews } from "@/db/queries/reviews";
 import { formatSI } from "@/lib/design/format";
 import { requirePageCaller } from "@/lib/auth/gate";
@@ -27,7 +28,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
   // Makers see approved designs only; anything else is "not found" for them, as in the API.
   if (!design || !can(caller, "design.read", design)) notFound();
   const viewer = designViewerFor(caller, design);
-  const [revisions, reviews, audit, others] = await Promise.all([
+  const [revisions, reviews, audit, others, library] = await Promise.all([
     listRevisions(design.id),
     listReviews(design.id),
     listTargetAudit(caller.teamId, "design", design.id),
@@ -35,6 +36,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
     pageDesigns(caller.teamId, { approvedOnly: !can(caller, "design.read-unapproved"), limit: 50 }).then(
       (p) => p.designs,
     ),
+    listLibrary(caller.teamId),
   ]);
   const { metrics, choice } = design;
   return (
@@ -78,7 +80,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
         </dl>
       </header>
       {/* A maker comes to build: the download, parts list and bench check lead the page. */}
-      {viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} />}
+      {viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} library={library} />}
       {viewer.leadsWithBuildSheet && <UnitsPanel design={design} viewer={viewer} />}
       <ComparePicker
         current={{ id: design.id, name: design.name }}
@@ -94,7 +96,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
         reviews={reviews}
         audit={audit.map((e) => ({ ...e, at: e.at.toISOString() }))}
       />
-      {!viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} />}
+      {!viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} library={library} />}
       <ProfilesPanel design={design} viewer={viewer} />
       {caller.role !== "maker" && <UnitsPanel design={design} viewer={viewer} />}
     </div>

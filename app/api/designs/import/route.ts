@@ -1,14 +1,30 @@
 // POST /api/designs/import: a design file from GET /api/designs/[id]/export becomes a new draft
 // design in the caller's team, through the same service as POST /api/designs (the engine
 // re-evaluates it, so the figures are the engine's, not the file's).
+import { namesLike } from "@/db/queries/design-names";
 import { apiRoute } from "@/lib/auth/gate";
 import { designImportSchema } from "@/lib/build-sheet/exports";
 import { saveNewDesign } from "@/lib/saved-designs/create";
-import { json } from "@/lib/http";
+import { HttpError, json } from "@/lib/http";
+import { freeName } from "@/lib/saved-designs/free-name";
+import { evaluateDesign } from "@/lib/saved-designs/service";
 
 export const POST = apiRoute(
   { action: "design.create", doing: "import designs", body: designImportSchema },
   async ({ caller, body }) => {
+    // A bad file is refused for what is wrong with it first (422 naming the field).
+    evaluateDesign(body.requirement, body.choice);
+    // Two designs of one name in a team are easy to confuse: say so and offer a free name.
+    const taken = await namesLike(caller.teamId, body.name);
+    if (taken.some((t) => t.toLowerCase() === body.name.toLowerCase())) {
+      const suggested = freeName(body.name, taken);
+      const e = new HttpError(
+        409,
+        `Your team already has a design named “${body.name}”. Import it as “${suggested}”, or give it another name.`,
+        { name: [`already used in your team; “${suggested}” is free`] },
+      );
+      return json({ message: e.message, fieldErrors: e.fieldErrors, suggestedName: suggested }, 409);
+    }
     const created = await saveNewDesign(caller, body);
     return json({ ...created, name: body.name }, 201);
   },

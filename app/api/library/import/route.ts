@@ -24,8 +24,20 @@ export const POST = apiRoute(
         kind: ['expected "amplifiers" or "shunts"'],
       });
     const parsed = parseLibraryCsv(kind.data, upload.text);
-    if (!parsed.ok)
-      return json({ ...parsed.refusal.toJson(), message: `${parsed.refusal.message}. Nothing was imported.` }, 422);
+    if (!parsed.ok) {
+      const problems = parsed.problems ?? [];
+      const many = problems.length > 1;
+      return json(
+        {
+          ...parsed.refusal.toJson(),
+          message: many
+            ? `${problems.length}${parsed.stopped ? " or more" : ""} rows have problems (the first: ${parsed.refusal.message}). Nothing was imported.`
+            : `${parsed.refusal.message}. Nothing was imported.`,
+          ...(problems.length ? { problems: problems.map((p) => ({ ...p.place, message: p.message })) } : {}),
+        },
+        422,
+      );
+    }
     const result = await importParts(caller.teamId, parsed.parts, caller.userId);
     return { kind: kind.data, fileName: upload.fileName, ...result };
   },
