@@ -42,9 +42,9 @@ function insertRevision(
     designId,
     revision,
     name: input.name,
-    requirement: input.requirement as unknown as Record<string, unknown>,
+    requirement: input.requirement,
     choice: input.choice,
-    metrics: input.metrics as unknown as Record<string, unknown>,
+    metrics: input.metrics,
     authorId: input.userId,
   });
 }
@@ -161,7 +161,7 @@ export async function listRevisions(designId: string) {
   return rows.map((r) => ({
     ...r,
     requirement: storedRequirement(r.requirement),
-    metrics: r.metrics as unknown as CandidateDetail,
+    metrics: r.metrics,
     createdAt: r.createdAt.toISOString(),
     approval: approvals.get(r.revision) ?? null,
   }));
@@ -183,7 +183,7 @@ export async function getDesignView(designId: string, teamId: string): Promise<D
     revision: design.revision,
     requirement: storedRequirement(current.requirement),
     choice: current.choice,
-    metrics: current.metrics as unknown as CandidateDetail,
+    metrics: current.metrics,
     authorId: current.authorId,
     authorName,
     updatedAt: design.updatedAt.toISOString(),

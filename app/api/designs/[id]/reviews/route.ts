@@ -4,7 +4,6 @@ import { addReview, listReviews } from "@/db/queries/reviews";
 import { verdictEnum } from "@/db/schema";
 import { apiRoute, assertRole } from "@/lib/auth/gate";
 import { HttpError, json } from "@/lib/http";
-import type { CandidateDetail } from "@/lib/design";
 import { designFor } from "@/lib/saved-designs/access";
 import { mailReviewed } from "@/lib/saved-designs/notify";
 
@@ -66,7 +65,7 @@ export const POST = apiRoute({ doing: "review designs", body }, async ({ caller,
       project: design.project,
       revision: design.revision,
       choice: current.choice,
-      metrics: current.metrics as unknown as CandidateDetail,
+      metrics: current.metrics,
     },
     { verdict: body.verdict, body: body.body, revision: result.revision },
     recipients,

@@ -2,7 +2,6 @@ import { z } from "zod";
 import { changeDesignStatus } from "@/db/queries/designs";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
-import type { CandidateDetail } from "@/lib/design";
 import { designFor } from "@/lib/saved-designs/access";
 import { mailSubmitted } from "@/lib/saved-designs/notify";
 
@@ -40,7 +39,7 @@ export const POST = apiRoute(
       project: design.project,
       revision: design.revision,
       choice: current.choice,
-      metrics: current.metrics as unknown as CandidateDetail,
+      metrics: current.metrics,
     });
     return { id: design.id, revision: design.revision, status: "in-review", mailed };
   },
