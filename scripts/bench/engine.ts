@@ -6,7 +6,7 @@ import { parseRequirement, type RequirementInput } from "../../lib/design/requir
 import { solve } from "../../lib/design/solve";
 import { sweepGrid, sweepValues } from "../../lib/design/sweep";
 
-/** The 24 V pump controller of the demo (DESIGN.md §6), swept wide on purpose. */
+/** The 24 V pump controller of the demo (docs/model.md §6), swept wide on purpose. */
 export const benchRequirement: RequirementInput = {
   current: { min: "20 mA", max: "2 A" },
   supply: { voltage: "12 V", side: "high" },
