@@ -16,6 +16,9 @@ import {
   uniqueIndex,
   uuid,
 } from "drizzle-orm/pg-core";
+// The engine's types for the JSON columns (types only: db/ takes no behaviour from lib/).
+import type { CandidateDetail, Choice, Requirement } from "@/lib/design";
+import type { ProfileSummary } from "@/lib/design/profile";
 
 export const roleEnum = pgEnum("role", ["owner", "designer", "reviewer", "maker"]);
 export const designStatusEnum = pgEnum("design_status", ["draft", "in-review", "approved", "returned"]);
@@ -140,9 +143,9 @@ export const designRevisions = pgTable(
       .references(() => designs.id, { onDelete: "cascade" }),
     revision: integer("revision").notNull(),
     name: text("name").notNull(),
-    requirement: jsonb("requirement").$type<Record<string, unknown>>().notNull(),
-    choice: jsonb("choice").$type<{ shuntOhms: number; gain: number }>().notNull(),
-    metrics: jsonb("metrics").$type<Record<string, unknown>>().notNull(),
+    requirement: jsonb("requirement").$type<Requirement>().notNull(),
+    choice: jsonb("choice").$type<Choice>().notNull(),
+    metrics: jsonb("metrics").$type<CandidateDetail>().notNull(),
     authorId: uuid("author_id")
       .notNull()
       .references(() => users.id),
@@ -231,7 +234,7 @@ export const profiles = pgTable(
     samples: integer("samples").notNull(),
     timesS: bytea("times_s").notNull(),
     currentsA: bytea("currents_a").notNull(),
-    summary: jsonb("summary").$type<Record<string, unknown>>().notNull(),
+    summary: jsonb("summary").$type<ProfileSummary>().notNull(),
     uploadedBy: uuid("uploaded_by")
       .notNull()
       .references(() => users.id),

@@ -1,5 +1,5 @@
 "use client";
-// The width of a chart's container, so visx gets explicit sizes (STACK.md pitfall).
+// The width of a chart's container, so visx gets explicit sizes (see "Stack pitfalls" in docs/architecture.md).
 import { useEffect, useRef, useState } from "react";
 
 export function useWidth<T extends HTMLElement>() {

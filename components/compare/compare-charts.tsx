@@ -1,6 +1,7 @@
 "use client";
 // Overlaid curves of the compared designs: worst-case error and burden against current, log–log.
 // The series are computed by the engine on the server; this only draws them.
+import { scaleLog } from "@visx/scale";
 import { Axis, Grid, LineSeries, XYChart, buildChartTheme } from "@visx/xychart";
 import { formatPercent, formatSI } from "@/lib/design/format";
 import { useWidth } from "@/components/charts/use-width";
@@ -18,22 +19,23 @@ const theme = buildChartTheme({
   svgLabelBig: { fill: "rgb(82 86 92)", fontSize: 12 },
 });
 
+/** A log domain over the positive values, a little wider than they reach, widened to whole decades. */
 function logDomain(values: number[]): [number, number] {
   const v = values.filter((x) => Number.isFinite(x) && x > 0);
   if (v.length === 0) return [1e-6, 1];
   // A little room above and below, so a curve never runs along the frame.
-  const lo = Math.min(...v) / 1.25;
-  const hi = Math.max(...v) * 1.25;
-  const a = 10 ** Math.floor(Math.log10(lo));
-  const b = 10 ** Math.ceil(Math.log10(hi));
+  const [a, b] = scaleLog({ domain: [Math.min(...v) / 1.25, Math.max(...v) * 1.25], nice: true }).domain() as [
+    number,
+    number,
+  ];
   return [a, b > a ? b : a * 10];
 }
 
-const decades = ([a, b]: [number, number]) => {
-  const out: number[] = [];
-  for (let e = Math.round(Math.log10(a)); e <= Math.round(Math.log10(b)); e++) out.push(10 ** e);
-  return out;
-};
+/** The decades of a log domain: the scale's own ticks that are powers of ten. */
+const decades = (domain: [number, number]) =>
+  scaleLog({ domain })
+    .ticks()
+    .filter((t) => Math.abs(Math.log10(t) - Math.round(Math.log10(t))) < 1e-9);
 
 const margin = { top: 12, right: 16, bottom: 40, left: 76 };
 

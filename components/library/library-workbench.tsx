@@ -1,6 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
+import type { AmplifierJson, ShuntJson } from "@/db/queries/library";
 import { useRef, useState } from "react";
 import { Badge } from "@/components/ui/badge";
 import { Button, buttonClass } from "@/components/ui/button";
@@ -22,8 +23,9 @@ export function LibraryWorkbench({
   shunts,
   canEdit,
 }: {
-  amplifiers: Part[];
-  shunts: Part[];
+  // The API's own response types (GET /api/library), not a shape declared again here.
+  amplifiers: AmplifierJson[];
+  shunts: ShuntJson[];
   canEdit: boolean;
 }) {
   const router = useRouter();

@@ -1,10 +1,11 @@
 "use client";
 
-import { useEffect, useRef, useState } from "react";
+import { useParentSize } from "@visx/responsive";
+import { scaleLinear, scaleLog } from "@visx/scale";
+import { useRef, useState } from "react";
 import { formatSI } from "@/lib/design/format";
 import { burdenV, loadVoltageV } from "@/lib/design/profile";
 import type { DecimatedSeries } from "@/lib/profile/decimate";
-import { linearTicks, logTicks } from "@/lib/profile/ticks";
 
 export type ChartDesign = { shuntOhms: number; supplyV: number; lsbA: number; clipCurrentA: number; loadMinV?: number };
 
@@ -14,19 +15,12 @@ const VOLTAGE_H = 120;
 
 /** Follows the parent's width (explicit height), so the server pixels asked for match the drawing. */
 export function useWidth(initial = 800) {
-  const ref = useRef<HTMLDivElement>(null);
-  const [width, setWidth] = useState(initial);
-  useEffect(() => {
-    const el = ref.current;
-    if (!el) return;
-    const update = () => setWidth(Math.max(320, Math.floor(el.clientWidth)));
-    update();
-    const ro = new ResizeObserver(update);
-    ro.observe(el);
-    return () => ro.disconnect();
-  }, []);
-  return { ref, width };
+  const { parentRef, width } = useParentSize({ initialSize: { width: initial }, debounceTime: 50 });
+  return { ref: parentRef, width: Math.max(320, Math.floor(width || initial)) };
 }
+
+/** A linear scale's round ticks (1, 2, 5 × 10^n). */
+const linearTicks = (lo: number, hi: number, count: number) => scaleLinear({ domain: [lo, hi] }).ticks(count);
 
 /**
  * Current against time (top) and the load voltage it leaves, with the burden on the right axis
@@ -50,8 +44,9 @@ export function ProfileChart({
   const height = M.top + CURRENT_H + M.gap + VOLTAGE_H + M.bottom;
   const { fromS, toS } = series;
   const span = toS - fromS || 1;
-  const x = (t: number) => M.left + ((t - fromS) / span) * plotW;
-  const tOf = (px: number) => fromS + ((px - M.left) / plotW) * span;
+  const xScale = scaleLinear({ domain: [fromS, fromS + span], range: [M.left, M.left + plotW] });
+  const x = (t: number) => xScale(t);
+  const tOf = (px: number) => xScale.invert(px);
 
   // Current axis: linear from 0, or log over the positive samples.
   const values = series.currentA;
@@ -70,14 +65,16 @@ export function ProfileChart({
   if (log) {
     const lo = Math.min(lowPositive === Infinity ? peak / 10 : lowPositive, design.lsbA) / 2;
     const hi = Math.max(peak, design.lsbA) * 1.5;
-    const [a, b] = [Math.log10(lo), Math.log10(hi)];
-    yCurrent = (i) => yTop + CURRENT_H - ((Math.log10(Math.max(i, lo)) - a) / (b - a)) * CURRENT_H;
-    currentTicks = logTicks(lo, hi);
+    const y = scaleLog({ domain: [lo, hi], range: [yTop + CURRENT_H, yTop], clamp: true });
+    yCurrent = (i) => y(Math.max(i, lo));
+    // Decades only: the scale's ticks that are powers of ten.
+    currentTicks = y.ticks().filter((t) => Math.abs(Math.log10(t) - Math.round(Math.log10(t))) < 1e-9);
   } else {
     const hi = peak * 1.1;
     const lo = Math.min(0, low * 1.1);
-    yCurrent = (i) => yTop + CURRENT_H - ((i - lo) / (hi - lo)) * CURRENT_H;
-    currentTicks = linearTicks(lo, hi, 5);
+    const y = scaleLinear({ domain: [lo, hi], range: [yTop + CURRENT_H, yTop] });
+    yCurrent = (i) => y(i);
+    currentTicks = y.ticks(5);
   }
 
   // Load voltage = supply − I·R; the burden I·R reads on the right axis of the same curve.
@@ -89,7 +86,7 @@ export function ProfileChart({
     design.loadMinV !== undefined && design.loadMinV >= supply - 4 * maxBurden ? design.loadMinV : undefined;
   const vLo = Math.min(supply - maxBurden * 1.15, loadMin !== undefined ? loadMin - maxBurden * 0.1 : Infinity);
   const vHi = supply + maxBurden * 0.1;
-  const yVolt = (v: number) => vTop + VOLTAGE_H - ((v - vLo) / (vHi - vLo)) * VOLTAGE_H;
+  const yVolt = scaleLinear({ domain: [vLo, vHi], range: [vTop + VOLTAGE_H, vTop] });
   const burdenTicks = linearTicks(Math.max(0, supply - vHi), supply - vLo, 3).filter((b) => b >= 0);
 
   const currentPath = pathOf(series.tS, values, x, yCurrent);

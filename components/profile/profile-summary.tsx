@@ -4,7 +4,7 @@ import { useState } from "react";
 import { Field, TextInput } from "@/components/ui/field";
 import { formatSI } from "@/lib/design/format";
 import { batteryLifeS, type ProfileSummary } from "@/lib/design/profile";
-import { formatDuration, parseCapacityC } from "@/lib/profile/ticks";
+import { formatDuration, parseCapacityC } from "@/lib/profile/capacity";
 
 const pct = (p: number) => `${String(Number(p.toPrecision(3)))} %`;
 

@@ -2,15 +2,16 @@
 // an edit is a compare-and-set on designs.revision, so a stale edit writes nothing.
 import { and, asc, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
+import { z } from "zod";
 import { parseRequirement, type CandidateDetail, type Choice, type Requirement } from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
 import { getDb, type Tx } from "../client";
 import { designRevisions, designs, reviews, users, type DesignStatus } from "../schema";
 import { recordAudit } from "./audit";
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+const uuid = z.uuid();
 /** Ids come from URLs: anything that is not a UUID cannot name a design (and must not reach SQL as one). */
-export const isUuid = (id: string) => UUID.test(id);
+export const isUuid = (id: string) => uuid.safeParse(id).success;
 
 /**
  * A stored requirement, read back through the engine's schema so defaults added since it was saved
@@ -41,9 +42,9 @@ function insertRevision(
     designId,
     revision,
     name: input.name,
-    requirement: input.requirement as unknown as Record<string, unknown>,
+    requirement: input.requirement,
     choice: input.choice,
-    metrics: input.metrics as unknown as Record<string, unknown>,
+    metrics: input.metrics,
     authorId: input.userId,
   });
 }
@@ -232,7 +233,7 @@ export async function listRevisions(designId: string) {
   return rows.map((r) => ({
     ...r,
     requirement: storedRequirement(r.requirement),
-    metrics: r.metrics as unknown as CandidateDetail,
+    metrics: r.metrics,
     createdAt: r.createdAt.toISOString(),
     approval: approvals.get(r.revision) ?? null,
   }));
@@ -254,7 +255,7 @@ export async function getDesignView(designId: string, teamId: string): Promise<D
     revision: design.revision,
     requirement: storedRequirement(current.requirement),
     choice: current.choice,
-    metrics: current.metrics as unknown as CandidateDetail,
+    metrics: current.metrics,
     authorId: current.authorId,
     authorName,
     updatedAt: design.updatedAt.toISOString(),

@@ -72,7 +72,7 @@ export async function insertProfile(input: {
         samples: input.timesS.length,
         timesS: float64ToBytes(input.timesS),
         currentsA: float64ToBytes(input.currentsA),
-        summary: input.summary as unknown as Record<string, unknown>,
+        summary: input.summary,
         uploadedBy: input.userId,
       })
       .returning({ id: profiles.id, createdAt: profiles.createdAt });

@@ -1,4 +1,4 @@
-// Demo designs of the invented Harbourline scenario (DESIGN.md §6), each built through the design
+// Demo designs of the invented Harbourline scenario (docs/model.md §6), each built through the design
 // service so every figure comes from the engine, with the choice taken from the solver's Pareto front.
 //
 // Adjusted scenarios (the engine finds no single shunt and gain for the literal ones):

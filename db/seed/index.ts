@@ -1,4 +1,4 @@
-// SEED_DEMO=1: the invented demo team of DESIGN.md §6, loaded only into an empty database.
+// SEED_DEMO=1: the invented demo team of docs/model.md §6, loaded only into an empty database.
 import { seedDemoDesigns } from "./designs";
 import { seedDemoLibrary } from "./library";
 import { isDatabaseEmpty, seedDemoTeam } from "./team";

@@ -146,9 +146,9 @@ export async function seedScaleTeam(counts: ScaleCounts = FULL_SCALE): Promise<{
           designId: designIds[k]!,
           revision: r + 1,
           name: d.name,
-          requirement: f.requirement as unknown as Record<string, unknown>,
+          requirement: f.requirement,
           choice: f.choice,
-          metrics: f.metrics as unknown as Record<string, unknown>,
+          metrics: f.metrics,
           authorId: r % 4 === 3 ? userIds.owner : userIds.designer,
           createdAt: new Date(d.createdAt.getTime() + r * 3_600_000),
         };
@@ -201,7 +201,7 @@ export async function seedScaleTeam(counts: ScaleCounts = FULL_SCALE): Promise<{
         samples: timesS.length,
         timesS: float64ToBytes(timesS),
         currentsA: float64ToBytes(currentsA),
-        summary: summarizeProfile(timesS, currentsA, profileDesignOf(f)) as unknown as Record<string, unknown>,
+        summary: summarizeProfile(timesS, currentsA, profileDesignOf(f)),
         uploadedBy: userIds.designer,
       };
     });

@@ -1,4 +1,4 @@
-// The invented demo team of DESIGN.md §6. Loaded only into an empty database.
+// The invented demo team of docs/model.md §6. Loaded only into an empty database.
 import bcrypt from "bcryptjs";
 import { sql } from "drizzle-orm";
 import { getDb } from "../client";

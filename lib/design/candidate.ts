@@ -1,4 +1,4 @@
-// One candidate's figures (DESIGN.md §3), in the API's field names.
+// One candidate's figures (docs/model.md §3), in the API's field names.
 import { errorAtWith, lowestAccurateCurrent } from "./error-budget";
 import { seriesValues } from "./eseries";
 import {

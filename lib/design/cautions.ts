@@ -1,5 +1,5 @@
 // Safety cautions for one design: one list, shown on the candidate study and printed on the build
-// sheet. They inform; local codes and licensed practice decide (DESIGN.md §5).
+// sheet. They inform; local codes and licensed practice decide (docs/model.md §5).
 import { REFERENCE_C } from "./model";
 import type { Requirement } from "./requirement";
 import type { CandidateDetail } from "./types";

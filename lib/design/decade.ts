@@ -1,5 +1,5 @@
 // Decade scale factors (1 mV per mA, 1 mV per µA, …): the readouts a bench meter user can read
-// without arithmetic. DESIGN.md §3 asks the solver to offer them.
+// without arithmetic. docs/model.md §3 asks the solver to offer them.
 import type { SweepArrays } from "./sweep";
 import { formatSI } from "./format";
 
@@ -44,7 +44,7 @@ const currentUnits: { scale: number; name: string }[] = [
 ];
 
 /**
- * Any scale factor as "output per unit of current" (DESIGN.md §3: decade factors such as
+ * Any scale factor as "output per unit of current" (docs/model.md §3: decade factors such as
  * "1 mV per mA" are the easiest to read off a meter): the largest current unit for which the
  * output stays below 1 V. 2.5 V/A → "2.5 mV per mA".
  */

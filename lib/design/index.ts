@@ -1,4 +1,4 @@
-// The engine's public surface (see .notes/engine-contract.md). Pure TypeScript: mathjs, zod
+// The engine's public surface (see docs/architecture.md). Pure TypeScript: mathjs, zod
 // and this folder only, so it runs in a route handler and in a browser worker alike.
 export * from "./units";
 export * from "./format";

@@ -1,4 +1,4 @@
-// The physical model of DESIGN.md §3 on plain numbers. Everything the sweep needs per
+// The physical model of docs/model.md §3 on plain numbers. Everything the sweep needs per
 // requirement is computed once here; the per-pair functions take numbers only.
 import type { Requirement } from "./requirement";
 
@@ -275,7 +275,7 @@ export function noiseRmsA(m: Model, R: number, G: number): number {
   return (inputNoiseDensity(m, R) * Math.sqrt(noiseBandwidth(m, G))) / R;
 }
 
-/** Worst-case error at current I, A (DESIGN.md §3's default model). */
+/** Worst-case error at current I, A (docs/model.md §3's default model). */
 export function worstErrorA(m: Model, R: number, G: number, theta: number, I: number): number {
   const gainPart = I * (m.gainConst + gainSetError(m, G) + m.alphaR * I * I * R * theta);
   return gainPart + offsetTermA(m, R, G) + m.lsbV / (2 * R * G) + m.crest * noiseRmsA(m, R, G);

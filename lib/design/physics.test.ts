@@ -1,4 +1,4 @@
-// Checks of the engine against the outside world (DESIGN.md §4); each names its source.
+// Checks of the engine against the outside world (docs/model.md §4); each names its source.
 import { boltzmann } from "mathjs";
 import { describe, expect, it } from "vitest";
 import { evaluateCandidate } from "./candidate";
@@ -102,7 +102,7 @@ describe("bench meter current ranges (common practice, no source)", () => {
   });
 });
 
-describe("error model sanity (DESIGN.md §3 default model)", () => {
+describe("error model sanity (docs/model.md §3 default model)", () => {
   it("offset-type terms dominate at small currents and gain-type terms at large ones", () => {
     const r = simple();
     const c = { shuntOhms: 1, gain: 20 };

@@ -1,5 +1,5 @@
 // The engine must run in a browser worker as well as on the server: its non-test files may
-// import only mathjs, zod and each other (house style; .notes/engine-contract.md).
+// import only mathjs, zod and each other (house style; docs/architecture.md).
 import { readdirSync, readFileSync } from "node:fs";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";

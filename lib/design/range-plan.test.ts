@@ -6,7 +6,7 @@ import { req } from "./test-helpers";
 
 describe("range plans for spans too wide for one range", () => {
   const cases = [
-    // DESIGN.md §6: the soil-moisture logger, 3 µA asleep to 180 mA transmitting, from 3.0 V.
+    // docs/model.md §6: the soil-moisture logger, 3 µA asleep to 180 mA transmitting, from 3.0 V.
     [
       "the demo logger, 3 µA .. 180 mA",
       req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } }),

@@ -446,7 +446,7 @@ export function parseRequirement(input: unknown): ParseRequirementResult {
   return { ok: false, message, fieldErrors };
 }
 
-/** The demo soil-moisture logger (DESIGN.md §6): the wizard's start values. */
+/** The demo soil-moisture logger (docs/model.md §6): the wizard's start values. */
 export const defaultRequirementInput: RequirementInput = {
   current: { min: "3 uA", max: "180 mA" },
   supply: { voltage: "3.0 V", side: "low" },

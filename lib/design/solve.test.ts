@@ -223,7 +223,7 @@ describe("decade scale factors for bench-meter readouts", () => {
     expect(decadeScaleLabel(0.1)).toBe("100 mV per A");
     expect(decadeScaleLabel(2)).toBeNull();
   });
-  it("offers 1 mV per µA for the demo's meter adapter (DESIGN.md §6), feasible", () => {
+  it("offers 1 mV per µA for the demo's meter adapter (docs/model.md §6), feasible", () => {
     // A meter's 200 mV range reading a current up to 200 µA at 1 mV per µA.
     const r = req({
       current: { min: "2 uA", max: "180 uA" },

@@ -1,4 +1,4 @@
-// Shapes shared across the engine and the API (API.md fixes the candidate's field names).
+// Shapes shared across the engine and the API (docs/api.md lists the routes that return them).
 import type { RejectReason } from "./pair";
 
 export type Choice = { shuntOhms: number; gain: number };

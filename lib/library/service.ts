@@ -4,6 +4,7 @@ import "server-only";
 import type { z } from "zod";
 import type { WriteResult } from "@/db/queries/library";
 import { HttpError, invalid, refused } from "@/lib/http";
+import { isUuid } from "@/lib/ids";
 
 /** The stored part with the patch's fields over it, checked by the full schema (422 on a bad mix). */
 export function mergePatch<T>(
@@ -24,9 +25,8 @@ export function written<T>(result: WriteResult<T>): T {
   throw refused(result.field ? { ...result, fieldErrors: { [result.field]: [result.message] } } : result);
 }
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 /** A part id from the URL: anything that is not a UUID names no part. */
 export function partId(id: string | undefined, what: string): string {
-  if (!id || !UUID.test(id)) throw new HttpError(404, `That ${what} was not found in the library.`);
+  if (!id || !isUuid(id)) throw new HttpError(404, `That ${what} was not found in the library.`);
   return id;
 }

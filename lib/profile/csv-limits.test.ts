@@ -5,7 +5,7 @@ import { libraryToCsv, parseLibraryCsv } from "@/lib/library/csv";
 import { FORMULA_START, writeCsv } from "@/lib/csv-write";
 import { readNumberCell, splitHeaderUnit } from "./csv";
 import { parseProfileCsv } from "./parse";
-import { parseCapacityC } from "./ticks";
+import { parseCapacityC } from "./capacity";
 
 function fastest(fn: () => unknown, reps = 10, runs = 5): number {
   let best = Infinity;

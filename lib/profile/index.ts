@@ -7,4 +7,4 @@ export * from "@/lib/design/profile";
 export * from "./decimate";
 export * from "./limits";
 export * from "./design";
-export * from "./ticks";
+export * from "./capacity";

@@ -1,4 +1,4 @@
-// Start points for the wizard, from the invented demo scenario (DESIGN.md §6).
+// Start points for the wizard, from the invented demo scenario (docs/model.md §6).
 import { defaultRequirementInput, type RequirementInput } from "@/lib/design/requirement";
 
 export type Scenario = { key: string; title: string; summary: string; input: RequirementInput };

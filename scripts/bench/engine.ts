@@ -6,7 +6,7 @@ import { parseRequirement, type RequirementInput } from "../../lib/design/requir
 import { solve } from "../../lib/design/solve";
 import { sweepGrid, sweepValues } from "../../lib/design/sweep";
 
-/** A pump controller like the demo's (DESIGN.md §6), sensed on the low side (a resistor-pair
+/** A pump controller like the demo's (docs/model.md), sensed on the low side (a resistor-pair
  * gain is a non-inverting stage, ground-referenced), swept wide on purpose. */
 export const benchRequirement: RequirementInput = {
   current: { min: "20 mA", max: "2 A" },

@@ -22,7 +22,7 @@ function time(repeats: number, fn: () => void): number {
   return median(t);
 }
 
-/** The logger of DESIGN.md §6: sleeping at a few µA, bursting to 180 mA, sampled every 100 µs. */
+/** The logger of docs/model.md §6: sleeping at a few µA, bursting to 180 mA, sampled every 100 µs. */
 function recording(n: number): string {
   const parts = ["time (s),current (A)\n"];
   for (let k = 0; k < n; k++)

@@ -1,5 +1,5 @@
 // Every API route × signed out, each demo role and an owner of another team, with the exact
-// status each must get (API.md "Designs and their review" and the role rules of each route).
+// status each must get (the role rules of each route, listed in docs/api.md).
 // To extend: add a row to `routes`; `setup` may create what one cell needs (it runs per caller).
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import {

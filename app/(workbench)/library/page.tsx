@@ -20,11 +20,7 @@ export default async function LibraryPage() {
           {canEdit ? "" : " Owners and designers edit the library."}
         </p>
       </div>
-      <LibraryWorkbench
-        amplifiers={library.amplifiers as unknown as Parameters<typeof LibraryWorkbench>[0]["amplifiers"]}
-        shunts={library.shunts as unknown as Parameters<typeof LibraryWorkbench>[0]["shunts"]}
-        canEdit={canEdit}
-      />
+      <LibraryWorkbench amplifiers={library.amplifiers} shunts={library.shunts} canEdit={canEdit} />
     </div>
   );
 }

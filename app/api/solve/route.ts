@@ -1,4 +1,4 @@
-// POST /api/solve: the stateless sweep (API.md). Body: a requirement, plus an optional
+// POST /api/solve: the stateless sweep (docs/api.md). Body: a requirement, plus an optional
 // `rank` expression that orders the candidates after the Pareto front.
 import { z } from "zod";
 import { RankExpressionError, solve } from "@/lib/design";

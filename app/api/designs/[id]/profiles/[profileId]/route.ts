@@ -3,13 +3,13 @@ import { apiRoute, authorize } from "@/lib/auth/gate";
 import { designViewFor } from "@/lib/saved-designs/access";
 import { profileWindowQuery } from "@/lib/route-schemas";
 import { HttpError } from "@/lib/http";
+import { isUuid } from "@/lib/ids";
 import { clipCurrent, decimateMinMax, profileDesignOf, summarizeProfile } from "@/lib/profile";
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 const profileNotFound = () => new HttpError(404, "That profile was not found on this design.");
 
 function profileIdOf(raw: string | undefined): string {
-  if (!raw || !UUID.test(raw)) throw profileNotFound();
+  if (!raw || !isUuid(raw)) throw profileNotFound();
   return raw;
 }
 
