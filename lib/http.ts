@@ -27,7 +27,14 @@ export type QueryRefusal = {
   fieldErrors?: FieldErrors;
 };
 
-const statusOfReason = { unauthenticated: 401, "not-found": 404, conflict: 409, gone: 409, invalid: 422, denied: 403 } as const;
+const statusOfReason = {
+  unauthenticated: 401,
+  "not-found": 404,
+  conflict: 409,
+  gone: 409,
+  invalid: 422,
+  denied: 403,
+} as const;
 
 /** A query's refusal as the API's error: not-found 404, conflict and gone 409, invalid 422, denied 403. */
 export function refused(refusal: QueryRefusal): HttpError {

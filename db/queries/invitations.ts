@@ -223,7 +223,12 @@ export async function findInvitationByToken(token: string) {
 
 export type AcceptResult =
   | { ok: true; userId: string; teamId: string; teamName: string; email: string; role: Role; newAccount: boolean }
-  | { ok: false; reason: "unauthenticated" | "denied" | "not-found" | "conflict" | "gone" | "invalid"; message: string; field?: string };
+  | {
+      ok: false;
+      reason: "unauthenticated" | "denied" | "not-found" | "conflict" | "gone" | "invalid";
+      message: string;
+      field?: string;
+    };
 
 /**
  * Accepts an invitation once. An invitation for an existing account is accepted only by a caller
@@ -319,7 +324,12 @@ export async function acceptInvitation(input: {
       userId = existing.id;
     } else {
       if (!input.newAccount)
-        return refuse("invalid", "Choose a password for your new account.", "no password for a new account", "password");
+        return refuse(
+          "invalid",
+          "Choose a password for your new account.",
+          "no password for a new account",
+          "password",
+        );
       if (!input.newAccount.name.trim())
         return refuse("invalid", "Give your name: it is how the team sees you.", "no name", "name");
       const [u] = await tx

@@ -78,7 +78,9 @@ describe("library CSV", () => {
     expect(refusal("shunts", `${base}A,E24,5 V,0.1,0.01,5e-5,1,no\n`).message).toMatch(
       /5 V is a voltage, not a resistance/,
     );
-    expect(refusal("amplifiers", `${ampHeader}\nX,fixed,10;inf,0,0,0,0,0,0,1e6,0,0,100,3,5,current-sense,,\n`).place).toEqual({
+    expect(
+      refusal("amplifiers", `${ampHeader}\nX,fixed,10;inf,0,0,0,0,0,0,1e6,0,0,100,3,5,current-sense,,\n`).place,
+    ).toEqual({
       row: 1,
       line: 2,
       column: "gains",

@@ -23,24 +23,30 @@ const listQuery = z.object({
 });
 
 // Paged newest change first (API v2): {designs, nextCursor}; makers page approved designs only.
-export const GET = apiRoute({ action: "design.read", doing: "list designs", query: listQuery }, async ({ caller, query }) => {
-  const after = query.cursor ? decodeListCursor(caller.teamId, query.cursor) : undefined;
-  if (after === null) {
-    throw new HttpError(422, "Invalid input at cursor: it was not given out by this team's designs list.", {
-      cursor: ["was not given out by this team's designs list; start again without a cursor"],
+export const GET = apiRoute(
+  { action: "design.read", doing: "list designs", query: listQuery },
+  async ({ caller, query }) => {
+    const after = query.cursor ? decodeListCursor(caller.teamId, query.cursor) : undefined;
+    if (after === null) {
+      throw new HttpError(422, "Invalid input at cursor: it was not given out by this team's designs list.", {
+        cursor: ["was not given out by this team's designs list; start again without a cursor"],
+      });
+    }
+    const page = await pageDesigns(caller.teamId, {
+      approvedOnly: !can(caller, "design.read-unapproved"),
+      status: query.status,
+      q: query.q || undefined,
+      limit: query.limit,
+      after,
     });
-  }
-  const page = await pageDesigns(caller.teamId, {
-    approvedOnly: !can(caller, "design.read-unapproved"),
-    status: query.status,
-    q: query.q || undefined,
-    limit: query.limit,
-    after,
-  });
-  return { designs: page.designs, nextCursor: page.next ? encodeListCursor(caller.teamId, page.next) : null };
-});
+    return { designs: page.designs, nextCursor: page.next ? encodeListCursor(caller.teamId, page.next) : null };
+  },
+);
 
-export const POST = apiRoute({ action: "design.create", body: createDesignSchema }, async ({ caller, body, request }) => {
-  // A repeat with the same Idempotency-Key answers as the first time (201, same id) and creates nothing.
-  return json(await saveNewDesign(caller, body, idempotencyKeyOf(request)), 201);
-});
+export const POST = apiRoute(
+  { action: "design.create", body: createDesignSchema },
+  async ({ caller, body, request }) => {
+    // A repeat with the same Idempotency-Key answers as the first time (201, same id) and creates nothing.
+    return json(await saveNewDesign(caller, body, idempotencyKeyOf(request)), 201);
+  },
+);
