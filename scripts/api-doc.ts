@@ -5,6 +5,7 @@
 import fs from "node:fs";
 import path from "node:path";
 import prettier from "prettier";
+import { doingOf, rolesFor, type Action } from "../lib/auth/policy";
 
 const ROOT = process.cwd();
 const API = path.join(ROOT, "app", "api");
@@ -30,8 +31,12 @@ function methodsOf(source: string): Method[] {
       out.push({ method: m[1]!, roles: "(its own check)", doing: "", inputs: [] });
       continue;
     }
-    const roles = /roles:\s*(\[[^\]]*\]|[\w.]+)/.exec(opts)?.[1] ?? "any member (the policy may narrow)";
-    const doing = /doing:\s*"([^"]*)"/.exec(opts)?.[1] ?? "";
+    // The route's policy action (lib/auth/policy.ts) says who and what; a legacy `roles` list says who.
+    const action = /action:\s*"([^"]+)"/.exec(opts)?.[1] as Action | undefined;
+    const roles = action
+      ? `${rolesFor(action).join(", ")} (\`${action}\`)`
+      : (/roles:\s*(\[[^\]]*\]|[\w.]+)/.exec(opts)?.[1] ?? "any member");
+    const doing = /doing:\s*"([^"]*)"/.exec(opts)?.[1] ?? (action ? doingOf(action) : "");
     const inputs = ["body", "query"].filter((k) => new RegExp(`\\b${k}\\b`).test(opts));
     out.push({ method: m[1]!, roles: roles.replace(/"/g, ""), doing, inputs });
   }
