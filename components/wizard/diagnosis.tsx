@@ -39,12 +39,12 @@ export function DiagnosisView({ diagnosis, evaluated }: { diagnosis: Diagnosis; 
           <p className="font-medium text-ink">One change that would work:</p>
           <ul className="flex flex-col gap-1.5">
             {diagnosis.relax.map((s, i) => (
-              <li key={s.field} className="flex flex-wrap items-center justify-between gap-2">
-                <span>
+              <li key={s.field} className="flex items-center justify-between gap-2">
+                <span className="min-w-0">
                   {i > 0 && <span className="text-ink-muted">or </span>}
                   {s.says}
                 </span>
-                <Button variant="ghost" onClick={() => apply(s)} aria-label={`Apply: ${s.says}`}>
+                <Button className="shrink-0" onClick={() => apply(s)} aria-label={`Apply: ${s.says}`}>
                   Apply
                 </Button>
               </li>
@@ -68,7 +68,7 @@ export function DiagnosisView({ diagnosis, evaluated }: { diagnosis: Diagnosis; 
           {failing.map(({ r, n }) => (
             <li key={r} className="flex justify-between gap-2">
               <span>{rejectReasonLabels[r]}</span>
-              <span className="num text-ink-muted">
+              <span className="num shrink-0 whitespace-nowrap text-ink-muted">
                 {n.toLocaleString("en")} of {evaluated.toLocaleString("en")}
               </span>
             </li>

@@ -194,7 +194,7 @@ export function whyNoPlan(req: Requirement, m: Model, sw: SweepArrays): string {
   if (reached.length === 0)
     return `No range plan: no shunt and gain works even for a range just below ${formatSI(m.iMax, "A")} (with a ${ron} range switch in series), so splitting the span cannot help; relax the requirement at the top (drop, output, accuracy or power).`;
   const lowest = reached[reached.length - 1] as number;
-  return `No range plan: ${reached.length === MAX_RANGES ? `${MAX_RANGES} ranges` : `the ranges below ${formatSI(top, "A")} find no pair and`} reach down only to ${formatSI(lowest, "A")}, short of the minimum current ${formatSI(m.iMin, "A")}. Below that, counts through the noise, the dead zone or the drop limit (with a ${ron} range switch in series) rule every pair out.`;
+  return `No range plan: ${reached.length === MAX_RANGES ? `${MAX_RANGES} ranges` : `the ranges below ${formatSI(top, "A")} find no pair and`} reach down only to ${formatSI(lowest, "A")}, short of the minimum current ${formatSI(m.iMin, "A")}. Below that, the accuracy target, the counts through the noise, the dead zone or the drop limit (with a ${ron} range switch in series) rule every pair out.`;
 }
 
 /**
