@@ -3,9 +3,15 @@
 // into the OpenAPI 3.1 document; api-description.test.ts fails when a route file is missing here.
 import { z } from "zod";
 import { insertionSchema, requirementSchema } from "@/lib/design";
-import { createTokenSchema, switchTeamSchema, updateAccountSchema } from "@/lib/auth/account-schemas";
+import {
+  createTokenSchema,
+  passwordChangeSchema,
+  switchTeamSchema,
+  updateAccountSchema,
+} from "@/lib/auth/account-schemas";
 import type { Action } from "@/lib/auth/policy";
 import { designImportSchema } from "@/lib/build-sheet/exports";
+import { editUnitSchema, recordUnitSchema } from "@/lib/built-units/schemas";
 import { amplifierInput, amplifierPatch, shuntInput, shuntPatch } from "@/lib/library/schema";
 import {
   auditQuery,
@@ -144,6 +150,15 @@ export const operations: Operation[] = [
     sessionOnly: true,
     body: switchTeamSchema,
     ok: json(200, "switched", responses.switchedTeam),
+  },
+  {
+    method: "put",
+    path: "/api/me/password",
+    summary: "Change your password; every other session of yours ends, this one is renewed",
+    access: "account.manage",
+    sessionOnly: true,
+    body: passwordChangeSchema,
+    ok: json(200, "{ok: true}"),
   },
   {
     method: "get",
@@ -394,6 +409,72 @@ export const operations: Operation[] = [
     path: "/api/designs/{id}/profiles/{profileId}",
     summary: "Delete a recording (its uploader or an owner)",
     access: "profile.delete",
+    ok: json(200, "{deleted: true, id}"),
+  },
+  {
+    method: "get",
+    path: "/api/designs/{id}/units",
+    summary: "Built units of an approved design, judged against its bench check, with measured and predicted yield",
+    access: "design.read",
+    ok: json(200, "{units, yield: {measured, predicted}, benchCheck, prediction}"),
+  },
+  {
+    method: "post",
+    path: "/api/designs/{id}/units",
+    summary: "Record a built unit's bench readings (an approved design)",
+    access: "unit.record",
+    body: recordUnitSchema,
+    ok: json(201, "{id, serial, pass, readings, cause, calibration}"),
+  },
+  {
+    method: "post",
+    path: "/api/designs/{id}/units/import",
+    summary: "Record units from a CSV (one row per unit), all or nothing",
+    access: "unit.record",
+    multipart: { file: "CSV: serial, then one column per test point (name or current)" },
+    ok: json(201, "{units}"),
+  },
+  {
+    method: "get",
+    path: "/api/designs/{id}/units/template.csv",
+    summary: "An empty readings CSV with this design's test points as its header",
+    access: "design.read",
+    ok: file("text/csv", "the template"),
+  },
+  {
+    method: "get",
+    path: "/api/designs/{id}/units/calibration.csv",
+    summary: "Each unit's gain and offset correction (corrected = gain · raw + offsetV)",
+    access: "design.read",
+    ok: file("text/csv", "one row per serial"),
+  },
+  {
+    method: "get",
+    path: "/api/designs/{id}/units/calibration.json",
+    summary: "The same corrections as JSON",
+    access: "design.read",
+    ok: json(200, "{design, revision, units: [{serial, gain, offsetV, residualPercent}]}"),
+  },
+  {
+    method: "get",
+    path: "/api/designs/{id}/units/{unitId}",
+    summary: "One built unit, judged",
+    access: "design.read",
+    ok: json(200, "the unit"),
+  },
+  {
+    method: "patch",
+    path: "/api/designs/{id}/units/{unitId}",
+    summary: "Change a unit's serial, date or readings (makers: only units they recorded)",
+    access: "unit.change",
+    body: editUnitSchema,
+    ok: json(200, "the unit, judged again"),
+  },
+  {
+    method: "delete",
+    path: "/api/designs/{id}/units/{unitId}",
+    summary: "Delete a unit and its readings (makers: only units they recorded)",
+    access: "unit.change",
     ok: json(200, "{deleted: true, id}"),
   },
   {

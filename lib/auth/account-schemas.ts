@@ -1,5 +1,6 @@
 // Request bodies of the account routes (tokens, /api/me), shared by the routes and their forms.
 import { z } from "zod";
+import { PASSWORD_MAX_LENGTH } from "./password-rules";
 
 export const createTokenSchema = z
   .object({
@@ -57,4 +58,15 @@ export const updateAccountSchema = z
 
 export const switchTeamSchema = z.object({
   teamId: z.uuid({ error: "teamId: expected the id of one of your teams (GET /api/me lists them)" }),
+});
+
+/** PUT /api/me/password: the current password proves it is you; the new one meets the password rules. */
+export const passwordChangeSchema = z.object({
+  currentPassword: z
+    .string({ error: "enter your current password" })
+    .min(1, { error: "enter your current password" })
+    .max(PASSWORD_MAX_LENGTH, { error: "that is not your current password" }),
+  newPassword: z
+    .string({ error: "choose a new password" })
+    .max(PASSWORD_MAX_LENGTH, { error: `at most ${PASSWORD_MAX_LENGTH} characters` }),
 });

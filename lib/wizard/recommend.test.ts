@@ -1,7 +1,8 @@
 // The recommended pair is the engine's top-ranked feasible candidate, and its reason is read off
 // the same figures the table shows (shares of the limits, rounded to whole percent).
 import { describe, expect, it } from "vitest";
-import { parseRequirement, solve } from "@/lib/design";
+import { parseRequirement } from "@/lib/design/requirement";
+import { solve } from "@/lib/design/solve";
 import { recommendationReason, recommendedOf } from "./recommend";
 
 const p = parseRequirement({

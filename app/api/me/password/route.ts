@@ -3,20 +3,11 @@ import { changePassword, findUserById } from "@/db/queries/users";
 import { clientAddress } from "@/lib/auth/client-address";
 import { apiRoute, parseWith } from "@/lib/auth/gate";
 import { hashPassword, verifyPassword } from "@/lib/auth/password-hash";
-import { newPasswordSchema, PASSWORD_MAX_LENGTH } from "@/lib/auth/password-rules";
+import { passwordChangeSchema as body } from "@/lib/auth/account-schemas";
+import { newPasswordSchema } from "@/lib/auth/password-rules";
 import { renewedSessionCookie } from "@/lib/auth/session-cookie";
 import { recordSignInFailure, retryAfterSeconds, signInWaitMs, tryAgainIn } from "@/lib/auth/sign-in-throttle";
 import { HttpError, json } from "@/lib/http";
-
-const body = z.object({
-  currentPassword: z
-    .string({ error: "enter your current password" })
-    .min(1, { error: "enter your current password" })
-    .max(PASSWORD_MAX_LENGTH, { error: "that is not your current password" }),
-  newPassword: z
-    .string({ error: "choose a new password" })
-    .max(PASSWORD_MAX_LENGTH, { error: `at most ${PASSWORD_MAX_LENGTH} characters` }),
-});
 
 const refuse = (field: "currentPassword" | "newPassword", problems: string[]) =>
   new HttpError(422, `Invalid input at ${field}: ${problems[0]}`, { [field]: problems });
@@ -25,34 +16,40 @@ const refuse = (field: "currentPassword" | "newPassword", problems: string[]) =>
  * Changes the caller's password. Every other session of the user ends (the session version goes up);
  * the browser that made the change gets a renewed session cookie and stays signed in.
  */
-export const PUT = apiRoute({ doing: "change your password", body }, async ({ caller, body, request }) => {
-  const user = await findUserById(caller.userId);
-  if (!user) throw new HttpError(401, "Sign in first.");
-  // Wrong current passwords count as failed sign-ins, so a borrowed session cannot guess the password.
-  const address = clientAddress(request.headers);
-  const wait = await signInWaitMs(user.email, address);
-  if (wait > 0)
+export const PUT = apiRoute(
+  { action: "account.manage", doing: "change your password", body },
+  async ({ caller, body, request }) => {
+    // A token is a script's credential, not a person's: only a signed-in session changes the password.
+    if (caller.via === "token")
+      throw new HttpError(403, "An API token cannot change a password; sign in to change it.");
+    const user = await findUserById(caller.userId);
+    if (!user) throw new HttpError(401, "Sign in first.");
+    // Wrong current passwords count as failed sign-ins, so a borrowed session cannot guess the password.
+    const address = clientAddress(request.headers);
+    const wait = await signInWaitMs(user.email, address);
+    if (wait > 0)
+      return json(
+        { message: tryAgainIn(wait) },
+        { status: 429, headers: { "Retry-After": String(retryAfterSeconds(wait)) } },
+      );
+    if (!(await verifyPassword(body.currentPassword, user.passwordHash))) {
+      await recordSignInFailure(user.email, address);
+      throw refuse("currentPassword", ["that is not your current password"]);
+    }
+    parseWith(z.object({ newPassword: newPasswordSchema(user.email) }), { newPassword: body.newPassword });
+    if (await verifyPassword(body.newPassword, user.passwordHash))
+      throw refuse("newPassword", ["is the password you have now; choose a different one"]);
+    const sessionVersion = await changePassword({
+      userId: user.id,
+      teamId: caller.teamId,
+      expectedHash: user.passwordHash,
+      newHash: await hashPassword(body.newPassword),
+    });
+    if (sessionVersion === null)
+      throw new HttpError(409, "Your password was changed from somewhere else meanwhile; sign in again.");
     return json(
-      { message: tryAgainIn(wait) },
-      { status: 429, headers: { "Retry-After": String(retryAfterSeconds(wait)) } },
+      { ok: true },
+      { status: 200, headers: { "Set-Cookie": await renewedSessionCookie(caller, sessionVersion) } },
     );
-  if (!(await verifyPassword(body.currentPassword, user.passwordHash))) {
-    await recordSignInFailure(user.email, address);
-    throw refuse("currentPassword", ["that is not your current password"]);
-  }
-  parseWith(z.object({ newPassword: newPasswordSchema(user.email) }), { newPassword: body.newPassword });
-  if (await verifyPassword(body.newPassword, user.passwordHash))
-    throw refuse("newPassword", ["is the password you have now; choose a different one"]);
-  const sessionVersion = await changePassword({
-    userId: user.id,
-    teamId: caller.teamId,
-    expectedHash: user.passwordHash,
-    newHash: await hashPassword(body.newPassword),
-  });
-  if (sessionVersion === null)
-    throw new HttpError(409, "Your password was changed from somewhere else meanwhile; sign in again.");
-  return json(
-    { ok: true },
-    { status: 200, headers: { "Set-Cookie": await renewedSessionCookie(caller, sessionVersion) } },
-  );
-});
+  },
+);

@@ -13,7 +13,7 @@ import { recordUnitSchema, todayIso } from "@/lib/built-units/schemas";
 import { json } from "@/lib/http";
 
 /** The design's built units, each judged, with the yield measured and predicted and the spread check. */
-export const GET = apiRoute({ doing: "read built units" }, async ({ caller, params }) => {
+export const GET = apiRoute({ action: "design.read", doing: "read built units" }, async ({ caller, params }) => {
   const { summary } = await unitsSummaryFor(caller, params.id ?? "");
   return summary;
 });

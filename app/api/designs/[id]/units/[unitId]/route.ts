@@ -15,7 +15,7 @@ async function found(caller: Parameters<typeof unitsContext>[0], designId: strin
 }
 
 /** One unit, judged against its revision's bench check (and the design's prediction). */
-export const GET = apiRoute({ doing: "read built units" }, async ({ caller, params }) => {
+export const GET = apiRoute({ action: "design.read", doing: "read built units" }, async ({ caller, params }) => {
   const { design, revisions, unit } = await found(caller, params.id ?? "", params.unitId ?? "");
   const all = summarizeUnits(await listUnits(design.id), revisions);
   const view = all.units.find((u) => u.id === unit.id);

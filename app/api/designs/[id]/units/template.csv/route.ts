@@ -6,7 +6,7 @@ import { attachment } from "@/lib/build-sheet/exports";
 import { designSlug } from "@/lib/build-sheet/slug";
 
 /** A blank import file: the header the units import reads, for the newest approved revision. */
-export const GET = apiRoute({ doing: "read built units" }, async ({ caller, params }) => {
+export const GET = apiRoute({ action: "design.read", doing: "read built units" }, async ({ caller, params }) => {
   const { design, revisions } = await unitsContext(caller, params.id ?? "");
   const ref = referenceRevision(revisions);
   return new Response(unitsCsvTemplate(ref ? benchOf(ref) : []), {
