@@ -65,7 +65,9 @@ export function inWords(path: string, message: string, typed?: unknown): string 
   if (!m) return message;
   const listPath = path.replace(/\.\d+$/, "");
   const label = requirementFields[listPath]?.label ?? requirementFields[path]?.label ?? "This field";
-  const shown = typed === undefined || typed === null || typed === "" ? "" : `“${String(typed)}” `;
+  // For a list, quote the entry at fault, not the whole list.
+  const entry = Array.isArray(typed) ? typed.find((x) => typeof x !== "number") : typed;
+  const shown = entry === undefined || entry === null || entry === "" ? "" : `“${String(entry)}” `;
   if (m[1] === "number")
     return `${label}: ${shown}is not a number${listPath !== path ? "; give numbers separated by commas" : ""}`;
   return `${label}: ${shown}is not ${m[1] === "string" ? "text" : `a ${m[1]}`}`;
