@@ -190,7 +190,13 @@ export function Explorer({
               .map((m) => (
                 <li key={m}>{m}</li>
               ))}
-            {Object.keys(state.fieldErrors).length === 0 && <li>{state.message}</li>}
+            {Object.keys(state.fieldErrors).length === 0 && (
+              <li>
+                {state.message.startsWith("Invalid input")
+                  ? "An entry cannot be read as it stands; the form marks the field to correct."
+                  : state.message}
+              </li>
+            )}
           </ul>
         </div>
       )}

@@ -80,7 +80,9 @@ const withinRange: Resolver<WizardValues> = async (values, context, options) => 
         const n = node as { message?: unknown } & Record<string, unknown>;
         if (!n || typeof n !== "object") return;
         if (typeof n.message === "string") n.message = inWords(at, n.message, valueAt(values, at));
-        else for (const [k, v] of Object.entries(n)) if (k !== "ref") walk(v, `${at}.${k}`);
+        // A list carries its own message and one per bad entry: word them all.
+        for (const [k, v] of Object.entries(n))
+          if (k !== "ref" && k !== "message" && k !== "type") walk(v, `${at}.${k}`);
       };
       walk(valueAt(r.errors, path), path);
     }

@@ -62,10 +62,13 @@ const zodDefault = /^Invalid input: expected (\w+), received (\w+)$/;
 /** A schema's stock message ("Invalid input: expected number, received string") in the field's words. */
 export function inWords(path: string, message: string, typed?: unknown): string {
   const m = zodDefault.exec(message);
-  if (!m) return message;
+  if (!m && message !== "Invalid input") return message;
   const listPath = path.replace(/\.\d+$/, "");
   const label = requirementFields[listPath]?.label ?? requirementFields[path]?.label ?? "This field";
-  const shown = typed === undefined || typed === null || typed === "" ? "" : `“${String(typed)}” `;
+  // For a list, quote the entry at fault, not the whole list.
+  const entry = Array.isArray(typed) ? typed.find((x) => typeof x !== "number") : typed;
+  const shown = entry === undefined || entry === null || entry === "" ? "" : `“${String(entry)}” `;
+  if (!m) return `${label}: ${shown}cannot be read as it stands`;
   if (m[1] === "number")
     return `${label}: ${shown}is not a number${listPath !== path ? "; give numbers separated by commas" : ""}`;
   return `${label}: ${shown}is not ${m[1] === "string" ? "text" : `a ${m[1]}`}`;

@@ -33,7 +33,7 @@ test("designer → returned → revise → resubmit → approve", async ({ brows
   await page.goto(`/designs/${id}`);
   await expect(page.getByTestId("design-status").first()).toHaveText("returned");
   await page.getByTestId("revise-link").click();
-  await expect(page).toHaveURL(new RegExp(`/designs/${id}/revise$`));
+  await expect(page).toHaveURL(new RegExp(`/designs/${id}/revise(#\\w+)?$`));
   // The wizard opens on the saved requirement and pair.
   await expect(page.getByLabel("Minimum current", { exact: true })).toHaveValue("2 mA");
   await expect(page.getByTestId("pick-note")).toContainText("recommended pair");

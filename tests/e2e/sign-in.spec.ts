@@ -57,10 +57,14 @@ test("the owner changes a role on the team page; a maker is refused by the serve
   await signInPage(page, "owner");
   await page.goto("/team");
   const select = page.getByLabel("Role of Demo Reviewer");
+  // A role change asks first, then says what the new role means.
   await select.selectOption("designer");
-  await expect(page.getByText("Demo Reviewer is now a designer.")).toBeVisible();
+  await page.getByRole("button", { name: "Change the role" }).click();
+  await expect(page.getByText("Demo Reviewer is now a designer:")).toBeVisible();
+  await expect(select).toHaveValue("designer");
   await select.selectOption("reviewer");
-  await expect(page.getByText("Demo Reviewer is now a reviewer.")).toBeVisible();
+  await page.getByRole("button", { name: "Change the role" }).click();
+  await expect(page.getByText("Demo Reviewer is now a reviewer:")).toBeVisible();
 
   await page.goto("/team");
   const after = (await (await maker.get("/api/team")).json()) as typeof team;
