@@ -95,9 +95,10 @@ export function AuditTimeline({
   return (
     <ol className="flex flex-col gap-1 text-sm" data-testid="audit-timeline">
       {entries.map((e) => (
-        <li key={e.id} className="grid grid-cols-[9.5rem_1fr] gap-3">
+        // On a phone the time sits above the line; a long unbroken name wraps instead of widening the page.
+        <li key={e.id} className="grid grid-cols-1 gap-x-3 sm:grid-cols-[9.5rem_minmax(0,1fr)]">
           <span className="text-xs text-ink-muted num">{formatWhen(e.at)}</span>
-          <span>
+          <span className="min-w-0 [overflow-wrap:anywhere]">
             <span className="font-medium">{e.actorName ?? "Someone signed out"}</span> {describeAudit(e)}
             {designNames && e.targetType === "design" && e.targetId && (
               <>
