@@ -216,7 +216,23 @@ function attemptFor(route: Route): fc.Arbitrary<Attempt> {
 test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
   let owner: APIRequestContext;
   let anon: APIRequestContext;
-  const before = { designs: 0, amplifiers: 0, shunts: 0 };
+  /** Every design of the team, page by page (GET /api/designs is paged: API v2). */
+async function everyDesign(as: APIRequestContext): Promise<{ id: string; revision: number }[]> {
+  const all: { id: string; revision: number }[] = [];
+  let cursor: string | null = null;
+  do {
+    const query: string = cursor ? `&cursor=${encodeURIComponent(cursor)}` : "";
+    const page = (await (await as.get(`/api/designs?limit=200${query}`)).json()) as {
+      designs: { id: string; revision: number }[];
+      nextCursor: string | null;
+    };
+    all.push(...page.designs);
+    cursor = page.nextCursor;
+  } while (cursor);
+  return all;
+}
+
+const before = { designs: 0, amplifiers: 0, shunts: 0 };
   const created = { designs: 0, amplifiers: 0, shunts: 0 };
   const refMs = new Map<string, number>();
 
@@ -246,7 +262,7 @@ test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
     const team = (await (await member.get("/api/team")).json()) as { members: { userId: string; email: string }[] };
     ids.member = team.members.find((m) => m.email === email)!.userId;
     await member.dispose();
-    const designs = (await (await owner.get("/api/designs")).json()) as { designs: unknown[] };
+    const designs = { designs: await everyDesign(owner) };
     const library = (await (await owner.get("/api/library")).json()) as { amplifiers: unknown[]; shunts: unknown[] };
     Object.assign(before, {
       designs: designs.designs.length,
@@ -300,7 +316,7 @@ test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
   });
 
   test("the database is whole afterwards", async () => {
-    const list = (await (await owner.get("/api/designs")).json()) as { designs: { id: string; revision: number }[] };
+    const list = { designs: await everyDesign(owner) };
     expect(list.designs.length).toBe(before.designs + created.designs);
     for (const d of list.designs) {
       const res = await owner.get(`/api/designs/${d.id}`);
