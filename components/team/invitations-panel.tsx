@@ -136,45 +136,48 @@ export function InvitationsPanel({ invitations }: { invitations: InvitationRow[]
       {invitations.length === 0 ? (
         <p className="text-xs text-ink-faint">No invitations sent yet.</p>
       ) : (
-        <table className="w-full text-left text-sm">
-          <thead className="border-b border-line text-xs text-ink-muted">
-            <tr>
-              <th className="py-1 pr-3 font-medium">E-mail</th>
-              <th className="py-1 pr-3 font-medium">Role</th>
-              <th className="py-1 pr-3 font-medium">State</th>
-              <th className="py-1 pr-3 font-medium">Sent</th>
-              <th className="py-1 pr-3 font-medium">Expires</th>
-              <th className="py-1" />
-            </tr>
-          </thead>
-          <tbody>
-            {invitations.map((i) => (
-              <tr key={i.id} className="border-b border-line last:border-0" data-testid="invitation-row">
-                <td className="py-1 pr-3 font-mono text-xs">{i.email}</td>
-                <td className="py-1 pr-3">{i.role}</td>
-                <td className="py-1 pr-3">
-                  <Badge tone={tone[i.status]}>{i.status}</Badge>
-                </td>
-                <td className="py-1 pr-3 text-xs text-ink-muted">
-                  {formatWhen(i.createdAt)} by {i.invitedByName}
-                </td>
-                <td className="py-1 pr-3 text-xs text-ink-muted">{formatWhen(i.expiresAt)}</td>
-                <td className="py-1 text-right">
-                  {i.status === "pending" && (
-                    <Button
-                      variant="ghost"
-                      className="px-2 py-0.5 text-xs"
-                      onClick={() => revoke(i)}
-                      aria-label={`Revoke the invitation of ${i.email}`}
-                    >
-                      Revoke
-                    </Button>
-                  )}
-                </td>
+        // The table scrolls inside its own frame on a phone, never the page.
+        <div className="overflow-x-auto">
+          <table className="w-full text-left text-sm">
+            <thead className="border-b border-line text-xs text-ink-muted">
+              <tr>
+                <th className="py-1 pr-3 font-medium">E-mail</th>
+                <th className="py-1 pr-3 font-medium">Role</th>
+                <th className="py-1 pr-3 font-medium">State</th>
+                <th className="py-1 pr-3 font-medium">Sent</th>
+                <th className="py-1 pr-3 font-medium">Expires</th>
+                <th className="py-1" />
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {invitations.map((i) => (
+                <tr key={i.id} className="border-b border-line last:border-0" data-testid="invitation-row">
+                  <td className="py-1 pr-3 font-mono text-xs">{i.email}</td>
+                  <td className="py-1 pr-3">{i.role}</td>
+                  <td className="py-1 pr-3">
+                    <Badge tone={tone[i.status]}>{i.status}</Badge>
+                  </td>
+                  <td className="py-1 pr-3 text-xs text-ink-muted">
+                    {formatWhen(i.createdAt)} by {i.invitedByName}
+                  </td>
+                  <td className="py-1 pr-3 text-xs text-ink-muted">{formatWhen(i.expiresAt)}</td>
+                  <td className="py-1 text-right">
+                    {i.status === "pending" && (
+                      <Button
+                        variant="ghost"
+                        className="px-2 py-0.5 text-xs"
+                        onClick={() => revoke(i)}
+                        aria-label={`Revoke the invitation of ${i.email}`}
+                      >
+                        Revoke
+                      </Button>
+                    )}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       )}
     </Panel>
   );
