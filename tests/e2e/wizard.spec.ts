@@ -20,7 +20,9 @@ test("a designer fills the wizard, explores, saves and finds the design", async 
   await page.reload();
 
   // Step 1: the span. A voltage where a current belongs is refused beside its field.
-  await page.getByLabel("Minimum current", { exact: true }).fill("3 uA");
+  // 100 µA, not the logger's 3 µA sleep current: on one range 3 µA is only about 1 µV on the shunt,
+  // under the amplifier's own noise, so no single pair resolves it (issue 11).
+  await page.getByLabel("Minimum current", { exact: true }).fill("100 uA");
   await page.getByLabel("Maximum current", { exact: true }).fill("5 V");
   await page.getByLabel("Maximum current", { exact: true }).press("Enter");
   const maxError = page.locator("#f-current-max-error");

@@ -144,7 +144,7 @@ test.describe("POST /api/solve results", () => {
     expect(s.rangePlan).toBeNull();
     // The requirement comes back normalized in SI with every default filled in.
     expect(s.requirement).toMatchObject({
-      current: { min: 3e-6, max: 0.18 },
+      current: { min: 1e-4, max: 0.18 },
       supply: { voltage: 3, side: "low" },
       drop: { max: 0.06 },
     });
