@@ -143,7 +143,7 @@ test("a span too wide for one range shows its range plan on the current axis", a
   await expect(page.getByTestId("no-feasible")).toContainText("A plan with several ranges does");
   await expect(page.getByRole("heading", { name: /Range plan: [23] ranges/ })).toBeVisible();
   await expect(page.getByTestId("range-plan-chart").locator("svg rect").first()).toBeVisible();
-  await expect(page.getByTestId("rejections")).toContainText("Too few readout counts at the minimum current");
+  await expect(page.getByTestId("rejections")).toContainText("Too few steps the readout can tell apart");
   await shot(page, "8-range-plan");
   await page.getByTestId("range-plan-chart").screenshot({ path: `${shots}/wizard-8a-range-plan-chart.png` });
 });
