@@ -213,6 +213,22 @@ function attemptFor(route: Route): fc.Arbitrary<Attempt> {
   );
 }
 
+/** Every design of the caller's team: the list is paged ({designs, nextCursor}), so follow the cursor. */
+async function everyDesign(ctx: APIRequestContext): Promise<{ id: string; revision: number }[]> {
+  const all: { id: string; revision: number }[] = [];
+  let cursor: string | null = null;
+  do {
+    const url: string = `/api/designs?limit=200${cursor ? `&cursor=${encodeURIComponent(cursor)}` : ""}`;
+    const page = (await (await ctx.get(url)).json()) as {
+      designs: { id: string; revision: number }[];
+      nextCursor: string | null;
+    };
+    all.push(...page.designs);
+    cursor = page.nextCursor;
+  } while (cursor);
+  return all;
+}
+
 test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
   let owner: APIRequestContext;
   let anon: APIRequestContext;
@@ -246,7 +262,7 @@ test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
     const team = (await (await member.get("/api/team")).json()) as { members: { userId: string; email: string }[] };
     ids.member = team.members.find((m) => m.email === email)!.userId;
     await member.dispose();
-    const designs = (await (await owner.get("/api/designs")).json()) as { designs: unknown[] };
+    const designs = { designs: await everyDesign(owner) };
     const library = (await (await owner.get("/api/library")).json()) as { amplifiers: unknown[]; shunts: unknown[] };
     Object.assign(before, {
       designs: designs.designs.length,
@@ -300,7 +316,7 @@ test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
   });
 
   test("the database is whole afterwards", async () => {
-    const list = (await (await owner.get("/api/designs")).json()) as { designs: { id: string; revision: number }[] };
+    const list = { designs: await everyDesign(owner) };
     expect(list.designs.length).toBe(before.designs + created.designs);
     for (const d of list.designs) {
       const res = await owner.get(`/api/designs/${d.id}`);
