@@ -101,6 +101,7 @@ test("a maker types in a unit's readings, sees one out of band with its cause, a
   await page.waitForTimeout(400);
   await page.screenshot({ path: `${shots}/units-390.png`, fullPage: true });
   await page.getByTestId("units-panel").screenshot({ path: `${shots}/units-panel-390.png` });
+  await noSidewaysScroll(page);
 
   // The reviewer's compare page shows measured yield beside the figures once units exist.
   const logger = await apiAs("maker");
@@ -114,5 +115,4 @@ test("a maker types in a unit's readings, sees one out of band with its cause, a
   await expect(measured.locator("td").first()).toHaveText(/^76\.9 %/);
   await expect(measured.locator("td").nth(1)).toHaveText("—");
   await page.screenshot({ path: `${shots}/compare-built-yield.png`, fullPage: true });
-  await noSidewaysScroll(page);
 });
