@@ -6,6 +6,8 @@ import { signInPage } from "../fixtures/auth";
 import { checkScreen, widths } from "./screen-check";
 
 const shots = process.env.PW_OUTPUT_DIR ?? "test-results/wizard-loop";
+// "0 feasible" also contains "feasible": the status must count at least one feasible pair.
+const somePairFeasible = /: [1-9][\d,]* feasible/;
 
 async function freshWizard(page: Page) {
   await signInPage(page, "designer");
@@ -19,7 +21,6 @@ async function stepTo(page: Page, name: RegExp) {
 }
 
 test.use({ viewport: { width: widths.desktop, height: 1000 } });
-test.setTimeout(120_000);
 
 test("new designs start from the defaults; an example loads only on request", async ({ page }) => {
   await freshWizard(page);
@@ -39,9 +40,8 @@ test("new designs start from the defaults; an example loads only on request", as
   page.once("dialog", (d) => void d.accept());
   await page.getByText("Start from an example").click();
   await page.getByRole("button", { name: "Soil-moisture logger, 24-bit converter" }).click();
-  // The 24-bit example starts at 100 µA (lib/wizard/scenarios.ts): 3 µA on its shunt is below the offset.
   await expect(page.getByLabel("Minimum current", { exact: true })).toHaveValue("100 uA");
-  await expect(page.getByTestId("solve-status")).toContainText("feasible", { timeout: 45_000 });
+  await expect(page.getByTestId("solve-status")).toContainText(somePairFeasible);
   // The example's values on steps never opened are listed before saving.
   const summary = page.getByTestId("defaults-summary");
   await expect(summary).toContainText("ADC resolution");
@@ -55,7 +55,7 @@ test("the recommended pair leads; a picked pair stays and says when it stops fit
   await freshWizard(page);
   await page.getByText("Start from an example").click();
   await page.getByRole("button", { name: "Soil-moisture logger, 24-bit converter" }).click();
-  await expect(page.getByTestId("solve-status")).toContainText("feasible", { timeout: 45_000 });
+  await expect(page.getByTestId("solve-status")).toContainText(somePairFeasible);
   const rec = page.getByTestId("recommended");
   await expect(rec).toContainText("Recommended pair");
   await expect(rec).toContainText("It uses the least of the three limits");
@@ -67,8 +67,8 @@ test("the recommended pair leads; a picked pair stays and says when it stops fit
 
   // An edit moves the top of the ranking; the selection follows it.
   await stepTo(page, /Supply and drop/);
-  await page.getByLabel("Allowed drop", { exact: true }).fill("45 mV");
-  await expect(page.getByTestId("solve-status")).toContainText("feasible", { timeout: 45_000 });
+  await page.getByLabel("Allowed drop", { exact: true }).fill("30 mV");
+  await expect(page.getByTestId("solve-status")).toContainText(somePairFeasible);
   await expect(rec).toContainText("(selected)");
   await expect(rows.first()).toHaveAttribute("aria-selected", "true");
 
@@ -81,7 +81,7 @@ test("the recommended pair leads; a picked pair stays and says when it stops fit
   await expect(page.getByTestId("pick-note")).toContainText("no longer meets the requirement");
   await expect(page.getByRole("button", { name: /^Save/ })).toBeDisabled();
   await checkScreen(page, `${shots}/pick-infeasible-desktop.png`);
-  await page.getByLabel("Allowed drop", { exact: true }).fill("45 mV");
+  await page.getByLabel("Allowed drop", { exact: true }).fill("30 mV");
   await expect(page.getByTestId("pick-note")).toContainText(`Your pick, ${pickedShunt}`);
   await page.getByRole("button", { name: /^Follow the ranking/ }).click();
   await expect(page.getByTestId("pick-note")).toContainText("Following the ranking");
@@ -92,7 +92,7 @@ test("a double-clicked Save sends one request with an Idempotency-Key and makes 
   await freshWizard(page);
   await page.getByText("Start from an example").click();
   await page.getByRole("button", { name: "Soil-moisture logger, 24-bit converter" }).click();
-  await expect(page.getByTestId("solve-status")).toContainText("feasible", { timeout: 45_000 });
+  await expect(page.getByTestId("solve-status")).toContainText(somePairFeasible);
   const posts: (string | null)[] = [];
   page.on("request", (r) => {
     if (r.method() === "POST" && new URL(r.url()).pathname === "/api/designs")

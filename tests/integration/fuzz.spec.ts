@@ -213,16 +213,13 @@ function attemptFor(route: Route): fc.Arbitrary<Attempt> {
   );
 }
 
-test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
-  let owner: APIRequestContext;
-  let anon: APIRequestContext;
-  /** Every design of the team, page by page (GET /api/designs is paged: API v2). */
-async function everyDesign(as: APIRequestContext): Promise<{ id: string; revision: number }[]> {
+/** Every design of the caller's team: the list is paged ({designs, nextCursor}), so follow the cursor. */
+async function everyDesign(ctx: APIRequestContext): Promise<{ id: string; revision: number }[]> {
   const all: { id: string; revision: number }[] = [];
   let cursor: string | null = null;
   do {
-    const query: string = cursor ? `&cursor=${encodeURIComponent(cursor)}` : "";
-    const page = (await (await as.get(`/api/designs?limit=200${query}`)).json()) as {
+    const url: string = `/api/designs?limit=200${cursor ? `&cursor=${encodeURIComponent(cursor)}` : ""}`;
+    const page = (await (await ctx.get(url)).json()) as {
       designs: { id: string; revision: number }[];
       nextCursor: string | null;
     };
@@ -232,7 +229,10 @@ async function everyDesign(as: APIRequestContext): Promise<{ id: string; revisio
   return all;
 }
 
-const before = { designs: 0, amplifiers: 0, shunts: 0 };
+test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
+  let owner: APIRequestContext;
+  let anon: APIRequestContext;
+  const before = { designs: 0, amplifiers: 0, shunts: 0 };
   const created = { designs: 0, amplifiers: 0, shunts: 0 };
   const refMs = new Map<string, number>();
 
