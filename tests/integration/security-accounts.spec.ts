@@ -344,7 +344,11 @@ test("on screen: a held-back sign-in says how long to wait", async ({ browser })
   for (let i = 0; i < 6; i++) {
     await page.getByLabel("E-mail").fill(email);
     await page.getByLabel("Password").fill(`wrong-${i}-guess`);
+    // Wait for this try's own answer: the message of the try before reads the same, so checking the
+    // text alone could pass before this try has been counted.
+    const answered = page.waitForResponse((r) => r.url().includes("/api/auth/callback/credentials"));
     await page.getByRole("button", { name: "Sign in" }).click();
+    await answered;
     await expect(page.getByTestId("sign-in-error")).toHaveText(
       i < 5
         ? "That e-mail and password do not match an account."
