@@ -2,6 +2,7 @@
 // or nothing with the row and column named, export imports back unchanged.
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { apiAs } from "../fixtures/auth";
+import { amplifierBody } from "./authz-helpers";
 
 type Part = Record<string, unknown> & { id: string; name: string; updatedAt: string };
 type Library = { amplifiers: Part[]; shunts: Part[] };
@@ -30,23 +31,7 @@ function importCsv(ctx: APIRequestContext, kind: string, csv: string) {
   });
 }
 
-const amp = (name: string) => ({
-  name,
-  gainMode: "fixed",
-  gains: [20, 50],
-  offsetV: "25 uV",
-  offsetDriftVPerK: "0.1 uV/K",
-  gainErrorFraction: "0.2 %",
-  gainDriftPerK: "10 ppm/K",
-  biasCurrentA: "15 nA",
-  noiseDensityVPerRtHz: "35 nV/rtHz",
-  gbwHz: "500 kHz",
-  swingLowV: "10 mV",
-  swingHighV: "30 mV",
-  cmrrDb: 105,
-  supplyMinV: "2.7 V",
-  supplyMaxV: "5.5 V",
-});
+const amp = amplifierBody;
 
 test("every member reads the demo library, in SI with ISO dates", async () => {
   const lib = await library(maker);
