@@ -321,6 +321,8 @@ const routes: Row[] = [
     method: "PUT",
     setup: fixed("/api/me/password", { currentPassword: "not-the-password", newPassword: "tall-copper-kettle-41" }),
     expect: members(422),
+    // A token is a script's credential: only a signed-in session changes a password (403 for a token).
+    sessionOnly: true,
   },
   {
     name: "POST /api/invitations/accept (bad token)",
