@@ -22,6 +22,10 @@ export const TOOLS = [
     check: ({ exists, env }) => exists(env.CHROMIUM_PATH || "/usr/bin/chromium"),
   },
   { name: "ngspice", pkg: "ngspice", suites: ["unit"], check: ({ which }) => which("ngspice") },
+  // The worked scripts in examples/ (curl and jq; Python's standard library), run by examples.spec.ts.
+  { name: "curl", pkg: "curl", suites: ["e2e"], check: ({ which }) => which("curl") },
+  { name: "jq", pkg: "jq", suites: ["e2e"], check: ({ which }) => which("jq") },
+  { name: "python3", pkg: "python3", suites: ["e2e"], check: ({ which }) => which("python3") },
   { name: "pdftoppm", pkg: "poppler-utils", suites: ["unit"], check: ({ which }) => which("pdftoppm") },
   { name: "pdftotext", pkg: "poppler-utils", suites: ["unit"], check: ({ which }) => which("pdftotext") },
   {

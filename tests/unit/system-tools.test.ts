@@ -13,8 +13,11 @@ function machine(commands: string[], files: string[], opts: { isRoot: boolean; h
   };
 }
 
+/** What the worked scripts in examples/ need (the e2e suite runs them). */
+const scripting = ["curl", "jq", "python3"];
+
 const everything = machine(
-  ["ngspice", "pdftoppm", "pdftotext"],
+  ["ngspice", "pdftoppm", "pdftotext", ...scripting],
   ["/usr/bin/chromium", "/usr/lib/postgresql/15/bin/initdb"],
   { isRoot: false, hasApt: true },
 );
@@ -25,7 +28,7 @@ describe("system tools preflight", () => {
   });
 
   it("installs the missing packages (each once) as root with apt-get", () => {
-    const m = machine(["pdftotext"], [], { isRoot: true, hasApt: true });
+    const m = machine(["pdftotext", ...scripting], [], { isRoot: true, hasApt: true });
     const p = plan({ suites: ["unit", "e2e"], ...m });
     expect(p.action).toBe("install");
     expect(p.missing).toEqual(["Chromium at /usr/bin/chromium", "ngspice", "pdftoppm"]);
@@ -36,7 +39,7 @@ describe("system tools preflight", () => {
   });
 
   it("stops with a sudo command when not root", () => {
-    const m = machine(["pdftoppm", "pdftotext"], ["/usr/bin/chromium"], { isRoot: false, hasApt: true });
+    const m = machine(["pdftoppm", "pdftotext", ...scripting], ["/usr/bin/chromium"], { isRoot: false, hasApt: true });
     const p = plan({ suites: ["unit", "e2e"], ...m });
     expect(p.action).toBe("stop");
     expect(p.missing).toEqual(["ngspice"]);
@@ -51,21 +54,33 @@ describe("system tools preflight", () => {
   });
 
   it("asks only for what the chosen suites need", () => {
-    const noBrowser = machine(["ngspice", "pdftoppm", "pdftotext"], [], { isRoot: false, hasApt: true });
+    const noBrowser = machine(["ngspice", "pdftoppm", "pdftotext", ...scripting], [], { isRoot: false, hasApt: true });
     expect(plan({ suites: ["unit"], ...noBrowser }).action).toBe("ok");
     expect(plan({ suites: ["e2e"], ...noBrowser }).missing).toEqual(["Chromium at /usr/bin/chromium"]);
     // PostgreSQL 15 only for CI's PostgreSQL run.
-    const noPg = machine(["ngspice", "pdftoppm", "pdftotext"], ["/usr/bin/chromium"], { isRoot: true, hasApt: true });
+    const noPg = machine(["ngspice", "pdftoppm", "pdftotext", ...scripting], ["/usr/bin/chromium"], {
+      isRoot: true,
+      hasApt: true,
+    });
     expect(plan({ suites: ["unit", "e2e"], ...noPg }).action).toBe("ok");
     expect(plan({ suites: ["unit", "e2e", "postgres"], ...noPg }).packages).toEqual(["postgresql-15"]);
   });
 
   it("looks for Chromium where CHROMIUM_PATH points", () => {
     const m = {
-      ...machine([], ["/opt/browser/chrome"], { isRoot: false, hasApt: true }),
+      ...machine(scripting, ["/opt/browser/chrome"], { isRoot: false, hasApt: true }),
       env: { CHROMIUM_PATH: "/opt/browser/chrome" },
     };
     expect(plan({ suites: ["e2e"], ...m }).action).toBe("ok");
+  });
+
+  it("asks for curl, jq and python3 for the browser and HTTP suites, which run the example scripts", () => {
+    const noJq = machine(["ngspice", "pdftoppm", "pdftotext", "curl", "python3"], ["/usr/bin/chromium"], {
+      isRoot: true,
+      hasApt: true,
+    });
+    expect(plan({ suites: ["unit"], ...noJq }).action).toBe("ok");
+    expect(plan({ suites: ["e2e"], ...noJq })).toMatchObject({ action: "install", missing: ["jq"], packages: ["jq"] });
   });
 
   it("writes the install line with sudo only when not root", () => {
