@@ -78,13 +78,9 @@ export async function createDesign(input: NewDesign, inTx?: Tx): Promise<{ id: s
 
 const author = alias(users, "author");
 
-/** The team's designs, newest change first; makers see approved ones only. */
-export async function listDesigns(teamId: string, opts: { approvedOnly?: boolean } = {}) {
-  const db = await getDb();
-  const where = opts.approvedOnly
-    ? and(eq(designs.teamId, teamId), eq(designs.status, "approved"))
-    : eq(designs.teamId, teamId);
-  const rows = await db
+/** A designs-list row (the current revision's pair and author), plus any extra columns, for both list queries. */
+function listedDesigns<X extends Record<string, SQL.Aliased | SQL>>(db: Awaited<ReturnType<typeof getDb>>, extra: X) {
+  return db
     .select({
       id: designs.id,
       name: designs.name,
@@ -95,6 +91,7 @@ export async function listDesigns(teamId: string, opts: { approvedOnly?: boolean
       authorName: author.name,
       shuntOhms: sql<number>`(${designRevisions.choice}->>'shuntOhms')::float8`,
       gain: sql<number>`(${designRevisions.choice}->>'gain')::float8`,
+      ...extra,
     })
     .from(designs)
     .innerJoin(
@@ -102,8 +99,16 @@ export async function listDesigns(teamId: string, opts: { approvedOnly?: boolean
       and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)),
     )
     .innerJoin(author, eq(author.id, designRevisions.authorId))
-    .where(where)
-    .orderBy(desc(designs.updatedAt), desc(designs.id));
+    .$dynamic();
+}
+
+/** The team's designs, newest change first; makers see approved ones only. */
+export async function listDesigns(teamId: string, opts: { approvedOnly?: boolean } = {}) {
+  const db = await getDb();
+  const where = opts.approvedOnly
+    ? and(eq(designs.teamId, teamId), eq(designs.status, "approved"))
+    : eq(designs.teamId, teamId);
+  const rows = await listedDesigns(db, {}).where(where).orderBy(desc(designs.updatedAt), desc(designs.id));
   return rows.map((r) => ({ ...r, updatedAt: r.updatedAt.toISOString() }));
 }
 
@@ -146,25 +151,9 @@ export async function pageDesigns(teamId: string, opts: DesignListQuery) {
       sql`(${designs.updatedAt}, ${designs.id}) < (${opts.after.updatedAt}::timestamptz, ${opts.after.id}::uuid)`,
     );
   }
-  const rows = await db
-    .select({
-      id: designs.id,
-      name: designs.name,
-      project: designs.project,
-      status: designs.status,
-      revision: designs.revision,
-      updatedAt: designs.updatedAt,
-      sortKey: sql<string>`to_char(${designs.updatedAt} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`,
-      authorName: author.name,
-      shuntOhms: sql<number>`(${designRevisions.choice}->>'shuntOhms')::float8`,
-      gain: sql<number>`(${designRevisions.choice}->>'gain')::float8`,
-    })
-    .from(designs)
-    .innerJoin(
-      designRevisions,
-      and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)),
-    )
-    .innerJoin(author, eq(author.id, designRevisions.authorId))
+  const rows = await listedDesigns(db, {
+    sortKey: sql<string>`to_char(${designs.updatedAt} at time zone 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"')`,
+  })
     .where(and(...where))
     .orderBy(desc(designs.updatedAt), desc(designs.id))
     .limit(opts.limit + 1);
