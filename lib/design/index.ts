@@ -38,3 +38,4 @@ export * from "./unit-prediction";
 export * from "./calibrated-accuracy";
 export * from "./cautions";
 export * from "./profile";
+export * from "./plan-choice";
