@@ -1,5 +1,6 @@
 // Expected readings for a bench check of the built front end (the build sheet's table).
-import { errorAtWith } from "./error-budget";
+import { readoutOwnSources } from "./budget-readout-signed";
+import { budgetTerms } from "./error-budget";
 import { buildModel } from "./model";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
@@ -12,7 +13,15 @@ export type BenchCheckRow = { label: string; currentA: number; expectedV: number
  */
 export function benchCheck(req: Requirement, choice: Choice): BenchCheckRow[] {
   const { min, max, typical } = req.current;
-  const points: { label: string; currentA: number }[] = [{ label: "Minimum current", currentA: min }];
+  // A signed span is checked at both ends, half of each, and zero (where the output is the zero level).
+  const points: { label: string; currentA: number }[] =
+    min < 0
+      ? [
+          { label: "Largest negative current", currentA: min },
+          { label: "50 % of the largest negative current", currentA: 0.5 * min },
+          { label: "Zero current", currentA: 0 },
+        ]
+      : [{ label: "Minimum current", currentA: min }];
   if (typical !== undefined) points.push({ label: "Typical current", currentA: typical });
   points.push(
     { label: "10 % of maximum current", currentA: 0.1 * max },
@@ -20,18 +29,22 @@ export function benchCheck(req: Requirement, choice: Choice): BenchCheckRow[] {
     { label: "Maximum current", currentA: max },
   );
   const tz = choice.shuntOhms * choice.gain;
-  const m = buildModel(req);
+  // The bench reads the amplifier's output, uncalibrated: the readout's own error is not in its band.
+  const raw: Requirement = { ...req, calibration: "none" };
+  const m = buildModel(raw);
   return points.map(({ label, currentA }) => {
-    const { worstA } = errorAtWith(req, m, choice, currentA);
+    const worstA = budgetTerms(raw, m, choice, Math.abs(currentA))
+      .filter((t) => !readoutOwnSources.includes(t.source))
+      .reduce((sum, t) => sum + Math.abs(t.errorA), 0);
     // The band stops where the output can go: no lower than the amplifier's lowest output, no
     // higher than the readout can show or the amplifier can swing.
     const clamp = (v: number) => Math.min(m.outCeil, Math.max(m.swingLow, v));
     return {
       label,
       currentA,
-      expectedV: currentA * tz,
-      minV: clamp((currentA - worstA) * tz),
-      maxV: clamp((currentA + worstA) * tz),
+      expectedV: m.vRef + currentA * tz,
+      minV: clamp(m.vRef + (currentA - worstA) * tz),
+      maxV: clamp(m.vRef + (currentA + worstA) * tz),
     };
   });
 }

@@ -11,6 +11,7 @@ import {
   worstErrorA,
 } from "./model";
 import { shuntFigures } from "./pair";
+import { readoutSignedLabels, readoutSignedTerms, type ReadoutSignedSource } from "./budget-readout-signed";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
 
@@ -25,7 +26,8 @@ export type BudgetSource =
   | "biasCurrent"
   | "commonMode"
   | "readout"
-  | "noise";
+  | "noise"
+  | ReadoutSignedSource;
 
 export const budgetSourceLabels: Record<BudgetSource, string> = {
   gainError: "Amplifier gain error",
@@ -37,11 +39,13 @@ export const budgetSourceLabels: Record<BudgetSource, string> = {
   offsetDrift: "Offset drift over temperature",
   biasCurrent: "Input bias current",
   commonMode: "Common-mode error (CMRR, resistor matching in a difference stage)",
-  readout: "Readout step (half an LSB)",
+  readout: "Readout step (half an LSB; a meter's ± digits)",
   noise: "Noise (crest factor × RMS)",
+  ...readoutSignedLabels,
 };
 
-export type BudgetTerm = { source: BudgetSource; label: string; errorA: number };
+/** `removedA`: what the requirement's calibration took out of this term (absent: nothing). */
+export type BudgetTerm = { source: BudgetSource; label: string; errorA: number; removedA?: number };
 export type ErrorAtResult = {
   worstA: number;
   rssA: number;
@@ -50,29 +54,36 @@ export type ErrorAtResult = {
   terms: BudgetTerm[];
 };
 
-/** Budget terms at current I (A). The sum equals worstErrorA from the model. */
+/**
+ * Budget terms at current magnitude I (A), after the requirement's calibration. The sum equals
+ * worstErrorA from the model. A signed span's terms are the same either way.
+ */
 export function budgetTerms(req: Requirement, m: Model, choice: Choice, I: number): BudgetTerm[] {
   const { shuntOhms: R, gain: G } = choice;
   const theta = shuntFigures(m, R).theta;
   const a = req.amplifier;
-  const values: Record<BudgetSource, number> = {
-    gainError: I * a.gainError,
-    gainSetResistors: I * gainSetError(m, G),
-    shuntTolerance: I * req.shunt.tolerance,
-    shuntTempco: I * m.alphaR * (m.dTamb + I * I * R * theta),
-    gainDrift: I * a.gainDrift * m.dTamb,
-    offset: a.offset / R,
-    offsetDrift: (a.offsetDrift * m.dTamb) / R,
-    biasCurrent: a.biasCurrent,
-    commonMode: commonModeErrorV(m, G) / R,
-    readout: m.lsbV / (2 * R * G),
-    noise: m.crest * noiseRmsA(m, R, G),
-  };
-  return (Object.keys(values) as BudgetSource[]).map((source) => ({
-    source,
-    label: budgetSourceLabels[source],
-    errorA: values[source],
-  }));
+  const gainKeep = m.accEpsKeep;
+  const offKeep = m.accOffKeep;
+  // [before calibration, share kept]
+  const values: [BudgetSource, number, number][] = [
+    ["gainError", I * a.gainError, gainKeep],
+    ["gainSetResistors", I * gainSetError(m, G), gainKeep],
+    ["shuntTolerance", I * req.shunt.tolerance, gainKeep],
+    ["shuntTempco", I * m.alphaR * (m.dTamb + I * I * R * theta), 1],
+    ["gainDrift", I * a.gainDrift * m.dTamb, 1],
+    ["offset", a.offset / R, offKeep],
+    ["offsetDrift", (a.offsetDrift * m.dTamb) / R, 1],
+    ["biasCurrent", a.biasCurrent, offKeep],
+    ["commonMode", commonModeErrorV(m, G) / R, offKeep],
+    ["readout", m.read.quantV / (R * G), 1],
+    ["noise", m.crest * noiseRmsA(m, R, G), 1],
+    ...readoutSignedTerms(req, m, R * G, I),
+  ];
+  return values.map(([source, full, keep]) => {
+    const term: BudgetTerm = { source, label: budgetSourceLabels[source], errorA: full * keep };
+    if (keep < 1 && full !== 0) term.removedA = full * (1 - keep);
+    return term;
+  });
 }
 
 function combine(terms: BudgetTerm[], I: number): ErrorAtResult {
