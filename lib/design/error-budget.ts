@@ -11,6 +11,7 @@ import {
   worstErrorA,
 } from "./model";
 import { shuntFigures } from "./pair";
+import { signedSpanCurrents } from "./bidirectional";
 import { readoutSignedLabels, readoutSignedTerms, type ReadoutSignedSource } from "./budget-readout-signed";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
@@ -58,8 +59,9 @@ export type ErrorAtResult = {
  * Budget terms at current magnitude I (A), after the requirement's calibration. The sum equals
  * worstErrorA from the model. A signed span's terms are the same either way.
  */
-export function budgetTerms(req: Requirement, m: Model, choice: Choice, I: number): BudgetTerm[] {
+export function budgetTerms(req: Requirement, m: Model, choice: Choice, current: number): BudgetTerm[] {
   const { shuntOhms: R, gain: G } = choice;
+  const I = Math.abs(current);
   const theta = shuntFigures(m, R).theta;
   const a = req.amplifier;
   const gainKeep = m.accEpsKeep;
@@ -94,7 +96,8 @@ function combine(terms: BudgetTerm[], I: number): ErrorAtResult {
     sq += t.errorA * t.errorA;
   }
   const rssA = Math.sqrt(sq);
-  return { worstA, rssA, worstPercent: (100 * worstA) / I, rssPercent: (100 * rssA) / I, terms };
+  const mag = Math.abs(I);
+  return { worstA, rssA, worstPercent: (100 * worstA) / mag, rssPercent: (100 * rssA) / mag, terms };
 }
 
 export function errorAt(req: Requirement, choice: Choice, currentA: number): ErrorAtResult {
@@ -116,9 +119,18 @@ export function logSpace(a: number, b: number, n: number): number[] {
 
 export type ErrorCurvePoint = { currentA: number; worstPercent: number; rssPercent: number };
 
+/**
+ * Currents for a curve over the span: log-spaced; on a signed span log-spaced magnitudes each way
+ * from a tenth of the smallest magnitude of interest, negative ones first.
+ */
+export function spanCurrents(req: Requirement, m: Model, points: number): number[] {
+  if (!m.signed) return logSpace(req.current.min, req.current.max, points);
+  return signedSpanCurrents(req.current.min, req.current.max, m.iMin / 10, Math.ceil(points / 2));
+}
+
 export function errorCurve(req: Requirement, choice: Choice, points = 60): ErrorCurvePoint[] {
   const m = buildModel(req);
-  return logSpace(req.current.min, req.current.max, points).map((I) => {
+  return spanCurrents(req, m, points).map((I) => {
     const r = combine(budgetTerms(req, m, choice, I), I);
     return { currentA: I, worstPercent: r.worstPercent, rssPercent: r.rssPercent };
   });
@@ -131,18 +143,20 @@ export function errorBreakdownCurve(
   points = 40,
 ): { currentA: number; terms: { source: BudgetSource; percent: number }[] }[] {
   const m = buildModel(req);
-  return logSpace(req.current.min, req.current.max, points).map((I) => ({
+  return spanCurrents(req, m, points).map((I) => ({
     currentA: I,
-    terms: budgetTerms(req, m, choice, I).map((t) => ({ source: t.source, percent: (100 * t.errorA) / I })),
+    terms: budgetTerms(req, m, choice, I).map((t) => ({ source: t.source, percent: (100 * t.errorA) / Math.abs(I) })),
   }));
 }
 
 export type LoadCurvePoint = { currentA: number; burdenV: number; loadVoltageV: number };
 
-/** Drop and load voltage across the span (the load drawing each current at full supply). */
+/** Drop and load voltage across the span (the load drawing each current at full supply; a signed span by magnitude). */
 export function loadCurve(req: Requirement, choice: Choice, points = 60): LoadCurvePoint[] {
   const m = buildModel(req);
-  return logSpace(req.current.min, req.current.max, points).map((I) => {
+  // A signed span by magnitude, up to its larger end: the drop is |I|·R either way (its source sets the current).
+  const currents = m.signed ? logSpace(m.iMin / 10, Math.max(m.iMax, m.iNeg), points) : spanCurrents(req, m, points);
+  return currents.map((I) => {
     const burdenV = operatingBurden({ ...m, iMax: I }, choice.shuntOhms);
     return { currentA: I, burdenV, loadVoltageV: m.vBus - burdenV };
   });
@@ -158,9 +172,9 @@ export function lowestAccurateCurrent(req: Requirement, m: Model, choice: Choice
   const ratio = (I: number) => worstErrorA(m, R, G, theta, I) / I;
   const target = m.accRatio;
   if (ratio(m.iMin) <= target) return m.iMin;
-  // Golden-section search for the minimum on a log scale.
+  // Golden-section search for the minimum on a log scale (a signed span: magnitudes to its larger end).
   let lo = Math.log(m.iMin);
-  let hi = Math.log(m.iMax);
+  let hi = Math.log(Math.max(m.iMax, m.iNeg));
   const phi = (Math.sqrt(5) - 1) / 2;
   for (let k = 0; k < 80; k++) {
     const x1 = hi - phi * (hi - lo);
