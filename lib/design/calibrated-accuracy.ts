@@ -1,7 +1,8 @@
 // What a per-unit gain-and-offset calibration at the bench can and cannot remove from the error
 // budget, and the accuracy a calibrated unit can reach across the span.
-import { budgetSourceLabels, budgetTerms, logSpace, type BudgetSource } from "./error-budget";
-import { buildModel } from "./model";
+import { readoutOwnSources } from "./budget-readout-signed";
+import { budgetSourceLabels, budgetTerms, logSpace, type BudgetSource, type BudgetTerm } from "./error-budget";
+import { buildModel, type Model } from "./model";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
 
@@ -25,7 +26,27 @@ export const remainsBecause: Partial<Record<BudgetSource, string>> = {
   offsetDrift: "drifts with ambient temperature after calibration",
   readout: "quantisation: half a readout step on every reading",
   noise: "random from reading to reading",
+  readoutReference: "the bench fit reads the amplifier's output, not the reference of the readout that reads it in use",
+  readoutGain: "the bench fit reads the amplifier's output, not the readout's own gain",
+  readoutOffset: "the bench fit reads the amplifier's output, not the readout's own offset",
+  readoutInl: "nonlinearity: a straight-line fit cannot follow it",
+  zeroLevel: "its tolerance is fitted out; its drift with ambient temperature remains",
 };
+
+/**
+ * The budget of a unit fitted at the bench: a two-point calibration of everything up to the
+ * amplifier's output (lib/design/readout-error.ts says what that removes), with the readout's own
+ * terms as the design has them.
+ */
+function benchCalibratedTerms(req: Requirement, m: Model, fitted: Model, choice: Choice, I: number): BudgetTerm[] {
+  const raw = budgetTerms(req, m, choice, I);
+  const cal = budgetTerms({ ...req, calibration: "two-point" }, fitted, choice, I);
+  return cal.map((t, k) => (readoutOwnSources.includes(t.source) ? (raw[k] ?? t) : t));
+}
+
+function fittedModel(req: Requirement): Model {
+  return buildModel({ ...req, calibration: "two-point" });
+}
 
 export type CalibratedAccuracy = {
   removed: { source: BudgetSource; label: string }[];
@@ -43,32 +64,32 @@ export type CalibratedAccuracy = {
 
 /** Worst-case (sum) error of a calibrated unit at current I, A: the budget without the removed terms. */
 export function calibratedErrorA(req: Requirement, choice: Choice, currentA: number): number {
-  const m = buildModel(req);
-  return budgetTerms(req, m, choice, currentA)
-    .filter((t) => !removedByCalibration.includes(t.source))
-    .reduce((s, t) => s + Math.abs(t.errorA), 0);
+  return benchCalibratedTerms(req, buildModel(req), fittedModel(req), choice, currentA).reduce(
+    (s, t) => s + Math.abs(t.errorA),
+    0,
+  );
 }
 
 export function calibratedAccuracy(req: Requirement, choice: Choice, points = 80): CalibratedAccuracy {
   const m = buildModel(req);
+  const fitted = fittedModel(req);
+  // A signed span's figures are the same either way: its magnitudes up to the larger end.
+  const top = Math.max(req.current.max, m.iNeg);
   const at = (I: number) => {
-    const terms = budgetTerms(req, m, choice, I);
     let all = 0;
     let left = 0;
-    for (const t of terms) {
-      all += Math.abs(t.errorA);
-      if (!removedByCalibration.includes(t.source)) left += Math.abs(t.errorA);
-    }
+    for (const t of budgetTerms(req, m, choice, I)) all += Math.abs(t.errorA);
+    for (const t of benchCalibratedTerms(req, m, fitted, choice, I)) left += Math.abs(t.errorA);
     return { calibratedPercent: (100 * left) / I, uncalibratedPercent: (100 * all) / I };
   };
-  const curve = logSpace(req.current.min, req.current.max, points).map((I) => ({ currentA: I, ...at(I) }));
+  const curve = logSpace(m.iMin, top, points).map((I) => ({ currentA: I, ...at(I) }));
   const band = logSpace(req.accuracy.bandMin, req.accuracy.bandMax, points).map(at);
   // The calibrated ratio is still a + b·I² + c/I (convex in I): scan finely, then bisect the crossing.
   const target = req.accuracy.percent;
   let lowest: number | null = null;
-  const fine = logSpace(req.current.min, req.current.max, 400);
+  const fine = logSpace(m.iMin, top, 400);
   const firstOk = fine.findIndex((I) => at(I).calibratedPercent <= target);
-  if (firstOk === 0) lowest = req.current.min;
+  if (firstOk === 0) lowest = m.iMin;
   else if (firstOk > 0) {
     let a = fine[firstOk - 1]!;
     let b = fine[firstOk]!;
@@ -79,7 +100,7 @@ export function calibratedAccuracy(req: Requirement, choice: Choice, points = 80
     }
     lowest = b;
   }
-  const sources = Object.keys(budgetSourceLabels) as BudgetSource[];
+  const sources = budgetTerms(req, m, choice, top).map((t) => t.source);
   return {
     removed: sources
       .filter((s) => removedByCalibration.includes(s))
@@ -87,8 +108,8 @@ export function calibratedAccuracy(req: Requirement, choice: Choice, points = 80
     remaining: sources
       .filter((s) => !removedByCalibration.includes(s))
       .map((s) => ({ source: s, label: budgetSourceLabels[s], why: remainsBecause[s] ?? "" })),
-    atMinPercent: at(req.current.min).calibratedPercent,
-    atMaxPercent: at(req.current.max).calibratedPercent,
+    atMinPercent: at(m.iMin).calibratedPercent,
+    atMaxPercent: at(top).calibratedPercent,
     bandWorstPercent: Math.max(...band.map((b) => b.calibratedPercent)),
     uncalibratedBandWorstPercent: Math.max(...band.map((b) => b.uncalibratedPercent)),
     lowestAccurateCurrentA: lowest,

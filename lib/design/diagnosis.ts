@@ -9,6 +9,7 @@ import {
   deadZoneA,
   largestRating,
   operatingBurden,
+  outputFloorWorstV,
   outputWorstV,
   resolvableStepA,
   signalBandwidth,
@@ -85,7 +86,7 @@ export function pairViolations(m: Model, R: number, G: number, mask: number): Vi
     "drop",
     Math.max(
       over(Number.isNaN(burden) ? m.vBus : burden, m.dropMax),
-      over(m.iMax * path, m.dropMax),
+      over(Math.max(m.iMax, m.iNeg) * path, m.dropMax),
       under(m.vBus - burden, m.loadMin),
     ),
   );
@@ -94,7 +95,15 @@ export function pairViolations(m: Model, R: number, G: number, mask: number): Vi
   const cmOut = Math.max(0, k * sf.vInHi - m.cmMax, m.cmMin - k * sf.vInLo);
   put("commonMode", m.topology === TOPO_NONINV && m.high ? Math.max(cmOut, m.vBus) / span : cmOut / span);
   const iOp = Number.isNaN(sf.iOp) ? m.iMax : sf.iOp;
-  put("output", over(outputWorstV(m, R, G, sf.theta, iOp), m.outCeil));
+  // A signed span's lower end, short of the floor: measured against the window's top (the floor may be 0 V).
+  const floorV = outputFloorWorstV(m, R, G, sf.theta);
+  put(
+    "output",
+    Math.max(
+      over(outputWorstV(m, R, G, sf.theta, iOp), m.outCeil),
+      m.signed ? under(floorV - m.swingLow + m.outCeil, m.outCeil) : 0,
+    ),
+  );
   put("counts", under(m.iMin / resolvableStepA(m, R, G), m.countsAtMin));
   const need = (iOp * iOp * R) / (m.derating * m.ambientDerate);
   const hot = m.tAmbMax + iOp * iOp * R * sf.theta;

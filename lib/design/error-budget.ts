@@ -11,6 +11,8 @@ import {
   worstErrorA,
 } from "./model";
 import { shuntFigures } from "./pair";
+import { signedSpanCurrents } from "./bidirectional";
+import { readoutSignedLabels, readoutSignedTerms, type ReadoutSignedSource } from "./budget-readout-signed";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
 
@@ -25,7 +27,8 @@ export type BudgetSource =
   | "biasCurrent"
   | "commonMode"
   | "readout"
-  | "noise";
+  | "noise"
+  | ReadoutSignedSource;
 
 export const budgetSourceLabels: Record<BudgetSource, string> = {
   gainError: "Amplifier gain error",
@@ -37,11 +40,13 @@ export const budgetSourceLabels: Record<BudgetSource, string> = {
   offsetDrift: "Offset drift over temperature",
   biasCurrent: "Input bias current",
   commonMode: "Common-mode error (CMRR, resistor matching in a difference stage)",
-  readout: "Readout step (half an LSB)",
+  readout: "Readout step (half an LSB; a meter's ± digits)",
   noise: "Noise (crest factor × RMS)",
+  ...readoutSignedLabels,
 };
 
-export type BudgetTerm = { source: BudgetSource; label: string; errorA: number };
+/** `removedA`: what the requirement's calibration took out of this term (absent: nothing). */
+export type BudgetTerm = { source: BudgetSource; label: string; errorA: number; removedA?: number };
 export type ErrorAtResult = {
   worstA: number;
   rssA: number;
@@ -50,29 +55,37 @@ export type ErrorAtResult = {
   terms: BudgetTerm[];
 };
 
-/** Budget terms at current I (A). The sum equals worstErrorA from the model. */
-export function budgetTerms(req: Requirement, m: Model, choice: Choice, I: number): BudgetTerm[] {
+/**
+ * Budget terms at current magnitude I (A), after the requirement's calibration. The sum equals
+ * worstErrorA from the model. A signed span's terms are the same either way.
+ */
+export function budgetTerms(req: Requirement, m: Model, choice: Choice, current: number): BudgetTerm[] {
   const { shuntOhms: R, gain: G } = choice;
+  const I = Math.abs(current);
   const theta = shuntFigures(m, R).theta;
   const a = req.amplifier;
-  const values: Record<BudgetSource, number> = {
-    gainError: I * a.gainError,
-    gainSetResistors: I * gainSetError(m, G),
-    shuntTolerance: I * req.shunt.tolerance,
-    shuntTempco: I * m.alphaR * (m.dTamb + I * I * R * theta),
-    gainDrift: I * a.gainDrift * m.dTamb,
-    offset: a.offset / R,
-    offsetDrift: (a.offsetDrift * m.dTamb) / R,
-    biasCurrent: a.biasCurrent,
-    commonMode: commonModeErrorV(m, G) / R,
-    readout: m.lsbV / (2 * R * G),
-    noise: m.crest * noiseRmsA(m, R, G),
-  };
-  return (Object.keys(values) as BudgetSource[]).map((source) => ({
-    source,
-    label: budgetSourceLabels[source],
-    errorA: values[source],
-  }));
+  const gainKeep = m.accEpsKeep;
+  const offKeep = m.accOffKeep;
+  // [before calibration, share kept]
+  const values: [BudgetSource, number, number][] = [
+    ["gainError", I * a.gainError, gainKeep],
+    ["gainSetResistors", I * gainSetError(m, G), gainKeep],
+    ["shuntTolerance", I * req.shunt.tolerance, gainKeep],
+    ["shuntTempco", I * m.alphaR * (m.dTamb + I * I * R * theta), 1],
+    ["gainDrift", I * a.gainDrift * m.dTamb, 1],
+    ["offset", a.offset / R, offKeep],
+    ["offsetDrift", (a.offsetDrift * m.dTamb) / R, 1],
+    ["biasCurrent", a.biasCurrent, offKeep],
+    ["commonMode", commonModeErrorV(m, G) / R, offKeep],
+    ["readout", m.read.quantV / (R * G), 1],
+    ["noise", m.crest * noiseRmsA(m, R, G), 1],
+    ...readoutSignedTerms(req, m, R * G, I),
+  ];
+  return values.map(([source, full, keep]) => {
+    const term: BudgetTerm = { source, label: budgetSourceLabels[source], errorA: full * keep };
+    if (keep < 1 && full !== 0) term.removedA = full * (1 - keep);
+    return term;
+  });
 }
 
 function combine(terms: BudgetTerm[], I: number): ErrorAtResult {
@@ -83,7 +96,8 @@ function combine(terms: BudgetTerm[], I: number): ErrorAtResult {
     sq += t.errorA * t.errorA;
   }
   const rssA = Math.sqrt(sq);
-  return { worstA, rssA, worstPercent: (100 * worstA) / I, rssPercent: (100 * rssA) / I, terms };
+  const mag = Math.abs(I);
+  return { worstA, rssA, worstPercent: (100 * worstA) / mag, rssPercent: (100 * rssA) / mag, terms };
 }
 
 export function errorAt(req: Requirement, choice: Choice, currentA: number): ErrorAtResult {
@@ -105,9 +119,18 @@ export function logSpace(a: number, b: number, n: number): number[] {
 
 export type ErrorCurvePoint = { currentA: number; worstPercent: number; rssPercent: number };
 
+/**
+ * Currents for a curve over the span: log-spaced; on a signed span log-spaced magnitudes each way
+ * from a tenth of the smallest magnitude of interest, negative ones first.
+ */
+export function spanCurrents(req: Requirement, m: Model, points: number): number[] {
+  if (!m.signed) return logSpace(req.current.min, req.current.max, points);
+  return signedSpanCurrents(req.current.min, req.current.max, m.iMin / 10, Math.ceil(points / 2));
+}
+
 export function errorCurve(req: Requirement, choice: Choice, points = 60): ErrorCurvePoint[] {
   const m = buildModel(req);
-  return logSpace(req.current.min, req.current.max, points).map((I) => {
+  return spanCurrents(req, m, points).map((I) => {
     const r = combine(budgetTerms(req, m, choice, I), I);
     return { currentA: I, worstPercent: r.worstPercent, rssPercent: r.rssPercent };
   });
@@ -120,18 +143,20 @@ export function errorBreakdownCurve(
   points = 40,
 ): { currentA: number; terms: { source: BudgetSource; percent: number }[] }[] {
   const m = buildModel(req);
-  return logSpace(req.current.min, req.current.max, points).map((I) => ({
+  return spanCurrents(req, m, points).map((I) => ({
     currentA: I,
-    terms: budgetTerms(req, m, choice, I).map((t) => ({ source: t.source, percent: (100 * t.errorA) / I })),
+    terms: budgetTerms(req, m, choice, I).map((t) => ({ source: t.source, percent: (100 * t.errorA) / Math.abs(I) })),
   }));
 }
 
 export type LoadCurvePoint = { currentA: number; burdenV: number; loadVoltageV: number };
 
-/** Drop and load voltage across the span (the load drawing each current at full supply). */
+/** Drop and load voltage across the span (the load drawing each current at full supply; a signed span by magnitude). */
 export function loadCurve(req: Requirement, choice: Choice, points = 60): LoadCurvePoint[] {
   const m = buildModel(req);
-  return logSpace(req.current.min, req.current.max, points).map((I) => {
+  // A signed span by magnitude, up to its larger end: the drop is |I|·R either way (its source sets the current).
+  const currents = m.signed ? logSpace(m.iMin / 10, Math.max(m.iMax, m.iNeg), points) : spanCurrents(req, m, points);
+  return currents.map((I) => {
     const burdenV = operatingBurden({ ...m, iMax: I }, choice.shuntOhms);
     return { currentA: I, burdenV, loadVoltageV: m.vBus - burdenV };
   });
@@ -147,9 +172,9 @@ export function lowestAccurateCurrent(req: Requirement, m: Model, choice: Choice
   const ratio = (I: number) => worstErrorA(m, R, G, theta, I) / I;
   const target = m.accRatio;
   if (ratio(m.iMin) <= target) return m.iMin;
-  // Golden-section search for the minimum on a log scale.
+  // Golden-section search for the minimum on a log scale (a signed span: magnitudes to its larger end).
   let lo = Math.log(m.iMin);
-  let hi = Math.log(m.iMax);
+  let hi = Math.log(Math.max(m.iMax, m.iNeg));
   const phi = (Math.sqrt(5) - 1) / 2;
   for (let k = 0; k < 80; k++) {
     const x1 = hi - phi * (hi - lo);

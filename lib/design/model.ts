@@ -1,6 +1,7 @@
 // The physical model of docs/model.md §3 on plain numbers. Everything the sweep needs per
 // requirement is computed once here; the per-pair functions take numbers only.
 import type { Requirement } from "./requirement";
+import { readoutSignedFields, type ReadoutSignedFields } from "./model-readout-signed";
 
 /** CODATA 2018 exact value (the SI defines it), J/K. */
 export const BOLTZMANN = 1.380649e-23;
@@ -31,7 +32,8 @@ export const LOAD_CC = 0;
 export const LOAD_RES = 1;
 export const LOAD_CP = 2;
 
-export type Model = {
+export type Model = ReadoutSignedFields & {
+  /** Smallest current of interest: current.min, or a signed span's accuracy-band low end (docs/model.md §3), A. */
   iMin: number;
   iMax: number;
   vBus: number;
@@ -115,14 +117,12 @@ export function buildModel(req: Requirement): Model {
   const antiAlias =
     req.readout.kind === "adc" ? ANTI_ALIAS_FRACTION * req.readout.sampleRateHz : req.readout.bandwidthHz;
   return {
-    iMin: req.current.min,
     iMax: req.current.max,
     vBus: req.supply.voltage,
     dropMax: req.drop.max,
     loadMin: req.drop.loadMin ?? -Infinity,
     loadModel: req.load.model === "resistive" ? LOAD_RES : req.load.model === "constant-power" ? LOAD_CP : LOAD_CC,
     lsbV: readoutStepV(req),
-    outCeil: Math.min(req.readout.fullScale, a.supply - a.swingHigh),
     countsAtMin: req.resolution.countsAtMin,
     dTamb,
     tNoiseK,
@@ -158,6 +158,9 @@ export function buildModel(req: Requirement): Model {
     accRatio: req.accuracy.percent / 100,
     bandLo: req.accuracy.bandMin,
     bandHi: req.accuracy.bandMax,
+    // Signed spans, the zero-current level, the readout's own error and calibration (issue 14);
+    // iMin and outCeil come from there too.
+    ...readoutSignedFields(req, dTamb),
   };
 }
 
@@ -275,10 +278,15 @@ export function noiseRmsA(m: Model, R: number, G: number): number {
   return (inputNoiseDensity(m, R) * Math.sqrt(noiseBandwidth(m, G))) / R;
 }
 
-/** Worst-case error at current I, A (docs/model.md §3's default model). */
+/**
+ * Worst-case error at current magnitude I, A (docs/model.md §3's default model): after any
+ * calibration, the readout's own error and the zero-current level included; the same either way
+ * of a signed span.
+ */
 export function worstErrorA(m: Model, R: number, G: number, theta: number, I: number): number {
-  const gainPart = I * (m.gainConst + gainSetError(m, G) + m.alphaR * I * I * R * theta);
-  return gainPart + offsetTermA(m, R, G) + m.lsbV / (2 * R * G) + m.crest * noiseRmsA(m, R, G);
+  const gainPart = I * (m.accGainConst + m.accEpsKeep * gainSetError(m, G) + m.alphaR * I * I * R * theta);
+  const offA = (m.accOffKeep * (m.vosRef + commonModeErrorV(m, G)) + (m.vosWorst - m.vosRef)) / R + m.accOffKeep * m.ib;
+  return gainPart + offA + m.accOutV / (R * G) + m.crest * noiseRmsA(m, R, G);
 }
 
 /** The smallest current step the readout can tell apart: one readout step, or the noise where larger, A. */
@@ -286,9 +294,13 @@ export function resolvableStepA(m: Model, R: number, G: number): number {
   return Math.max(m.lsbV / (R * G), RESOLVABLE_NOISE_SIGMAS * noiseRmsA(m, R, G));
 }
 
-/** Below this current the output sits at its floor even with the worst offset, A. */
+/**
+ * Below this current the output sits at its floor even with the worst offset, A. On a signed span
+ * (no floor at zero current) it is the band around zero within which the worst offset, the
+ * zero-current level's error included, can hide or flip the reading's sign.
+ */
 export function deadZoneA(m: Model, R: number, G: number): number {
-  return m.swingLow / (R * G) + offsetTermA(m, R, G);
+  return (m.deadFloorV + m.refErrV) / (R * G) + offsetTermA(m, R, G);
 }
 
 /** The default ranking score: dimensionless, each objective measured against what the requirement allows. */
@@ -301,6 +313,20 @@ export function defaultScore(m: Model, burdenV: number, lsbA: number, errMinRati
  * error that moves the output (all but the readout's own half step), times R·G.
  */
 export function outputWorstV(m: Model, R: number, G: number, theta: number, iOp: number): number {
-  const err = worstErrorA(m, R, G, theta, iOp) - m.lsbV / (2 * R * G);
-  return (iOp + err) * R * G;
+  return outputSwingA(m, R, G, theta, iOp) * R * G + m.vRef + m.refErrV;
+}
+
+/**
+ * Lowest output the error budget allows at the negative end of a signed span, V (the zero level
+ * less the largest negative current and every error that moves the output down). NaN one way.
+ */
+export function outputFloorWorstV(m: Model, R: number, G: number, theta: number): number {
+  if (!m.signed) return NaN;
+  return m.vRef - m.refErrV - outputSwingA(m, R, G, theta, m.iNeg) * R * G;
+}
+
+/** Current magnitude I plus every amplifier-side error that moves the output with it, uncalibrated, A. */
+function outputSwingA(m: Model, R: number, G: number, theta: number, I: number): number {
+  const gain = m.gainConst + gainSetError(m, G) + m.alphaR * I * I * R * theta;
+  return I + I * gain + offsetTermA(m, R, G) + m.crest * noiseRmsA(m, R, G);
 }

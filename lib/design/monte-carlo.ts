@@ -1,5 +1,6 @@
 // Monte Carlo spread of the reading error for one pair: every part drawn uniformly within
 // its tolerance band, noise Gaussian, the output quantised and clipped as the readout sees it.
+import { drawReadout, drawZeroLevelV } from "./monte-carlo-readout";
 import { buildModel, commonModeErrorV, gainSetError, type Model, noiseRmsA, REFERENCE_C } from "./model";
 import { shuntFigures } from "./pair";
 import { gaussian, mulberry32 } from "./prng";
@@ -42,7 +43,9 @@ export function percentile(sorted: ArrayLike<number>, p: number): number {
 }
 
 export function defaultMonteCarloCurrents(req: Requirement): number[] {
-  const list = [req.current.min, req.current.typical, req.accuracy.bandMin, req.current.max].filter(
+  // A signed span: both ends, and the band's low end either way (zero has no % of reading).
+  const signed = req.current.min < 0 ? [-req.accuracy.bandMin, -Math.min(req.accuracy.bandMax, -req.current.min)] : [];
+  const list = [...signed, req.current.min, req.current.typical, req.accuracy.bandMin, req.current.max].filter(
     (x): x is number => x !== undefined,
   );
   return [...new Set(list)].sort((a, b) => a - b);
@@ -68,7 +71,9 @@ export function drawUnit(
   rnd: () => number,
   normal: () => number,
   fault: UnitFault = {},
-): (currentA: number) => number {
+  /** Read through the design's own readout (its reference, gain, offset, INL): the Monte Carlo does; a bench meter does not. */
+  withReadout = false,
+): (currentA: number, at25?: boolean) => number {
   const { shuntOhms: R, gain: G } = choice;
   const fitted = fault.shuntOhms ?? R;
   const theta = shuntFigures(m, fitted).theta;
@@ -82,18 +87,47 @@ export function drawUnit(
   const alphaR = u(s.tempco);
   const epsG = u(a.gainError) + u(gainSetError(m, G));
   const alphaG = u(a.gainDrift);
-  const vos = u(a.offset) + u(a.offsetDrift) * dT;
+  const vos0 = u(a.offset);
+  const vosDrift = u(a.offsetDrift);
   const ib = u(a.biasCurrent);
   const cm = u(commonModeErrorV(m, G));
-  const gainActual = G * (1 + epsG + alphaG * dT);
   const extra = fault.inputOffsetV ?? 0;
-  return (I) => {
+  const zero = drawZeroLevelV(req, u);
+  const read = withReadout ? drawReadout(req, m, u) : null;
+  // at25: the unit on a calibration bench, at 25 °C and averaged (no noise).
+  return (I, at25 = false) => {
+    const t = at25 ? 0 : dT;
     const dTs = I * I * fitted * theta;
-    const vShunt = I * fitted * (1 + epsR + alphaR * (dT + dTs));
-    const vIn = vShunt + vos + ib * fitted + cm + extra + normal() * noiseV;
-    const vOut = Math.min(m.outCeil, Math.max(a.swingLow, gainActual * vIn));
-    return Math.round(vOut / m.lsbV) * m.lsbV;
+    const vShunt = I * fitted * (1 + epsR + alphaR * (t + dTs));
+    const noise = at25 ? 0 : normal() * noiseV;
+    const vIn = vShunt + vos0 + vosDrift * t + ib * fitted + cm + extra + noise;
+    const gainActual = G * (1 + epsG + alphaG * t);
+    const vOut = Math.min(m.outCeil, Math.max(a.swingLow, zero(t) + gainActual * vIn));
+    return read ? read(vOut, t) : Math.round(vOut / m.lsbV) * m.lsbV;
   };
+}
+
+/**
+ * The requirement's calibration applied to one drawn unit, as a map from its raw reading to the
+ * corrected one (V). The unit is read on the bench at 25 °C without noise: one point at zero current
+ * on a signed span, at the smallest current of interest on a one-way span (at zero its output sits
+ * on its floor and shows no offset); two points add 90 % of the maximum current.
+ */
+function calibrate(
+  req: Requirement,
+  m: Model,
+  choice: Choice,
+  unit: (I: number, at25?: boolean) => number,
+): (raw: number) => number {
+  if (req.calibration === "none") return (raw) => raw;
+  const rg = choice.shuntOhms * choice.gain;
+  const i1 = m.signed ? 0 : m.iMin;
+  const shift = unit(i1, true) - (m.vRef + i1 * rg);
+  if (req.calibration === "one-point") return (raw) => raw - shift;
+  const i2 = 0.9 * m.iMax;
+  const slope = (unit(i2, true) - unit(i1, true)) / ((i2 - i1) * rg);
+  const at1 = m.vRef + i1 * rg;
+  return (raw) => at1 + (raw - shift - at1) / slope;
 }
 
 export function monteCarlo(req: Requirement, choice: Choice, opts: MonteCarloOptions = {}): MonteCarloResult {
@@ -107,10 +141,12 @@ export function monteCarlo(req: Requirement, choice: Choice, opts: MonteCarloOpt
   const errors = currents.map(() => new Float64Array(draws));
   for (let d = 0; d < draws; d++) {
     // One built unit: parts and ambient drawn once, then read at every current.
-    const unit = drawUnit(req, m, choice, rnd, normal);
+    const unit = drawUnit(req, m, choice, rnd, normal, {}, true);
+    const corrected = calibrate(req, m, choice, unit);
     currents.forEach((I, k) => {
-      const reading = unit(I) / (R * G);
-      (errors[k] as Float64Array)[d] = (100 * (reading - I)) / I;
+      // Read back about the nominal zero level; a signed reading's error is a share of |I|.
+      const reading = (corrected(unit(I)) - m.vRef) / (R * G);
+      (errors[k] as Float64Array)[d] = (100 * (reading - I)) / Math.abs(I);
     });
   }
   const rows = currents.map((I, k) => {

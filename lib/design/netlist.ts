@@ -28,15 +28,20 @@ export type NetlistOptions = {
    * that spoils common-mode rejection most (Rg1·(1+t), Rf1·(1−t), Rg2·(1−t), Rf2·(1+t)).
    */
   worstMismatch?: boolean;
+  /**
+   * The current through the shunt, A, with the load drawn as a current source at it: a signed
+   * span's negative direction (a charger) or zero. Left out: the load model at Imax.
+   */
+  currentA?: number;
 };
 
 export function buildNetlist(req: Requirement, choice: Choice, opts: NetlistOptions = {}): string {
   const includeOffset = opts.includeOffset ?? true;
   const { shuntOhms: R, gain: G } = choice;
   const vBus = req.supply.voltage;
-  const iMax = req.current.max;
+  const iMax = opts.currentA ?? req.current.max;
   const high = req.supply.side === "high";
-  const model = req.load.model;
+  const model = opts.currentA === undefined ? req.load.model : "constant-current";
   // The load sits between `la` and `lb`: bus → load → sp on the low side, sn → load → 0 on the high side.
   const [la, lb] = high ? ["sn", "0"] : ["bus", "sp"];
   const lines: string[] = [];
@@ -54,7 +59,12 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: NetlistOpti
   if (high) lines.push("VFEED bus sp DC 0");
   lines.push(`RSHUNT sp sn ${spiceNumber(R)}`);
   if (!high) lines.push("VRET sn 0 DC 0");
-  if (model === "constant-current") {
+  if (opts.currentA !== undefined) {
+    lines.push(
+      `* The load as a current source at ${spiceNumber(iMax)} A (negative: the current flows back, as a charger drives it).`,
+    );
+    lines.push(`ILOAD ${la} ${lb} DC ${spiceNumber(iMax)}`);
+  } else if (model === "constant-current") {
     lines.push(`* Constant-current load: draws Imax whatever its voltage.`);
     lines.push(`ILOAD ${la} ${lb} DC ${spiceNumber(iMax)}`);
   } else if (model === "resistive") {
@@ -72,8 +82,16 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: NetlistOpti
       lines.push(high ? `.nodeset V(sn)=${spiceNumber(vBus - burden)}` : `.nodeset V(sp)=${spiceNumber(burden)}`);
     }
   }
+  const ref = zeroLevelNode(lines, req);
   if (req.amplifier.topology === "difference") {
-    differenceStage(lines, req, G, includeOffset, opts.worstMismatch ? (req.amplifier.gainSet?.tolerance ?? 0) : 0);
+    differenceStage(
+      lines,
+      req,
+      G,
+      includeOffset,
+      opts.worstMismatch ? (req.amplifier.gainSet?.tolerance ?? 0) : 0,
+      ref,
+    );
     lines.push("RREAD out 0 1e6");
     lines.push(".op");
     lines.push(".end");
@@ -85,10 +103,10 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: NetlistOpti
       `* with its input offset ${spiceNumber(req.amplifier.offset)} V as a source in series with the + input.`,
     );
     lines.push(`VOS spo sp DC ${spiceNumber(req.amplifier.offset)}`);
-    lines.push(`EAMP out 0 spo sn ${spiceNumber(G)}`);
+    lines.push(`EAMP out ${ref} spo sn ${spiceNumber(G)}`);
   } else {
     lines.push("* offset left out.");
-    lines.push(`EAMP out 0 sp sn ${spiceNumber(G)}`);
+    lines.push(`EAMP out ${ref} sp sn ${spiceNumber(G)}`);
   }
   // A load on the output keeps `out` from floating in simulators that check it.
   lines.push("RREAD out 0 1e6");
@@ -97,8 +115,20 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: NetlistOpti
   return lines.join("\n") + "\n";
 }
 
+/**
+ * The zero-current output level as a source (node `ref`) the amplifier's output stands on, at its
+ * nominal voltage; returns the node the output is referred to ("0" when there is none).
+ */
+function zeroLevelNode(lines: string[], req: Requirement): string {
+  const v = req.amplifier.reference.voltage;
+  if (!(v > 0)) return "0";
+  lines.push(`* Zero-current output level (the amplifier's reference input): ${spiceNumber(v)} V.`);
+  lines.push(`VREF ref 0 DC ${spiceNumber(v)}`);
+  return "ref";
+}
+
 /** A difference amplifier, G = Rf/Rg: an op-amp (a high-gain source) and its four resistors. */
-function differenceStage(lines: string[], req: Requirement, G: number, includeOffset: boolean, t: number) {
+function differenceStage(lines: string[], req: Requirement, G: number, includeOffset: boolean, t: number, ref: string) {
   const rg = DIFFERENCE_RG_OHMS;
   const rf = G * rg;
   lines.push(
@@ -109,7 +139,7 @@ function differenceStage(lines: string[], req: Requirement, G: number, includeOf
   lines.push(`RG1 sn inn ${spiceNumber(rg * (1 + t))}`);
   lines.push(`RF1 inn out ${spiceNumber(rf * (1 - t))}`);
   lines.push(`RG2 sp inp ${spiceNumber(rg * (1 - t))}`);
-  lines.push(`RF2 inp 0 ${spiceNumber(rf * (1 + t))}`);
+  lines.push(`RF2 inp ${ref} ${spiceNumber(rf * (1 + t))}`);
   if (includeOffset) {
     lines.push(`* Input offset ${spiceNumber(req.amplifier.offset)} V in series with the op-amp's + input.`);
     lines.push(`VOS inpo inp DC ${spiceNumber(req.amplifier.offset)}`);

@@ -64,6 +64,8 @@ export type ShuntFigures = {
   vInHi: number;
   /** Offset-type error without the common-mode term, A: (Vos + αVos·ΔT)/R + Ib. */
   offsetA: number;
+  /** The same for accuracy, after calibration (a one-point calibration leaves αVos·ΔT/R), A. */
+  accOffsetA: number;
   /** Input noise density divided by R, A/√Hz. */
   noisePerR: number;
 };
@@ -74,13 +76,17 @@ export function shuntFigures(m: Model, R: number): ShuntFigures {
   // The load sees the shunt and any range switch in series with it.
   const path = R + m.switchOhms;
   const burden = operatingBurden(m, path);
+  // A signed span's negative direction is set by its source (a charger): I·R at |current.min|.
   const dropFails =
-    !(burden <= m.dropMax * slack) || m.iMax * path > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
+    !(burden <= m.dropMax * slack) ||
+    m.iMax * path > m.dropMax * slack ||
+    m.iNeg * path > m.dropMax * slack ||
+    m.vBus - burden < m.loadMin / slack;
   const iOp = operatingCurrent(m, path);
   // With no operating point the pair fails on drop; rate it at Imax so that only drop is reported.
   // A lower range's shunt carries up to the current at which its protection closes.
   const iRun = Number.isNaN(iOp) ? m.iMax : iOp;
-  const iHeat = m.clampV > 0 ? Math.max(iRun, m.clampV / path) : iRun;
+  const iHeat = Math.max(m.clampV > 0 ? Math.max(iRun, m.clampV / path) : iRun, m.iNeg);
   const power = iHeat * iHeat * R;
   const rating = ratingFor(m, power);
   const theta = thetaFor(m, rating);
@@ -94,6 +100,7 @@ export function shuntFigures(m: Model, R: number): ShuntFigures {
     vInLo: m.high ? m.vBus - b : 0,
     vInHi: m.high ? m.vBus : b,
     offsetA: m.vosWorst / R + m.ib,
+    accOffsetA: m.accOffKeep === 1 ? m.vosWorst / R + m.ib : (m.vosWorst - m.vosRef) / R,
     noisePerR: inputNoiseDensity(m, R) / R,
   };
 }
@@ -153,17 +160,24 @@ export function sweepRow(
     (sf.dropFails ? BIT_DROP : 0) | (cmAll ? BIT_CM : 0) | (Number.isNaN(sf.rating) || sf.hot ? BIT_POWER : 0);
   // Worst-case ratio at I: gainConst + εset + heat·I² + fixed/I, with fixed the current-independent error (A).
   const heat = m.alphaR * R * sf.theta;
-  const gainLo = m.gainConst + heat * m.bandLo * m.bandLo;
-  const gainHi = m.gainConst + heat * m.bandHi * m.bandHi;
-  const gainMin = m.gainConst + heat * m.iMin * m.iMin;
+  const gainLo = m.accGainConst + heat * m.bandLo * m.bandLo;
+  const gainHi = m.accGainConst + heat * m.bandHi * m.bandHi;
+  const gainMin = m.accGainConst + heat * m.iMin * m.iMin;
   const iOp = sf.iOp;
   const gainOp = 1 + m.gainConst + heat * iOp * iOp;
+  // A signed span's other end: the zero level less the largest negative current, against the floor.
+  const gainNeg = 1 + m.gainConst + heat * m.iNeg * m.iNeg;
+  const floorLimit = m.swingLow / slack;
   const outLimit = m.outCeil * slack;
   const countsNeed = m.countsAtMin / slack;
   const bwNeed = m.bwReq / slack;
   const accLimit = m.accRatio * slack;
   const deadLimit = m.iMin * slack;
-  const halfStep = m.lsbV / 2;
+  // Accuracy's output-referred error: the readout's own (half a step for an ideal ADC) and the zero level's.
+  const outErrV = m.accOutV;
+  const deadV = m.deadFloorV + m.refErrV;
+  const topV = m.vRef + m.refErrV;
+  const botV = m.vRef - m.refErrV;
   const noiseSigmaPerNbw = RESOLVABLE_NOISE_SIGMAS * sf.noisePerR;
   const noiseK = m.crest * sf.noisePerR;
   const cmLo = m.cmMin / slack;
@@ -179,20 +193,23 @@ export function sweepRow(
     if (k * sf.vInHi > cmHi || k * sf.vInLo < cmLo) bits |= BIT_CM;
     const offA = sf.offsetA + (cmErrV[j] as number) * invR;
     const noiseA = noiseK * nbw;
-    // Highest output at full load with every output error, against the ceiling.
-    if ((iOp * (gainOp + eps) + offA + noiseA) * rg > outLimit) bits |= BIT_OUTPUT;
+    // Highest output at full load with every output error, against the ceiling (and the lowest, signed).
+    if ((iOp * (gainOp + eps) + offA + noiseA) * rg + topV > outLimit) bits |= BIT_OUTPUT;
+    if (m.signed && botV - (m.iNeg * (gainNeg + eps) + offA + noiseA) * rg < floorLimit) bits |= BIT_OUTPUT;
     // Steps at Imin: the readout step, or the noise where that is larger.
     const lsbA = m.lsbV / rg;
     const noiseStep = noiseSigmaPerNbw * nbw;
     if (m.iMin < countsNeed * (lsbA > noiseStep ? lsbA : noiseStep)) bits |= BIT_COUNTS;
     if ((bandwidth[j] as number) < bwNeed) bits |= BIT_BANDWIDTH;
-    const fixedA = offA + halfStep / rg + noiseA;
+    const accOffA = sf.accOffsetA + m.accOffKeep * (cmErrV[j] as number) * invR;
+    const fixedA = accOffA + outErrV / rg + noiseA;
+    const epsAcc = m.accEpsKeep * eps;
     // a + b·I² + c/I is convex in I, so its largest value over the band is at an end.
-    if (gainLo + eps + fixedA / m.bandLo > accLimit || gainHi + eps + fixedA / m.bandHi > accLimit)
+    if (gainLo + epsAcc + fixedA / m.bandLo > accLimit || gainHi + epsAcc + fixedA / m.bandHi > accLimit)
       bits |= BIT_ACCURACY;
-    if (m.swingLow / rg + offA > deadLimit) bits |= BIT_DEADZONE;
+    if (deadV / rg + offA > deadLimit) bits |= BIT_DEADZONE;
     mask[offset + j] = bits;
-    errMin[offset + j] = gainMin + eps + fixedA / m.iMin;
+    errMin[offset + j] = gainMin + epsAcc + fixedA / m.iMin;
     if (bits === 0) feasible++;
     else {
       const b = 31 - Math.clz32(bits & -bits);

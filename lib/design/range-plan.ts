@@ -182,6 +182,8 @@ function greedyPlan(req: Requirement, m: Model, sw: SweepArrays): Span[] | null 
  * ranges from the top reach, or that no pair works at the top at all.
  */
 export function whyNoPlan(req: Requirement, m: Model, sw: SweepArrays): string {
+  if (m.signed)
+    return "No range plan: ranges switch shunts as the current climbs one way, and this span is bidirectional. Relax a limit below, or split the span.";
   let top = m.iMax;
   const reached: number[] = [];
   for (let k = 0; k < MAX_RANGES; k++) {

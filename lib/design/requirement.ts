@@ -5,6 +5,16 @@ import { z } from "zod";
 import { isSeriesName, seriesNames, seriesValues, type SeriesName } from "./eseries";
 import { commonFixedGains, resistorPairGains, type GainSet } from "./gains";
 import { parsePercent, quantity } from "./units";
+import { adcErrorFields, calibrationField, meterErrorFields } from "./readout-error";
+import {
+  defaultZeroLevelV,
+  isSigned,
+  largestMagnitude,
+  outputWindow,
+  signedSpanIssues,
+  zeroReferenceField,
+  type ZeroReference,
+} from "./bidirectional";
 
 export const loadModels = ["constant-current", "resistive", "constant-power"] as const;
 export type LoadModel = (typeof loadModels)[number];
@@ -75,6 +85,7 @@ const adcReadout = z.object({
   fullScale: q("voltage", "ADC full scale", positive("ADC full scale")),
   // The ADC input's anti-alias corner is taken at half this (DEFAULTS.md): it bounds the noise bandwidth.
   sampleRateHz: q("frequency", "ADC sample rate", positive("ADC sample rate")).default(1000),
+  ...adcErrorFields,
 });
 const meterReadout = z.object({
   kind: z.literal("meter"),
@@ -82,6 +93,7 @@ const meterReadout = z.object({
   counts: count("Meter counts", 10, 10_000_000),
   // A bench meter averages each reading; what it sees is band-limited to about this.
   bandwidthHz: q("frequency", "Meter bandwidth", positive("Meter bandwidth")).default(10),
+  ...meterErrorFields,
 });
 
 const gainSetSchema = z.object({
@@ -108,9 +120,16 @@ const baseSchema = z.object(
   {
     current: z.object(
       {
-        min: q("current", "Minimum current", positive("Minimum current")),
+        // Below zero: a bidirectional span (API.md v2), read around amplifier.reference.
+        min: q(
+          "current",
+          "Minimum current",
+          (v) =>
+            v !== 0 ||
+            "Minimum current cannot be zero: give the smallest current to read, or a negative one for a bidirectional span",
+        ),
         max: q("current", "Maximum current", positive("Maximum current")),
-        typical: q("current", "Typical current", positive("Typical current")).optional(),
+        typical: quantity("current", "Typical current").optional(),
       },
       group("Current span (min and max)"),
     ),
@@ -142,7 +161,7 @@ const baseSchema = z.object(
       .prefault({}),
     readout: z
       .discriminatedUnion("kind", [adcReadout, meterReadout], { error: 'Readout: kind must be "adc" or "meter"' })
-      .default({ kind: "adc", bits: 12, fullScale: 2.5, sampleRateHz: 1000 }),
+      .prefault({ kind: "adc", bits: 12, fullScale: 2.5, sampleRateHz: 1000 }),
     resolution: z
       .object({
         countsAtMin: z
@@ -244,6 +263,7 @@ const baseSchema = z.object(
           (v) => (blank(v) ? null : v),
           q("frequency", "Output filter corner", positive("Output filter corner")).nullable().default(null),
         ),
+        reference: zeroReferenceField,
         cmrrDb: z.number().min(0, { error: "CMRR cannot be negative" }).max(200).default(120),
         // A form's empty choice means "by the gains": the same as leaving it out.
         topology: z.preprocess(
@@ -272,6 +292,7 @@ const baseSchema = z.object(
         ).optional(),
       })
       .prefault({}),
+    calibration: calibrationField,
     limit: z
       .number()
       .int({ error: "Limit must be a whole number" })
@@ -295,7 +316,8 @@ export type Requirement = Omit<Base, "drop" | "accuracy" | "amplifier" | "rangeS
   rangeSwitch: { onResistance: number };
   drop: { max: number; fraction?: number; loadMin?: number };
   accuracy: { percent: number; bandMin: number; bandMax: number; crestFactor: number };
-  amplifier: Omit<Base["amplifier"], "gains" | "gainSet" | "topology" | "commonMode"> & {
+  amplifier: Omit<Base["amplifier"], "gains" | "gainSet" | "topology" | "commonMode" | "reference"> & {
+    reference: ZeroReference;
     gains: number[];
     gainSet: GainSet | null;
     topology: Topology;
@@ -335,9 +357,13 @@ function normalize(b: Base): Requirement {
   const drop: Requirement["drop"] = { max: dropMax };
   if (fraction !== undefined) drop.fraction = fraction;
   if (loadMin !== undefined) drop.loadMin = loadMin;
-  const bandMin = b.accuracy.bandMin ?? Math.max(b.current.min, 0.1 * b.current.max);
-  const bandMax = b.accuracy.bandMax ?? b.current.max;
-  const { gains: _g, gainSet: _s, topology: _t, commonMode, ...amp } = b.amplifier;
+  // A signed span's band is a magnitude, the same both ways (docs/model.md §3 "Signed spans").
+  const top = largestMagnitude(b.current);
+  const signed = isSigned(b.current);
+  const bandMin = b.accuracy.bandMin ?? (signed ? 0.1 * top : Math.max(b.current.min, 0.1 * b.current.max));
+  const bandMax = b.accuracy.bandMax ?? (signed ? top : b.current.max);
+  const { gains: _g, gainSet: _s, topology: _t, commonMode, reference, ...amp } = b.amplifier;
+  const zeroV = reference.voltage ?? defaultZeroLevelV(b.current, outputWindow(amp, b.readout.fullScale));
   const topology = topologyOf(b.amplifier);
   return {
     ...b,
@@ -347,6 +373,7 @@ function normalize(b: Base): Requirement {
     rangeSwitch: { onResistance: b.rangeSwitch.onResistance ?? (RANGE_SWITCH_DROP_SHARE * dropMax) / b.current.max },
     amplifier: {
       ...amp,
+      reference: { voltage: zeroV, tolerance: reference.tolerance, tempco: reference.tempco },
       ...gainsOf(b.amplifier),
       topology,
       commonMode: commonMode ?? defaultCommonMode(topology, amp.supply),
@@ -366,20 +393,34 @@ function crossFieldRules(b: Base, ctx: z.RefinementCtx) {
   if (current.min > current.max) issue(["current", "min"], "Minimum current must not be above the maximum current");
   if (current.typical !== undefined && (current.typical < current.min || current.typical > current.max))
     issue(["current", "typical"], "Typical current must lie between the minimum and the maximum current");
+  const signed = isSigned(current);
+  if (!signed && current.typical !== undefined && !(current.typical > 0))
+    issue(["current", "typical"], "Typical current must be above zero");
+  for (const s of signedSpanIssues(
+    current,
+    accuracy,
+    amplifier.reference,
+    outputWindow(amplifier, b.readout.fullScale),
+  ))
+    issue(s.path, s.message);
   if (drop.max !== undefined && drop.max >= supply.voltage)
     issue(["drop", "max"], "Allowed drop must be below the supply voltage");
   if (drop.loadMin !== undefined && drop.loadMin >= supply.voltage)
     issue(["drop", "loadMin"], "Minimum load voltage must be below the supply voltage");
   const bandMin = accuracy.bandMin ?? Math.max(current.min, 0.1 * current.max);
   const bandMax = accuracy.bandMax ?? current.max;
-  if (current.min <= current.max && bandMin > bandMax)
+  if (current.min <= current.max && !signed && bandMin > bandMax)
+    issue(["accuracy", "bandMin"], "Accuracy band: lowest current must not be above the highest");
+  if (signed && accuracy.bandMin !== undefined && accuracy.bandMax !== undefined && accuracy.bandMin > accuracy.bandMax)
     issue(["accuracy", "bandMin"], "Accuracy band: lowest current must not be above the highest");
   if (
+    !signed &&
     accuracy.bandMin !== undefined &&
     (accuracy.bandMin < current.min * (1 - 1e-9) || accuracy.bandMin > current.max * (1 + 1e-9))
   )
     issue(["accuracy", "bandMin"], "Accuracy band must lie inside the current span");
   if (
+    !signed &&
     accuracy.bandMax !== undefined &&
     (accuracy.bandMax < current.min * (1 - 1e-9) || accuracy.bandMax > current.max * (1 + 1e-9))
   )

@@ -189,7 +189,8 @@ export function solve(req: Requirement, opts: SolveOptions = {}): SolveResult {
     RejectReason,
     number
   >;
-  const rangePlan = sw.feasibleCount === 0 ? planRanges(req, m, sw) : null;
+  // Ranges switch shunts as the current climbs one way; a signed span is not planned in ranges.
+  const rangePlan = sw.feasibleCount === 0 && !m.signed ? planRanges(req, m, sw) : null;
   const result: SolveResult = {
     requirement: req,
     evaluated: nPairs,

@@ -14,6 +14,7 @@ import { fixtureView, loggerRequirement, pumpRequirement } from "@/lib/build-she
 import { evaluateCandidate } from "@/lib/design/candidate";
 import { errorAt } from "@/lib/design/error-budget";
 import { insertion } from "@/lib/design/insertion";
+import { benchCheck } from "@/lib/design/bench-check";
 import { buildNetlist } from "@/lib/design/netlist";
 import type { Requirement } from "@/lib/design/requirement";
 import { req } from "@/lib/design/test-helpers";
@@ -180,5 +181,47 @@ describe("exported netlist in ngspice", () => {
     expect(Math.abs(expected - m.outputAtMaxV)).toBeGreaterThan(2e-3 * m.outputAtMaxV);
     const bare = operatingPoint(designNetlist(view, { includeOffset: false }));
     within((nodes.out ?? NaN) - (bare.out ?? NaN), view.choice.gain * view.requirement.amplifier.offset, 0.01);
+  });
+});
+
+describe("issue 14 in ngspice: a bidirectional design", () => {
+  // A pack read on the low side through 1 mΩ at gain 50 around a 1.25 V zero level: the engine
+  // expects V(out) = 1.25 V + I·R·G (+ G·Vos with the offset), the bench check's expectedV.
+  const pack = req({
+    current: { min: "-10 A", max: "10 A" },
+    supply: { voltage: "48 V" },
+    drop: { max: "50 mV" },
+    readout: { kind: "adc", bits: 16, fullScale: "2.5 V" },
+    amplifier: { gains: [50], reference: { voltage: "1.25 V" }, offset: "100 uV" },
+  });
+  const choice = { shuntOhms: 0.001, gain: 50 };
+  it.each([-10, 0, 10])("at %d A the output is the zero level plus I·R·G within 0.1 %", (I) => {
+    const netlist = buildNetlist(pack, choice, { currentA: I, includeOffset: false });
+    expect(netlist).toMatch(/^VREF ref 0 DC 1\.25$/m); // the reference is an element of the circuit
+    const nodes = operatingPoint(netlist);
+    const expected = benchCheck(pack, choice).find((r) => r.currentA === I)?.expectedV ?? NaN;
+    within(nodes.out, expected); // 0.75 V, 1.25 V, 1.75 V
+    // The shunt's drop, I·R: within 0.1 % of the 10 mV at full current (and ~0 at zero).
+    expect(Math.abs((nodes.sp ?? NaN) - (nodes.sn ?? NaN) - I * 0.001)).toBeLessThanOrEqual(1e-5);
+    // With the offset: G·Vos = 5 mV more at every current.
+    const withOffset = operatingPoint(buildNetlist(pack, choice, { currentA: I }));
+    within(withOffset.out, expected + 50 * 100e-6);
+  });
+  it("a difference stage refers its output to the same zero level", () => {
+    const r = req({
+      current: { min: "-5 A", max: "5 A" },
+      supply: { voltage: "12 V" },
+      drop: { max: "100 mV" },
+      amplifier: {
+        topology: "difference",
+        gains: [20],
+        gainSet: { series: "E24", min: 20, max: 20, tolerance: "0.1 %" },
+        reference: { voltage: "1.2 V" },
+      },
+    });
+    const netlist = buildNetlist(r, { shuntOhms: 0.01, gain: 20 }, { currentA: -5, includeOffset: false });
+    expect(netlist).toMatch(/^RF2 inp ref /m);
+    // 1.2 V − 5 A × 10 mΩ × 20 = 0.2 V.
+    within(operatingPoint(netlist).out, 0.2);
   });
 });

@@ -1,0 +1,48 @@
+// Error-budget sources of issue 14's terms: the readout's own error and a zero-current level.
+// Each is [source, error before calibration (A), share the calibration keeps]; only the sources
+// that apply to this readout and span are listed (docs/model.md §3).
+import type { Model } from "./model";
+import { readoutErrorStated } from "./readout-error";
+import type { Requirement } from "./requirement";
+
+export type ReadoutSignedSource = "readoutReference" | "readoutGain" | "readoutOffset" | "readoutInl" | "zeroLevel";
+
+export const readoutSignedLabels: Record<ReadoutSignedSource, string> = {
+  readoutReference: "ADC reference (tolerance and tempco)",
+  readoutGain: "Readout gain error (ADC; a meter's % of reading)",
+  readoutOffset: "ADC offset",
+  readoutInl: "ADC integral nonlinearity (INL)",
+  zeroLevel: "Zero-current output level (tolerance and tempco)",
+};
+
+export function readoutSignedTerms(
+  req: Requirement,
+  m: Model,
+  rg: number,
+  I: number,
+): [ReadoutSignedSource, number, number][] {
+  const r = m.read;
+  const out: [ReadoutSignedSource, number, number][] = [];
+  // Not stated: an ideal readout, and no lines for it (the cautions say so).
+  if (!readoutErrorStated(req.readout)) {
+    /* nothing of the readout's own */
+  } else if (req.readout.kind === "adc") {
+    // Two points take out the reference's tolerance, never its drift with temperature.
+    const ref = r.refTol + r.refDrift;
+    out.push(["readoutReference", I * ref, ref > 0 ? (m.accEpsKeep * r.refTol + r.refDrift) / ref : 1]);
+    out.push(["readoutGain", I * r.gain, m.accEpsKeep]);
+    out.push(["readoutOffset", r.offsetV / rg, m.accOffKeep]);
+    out.push(["readoutInl", r.inlV / rg, 1]);
+  } else {
+    // A meter's stated accuracy is a band over its own conditions: no calibration here removes it.
+    out.push(["readoutGain", I * r.gain, 1]);
+  }
+  if (m.vRef > 0) {
+    // A one-point calibration takes out the level's tolerance, never its drift.
+    out.push(["zeroLevel", m.refErrV / rg, m.refErrV > 0 ? m.accRefV / m.refErrV : 1]);
+  }
+  return out;
+}
+
+/** The readout's own sources: they act on the reading, not on the amplifier's output voltage. */
+export const readoutOwnSources: readonly string[] = ["readoutReference", "readoutGain", "readoutOffset", "readoutInl"];
