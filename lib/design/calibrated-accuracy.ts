@@ -16,6 +16,8 @@ export const removedByCalibration: readonly BudgetSource[] = [
   "offset",
   "biasCurrent",
   "commonMode",
+  "inputFilterBias",
+  "inputFilterResistors",
 ];
 
 /** Why each remaining term survives calibration (shown beside it). */
@@ -25,6 +27,9 @@ export const remainsBecause: Partial<Record<BudgetSource, string>> = {
   offsetDrift: "drifts with ambient temperature after calibration",
   readout: "quantisation: half a readout step on every reading",
   noise: "random from reading to reading",
+  shuntPads:
+    "the pads' copper and solder move with temperature (about 3900 ppm/K); counted whole, as a calibration at 25 °C leaves the drift and the joints may change with time",
+  thermalEmf: "the gradient across the shunt changes with load and airflow after calibration",
 };
 
 export type CalibratedAccuracy = {
@@ -79,7 +84,8 @@ export function calibratedAccuracy(req: Requirement, choice: Choice, points = 80
     }
     lowest = b;
   }
-  const sources = Object.keys(budgetSourceLabels) as BudgetSource[];
+  // The sources this design has (a filter, pads or a thermal EMF only where it has them).
+  const sources = budgetTerms(req, m, choice, req.current.max).map((t) => t.source);
   return {
     removed: sources
       .filter((s) => removedByCalibration.includes(s))

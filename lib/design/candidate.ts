@@ -1,6 +1,5 @@
 // One candidate's figures (docs/model.md §3), in the API's field names.
 import { errorAtWith, lowestAccurateCurrent } from "./error-budget";
-import { seriesValues } from "./eseries";
 import {
   type Model,
   buildModel,
@@ -14,6 +13,7 @@ import {
 } from "./model";
 import { pairMask, reasonsOf, shuntFigures } from "./pair";
 import type { Requirement } from "./requirement";
+import { sweepValues } from "./sweep";
 import type { Candidate, CandidateDetail, Choice } from "./types";
 
 export { rejectReasonLabels, rejectReasons, type RejectReason } from "./pair";
@@ -28,7 +28,8 @@ export function candidateFigures(m: Model, R: number, G: number): Candidate {
     shuntOhms: R,
     gain: G,
     transimpedanceVPerA: rg,
-    burdenV: m.iMax * R,
+    // A 2-terminal shunt's pads are in the load's path too.
+    burdenV: m.iMax * (R + m.fe.padOhms),
     operatingCurrentA: iOp,
     dissipationW: iOp * iOp * R,
     ratingW: Number.isNaN(sf.rating) ? largestRating(m) : sf.rating,
@@ -50,7 +51,7 @@ export function evaluateCandidate(req: Requirement, choice: Choice): CandidateDe
   const { shuntOhms: R, gain: G } = choice;
   const base = candidateFigures(m, R, G);
   const sf = shuntFigures(m, R);
-  const burdenOp = operatingBurden(m, R);
+  const burdenOp = operatingBurden(m, R + m.fe.padOhms);
   const pct = (I: number) => errorAtWith(req, m, choice, I).worstPercent;
   const typical = req.current.typical;
   return {
@@ -74,8 +75,6 @@ export function evaluateCandidate(req: Requirement, choice: Choice): CandidateDe
 export function isInSweep(req: Requirement, choice: Choice): boolean {
   const { shuntOhms: R, gain: G } = choice;
   if (!Number.isFinite(R) || !Number.isFinite(G)) return false;
-  const valueHit = seriesValues(req.shunt.series, req.shunt.min, req.shunt.max).some(
-    (v) => Math.abs(v - R) <= 1e-9 * v,
-  );
+  const valueHit = sweepValues(req).some((v) => Math.abs(v - R) <= 1e-9 * v);
   return valueHit && req.amplifier.gains.some((g) => Math.abs(g - G) <= 1e-9 * g);
 }

@@ -10,6 +10,7 @@ import {
   REFERENCE_C,
   worstErrorA,
 } from "./model";
+import { frontEndSourceLabels, frontEndTerms, type FrontEndSource } from "./front-end-budget";
 import { shuntFigures } from "./pair";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
@@ -25,7 +26,8 @@ export type BudgetSource =
   | "biasCurrent"
   | "commonMode"
   | "readout"
-  | "noise";
+  | "noise"
+  | FrontEndSource;
 
 export const budgetSourceLabels: Record<BudgetSource, string> = {
   gainError: "Amplifier gain error",
@@ -39,6 +41,7 @@ export const budgetSourceLabels: Record<BudgetSource, string> = {
   commonMode: "Common-mode error (CMRR, resistor matching in a difference stage)",
   readout: "Readout step (half an LSB)",
   noise: "Noise (crest factor × RMS)",
+  ...frontEndSourceLabels,
 };
 
 export type BudgetTerm = { source: BudgetSource; label: string; errorA: number };
@@ -55,7 +58,7 @@ export function budgetTerms(req: Requirement, m: Model, choice: Choice, I: numbe
   const { shuntOhms: R, gain: G } = choice;
   const theta = shuntFigures(m, R).theta;
   const a = req.amplifier;
-  const values: Record<BudgetSource, number> = {
+  const values: Partial<Record<BudgetSource, number>> = {
     gainError: I * a.gainError,
     gainSetResistors: I * gainSetError(m, G),
     shuntTolerance: I * req.shunt.tolerance,
@@ -68,10 +71,11 @@ export function budgetTerms(req: Requirement, m: Model, choice: Choice, I: numbe
     readout: m.lsbV / (2 * R * G),
     noise: m.crest * noiseRmsA(m, R, G),
   };
+  for (const t of frontEndTerms(m.fe, R, G, I)) values[t.source] = t.errorA;
   return (Object.keys(values) as BudgetSource[]).map((source) => ({
     source,
     label: budgetSourceLabels[source],
-    errorA: values[source],
+    errorA: values[source] ?? 0,
   }));
 }
 

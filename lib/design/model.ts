@@ -1,5 +1,6 @@
 // The physical model of docs/model.md §3 on plain numbers. Everything the sweep needs per
 // requirement is computed once here; the per-pair functions take numbers only.
+import { buildFrontEnd, filterCmErrorV, frontEndOffsetV, padShare, type FrontEnd } from "./front-end";
 import type { Requirement } from "./requirement";
 
 /** CODATA 2018 exact value (the SI defines it), J/K. */
@@ -47,7 +48,7 @@ export type Model = {
   dTamb: number;
   /** Temperature for Johnson noise: the hottest ambient, K. */
   tNoiseK: number;
-  /** Gain-type error that does not depend on current or gain: εG + εR + αR·ΔT + αG·ΔT. */
+  /** Gain-type error that does not depend on current or gain: εG + εR + αR·ΔT + αG·ΔT + a difference stage's filter loading. */
   gainConst: number;
   topology: number;
   /** Tolerance of the gain-setting resistors (0: fixed gains, no resistors). */
@@ -93,6 +94,8 @@ export type Model = {
   accRatio: number;
   bandLo: number;
   bandHi: number;
+  /** Input filter, shunt terminals, copper trace and thermal EMF (front-end.ts). */
+  fe: FrontEnd;
 };
 
 export function readoutStepV(req: Requirement): number {
@@ -114,6 +117,7 @@ export function buildModel(req: Requirement): Model {
   }[a.topology];
   const antiAlias =
     req.readout.kind === "adc" ? ANTI_ALIAS_FRACTION * req.readout.sampleRateHz : req.readout.bandwidthHz;
+  const fe = buildFrontEnd(req, dTamb, vCm, topology === TOPO_DIFF);
   return {
     iMin: req.current.min,
     iMax: req.current.max,
@@ -126,7 +130,7 @@ export function buildModel(req: Requirement): Model {
     countsAtMin: req.resolution.countsAtMin,
     dTamb,
     tNoiseK,
-    gainConst: a.gainError + s.tolerance + s.tempco * dTamb + a.gainDrift * dTamb,
+    gainConst: a.gainError + s.tolerance + s.tempco * dTamb + a.gainDrift * dTamb + fe.filterLoading,
     topology,
     gainSetTol: a.gainSet ? a.gainSet.tolerance : 0,
     high: req.supply.side === "high",
@@ -148,16 +152,18 @@ export function buildModel(req: Requirement): Model {
     vosRef: a.offset,
     vosWorst: a.offset + a.offsetDrift * dTamb,
     ib: a.biasCurrent,
-    en2: a.noiseDensity * a.noiseDensity,
+    // The filter's two leg resistors add their Johnson noise, 4kT·2R, to the amplifier's own.
+    en2: a.noiseDensity * a.noiseDensity + 4 * BOLTZMANN * tNoiseK * 2 * fe.filterOhms,
     fourKT: 4 * BOLTZMANN * tNoiseK,
     gbw: a.gbw,
-    filterHz: Math.min(a.filterHz ?? Infinity, antiAlias),
+    filterHz: Math.min(a.filterHz ?? Infinity, antiAlias, fe.filterCornerHz),
     crest: req.accuracy.crestFactor,
     swingLow: a.swingLow,
     bwReq: req.bandwidth.min,
     accRatio: req.accuracy.percent / 100,
     bandLo: req.accuracy.bandMin,
     bandHi: req.accuracy.bandMax,
+    fe,
   };
 }
 
@@ -250,9 +256,12 @@ export function operatingBurden(m: Model, R: number): number {
   return m.vBus - (m.vBus + Math.sqrt(disc)) / 2;
 }
 
-/** Offset-type error referred to current, A: (Vos + αVos·ΔT)/R + Ib + common-mode error/R. */
+/**
+ * Offset-type error referred to current, A: (Vos + αVos·ΔT)/R + Ib + common-mode error/R, plus
+ * the input filter's bias-current and common-mode errors and the joints' thermal EMF, over R.
+ */
 export function offsetTermA(m: Model, R: number, G: number): number {
-  return (m.vosWorst + commonModeErrorV(m, G)) / R + m.ib;
+  return (m.vosWorst + commonModeErrorV(m, G) + frontEndOffsetV(m.fe) + filterCmErrorV(m.fe, G)) / R + m.ib;
 }
 
 /** RMS input noise density including the shunt's Johnson noise, V/√Hz. */
@@ -277,7 +286,7 @@ export function noiseRmsA(m: Model, R: number, G: number): number {
 
 /** Worst-case error at current I, A (docs/model.md §3's default model). */
 export function worstErrorA(m: Model, R: number, G: number, theta: number, I: number): number {
-  const gainPart = I * (m.gainConst + gainSetError(m, G) + m.alphaR * I * I * R * theta);
+  const gainPart = I * (m.gainConst + padShare(m.fe, R) + gainSetError(m, G) + m.alphaR * I * I * R * theta);
   return gainPart + offsetTermA(m, R, G) + m.lsbV / (2 * R * G) + m.crest * noiseRmsA(m, R, G);
 }
 

@@ -1,6 +1,7 @@
 // Monte Carlo spread of the reading error for one pair: every part drawn uniformly within
 // its tolerance band, noise Gaussian, the output quantised and clipped as the readout sees it.
 import { buildModel, commonModeErrorV, gainSetError, type Model, noiseRmsA, REFERENCE_C } from "./model";
+import { drawFrontEnd } from "./front-end";
 import { shuntFigures } from "./pair";
 import { gaussian, mulberry32 } from "./prng";
 import type { Requirement } from "./requirement";
@@ -79,18 +80,20 @@ export function drawUnit(
   const ambient = req.temperature.min + rnd() * (req.temperature.max - req.temperature.min);
   const dT = ambient - REFERENCE_C;
   const epsR = u(s.tolerance);
-  const alphaR = u(s.tempco);
+  // Copper's tempco is a property of the metal, not a spread: a trace's is taken as stated.
+  const alphaR = m.fe.trace ? s.tempco : u(s.tempco);
   const epsG = u(a.gainError) + u(gainSetError(m, G));
   const alphaG = u(a.gainDrift);
   const vos = u(a.offset) + u(a.offsetDrift) * dT;
   const ib = u(a.biasCurrent);
   const cm = u(commonModeErrorV(m, G));
-  const gainActual = G * (1 + epsG + alphaG * dT);
+  const fe = drawFrontEnd(req, m.fe, G, rnd, ib, dT);
+  const gainActual = G * (1 + epsG + alphaG * dT) * fe.gainFactor;
   const extra = fault.inputOffsetV ?? 0;
   return (I) => {
     const dTs = I * I * fitted * theta;
-    const vShunt = I * fitted * (1 + epsR + alphaR * (dT + dTs));
-    const vIn = vShunt + vos + ib * fitted + cm + extra + normal() * noiseV;
+    const vShunt = I * (fitted * (1 + epsR + alphaR * (dT + dTs)) + fe.padOhms);
+    const vIn = vShunt + vos + ib * fitted + cm + fe.offsetV + extra + normal() * noiseV;
     const vOut = Math.min(m.outCeil, Math.max(a.swingLow, gainActual * vIn));
     return Math.round(vOut / m.lsbV) * m.lsbV;
   };

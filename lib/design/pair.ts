@@ -15,6 +15,7 @@ import {
   thetaFor,
   RESOLVABLE_NOISE_SIGMAS,
 } from "./model";
+import { filterCmErrorV, frontEndOffsetV, padShare, traceHeat } from "./front-end";
 
 /** Constraint order: a rejected pair is counted under the first one it fails. */
 export const rejectReasons = [
@@ -62,8 +63,10 @@ export type ShuntFigures = {
   /** The amplifier's inputs sit between these two voltages at full load, V. */
   vInLo: number;
   vInHi: number;
-  /** Offset-type error without the common-mode term, A: (Vos + αVos·ΔT)/R + Ib. */
+  /** Offset-type error without the common-mode terms, A: (Vos + αVos·ΔT + filter bias + thermal EMF)/R + Ib. */
   offsetA: number;
+  /** A 2-terminal shunt's pads as a gain error, ratio (0: Kelvin). */
+  padShare: number;
   /** Input noise density divided by R, A/√Hz. */
   noisePerR: number;
 };
@@ -71,8 +74,8 @@ export type ShuntFigures = {
 const slack = 1 + 1e-12;
 
 export function shuntFigures(m: Model, R: number): ShuntFigures {
-  // The load sees the shunt and any range switch in series with it.
-  const path = R + m.switchOhms;
+  // The load sees the shunt, a 2-terminal shunt's pads and any range switch in series with it.
+  const path = R + m.fe.padOhms + m.switchOhms;
   const burden = operatingBurden(m, path);
   const dropFails =
     !(burden <= m.dropMax * slack) || m.iMax * path > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
@@ -82,8 +85,10 @@ export function shuntFigures(m: Model, R: number): ShuntFigures {
   const iRun = Number.isNaN(iOp) ? m.iMax : iOp;
   const iHeat = m.clampV > 0 ? Math.max(iRun, m.clampV / path) : iRun;
   const power = iHeat * iHeat * R;
-  const rating = ratingFor(m, power);
-  const theta = thetaFor(m, rating);
+  // A copper trace heats by IPC-2221, not by a resistor's rating and derating curve.
+  const trace = m.fe.trace ? traceHeat(m.fe.trace, R, iHeat, m.tAmbMax, m.maxTempC) : null;
+  const rating = trace ? trace.ratingW : ratingFor(m, power);
+  const theta = trace ? trace.theta : thetaFor(m, rating);
   const b = Number.isNaN(burden) ? m.iMax * R : burden;
   return {
     dropFails,
@@ -93,7 +98,8 @@ export function shuntFigures(m: Model, R: number): ShuntFigures {
     hot: m.tAmbMax + power * theta > m.maxTempC * slack,
     vInLo: m.high ? m.vBus - b : 0,
     vInHi: m.high ? m.vBus : b,
-    offsetA: m.vosWorst / R + m.ib,
+    offsetA: (m.vosWorst + frontEndOffsetV(m.fe)) / R + m.ib,
+    padShare: padShare(m.fe, R),
     noisePerR: inputNoiseDensity(m, R) / R,
   };
 }
@@ -125,7 +131,7 @@ export function gainFigures(m: Model, gains: ArrayLike<number>): GainFigures {
     sqrtNbw[j] = Math.sqrt(noiseBandwidth(m, G));
     epsG[j] = gainSetError(m, G);
     cmScale[j] = commonModeScale(m, G);
-    cmErrV[j] = commonModeErrorV(m, G);
+    cmErrV[j] = commonModeErrorV(m, G) + filterCmErrorV(m.fe, G);
   }
   return { gains: g, bandwidth, sqrtNbw, epsG, cmScale, cmErrV };
 }
@@ -153,11 +159,12 @@ export function sweepRow(
     (sf.dropFails ? BIT_DROP : 0) | (cmAll ? BIT_CM : 0) | (Number.isNaN(sf.rating) || sf.hot ? BIT_POWER : 0);
   // Worst-case ratio at I: gainConst + εset + heat·I² + fixed/I, with fixed the current-independent error (A).
   const heat = m.alphaR * R * sf.theta;
-  const gainLo = m.gainConst + heat * m.bandLo * m.bandLo;
-  const gainHi = m.gainConst + heat * m.bandHi * m.bandHi;
-  const gainMin = m.gainConst + heat * m.iMin * m.iMin;
+  const gainConst = m.gainConst + sf.padShare;
+  const gainLo = gainConst + heat * m.bandLo * m.bandLo;
+  const gainHi = gainConst + heat * m.bandHi * m.bandHi;
+  const gainMin = gainConst + heat * m.iMin * m.iMin;
   const iOp = sf.iOp;
-  const gainOp = 1 + m.gainConst + heat * iOp * iOp;
+  const gainOp = 1 + gainConst + heat * iOp * iOp;
   const outLimit = m.outCeil * slack;
   const countsNeed = m.countsAtMin / slack;
   const bwNeed = m.bwReq / slack;
