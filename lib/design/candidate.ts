@@ -11,6 +11,7 @@ import {
   resolvableStepA,
   signalBandwidth,
 } from "./model";
+import { frontEndDetail } from "./front-end";
 import { pairMask, reasonsOf, shuntFigures } from "./pair";
 import type { Requirement } from "./requirement";
 import { sweepValues } from "./sweep";
@@ -68,6 +69,7 @@ export function evaluateCandidate(req: Requirement, choice: Choice): CandidateDe
     rssAtMinPercent: errorAtWith(req, m, choice, m.iMin).rssPercent,
     accuracyBandPercent: Math.max(pct(m.bandLo), pct(m.bandHi)),
     lowestAccurateCurrentA: lowestAccurateCurrent(req, m, choice),
+    ...frontEndDetail(req, m.fe, R),
   };
 }
 

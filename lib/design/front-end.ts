@@ -1,7 +1,14 @@
 // The front end's construction in the model's plain numbers: input filter, shunt terminals,
 // copper trace and thermal EMF (issue 14 items 3–5). model.ts holds one of these per
 // requirement; the sweep, the budget and the Monte Carlo read the same figures.
-import { copperTempcoAt, ipc2221Current, ipc2221Rise, type TraceLayer } from "./copper-trace";
+import {
+  copperTempcoAt,
+  ipc2221Current,
+  ipc2221Rise,
+  TRACE_GRID_M,
+  traceLengthFor,
+  type TraceLayer,
+} from "./copper-trace";
 import {
   differenceFilterCmV,
   differenceLoading,
@@ -137,4 +144,29 @@ export function drawFrontEnd(
   }
   const padOhms = fe.padOhms === 0 ? 0 : fe.padOhms * (0.5 + 0.5 * rnd()) * (1 + copperTempcoAt(25) * dT);
   return { offsetV, gainFactor: 1 - fe.filterLoading, padOhms };
+}
+
+/** A copper trace's tap-to-tap length for the chosen value, on the sweep's drawing grid, m. */
+export function traceLengthOf(req: Requirement, R: number): number | null {
+  const t = req.shunt.trace;
+  if (!t) return null;
+  return Math.round(traceLengthFor(R, t.width, t.thickness) / TRACE_GRID_M) * TRACE_GRID_M;
+}
+
+/** The construction figures a candidate reports (API: SI, unit in the name). */
+export type FrontEndDetail = {
+  /** The input filter's corner, Hz (null: no filter). */
+  inputFilterCornerHz: number | null;
+  /** A copper trace's length between its Kelvin taps, m (null: a resistor). */
+  traceLengthM: number | null;
+  /** Thermal EMF of the shunt's joints at the stated gradient, V. */
+  thermalEmfV: number;
+};
+
+export function frontEndDetail(req: Requirement, fe: FrontEnd, R: number): FrontEndDetail {
+  return {
+    inputFilterCornerHz: Number.isFinite(fe.filterCornerHz) ? fe.filterCornerHz : null,
+    traceLengthM: traceLengthOf(req, R),
+    thermalEmfV: fe.thermalEmfV,
+  };
 }
