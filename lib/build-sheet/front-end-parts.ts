@@ -6,7 +6,7 @@ import { filterCornerHz } from "@/lib/design/input-filter";
 import type { Requirement } from "@/lib/design/requirement";
 import type { CandidateDetail, Choice } from "@/lib/design/types";
 import * as f from "./format";
-import type { Part } from "./parts";
+import type { Part } from "./part";
 import { iecResistorCode } from "./resistor-code";
 
 const mm = (m: number) => f.formatLength(m);

@@ -2,23 +2,11 @@
 // from the saved requirement and choice; figures from the engine.
 import { evaluateCandidate, resistorPairFor, type CandidateDetail, type Choice, type Requirement } from "@/lib/design";
 import * as f from "./format";
+import type { Part } from "./part";
 import { filterParts, padNote, traceShuntPart } from "./front-end-parts";
 import { iecResistorCode } from "./resistor-code";
 
-export type Part = {
-  designator: string;
-  part: string;
-  value: string;
-  tolerance: string;
-  tempco: string;
-  rating: string;
-  notes: string;
-  /** The value in SI base units, for scripts (null where a part has no single value). */
-  valueSI: number | null;
-  unit: string | null;
-  /** A resistor's IEC 60062 letter-and-digit code ("4K7"); null for other parts and a copper trace. */
-  code: string | null;
-};
+export type { Part } from "./part";
 
 /** Below this a shunt needs a 4-terminal part (common practice, no source). */
 export const KELVIN_PART_BELOW_OHMS = 0.01;

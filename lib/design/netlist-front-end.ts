@@ -2,7 +2,7 @@
 // solder resistance, and the input RC filter with the amplifier's bias currents, as elements
 // ngspice can check (issue 14 item 6).
 import type { Requirement } from "./requirement";
-import { spiceNumber } from "./netlist";
+import { spiceNumber } from "./spice-number";
 
 /**
  * Writes RSHUNT between `sp` and `sn` (with pads, half the pad resistance at each end, the
