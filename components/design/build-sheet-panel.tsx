@@ -114,7 +114,14 @@ export function BuildSheetPanel({
                       {p.designator}
                     </th>
                     <td className="pt-1.5 pr-3">{p.part}</td>
-                    <td className="pt-1.5 pr-3 font-semibold num whitespace-nowrap">{p.value}</td>
+                    <td className="pt-1.5 pr-3 font-semibold num whitespace-nowrap">
+                      {p.value}
+                      {p.code && (
+                        <span className="block text-xs font-normal text-ink-muted" title="IEC 60062 resistor code">
+                          code {p.code}
+                        </span>
+                      )}
+                    </td>
                     <td className="pt-1.5 pr-3 num">{p.tolerance}</td>
                     <td className="pt-1.5 pr-3 num">{p.tempco}</td>
                     <td className="pt-1.5 pr-3 num whitespace-nowrap">{p.rating}</td>

@@ -13,6 +13,13 @@ import {
   type LibraryShuntRow,
 } from "@/lib/wizard/library";
 import { Choice, FormField, RadioField, SelectField } from "./form-field";
+import {
+  CopperTraceFields,
+  InputFilterFields,
+  ShuntKindChoice,
+  TerminalFields,
+  ThermalEmfFields,
+} from "./front-end-fields";
 
 export type StepKey = "span" | "supply" | "readout" | "shunt" | "amplifier" | "temperature";
 
@@ -40,14 +47,14 @@ export const steps: StepDef[] = [
   {
     key: "shunt",
     title: "Shunt",
-    blurb: "The resistor values and ratings the sweep may use.",
+    blurb: "The resistor values and ratings the sweep may use, or the copper trace; how it is sensed.",
     fields: ["shunt", "limit"],
   },
   {
     key: "amplifier",
     title: "Amplifier",
-    blurb: "Gains to sweep and the amplifier's imperfections.",
-    fields: ["amplifier"],
+    blurb: "Gains to sweep, the amplifier's imperfections and its input filter.",
+    fields: ["amplifier", "inputFilter"],
   },
   {
     key: "temperature",
@@ -287,8 +294,26 @@ export function ShuntStep({ live }: { live: LiveErrors }) {
       if (val !== undefined) setValue(`shunt.${k}` as never, val as never, { shouldValidate: true, shouldDirty: true });
     }
   };
+  const kind = useWatch<WizardValues, "shunt.kind">({ name: "shunt.kind" });
+  if (kind === "copper-trace")
+    return (
+      <div className="grid grid-cols-2 gap-3">
+        <ShuntKindChoice />
+        <CopperTraceFields live={live} />
+        <ThermalEmfFields live={live} />
+        <FormField
+          name="limit"
+          label="Candidates listed"
+          kind="number"
+          placeholder="200"
+          hint="The front, then the best of the rest"
+          extraError={live("limit")}
+        />
+      </div>
+    );
   return (
     <div className="grid grid-cols-2 gap-3">
+      <ShuntKindChoice />
       <LibraryPicker
         id="f-library-shunt"
         rows={shunts}
@@ -357,6 +382,8 @@ export function ShuntStep({ live }: { live: LiveErrors }) {
           extraError={live("shunt.ratings")}
         />
       </div>
+      <TerminalFields live={live} />
+      <ThermalEmfFields live={live} />
       <FormField
         name="limit"
         label="Candidates listed"
@@ -564,6 +591,7 @@ export function AmplifierStep({
         hint="An RC filter after the amplifier; limits the noise"
         extraError={live("amplifier.filterHz")}
       />
+      <InputFilterFields live={live} />
       <FormField
         name="amplifier.cmrrDb"
         label="CMRR (dB)"

@@ -39,11 +39,13 @@ export const csvColumns = [
   "notes",
   "value_si",
   "unit",
+  "code",
 ] as const;
 
 function csvCell(p: Part, col: (typeof csvColumns)[number]): CsvCell {
   if (col === "value_si") return p.valueSI;
   if (col === "unit") return p.unit ?? "";
+  if (col === "code") return p.code ?? "";
   return p[col];
 }
 

@@ -67,3 +67,20 @@ export function fixtureView(
     revisions: [{ revision, authorName: "Demo Designer", createdAt: "2026-11-30T10:00:00.000Z" }],
   };
 }
+
+/**
+ * The demo team's pack monitor (invented, DESIGN.md §6): a 48 V battery's discharge current on a
+ * copper trace of the power board, filtered at the amplifier's inputs, read by a 16-bit ADC.
+ */
+export const packMonitorRequirement: RequirementInput = {
+  current: { min: "1 A", max: "30 A", typical: "8 A" },
+  supply: { voltage: "48 V", side: "low" },
+  drop: { max: "50 mV" },
+  readout: { kind: "adc", bits: 16, fullScale: "2.5 V", sampleRateHz: "1 kHz" },
+  resolution: { countsAtMin: 10 },
+  accuracy: { percent: 30 },
+  temperature: { min: "0 degC", max: "40 degC" },
+  shunt: { kind: "copper-trace", trace: { width: "10 mm", length: "40 mm", thickness: "70 um" } },
+  inputFilter: { resistance: "47 ohm", capacitance: "33 uF" },
+  amplifier: { gains: [20, 50, 100, 200] },
+};

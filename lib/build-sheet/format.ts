@@ -27,3 +27,7 @@ export const noiseDensity = (vPerRtHz: number) => formatSI(vPerRtHz, "V/rtHz");
 
 export const decibels = (db: number) => formatSI(db, "dB", 4);
 export const farads = (v: number) => formatSI(v, "F");
+/** A length on a board: millimetres, or micrometres for copper thickness (0.035 mm → "35 µm"). */
+export function formatLength(m: number): string {
+  return m >= 1e-3 ? `${Number((m * 1e3).toPrecision(3))} mm` : formatSI(m, "m");
+}

@@ -2,19 +2,11 @@
 // from the saved requirement and choice; figures from the engine.
 import { evaluateCandidate, resistorPairFor, type CandidateDetail, type Choice, type Requirement } from "@/lib/design";
 import * as f from "./format";
+import type { Part } from "./part";
+import { filterParts, padNote, traceShuntPart } from "./front-end-parts";
+import { iecResistorCode } from "./resistor-code";
 
-export type Part = {
-  designator: string;
-  part: string;
-  value: string;
-  tolerance: string;
-  tempco: string;
-  rating: string;
-  notes: string;
-  /** The value in SI base units, for scripts (null where a part has no single value). */
-  valueSI: number | null;
-  unit: string | null;
-};
+export type { Part } from "./part";
 
 /** Below this a shunt needs a 4-terminal part (common practice, no source). */
 export const KELVIN_PART_BELOW_OHMS = 0.01;
@@ -55,30 +47,35 @@ export function partsList(
   const high = req.supply.side === "high";
   const usedOfRating = metrics.ratingW > 0 ? metrics.dissipationW / metrics.ratingW : NaN;
   const pair = gainResistors(req, choice);
+  const diff = a.topology === "difference";
   const parts: Part[] = [
-    {
+    traceShuntPart(req, choice, metrics) ?? {
       designator: "R1",
       part: `Shunt resistor, ${s.series} value${kelvinAdvice(choice.shuntOhms) === "part" ? ", 4-terminal" : ""}`,
       value: f.ohms(choice.shuntOhms),
       valueSI: choice.shuntOhms,
       unit: "ohm",
+      code: iecResistorCode(choice.shuntOhms),
       tolerance: `±${f.fraction(s.tolerance)}`,
       tempco: `${f.ppmPerK(s.tempco)} or better`,
       rating: f.watts(metrics.ratingW),
       notes:
         `Dissipates ${f.watts(metrics.dissipationW)} at the maximum current, ${f.fraction(usedOfRating)} of its rating ` +
         `(derating ${f.fraction(s.derating)}: use at most that share of the rating); self-heating about ${f.kelvin(metrics.selfHeatingK)}. ` +
-        kelvinAdviceText(choice.shuntOhms) +
+        (padNote(req) ?? kelvinAdviceText(choice.shuntOhms)) +
         ".",
     },
     {
       designator: "U1",
-      part: pair
-        ? "Precision amplifier, non-inverting stage (zero-drift op-amp or instrumentation amplifier)"
-        : "Current-sense amplifier, fixed gain",
+      part: diff
+        ? "Precision op-amp, difference stage (zero-drift)"
+        : pair
+          ? "Precision amplifier, non-inverting stage (zero-drift op-amp or instrumentation amplifier)"
+          : "Current-sense amplifier, fixed gain",
       value: `Gain ${f.gain(choice.gain)}`,
       valueSI: choice.gain,
       unit: "V/V",
+      code: null,
       tolerance: `gain error at most ${f.fraction(a.gainError)}`,
       tempco: `gain drift at most ${f.ppmPerK(a.gainDrift)}`,
       rating: `supply ${f.volts(a.supply)}`,
@@ -92,8 +89,10 @@ export function partsList(
     },
   ];
   if (pair) {
-    const note =
-      "Sets the gain with R3 (G = 1 + R2/R3); 0.1 % and 25 ppm/K or better, same type for both so their drift tracks (common practice, no source).";
+    const note = diff
+      ? "Difference stage, G = R2/R3 = R4/R5: R3 from the − sense line to U1's − input, R2 from there to the output; R5 from the + sense line to U1's + input, R4 from there to ground. Same type for all four so they track (common practice, no source)."
+      : "Sets the gain with R3 (G = 1 + R2/R3); 0.1 % and 25 ppm/K or better, same type for both so their drift tracks (common practice, no source).";
+    const tol = `±${f.fraction(req.amplifier.gainSet!.tolerance)}`;
     parts.push(
       {
         designator: "R2",
@@ -101,7 +100,8 @@ export function partsList(
         value: f.ohms(pair.rfOhms),
         valueSI: pair.rfOhms,
         unit: "ohm",
-        tolerance: "±0.1 %",
+        code: iecResistorCode(pair.rfOhms),
+        tolerance: tol,
         tempco: "25 ppm/K or better",
         rating: f.watts(0.063),
         notes: note,
@@ -112,13 +112,21 @@ export function partsList(
         value: f.ohms(pair.rgOhms),
         valueSI: pair.rgOhms,
         unit: "ohm",
-        tolerance: "±0.1 %",
+        code: iecResistorCode(pair.rgOhms),
+        tolerance: tol,
         tempco: "25 ppm/K or better",
         rating: f.watts(0.063),
         notes: "Pairs with R2; place both next to U1.",
       },
     );
+    if (diff)
+      parts.push(
+        { ...parts[parts.length - 2]!, designator: "R4", notes: "Matches R2: from U1's + input to ground." },
+        { ...parts[parts.length - 1]!, designator: "R5", notes: "Matches R3: from the + sense line to U1's + input." },
+      );
   }
+  const nextR = parts.filter((p) => p.designator.startsWith("R")).length + 1;
+  parts.push(...filterParts(req, nextR, 2));
   parts.push(
     {
       designator: "C1",
@@ -128,6 +136,7 @@ export function partsList(
       unit: "F",
       tolerance: "±10 %",
       tempco: "X7R",
+      code: null,
       rating: `${f.volts(Math.max(10, 2 * a.supply))} or more`,
       notes: "Supply decoupling right at U1's supply pin (common practice, no source).",
     },
@@ -137,6 +146,7 @@ export function partsList(
       value: "—",
       valueSI: null,
       unit: null,
+      code: null,
       tolerance: "—",
       tempco: "—",
       rating: "—",

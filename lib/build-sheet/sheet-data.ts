@@ -17,6 +17,7 @@ import type { PairDesignView as DesignView } from "@/lib/design-view";
 import { oneLine } from "@/lib/text-field";
 import * as f from "./format";
 import { matchLibraryParts, nameLibraryParts, type LibraryParts } from "./library-parts";
+import { constructionRows, traceLayoutNotes } from "./front-end-parts";
 import { kelvinAdvice, partsList, readoutText, type Part } from "./parts";
 
 export type Row = { label: string; value: string };
@@ -88,6 +89,7 @@ export function requirementRows(req: Requirement): Row[] {
       ? a.gains.map((g) => f.gain(g)).join(", ")
       : `${a.gains.length} gains from ${f.gain(a.gains[0]!)} to ${f.gain(a.gains[a.gains.length - 1]!)}`;
   rows.push({ label: "Amplifier gains offered", value: gains });
+  rows.push(...constructionRows(req));
   return rows;
 }
 
@@ -187,14 +189,18 @@ export function benchHowTo(req: Requirement): string[] {
 
 export function layoutNotes(req: Requirement, choice: Choice): string[] {
   const k = kelvinAdvice(choice.shuntOhms);
+  const trace = traceLayoutNotes(req, choice);
   return [
-    k === "part"
-      ? `Kelvin connections: R1 is a 4-terminal part; route the sense traces from its sense terminals only. At ${f.ohms(choice.shuntOhms)}, a few milliohms of copper or solder in the sense path would be a large error.`
-      : "Kelvin connections: take the sense traces from the inner edges of R1's pads, never from the wide current traces; the current enters and leaves by the outer edges.",
+    ...trace,
+    trace.length > 0
+      ? "R1 is drawn in copper: the taps above are its Kelvin connections."
+      : k === "part"
+        ? `Kelvin connections: R1 is a 4-terminal part; route the sense traces from its sense terminals only. At ${f.ohms(choice.shuntOhms)}, a few milliohms of copper or solder in the sense path would be a large error.`
+        : "Kelvin connections: take the sense traces from the inner edges of R1's pads, never from the wide current traces; the current enters and leaves by the outer edges.",
     "Run the two sense traces as a short, tightly paired (or twisted) pair straight to U1's inputs, away from switching nodes and the load's current loop.",
     "Place U1 close to R1 so the sense pair stays short; keep the gain-setting parts (if any) and C1 right at U1.",
     "Keep copper and solder-joint resistance out of the measurement: no vias or connectors between R1's sense points and U1, and the current path's copper wide enough for the maximum current.",
-    `Heat: R1 dissipates ${f.watts(evaluateCandidate(req, choice).dissipationW)} at full scale; give its pads copper area to spread the heat, and keep U1 and any other precision parts away from it.`,
+    `Heat: R1 dissipates ${f.watts(evaluateCandidate(req, choice).dissipationW)} at full scale; give ${trace.length > 0 ? "the trace" : "its pads"} copper area to spread the heat, and keep U1 and any other precision parts away from it.`,
     req.supply.side === "high"
       ? "High side: both sense lines carry the supply voltage; keep clearance to low-voltage circuitry as the working voltage requires."
       : "Low side: R1 lifts the load's return above the system ground by the drop; keep other grounds from joining between R1 and the load.",

@@ -17,6 +17,8 @@ export const removedByCalibration: readonly BudgetSource[] = [
   "offset",
   "biasCurrent",
   "commonMode",
+  "inputFilterBias",
+  "inputFilterResistors",
 ];
 
 /** Why each remaining term survives calibration (shown beside it). */
@@ -31,6 +33,9 @@ export const remainsBecause: Partial<Record<BudgetSource, string>> = {
   readoutOffset: "the bench fit reads the amplifier's output, not the readout's own offset",
   readoutInl: "nonlinearity: a straight-line fit cannot follow it",
   zeroLevel: "its tolerance is fitted out; its drift with ambient temperature remains",
+  shuntPads:
+    "the pads' copper and solder move with temperature (about 3900 ppm/K); counted whole, as a calibration at 25 °C leaves the drift and the joints may change with time",
+  thermalEmf: "the gradient across the shunt changes with load and airflow after calibration",
 };
 
 /**
@@ -100,6 +105,7 @@ export function calibratedAccuracy(req: Requirement, choice: Choice, points = 80
     }
     lowest = b;
   }
+  // The sources this design has (a filter, pads or a thermal EMF only where it has them).
   const sources = budgetTerms(req, m, choice, top).map((t) => t.source);
   return {
     removed: sources

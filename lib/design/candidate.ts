@@ -1,6 +1,5 @@
 // One candidate's figures (docs/model.md §3), in the API's field names.
 import { errorAtWith, lowestAccurateCurrent } from "./error-budget";
-import { seriesValues } from "./eseries";
 import {
   type Model,
   buildModel,
@@ -12,8 +11,10 @@ import {
   resolvableStepA,
   signalBandwidth,
 } from "./model";
+import { frontEndDetail } from "./front-end";
 import { pairMask, reasonsOf, shuntFigures } from "./pair";
 import type { Requirement } from "./requirement";
+import { sweepValues } from "./sweep";
 import type { Candidate, CandidateDetail, Choice } from "./types";
 
 export { rejectReasonLabels, rejectReasons, type RejectReason } from "./pair";
@@ -28,7 +29,8 @@ export function candidateFigures(m: Model, R: number, G: number): Candidate {
     shuntOhms: R,
     gain: G,
     transimpedanceVPerA: rg,
-    burdenV: m.iMax * R,
+    // A 2-terminal shunt's pads are in the load's path too.
+    burdenV: m.iMax * (R + m.fe.padOhms),
     operatingCurrentA: iOp,
     dissipationW: iOp * iOp * R,
     ratingW: Number.isNaN(sf.rating) ? largestRating(m) : sf.rating,
@@ -58,7 +60,7 @@ export function candidateDetailWith(req: Requirement, m: Model, choice: Choice):
   const { shuntOhms: R, gain: G } = choice;
   const base = candidateFigures(m, R, G);
   const sf = shuntFigures(m, R);
-  const burdenOp = operatingBurden(m, R + m.switchOhms);
+  const burdenOp = operatingBurden(m, R + m.switchOhms + m.fe.padOhms);
   const pct = (I: number) => errorAtWith(req, m, choice, I).worstPercent;
   const t = req.current.typical;
   const typical = t !== undefined && t >= m.iMin && t <= m.iMax ? t : undefined;
@@ -76,6 +78,7 @@ export function candidateDetailWith(req: Requirement, m: Model, choice: Choice):
     rssAtMinPercent: errorAtWith(req, m, choice, m.iMin).rssPercent,
     accuracyBandPercent: Math.max(pct(m.bandLo), pct(m.bandHi)),
     lowestAccurateCurrentA: lowestAccurateCurrent(req, m, choice),
+    ...frontEndDetail(req, m.fe, R),
   };
 }
 
@@ -84,9 +87,10 @@ export function isInSweep(req: Requirement, choice: Choice): boolean {
   return shuntInSweep(req, choice.shuntOhms) && gainInSweep(req, choice.gain);
 }
 
+/** A shunt value the sweep examines: an E-series value, or a copper trace's geometry (sweepValues). */
 export function shuntInSweep(req: Requirement, R: number): boolean {
   if (!Number.isFinite(R)) return false;
-  return seriesValues(req.shunt.series, req.shunt.min, req.shunt.max).some((v) => Math.abs(v - R) <= 1e-9 * v);
+  return sweepValues(req).some((v) => Math.abs(v - R) <= 1e-9 * v);
 }
 
 export function gainInSweep(req: Requirement, G: number): boolean {

@@ -10,6 +10,7 @@ import {
   REFERENCE_C,
   worstErrorA,
 } from "./model";
+import { frontEndSourceLabels, frontEndTerms, type FrontEndSource } from "./front-end-budget";
 import { shuntFigures } from "./pair";
 import { signedSpanCurrents } from "./bidirectional";
 import { readoutSignedLabels, readoutSignedTerms, type ReadoutSignedSource } from "./budget-readout-signed";
@@ -28,7 +29,8 @@ export type BudgetSource =
   | "commonMode"
   | "readout"
   | "noise"
-  | ReadoutSignedSource;
+  | ReadoutSignedSource
+  | FrontEndSource;
 
 export const budgetSourceLabels: Record<BudgetSource, string> = {
   gainError: "Amplifier gain error",
@@ -43,6 +45,7 @@ export const budgetSourceLabels: Record<BudgetSource, string> = {
   readout: "Readout step (half an LSB; a meter's ± digits)",
   noise: "Noise (crest factor × RMS)",
   ...readoutSignedLabels,
+  ...frontEndSourceLabels,
 };
 
 /** `removedA`: what the requirement's calibration took out of this term (absent: nothing). */
@@ -80,6 +83,11 @@ export function budgetTerms(req: Requirement, m: Model, choice: Choice, current:
     ["readout", m.read.quantV / (R * G), 1],
     ["noise", m.crest * noiseRmsA(m, R, G), 1],
     ...readoutSignedTerms(req, m, R * G, I),
+    ...frontEndTerms(m.fe, R, G, I).map((t): [BudgetSource, number, number] => [
+      t.source,
+      t.errorA,
+      t.errorA > 0 ? t.keptA(m.accEpsKeep, m.accOffKeep) / t.errorA : 1,
+    ]),
   ];
   return values.map(([source, full, keep]) => {
     const term: BudgetTerm = { source, label: budgetSourceLabels[source], errorA: full * keep };

@@ -1,5 +1,6 @@
 // The physical model of docs/model.md §3 on plain numbers. Everything the sweep needs per
 // requirement is computed once here; the per-pair functions take numbers only.
+import { buildFrontEnd, filterCmErrorV, frontEndOffsetV, padShare, type FrontEnd } from "./front-end";
 import type { Requirement } from "./requirement";
 import { readoutSignedFields, type ReadoutSignedFields } from "./model-readout-signed";
 
@@ -49,7 +50,7 @@ export type Model = ReadoutSignedFields & {
   dTamb: number;
   /** Temperature for Johnson noise: the hottest ambient, K. */
   tNoiseK: number;
-  /** Gain-type error that does not depend on current or gain: εG + εR + αR·ΔT + αG·ΔT. */
+  /** Gain-type error that does not depend on current or gain: εG + εR + αR·ΔT + αG·ΔT + a difference stage's filter loading. */
   gainConst: number;
   topology: number;
   /** Tolerance of the gain-setting resistors (0: fixed gains, no resistors). */
@@ -95,6 +96,8 @@ export type Model = ReadoutSignedFields & {
   accRatio: number;
   bandLo: number;
   bandHi: number;
+  /** Input filter, shunt terminals, copper trace and thermal EMF (front-end.ts). */
+  fe: FrontEnd;
 };
 
 export function readoutStepV(req: Requirement): number {
@@ -116,6 +119,7 @@ export function buildModel(req: Requirement): Model {
   }[a.topology];
   const antiAlias =
     req.readout.kind === "adc" ? ANTI_ALIAS_FRACTION * req.readout.sampleRateHz : req.readout.bandwidthHz;
+  const fe = buildFrontEnd(req, dTamb, vCm, topology === TOPO_DIFF);
   return {
     iMax: req.current.max,
     vBus: req.supply.voltage,
@@ -126,7 +130,7 @@ export function buildModel(req: Requirement): Model {
     countsAtMin: req.resolution.countsAtMin,
     dTamb,
     tNoiseK,
-    gainConst: a.gainError + s.tolerance + s.tempco * dTamb + a.gainDrift * dTamb,
+    gainConst: a.gainError + s.tolerance + s.tempco * dTamb + a.gainDrift * dTamb + fe.filterLoading,
     topology,
     gainSetTol: a.gainSet ? a.gainSet.tolerance : 0,
     high: req.supply.side === "high",
@@ -148,10 +152,11 @@ export function buildModel(req: Requirement): Model {
     vosRef: a.offset,
     vosWorst: a.offset + a.offsetDrift * dTamb,
     ib: a.biasCurrent,
-    en2: a.noiseDensity * a.noiseDensity,
+    // The filter's two leg resistors add their Johnson noise, 4kT·2R, to the amplifier's own.
+    en2: a.noiseDensity * a.noiseDensity + 4 * BOLTZMANN * tNoiseK * 2 * fe.filterOhms,
     fourKT: 4 * BOLTZMANN * tNoiseK,
     gbw: a.gbw,
-    filterHz: Math.min(a.filterHz ?? Infinity, antiAlias),
+    filterHz: Math.min(a.filterHz ?? Infinity, antiAlias, fe.filterCornerHz),
     crest: req.accuracy.crestFactor,
     swingLow: a.swingLow,
     bwReq: req.bandwidth.min,
@@ -161,6 +166,7 @@ export function buildModel(req: Requirement): Model {
     // Signed spans, the zero-current level, the readout's own error and calibration (issue 14);
     // iMin and outCeil come from there too.
     ...readoutSignedFields(req, dTamb),
+    fe,
   };
 }
 
@@ -253,9 +259,12 @@ export function operatingBurden(m: Model, R: number): number {
   return m.vBus - (m.vBus + Math.sqrt(disc)) / 2;
 }
 
-/** Offset-type error referred to current, A: (Vos + αVos·ΔT)/R + Ib + common-mode error/R. */
+/**
+ * Offset-type error referred to current, A: (Vos + αVos·ΔT)/R + Ib + common-mode error/R, plus
+ * the input filter's bias-current and common-mode errors and the joints' thermal EMF, over R.
+ */
 export function offsetTermA(m: Model, R: number, G: number): number {
-  return (m.vosWorst + commonModeErrorV(m, G)) / R + m.ib;
+  return (m.vosWorst + commonModeErrorV(m, G) + frontEndOffsetV(m.fe) + filterCmErrorV(m.fe, G)) / R + m.ib;
 }
 
 /** RMS input noise density including the shunt's Johnson noise, V/√Hz. */
@@ -284,9 +293,27 @@ export function noiseRmsA(m: Model, R: number, G: number): number {
  * of a signed span.
  */
 export function worstErrorA(m: Model, R: number, G: number, theta: number, I: number): number {
-  const gainPart = I * (m.accGainConst + m.accEpsKeep * gainSetError(m, G) + m.alphaR * I * I * R * theta);
-  const offA = (m.accOffKeep * (m.vosRef + commonModeErrorV(m, G)) + (m.vosWorst - m.vosRef)) / R + m.accOffKeep * m.ib;
+  const gainPart =
+    I *
+    (m.accGainConst +
+      m.accEpsKeep * (gainSetError(m, G) + m.fe.filterLoading) +
+      calibratedPadShare(m, R) +
+      m.alphaR * I * I * R * theta);
+  const offA =
+    (m.accOffKeep * (m.vosRef + commonModeErrorV(m, G) + m.fe.filterBiasV + filterCmErrorV(m.fe, G)) +
+      (m.vosWorst - m.vosRef) +
+      m.fe.thermalEmfV) /
+      R +
+    m.accOffKeep * m.ib;
   return gainPart + offA + m.accOutV / (R * G) + m.crest * noiseRmsA(m, R, G);
+}
+
+/**
+ * The pads' gain-type error after calibration: a gain calibration takes out their value at 25 °C,
+ * never their drift with copper's tempco over the ambient range.
+ */
+export function calibratedPadShare(m: Model, R: number): number {
+  return (m.accEpsKeep * m.fe.padOhms + (m.fe.padOhmsWorst - m.fe.padOhms)) / R;
 }
 
 /** The smallest current step the readout can tell apart: one readout step, or the noise where larger, A. */
@@ -327,6 +354,6 @@ export function outputFloorWorstV(m: Model, R: number, G: number, theta: number)
 
 /** Current magnitude I plus every amplifier-side error that moves the output with it, uncalibrated, A. */
 function outputSwingA(m: Model, R: number, G: number, theta: number, I: number): number {
-  const gain = m.gainConst + gainSetError(m, G) + m.alphaR * I * I * R * theta;
+  const gain = m.gainConst + padShare(m.fe, R) + gainSetError(m, G) + m.alphaR * I * I * R * theta;
   return I + I * gain + offsetTermA(m, R, G) + m.crest * noiseRmsA(m, R, G);
 }

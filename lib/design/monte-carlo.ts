@@ -2,6 +2,7 @@
 // its tolerance band, noise Gaussian, the output quantised and clipped as the readout sees it.
 import { drawReadout, drawZeroLevelV } from "./monte-carlo-readout";
 import { buildModel, commonModeErrorV, gainSetError, type Model, noiseRmsA, REFERENCE_C } from "./model";
+import { drawFrontEnd } from "./front-end";
 import { shuntFigures } from "./pair";
 import { gaussian, mulberry32 } from "./prng";
 import type { Requirement } from "./requirement";
@@ -84,13 +85,15 @@ export function drawUnit(
   const ambient = req.temperature.min + rnd() * (req.temperature.max - req.temperature.min);
   const dT = ambient - REFERENCE_C;
   const epsR = u(s.tolerance);
-  const alphaR = u(s.tempco);
+  // Copper's tempco is a property of the metal, not a spread: a trace's is taken as stated.
+  const alphaR = m.fe.trace ? s.tempco : u(s.tempco);
   const epsG = u(a.gainError) + u(gainSetError(m, G));
   const alphaG = u(a.gainDrift);
   const vos0 = u(a.offset);
   const vosDrift = u(a.offsetDrift);
   const ib = u(a.biasCurrent);
   const cm = u(commonModeErrorV(m, G));
+  const fe = drawFrontEnd(req, m.fe, G, rnd, ib, dT);
   const extra = fault.inputOffsetV ?? 0;
   const zero = drawZeroLevelV(req, u);
   const read = withReadout ? drawReadout(req, m, u) : null;
@@ -98,10 +101,11 @@ export function drawUnit(
   return (I, at25 = false) => {
     const t = at25 ? 0 : dT;
     const dTs = I * I * fitted * theta;
-    const vShunt = I * fitted * (1 + epsR + alphaR * (t + dTs));
+    // The pads are drawn at the unit's ambient (drawFrontEnd); the bench at 25 °C sees nearly the same.
+    const vShunt = I * (fitted * (1 + epsR + alphaR * (t + dTs)) + fe.padOhms);
     const noise = at25 ? 0 : normal() * noiseV;
-    const vIn = vShunt + vos0 + vosDrift * t + ib * fitted + cm + extra + noise;
-    const gainActual = G * (1 + epsG + alphaG * t);
+    const vIn = vShunt + vos0 + vosDrift * t + ib * fitted + cm + fe.offsetV + extra + noise;
+    const gainActual = G * (1 + epsG + alphaG * t) * fe.gainFactor;
     const vOut = Math.min(m.outCeil, Math.max(a.swingLow, zero(t) + gainActual * vIn));
     return read ? read(vOut, t) : Math.round(vOut / m.lsbV) * m.lsbV;
   };

@@ -1,23 +1,15 @@
 // An ngspice-compatible netlist of one design at Imax: supply, shunt, load and amplifier.
 import { buildModel, operatingBurden } from "./model";
+import { DIFFERENCE_RG_OHMS } from "./input-filter";
+import { frontEndElements } from "./netlist-front-end";
+import { spiceNumber } from "./spice-number";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
 
-/**
- * SPICE reads "m" and "M" both as milli, so values go out in plain exponent notation
- * ("4.7e-3"), never with scale suffixes.
- */
-export function spiceNumber(x: number): string {
-  if (!Number.isFinite(x)) throw new RangeError(`cannot write ${x} into a netlist`);
-  if (x === 0) return "0";
-  const [mant = "0", exp = "0"] = x.toExponential(9).split("e");
-  const m = mant.replace(/\.?0+$/, "");
-  const e = Number(exp);
-  return e === 0 ? m : `${m}e${e}`;
-}
+export { spiceNumber } from "./spice-number";
 
 /** Gain-setting resistors of a difference stage: Rg from each input, Rf to the output and to ground. */
-export const DIFFERENCE_RG_OHMS = 10_000;
+export { DIFFERENCE_RG_OHMS } from "./input-filter";
 /** Open-loop gain of the op-amp in a difference stage's netlist (an ideal-enough op-amp). */
 export const OPAMP_OPEN_LOOP_GAIN = 1e7;
 
@@ -25,7 +17,8 @@ export type NetlistOptions = {
   includeOffset?: boolean;
   /**
    * Difference stage only: skew its four resistors by ± the gain-set tolerance in the pattern
-   * that spoils common-mode rejection most (Rg1·(1+t), Rf1·(1−t), Rg2·(1−t), Rf2·(1+t)).
+   * that spoils common-mode rejection most (Rg1·(1+t), Rf1·(1−t), Rg2·(1−t), Rf2·(1+t)), and an
+   * input filter's resistors by ± their tolerance in the same sense (the − leg high, the + leg low).
    */
   worstMismatch?: boolean;
   /**
@@ -57,7 +50,8 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: NetlistOpti
   }
   lines.push(`VBUS bus 0 DC ${spiceNumber(vBus)}`);
   if (high) lines.push("VFEED bus sp DC 0");
-  lines.push(`RSHUNT sp sn ${spiceNumber(R)}`);
+  // The shunt, a 2-terminal shunt's pads, and the input filter: the amplifier senses `ap`, `an`.
+  const { ap, an } = frontEndElements(lines, req, R, includeOffset, opts.worstMismatch ?? false);
   if (!high) lines.push("VRET sn 0 DC 0");
   if (opts.currentA !== undefined) {
     lines.push(
@@ -84,14 +78,8 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: NetlistOpti
   }
   const ref = zeroLevelNode(lines, req);
   if (req.amplifier.topology === "difference") {
-    differenceStage(
-      lines,
-      req,
-      G,
-      includeOffset,
-      opts.worstMismatch ? (req.amplifier.gainSet?.tolerance ?? 0) : 0,
-      ref,
-    );
+    const t = opts.worstMismatch ? (req.amplifier.gainSet?.tolerance ?? 0) : 0;
+    differenceStage(lines, req, G, includeOffset, t, { ap, an, ref });
     lines.push("RREAD out 0 1e6");
     lines.push(".op");
     lines.push(".end");
@@ -102,11 +90,11 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: NetlistOpti
     lines.push(
       `* with its input offset ${spiceNumber(req.amplifier.offset)} V as a source in series with the + input.`,
     );
-    lines.push(`VOS spo sp DC ${spiceNumber(req.amplifier.offset)}`);
-    lines.push(`EAMP out ${ref} spo sn ${spiceNumber(G)}`);
+    lines.push(`VOS spo ${ap} DC ${spiceNumber(req.amplifier.offset)}`);
+    lines.push(`EAMP out ${ref} spo ${an} ${spiceNumber(G)}`);
   } else {
     lines.push("* offset left out.");
-    lines.push(`EAMP out ${ref} sp sn ${spiceNumber(G)}`);
+    lines.push(`EAMP out ${ref} ${ap} ${an} ${spiceNumber(G)}`);
   }
   // A load on the output keeps `out` from floating in simulators that check it.
   lines.push("RREAD out 0 1e6");
@@ -128,7 +116,17 @@ function zeroLevelNode(lines: string[], req: Requirement): string {
 }
 
 /** A difference amplifier, G = Rf/Rg: an op-amp (a high-gain source) and its four resistors. */
-function differenceStage(lines: string[], req: Requirement, G: number, includeOffset: boolean, t: number, ref: string) {
+/** Nodes a stage connects to: the inputs after any filter, and the zero level its output stands on. */
+type StageNodes = { ap: string; an: string; ref: string };
+
+function differenceStage(
+  lines: string[],
+  req: Requirement,
+  G: number,
+  includeOffset: boolean,
+  t: number,
+  { ap, an, ref }: StageNodes,
+) {
   const rg = DIFFERENCE_RG_OHMS;
   const rf = G * rg;
   lines.push(
@@ -136,9 +134,9 @@ function differenceStage(lines: string[], req: Requirement, G: number, includeOf
   );
   if (t > 0)
     lines.push(`* Resistors skewed by ${spiceNumber(t)} in the pattern that spoils common-mode rejection most.`);
-  lines.push(`RG1 sn inn ${spiceNumber(rg * (1 + t))}`);
+  lines.push(`RG1 ${an} inn ${spiceNumber(rg * (1 + t))}`);
   lines.push(`RF1 inn out ${spiceNumber(rf * (1 - t))}`);
-  lines.push(`RG2 sp inp ${spiceNumber(rg * (1 - t))}`);
+  lines.push(`RG2 ${ap} inp ${spiceNumber(rg * (1 - t))}`);
   lines.push(`RF2 inp ${ref} ${spiceNumber(rf * (1 + t))}`);
   if (includeOffset) {
     lines.push(`* Input offset ${spiceNumber(req.amplifier.offset)} V in series with the op-amp's + input.`);

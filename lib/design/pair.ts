@@ -3,6 +3,7 @@
 import {
   type Model,
   TOPO_NONINV,
+  calibratedPadShare,
   commonModeErrorV,
   commonModeScale,
   gainSetError,
@@ -15,6 +16,7 @@ import {
   thetaFor,
   RESOLVABLE_NOISE_SIGMAS,
 } from "./model";
+import { filterCmErrorV, frontEndOffsetV, padShare, traceHeat } from "./front-end";
 
 /** Constraint order: a rejected pair is counted under the first one it fails. */
 export const rejectReasons = [
@@ -62,10 +64,14 @@ export type ShuntFigures = {
   /** The amplifier's inputs sit between these two voltages at full load, V. */
   vInLo: number;
   vInHi: number;
-  /** Offset-type error without the common-mode term, A: (Vos + αVos·ΔT)/R + Ib. */
+  /** Offset-type error without the common-mode terms, A: (Vos + αVos·ΔT + filter bias + thermal EMF)/R + Ib. */
   offsetA: number;
-  /** The same for accuracy, after calibration (a one-point calibration leaves αVos·ΔT/R), A. */
+  /** The same for accuracy, after calibration (a one-point calibration leaves αVos·ΔT/R and the thermal EMF), A. */
   accOffsetA: number;
+  /** A 2-terminal shunt's pads as a gain error, ratio (0: Kelvin). */
+  padShare: number;
+  /** The same after calibration (a gain calibration leaves the pads' drift), ratio. */
+  accPadShare: number;
   /** Input noise density divided by R, A/√Hz. */
   noisePerR: number;
 };
@@ -73,8 +79,8 @@ export type ShuntFigures = {
 const slack = 1 + 1e-12;
 
 export function shuntFigures(m: Model, R: number): ShuntFigures {
-  // The load sees the shunt and any range switch in series with it.
-  const path = R + m.switchOhms;
+  // The load sees the shunt, a 2-terminal shunt's pads and any range switch in series with it.
+  const path = R + m.fe.padOhms + m.switchOhms;
   const burden = operatingBurden(m, path);
   // A signed span's negative direction is set by its source (a charger): I·R at |current.min|.
   const dropFails =
@@ -88,8 +94,10 @@ export function shuntFigures(m: Model, R: number): ShuntFigures {
   const iRun = Number.isNaN(iOp) ? m.iMax : iOp;
   const iHeat = Math.max(m.clampV > 0 ? Math.max(iRun, m.clampV / path) : iRun, m.iNeg);
   const power = iHeat * iHeat * R;
-  const rating = ratingFor(m, power);
-  const theta = thetaFor(m, rating);
+  // A copper trace heats by IPC-2221, not by a resistor's rating and derating curve.
+  const trace = m.fe.trace ? traceHeat(m.fe.trace, R, iHeat, m.tAmbMax, m.maxTempC) : null;
+  const rating = trace ? trace.ratingW : ratingFor(m, power);
+  const theta = trace ? trace.theta : thetaFor(m, rating);
   const b = Number.isNaN(burden) ? m.iMax * R : burden;
   return {
     dropFails,
@@ -99,8 +107,12 @@ export function shuntFigures(m: Model, R: number): ShuntFigures {
     hot: m.tAmbMax + power * theta > m.maxTempC * slack,
     vInLo: m.high ? m.vBus - b : 0,
     vInHi: m.high ? m.vBus : b,
-    offsetA: m.vosWorst / R + m.ib,
-    accOffsetA: m.accOffKeep === 1 ? m.vosWorst / R + m.ib : (m.vosWorst - m.vosRef) / R,
+    offsetA: (m.vosWorst + frontEndOffsetV(m.fe)) / R + m.ib,
+    accOffsetA:
+      (m.accOffKeep * (m.vosRef + m.fe.filterBiasV) + (m.vosWorst - m.vosRef) + m.fe.thermalEmfV) / R +
+      m.accOffKeep * m.ib,
+    padShare: padShare(m.fe, R),
+    accPadShare: calibratedPadShare(m, R),
     noisePerR: inputNoiseDensity(m, R) / R,
   };
 }
@@ -132,7 +144,7 @@ export function gainFigures(m: Model, gains: ArrayLike<number>): GainFigures {
     sqrtNbw[j] = Math.sqrt(noiseBandwidth(m, G));
     epsG[j] = gainSetError(m, G);
     cmScale[j] = commonModeScale(m, G);
-    cmErrV[j] = commonModeErrorV(m, G);
+    cmErrV[j] = commonModeErrorV(m, G) + filterCmErrorV(m.fe, G);
   }
   return { gains: g, bandwidth, sqrtNbw, epsG, cmScale, cmErrV };
 }
@@ -160,13 +172,16 @@ export function sweepRow(
     (sf.dropFails ? BIT_DROP : 0) | (cmAll ? BIT_CM : 0) | (Number.isNaN(sf.rating) || sf.hot ? BIT_POWER : 0);
   // Worst-case ratio at I: gainConst + εset + heat·I² + fixed/I, with fixed the current-independent error (A).
   const heat = m.alphaR * R * sf.theta;
-  const gainLo = m.accGainConst + heat * m.bandLo * m.bandLo;
-  const gainHi = m.accGainConst + heat * m.bandHi * m.bandHi;
-  const gainMin = m.accGainConst + heat * m.iMin * m.iMin;
+  // Accuracy after calibration; the output's swing uncalibrated (gainConst holds the filter's loading).
+  const accGain = m.accGainConst + m.accEpsKeep * m.fe.filterLoading + sf.accPadShare;
+  const gainLo = accGain + heat * m.bandLo * m.bandLo;
+  const gainHi = accGain + heat * m.bandHi * m.bandHi;
+  const gainMin = accGain + heat * m.iMin * m.iMin;
   const iOp = sf.iOp;
-  const gainOp = 1 + m.gainConst + heat * iOp * iOp;
+  const gainConst = m.gainConst + sf.padShare;
+  const gainOp = 1 + gainConst + heat * iOp * iOp;
   // A signed span's other end: the zero level less the largest negative current, against the floor.
-  const gainNeg = 1 + m.gainConst + heat * m.iNeg * m.iNeg;
+  const gainNeg = 1 + gainConst + heat * m.iNeg * m.iNeg;
   const floorLimit = m.swingLow / slack;
   const outLimit = m.outCeil * slack;
   const countsNeed = m.countsAtMin / slack;

@@ -4,6 +4,15 @@
 import { z } from "zod";
 import { isSeriesName, seriesNames, seriesValues, type SeriesName } from "./eseries";
 import { commonFixedGains, resistorPairGains, type GainSet } from "./gains";
+import { traceLengths } from "./copper-trace";
+import { inputFilterField } from "./input-filter";
+import { blank, nonNegative, positive, q } from "./quantity-rules";
+import {
+  constructionIssues,
+  normalizeConstruction,
+  shuntConstructionFields,
+  type ShuntConstruction,
+} from "./shunt-construction";
 import { parsePercent, quantity } from "./units";
 import { adcErrorFields, calibrationField, meterErrorFields } from "./readout-error";
 import {
@@ -59,19 +68,6 @@ const seriesField = z
   })
   .transform((s) => s as SeriesName);
 
-const positive = (label: string) => (v: number) => v > 0 || `${label} must be above zero`;
-const nonNegative = (label: string) => (v: number) => v >= 0 || `${label} cannot be negative`;
-
-/** A quantity field with a sign rule; the rule's message lands on the field's own path. */
-function q(dim: Parameters<typeof quantity>[0], label: string, rule: (v: number) => true | string) {
-  return quantity(dim, label).check(
-    z.superRefine((v: number, ctx) => {
-      const r = rule(v);
-      if (r !== true) ctx.addIssue({ code: "custom", message: r });
-    }),
-  );
-}
-
 const count = (label: string, min: number, max: number) =>
   z
     .number({ error: `${label}: expected a whole number` })
@@ -107,7 +103,6 @@ const gainSetSchema = z.object({
   ).default(defaultGainSetTolerance),
 });
 
-const blank = (v: unknown) => v === undefined || v === null || (typeof v === "string" && v.trim() === "");
 const isBlankRange = (v: unknown) =>
   typeof v === "object" && v !== null && blank((v as { min?: unknown }).min) && blank((v as { max?: unknown }).max);
 
@@ -234,8 +229,10 @@ const baseSchema = z.object(
         ).default(85),
         deratingKneeC: quantity("temperature", "Derating knee (full power up to)").default(70),
         maxTempC: quantity("temperature", "Shunt maximum temperature").default(155),
+        ...shuntConstructionFields,
       })
       .prefault({}),
+    inputFilter: inputFilterField,
     amplifier: z
       .object({
         gains: z
@@ -251,6 +248,11 @@ const baseSchema = z.object(
         ).default(0.001),
         gainDrift: q("tempco", "Gain drift", nonNegative("Gain drift")).default(10e-6),
         biasCurrent: q("current", "Input bias current", nonNegative("Input bias current")).default(20e-9),
+        // Left out: taken as the bias current itself, the worst a part's sheet allows when it gives none.
+        offsetCurrent: z.preprocess(
+          (v) => (blank(v) ? undefined : v),
+          q("current", "Input offset current", nonNegative("Input offset current")).optional(),
+        ),
         noiseDensity: q("noiseDensity", "Input noise density", nonNegative("Input noise density")).default(40e-9),
         gbw: q("frequency", "Gain-bandwidth", positive("Gain-bandwidth")).default(2e6),
         supply: q("voltage", "Amplifier supply", positive("Amplifier supply")).default(5),
@@ -312,7 +314,8 @@ export type RequirementInput = z.input<typeof baseSchema>;
 /** Share of the allowed drop a range switch may take at full current when none is named. */
 export const RANGE_SWITCH_DROP_SHARE = 0.1;
 
-export type Requirement = Omit<Base, "drop" | "accuracy" | "amplifier" | "rangeSwitch"> & {
+export type Requirement = Omit<Base, "drop" | "accuracy" | "amplifier" | "rangeSwitch" | "shunt"> & {
+  shunt: Omit<Base["shunt"], keyof ShuntConstruction> & ShuntConstruction;
   rangeSwitch: { onResistance: number };
   drop: { max: number; fraction?: number; loadMin?: number };
   accuracy: { percent: number; bandMin: number; bandMax: number; crestFactor: number };
@@ -369,7 +372,7 @@ function normalize(b: Base): Requirement {
     ...b,
     drop,
     accuracy: { percent: b.accuracy.percent, bandMin, bandMax, crestFactor: b.accuracy.crestFactor },
-    shunt: { ...b.shunt, ratings: [...b.shunt.ratings].sort((x, y) => x - y) },
+    shunt: normalizeConstruction({ ...b.shunt, ratings: [...b.shunt.ratings].sort((x, y) => x - y) }),
     rangeSwitch: { onResistance: b.rangeSwitch.onResistance ?? (RANGE_SWITCH_DROP_SHARE * dropMax) / b.current.max },
     amplifier: {
       ...amp,
@@ -430,10 +433,16 @@ function crossFieldRules(b: Base, ctx: z.RefinementCtx) {
   if (temperature.min < -273.15) issue(["temperature", "min"], "Temperature is below absolute zero");
   if (temperature.max > 300) issue(["temperature", "max"], "Highest ambient temperature must be at most 300 °C");
   // Field-level refusals do not stop these rules from running: only check what is sound.
-  if (shunt.min > shunt.max) issue(["shunt", "min"], "Smallest shunt must not be above the largest");
+  for (const i of constructionIssues(shunt)) issue(i.path, i.message);
+  // A copper trace's values come from its geometry (its lengths), not from the series between the bounds.
+  const trace = shunt.kind === "copper-trace" ? shunt.trace : undefined;
+  if (!trace && shunt.min > shunt.max) issue(["shunt", "min"], "Smallest shunt must not be above the largest");
   else if (isSeriesName(shunt.series) && shunt.min > 0 && gainsAreSound(amplifier)) {
-    const n = seriesValues(shunt.series, shunt.min, shunt.max).length;
-    if (n === 0) issue(["shunt", "min"], `No ${shunt.series} value lies between the smallest and the largest shunt`);
+    const n = trace
+      ? traceLengths(trace.width, trace.length).length
+      : seriesValues(shunt.series, shunt.min, shunt.max).length;
+    if (n === 0 && !trace)
+      issue(["shunt", "min"], `No ${shunt.series} value lies between the smallest and the largest shunt`);
     const g = gainsOf(amplifier).gains.length;
     if (g === 0)
       issue(

@@ -1,5 +1,6 @@
 // The sweep's inner loop: every series value × every gain on plain numbers in typed arrays.
 // No mathjs and no per-pair objects; results stay in the arrays for the front and ranking.
+import { traceValues } from "./copper-trace";
 import { seriesValues } from "./eseries";
 import type { Model } from "./model";
 import { gainFigures, rejectReasons, shuntFigures, sweepRow } from "./pair";
@@ -20,7 +21,10 @@ export type SweepArrays = {
   feasibleCount: number;
 };
 
+/** The shunt values swept: the series between the bounds, or a copper trace's lengths on a drawing grid. */
 export function sweepValues(req: Requirement): Float64Array {
+  const t = req.shunt.trace;
+  if (t) return Float64Array.from(traceValues(t.width, t.thickness, t.length));
   return Float64Array.from(seriesValues(req.shunt.series, req.shunt.min, req.shunt.max));
 }
 

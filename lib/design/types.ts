@@ -1,4 +1,5 @@
 // Shapes shared across the engine and the API (docs/api.md lists the routes that return them).
+import type { FrontEndDetail } from "./front-end";
 import type { RejectReason } from "./pair";
 
 export type Choice = { shuntOhms: number; gain: number };
@@ -30,20 +31,21 @@ export type Candidate = {
   reasons: RejectReason[];
 };
 
-export type CandidateDetail = Candidate & {
-  loadVoltageV: number;
-  selfHeatingK: number;
-  bandwidthHz: number;
-  /** Steps the readout can tell apart at Imin: Imin / resolvableStepA. */
-  countsAtMin: number;
-  /** Hot spot of the shunt at the hottest ambient and full load, °C. */
-  hotSpotC: number;
-  noiseA: number;
-  headroomV: number;
-  errorAtTypicalPercent: number | null;
-  errorAtMaxPercent: number;
-  rssAtMinPercent: number;
-  /** Largest worst-case error inside the accuracy band, % of reading. */
-  accuracyBandPercent: number;
-  lowestAccurateCurrentA: number | null;
-};
+export type CandidateDetail = Candidate &
+  FrontEndDetail & {
+    loadVoltageV: number;
+    selfHeatingK: number;
+    bandwidthHz: number;
+    /** Steps the readout can tell apart at Imin: Imin / resolvableStepA. */
+    countsAtMin: number;
+    /** Hot spot of the shunt at the hottest ambient and full load, °C. */
+    hotSpotC: number;
+    noiseA: number;
+    headroomV: number;
+    errorAtTypicalPercent: number | null;
+    errorAtMaxPercent: number;
+    rssAtMinPercent: number;
+    /** Largest worst-case error inside the accuracy band, % of reading. */
+    accuracyBandPercent: number;
+    lowestAccurateCurrentA: number | null;
+  };

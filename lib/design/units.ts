@@ -31,7 +31,10 @@ export type Dimension =
   | "voltageDrift"
   | "noiseDensity"
   | "thermalResistance"
-  | "transimpedance";
+  | "transimpedance"
+  /** A length (trace width, length and copper thickness): "2 mm", "35 um", "20 mil". */
+  | "length"
+  | "capacitance";
 
 /** The mathjs unit whose base dimension each of ours has (null: dimensionless). */
 const referenceUnit: Record<Dimension, string | null> = {
@@ -50,6 +53,8 @@ const referenceUnit: Record<Dimension, string | null> = {
   noiseDensity: "V/Hz^0.5",
   thermalResistance: "K/W",
   transimpedance: "V/A",
+  length: "m",
+  capacitance: "F",
 };
 
 const dimensionWords: Record<Dimension, string> = {
@@ -68,6 +73,8 @@ const dimensionWords: Record<Dimension, string> = {
   noiseDensity: "a noise density",
   thermalResistance: "a thermal resistance",
   transimpedance: "a transimpedance",
+  length: "a length",
+  capacitance: "a capacitance",
 };
 
 // Resistance and transimpedance share a base dimension; name it by what was asked for.
@@ -84,6 +91,8 @@ const detectOrder: Dimension[] = [
   "noiseDensity",
   "thermalResistance",
   "tempco",
+  "length",
+  "capacitance",
 ];
 
 // A mathjs instance with the unit functions alone (a custom build): the pages that check
@@ -245,6 +254,8 @@ function example(dim: Dimension): string {
     noiseDensity: '"40 nV/rtHz"',
     thermalResistance: '"80 K/W"',
     transimpedance: '"1 V/A"',
+    length: '"2.5 mm"',
+    capacitance: '"100 nF"',
   };
   return examples[dim];
 }

@@ -2,6 +2,7 @@
 // revision diff, the compare page and the mails. Pure: runs on the server and in the browser.
 import { formatPercent, formatSI } from "@/lib/design/format";
 import type { PlanChoice } from "@/lib/design/plan-choice";
+import { frontEndMetricFields, frontEndRequirementFields } from "./front-end-fields";
 
 export type FieldKind = "si" | "percent" | "fraction" | "ppm" | "plain" | "db" | "celsius" | "count" | "text";
 
@@ -59,6 +60,7 @@ export const requirementFields: Record<string, FieldInfo> = {
   "amplifier.filterHz": { label: "Output filter corner", kind: "si", unit: "Hz" },
   "amplifier.cmrrDb": { label: "CMRR", kind: "db" },
   limit: { label: "Candidates kept", kind: "count" },
+  ...frontEndRequirementFields,
 };
 
 export const choiceFields: Record<string, FieldInfo> = {
@@ -127,6 +129,7 @@ export const metricFields: Record<string, FieldInfo> = {
     unit: "A",
     better: "lower",
   },
+  ...frontEndMetricFields,
 };
 
 /** A number without SI prefixes (for %, dB, °C, ppm where a prefix would read wrong). */

@@ -24,6 +24,12 @@ export type WizardValues = {
     derating: number;
     deratingKneeC: string;
     maxTempC: string;
+    kind: "resistor" | "copper-trace";
+    trace: { width: string; length: string; thickness: string; layer: "external" | "internal"; tolerance?: string };
+    terminals: "4" | "2";
+    padResistance: string;
+    thermalEmf?: string;
+    gradient: string;
   };
   amplifier: {
     gains?: number[];
@@ -37,6 +43,7 @@ export type WizardValues = {
     gainError: string;
     gainDrift: string;
     biasCurrent: string;
+    offsetCurrent?: string;
     noiseDensity: string;
     gbw: string;
     supply: string;
@@ -45,6 +52,9 @@ export type WizardValues = {
     cmrrDb: number;
   };
   limit: number;
+  /** The input filter's checkbox (not part of the requirement: the schema ignores it). */
+  inputFilterOn: boolean;
+  inputFilter: { resistance: string; capacitance: string; tolerance: string };
 };
 
 /** The engine's defaults (lib/design/requirement.ts), written the way an engineer types them. */
@@ -67,6 +77,12 @@ export const readableDefaults: WizardValues = {
     derating: 0.5,
     deratingKneeC: "70 °C",
     maxTempC: "155 °C",
+    kind: "resistor",
+    trace: { width: "", length: "", thickness: "35 µm", layer: "external", tolerance: "" },
+    terminals: "4",
+    padResistance: "0.5 mΩ",
+    thermalEmf: "",
+    gradient: "0 K",
   },
   amplifier: {
     gains: [10, 20, 25, 50, 60, 100, 200, 500],
@@ -79,6 +95,7 @@ export const readableDefaults: WizardValues = {
     gainError: "0.1 %",
     gainDrift: "10 ppm/K",
     biasCurrent: "20 nA",
+    offsetCurrent: "",
     noiseDensity: "40 nV/rtHz",
     gbw: "2 MHz",
     supply: "5 V",
@@ -87,6 +104,8 @@ export const readableDefaults: WizardValues = {
     cmrrDb: 120,
   },
   limit: 200,
+  inputFilterOn: false,
+  inputFilter: { resistance: "", capacitance: "", tolerance: "1 %" },
 };
 
 /** A scenario's requirement input laid over the readable defaults (values of both modes kept;
@@ -100,7 +119,10 @@ export function valuesFrom(input: RequirementInput): WizardValues {
     if (typeof t === "string") i.temperature![k] = t.replace(/\s*deg\s*C$/i, " °C");
     else if (typeof t === "number") i.temperature![k] = `${t} °C`;
   }
-  return deepMerge(readableDefaults, i);
+  // The form's radio holds the terminal count as text; a scenario's filter switches the filter on.
+  if (typeof i.shunt?.terminals === "number") i.shunt.terminals = String(i.shunt.terminals);
+  const merged = deepMerge(readableDefaults, i);
+  return { ...merged, inputFilterOn: input.inputFilter !== undefined && input.inputFilter !== null };
 }
 
 /** A diagnosis suggestion as the form's own text, which the form reads back to exactly the value the engine tried. */

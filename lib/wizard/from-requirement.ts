@@ -83,6 +83,21 @@ export function revisionStart(req: Requirement): RevisionStart {
       derating: req.shunt.derating,
       deratingKneeC: `${plain(req.shunt.deratingKneeC)} °C`,
       maxTempC: `${plain(req.shunt.maxTempC)} °C`,
+      kind: req.shunt.kind,
+      trace: req.shunt.trace
+        ? {
+            width: exact(req.shunt.trace.width, "m"),
+            length: exact(req.shunt.trace.length, "m"),
+            thickness: exact(req.shunt.trace.thickness, "m"),
+            layer: req.shunt.trace.layer,
+            tolerance: percent(req.shunt.trace.tolerance),
+          }
+        : readableDefaults.shunt.trace,
+      terminals: req.shunt.terminals === 2 ? "2" : "4",
+      padResistance:
+        req.shunt.terminals === 2 ? exact(req.shunt.padResistance, "Ω") : readableDefaults.shunt.padResistance,
+      thermalEmf: exact(req.shunt.thermalEmf, "V/K"),
+      gradient: exact(req.shunt.gradient, "K"),
     },
     amplifier: {
       ...(a.gainSet ? { gainSet: { ...a.gainSet, tolerance: percent(a.gainSet.tolerance) } } : { gains: [...a.gains] }),
@@ -94,6 +109,7 @@ export function revisionStart(req: Requirement): RevisionStart {
       gainError: percent(a.gainError),
       gainDrift: ppm(a.gainDrift),
       biasCurrent: exact(a.biasCurrent, "A"),
+      offsetCurrent: a.offsetCurrent === undefined ? "" : exact(a.offsetCurrent, "A"),
       noiseDensity: exact(a.noiseDensity, "V/rtHz"),
       gbw: exact(a.gbw, "Hz"),
       supply: exact(a.supply, "V"),
@@ -102,6 +118,14 @@ export function revisionStart(req: Requirement): RevisionStart {
       cmrrDb: a.cmrrDb,
     },
     limit: req.limit,
+    inputFilterOn: req.inputFilter !== null,
+    inputFilter: req.inputFilter
+      ? {
+          resistance: exact(req.inputFilter.resistance, "Ω"),
+          capacitance: exact(req.inputFilter.capacitance, "F"),
+          tolerance: percent(req.inputFilter.tolerance),
+        }
+      : readableDefaults.inputFilter,
   };
   return {
     values,

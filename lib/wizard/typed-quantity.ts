@@ -4,7 +4,7 @@
 // still refused as a charge.
 
 /** The base unit a field's bare number is read in (shown beside the box), or "ratio" for shares. */
-export type BaseUnit = "A" | "V" | "Ω" | "W" | "Hz" | "°C" | "V/K" | "V/√Hz" | "ratio" | "1/K";
+export type BaseUnit = "A" | "V" | "Ω" | "W" | "Hz" | "°C" | "V/K" | "V/√Hz" | "ratio" | "1/K" | "m" | "F" | "K";
 
 const num = String.raw`[+-]?(?:\d+\.?\d*|\.\d+)(?:e[+-]?\d+)?`;
 const prefixes = "pnuµμmkMG";

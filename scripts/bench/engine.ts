@@ -14,8 +14,10 @@ export const benchRequirement: RequirementInput = {
   drop: { max: "100 mV" },
   readout: { kind: "adc", bits: 16, fullScale: "2.5 V" },
   resolution: { countsAtMin: 10 },
-  shunt: { series: "E192", min: "1 mohm", max: "10 kohm" },
   amplifier: { gains: { series: "E12", min: 5, max: 200 } },
+  // Issue 14's front-end terms in the inner loop: an input filter, 2-terminal pads, thermal EMF.
+  inputFilter: { resistance: "47 ohm", capacitance: "4.7 uF" },
+  shunt: { series: "E192", min: "1 mohm", max: "10 kohm", terminals: 2, padResistance: "0.2 mohm", gradient: "1 K" },
 };
 
 const median = (xs: number[]) => {
@@ -58,7 +60,9 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
     const diff = m.topology === 1;
     epsG[j] = tol === 0 ? 0 : diff ? 2 * tol : m.topology === 3 ? (tol * (g - 1)) / g : (2 * tol * (g - 1)) / g;
     cmK[j] = diff ? g / (1 + g) : 1;
-    cmErr[j] = m.topology === 2 ? 0 : m.vCm * (cmK[j] as number) * m.cmrrLin + (diff ? (m.vCm * 4 * tol) / (1 + g) : 0);
+    cmErr[j] =
+      (m.topology === 2 ? 0 : m.vCm * (cmK[j] as number) * m.cmrrLin + (diff ? (m.vCm * 4 * tol) / (1 + g) : 0)) +
+      m.fe.filterCmV / (1 + g);
   }
   const ratings = Float64Array.from(m.ratings);
   const slack = 1 + 1e-12;
@@ -68,19 +72,20 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
     // drop and current at the operating point, for the three load models
     let burden: number;
     let iOp: number;
+    const path = R + m.fe.padOhms;
     if (m.loadModel === 0) {
-      burden = m.iMax * R;
+      burden = m.iMax * path;
       iOp = m.iMax;
     } else if (m.loadModel === 1) {
-      burden = (m.vBus * R) / (m.vBus / m.iMax + R);
-      iOp = m.vBus / (m.vBus / m.iMax + R);
+      burden = (m.vBus * path) / (m.vBus / m.iMax + path);
+      iOp = m.vBus / (m.vBus / m.iMax + path);
     } else {
-      const disc = m.vBus * m.vBus - 4 * m.vBus * m.iMax * R;
+      const disc = m.vBus * m.vBus - 4 * m.vBus * m.iMax * path;
       burden = disc < 0 ? NaN : m.vBus - (m.vBus + Math.sqrt(disc)) / 2;
       iOp = disc < 0 ? NaN : (m.vBus * m.iMax) / ((m.vBus + Math.sqrt(disc)) / 2);
     }
     const dropFails =
-      !(burden <= m.dropMax * slack) || m.iMax * R > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
+      !(burden <= m.dropMax * slack) || m.iMax * path > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
     const iHeat = Number.isNaN(iOp) ? m.iMax : iOp;
     const power = iHeat * iHeat * R;
     let rating = NaN;
@@ -99,12 +104,13 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
     const b = Number.isNaN(burden) ? m.iMax * R : burden;
     const vLo = m.high ? m.vBus - b : 0;
     const vHi = m.high ? m.vBus : b;
-    const offsetBase = m.vosWorst / R + m.ib;
+    const offsetBase = (m.vosWorst + m.fe.filterBiasV + m.fe.thermalEmfV) / R + m.ib;
     const noisePerR = Math.sqrt(m.en2 + m.fourKT * R) / R;
     const heat = m.alphaR * R * theta;
-    const gainLo = m.gainConst + heat * m.bandLo * m.bandLo;
-    const gainHi = m.gainConst + heat * m.bandHi * m.bandHi;
-    const gainMin = m.gainConst + heat * m.iMin * m.iMin;
+    const gainConst = m.gainConst + m.fe.padOhmsWorst / R;
+    const gainLo = gainConst + heat * m.bandLo * m.bandLo;
+    const gainHi = gainConst + heat * m.bandHi * m.bandHi;
+    const gainMin = gainConst + heat * m.iMin * m.iMin;
     for (let j = 0; j < nG; j++) {
       const G = gains[j] as number;
       const rg = R * G;
@@ -114,7 +120,7 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
       if ((m.topology === 2 && m.high) || k * vHi > m.cmMax * slack || k * vLo < m.cmMin / slack) bits |= 2;
       const offA = offsetBase + (cmErr[j] as number) / R;
       const noiseRms = noisePerR * (sqrtNbw[j] as number);
-      const outWorst = (iOp + iOp * (m.gainConst + eps + heat * iOp * iOp) + offA + m.crest * noiseRms) * rg;
+      const outWorst = (iOp + iOp * (gainConst + eps + heat * iOp * iOp) + offA + m.crest * noiseRms) * rg;
       if (outWorst > m.outCeil * slack) bits |= 4;
       const step = Math.max(m.lsbV / rg, noiseRms);
       if (m.iMin < (m.countsAtMin / slack) * step) bits |= 8;

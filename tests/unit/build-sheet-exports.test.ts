@@ -22,7 +22,7 @@ describe("parts CSV", () => {
     ["resistor-set gain (quotes and commas in the text)", gainSet],
   ])("%s: header row, one row per part, and it parses back to the same list", (_n, view) => {
     const csv = partsCsv(view);
-    expect(csv.split("\r\n")[0]).toBe("designator,part,value,tolerance,tempco,rating,notes,value_si,unit");
+    expect(csv.split("\r\n")[0]).toBe("designator,part,value,tolerance,tempco,rating,notes,value_si,unit,code");
     const parsed = Papa.parse<Record<string, string>>(csv, { header: true, skipEmptyLines: true });
     expect(parsed.errors).toEqual([]);
     expect(parsed.meta.fields).toEqual([...csvColumns]);
@@ -40,6 +40,7 @@ describe("parts CSV", () => {
         notes: p.notes,
         value_si: p.valueSI === null ? "" : String(p.valueSI),
         unit: p.unit ?? "",
+        code: p.code ?? "",
       });
     });
     const r1 = parsed.data.find((r) => r.designator === "R1")!;

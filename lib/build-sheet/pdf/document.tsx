@@ -177,7 +177,7 @@ const partCols: {
 }[] = [
   { title: "Ref", width: "6%", key: "designator" },
   { title: "Part", width: "30%", key: "part" },
-  { title: "Value", width: "13%", key: "value" },
+  { title: "Value (IEC 60062 code)", width: "13%", key: "value" },
   { title: "Tolerance", width: "17%", key: "tolerance" },
   { title: "Tempco", width: "19%", key: "tempco" },
   { title: "Rating", width: "15%", key: "rating" },
@@ -208,6 +208,7 @@ function PartsTable({ parts }: { parts: SheetData["parts"] }) {
                   ]}
                 >
                   {p[c.key]}
+                  {c.key === "value" && p.code ? `\n${p.code}` : ""}
                 </Text>
               ))}
             </View>
