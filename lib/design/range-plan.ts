@@ -62,7 +62,7 @@ type Span = { p: number; minA: number; maxA: number };
  * The model for one range [lo, hi]: drop, output and rating at its own top, counts and dead
  * zone at its own bottom, accuracy only on the part of the accuracy band inside it.
  */
-function subModel(req: Requirement, m: Model, lo: number, hi: number): Model {
+export function subModel(req: Requirement, m: Model, lo: number, hi: number): Model {
   const bLo = Math.max(req.accuracy.bandMin, lo);
   const bHi = Math.min(req.accuracy.bandMax, hi);
   // Outside the accuracy band nothing is asked of accuracy.
