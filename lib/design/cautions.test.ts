@@ -9,9 +9,13 @@ import {
   BURNS_ON_BRIEF_TOUCH_C,
   designCautions,
   HAZARDOUS_DC_V,
+  planCautions,
   shuntTouchTemperatureC,
 } from "./cautions";
 import { req } from "./test-helpers";
+import { formatSI } from "./format";
+import { evaluatePlan } from "./plan-evaluation";
+import { solve } from "./solve";
 import type { CandidateDetail } from "./types";
 
 const logger = req({
@@ -72,5 +76,31 @@ describe("voltage", () => {
     for (const r of [logger, at("120 V", "high")]) {
       expect(keys(r, base).slice(-3)).toEqual(["fuse:note", "inductive:note", "codes:note"]);
     }
+  });
+});
+
+describe("range plan cautions (issue 13)", () => {
+  const demo = req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } });
+  const plan = solve(demo).rangePlan!;
+  const ev = evaluatePlan(demo, { ranges: plan.ranges, switchPoints: plan.switchPoints });
+  if (!ev.ok) throw new Error(ev.message);
+  const list = planCautions(demo, ev.ranges);
+  const burn = list.find((c) => c.key === "range-switch");
+
+  it("names the fault: the lowest shunt at the span's full current, by Joule's and Ohm's laws", () => {
+    const r1 = ev.ranges[0]!;
+    const ron = demo.rangeSwitch.onResistance;
+    // Joule: P = I²·R at 180 mA; Ohm: the current it carries once the drop reaches 60 mV is 60 mV/(R + Ron).
+    expect(burn?.text).toContain(formatSI(0.18 * 0.18 * r1.shuntOhms, "W"));
+    expect(burn?.text).toContain(formatSI(0.06 / (r1.shuntOhms + ron), "A"));
+    expect(burn?.text).toContain("closes Q3");
+    expect(burn?.severity).toBe("warn");
+  });
+
+  it("says what the top switch carries (I²·Ron at the full current) and keeps every build's notes", () => {
+    const heat = list.find((c) => c.key === "switch-heat");
+    expect(heat?.text).toContain(formatSI(0.18 * 0.18 * demo.rangeSwitch.onResistance, "W"));
+    expect(list.map((c) => c.key)).toEqual(expect.arrayContaining(["fuse", "inductive", "codes", "mains"]));
+    expect(list.filter((c) => c.key === "codes")).toHaveLength(1);
   });
 });

@@ -3,9 +3,11 @@
 import { REFERENCE_C } from "./model";
 import type { Requirement } from "./requirement";
 import type { CandidateDetail } from "./types";
+import type { PlannedRange } from "./range-plan";
 import { formatSI } from "./format";
 
-export type CautionKey = "hot" | "hazardous" | "common-mode" | "mains" | "fuse" | "inductive" | "codes";
+export type CautionKey =
+  "hot" | "hazardous" | "common-mode" | "mains" | "fuse" | "inductive" | "codes" | "range-switch" | "switch-heat";
 
 /** bad: a hazard this design has; warn: a hazard it may have; note: what every build needs. */
 export type Caution = { key: CautionKey; severity: "bad" | "warn" | "note"; title: string; text: string };
@@ -111,5 +113,62 @@ export function designCautions(req: Requirement, m: CandidateDetail): Caution[] 
       text: "Follow local electrical codes and your organisation's safety rules; work on mains or hazardous voltages belongs to suitably qualified, licensed people.",
     },
   );
+  return out;
+}
+
+/** What the plan cautions need of each range: its candidate figures and the plan's range figures. */
+export type PlanCautionRange = CandidateDetail & PlannedRange;
+
+/**
+ * The cautions of a range plan: the switch's own (a lower range left in circuit at the span's full
+ * current is the usual way to burn its shunt; the top switch carries the full current), each
+ * range's hot-shunt warning, then the notes every build needs, as for one range.
+ */
+export function planCautions(req: Requirement, ranges: PlanCautionRange[]): Caution[] {
+  const last = ranges.length - 1;
+  const top = ranges[last]!;
+  const iFull = req.current.max;
+  const ron = req.rangeSwitch.onResistance;
+  const lower = ranges.slice(0, -1).map((r, k) => {
+    // Without the protection the full current would flow through R + Ron (Ohm's law) as long as
+    // the supply can push it, dissipating I²·R (Joule) in the shunt.
+    const unprotectedW = iFull * iFull * r.shuntOhms;
+    return (
+      `R${k + 1} (range ${k + 1}, ${formatSI(r.shuntOhms, "Ω")}) would take ${formatSI(unprotectedW, "W")} at ${formatSI(iFull, "A")} in a ${formatSI(r.ratingW, "W")} part, ` +
+      `and ask ${formatSI(iFull * (r.shuntOhms + ron), "V")} of a ${formatSI(req.supply.voltage, "V")} supply; with the protection it carries at most ${formatSI(r.faultCurrentA, "A")} (${formatSI(r.faultCurrentA * r.faultCurrentA * r.shuntOhms, "W")})`
+    );
+  });
+  const out: Caution[] = [
+    {
+      key: "range-switch",
+      severity: "warn",
+      title: "A low range at full current burns its shunt",
+      text:
+        `The usual way to destroy a multi-range front end is a low range left in circuit when the current rises to the span's full ${formatSI(iFull, "A")}: ${lower.join("; ")}. ` +
+        `The protection is a comparator that closes Q${last + 1}, the top range's switch, in hardware when the drop reaches ${formatSI(req.drop.max, "V")}, and holds it until the switching rule takes over. ` +
+        `Test it on the bench before connecting a real load: select range 1, raise the current slowly through the range's top, and check that the drop stops at about ${formatSI(req.drop.max, "V")}. ` +
+        "Never remove Q" +
+        (last + 1) +
+        " or the comparator to save parts, and keep make-before-break switching so the load never sees an open circuit.",
+    },
+    {
+      key: "switch-heat",
+      severity: "note",
+      title: "The top range's switch carries the full current",
+      text: `Q${last + 1} carries ${formatSI(iFull, "A")} continuously: ${formatSI(iFull * iFull * ron, "W")} at its ${formatSI(ron, "Ω")} on-resistance, more when hot (a MOSFET's on-resistance rises with temperature). Choose one rated for the full current at the highest ambient, with copper area to spread its heat.`,
+    },
+  ];
+  // Each range's shunt at its own duty: the top range at full current, a lower one at its fault current.
+  ranges.forEach((r, k) => {
+    const hot = designCautions(req, r).find((c) => c.key === "hot");
+    if (hot)
+      out.push({
+        ...hot,
+        title: `Hot shunt on range ${k + 1}`,
+        text: hot.text.replace(/^At full current R1/, `At its top current R${k + 1}`),
+      });
+  });
+  // Voltage and the notes every build needs: the same as one range's (the hot one is above).
+  out.push(...designCautions(req, top).filter((c) => c.key !== "hot"));
   return out;
 }
