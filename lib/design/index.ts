@@ -40,3 +40,7 @@ export * from "./cautions";
 export * from "./profile";
 export * from "./plan-choice";
 export { evaluatePlan, type PlanEvaluation, type PlanRangeMetrics } from "./plan-evaluation";
+export * from "./plan-switching";
+export * from "./plan-netlist";
+export * from "./resistor-code";
+
