@@ -48,7 +48,8 @@ export type ReviseTarget = {
   name: string;
   project: string | null;
   requirement: Requirement;
-  choice: Choice;
+  /** The saved pair; null when the design is a range plan (the wizard then starts from its requirement). */
+  choice: Choice | null;
 };
 
 /** The saved requirement and pair, as the wizard shows them; the saved pair stays picked. */
@@ -61,8 +62,8 @@ function revisionDraft(t: ReviseTarget): Draft {
     dropMode: start.dropMode,
     gainMode: start.gainMode,
     partName: null,
-    selected: candidateKey(t.choice),
-    chosen: true,
+    selected: t.choice ? candidateKey(t.choice) : null,
+    chosen: t.choice !== null,
     pinned: [],
     name: t.name,
     project: t.project ?? "",

@@ -136,7 +136,7 @@ export function planSheetData(req: Requirement, plan: PlanChoice): PlanSheetData
     })),
     benchHowTo: planBenchHowTo(req, n),
     layout: planLayout(req, ev.ranges),
-    cautions: planCautions(req, ev.ranges).map((c) => `${c.title}: ${c.text}`),
+    cautions: planCautions(req, ev).map((c) => `${c.title}: ${c.text}`),
     metrics: ev.ranges,
   };
 }

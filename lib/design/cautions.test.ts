@@ -9,12 +9,13 @@ import {
   BURNS_ON_BRIEF_TOUCH_C,
   designCautions,
   HAZARDOUS_DC_V,
-  planCautions,
+  switchCautions,
   shuntTouchTemperatureC,
 } from "./cautions";
 import { req } from "./test-helpers";
 import { formatSI } from "./format";
 import { evaluatePlan } from "./plan-evaluation";
+import { planCautions } from "./plan-cautions";
 import { solve } from "./solve";
 import type { CandidateDetail } from "./types";
 
@@ -79,28 +80,37 @@ describe("voltage", () => {
   });
 });
 
-describe("range plan cautions (issue 13)", () => {
+describe("a range plan's switch cautions (issue 13)", () => {
   const demo = req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } });
   const plan = solve(demo).rangePlan!;
   const ev = evaluatePlan(demo, { ranges: plan.ranges, switchPoints: plan.switchPoints });
   if (!ev.ok) throw new Error(ev.message);
-  const list = planCautions(demo, ev.ranges);
-  const burn = list.find((c) => c.key === "range-switch");
+  const list = switchCautions(demo, ev.ranges);
+  const protection = list.find((c) => c.key === "range-protection");
 
-  it("names the fault: the lowest shunt at the span's full current, by Joule's and Ohm's laws", () => {
-    const r1 = ev.ranges[0]!;
+  it("names the protection and the current each lower range carries until it acts (Ohm's law at the allowed drop)", () => {
     const ron = demo.rangeSwitch.onResistance;
-    // Joule: P = I²·R at 180 mA; Ohm: the current it carries once the drop reaches 60 mV is 60 mV/(R + Ron).
-    expect(burn?.text).toContain(formatSI(0.18 * 0.18 * r1.shuntOhms, "W"));
-    expect(burn?.text).toContain(formatSI(0.06 / (r1.shuntOhms + ron), "A"));
-    expect(burn?.text).toContain("closes Q3");
-    expect(burn?.severity).toBe("warn");
+    ev.ranges.slice(0, -1).forEach((r, k) => {
+      // I = 60 mV/(R + Ron); P = I²·R (Joule).
+      const i = 0.06 / (r.shuntOhms + ron);
+      expect(protection?.text).toContain(
+        `R${k + 1} (range ${k + 1}, ${formatSI(r.shuntOhms, "Ω")}) carries at most ${formatSI(i, "A")}`,
+      );
+      expect(protection?.text).toContain(formatSI(i * i * r.shuntOhms, "W"));
+    });
+    expect(protection?.text).toContain("closes Q3");
+    expect(protection?.text).toContain("U4");
   });
 
-  it("says what the top switch carries (I²·Ron at the full current) and keeps every build's notes", () => {
+  it("says what the top switch dissipates: I²·Ron at the full current", () => {
     const heat = list.find((c) => c.key === "switch-heat");
     expect(heat?.text).toContain(formatSI(0.18 * 0.18 * demo.rangeSwitch.onResistance, "W"));
-    expect(list.map((c) => c.key)).toEqual(expect.arrayContaining(["fuse", "inductive", "codes", "mains"]));
-    expect(list.filter((c) => c.key === "codes")).toHaveLength(1);
+  });
+
+  it("the plan's cautions carry them once each, before the notes every build needs", () => {
+    const all = planCautions(demo, ev).map((c) => c.key);
+    expect(all.filter((k) => k === "range-protection")).toHaveLength(1);
+    expect(all.indexOf("range-protection")).toBeLessThan(all.indexOf("fuse"));
+    expect(all).toEqual(expect.arrayContaining(["range-switch", "switch-heat", "codes"]));
   });
 });

@@ -7,7 +7,16 @@ import type { PlannedRange } from "./range-plan";
 import { formatSI } from "./format";
 
 export type CautionKey =
-  "hot" | "hazardous" | "common-mode" | "mains" | "fuse" | "inductive" | "codes" | "range-switch" | "switch-heat";
+  | "hot"
+  | "hazardous"
+  | "common-mode"
+  | "mains"
+  | "fuse"
+  | "inductive"
+  | "codes"
+  | "range-switch"
+  | "range-protection"
+  | "switch-heat";
 
 /** bad: a hazard this design has; warn: a hazard it may have; note: what every build needs. */
 export type Caution = { key: CautionKey; severity: "bad" | "warn" | "note"; title: string; text: string };
@@ -44,7 +53,8 @@ export function shuntTouchTemperatureC(m: Pick<CandidateDetail, "selfHeatingK">)
   return REFERENCE_C + m.selfHeatingK;
 }
 
-export function designCautions(req: Requirement, m: CandidateDetail): Caution[] {
+/** `shunt` names the part in the hot-shunt caution (a range plan names the range's shunt). */
+export function designCautions(req: Requirement, m: CandidateDetail, shunt = "R1"): Caution[] {
   const out: Caution[] = [];
   const touchC = shuntTouchTemperatureC(m);
   const hottestC = req.temperature.max + m.selfHeatingK;
@@ -55,7 +65,7 @@ export function designCautions(req: Requirement, m: CandidateDetail): Caution[] 
       severity: brief ? "bad" : "warn",
       title: "Hot shunt",
       text:
-        `At full current R1 dissipates ${formatSI(m.dissipationW, "W")} (rated ${formatSI(m.ratingW, "W")}) and runs about ` +
+        `At full current ${shunt} dissipates ${formatSI(m.dissipationW, "W")} (rated ${formatSI(m.ratingW, "W")}) and runs about ` +
         `${formatSI(m.selfHeatingK, "K")} above its surroundings: about ${formatSI(touchC, "°C")} on a 25 °C bench, ` +
         `up to about ${formatSI(hottestC, "°C")} at the highest ambient. ` +
         (brief
@@ -116,59 +126,37 @@ export function designCautions(req: Requirement, m: CandidateDetail): Caution[] 
   return out;
 }
 
-/** What the plan cautions need of each range: its candidate figures and the plan's range figures. */
-export type PlanCautionRange = CandidateDetail & PlannedRange;
-
 /**
- * The cautions of a range plan: the switch's own (a lower range left in circuit at the span's full
- * current is the usual way to burn its shunt; the top switch carries the full current), each
- * range's hot-shunt warning, then the notes every build needs, as for one range.
+ * A range plan's switch, beyond the failure the plan cautions name: what the protection does for
+ * each lower range (the current it lets through before the top range's switch closes, Ohm's law
+ * at the allowed drop) and how to prove it on the bench, and the top switch's own heat (I²·Ron).
+ * Designators as on the plan's build sheet: shunts R1…Rn, switches Q1…Qn, the comparator U(n+1).
  */
-export function planCautions(req: Requirement, ranges: PlanCautionRange[]): Caution[] {
-  const last = ranges.length - 1;
-  const top = ranges[last]!;
+export function switchCautions(req: Requirement, ranges: PlannedRange[]): Caution[] {
+  const n = ranges.length;
   const iFull = req.current.max;
   const ron = req.rangeSwitch.onResistance;
-  const lower = ranges.slice(0, -1).map((r, k) => {
-    // Without the protection the full current would flow through R + Ron (Ohm's law) as long as
-    // the supply can push it, dissipating I²·R (Joule) in the shunt.
-    const unprotectedW = iFull * iFull * r.shuntOhms;
-    return (
-      `R${k + 1} (range ${k + 1}, ${formatSI(r.shuntOhms, "Ω")}) would take ${formatSI(unprotectedW, "W")} at ${formatSI(iFull, "A")} in a ${formatSI(r.ratingW, "W")} part, ` +
-      `and ask ${formatSI(iFull * (r.shuntOhms + ron), "V")} of a ${formatSI(req.supply.voltage, "V")} supply; with the protection it carries at most ${formatSI(r.faultCurrentA, "A")} (${formatSI(r.faultCurrentA * r.faultCurrentA * r.shuntOhms, "W")})`
+  const lower = ranges
+    .slice(0, -1)
+    .map(
+      (r, k) =>
+        `R${k + 1} (range ${k + 1}, ${formatSI(r.shuntOhms, "Ω")}) carries at most ${formatSI(r.faultCurrentA, "A")} (${formatSI(r.faultCurrentA * r.faultCurrentA * r.shuntOhms, "W")} in its ${formatSI(r.ratingW, "W")} part)`,
     );
-  });
-  const out: Caution[] = [
+  return [
     {
-      key: "range-switch",
+      key: "range-protection",
       severity: "warn",
-      title: "A low range at full current burns its shunt",
+      title: "What keeps a low range alive at full current",
       text:
-        `The usual way to destroy a multi-range front end is a low range left in circuit when the current rises to the span's full ${formatSI(iFull, "A")}: ${lower.join("; ")}. ` +
-        `The protection is a comparator that closes Q${last + 1}, the top range's switch, in hardware when the drop reaches ${formatSI(req.drop.max, "V")}, and holds it until the switching rule takes over. ` +
-        `Test it on the bench before connecting a real load: select range 1, raise the current slowly through the range's top, and check that the drop stops at about ${formatSI(req.drop.max, "V")}. ` +
-        "Never remove Q" +
-        (last + 1) +
-        " or the comparator to save parts, and keep make-before-break switching so the load never sees an open circuit.",
+        `U${n + 1}, a latching comparator, closes Q${n} (the top range's switch) in hardware when the drop across the path in use reaches ${formatSI(req.drop.max, "V")}; until then ${lower.join("; ")}. ` +
+        `It must act faster than the load's current can rise past range 1's top (${formatSI(ranges[0]!.maxA, "A")}). ` +
+        `Prove it on the bench before connecting a battery or a supply that can deliver ${formatSI(iFull, "A")}: select range 1, raise the current slowly past its top, and check that the drop stops at about ${formatSI(req.drop.max, "V")}. Never leave out Q${n} or U${n + 1} to save parts.`,
     },
     {
       key: "switch-heat",
       severity: "note",
       title: "The top range's switch carries the full current",
-      text: `Q${last + 1} carries ${formatSI(iFull, "A")} continuously: ${formatSI(iFull * iFull * ron, "W")} at its ${formatSI(ron, "Ω")} on-resistance, more when hot (a MOSFET's on-resistance rises with temperature). Choose one rated for the full current at the highest ambient, with copper area to spread its heat.`,
+      text: `Q${n} carries ${formatSI(iFull, "A")} continuously: ${formatSI(iFull * iFull * ron, "W")} at its ${formatSI(ron, "Ω")} on-resistance, more when hot (a MOSFET's on-resistance rises with temperature). Choose one rated for the full current at the highest ambient, with copper area to spread its heat.`,
     },
   ];
-  // Each range's shunt at its own duty: the top range at full current, a lower one at its fault current.
-  ranges.forEach((r, k) => {
-    const hot = designCautions(req, r).find((c) => c.key === "hot");
-    if (hot)
-      out.push({
-        ...hot,
-        title: `Hot shunt on range ${k + 1}`,
-        text: hot.text.replace(/^At full current R1/, `At its top current R${k + 1}`),
-      });
-  });
-  // Voltage and the notes every build needs: the same as one range's (the hot one is above).
-  out.push(...designCautions(req, top).filter((c) => c.key !== "hot"));
-  return out;
 }

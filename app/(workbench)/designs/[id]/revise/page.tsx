@@ -44,7 +44,7 @@ export default async function ReviseDesignPage({ params }: { params: Promise<{ i
           name: design.name,
           project: design.project,
           requirement: design.requirement,
-          choice: design.choice,
+          choice: design.kind === "pair" ? design.choice : null,
         }}
       />
     </div>
