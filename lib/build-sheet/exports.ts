@@ -42,7 +42,7 @@ export const csvColumns = [
   "code",
 ] as const;
 
-function csvCell(p: Part, col: (typeof csvColumns)[number]): CsvCell {
+export function csvCell(p: Part, col: (typeof csvColumns)[number]): CsvCell {
   if (col === "value_si") return p.valueSI;
   if (col === "unit") return p.unit ?? "";
   if (col === "code") return p.code ?? "";

@@ -31,3 +31,4 @@ export const farads = (v: number) => formatSI(v, "F");
 export function formatLength(m: number): string {
   return m >= 1e-3 ? `${Number((m * 1e3).toPrecision(3))} mm` : formatSI(m, "m");
 }
+export const seconds = (v: number) => formatSI(v, "s");

@@ -7,7 +7,7 @@ import type { Requirement } from "@/lib/design/requirement";
 import type { CandidateDetail, Choice } from "@/lib/design/types";
 import * as f from "./format";
 import type { Part } from "./part";
-import { iecResistorCode } from "./resistor-code";
+import { resistorCode } from "@/lib/design/resistor-code";
 
 const mm = (m: number) => f.formatLength(m);
 
@@ -77,7 +77,7 @@ export function filterParts(req: Requirement, firstR: number, firstC: number): P
     value: f.ohms(flt.resistance),
     valueSI: flt.resistance,
     unit: "ohm",
-    code: iecResistorCode(flt.resistance),
+    code: resistorCode(flt.resistance),
     tolerance: `±${f.fraction(flt.tolerance)}`,
     tempco: "100 ppm/K or better",
     rating: f.watts(0.063),

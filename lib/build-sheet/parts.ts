@@ -4,7 +4,7 @@ import { evaluateCandidate, resistorPairFor, type CandidateDetail, type Choice, 
 import * as f from "./format";
 import type { Part } from "./part";
 import { filterParts, padNote, traceShuntPart } from "./front-end-parts";
-import { iecResistorCode } from "./resistor-code";
+import { resistorCode } from "@/lib/design/resistor-code";
 
 export type { Part } from "./part";
 
@@ -37,6 +37,18 @@ export function gainResistors(req: Requirement, choice: Choice): { rfOhms: numbe
   return resistorPairFor(choice.gain, set.series, req.amplifier.topology === "difference" ? 0 : 1);
 }
 
+/** What every shunt's part row says of its tolerance, tempco and rating. */
+export function shuntPartCommon(req: Requirement, ohms: number, ratingW: number) {
+  return {
+    valueSI: ohms,
+    unit: "ohm",
+    code: resistorCode(ohms),
+    tolerance: `±${f.fraction(req.shunt.tolerance)}`,
+    tempco: `${f.ppmPerK(req.shunt.tempco)} or better`,
+    rating: f.watts(ratingW),
+  };
+}
+
 export function partsList(
   req: Requirement,
   choice: Choice,
@@ -44,87 +56,23 @@ export function partsList(
 ): Part[] {
   const a = req.amplifier;
   const s = req.shunt;
-  const high = req.supply.side === "high";
   const usedOfRating = metrics.ratingW > 0 ? metrics.dissipationW / metrics.ratingW : NaN;
   const pair = gainResistors(req, choice);
-  const diff = a.topology === "difference";
   const parts: Part[] = [
     traceShuntPart(req, choice, metrics) ?? {
+      ...shuntPartCommon(req, choice.shuntOhms, metrics.ratingW),
       designator: "R1",
       part: `Shunt resistor, ${s.series} value${kelvinAdvice(choice.shuntOhms) === "part" ? ", 4-terminal" : ""}`,
       value: f.ohms(choice.shuntOhms),
-      valueSI: choice.shuntOhms,
-      unit: "ohm",
-      code: iecResistorCode(choice.shuntOhms),
-      tolerance: `±${f.fraction(s.tolerance)}`,
-      tempco: `${f.ppmPerK(s.tempco)} or better`,
-      rating: f.watts(metrics.ratingW),
       notes:
         `Dissipates ${f.watts(metrics.dissipationW)} at the maximum current, ${f.fraction(usedOfRating)} of its rating ` +
         `(derating ${f.fraction(s.derating)}: use at most that share of the rating); self-heating about ${f.kelvin(metrics.selfHeatingK)}. ` +
         (padNote(req) ?? kelvinAdviceText(choice.shuntOhms)) +
         ".",
     },
-    {
-      designator: "U1",
-      part: diff
-        ? "Precision op-amp, difference stage (zero-drift)"
-        : pair
-          ? "Precision amplifier, non-inverting stage (zero-drift op-amp or instrumentation amplifier)"
-          : "Current-sense amplifier, fixed gain",
-      value: `Gain ${f.gain(choice.gain)}`,
-      valueSI: choice.gain,
-      unit: "V/V",
-      code: null,
-      tolerance: `gain error at most ${f.fraction(a.gainError)}`,
-      tempco: `gain drift at most ${f.ppmPerK(a.gainDrift)}`,
-      rating: `supply ${f.volts(a.supply)}`,
-      notes:
-        `Offset at most ${f.volts(a.offset)} (drift at most ${f.volts(a.offsetDrift)}/K); bias current at most ${f.amps(a.biasCurrent)}; ` +
-        `noise at most ${f.noiseDensity(a.noiseDensity)}; gain-bandwidth at least ${f.hertz(a.gbw)} (bandwidth ${f.hertz(metrics.bandwidthHz)} at this gain); ` +
-        `output swings to within ${f.volts(a.swingLow)} of ground and ${f.volts(a.swingHigh)} of its supply; CMRR at least ${f.decibels(a.cmrrDb)}; ` +
-        (high
-          ? `input common-mode range must include ${f.volts(req.supply.voltage)} (high side: both inputs sit at the supply).`
-          : "input common-mode range must include 0 V (low side: both inputs sit at ground)."),
-    },
+    amplifierPart(req, { designator: "U1", gain: choice.gain, bandwidthHz: metrics.bandwidthHz }),
   ];
-  if (pair) {
-    const note = diff
-      ? "Difference stage, G = R2/R3 = R4/R5: R3 from the − sense line to U1's − input, R2 from there to the output; R5 from the + sense line to U1's + input, R4 from there to ground. Same type for all four so they track (common practice, no source)."
-      : "Sets the gain with R3 (G = 1 + R2/R3); 0.1 % and 25 ppm/K or better, same type for both so their drift tracks (common practice, no source).";
-    const tol = `±${f.fraction(req.amplifier.gainSet!.tolerance)}`;
-    parts.push(
-      {
-        designator: "R2",
-        part: `Feedback resistor, ${req.amplifier.gainSet!.series} value`,
-        value: f.ohms(pair.rfOhms),
-        valueSI: pair.rfOhms,
-        unit: "ohm",
-        code: iecResistorCode(pair.rfOhms),
-        tolerance: tol,
-        tempco: "25 ppm/K or better",
-        rating: f.watts(0.063),
-        notes: note,
-      },
-      {
-        designator: "R3",
-        part: `Gain resistor, ${req.amplifier.gainSet!.series} value`,
-        value: f.ohms(pair.rgOhms),
-        valueSI: pair.rgOhms,
-        unit: "ohm",
-        code: iecResistorCode(pair.rgOhms),
-        tolerance: tol,
-        tempco: "25 ppm/K or better",
-        rating: f.watts(0.063),
-        notes: "Pairs with R2; place both next to U1.",
-      },
-    );
-    if (diff)
-      parts.push(
-        { ...parts[parts.length - 2]!, designator: "R4", notes: "Matches R2: from U1's + input to ground." },
-        { ...parts[parts.length - 1]!, designator: "R5", notes: "Matches R3: from the + sense line to U1's + input." },
-      );
-  }
+  if (pair) parts.push(...gainPairParts(req, pair, { rf: "R2", rg: "R3", amplifier: "U1", rf2: "R4", rg2: "R5" }));
   const nextR = parts.filter((p) => p.designator.startsWith("R")).length + 1;
   parts.push(...filterParts(req, nextR, 2));
   parts.push(
@@ -154,6 +102,91 @@ export function partsList(
     },
   );
   return parts;
+}
+
+/**
+ * An amplifier's part row: its gain, and the figures the requirement asks of it. `lead` opens the
+ * notes (what it is wired to); `forWhat` names what it serves in the part's name (", range 2").
+ */
+export function amplifierPart(
+  req: Requirement,
+  o: { designator: string; gain: number; bandwidthHz: number; forWhat?: string; lead?: string },
+): Part {
+  const a = req.amplifier;
+  const forWhat = o.forWhat ?? "";
+  return {
+    designator: o.designator,
+    part:
+      a.topology === "difference"
+        ? `Precision op-amp${forWhat}, difference stage (zero-drift)`
+        : a.gainSet
+          ? `Precision amplifier${forWhat}, non-inverting stage (zero-drift op-amp or instrumentation amplifier)`
+          : `Current-sense amplifier${forWhat}, fixed gain`,
+    value: `Gain ${f.gain(o.gain)}`,
+    valueSI: o.gain,
+    unit: "V/V",
+    code: null,
+    tolerance: `gain error at most ${f.fraction(a.gainError)}`,
+    tempco: `gain drift at most ${f.ppmPerK(a.gainDrift)}`,
+    rating: `supply ${f.volts(a.supply)}`,
+    notes:
+      (o.lead ?? "") +
+      `Offset at most ${f.volts(a.offset)} (drift at most ${f.volts(a.offsetDrift)}/K); bias current at most ${f.amps(a.biasCurrent)}; ` +
+      `noise at most ${f.noiseDensity(a.noiseDensity)}; gain-bandwidth at least ${f.hertz(a.gbw)} (bandwidth ${f.hertz(o.bandwidthHz)} at this gain); ` +
+      `output swings to within ${f.volts(a.swingLow)} of ground and ${f.volts(a.swingHigh)} of its supply; CMRR at least ${f.decibels(a.cmrrDb)}; ` +
+      (req.supply.side === "high"
+        ? `input common-mode range must include ${f.volts(req.supply.voltage)} (high side: both inputs sit at the supply).`
+        : "input common-mode range must include 0 V (low side: both inputs sit at ground)."),
+  };
+}
+
+/**
+ * The resistors that set a stage's gain: G = 1 + Rf/Rg for a non-inverting stage; for a difference
+ * stage G = Rf/Rg with a matched second pair (designators `rf2`, `rg2`) on the + input.
+ */
+export function gainPairParts(
+  req: Requirement,
+  pair: { rfOhms: number; rgOhms: number },
+  d: { rf: string; rg: string; amplifier: string; rf2?: string; rg2?: string },
+): Part[] {
+  const set = req.amplifier.gainSet;
+  const diff = req.amplifier.topology === "difference";
+  const common = {
+    unit: "ohm",
+    tolerance: `±${f.fraction(set?.tolerance ?? 0.001)}`,
+    tempco: "25 ppm/K or better",
+    rating: f.watts(0.063),
+  };
+  const note = diff
+    ? `Difference stage, G = ${d.rf}/${d.rg}: ${d.rg} from the − sense line to ${d.amplifier}'s − input, ${d.rf} from there to the output; the matched pair on the + input to the zero level. Same type for all four so they track (common practice, no source).`
+    : `Sets the gain with ${d.rg} (G = 1 + ${d.rf}/${d.rg}); same type for both so their drift tracks (common practice, no source).`;
+  const rf: Part = {
+    ...common,
+    designator: d.rf,
+    part: `Feedback resistor, ${set?.series ?? ""} value`,
+    value: f.ohms(pair.rfOhms),
+    valueSI: pair.rfOhms,
+    code: resistorCode(pair.rfOhms),
+    notes: note,
+  };
+  const rg: Part = {
+    ...common,
+    designator: d.rg,
+    part: `Gain resistor, ${set?.series ?? ""} value`,
+    value: f.ohms(pair.rgOhms),
+    valueSI: pair.rgOhms,
+    code: resistorCode(pair.rgOhms),
+    notes: `Pairs with ${d.rf}; place both next to ${d.amplifier}.`,
+  };
+  if (!diff) return [rf, rg];
+  const rf2 = d.rf2 ?? `${d.rf}b`;
+  const rg2 = d.rg2 ?? `${d.rg}b`;
+  return [
+    rf,
+    rg,
+    { ...rf, designator: rf2, notes: `Matches ${d.rf}: from ${d.amplifier}'s + input to the zero level (ground).` },
+    { ...rg, designator: rg2, notes: `Matches ${d.rg}: from the + sense line to ${d.amplifier}'s + input.` },
+  ];
 }
 
 export function readoutText(req: Requirement): string {
