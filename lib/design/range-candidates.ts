@@ -1,7 +1,7 @@
 // Adjusting a proposed range plan: the pairs one range could use on its own sub-span, and
 // moving a switch point. Whether the adjusted plan is sound stays evaluatePlan's call.
 import { buildModel, operatingBurden, resolvableStepA } from "./model";
-import { pairMask } from "./pair";
+import { pairMask, reasonsOf, type RejectReason } from "./pair";
 import type { PlanChoice, PlanRangeChoice } from "./plan-choice";
 import { rangeScore, subModel, SWITCH_DOWN_FRACTION, type RangePlan } from "./range-plan";
 import type { Requirement } from "./requirement";
@@ -32,8 +32,11 @@ export type RangeCandidates = {
   feasibleCount: number;
   /** The best feasible pairs, ranked as the plan's own pick is. */
   candidates: RangeCandidate[];
-  /** The pair the range has now, with its figures (feasible or not) and its place in the ranking (null: not feasible). */
-  current: RangeCandidate & { rank: number | null };
+  /**
+   * The pair the range has now, with its figures (feasible or not), its place in the ranking
+   * (null: not feasible) and the constraints it fails on this sub-span.
+   */
+  current: RangeCandidate & { rank: number | null; reasons: RejectReason[] };
 };
 
 /** Default number of pairs listed per range: enough to choose from, short enough to read on a phone. */
@@ -90,8 +93,12 @@ export function rangeCandidates(
   const own = pairMask(sub, range.shuntOhms, range.gain);
   const current =
     at >= 0
-      ? { ...(ranked[at] as RangeCandidate), rank: at + 1 }
-      : { ...figures(range.shuntOhms, range.gain, own.errMinRatio, own.mask === 0), rank: null };
+      ? { ...(ranked[at] as RangeCandidate), rank: at + 1, reasons: [] }
+      : {
+          ...figures(range.shuntOhms, range.gain, own.errMinRatio, own.mask === 0),
+          rank: null,
+          reasons: reasonsOf(own.mask),
+        };
   return {
     rangeIndex: k,
     minA: range.minA,
