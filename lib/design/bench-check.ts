@@ -1,6 +1,6 @@
 // Expected readings for a bench check of the built front end (the build sheet's table).
 import { errorAtWith } from "./error-budget";
-import { buildModel } from "./model";
+import { buildModel, type Model } from "./model";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
 
@@ -19,8 +19,17 @@ export function benchCheck(req: Requirement, choice: Choice): BenchCheckRow[] {
     { label: "50 % of maximum current", currentA: 0.5 * max },
     { label: "Maximum current", currentA: max },
   );
+  return benchCheckAt(req, buildModel(req), choice, points);
+}
+
+/** Bench rows at the given currents on a given model (one range's sub-span of a plan, or the whole span). */
+export function benchCheckAt(
+  req: Requirement,
+  m: Model,
+  choice: Choice,
+  points: { label: string; currentA: number }[],
+): BenchCheckRow[] {
   const tz = choice.shuntOhms * choice.gain;
-  const m = buildModel(req);
   return points.map(({ label, currentA }) => {
     const { worstA } = errorAtWith(req, m, choice, currentA);
     // The band stops where the output can go: no lower than the amplifier's lowest output, no

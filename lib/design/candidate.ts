@@ -46,13 +46,22 @@ export function candidateFigures(m: Model, R: number, G: number): Candidate {
 }
 
 export function evaluateCandidate(req: Requirement, choice: Choice): CandidateDetail {
-  const m = buildModel(req);
+  return candidateDetailWith(req, buildModel(req), choice);
+}
+
+/**
+ * A pair's full figures on a given model: the requirement's own, or one range's sub-span of a
+ * range plan (its switch in series, so the load voltage counts it; the typical current only
+ * when it falls inside the span).
+ */
+export function candidateDetailWith(req: Requirement, m: Model, choice: Choice): CandidateDetail {
   const { shuntOhms: R, gain: G } = choice;
   const base = candidateFigures(m, R, G);
   const sf = shuntFigures(m, R);
-  const burdenOp = operatingBurden(m, R);
+  const burdenOp = operatingBurden(m, R + m.switchOhms);
   const pct = (I: number) => errorAtWith(req, m, choice, I).worstPercent;
-  const typical = req.current.typical;
+  const t = req.current.typical;
+  const typical = t !== undefined && t >= m.iMin && t <= m.iMax ? t : undefined;
   return {
     ...base,
     loadVoltageV: Number.isNaN(burdenOp) ? 0 : m.vBus - burdenOp,
@@ -72,10 +81,14 @@ export function evaluateCandidate(req: Requirement, choice: Choice): CandidateDe
 
 /** Whether the pair is one the requirement's sweep examines. */
 export function isInSweep(req: Requirement, choice: Choice): boolean {
-  const { shuntOhms: R, gain: G } = choice;
-  if (!Number.isFinite(R) || !Number.isFinite(G)) return false;
-  const valueHit = seriesValues(req.shunt.series, req.shunt.min, req.shunt.max).some(
-    (v) => Math.abs(v - R) <= 1e-9 * v,
-  );
-  return valueHit && req.amplifier.gains.some((g) => Math.abs(g - G) <= 1e-9 * g);
+  return shuntInSweep(req, choice.shuntOhms) && gainInSweep(req, choice.gain);
+}
+
+export function shuntInSweep(req: Requirement, R: number): boolean {
+  if (!Number.isFinite(R)) return false;
+  return seriesValues(req.shunt.series, req.shunt.min, req.shunt.max).some((v) => Math.abs(v - R) <= 1e-9 * v);
+}
+
+export function gainInSweep(req: Requirement, G: number): boolean {
+  return Number.isFinite(G) && req.amplifier.gains.some((g) => Math.abs(g - G) <= 1e-9 * g);
 }

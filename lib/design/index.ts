@@ -39,3 +39,4 @@ export * from "./calibrated-accuracy";
 export * from "./cautions";
 export * from "./profile";
 export * from "./plan-choice";
+export { evaluatePlan, type PlanEvaluation, type PlanRangeMetrics } from "./plan-evaluation";

@@ -212,27 +212,11 @@ export function planRanges(req: Requirement, m: Model, sw: SweepArrays): RangePl
   spans ??= greedyPlan(req, m, sw);
   if (!spans) return null;
   const nG = sw.gains.length;
-  const ron = req.rangeSwitch.onResistance;
   const ranges: PlannedRange[] = spans.map(({ p, minA, maxA }, k) => {
     const i = Math.floor(p / nG);
     const R = sw.values[i] as number;
     const G = sw.gains[p - i * nG] as number;
-    const sub = subModel(req, m, minA, maxA);
-    const top = k === spans.length - 1;
-    const fault = top ? maxA : m.dropMax / (R + ron);
-    return {
-      minA,
-      maxA,
-      shuntOhms: R,
-      gain: G,
-      burdenAtTopV: maxA * R,
-      switchOhms: ron,
-      worstBurdenV: operatingBurden(sub, R + ron),
-      faultCurrentA: fault,
-      ratingW: ratingFor(sub, fault * fault * R) || largestRating(sub),
-      countsAtBottom: minA / resolvableStepA(sub, R, G),
-      settlingS: settlingTime(req, m, G),
-    };
+    return plannedRange(req, m, { minA, maxA, shuntOhms: R, gain: G }, k === spans.length - 1);
   });
   const switchPoints = ranges.slice(0, -1).map((r) => ({ upA: r.maxA, downA: SWITCH_DOWN_FRACTION * r.maxA }));
   const pointsText = switchPoints
@@ -254,8 +238,34 @@ export function planRanges(req: Requirement, m: Model, sw: SweepArrays): RangePl
   };
 }
 
+/** One range's figures on its own sub-span; `top` is the range that carries the span's full current. */
+export function plannedRange(
+  req: Requirement,
+  m: Model,
+  r: { minA: number; maxA: number; shuntOhms: number; gain: number },
+  top: boolean,
+): PlannedRange {
+  const { minA, maxA, shuntOhms: R, gain: G } = r;
+  const ron = req.rangeSwitch.onResistance;
+  const sub = subModel(req, m, minA, maxA);
+  const fault = top ? maxA : m.dropMax / (R + ron);
+  return {
+    minA,
+    maxA,
+    shuntOhms: R,
+    gain: G,
+    burdenAtTopV: maxA * R,
+    switchOhms: ron,
+    worstBurdenV: operatingBurden(sub, R + ron),
+    faultCurrentA: fault,
+    ratingW: ratingFor(sub, fault * fault * R) || largestRating(sub),
+    countsAtBottom: minA / resolvableStepA(sub, R, G),
+    settlingS: settlingTime(req, m, G),
+  };
+}
+
 /** How the lower ranges survive the span's full current, and what the protecting element carries. */
-function protectionText(req: Requirement, m: Model, ranges: PlannedRange[]): string {
+export function protectionText(req: Requirement, m: Model, ranges: PlannedRange[]): string {
   const topRange = ranges[ranges.length - 1] as PlannedRange;
   const lower = ranges.slice(0, -1);
   const ron = req.rangeSwitch.onResistance;
