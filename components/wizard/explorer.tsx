@@ -174,10 +174,7 @@ export function Explorer({
   useEffect(() => {
     if (req && planShown) check(req, planShown);
   }, [req, planShown, check]);
-  const planTexts = useMemo(
-    () => (proposal ? [proposal.switchOver, proposal.adds, proposal.protection] : []),
-    [proposal],
-  );
+  const planTexts = useMemo(() => (proposal ? [proposal.adds] : []), [proposal]);
   const planSlot = useMemo(
     () =>
       planShown ? (

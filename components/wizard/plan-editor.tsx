@@ -40,7 +40,7 @@ export function PlanEditor({
   edited: boolean;
   onReset: () => void;
   check: PlanCheckState;
-  /** The engine's words on its own proposal (switching rule, what the switch adds, protection). */
+  /** The engine's further words on its own proposal (what the switch adds, settling). */
   proposalTexts: string[];
 }) {
   const status = planStatus(check, plan);
@@ -96,6 +96,14 @@ export function PlanEditor({
             </div>
             <PlanCurveLegend curves={checked.curves} />
           </div>
+        )}
+        {checked?.verdict.sound && (
+          <>
+            <p className="text-ink-muted" data-testid="plan-switch-rule">
+              {checked.verdict.switchRule}
+            </p>
+            <p className="text-ink-muted">{checked.verdict.protection}</p>
+          </>
         )}
         {!edited &&
           proposalTexts.map((t) => (

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { evaluatePlan } from "./plan-evaluation";
 import { moveSwitchPoint, planChoiceOf, rangeCandidates, withRangePair } from "./range-candidates";
 import { solve } from "./solve";
 import { req } from "./test-helpers";
@@ -113,5 +114,25 @@ describe("adjusting a plan", () => {
     // On its own sub-span the picked pair is listed, at its rank.
     const after = rangeCandidates(logger, next, 1);
     expect(after.current.rank).toBe(c.candidates.indexOf(other!) + 1);
+  });
+
+  it("every adjustment goes back through evaluatePlan: a moved switch point, a refusal, and the pair that mends it", () => {
+    expect(evaluatePlan(logger, plan).ok).toBe(true);
+    const down = moveSwitchPoint(plan, 0, 100e-6);
+    expect(down.ok && evaluatePlan(logger, down.plan).ok).toBe(true);
+    const moved = moveSwitchPoint(plan, 0, 300e-6);
+    if (!moved.ok) throw new Error(moved.message);
+    const low = plan.ranges[0]!;
+    // Ohm's law times the gain: 300 µA through the low range's pair would ask for volts more than
+    // the 2.5 V full scale (DEFAULTS.md readout) can show.
+    expect(300e-6 * low.shuntOhms * low.gain).toBeGreaterThan(2.5);
+    const refused = evaluatePlan(logger, moved.plan);
+    expect(refused).toMatchObject({ ok: false, rangeIndex: 0, path: "plan.ranges.0" });
+    // Range 1's best pair on its new stretch, 3 µA to 300 µA, mends it.
+    const best = rangeCandidates(logger, moved.plan, 0).candidates[0]!;
+    expect(300e-6 * best.shuntOhms * best.gain).toBeLessThanOrEqual(2.5);
+    const mended = evaluatePlan(logger, withRangePair(moved.plan, 0, best));
+    expect(mended.ok).toBe(true);
+    if (mended.ok) expect(mended.ranges[0]!.maxA).toBe(300e-6);
   });
 });

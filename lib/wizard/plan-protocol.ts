@@ -8,7 +8,8 @@ import type { Requirement } from "@/lib/design/requirement";
 export type PlanCheckRequest = { id: number; requirement: Requirement; plan: PlanChoice };
 
 /** The engine's word on a plan: sound, or refused with the field at fault and why. */
-export type PlanVerdict = { sound: true } | { sound: false; path: string; message: string };
+export type PlanVerdict =
+  { sound: true; switchRule: string; protection: string } | { sound: false; path: string; message: string };
 
 export type PlanCheckReply =
   | { id: number; ok: true; verdict: PlanVerdict; candidates: RangeCandidates[]; curves: PlanCurves }

@@ -1,20 +1,13 @@
-// The engine's verdict on an adjusted plan, worded for the wizard beside Save.
-import { formatSI } from "@/lib/design/format";
-import { rejectReasonLabels } from "@/lib/design/pair";
+// The engine's verdict on an adjusted plan (evaluatePlan, the same check the server makes on
+// save), in the shape the wizard shows beside Save.
 import type { PlanChoice } from "@/lib/design/plan-choice";
-import type { RangeCandidates } from "@/lib/design/range-candidates";
+import { evaluatePlan } from "@/lib/design/plan-evaluation";
 import type { Requirement } from "@/lib/design/requirement";
 import type { PlanVerdict } from "./plan-protocol";
 
-export function planVerdict(_req: Requirement, plan: PlanChoice, candidates: RangeCandidates[]): PlanVerdict {
-  for (const [k, c] of candidates.entries()) {
-    if (c.current.feasible) continue;
-    const r = plan.ranges[k]!;
-    return {
-      sound: false,
-      path: `ranges.${k}`,
-      message: `Range ${k + 1} (${formatSI(r.shuntOhms, "Ω")} × ${Number(r.gain.toPrecision(4))}) does not work on its own stretch, ${formatSI(r.minA, "A")} to ${formatSI(r.maxA, "A")}: ${c.current.reasons.map((x) => rejectReasonLabels[x].toLowerCase()).join("; ")}.`,
-    };
-  }
-  return { sound: true };
+export function planVerdict(req: Requirement, plan: PlanChoice): PlanVerdict {
+  const e = evaluatePlan(req, plan);
+  return e.ok
+    ? { sound: true, switchRule: e.switchRule, protection: e.protection }
+    : { sound: false, path: e.path, message: e.message };
 }

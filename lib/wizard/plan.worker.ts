@@ -15,7 +15,7 @@ self.addEventListener("message", (event: MessageEvent<PlanCheckRequest>) => {
     post({
       id,
       ok: true,
-      verdict: planVerdict(requirement, plan, candidates),
+      verdict: planVerdict(requirement, plan),
       candidates,
       curves: planCurves(requirement, plan),
     });
