@@ -3,6 +3,7 @@
 import { sql } from "drizzle-orm";
 import {
   boolean,
+  check,
   customType,
   date,
   doublePrecision,
@@ -17,7 +18,7 @@ import {
   uuid,
 } from "drizzle-orm/pg-core";
 // The engine's types for the JSON columns (types only: db/ takes no behaviour from lib/).
-import type { CandidateDetail, Choice, Requirement } from "@/lib/design";
+import type { CandidateDetail, Choice, PlanChoice, PlanMetrics, Requirement } from "@/lib/design";
 import type { ProfileSummary } from "@/lib/design/profile";
 
 export const roleEnum = pgEnum("role", ["owner", "designer", "reviewer", "maker"]);
@@ -144,14 +145,20 @@ export const designRevisions = pgTable(
     revision: integer("revision").notNull(),
     name: text("name").notNull(),
     requirement: jsonb("requirement").$type<Requirement>().notNull(),
-    choice: jsonb("choice").$type<Choice>().notNull(),
-    metrics: jsonb("metrics").$type<CandidateDetail>().notNull(),
+    // Exactly one of the two: a single shunt and gain, or a range plan (the check below).
+    choice: jsonb("choice").$type<Choice>(),
+    plan: jsonb("plan").$type<PlanChoice>(),
+    // The engine's figures of whichever is set: a pair's, or { ranges: [...] } for a plan.
+    metrics: jsonb("metrics").$type<CandidateDetail | PlanMetrics>().notNull(),
     authorId: uuid("author_id")
       .notNull()
       .references(() => users.id),
     createdAt: createdAt(),
   },
-  (t) => [uniqueIndex("design_revisions_design_revision").on(t.designId, t.revision)],
+  (t) => [
+    uniqueIndex("design_revisions_design_revision").on(t.designId, t.revision),
+    check("design_revisions_choice_or_plan", sql`(${t.choice} is null) <> (${t.plan} is null)`),
+  ],
 );
 
 export const reviews = pgTable(

@@ -1,5 +1,5 @@
 // What a saved design looks like to the screens: one shape shared by the design page's sections.
-import type { CandidateDetail, Choice, Requirement } from "@/lib/design";
+import type { DesignKind, Requirement } from "@/lib/design";
 import type { DesignStatus } from "@/db/schema";
 import { can, leadsWithBuildSheet, type PolicyCaller } from "@/lib/auth/policy";
 
@@ -9,15 +9,23 @@ export type RevisionSummary = {
   createdAt: string; // ISO
 };
 
-export type DesignView = {
+/**
+ * A saved design as the screens see it. `kind` tells the two apart: a pair has `choice` and a
+ * pair's `metrics` (CandidateDetail); a range plan has `plan` and `metrics.ranges[k]` (each range's
+ * figures on its own sub-span with its bench rows), `metrics.switchRule` and `metrics.protection`.
+ */
+export type DesignView = DesignViewBase & DesignKind;
+
+export type PlanDesignView = Extract<DesignView, { kind: "plan" }>;
+export type PairDesignView = Extract<DesignView, { kind: "pair" }>;
+
+type DesignViewBase = {
   id: string;
   name: string;
   project: string | null;
   status: DesignStatus;
   revision: number;
   requirement: Requirement; // normalized, SI
-  choice: Choice;
-  metrics: CandidateDetail; // the engine's figures at the time of the revision
   authorId: string; // author of the current revision
   authorName: string;
   updatedAt: string; // ISO

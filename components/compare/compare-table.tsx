@@ -11,6 +11,7 @@ import {
   requirementFields,
   type FieldInfo,
 } from "@/lib/saved-designs/figures";
+import { planRows, planWholeSpanFigures } from "@/lib/saved-designs/plan-compare";
 import { CompareVerdict } from "./compare-verdict";
 import { seriesColours } from "./colours";
 
@@ -188,11 +189,14 @@ export function CompareTable({
             )}
             mark={false}
           />
+          {designs.some((d) => d.kind === "plan") && (
+            <Section title="Ranges (a single pair is one range)" list={planRows(designs)} mark={false} />
+          )}
           <Section
             title="Figures (from the engine, at each design's own requirement)"
             list={rows(
               metricFields,
-              designs.map((d) => d.metrics),
+              designs.map((d) => (d.kind === "plan" ? planWholeSpanFigures(d.metrics) : d.metrics)),
             )}
             mark
             requirements={designs.map((d) => d.requirement)}

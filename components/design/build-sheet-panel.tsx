@@ -1,4 +1,4 @@
-import type { DesignView, DesignViewer } from "@/lib/design-view";
+import type { PairDesignView as DesignView, DesignViewer } from "@/lib/design-view";
 import { benchHowTo, benchRows, cautions } from "@/lib/build-sheet/sheet-data";
 import { matchLibraryParts, nameLibraryParts, type LibraryParts } from "@/lib/build-sheet/library-parts";
 import { partsList } from "@/lib/build-sheet/parts";

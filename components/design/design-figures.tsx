@@ -1,6 +1,6 @@
 "use client";
 // The saved requirement, the choice, every figure and the charts of one design revision.
-import type { DesignView } from "@/lib/design-view";
+import type { PairDesignView as DesignView } from "@/lib/design-view";
 import { CandidateStudy } from "@/components/candidates/candidate-study";
 import { Panel } from "@/components/ui/panel";
 import { RequirementSummary } from "@/components/wizard/requirement-summary";

@@ -8,6 +8,7 @@ import Link from "next/link";
 import { usePathname, useRouter, useSearchParams } from "next/navigation";
 import { useCallback, useEffect, useMemo, useState } from "react";
 import { StatusBadge } from "@/components/review/status-badge";
+import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { formatSI } from "@/lib/design/format";
 import {
@@ -201,6 +202,11 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
                     <Link href={`/designs/${d.id}`} className="font-medium text-ink underline-offset-2 hover:underline">
                       {d.name}
                     </Link>
+                    {d.planRanges ? (
+                      <span className="ml-1.5" data-testid="range-plan-badge">
+                        <Badge tone="signal">range plan · {d.planRanges} ranges</Badge>
+                      </span>
+                    ) : null}
                     <span className="block text-xs text-ink-muted md:hidden">{d.project ?? "no project"}</span>
                   </td>
                   <td className="hidden max-w-xs px-3 py-1.5 [overflow-wrap:anywhere] md:table-cell">
@@ -213,7 +219,9 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
                   <td className="hidden whitespace-nowrap px-3 py-1.5 num md:table-cell">
                     {d.shuntOhms !== undefined && d.gain !== undefined && d.shuntOhms !== null && d.gain !== null
                       ? `${formatSI(d.shuntOhms, "Ω")} × ${Number(d.gain.toPrecision(4))}`
-                      : "—"}
+                      : d.planRanges
+                        ? `${d.planRanges} ranges`
+                        : "—"}
                   </td>
                   <td className="hidden whitespace-nowrap px-3 py-1.5 lg:table-cell">{d.authorName}</td>
                   <td className="whitespace-nowrap px-3 py-1.5 num">

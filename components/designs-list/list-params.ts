@@ -12,8 +12,11 @@ export type DesignRow = {
   revision: number;
   updatedAt: string;
   authorName: string;
-  shuntOhms?: number;
-  gain?: number;
+  /** A single pair's shunt and gain (null on a range plan). */
+  shuntOhms?: number | null;
+  gain?: number | null;
+  /** How many ranges a range plan has (null on a single pair). */
+  planRanges?: number | null;
 };
 
 export type DesignsPage = { designs: DesignRow[]; nextCursor: string | null };

@@ -1,21 +1,23 @@
 import Link from "next/link";
-import { choiceFields, requirementFields } from "@/lib/saved-designs/figures";
+import { choiceFields, planFieldInfo, requirementFields } from "@/lib/saved-designs/figures";
 import { formatWhen } from "@/lib/saved-designs/when";
 
-/** "choice.shuntOhms" → "shunt", "requirement.current.max" → "maximum current". */
+/** "choice.shuntOhms" → "shunt", "requirement.current.max" → "maximum current", "plan.ranges.1.gain" → "range 2, gain". */
 function changedLabel(path: string): string {
   const [group, ...rest] = path.split(".");
   const key = rest.join(".");
   const label =
     group === "choice"
       ? choiceFields[key]?.label
-      : group === "requirement"
-        ? requirementFields[key]?.label
-        : path === "name"
-          ? "Name"
-          : path === "project"
-            ? "Project"
-            : undefined;
+      : group === "plan"
+        ? planFieldInfo(key)?.label
+        : group === "requirement"
+          ? requirementFields[key]?.label
+          : path === "name"
+            ? "Name"
+            : path === "project"
+              ? "Project"
+              : undefined;
   return (label ?? path).toLowerCase();
 }
 

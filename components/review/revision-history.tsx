@@ -9,7 +9,13 @@ import { formatWhen } from "@/lib/saved-designs/when";
 
 const narrowSelect = "rounded border border-line bg-panel px-2 py-1 text-sm num focus:border-copper focus:outline-none";
 
-const groupNames = { design: "Design", requirement: "Requirement", choice: "Choice", figures: "Figures" } as const;
+const groupNames = {
+  design: "Design",
+  requirement: "Requirement",
+  choice: "Choice",
+  plan: "Range plan",
+  figures: "Figures",
+} as const;
 
 /** Every saved revision, and what changed between any two of them. */
 export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) {
@@ -39,8 +45,22 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
                 <td className="py-1 pr-3">{r.revision}</td>
                 <td className="py-1 pr-3">{r.authorName}</td>
                 <td className="py-1 pr-3 text-xs text-ink-muted">{formatWhen(r.createdAt)}</td>
-                <td className="whitespace-nowrap py-1 pr-3 text-right">{formatSI(r.choice.shuntOhms, "Ω")}</td>
-                <td className="whitespace-nowrap py-1 pr-3 text-right">{formatSI(r.choice.gain, "")}</td>
+                {r.kind === "plan" ? (
+                  <>
+                    {/* A plan: its shunts and gains, lowest range first. */}
+                    <td className="py-1 pr-3 text-right" title={`A range plan of ${r.plan.ranges.length} ranges`}>
+                      {r.plan.ranges.map((x) => formatSI(x.shuntOhms, "Ω")).join(" · ")}
+                    </td>
+                    <td className="py-1 pr-3 text-right">
+                      {r.plan.ranges.map((x) => formatSI(x.gain, "")).join(" · ")}
+                    </td>
+                  </>
+                ) : (
+                  <>
+                    <td className="whitespace-nowrap py-1 pr-3 text-right">{formatSI(r.choice.shuntOhms, "Ω")}</td>
+                    <td className="whitespace-nowrap py-1 pr-3 text-right">{formatSI(r.choice.gain, "")}</td>
+                  </>
+                )}
                 <td className="py-1 text-xs">
                   {r.approval ? (
                     <span className="flex flex-col items-start gap-0.5" title={formatWhen(r.approval.at)}>

@@ -66,8 +66,9 @@ describe("design revisions", () => {
     expect(created).toMatchObject({ revision: 1, status: "draft" });
     const view = await getDesignView(created.id, teamId);
     expect(view?.revision).toBe(1);
-    expect(view?.metrics.burdenV).toBeCloseTo(0.18 * 0.274, 12); // Ohm's law: 180 mA through 274 mΩ
-    expect(view?.metrics.feasible).toBe(true);
+    if (view?.kind !== "pair") throw new Error("expected a single-pair design");
+    expect(view.metrics.burdenV).toBeCloseTo(0.18 * 0.274, 12); // Ohm's law: 180 mA through 274 mΩ
+    expect(view.metrics.feasible).toBe(true);
   });
 
   it("writes revision 2 for the current revision and refuses the stale one, writing nothing", async () => {

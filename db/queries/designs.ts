@@ -3,7 +3,7 @@
 import { and, asc, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { z } from "zod";
-import { parseRequirement, type CandidateDetail, type Choice, type Requirement } from "@/lib/design";
+import { designKindOf, parseRequirement, type DesignKind, type Requirement } from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
 import { getDb, type Tx } from "../client";
 import { designRevisions, designs, reviews, users, type DesignStatus } from "../schema";
@@ -22,7 +22,8 @@ export function storedRequirement(stored: unknown): Requirement {
   return parsed.ok ? parsed.requirement : (stored as Requirement);
 }
 
-export type SavedFigures = { requirement: Requirement; choice: Choice; metrics: CandidateDetail };
+/** What one save stores: the normalized requirement and either a pair or a plan, with the engine's figures. */
+export type SavedFigures = { requirement: Requirement } & DesignKind;
 
 export type NewDesign = SavedFigures & {
   teamId: string;
@@ -44,6 +45,7 @@ function insertRevision(
     name: input.name,
     requirement: input.requirement,
     choice: input.choice,
+    plan: input.plan,
     metrics: input.metrics,
     authorId: input.userId,
   });
@@ -68,7 +70,13 @@ export async function createDesign(input: NewDesign, inTx?: Tx): Promise<{ id: s
         action: "design.created",
         targetType: "design",
         targetId: row.id,
-        details: { name: input.name, revision: 1, shuntOhms: input.choice.shuntOhms, gain: input.choice.gain },
+        details: {
+          name: input.name,
+          revision: 1,
+          ...(input.kind === "pair"
+            ? { shuntOhms: input.choice.shuntOhms, gain: input.choice.gain }
+            : { ranges: input.plan.ranges.length }),
+        },
       },
       tx,
     );
@@ -89,8 +97,10 @@ function listedDesigns<X extends Record<string, SQL.Aliased | SQL>>(db: Awaited<
       revision: designs.revision,
       updatedAt: designs.updatedAt,
       authorName: author.name,
-      shuntOhms: sql<number>`(${designRevisions.choice}->>'shuntOhms')::float8`,
-      gain: sql<number>`(${designRevisions.choice}->>'gain')::float8`,
+      // A pair's shunt and gain, or (for a range plan) how many ranges it has.
+      shuntOhms: sql<number | null>`(${designRevisions.choice}->>'shuntOhms')::float8`,
+      gain: sql<number | null>`(${designRevisions.choice}->>'gain')::float8`,
+      planRanges: sql<number | null>`jsonb_array_length(${designRevisions.plan}->'ranges')`,
       ...extra,
     })
     .from(designs)
@@ -209,6 +219,7 @@ export async function listRevisions(designId: string) {
       name: designRevisions.name,
       requirement: designRevisions.requirement,
       choice: designRevisions.choice,
+      plan: designRevisions.plan,
       metrics: designRevisions.metrics,
       authorId: designRevisions.authorId,
       authorName: users.name,
@@ -219,10 +230,10 @@ export async function listRevisions(designId: string) {
     .where(eq(designRevisions.designId, designId))
     .orderBy(asc(designRevisions.revision));
   const approvals = await approvalsOf(designId);
-  return rows.map((r) => ({
+  return rows.map(({ choice, plan, metrics, ...r }) => ({
     ...r,
+    ...designKindOf({ choice, plan, metrics }),
     requirement: storedRequirement(r.requirement),
-    metrics: r.metrics,
     createdAt: r.createdAt.toISOString(),
     approval: approvals.get(r.revision) ?? null,
   }));
@@ -243,8 +254,7 @@ export async function getDesignView(designId: string, teamId: string): Promise<D
     status: design.status,
     revision: design.revision,
     requirement: storedRequirement(current.requirement),
-    choice: current.choice,
-    metrics: current.metrics,
+    ...designKindOf(current),
     authorId: current.authorId,
     authorName,
     updatedAt: design.updatedAt.toISOString(),

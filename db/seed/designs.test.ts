@@ -1,8 +1,9 @@
 // The demo designs build through the design service with choices from the solver's front, and
-// land in the states the demo promises: the logger approved, the pump controller approved at revision 2
-// after a return (and built: db/seed/units.ts), the bench adapter a draft.
+// land in the states the demo promises: the logger approved (its radio-burst range as one pair, and
+// the whole span as a range plan), the pump controller approved at revision 2 after a return (and
+// built: db/seed/units.ts), the bench adapter a draft.
 import { afterAll, describe, expect, it } from "vitest";
-import { evaluateCandidate, parseRequirement } from "@/lib/design";
+import { evaluateCandidate, evaluatePlan, parseRequirement } from "@/lib/design";
 import { closeDb, getDb } from "../client";
 import { listDesigns, listRevisions } from "../queries/designs";
 import { listReviews } from "../queries/reviews";
@@ -12,7 +13,7 @@ import { seedDemoIfEmpty } from "./index";
 afterAll(closeDb);
 
 describe("demo designs", () => {
-  it("seed two approved (the pump controller at revision 2, after a return) and one draft, figures equal to the engine's", async () => {
+  it("seed three approved (the pump controller at revision 2, after a return; the logger's range plan) and one draft, figures equal to the engine's", async () => {
     expect(await seedDemoIfEmpty()).toBe(true);
     const db = await getDb();
     const [team] = await db.select().from(teams);
@@ -21,6 +22,7 @@ describe("demo designs", () => {
       ["Bench adapter", "draft", 1],
       ["Pump controller", "approved", 2],
       ["Soil-moisture logger", "approved", 1],
+      ["Soil-moisture logger", "approved", 1],
     ]);
     for (const d of designs) {
       const revs = await listRevisions(d.id);
@@ -28,12 +30,26 @@ describe("demo designs", () => {
       const parsed = parseRequirement(last.requirement);
       expect(parsed.ok).toBe(true);
       if (!parsed.ok) continue;
+      if (last.kind === "plan") {
+        const again = evaluatePlan(parsed.requirement, last.plan);
+        if (!again.ok) throw new Error(again.message);
+        expect(last.metrics.ranges.map((r) => r.worstBurdenV)).toEqual(again.ranges.map((r) => r.worstBurdenV));
+        continue;
+      }
       const again = evaluateCandidate(parsed.requirement, last.choice);
       expect(again.feasible).toBe(true);
       expect(last.metrics.burdenV).toBeCloseTo(again.burdenV, 12);
     }
     const adapter = designs.find((d) => d.project === "Bench adapter")!;
-    expect(adapter.shuntOhms * adapter.gain).toBeCloseTo(1000, 6); // 1 mV per µA is 1000 V/A
+    expect((adapter.shuntOhms ?? NaN) * (adapter.gain ?? NaN)).toBeCloseTo(1000, 6); // 1 mV per µA is 1000 V/A
+    // The logger as one instrument: a range plan over 3 µA to 180 mA (docs/model.md §6).
+    const plan = designs.find((d) => d.planRanges !== null)!;
+    expect(plan.planRanges).toBeGreaterThanOrEqual(2);
+    const planRevision = (await listRevisions(plan.id))[0]!;
+    if (planRevision.kind !== "plan") throw new Error("the logger's plan design holds no plan");
+    expect(planRevision.plan.ranges[0]!.minA).toBe(3e-6);
+    expect(planRevision.plan.ranges.at(-1)!.maxA).toBe(0.18);
+    expect((await listReviews(plan.id)).map((r) => r.verdict)).toEqual(["approve"]);
     const pump = designs.find((d) => d.project === "Pump controller")!;
     const verdicts = (await listReviews(pump.id)).map((r) => [r.revision, r.verdict]);
     expect(verdicts).toEqual([
@@ -42,6 +58,7 @@ describe("demo designs", () => {
       [2, "approve"],
     ]);
     const [r1, r2] = await listRevisions(pump.id);
-    expect(r2!.metrics.burdenV).toBeLessThan(r1!.metrics.burdenV);
+    if (r1?.kind !== "pair" || r2?.kind !== "pair") throw new Error("the pump controller is a single pair");
+    expect(r2.metrics.burdenV).toBeLessThan(r1.metrics.burdenV);
   });
 });

@@ -9,7 +9,10 @@
 //   mode a 100 dB part leaves too much offset at the bottom of the accuracy band.
 // - Bench adapter: 2 µA to 180 µA, an amplifier whose output reaches 1 mV of ground, a 10 Hz output
 //   filter (a meter reads slowly) and a 3 % target; the choice nearest 1 mV per µA is taken.
-import { parseRequirement, solve, type Candidate, type RequirementInput } from "@/lib/design";
+// And the logger as the whole instrument: 3 µA asleep to 180 mA transmitting, saved as the range plan
+// the engine proposes for it (through the same service as POST /api/designs) and approved.
+import { parseRequirement, solve, type Candidate, type PlanChoice, type RequirementInput } from "@/lib/design";
+import { saveNewDesign } from "@/lib/saved-designs/create";
 import { changedFields } from "@/lib/saved-designs/diff";
 import { evaluateDesign } from "@/lib/saved-designs/service";
 import { changeDesignStatus, createDesign, reviseDesign } from "../queries/designs";
@@ -79,6 +82,33 @@ export const demoDesigns: DemoDesign[] = [
   },
 ];
 
+/** The logger from sleep to radio burst: one instrument, several ranges. */
+export const demoPlanDesign = {
+  name: "Logger, sleep to radio burst",
+  project: "Soil-moisture logger",
+  requirement: {
+    current: { min: "3 uA", max: "180 mA" },
+    supply: { voltage: "3.0 V", side: "low" },
+    drop: { max: "60 mV" },
+    readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+    resolution: { countsAtMin: 10 },
+  } satisfies RequirementInput,
+  approvalNote:
+    "Each range reads within its limits on its own span, the switch points overlap, and the comparator keeps the low ranges alive at 180 mA; approved for a first build.",
+};
+
+/** The range plan the engine proposes for a requirement, as a designer saves it. */
+export function demoPlan(input: RequirementInput): PlanChoice {
+  const parsed = parseRequirement(input);
+  if (!parsed.ok) throw new Error(`demo plan: ${parsed.message}`);
+  const plan = solve(parsed.requirement).rangePlan;
+  if (!plan) throw new Error("demo plan: the engine proposed no range plan for the logger");
+  return {
+    ranges: plan.ranges.map(({ minA, maxA, shuntOhms, gain }) => ({ minA, maxA, shuntOhms, gain })),
+    switchPoints: plan.switchPoints.map(({ upA, downA }) => ({ upA, downA })),
+  };
+}
+
 /** The Pareto candidate a demo design uses, or an error naming the scenario. */
 export function demoChoice(d: DemoDesign, pick = d.pick) {
   const parsed = parseRequirement(d.requirement);
@@ -91,6 +121,8 @@ export function demoChoice(d: DemoDesign, pick = d.pick) {
 
 export async function seedDemoDesigns(ids: DemoIds): Promise<void> {
   const designer = ids.userIds.designer;
+  // First, so it is the oldest change on the list: the single-pair demo designs stay on top.
+  await seedDemoPlanDesign(ids);
   for (const d of demoDesigns) {
     const evaluated = evaluateDesign(d.requirement, demoChoice(d));
     const { id } = await createDesign({
@@ -101,31 +133,45 @@ export async function seedDemoDesigns(ids: DemoIds): Promise<void> {
       project: d.project,
     });
     if (d.state === "draft") continue;
-    const submitted = await changeDesignStatus({
-      designId: id,
-      teamId: ids.teamId,
-      actorId: designer,
-      revision: 1,
-      from: ["draft"],
-      to: "in-review",
-      action: "design.submitted",
-    });
-    if (!submitted.ok) throw new Error(`demo design "${d.name}": ${submitted.message}`);
+    await submit(ids, id, d.name, 1);
     if (d.revisedPick) await returnAndRevise(ids, id, d, d.revisedPick);
-    if (d.state === "approved") {
-      const approved = await addReview({
-        designId: id,
-        teamId: ids.teamId,
-        actorId: ids.userIds.reviewer,
-        verdict: "approve",
-        body:
-          d.approvalNote ??
+    if (d.state === "approved")
+      await approve(
+        ids,
+        id,
+        d.name,
+        d.revisedPick ? 2 : 1,
+        d.approvalNote ??
           "Burden and error at the bottom of the burst range are within target; approved for the first build.",
-        revision: d.revisedPick ? 2 : 1,
-      });
-      if (!approved.ok) throw new Error(`demo design "${d.name}": ${approved.message}`);
-    }
+      );
   }
+}
+
+/** The designer submits a revision for review. */
+async function submit(ids: DemoIds, id: string, name: string, revision: number) {
+  const submitted = await changeDesignStatus({
+    designId: id,
+    teamId: ids.teamId,
+    actorId: ids.userIds.designer,
+    revision,
+    from: ["draft"],
+    to: "in-review",
+    action: "design.submitted",
+  });
+  if (!submitted.ok) throw new Error(`demo design "${name}": ${submitted.message}`);
+}
+
+/** The reviewer approves a revision in review. */
+async function approve(ids: DemoIds, id: string, name: string, revision: number, body: string) {
+  const approved = await addReview({
+    designId: id,
+    teamId: ids.teamId,
+    actorId: ids.userIds.reviewer,
+    verdict: "approve",
+    body,
+    revision,
+  });
+  if (!approved.ok) throw new Error(`demo design "${name}": ${approved.message}`);
 }
 
 /** The reviewer returns revision 1 with a reason; the designer answers, saves revision 2 and submits it. */
@@ -166,14 +212,16 @@ async function returnAndRevise(ids: DemoIds, id: string, d: DemoDesign, pick: No
     changed,
   });
   if (!revised.ok) throw new Error(`demo design "${d.name}": ${revised.message}`);
-  const again = await changeDesignStatus({
-    designId: id,
-    teamId: ids.teamId,
-    actorId: designer,
-    revision: 2,
-    from: ["draft"],
-    to: "in-review",
-    action: "design.submitted",
-  });
-  if (!again.ok) throw new Error(`demo design "${d.name}": ${again.message}`);
+  await submit(ids, id, d.name, 2);
+}
+
+/** The logger's range plan: saved as the API saves it, submitted, approved by the reviewer. */
+async function seedDemoPlanDesign(ids: DemoIds) {
+  const d = demoPlanDesign;
+  const { id } = await saveNewDesign(
+    { teamId: ids.teamId, userId: ids.userIds.designer },
+    { name: d.name, project: d.project, requirement: d.requirement, plan: demoPlan(d.requirement) },
+  );
+  await submit(ids, id, d.name, 1);
+  await approve(ids, id, d.name, 1, d.approvalNote);
 }

@@ -5,7 +5,7 @@
 import bcrypt from "bcryptjs";
 import { eq } from "drizzle-orm";
 import { demoDesigns, demoChoice } from "./designs";
-import { evaluateDesign, type EvaluatedDesign } from "@/lib/saved-designs/service";
+import { evaluateDesign, type EvaluatedPair } from "@/lib/saved-designs/service";
 import { profileDesignOf, summarizeProfile } from "@/lib/profile";
 import { float64ToBytes } from "../float64-bytes";
 import { getDb, type Tx } from "../client";
@@ -97,7 +97,7 @@ export async function seedScaleTeam(counts: ScaleCounts = FULL_SCALE): Promise<{
   if (existing.length) throw new Error(`this database already holds "${SCALE_TEAM}": seed an empty directory`);
 
   // The figures every revision shares: the demo scenarios' own picks, evaluated by the engine once.
-  const figures: EvaluatedDesign[] = demoDesigns.map((d) => evaluateDesign(d.requirement, demoChoice(d)));
+  const figures: EvaluatedPair[] = demoDesigns.map((d) => evaluateDesign(d.requirement, demoChoice(d)));
   const hash = await bcrypt.hash(DEMO_PASSWORD, 10);
   const now = Date.now();
 

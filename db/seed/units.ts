@@ -29,7 +29,8 @@ const asWritten = (v: number) => Math.round(v * 1e4) / 1e4;
 export async function seedDemoUnits(ids: DemoIds): Promise<void> {
   const pump = (await listDesigns(ids.teamId)).find((d) => d.project === DEMO_UNIT_PROJECT);
   if (!pump || pump.status !== "approved") throw new Error("demo units: the pump controller design is not approved");
-  const revision = (await listRevisions(pump.id)).find((r) => r.revision === pump.revision)!;
+  const revision = (await listRevisions(pump.id)).find((r) => r.revision === pump.revision);
+  if (revision?.kind !== "pair") throw new Error("demo units: the pump controller is a single shunt and gain");
   const { requirement, choice } = revision;
   const bench = benchCheck(requirement, choice);
   const currents = bench.map((b) => b.currentA);

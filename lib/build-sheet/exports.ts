@@ -2,9 +2,9 @@
 // (our own versioned format, which imports back as a new design), and their file names.
 import { z } from "zod";
 import { writeCsv, type CsvCell } from "@/lib/csv-write";
-import { buildNetlist } from "@/lib/design";
-import type { DesignView } from "@/lib/design-view";
-import { choiceSchema } from "@/lib/saved-designs/service";
+import { buildNetlist, planChoiceSchema, type Choice, type PlanChoice } from "@/lib/design";
+import type { DesignView, PairDesignView } from "@/lib/design-view";
+import { choiceSchema, oneOfChoiceOrPlan } from "@/lib/saved-designs/service";
 import { designSlug } from "./slug";
 import { partsList, type Part } from "./parts";
 import { textField } from "@/lib/text-field";
@@ -23,7 +23,7 @@ export function attachment(fileName: string): string {
 
 /** The design's SPICE netlist: exactly what POST /api/netlist gives for its requirement and choice. */
 export function designNetlist(
-  view: Pick<DesignView, "requirement" | "choice">,
+  view: Pick<PairDesignView, "requirement" | "choice">,
   opts: { includeOffset: boolean },
 ): string {
   return buildNetlist(view.requirement, view.choice, opts);
@@ -51,7 +51,7 @@ function csvCell(p: Part, col: (typeof csvColumns)[number]): CsvCell {
  * RFC 4180: a header row, CRLF line ends, fields quoted when they hold a comma, quote or line break;
  * text that a spreadsheet would run as a formula gets a leading apostrophe (writeCsv).
  */
-export function partsCsv(view: Pick<DesignView, "requirement" | "choice">): string {
+export function partsCsv(view: Pick<PairDesignView, "requirement" | "choice">): string {
   const rows = partsList(view.requirement, view.choice);
   return writeCsv(
     csvColumns,
@@ -66,7 +66,9 @@ export type DesignExport = {
   name: string;
   project: string | null;
   requirement: DesignView["requirement"];
-  choice: DesignView["choice"];
+  /** One of the two, as the design holds: a single shunt and gain, or a range plan. */
+  choice?: Choice;
+  plan?: PlanChoice;
   /** Informational: where and when it came from, and the figures it had. Import recomputes them. */
   exportedAt: string;
   source: { designId: string; revision: number; status: DesignView["status"] };
@@ -80,7 +82,7 @@ export function designExport(view: DesignView, exportedAt: Date): DesignExport {
     name: view.name,
     project: view.project,
     requirement: view.requirement,
-    choice: view.choice,
+    ...(view.kind === "plan" ? { plan: view.plan } : { choice: view.choice }),
     exportedAt: exportedAt.toISOString(),
     source: { designId: view.id, revision: view.revision, status: view.status },
     metrics: view.metrics,
@@ -88,15 +90,20 @@ export function designExport(view: DesignView, exportedAt: Date): DesignExport {
 }
 
 /** What an import accepts: the export's own fields; the informational ones are ignored. */
-export const designImportSchema = z.object(
-  {
-    format: z.literal(EXPORT_FORMAT, { error: `format: expected "${EXPORT_FORMAT}" (a file exported from a design)` }),
-    version: z.literal(EXPORT_VERSION, { error: `version: this build reads version ${EXPORT_VERSION} files` }),
-    name: textField({ label: "name", min: 1, minMessage: "name: give the design a name", max: 200 }),
-    project: textField({ label: "project", max: 200 }).nullish(),
-    requirement: z.record(z.string(), z.unknown(), { error: "requirement: expected an object" }),
-    choice: choiceSchema,
-  },
-  { error: "Expected a design file: a JSON object" },
-);
+export const designImportSchema = z
+  .object(
+    {
+      format: z.literal(EXPORT_FORMAT, {
+        error: `format: expected "${EXPORT_FORMAT}" (a file exported from a design)`,
+      }),
+      version: z.literal(EXPORT_VERSION, { error: `version: this build reads version ${EXPORT_VERSION} files` }),
+      name: textField({ label: "name", min: 1, minMessage: "name: give the design a name", max: 200 }),
+      project: textField({ label: "project", max: 200 }).nullish(),
+      requirement: z.record(z.string(), z.unknown(), { error: "requirement: expected an object" }),
+      choice: choiceSchema.optional(),
+      plan: planChoiceSchema.optional(),
+    },
+    { error: "Expected a design file: a JSON object" },
+  )
+  .superRefine((b, ctx) => oneOfChoiceOrPlan(b, ctx, true));
 export type DesignImport = z.infer<typeof designImportSchema>;

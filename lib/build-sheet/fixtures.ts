@@ -8,7 +8,7 @@ import {
   type Requirement,
   type RequirementInput,
 } from "@/lib/design";
-import type { DesignView } from "@/lib/design-view";
+import type { PairDesignView as DesignView } from "@/lib/design-view";
 import type { DesignStatus } from "@/db/schema";
 
 export const loggerRequirement: RequirementInput = {
@@ -56,7 +56,9 @@ export function fixtureView(
     status,
     revision,
     requirement,
+    kind: "pair",
     choice,
+    plan: null,
     metrics: evaluateCandidate(requirement, choice),
     authorId: "00000000-0000-4000-8000-000000000002",
     authorName: "Demo Designer",

@@ -1,7 +1,7 @@
 // Renders a saved design's build sheet to PDF bytes, in typefaces embedded from npm font files.
 import { createElement } from "react";
 import { Font, renderToBuffer } from "@react-pdf/renderer";
-import type { DesignView } from "@/lib/design-view";
+import type { PairDesignView as DesignView } from "@/lib/design-view";
 import { breakPoints, sheetFonts } from "./fonts";
 import { BuildSheetDocument, PLANNED_PAGES, type SheetMeta } from "./pdf/document";
 import { oneLine } from "@/lib/text-field";

@@ -13,7 +13,7 @@ import {
   type ErrorCurvePoint,
   type Requirement,
 } from "@/lib/design";
-import type { DesignView } from "@/lib/design-view";
+import type { PairDesignView as DesignView } from "@/lib/design-view";
 import { oneLine } from "@/lib/text-field";
 import * as f from "./format";
 import { matchLibraryParts, nameLibraryParts, type LibraryParts } from "./library-parts";

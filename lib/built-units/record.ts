@@ -6,20 +6,21 @@ import { listUnits, type StoredReading, type UnitWrite } from "@/db/queries/unit
 import type { Caller } from "@/lib/auth/gate";
 import { benchCheck, matchTestPoints, type BenchCheckRow } from "@/lib/design";
 import { HttpError, type FieldErrors } from "@/lib/http";
-import { designFor } from "@/lib/saved-designs/access";
+import { designFor, rangePlanNotYet } from "@/lib/saved-designs/access";
 import { summarizeUnits, type RevisionBasis } from "./judge";
 
+/** The single-pair revisions (a unit is judged against one pair; range plans take no units yet). */
 async function revisionBases(designId: string): Promise<RevisionBasis[]> {
-  return (await listRevisions(designId)).map((r) => ({
-    revision: r.revision,
-    requirement: r.requirement,
-    choice: r.choice,
-    approved: r.approval !== null,
-  }));
+  return (await listRevisions(designId)).flatMap((r) =>
+    r.kind === "pair"
+      ? [{ revision: r.revision, requirement: r.requirement, choice: r.choice, approved: r.approval !== null }]
+      : [],
+  );
 }
 
 export async function unitsContext(caller: Caller, designId: string) {
-  const { design } = await designFor(caller, designId);
+  const { design, current } = await designFor(caller, designId);
+  if (current.plan) throw rangePlanNotYet("Recording built units");
   return { design, revisions: await revisionBases(design.id) };
 }
 

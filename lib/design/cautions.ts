@@ -5,7 +5,8 @@ import type { Requirement } from "./requirement";
 import type { CandidateDetail } from "./types";
 import { formatSI } from "./format";
 
-export type CautionKey = "hot" | "hazardous" | "common-mode" | "mains" | "fuse" | "inductive" | "codes";
+export type CautionKey =
+  "hot" | "hazardous" | "common-mode" | "mains" | "fuse" | "inductive" | "codes" | "range-switch";
 
 /** bad: a hazard this design has; warn: a hazard it may have; note: what every build needs. */
 export type Caution = { key: CautionKey; severity: "bad" | "warn" | "note"; title: string; text: string };
@@ -42,7 +43,8 @@ export function shuntTouchTemperatureC(m: Pick<CandidateDetail, "selfHeatingK">)
   return REFERENCE_C + m.selfHeatingK;
 }
 
-export function designCautions(req: Requirement, m: CandidateDetail): Caution[] {
+/** `shunt` names the part in the hot-shunt caution (a range plan names the range's shunt). */
+export function designCautions(req: Requirement, m: CandidateDetail, shunt = "R1"): Caution[] {
   const out: Caution[] = [];
   const touchC = shuntTouchTemperatureC(m);
   const hottestC = req.temperature.max + m.selfHeatingK;
@@ -53,7 +55,7 @@ export function designCautions(req: Requirement, m: CandidateDetail): Caution[] 
       severity: brief ? "bad" : "warn",
       title: "Hot shunt",
       text:
-        `At full current R1 dissipates ${formatSI(m.dissipationW, "W")} (rated ${formatSI(m.ratingW, "W")}) and runs about ` +
+        `At full current ${shunt} dissipates ${formatSI(m.dissipationW, "W")} (rated ${formatSI(m.ratingW, "W")}) and runs about ` +
         `${formatSI(m.selfHeatingK, "K")} above its surroundings: about ${formatSI(touchC, "°C")} on a 25 °C bench, ` +
         `up to about ${formatSI(hottestC, "°C")} at the highest ambient. ` +
         (brief

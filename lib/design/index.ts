@@ -11,6 +11,8 @@ export {
   candidateFigures,
   evaluateCandidate,
   isInSweep,
+  shuntInSweep,
+  gainInSweep,
   rejectReasonLabels,
   rejectReasons,
   type RejectReason,
@@ -39,4 +41,7 @@ export * from "./calibrated-accuracy";
 export * from "./cautions";
 export * from "./profile";
 export * from "./plan-choice";
-export { evaluatePlan, type PlanEvaluation, type PlanRangeMetrics } from "./plan-evaluation";
+export { evaluatePlan, type PlanEvaluation, type PlanMetrics, type PlanRangeMetrics } from "./plan-evaluation";
+export * from "./design-kind";
+export * from "./plan-cautions";
+export * from "./plan-curves";

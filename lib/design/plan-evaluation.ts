@@ -18,16 +18,17 @@ import type { CandidateDetail } from "./types";
  */
 export type PlanRangeMetrics = CandidateDetail & PlannedRange & { benchCheck: BenchCheckRow[] };
 
+/** A plan design's saved figures (API.md v2: `metrics` is `{ ranges: [...] }`, plus the rule and protection in words). */
+export type PlanMetrics = {
+  ranges: PlanRangeMetrics[];
+  /** When the instrument changes range, with the hysteresis, in words. */
+  switchRule: string;
+  /** How a lower range survives the span's full current, in words. */
+  protection: string;
+};
+
 export type PlanEvaluation =
-  | {
-      ok: true;
-      ranges: PlanRangeMetrics[];
-      switchPoints: SwitchPoint[];
-      /** When the instrument changes range, with the hysteresis, in words. */
-      switchRule: string;
-      /** How a lower range survives the span's full current, in words. */
-      protection: string;
-    }
+  | ({ ok: true; switchPoints: SwitchPoint[] } & PlanMetrics)
   | {
       ok: false;
       /** The range at fault (0-based); for a switch point, the lower range of its boundary. */

@@ -1,6 +1,6 @@
 // The figures of a saved design that a profile is judged against, taken from its requirement and
 // the engine's metrics at that revision (the engine computed lsbA; nothing is recomputed here).
-import type { DesignView } from "@/lib/design-view";
+import type { PairDesignView as DesignView } from "@/lib/design-view";
 import type { ProfileDesign } from "@/lib/design/profile";
 
 export function profileDesignOf(design: Pick<DesignView, "requirement" | "choice" | "metrics">): ProfileDesign {

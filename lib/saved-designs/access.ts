@@ -5,6 +5,7 @@ import "server-only";
 import { getDesign, getDesignView } from "@/db/queries/designs";
 import type { Caller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
+import type { PairDesignView } from "@/lib/design-view";
 import { HttpError } from "@/lib/http";
 
 export const designNotFound = () => new HttpError(404, "That design was not found in your team.");
@@ -27,5 +28,23 @@ export async function designViewFor(caller: Caller, id: string) {
   const view = await getDesignView(id, caller.teamId);
   if (!view) throw designNotFound();
   if (!can(caller, "design.read", view)) throw notApprovedForMakers();
+  return view;
+}
+
+/**
+ * The one place that says what a range plan cannot do yet: the build sheet, netlist, parts list,
+ * current profiles and built units read a single shunt and gain. 422 until they learn plans.
+ */
+export function rangePlanNotYet(what: string): HttpError {
+  return new HttpError(
+    422,
+    `${what} is not available for a range plan yet; the design's ranges, figures and bench rows are on GET /api/designs/[id].`,
+  );
+}
+
+/** The DesignView of a single-pair design, or 422 (rangePlanNotYet) for a range plan. */
+export async function pairDesignViewFor(caller: Caller, id: string, what: string): Promise<PairDesignView> {
+  const view = await designViewFor(caller, id);
+  if (view.kind === "plan") throw rangePlanNotYet(what);
   return view;
 }

@@ -1,17 +1,20 @@
-// Saving a new design, shared by POST /api/designs and the import route: the engine evaluates
-// the requirement and choice (422 when the choice is outside the sweep or infeasible), then one
-// transaction writes the design and its first revision.
+// Saving a new design, shared by POST /api/designs, the import route and the demo seed: the engine
+// evaluates the requirement and the choice or plan (422 when the choice is outside the sweep or
+// infeasible, or the plan unsound), then one transaction writes the design and its first revision.
 import { createDesign } from "@/db/queries/designs";
 import { withIdempotencyKey } from "@/db/queries/idempotency";
 import type { Caller } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
-import { evaluateDesign } from "./service";
+import { evaluatePicked, pickedOf } from "./service";
+import type { Choice, PlanChoice } from "@/lib/design";
 
+/** Exactly one of choice and plan (the request schemas see to it; pickedOf refuses otherwise). */
 export type NewDesign = {
   name: string;
   project?: string | null;
   requirement: unknown;
-  choice: { shuntOhms: number; gain: number };
+  choice?: Choice;
+  plan?: PlanChoice;
 };
 
 export async function saveNewDesign(
@@ -19,7 +22,7 @@ export async function saveNewDesign(
   body: NewDesign,
   idempotencyKey?: string,
 ) {
-  const evaluated = evaluateDesign(body.requirement, body.choice);
+  const evaluated = evaluatePicked(body.requirement, pickedOf(body));
   const input = {
     ...evaluated,
     teamId: caller.teamId,

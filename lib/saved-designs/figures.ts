@@ -1,6 +1,7 @@
 // Labels, units and "which way is better" for the fields of a saved design, shared by the
 // revision diff, the compare page and the mails. Pure: runs on the server and in the browser.
 import { formatPercent, formatSI } from "@/lib/design/format";
+import type { PlanChoice } from "@/lib/design/plan-choice";
 
 export type FieldKind = "si" | "percent" | "fraction" | "ppm" | "plain" | "db" | "celsius" | "count" | "text";
 
@@ -64,6 +65,40 @@ export const choiceFields: Record<string, FieldInfo> = {
   shuntOhms: { label: "Shunt", kind: "si", unit: "Ω" },
   gain: { label: "Gain", kind: "plain" },
 };
+
+const rangeKeys: Record<string, FieldInfo> = {
+  minA: { label: "lowest current", kind: "si", unit: "A" },
+  maxA: { label: "highest current", kind: "si", unit: "A" },
+  shuntOhms: { label: "shunt", kind: "si", unit: "Ω" },
+  gain: { label: "gain", kind: "plain" },
+};
+const switchKeys: Record<string, FieldInfo> = {
+  upA: { label: "switching up above", kind: "si", unit: "A" },
+  downA: { label: "switching down below", kind: "si", unit: "A" },
+};
+
+/**
+ * A range plan's fields by dotted path ("ranges.1.shuntOhms" → "Range 2, shunt";
+ * "switchPoints.0.downA" → "Switch point 1, switching down below"; "ranges" → "Number of ranges").
+ */
+export function planFieldInfo(path: string): FieldInfo | undefined {
+  if (path === "ranges") return { label: "Number of ranges", kind: "count" };
+  const [list, index, key] = path.split(".");
+  const k = Number(index);
+  if (!Number.isInteger(k) || key === undefined) return undefined;
+  const info = list === "ranges" ? rangeKeys[key] : list === "switchPoints" ? switchKeys[key] : undefined;
+  if (!info) return undefined;
+  return { ...info, label: `${list === "ranges" ? "Range" : "Switch point"} ${k + 1}, ${info.label}` };
+}
+
+/** A plan as dotted paths, each range and switch point field on its own (for the revision diff). */
+export function flattenPlan(plan: PlanChoice | null | undefined): Record<string, unknown> {
+  if (!plan) return {};
+  const out: Record<string, unknown> = { ranges: plan.ranges.length };
+  plan.ranges.forEach((r, k) => Object.assign(out, flatten(r, `ranges.${k}`)));
+  plan.switchPoints.forEach((s, k) => Object.assign(out, flatten(s, `switchPoints.${k}`)));
+  return out;
+}
 
 /** The engine's figures of a candidate, in the order a reviewer reads them. */
 export const metricFields: Record<string, FieldInfo> = {

@@ -2,33 +2,35 @@
 import "server-only";
 import { listMembers, wantingMail, type MailPreferences } from "@/db/queries/users";
 import { can } from "@/lib/auth/policy";
-import { formatPercent, formatSI, type CandidateDetail, type Choice } from "@/lib/design";
+import { designKindOf, formatPercent, formatSI, type DesignKind } from "@/lib/design";
 import { sendMail } from "@/lib/mail/send";
 
-type DesignRef = {
-  id: string;
-  name: string;
-  project: string | null;
-  revision: number;
-  choice: Choice;
-  metrics: CandidateDetail;
-};
+type DesignRef = { id: string; name: string; project: string | null; revision: number } & DesignKind;
 
 /** What the mail says about a design, from its row and current revision as designFor returns them. */
 export function designRefOf(
   design: { id: string; name: string; project: string | null; revision: number },
-  current: { choice: Choice; metrics: unknown },
+  current: Parameters<typeof designKindOf>[0],
 ): DesignRef {
   const { id, name, project, revision } = design;
-  return { id, name, project, revision, choice: current.choice, metrics: current.metrics as CandidateDetail };
+  return { id, name, project, revision, ...designKindOf(current) };
 }
 
-const summary = (d: DesignRef) =>
-  [
-    `Design: ${d.name}${d.project ? ` (${d.project})` : ""}, revision ${d.revision}`,
+function summary(d: DesignRef): string {
+  const title = `Design: ${d.name}${d.project ? ` (${d.project})` : ""}, revision ${d.revision}`;
+  if (d.kind === "plan") {
+    const ranges = d.metrics.ranges.map(
+      (r, k) =>
+        `Range ${k + 1}: ${formatSI(r.minA, "A")} to ${formatSI(r.maxA, "A")}, shunt ${formatSI(r.shuntOhms, "Ω")}, gain ${formatSI(r.gain, "")}, worst drop ${formatSI(r.worstBurdenV, "V")} (switch included).`,
+    );
+    return [title, `A range plan of ${d.metrics.ranges.length} ranges:`, ...ranges].join("\n");
+  }
+  return [
+    title,
     `Shunt ${formatSI(d.choice.shuntOhms, "Ω")}, gain ${formatSI(d.choice.gain, "")}, burden ${formatSI(d.metrics.burdenV, "V")} at maximum current,`,
     `worst-case error ${formatPercent(d.metrics.errorAtMinPercent / 100)} at minimum current.`,
   ].join("\n");
+}
 
 /** Only the people who want this kind of review mail (their choice on /account). */
 async function keepWanting<M extends { userId: string }>(members: M[], kind: keyof MailPreferences) {

@@ -85,5 +85,7 @@ test("the plan editor on a phone", async ({ browser }) => {
   await page.getByRole("button", { name: "Other pairs for range 1" }).click();
   await checkScreen(page, `${shots}/plan-editor-390.png`);
   await page.getByTestId("plan-editor").screenshot({ path: `${shots}/plan-editor-panel-390.png` });
+  await page.getByTestId("plan-range-1").screenshot({ path: `${shots}/plan-range-1-390.png` });
+  await page.getByTestId("plan-error-chart").screenshot({ path: `${shots}/plan-error-chart-390.png` });
   await ctx.close();
 });

@@ -7,7 +7,7 @@ import { evaluateCandidate, parseRequirement } from "@/lib/design";
 import { csvColumns, designExport, designImportSchema, exportFileName, partsCsv } from "@/lib/build-sheet/exports";
 import { fixtureView, loggerRequirement, pumpRequirement } from "@/lib/build-sheet/fixtures";
 import { partsList } from "@/lib/build-sheet/parts";
-import { evaluateDesign } from "@/lib/saved-designs/service";
+import { evaluateDesign, evaluatePicked, pickedOf } from "@/lib/saved-designs/service";
 import { HttpError } from "@/lib/http";
 
 const logger = fixtureView(loggerRequirement, { name: "Soil logger, radio range", revision: 4 });
@@ -70,7 +70,7 @@ describe("design JSON export and import", () => {
     const file = JSON.parse(JSON.stringify(designExport(view, new Date("2026-12-01T00:00:00Z"))));
     expect(file).toMatchObject({ format: "sensewright-design", version: 1, name: view.name, project: view.project });
     const body = designImportSchema.parse(file);
-    const evaluated = evaluateDesign(body.requirement, body.choice);
+    const evaluated = evaluatePicked(body.requirement, pickedOf(body));
     expect(evaluated.requirement).toEqual(view.requirement);
     expect(evaluated.choice).toEqual(view.choice);
     expect(evaluated.metrics).toEqual(evaluateCandidate(view.requirement, view.choice));
@@ -102,7 +102,7 @@ describe("design JSON export and import", () => {
       requirement: { ...good.requirement, current: { min: 0.001, max: "5 V" } },
     });
     try {
-      evaluateDesign(body.requirement, body.choice);
+      evaluateDesign(body.requirement, pickedOf(body).choice ?? { shuntOhms: NaN, gain: NaN });
       expect.unreachable("the service accepted a voltage as a current");
     } catch (e) {
       expect(e).toBeInstanceOf(HttpError);

@@ -17,7 +17,7 @@ import {
   formatSI,
   type RequirementInput,
 } from "@/lib/design";
-import type { DesignView } from "@/lib/design-view";
+import type { PairDesignView as DesignView } from "@/lib/design-view";
 import { Font } from "@react-pdf/renderer";
 import { sheetFonts } from "@/lib/build-sheet/fonts";
 import { fixtureView, loggerRequirement, pumpRequirement } from "@/lib/build-sheet/fixtures";

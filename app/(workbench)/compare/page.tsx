@@ -4,7 +4,7 @@ import { CurveChart, type CurveSeries } from "@/components/compare/compare-chart
 import { CompareTable } from "@/components/compare/compare-table";
 import { EmptyState } from "@/components/ui/panel";
 import { getDesignView } from "@/db/queries/designs";
-import { errorCurve, loadCurve } from "@/lib/design";
+import { errorCurve, loadCurve, planCurve } from "@/lib/design";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
 import { designViewerFor, type DesignView } from "@/lib/design-view";
@@ -47,15 +47,20 @@ export default async function ComparePage({
       </EmptyState>
     );
   }
+  // A range plan is drawn as one instrument: at each current, the range in use on a rising current.
   const errorSeries: CurveSeries[] = designs.map((d) => ({
     key: d.id,
     label: d.name,
-    points: errorCurve(d.requirement, d.choice, 60).map((p) => ({ x: p.currentA, y: p.worstPercent })),
+    points: (d.kind === "plan" ? planCurve(d.requirement, d.plan, 60) : errorCurve(d.requirement, d.choice, 60)).map(
+      (p) => ({ x: p.currentA, y: p.worstPercent }),
+    ),
   }));
   const burdenSeries: CurveSeries[] = designs.map((d) => ({
     key: d.id,
     label: d.name,
-    points: loadCurve(d.requirement, d.choice, 60).map((p) => ({ x: p.currentA, y: p.burdenV })),
+    points: (d.kind === "plan" ? planCurve(d.requirement, d.plan, 60) : loadCurve(d.requirement, d.choice, 60)).map(
+      (p) => ({ x: p.currentA, y: p.burdenV }),
+    ),
   }));
   return (
     <div className="flex flex-col gap-4">
@@ -64,7 +69,9 @@ export default async function ComparePage({
         <p className="text-ink-muted">
           Each design is evaluated at its own requirement. A figure row marks the best value only where every design
           takes that figure at the same points (the same span, supply and readout it rests on); otherwise each value is
-          shown against its own design&apos;s limit. Rows whose values differ are in full ink.
+          shown against its own design&apos;s limit. Rows whose values differ are in full ink. A range plan shows, among
+          the whole-span figures, only those it takes at the same points as a single pair (the drop and load voltage at
+          the maximum current, the error and steps at the minimum); its per-range figures follow, unranked.
           {missing > 0 &&
             ` ${missing} of the designs asked for ${missing === 1 ? "was" : "were"} not found and ${missing === 1 ? "is" : "are"} left out.`}
         </p>

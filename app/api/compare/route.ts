@@ -2,7 +2,10 @@ import { apiRoute } from "@/lib/auth/gate";
 import { designViewFor } from "@/lib/saved-designs/access";
 import { compareQuery } from "@/lib/saved-designs/compare";
 
-/** Two to four of the team's designs with their requirement, choice and figures. */
+/**
+ * Two to four of the team's designs with their requirement, choice or plan, and figures (a plan's
+ * `metrics.ranges[k]` per range).
+ */
 export const GET = apiRoute(
   { action: "design.read", doing: "compare designs", query: compareQuery },
   async ({ caller, query }) => {
@@ -18,7 +21,8 @@ export const GET = apiRoute(
         authorName: d.authorName,
         updatedAt: d.updatedAt,
         requirement: d.requirement,
-        choice: d.choice,
+        kind: d.kind,
+        ...(d.kind === "plan" ? { plan: d.plan } : { choice: d.choice }),
         metrics: d.metrics,
       })),
     };

@@ -2,7 +2,7 @@
 // end from paper alone. Every figure comes from sheetData (the engine, formatted with formatSI).
 import { Document, Page, StyleSheet, View } from "@react-pdf/renderer";
 import type { ReactNode } from "react";
-import type { DesignView } from "@/lib/design-view";
+import type { PairDesignView as DesignView } from "@/lib/design-view";
 import type { SheetData } from "../sheet-data";
 import { ErrorChart } from "./error-chart";
 import { ReadingsLog } from "./readings-log";

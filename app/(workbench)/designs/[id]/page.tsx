@@ -3,6 +3,8 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { BuildSheetPanel } from "@/components/design/build-sheet-panel";
 import { DesignFigures } from "@/components/design/design-figures";
+import { PlanBuildPending } from "@/components/design/plan-build-pending";
+import { PlanFigures } from "@/components/design/plan-figures";
 import { ProfilesPanel } from "@/components/design/profiles-panel";
 import { ComparePicker } from "@/components/review/compare-picker";
 import { ReviewPanel } from "@/components/review/review-panel";
@@ -38,7 +40,25 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
     ),
     listLibrary(caller.teamId),
   ]);
-  const { metrics, choice } = design;
+  const picker = (
+    <ComparePicker
+      current={{ id: design.id, name: design.name }}
+      others={others
+        .filter((d) => d.id !== design.id)
+        .map((d) => ({ id: d.id, name: d.name, project: d.project, status: d.status }))}
+    />
+  );
+  const review = (
+    <ReviewPanel
+      design={design}
+      viewer={viewer}
+      revisions={revisions}
+      reviews={reviews}
+      audit={audit.map((e) => ({ ...e, at: e.at.toISOString() }))}
+    />
+  );
+  const worstDropV =
+    design.kind === "plan" ? Math.max(...design.metrics.ranges.map((r) => r.worstBurdenV)) : design.metrics.burdenV;
   return (
     <div className="flex flex-col gap-4">
       <header className="flex flex-wrap items-start justify-between gap-4">
@@ -70,35 +90,49 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
             </a>
           </p>
         </div>
-        <dl className="grid grid-cols-3 gap-x-6 gap-y-0.5 text-right text-xs num">
-          <dt className="text-ink-muted">Shunt</dt>
-          <dt className="text-ink-muted">Gain</dt>
-          <dt className="text-ink-muted">Burden</dt>
-          <dd className="text-base font-semibold">{formatSI(choice.shuntOhms, "Ω")}</dd>
-          <dd className="text-base font-semibold">{formatSI(choice.gain, "")}</dd>
-          <dd className="text-base font-semibold">{formatSI(metrics.burdenV, "V")}</dd>
-        </dl>
+        {design.kind === "plan" ? (
+          <dl className="grid grid-cols-3 gap-x-6 gap-y-0.5 text-right text-xs num" data-testid="design-headline">
+            <dt className="text-ink-muted">Range plan</dt>
+            <dt className="text-ink-muted">Span</dt>
+            <dt className="text-ink-muted">Worst drop</dt>
+            <dd className="text-base font-semibold">{design.plan.ranges.length} ranges</dd>
+            <dd className="text-base font-semibold">
+              {formatSI(design.requirement.current.min, "A")} to {formatSI(design.requirement.current.max, "A")}
+            </dd>
+            <dd className="text-base font-semibold">{formatSI(worstDropV, "V")}</dd>
+          </dl>
+        ) : (
+          <dl className="grid grid-cols-3 gap-x-6 gap-y-0.5 text-right text-xs num" data-testid="design-headline">
+            <dt className="text-ink-muted">Shunt</dt>
+            <dt className="text-ink-muted">Gain</dt>
+            <dt className="text-ink-muted">Burden</dt>
+            <dd className="text-base font-semibold">{formatSI(design.choice.shuntOhms, "Ω")}</dd>
+            <dd className="text-base font-semibold">{formatSI(design.choice.gain, "")}</dd>
+            <dd className="text-base font-semibold">{formatSI(worstDropV, "V")}</dd>
+          </dl>
+        )}
       </header>
-      {/* A maker comes to build: the download, parts list and bench check lead the page. */}
-      {viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} library={library} />}
-      {viewer.leadsWithBuildSheet && <UnitsPanel design={design} viewer={viewer} />}
-      <ComparePicker
-        current={{ id: design.id, name: design.name }}
-        others={others
-          .filter((d) => d.id !== design.id)
-          .map((d) => ({ id: d.id, name: d.name, project: d.project, status: d.status }))}
-      />
-      <DesignFigures design={design} />
-      <ReviewPanel
-        design={design}
-        viewer={viewer}
-        revisions={revisions}
-        reviews={reviews}
-        audit={audit.map((e) => ({ ...e, at: e.at.toISOString() }))}
-      />
-      {!viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} library={library} />}
-      <ProfilesPanel design={design} viewer={viewer} />
-      {caller.role !== "maker" && <UnitsPanel design={design} viewer={viewer} />}
+      {design.kind === "plan" ? (
+        <>
+          {viewer.leadsWithBuildSheet && <PlanBuildPending design={design} />}
+          {picker}
+          <PlanFigures design={design} />
+          {review}
+          {!viewer.leadsWithBuildSheet && <PlanBuildPending design={design} />}
+        </>
+      ) : (
+        <>
+          {/* A maker comes to build: the download, parts list and bench check lead the page. */}
+          {viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} library={library} />}
+          {viewer.leadsWithBuildSheet && <UnitsPanel design={design} viewer={viewer} />}
+          {picker}
+          <DesignFigures design={design} />
+          {review}
+          {!viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} library={library} />}
+          <ProfilesPanel design={design} viewer={viewer} />
+          {caller.role !== "maker" && <UnitsPanel design={design} viewer={viewer} />}
+        </>
+      )}
     </div>
   );
 }

@@ -3,9 +3,9 @@ import { listReviews } from "@/db/queries/reviews";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError, refused } from "@/lib/http";
 import { designFor } from "@/lib/saved-designs/access";
-import { savedBenchCheck } from "@/lib/saved-designs/bench";
+import { savedDesignFigures } from "@/lib/saved-designs/bench";
 import { changedFields } from "@/lib/saved-designs/diff";
-import { evaluateDesign, patchDesignSchema } from "@/lib/saved-designs/service";
+import { evaluatePicked, patchDesignSchema, pickedOf } from "@/lib/saved-designs/service";
 
 export const GET = apiRoute({ action: "design.read", doing: "open designs" }, async ({ caller, params }) => {
   const { design, current, authorName } = await designFor(caller, params.id ?? "");
@@ -18,9 +18,7 @@ export const GET = apiRoute({ action: "design.read", doing: "open designs" }, as
     status: design.status,
     revision: design.revision,
     requirement: current.requirement,
-    choice: current.choice,
-    metrics: current.metrics,
-    benchCheck: savedBenchCheck(current.requirement, current.choice),
+    ...savedDesignFigures(current),
     authorId: current.authorId,
     authorName,
     createdAt: design.createdAt.toISOString(),
@@ -31,7 +29,8 @@ export const GET = apiRoute({ action: "design.read", doing: "open designs" }, as
       name: r.name,
       authorName: r.authorName,
       createdAt: r.createdAt,
-      choice: r.choice,
+      kind: r.kind,
+      ...(r.kind === "plan" ? { plan: r.plan } : { choice: r.choice }),
       approval: r.approval,
     })),
     reviews: await listReviews(design.id),
@@ -50,18 +49,31 @@ export const PATCH = apiRoute({ action: "design.edit", body: patchDesignSchema }
     body.name === undefined &&
     body.project === undefined &&
     body.requirement === undefined &&
-    body.choice === undefined
+    body.choice === undefined &&
+    body.plan === undefined
   ) {
-    throw new HttpError(422, "Nothing to change: send name, project, requirement or choice.", {
-      "(body)": ["send at least one of name, project, requirement, choice"],
+    throw new HttpError(422, "Nothing to change: send name, project, requirement, choice or plan.", {
+      "(body)": ["send at least one of name, project, requirement, choice, plan"],
     });
   }
-  const evaluated = evaluateDesign(body.requirement ?? current.requirement, body.choice ?? current.choice);
+  // A body's own choice or plan wins (either kind may become the other); else the saved one is re-evaluated.
+  const evaluated = evaluatePicked(
+    body.requirement ?? current.requirement,
+    body.plan !== undefined || body.choice !== undefined
+      ? pickedOf(body)
+      : pickedOf({ choice: current.choice ?? undefined, plan: current.plan ?? undefined }),
+  );
   const name = body.name ?? design.name;
   const project = body.project === undefined ? design.project : (body.project ?? null);
   const changed = changedFields(
-    { name: design.name, project: design.project, requirement: current.requirement, choice: current.choice },
-    { name, project, requirement: evaluated.requirement, choice: evaluated.choice },
+    {
+      name: design.name,
+      project: design.project,
+      requirement: current.requirement,
+      choice: current.choice,
+      plan: current.plan,
+    },
+    { name, project, requirement: evaluated.requirement, choice: evaluated.choice, plan: evaluated.plan },
   );
   // API v2: a PATCH that changes nothing (a rename to the same name included) makes no revision.
   if (changed.length === 0) return { revision: design.revision, unchanged: true };

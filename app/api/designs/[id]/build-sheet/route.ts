@@ -5,10 +5,10 @@ import { listLibrary } from "@/db/queries/library";
 import { apiRoute } from "@/lib/auth/gate";
 import { attachment, exportFileName } from "@/lib/build-sheet/exports";
 import { renderBuildSheet } from "@/lib/build-sheet/render";
-import { designViewFor } from "@/lib/saved-designs/access";
+import { pairDesignViewFor } from "@/lib/saved-designs/access";
 
 export const GET = apiRoute({ action: "design.read", doing: "download build sheets" }, async ({ caller, params }) => {
-  const view = await designViewFor(caller, params.id ?? "");
+  const view = await pairDesignViewFor(caller, params.id ?? "", "The build sheet");
   // The team library names the parts the pair came from.
   const library = await listLibrary(caller.teamId);
   const pdf = await renderBuildSheet(view, { team: caller.teamName, generatedAt: new Date() }, library);

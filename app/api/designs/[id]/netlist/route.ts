@@ -2,13 +2,13 @@
 // POST /api/netlist (the engine's buildNetlist); `?offset=0` leaves the amplifier offset out.
 import { apiRoute } from "@/lib/auth/gate";
 import { attachment, designNetlist, exportFileName } from "@/lib/build-sheet/exports";
-import { designViewFor } from "@/lib/saved-designs/access";
+import { pairDesignViewFor } from "@/lib/saved-designs/access";
 import { netlistQuery } from "@/lib/route-schemas";
 
 export const GET = apiRoute(
   { action: "design.read", doing: "download netlists", query: netlistQuery },
   async ({ caller, params, query }) => {
-    const view = await designViewFor(caller, params.id ?? "");
+    const view = await pairDesignViewFor(caller, params.id ?? "", "The netlist");
     const text = designNetlist(view, { includeOffset: query.offset !== "0" });
     return new Response(text, {
       headers: {

@@ -1,7 +1,7 @@
 import { insertProfile, listProfiles } from "@/db/queries/profiles";
 import { apiRoute } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
-import { designViewFor } from "@/lib/saved-designs/access";
+import { designViewFor, pairDesignViewFor } from "@/lib/saved-designs/access";
 import { json } from "@/lib/http";
 import { MAX_PROFILE_BYTES, nonFiniteFigure, parseProfileCsv, profileDesignOf, summarizeProfile } from "@/lib/profile";
 import { readCsvUpload } from "@/lib/read-upload";
@@ -18,7 +18,7 @@ export const GET = apiRoute({ action: "design.read", doing: "read current profil
  * is 422 naming the row and column, over 10 MB is 413, and nothing is stored either way.
  */
 export const POST = apiRoute({ action: "profile.upload" }, async ({ caller, params, request }) => {
-  const design = await designViewFor(caller, params.id ?? "");
+  const design = await pairDesignViewFor(caller, params.id ?? "", "Checking a current profile");
   const upload = await readCsvUpload(request, MAX_PROFILE_BYTES);
   const parsed = parseProfileCsv(upload.text);
   if (!parsed.ok) {

@@ -1,6 +1,6 @@
 import { deleteProfile, getProfile, profileUploader } from "@/db/queries/profiles";
 import { apiRoute, authorize } from "@/lib/auth/gate";
-import { designViewFor } from "@/lib/saved-designs/access";
+import { designViewFor, pairDesignViewFor } from "@/lib/saved-designs/access";
 import { profileWindowQuery } from "@/lib/route-schemas";
 import { HttpError } from "@/lib/http";
 import { isUuid } from "@/lib/ids";
@@ -20,7 +20,7 @@ function profileIdOf(raw: string | undefined): string {
 export const GET = apiRoute(
   { action: "design.read", doing: "read current profiles", query: profileWindowQuery },
   async ({ caller, params, query }) => {
-    const design = await designViewFor(caller, params.id ?? "");
+    const design = await pairDesignViewFor(caller, params.id ?? "", "Checking a current profile");
     const profile = await getProfile(design.id, profileIdOf(params.profileId));
     if (!profile) throw profileNotFound();
     const judged = profileDesignOf(design);

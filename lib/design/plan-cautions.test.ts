@@ -1,0 +1,36 @@
+import { describe, expect, it } from "vitest";
+import { planCautions, unprotectedShuntW } from "./plan-cautions";
+import { evaluatePlan } from "./plan-evaluation";
+import { solve } from "./solve";
+import { req } from "./test-helpers";
+
+// docs/model.md §6: the demo logger, 3 µA–180 mA on a 3.0 V cell, 60 mV allowed.
+const logger = req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } });
+
+describe("cautions for a range plan", () => {
+  const proposed = solve(logger).rangePlan;
+  if (!proposed) throw new Error("no plan");
+  const e = evaluatePlan(logger, proposed);
+  if (!e.ok) throw new Error(e.message);
+
+  it("a low range left in at full current: the supply across it, V²/R, beyond its rating (Ohm's and Joule's laws)", () => {
+    const low = e.ranges[0];
+    if (!low) throw new Error("no low range");
+    // 180 mA through tens of ohms would need volts the 3.0 V cell does not have: the cell sets the drop.
+    expect(0.18 * low.shuntOhms).toBeGreaterThan(3);
+    expect(unprotectedShuntW(logger, low)).toBeCloseTo((3 * 3) / low.shuntOhms, 12);
+    const c = planCautions(logger, e).find((x) => x.key === "range-switch");
+    expect(c?.severity).toBe("bad");
+    expect(c?.text).toMatch(/browns out/);
+    expect(c?.text).toMatch(/it burns/);
+    expect(c?.text).toMatch(/make-before-break/);
+    expect(c?.text).toMatch(/60 mV/);
+  });
+
+  it("keeps the usual notes (fuse, codes) after the hazards", () => {
+    const keys = planCautions(logger, e).map((c) => c.key);
+    expect(keys).toContain("fuse");
+    expect(keys).toContain("codes");
+    expect(keys.indexOf("range-switch")).toBeLessThan(keys.indexOf("fuse"));
+  });
+});
