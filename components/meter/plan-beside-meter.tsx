@@ -5,11 +5,12 @@ import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMemo } from "react";
 import { formatSI } from "@/lib/design/format";
-import { meterBesidePlan, type LoadVoltageSeries } from "@/lib/design/plan-curve";
+import { meterBesidePlan, type LoadVoltageSeries } from "@/lib/design/plan-stretches";
 import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { Requirement } from "@/lib/design/requirement";
 import { logDomain, logTicks } from "@/components/charts/axes";
 import { budgetColours, usePalette } from "@/components/charts/palette";
+import { SvgFrame } from "@/components/charts/svg-frame";
 import { useWidth } from "@/components/charts/use-width";
 import { Select } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
@@ -170,33 +171,17 @@ function LoadVoltageChart({
             role="img"
             aria-label={`Voltage left at the load against current, for ${series.map((s) => s.label).join(", ")}`}
           >
-            {logTicks(xd[0], xd[1], width < 480 ? 4 : 8).map((t) => (
-              <g key={`x${t}`}>
-                <line x1={sx(t)} x2={sx(t)} y1={M.top} y2={M.top + h} stroke={p.line} strokeWidth={0.5} />
-                <text x={sx(t)} y={M.top + h + 13} textAnchor="middle" fontSize={10} fill={p.muted} className="num">
-                  {formatSI(t, "A", 2)}
-                </text>
-              </g>
-            ))}
-            {yTicks.map((t) => (
-              <g key={`y${t}`}>
-                <line x1={M.left} x2={M.left + w} y1={sy(t)} y2={sy(t)} stroke={p.line} strokeWidth={0.5} />
-                <text x={M.left - 4} y={sy(t) + 3} textAnchor="end" fontSize={10} fill={p.muted} className="num">
-                  {formatSI(t, "V", 3)}
-                </text>
-              </g>
-            ))}
-            <text x={M.left + w / 2} y={HEIGHT - 4} textAnchor="middle" fontSize={10} fill={p.muted}>
-              Load current
-            </text>
-            <text
-              transform={`translate(12 ${M.top + h / 2}) rotate(-90)`}
-              textAnchor="middle"
-              fontSize={10}
-              fill={p.muted}
-            >
-              Voltage at the load
-            </text>
+            <SvgFrame
+              frame={{ left: M.left, top: M.top, width: w, height: h, total: HEIGHT }}
+              palette={p}
+              xTicks={logTicks(xd[0], xd[1], width < 480 ? 4 : 8)}
+              yTicks={yTicks}
+              sx={sx}
+              sy={sy}
+              yTick={(v) => formatSI(v, "V", 3)}
+              xTitle="Load current"
+              yTitle="Voltage at the load"
+            />
             <line
               x1={M.left}
               x2={M.left + w}

@@ -8,7 +8,7 @@ import type { PlanChoice } from "@/lib/design/plan-choice";
 import { moveSwitchPoint, withRangePair, type RangeCandidates } from "@/lib/design/range-candidates";
 import { SWITCH_DOWN_FRACTION } from "@/lib/design/range-plan";
 import { parseQuantity } from "@/lib/design/units";
-import { PlanCurveChart, PlanCurveLegend } from "@/components/charts/plan-curve-chart";
+import { PlanStretchChart, PlanStretchLegend } from "@/components/charts/plan-stretch-chart";
 import { RangePlanChart } from "@/components/charts/range-plan-chart";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
@@ -90,11 +90,11 @@ export function PlanEditor({
         {checked && (
           <div className="flex flex-col gap-3">
             <div className="grid grid-cols-1 gap-4 xl:grid-cols-3">
-              <PlanCurveChart curves={checked.curves} kind="error" />
-              <PlanCurveChart curves={checked.curves} kind="burden" />
-              <PlanCurveChart curves={checked.curves} kind="load" />
+              <PlanStretchChart curves={checked.curves} kind="error" />
+              <PlanStretchChart curves={checked.curves} kind="burden" />
+              <PlanStretchChart curves={checked.curves} kind="load" />
             </div>
-            <PlanCurveLegend curves={checked.curves} />
+            <PlanStretchLegend curves={checked.curves} />
           </div>
         )}
         {checked?.verdict.sound && (

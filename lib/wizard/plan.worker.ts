@@ -1,6 +1,6 @@
 // The plan editor's engine work off the main thread: each range's own sweep, the verdict on the
 // adjusted plan and its curves. Only the latest request matters; the page drops stale replies.
-import { planCurves } from "@/lib/design/plan-curve";
+import { planStretches } from "@/lib/design/plan-stretches";
 import { rangeCandidates } from "@/lib/design/range-candidates";
 import { planVerdict } from "./plan-verdict";
 import type { PlanCheckReply, PlanCheckRequest } from "./plan-protocol";
@@ -17,7 +17,7 @@ self.addEventListener("message", (event: MessageEvent<PlanCheckRequest>) => {
       ok: true,
       verdict: planVerdict(requirement, plan),
       candidates,
-      curves: planCurves(requirement, plan),
+      curves: planStretches(requirement, plan),
     });
   } catch (e) {
     post({ id, ok: false, message: e instanceof Error ? e.message : String(e) });

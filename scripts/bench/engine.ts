@@ -5,7 +5,7 @@ import { buildModel, type Model } from "../../lib/design/model";
 import { parseRequirement, type RequirementInput } from "../../lib/design/requirement";
 import { solve } from "../../lib/design/solve";
 import { evaluatePlan } from "../../lib/design/plan-evaluation";
-import { planCurves } from "../../lib/design/plan-curve";
+import { planStretches } from "../../lib/design/plan-stretches";
 import { moveSwitchPoint, planChoiceOf, rangeCandidates } from "../../lib/design/range-candidates";
 import { sweepGrid, sweepValues } from "../../lib/design/sweep";
 
@@ -208,7 +208,7 @@ export async function run(): Promise<Record<string, number>> {
     if (!moved.ok) throw new Error(moved.message);
     moved.plan.ranges.forEach((_, k) => rangeCandidates(lr, moved.plan, k));
     evaluatePlan(lr, moved.plan);
-    planCurves(lr, moved.plan);
+    planStretches(lr, moved.plan);
   };
   const solveLogger = () => solve(lr, { diagnose: false });
   const planTimes: number[] = [];

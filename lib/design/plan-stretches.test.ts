@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { benchMeterRanges, meterBesidePlan, planCurves } from "./plan-curve";
+import { benchMeterRanges, meterBesidePlan, planStretches } from "./plan-stretches";
 import { planChoiceOf } from "./range-candidates";
 import { solve } from "./solve";
 import { req } from "./test-helpers";
@@ -10,7 +10,7 @@ const plan = planChoiceOf(solve(logger, { diagnose: false }).rangePlan!);
 const ron = logger.rangeSwitch.onResistance;
 
 describe("the plan as one instrument across the span", () => {
-  const curves = planCurves(logger, plan, 25);
+  const curves = planStretches(logger, plan, 25);
 
   it("draws each range over its own stretch, the stretches meeting in the hysteresis bands", () => {
     expect(curves.ranges).toHaveLength(plan.ranges.length);

@@ -8,7 +8,7 @@ import type { PlanChoice, SwitchPoint } from "./plan-choice";
 import { subModel } from "./range-plan";
 import type { Requirement } from "./requirement";
 
-export type PlanCurvePoint = {
+export type PlanStretchPoint = {
   currentA: number;
   worstPercent: number;
   rssPercent: number;
@@ -17,17 +17,17 @@ export type PlanCurvePoint = {
   loadVoltageV: number;
 };
 
-export type PlanCurveRange = {
+export type PlanStretch = {
   index: number;
   minA: number;
   maxA: number;
   shuntOhms: number;
   gain: number;
-  points: PlanCurvePoint[];
+  points: PlanStretchPoint[];
 };
 
-export type PlanCurves = {
-  ranges: PlanCurveRange[];
+export type PlanStretches = {
+  ranges: PlanStretch[];
   switchPoints: SwitchPoint[];
   supplyV: number;
   dropMaxV: number;
@@ -43,7 +43,7 @@ export type PlanCurves = {
  * self-heating (range-plan.ts subModel), and the drop I·(R + Ron) of its path in the
  * requirement's load model (operatingBurden with the load drawing I at full supply).
  */
-export function planCurves(req: Requirement, plan: PlanChoice, pointsPerRange = 40): PlanCurves {
+export function planStretches(req: Requirement, plan: PlanChoice, pointsPerRange = 40): PlanStretches {
   const m = buildModel(req);
   const ron = req.rangeSwitch.onResistance;
   const ranges = plan.ranges.map((r, index) => {

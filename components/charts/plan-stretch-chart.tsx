@@ -3,10 +3,11 @@
 // switch points (up: solid, down: dashed) and the hysteresis band between them shaded. Ranges
 // differ by Okabe–Ito hue, by dash pattern and by a numbered label, never by colour alone.
 import { useId } from "react";
-import type { PlanCurvePoint, PlanCurves } from "@/lib/design/plan-curve";
+import type { PlanStretchPoint, PlanStretches } from "@/lib/design/plan-stretches";
 import { formatPercent, formatSI } from "@/lib/design/format";
 import { logDomain, logTicks } from "./axes";
 import { budgetColours, usePalette } from "./palette";
+import { SvgFrame } from "./svg-frame";
 import { useWidth } from "./use-width";
 
 /** Per range: an Okabe–Ito hue (blue, vermillion, bluish green) and a dash pattern. */
@@ -16,14 +17,14 @@ export const planRangeStyles = [
   { colour: budgetColours.light[2], dash: "2 3", dashLabel: "dots" },
 ] as const;
 
-export type PlanCurveKind = "error" | "burden" | "load";
+export type PlanStretchKind = "error" | "burden" | "load";
 
 const HEIGHT = 230;
 const M = { top: 14, right: 14, bottom: 40, left: 70 };
 
 const spec: Record<
-  PlanCurveKind,
-  { title: string; axis: string; value: (q: PlanCurvePoint) => number; log: boolean; tick: (v: number) => string }
+  PlanStretchKind,
+  { title: string; axis: string; value: (q: PlanStretchPoint) => number; log: boolean; tick: (v: number) => string }
 > = {
   error: {
     title: "Worst-case error across the span",
@@ -57,7 +58,7 @@ function linTicks(lo: number, hi: number, n = 5): number[] {
   return out;
 }
 
-export function PlanCurveChart({ curves, kind }: { curves: PlanCurves; kind: PlanCurveKind }) {
+export function PlanStretchChart({ curves, kind }: { curves: PlanStretches; kind: PlanStretchKind }) {
   const { ref, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const clipId = `plan-clip-${useId().replace(/:/g, "")}`;
@@ -89,7 +90,7 @@ export function PlanCurveChart({ curves, kind }: { curves: PlanCurves; kind: Pla
       : M.top + h - ((v - yd[0]) / (yd[1] - yd[0])) * h;
   const yTicks = s.log ? logTicks(yd[0], yd[1], 6) : linTicks(yd[0], yd[1]);
   const xTicks = logTicks(xd[0], xd[1], width < 480 ? 4 : 8);
-  const path = (pts: PlanCurvePoint[]) =>
+  const path = (pts: PlanStretchPoint[]) =>
     pts
       .filter((q) => Number.isFinite(s.value(q)) && (!s.log || s.value(q) > 0))
       .map((q, i) => `${i === 0 ? "M" : "L"}${sx(q.currentA).toFixed(1)},${sy(s.value(q)).toFixed(1)}`)
@@ -133,33 +134,17 @@ export function PlanCurveChart({ curves, kind }: { curves: PlanCurves; kind: Pla
                 </text>
               </g>
             ))}
-            {xTicks.map((t) => (
-              <g key={`x${t}`}>
-                <line x1={sx(t)} x2={sx(t)} y1={M.top} y2={M.top + h} stroke={p.line} strokeWidth={0.5} />
-                <text x={sx(t)} y={M.top + h + 13} textAnchor="middle" fontSize={10} fill={p.muted} className="num">
-                  {formatSI(t, "A", 2)}
-                </text>
-              </g>
-            ))}
-            {yTicks.map((t) => (
-              <g key={`y${t}`}>
-                <line x1={M.left} x2={M.left + w} y1={sy(t)} y2={sy(t)} stroke={p.line} strokeWidth={0.5} />
-                <text x={M.left - 4} y={sy(t) + 3} textAnchor="end" fontSize={10} fill={p.muted} className="num">
-                  {s.tick(t)}
-                </text>
-              </g>
-            ))}
-            <text x={M.left + w / 2} y={HEIGHT - 4} textAnchor="middle" fontSize={10} fill={p.muted}>
-              Current
-            </text>
-            <text
-              transform={`translate(12 ${M.top + h / 2}) rotate(-90)`}
-              textAnchor="middle"
-              fontSize={10}
-              fill={p.muted}
-            >
-              {s.axis}
-            </text>
+            <SvgFrame
+              frame={{ left: M.left, top: M.top, width: w, height: h, total: HEIGHT }}
+              palette={p}
+              xTicks={xTicks}
+              yTicks={yTicks}
+              sx={sx}
+              sy={sy}
+              yTick={s.tick}
+              xTitle="Current"
+              yTitle={s.axis}
+            />
             {kind === "load" && (
               <line
                 x1={M.left}
@@ -213,7 +198,7 @@ export function PlanCurveChart({ curves, kind }: { curves: PlanCurves; kind: Pla
 }
 
 /** One legend for the three plan charts: ranges by hue, dash and number; switch points; limits. */
-export function PlanCurveLegend({ curves }: { curves: PlanCurves }) {
+export function PlanStretchLegend({ curves }: { curves: PlanStretches }) {
   const p = usePalette();
   return (
     <ul className="flex flex-wrap gap-x-4 gap-y-1 text-2xs text-ink-muted" aria-label="Legend">
