@@ -149,7 +149,7 @@ test("the meter view: a bench meter's three ranges beside the designed plan", as
     await signInPage(page, "designer");
     await page.goto("/meter");
     const panel = page.getByTestId("plan-beside-meter");
-    await expect(panel.getByLabel("Range plan")).toBeVisible();
+    await expect(panel.getByLabel("Range plan", { exact: true })).toBeVisible();
     await expect(page.getByTestId("meter-plan-chart").locator("svg path")).toHaveCount(4);
     for (const key of ["amps", "milliamps", "microamps", "plan"])
       await expect(page.getByTestId(`meter-vs-${key}-full`)).not.toBeEmpty();
