@@ -41,7 +41,7 @@ export const csvColumns = [
   "unit",
 ] as const;
 
-function csvCell(p: Part, col: (typeof csvColumns)[number]): CsvCell {
+export function csvCell(p: Part, col: (typeof csvColumns)[number]): CsvCell {
   if (col === "value_si") return p.valueSI;
   if (col === "unit") return p.unit ?? "";
   return p[col];

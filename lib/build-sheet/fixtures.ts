@@ -5,6 +5,7 @@ import {
   parseRequirement,
   solve,
   type Choice,
+  type PlanChoice,
   type Requirement,
   type RequirementInput,
 } from "@/lib/design";
@@ -65,5 +66,24 @@ export function fixtureView(
     updatedAt: "2026-11-30T10:00:00.000Z",
     approval: status === "approved" ? { byName: "Demo Reviewer", at: "2026-11-30T15:42:00.000Z", revision } : null,
     revisions: [{ revision, authorName: "Demo Designer", createdAt: "2026-11-30T10:00:00.000Z" }],
+  };
+}
+
+/** The demo logger's whole span, 3 µA asleep to 180 mA transmitting: too wide for one range. */
+export const loggerPlanRequirement: RequirementInput = {
+  current: { min: "3 uA", max: "180 mA" },
+  supply: { voltage: "3.0 V", side: "low" },
+  drop: { max: "60 mV" },
+  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+  resolution: { countsAtMin: 10 },
+};
+
+/** The plan the engine proposes for a requirement, in the shape a designer saves. */
+export function proposedPlan(req: Requirement): PlanChoice {
+  const plan = solve(req).rangePlan;
+  if (!plan) throw new Error("the engine proposed no range plan for the fixture requirement");
+  return {
+    ranges: plan.ranges.map(({ minA, maxA, shuntOhms, gain }) => ({ minA, maxA, shuntOhms, gain })),
+    switchPoints: plan.switchPoints.map((p) => ({ ...p })),
   };
 }

@@ -27,3 +27,4 @@ export const noiseDensity = (vPerRtHz: number) => formatSI(vPerRtHz, "V/rtHz");
 
 export const decibels = (db: number) => formatSI(db, "dB", 4);
 export const farads = (v: number) => formatSI(v, "F");
+export const seconds = (v: number) => formatSI(v, "s");

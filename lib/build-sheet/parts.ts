@@ -45,6 +45,17 @@ export function gainResistors(req: Requirement, choice: Choice): { rfOhms: numbe
   return resistorPairFor(choice.gain, set.series, req.amplifier.topology === "difference" ? 0 : 1);
 }
 
+/** What every shunt's part row says of its tolerance, tempco and rating. */
+export function shuntPartCommon(req: Requirement, ohms: number, ratingW: number) {
+  return {
+    valueSI: ohms,
+    unit: "ohm",
+    tolerance: `±${f.fraction(req.shunt.tolerance)}`,
+    tempco: `${f.ppmPerK(req.shunt.tempco)} or better`,
+    rating: f.watts(ratingW),
+  };
+}
+
 export function partsList(
   req: Requirement,
   choice: Choice,
@@ -57,68 +68,19 @@ export function partsList(
   const pair = gainResistors(req, choice);
   const parts: Part[] = [
     {
+      ...shuntPartCommon(req, choice.shuntOhms, metrics.ratingW),
       designator: "R1",
       part: `Shunt resistor, ${s.series} value${kelvinAdvice(choice.shuntOhms) === "part" ? ", 4-terminal" : ""}`,
       value: f.ohms(choice.shuntOhms),
-      valueSI: choice.shuntOhms,
-      unit: "ohm",
-      tolerance: `±${f.fraction(s.tolerance)}`,
-      tempco: `${f.ppmPerK(s.tempco)} or better`,
-      rating: f.watts(metrics.ratingW),
       notes:
         `Dissipates ${f.watts(metrics.dissipationW)} at the maximum current, ${f.fraction(usedOfRating)} of its rating ` +
         `(derating ${f.fraction(s.derating)}: use at most that share of the rating); self-heating about ${f.kelvin(metrics.selfHeatingK)}. ` +
         kelvinAdviceText(choice.shuntOhms) +
         ".",
     },
-    {
-      designator: "U1",
-      part: pair
-        ? "Precision amplifier, non-inverting stage (zero-drift op-amp or instrumentation amplifier)"
-        : "Current-sense amplifier, fixed gain",
-      value: `Gain ${f.gain(choice.gain)}`,
-      valueSI: choice.gain,
-      unit: "V/V",
-      tolerance: `gain error at most ${f.fraction(a.gainError)}`,
-      tempco: `gain drift at most ${f.ppmPerK(a.gainDrift)}`,
-      rating: `supply ${f.volts(a.supply)}`,
-      notes:
-        `Offset at most ${f.volts(a.offset)} (drift at most ${f.volts(a.offsetDrift)}/K); bias current at most ${f.amps(a.biasCurrent)}; ` +
-        `noise at most ${f.noiseDensity(a.noiseDensity)}; gain-bandwidth at least ${f.hertz(a.gbw)} (bandwidth ${f.hertz(metrics.bandwidthHz)} at this gain); ` +
-        `output swings to within ${f.volts(a.swingLow)} of ground and ${f.volts(a.swingHigh)} of its supply; CMRR at least ${f.decibels(a.cmrrDb)}; ` +
-        (high
-          ? `input common-mode range must include ${f.volts(req.supply.voltage)} (high side: both inputs sit at the supply).`
-          : "input common-mode range must include 0 V (low side: both inputs sit at ground)."),
-    },
+    amplifierPart(req, { designator: "U1", gain: choice.gain, bandwidthHz: metrics.bandwidthHz }),
   ];
-  if (pair) {
-    const note =
-      "Sets the gain with R3 (G = 1 + R2/R3); 0.1 % and 25 ppm/K or better, same type for both so their drift tracks (common practice, no source).";
-    parts.push(
-      {
-        designator: "R2",
-        part: `Feedback resistor, ${req.amplifier.gainSet!.series} value`,
-        value: f.ohms(pair.rfOhms),
-        valueSI: pair.rfOhms,
-        unit: "ohm",
-        tolerance: "±0.1 %",
-        tempco: "25 ppm/K or better",
-        rating: f.watts(0.063),
-        notes: note,
-      },
-      {
-        designator: "R3",
-        part: `Gain resistor, ${req.amplifier.gainSet!.series} value`,
-        value: f.ohms(pair.rgOhms),
-        valueSI: pair.rgOhms,
-        unit: "ohm",
-        tolerance: "±0.1 %",
-        tempco: "25 ppm/K or better",
-        rating: f.watts(0.063),
-        notes: "Pairs with R2; place both next to U1.",
-      },
-    );
-  }
+  if (pair) parts.push(...gainPairParts(req, pair, { rf: "R2", rg: "R3", amplifier: "U1" }));
   parts.push(
     {
       designator: "C1",
@@ -144,6 +106,68 @@ export function partsList(
     },
   );
   return parts;
+}
+
+/**
+ * An amplifier's part row: its gain, and the figures the requirement asks of it. `lead` opens the
+ * notes (what it is wired to); `forWhat` names what it serves in the part's name (", range 2").
+ */
+export function amplifierPart(
+  req: Requirement,
+  o: { designator: string; gain: number; bandwidthHz: number; forWhat?: string; lead?: string },
+): Part {
+  const a = req.amplifier;
+  const forWhat = o.forWhat ?? "";
+  return {
+    designator: o.designator,
+    part: a.gainSet
+      ? `Precision amplifier${forWhat}, non-inverting stage (zero-drift op-amp or instrumentation amplifier)`
+      : `Current-sense amplifier${forWhat}, fixed gain`,
+    value: `Gain ${f.gain(o.gain)}`,
+    valueSI: o.gain,
+    unit: "V/V",
+    tolerance: `gain error at most ${f.fraction(a.gainError)}`,
+    tempco: `gain drift at most ${f.ppmPerK(a.gainDrift)}`,
+    rating: `supply ${f.volts(a.supply)}`,
+    notes:
+      (o.lead ?? "") +
+      `Offset at most ${f.volts(a.offset)} (drift at most ${f.volts(a.offsetDrift)}/K); bias current at most ${f.amps(a.biasCurrent)}; ` +
+      `noise at most ${f.noiseDensity(a.noiseDensity)}; gain-bandwidth at least ${f.hertz(a.gbw)} (bandwidth ${f.hertz(o.bandwidthHz)} at this gain); ` +
+      `output swings to within ${f.volts(a.swingLow)} of ground and ${f.volts(a.swingHigh)} of its supply; CMRR at least ${f.decibels(a.cmrrDb)}; ` +
+      (req.supply.side === "high"
+        ? `input common-mode range must include ${f.volts(req.supply.voltage)} (high side: both inputs sit at the supply).`
+        : "input common-mode range must include 0 V (low side: both inputs sit at ground)."),
+  };
+}
+
+/** The two resistors that set a non-inverting stage's gain, G = 1 + Rf/Rg. `code`: write values with their IEC 60062 code too. */
+export function gainPairParts(
+  req: Requirement,
+  pair: { rfOhms: number; rgOhms: number },
+  d: { rf: string; rg: string; amplifier: string },
+  code?: (ohms: number) => string,
+): Part[] {
+  const series = req.amplifier.gainSet?.series ?? "";
+  const value = (ohms: number) => (code ? `${f.ohms(ohms)} (${code(ohms)})` : f.ohms(ohms));
+  const common = { unit: "ohm", tolerance: "±0.1 %", tempco: "25 ppm/K or better", rating: f.watts(0.063) };
+  return [
+    {
+      ...common,
+      designator: d.rf,
+      part: `Feedback resistor, ${series} value`,
+      value: value(pair.rfOhms),
+      valueSI: pair.rfOhms,
+      notes: `Sets the gain with ${d.rg} (G = 1 + ${d.rf}/${d.rg}); 0.1 % and 25 ppm/K or better, same type for both so their drift tracks (common practice, no source).`,
+    },
+    {
+      ...common,
+      designator: d.rg,
+      part: `Gain resistor, ${series} value`,
+      value: value(pair.rgOhms),
+      valueSI: pair.rgOhms,
+      notes: `Pairs with ${d.rf}; place both next to ${d.amplifier}.`,
+    },
+  ];
 }
 
 export function readoutText(req: Requirement): string {

@@ -7,9 +7,12 @@ import { BuildSheetDocument, PLANNED_PAGES, type SheetMeta } from "./pdf/documen
 import { oneLine } from "@/lib/text-field";
 import { namesOnOneLine, sheetData, type SheetData } from "./sheet-data";
 import type { LibraryParts } from "./library-parts";
+import type { PlanChoice, Requirement } from "@/lib/design";
+import { PlanBuildSheetDocument, type PlanSheetView } from "./pdf/plan-document";
+import { planSheetData } from "./plan-sheet-data";
 
 /** Registers the typefaces a sheet's text needs and answers the family list to set it in. */
-function fontsFor(view: DesignView, data: SheetData, meta: SheetMeta): string[] {
+function fontsFor(view: unknown, data: unknown, meta: SheetMeta): string[] {
   Font.registerHyphenationCallback(breakPoints);
   return sheetFonts(JSON.stringify([view, data, meta.team]));
 }
@@ -45,5 +48,21 @@ export async function renderSheet(view: DesignView, data: SheetData, opts: Sheet
       fonts,
       numbering: { kind: "dynamic" },
     }) as unknown as DocElement,
+  );
+}
+
+/** A range plan's sheet (lib/build-sheet/plan-sheet-data.ts words the engine's figures). */
+export async function renderPlanBuildSheet(
+  view: PlanSheetView,
+  req: Requirement,
+  plan: PlanChoice,
+  opts: SheetMeta,
+): Promise<Buffer> {
+  view = namesOnOneLine(view);
+  opts = { ...opts, team: oneLine(opts.team) };
+  const data = planSheetData(req, plan);
+  const fonts = fontsFor(view, data, opts);
+  return renderToBuffer(
+    createElement(PlanBuildSheetDocument, { view, req, data, meta: opts, fonts }) as unknown as DocElement,
   );
 }

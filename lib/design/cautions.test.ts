@@ -9,9 +9,14 @@ import {
   BURNS_ON_BRIEF_TOUCH_C,
   designCautions,
   HAZARDOUS_DC_V,
+  switchCautions,
   shuntTouchTemperatureC,
 } from "./cautions";
 import { req } from "./test-helpers";
+import { formatSI } from "./format";
+import { evaluatePlan } from "./plan-evaluation";
+import { planCautions } from "./plan-cautions";
+import { solve } from "./solve";
 import type { CandidateDetail } from "./types";
 
 const logger = req({
@@ -72,5 +77,40 @@ describe("voltage", () => {
     for (const r of [logger, at("120 V", "high")]) {
       expect(keys(r, base).slice(-3)).toEqual(["fuse:note", "inductive:note", "codes:note"]);
     }
+  });
+});
+
+describe("a range plan's switch cautions (issue 13)", () => {
+  const demo = req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } });
+  const plan = solve(demo).rangePlan!;
+  const ev = evaluatePlan(demo, { ranges: plan.ranges, switchPoints: plan.switchPoints });
+  if (!ev.ok) throw new Error(ev.message);
+  const list = switchCautions(demo, ev.ranges);
+  const protection = list.find((c) => c.key === "range-protection");
+
+  it("names the protection and the current each lower range carries until it acts (Ohm's law at the allowed drop)", () => {
+    const ron = demo.rangeSwitch.onResistance;
+    ev.ranges.slice(0, -1).forEach((r, k) => {
+      // I = 60 mV/(R + Ron); P = I²·R (Joule).
+      const i = 0.06 / (r.shuntOhms + ron);
+      expect(protection?.text).toContain(
+        `R${k + 1} (range ${k + 1}, ${formatSI(r.shuntOhms, "Ω")}) carries at most ${formatSI(i, "A")}`,
+      );
+      expect(protection?.text).toContain(formatSI(i * i * r.shuntOhms, "W"));
+    });
+    expect(protection?.text).toContain("closes Q3");
+    expect(protection?.text).toContain("U4");
+  });
+
+  it("says what the top switch dissipates: I²·Ron at the full current", () => {
+    const heat = list.find((c) => c.key === "switch-heat");
+    expect(heat?.text).toContain(formatSI(0.18 * 0.18 * demo.rangeSwitch.onResistance, "W"));
+  });
+
+  it("the plan's cautions carry them once each, before the notes every build needs", () => {
+    const all = planCautions(demo, ev).map((c) => c.key);
+    expect(all.filter((k) => k === "range-protection")).toHaveLength(1);
+    expect(all.indexOf("range-protection")).toBeLessThan(all.indexOf("fuse"));
+    expect(all).toEqual(expect.arrayContaining(["range-switch", "switch-heat", "codes"]));
   });
 });

@@ -3,10 +3,20 @@
 import { REFERENCE_C } from "./model";
 import type { Requirement } from "./requirement";
 import type { CandidateDetail } from "./types";
+import type { PlannedRange } from "./range-plan";
 import { formatSI } from "./format";
 
 export type CautionKey =
-  "hot" | "hazardous" | "common-mode" | "mains" | "fuse" | "inductive" | "codes" | "range-switch";
+  | "hot"
+  | "hazardous"
+  | "common-mode"
+  | "mains"
+  | "fuse"
+  | "inductive"
+  | "codes"
+  | "range-switch"
+  | "range-protection"
+  | "switch-heat";
 
 /** bad: a hazard this design has; warn: a hazard it may have; note: what every build needs. */
 export type Caution = { key: CautionKey; severity: "bad" | "warn" | "note"; title: string; text: string };
@@ -114,4 +124,39 @@ export function designCautions(req: Requirement, m: CandidateDetail, shunt = "R1
     },
   );
   return out;
+}
+
+/**
+ * A range plan's switch, beyond the failure the plan cautions name: what the protection does for
+ * each lower range (the current it lets through before the top range's switch closes, Ohm's law
+ * at the allowed drop) and how to prove it on the bench, and the top switch's own heat (I²·Ron).
+ * Designators as on the plan's build sheet: shunts R1…Rn, switches Q1…Qn, the comparator U(n+1).
+ */
+export function switchCautions(req: Requirement, ranges: PlannedRange[]): Caution[] {
+  const n = ranges.length;
+  const iFull = req.current.max;
+  const ron = req.rangeSwitch.onResistance;
+  const lower = ranges
+    .slice(0, -1)
+    .map(
+      (r, k) =>
+        `R${k + 1} (range ${k + 1}, ${formatSI(r.shuntOhms, "Ω")}) carries at most ${formatSI(r.faultCurrentA, "A")} (${formatSI(r.faultCurrentA * r.faultCurrentA * r.shuntOhms, "W")} in its ${formatSI(r.ratingW, "W")} part)`,
+    );
+  return [
+    {
+      key: "range-protection",
+      severity: "warn",
+      title: "What keeps a low range alive at full current",
+      text:
+        `U${n + 1}, a latching comparator, closes Q${n} (the top range's switch) in hardware when the drop across the path in use reaches ${formatSI(req.drop.max, "V")}; until then ${lower.join("; ")}. ` +
+        `It must act faster than the load's current can rise past range 1's top (${formatSI(ranges[0]!.maxA, "A")}). ` +
+        `Prove it on the bench before connecting a battery or a supply that can deliver ${formatSI(iFull, "A")}: select range 1, raise the current slowly past its top, and check that the drop stops at about ${formatSI(req.drop.max, "V")}. Never leave out Q${n} or U${n + 1} to save parts.`,
+    },
+    {
+      key: "switch-heat",
+      severity: "note",
+      title: "The top range's switch carries the full current",
+      text: `Q${n} carries ${formatSI(iFull, "A")} continuously: ${formatSI(iFull * iFull * ron, "W")} at its ${formatSI(ron, "Ω")} on-resistance, more when hot (a MOSFET's on-resistance rises with temperature). Choose one rated for the full current at the highest ambient, with copper area to spread its heat.`,
+    },
+  ];
 }

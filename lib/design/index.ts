@@ -45,3 +45,6 @@ export { evaluatePlan, type PlanEvaluation, type PlanMetrics, type PlanRangeMetr
 export * from "./design-kind";
 export * from "./plan-cautions";
 export * from "./plan-curves";
+export * from "./plan-switching";
+export * from "./plan-netlist";
+export * from "./resistor-code";

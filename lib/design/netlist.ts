@@ -54,47 +54,42 @@ export function buildNetlist(req: Requirement, choice: Choice, opts: NetlistOpti
   if (high) lines.push("VFEED bus sp DC 0");
   lines.push(`RSHUNT sp sn ${spiceNumber(R)}`);
   if (!high) lines.push("VRET sn 0 DC 0");
-  if (model === "constant-current") {
-    lines.push(`* Constant-current load: draws Imax whatever its voltage.`);
-    lines.push(`ILOAD ${la} ${lb} DC ${spiceNumber(iMax)}`);
-  } else if (model === "resistive") {
-    lines.push(`* Resistive load: the resistance that draws Imax at the full supply.`);
-    lines.push(`RLOAD ${la} ${lb} ${spiceNumber(vBus / iMax)}`);
-  } else {
-    const p = vBus * iMax;
-    lines.push(
-      `* Constant-power load: draws Imax at the full supply, P = ${spiceNumber(p)} W, more current as its voltage falls.`,
-    );
-    lines.push(`BLOAD ${la} ${lb} I=${spiceNumber(p)}/max(V(${la},${lb}),${spiceNumber(vBus / 1000)})`);
-    // Steer the operating point to the physical (high-voltage) solution.
-    const burden = operatingBurden(buildModel(req), R);
-    if (Number.isFinite(burden)) {
-      lines.push(high ? `.nodeset V(sn)=${spiceNumber(vBus - burden)}` : `.nodeset V(sp)=${spiceNumber(burden)}`);
-    }
-  }
+  const burden = model === "constant-power" ? operatingBurden(buildModel(req), R) : NaN;
+  loadLines(lines, req, la, lb, iMax, burden);
+  amplifierLines(lines, req, G, includeOffset, opts.worstMismatch ?? false);
+  return lines.join("\n") + "\n";
+}
+
+/**
+ * The amplifier across the shunt between `sp` and `sn`, its output `out` loaded by RREAD, then
+ * `.op` and `.end`: the close of every netlist the engine writes.
+ */
+export function amplifierLines(
+  lines: string[],
+  req: Requirement,
+  G: number,
+  includeOffset: boolean,
+  worstMismatch: boolean,
+) {
   if (req.amplifier.topology === "difference") {
-    differenceStage(lines, req, G, includeOffset, opts.worstMismatch ? (req.amplifier.gainSet?.tolerance ?? 0) : 0);
-    lines.push("RREAD out 0 1e6");
-    lines.push(".op");
-    lines.push(".end");
-    return lines.join("\n") + "\n";
-  }
-  lines.push("* Amplifier: an ideal voltage-controlled voltage source across the shunt,");
-  if (includeOffset) {
-    lines.push(
-      `* with its input offset ${spiceNumber(req.amplifier.offset)} V as a source in series with the + input.`,
-    );
-    lines.push(`VOS spo sp DC ${spiceNumber(req.amplifier.offset)}`);
-    lines.push(`EAMP out 0 spo sn ${spiceNumber(G)}`);
+    differenceStage(lines, req, G, includeOffset, worstMismatch ? (req.amplifier.gainSet?.tolerance ?? 0) : 0);
   } else {
-    lines.push("* offset left out.");
-    lines.push(`EAMP out 0 sp sn ${spiceNumber(G)}`);
+    lines.push("* Amplifier: an ideal voltage-controlled voltage source across the shunt,");
+    if (includeOffset) {
+      lines.push(
+        `* with its input offset ${spiceNumber(req.amplifier.offset)} V as a source in series with the + input.`,
+      );
+      lines.push(`VOS spo sp DC ${spiceNumber(req.amplifier.offset)}`);
+      lines.push(`EAMP out 0 spo sn ${spiceNumber(G)}`);
+    } else {
+      lines.push("* offset left out.");
+      lines.push(`EAMP out 0 sp sn ${spiceNumber(G)}`);
+    }
   }
   // A load on the output keeps `out` from floating in simulators that check it.
   lines.push("RREAD out 0 1e6");
   lines.push(".op");
   lines.push(".end");
-  return lines.join("\n") + "\n";
 }
 
 /** A difference amplifier, G = Rf/Rg: an op-amp (a high-gain source) and its four resistors. */
@@ -116,5 +111,34 @@ function differenceStage(lines: string[], req: Requirement, G: number, includeOf
     lines.push(`EOA out 0 inpo inn ${spiceNumber(OPAMP_OPEN_LOOP_GAIN)}`);
   } else {
     lines.push(`EOA out 0 inp inn ${spiceNumber(OPAMP_OPEN_LOOP_GAIN)}`);
+  }
+}
+
+/**
+ * The load between `la` and `lb`, described by drawing `iTopA` at the full supply in the
+ * requirement's load model. `burdenV`: the engine's drop at that operating point, which steers a
+ * constant-power load's operating point to the physical (high-voltage) solution.
+ */
+export function loadLines(lines: string[], req: Requirement, la: string, lb: string, iTopA: number, burdenV: number) {
+  const vBus = req.supply.voltage;
+  const high = req.supply.side === "high";
+  const model = req.load.model;
+  if (model === "constant-current") {
+    lines.push(`* Constant-current load: draws ${spiceNumber(iTopA)} A whatever its voltage.`);
+    lines.push(`ILOAD ${la} ${lb} DC ${spiceNumber(iTopA)}`);
+  } else if (model === "resistive") {
+    lines.push(`* Resistive load: the resistance that draws ${spiceNumber(iTopA)} A at the full supply.`);
+    lines.push(`RLOAD ${la} ${lb} ${spiceNumber(vBus / iTopA)}`);
+  } else {
+    const p = vBus * iTopA;
+    lines.push(
+      `* Constant-power load: draws ${spiceNumber(iTopA)} A at the full supply, P = ${spiceNumber(p)} W, more current as its voltage falls.`,
+    );
+    lines.push(`BLOAD ${la} ${lb} I=${spiceNumber(p)}/max(V(${la},${lb}),${spiceNumber(vBus / 1000)})`);
+    if (Number.isFinite(burdenV)) {
+      lines.push(
+        high ? `.nodeset V(${la})=${spiceNumber(vBus - burdenV)}` : `.nodeset V(${lb})=${spiceNumber(burdenV)}`,
+      );
+    }
   }
 }

@@ -1,6 +1,6 @@
 // Safety cautions for a range plan: the single-range cautions taken at the range that runs hottest,
 // and the plan's own hazard, a lower range's shunt left in the path at the span's full current.
-import { designCautions, type Caution } from "./cautions";
+import { designCautions, switchCautions, type Caution } from "./cautions";
 import { formatSI } from "./format";
 import type { PlanMetrics, PlanRangeMetrics } from "./plan-evaluation";
 import type { Requirement } from "./requirement";
@@ -45,5 +45,7 @@ export function planCautions(req: Requirement, metrics: PlanMetrics): Caution[] 
       `Use make-before-break switching, and on the bench check that the top range's switch closes when the drop reaches ${formatSI(req.drop.max, "V")} before connecting a battery or a supply that can deliver the full current.`,
   };
   const at = base.findIndex((c) => c.severity === "note");
-  return at < 0 ? [...base, switchCaution] : [...base.slice(0, at), switchCaution, ...base.slice(at)];
+  // The protection that prevents it, and the top switch's heat (cautions.ts).
+  const own = [switchCaution, ...switchCautions(req, ranges)];
+  return at < 0 ? [...base, ...own] : [...base.slice(0, at), ...own, ...base.slice(at)];
 }

@@ -39,6 +39,13 @@ export function defaultCommonMode(topology: Topology, supply: number): { min: nu
 /** Tolerance of gain-setting resistors when the request gives none (from memory: thin-film 0.1 %). */
 export const defaultGainSetTolerance = 0.001;
 
+/**
+ * Time from the current leaving a range to the switch having acted, when the request names none:
+ * a MOSFET range switch driven by a window comparator and its logic acts in about 100 µs (from
+ * memory). A relay takes milliseconds; a firmware decision waits for the next reading.
+ */
+export const RANGE_SWITCH_DELAY_S = 100e-6;
+
 /** Largest grid the solver will sweep in one request (values × gains). */
 export const maxSweepPairs = 2_000_000;
 
@@ -270,6 +277,8 @@ const baseSchema = z.object(
           "Range switch on-resistance",
           nonNegative("Range switch on-resistance"),
         ).optional(),
+        // How long a range change takes to act once the current leaves the range (DEFAULTS.md).
+        delay: q("time", "Range switch delay", nonNegative("Range switch delay")).default(RANGE_SWITCH_DELAY_S),
       })
       .prefault({}),
     limit: z
@@ -292,7 +301,7 @@ export type RequirementInput = z.input<typeof baseSchema>;
 export const RANGE_SWITCH_DROP_SHARE = 0.1;
 
 export type Requirement = Omit<Base, "drop" | "accuracy" | "amplifier" | "rangeSwitch"> & {
-  rangeSwitch: { onResistance: number };
+  rangeSwitch: { onResistance: number; delay: number };
   drop: { max: number; fraction?: number; loadMin?: number };
   accuracy: { percent: number; bandMin: number; bandMax: number; crestFactor: number };
   amplifier: Omit<Base["amplifier"], "gains" | "gainSet" | "topology" | "commonMode"> & {
@@ -344,7 +353,10 @@ function normalize(b: Base): Requirement {
     drop,
     accuracy: { percent: b.accuracy.percent, bandMin, bandMax, crestFactor: b.accuracy.crestFactor },
     shunt: { ...b.shunt, ratings: [...b.shunt.ratings].sort((x, y) => x - y) },
-    rangeSwitch: { onResistance: b.rangeSwitch.onResistance ?? (RANGE_SWITCH_DROP_SHARE * dropMax) / b.current.max },
+    rangeSwitch: {
+      onResistance: b.rangeSwitch.onResistance ?? (RANGE_SWITCH_DROP_SHARE * dropMax) / b.current.max,
+      delay: b.rangeSwitch.delay,
+    },
     amplifier: {
       ...amp,
       ...gainsOf(b.amplifier),

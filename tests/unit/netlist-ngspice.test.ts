@@ -14,7 +14,9 @@ import { fixtureView, loggerRequirement, pumpRequirement } from "@/lib/build-she
 import { evaluateCandidate } from "@/lib/design/candidate";
 import { errorAt } from "@/lib/design/error-budget";
 import { insertion } from "@/lib/design/insertion";
-import { buildNetlist } from "@/lib/design/netlist";
+import { buildNetlist, spiceNumber } from "@/lib/design/netlist";
+import { planNetlist, rangeDeck } from "@/lib/design/plan-netlist";
+import { solve } from "@/lib/design/solve";
 import type { Requirement } from "@/lib/design/requirement";
 import { req } from "@/lib/design/test-helpers";
 
@@ -180,5 +182,50 @@ describe("exported netlist in ngspice", () => {
     expect(Math.abs(expected - m.outputAtMaxV)).toBeGreaterThan(2e-3 * m.outputAtMaxV);
     const bare = operatingPoint(designNetlist(view, { includeOffset: false }));
     within((nodes.out ?? NaN) - (bare.out ?? NaN), view.choice.gain * view.requirement.amplifier.offset, 0.01);
+  });
+});
+
+// Issue 13: a range plan's netlist, one `.op` deck per range with that range's switch closed, the
+// others open and the protection in place. ngspice's shunt drop V(sp) − V(sn), the path's drop
+// (shunt and switch) and the output agree with the engine within 0.1 % on every range.
+const logger = req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } });
+const loggerPlan = solve(logger).rangePlan;
+const pumpPlanReq = req({
+  current: { min: "3 uA", max: "6 A" },
+  supply: { voltage: "24 V", side: "high" },
+  drop: { max: "100 mV" },
+  readout: { kind: "adc", bits: 16, fullScale: "2.5 V" },
+  load: { model: "resistive" },
+});
+const pumpPlan = solve(pumpPlanReq).rangePlan;
+const planCases = [
+  ["demo logger, low side, constant current", logger, loggerPlan],
+  ["3 µA to 6 A, high side, resistive load", pumpPlanReq, pumpPlan],
+] as const;
+
+describe("range plan netlists in ngspice (one .op per range)", () => {
+  it.each(planCases)("%s: every range's deck agrees with the engine within 0.1 %", (_name, r, plan) => {
+    expect(plan).not.toBeNull();
+    if (!plan) return;
+    const choice = { ranges: plan.ranges, switchPoints: plan.switchPoints };
+    for (let k = 0; k < plan.ranges.length; k++) {
+      const deck = rangeDeck(r, choice, k);
+      // The switch states are in the deck: this range's closed at its on-resistance, the others open.
+      expect(deck.netlist).toMatch(new RegExp(`^RSW${k + 1} sn \\S+ ${spiceNumber(r.rangeSwitch.onResistance)} `, "m"));
+      expect(deck.netlist).toMatch(/^SPROT /m);
+      const nodes = operatingPoint(deck.netlist);
+      const join = r.supply.side === "high" ? "ld" : "ret";
+      within((nodes.sp ?? NaN) - (nodes.sn ?? NaN), deck.expected.shuntDropV);
+      within((nodes.sp ?? NaN) - (nodes[join] ?? 0), deck.expected.pathDropV);
+      within(nodes.out, deck.expected.outputV);
+      // The path's drop is the plan's worstBurdenV for the range (the switch included).
+      within(deck.expected.pathDropV, plan.ranges[k]!.worstBurdenV, 1e-9);
+    }
+  });
+
+  it("the download holds one deck per range, each ending in .end", () => {
+    const text = planNetlist(logger, { ranges: loggerPlan!.ranges, switchPoints: loggerPlan!.switchPoints });
+    expect(text.match(/^\.end$/gm)).toHaveLength(loggerPlan!.ranges.length);
+    expect(text.match(/^\.op$/gm)).toHaveLength(loggerPlan!.ranges.length);
   });
 });

@@ -12,7 +12,7 @@ import { colors } from "./theme";
 
 export type SheetMeta = { team: string; generatedAt: Date };
 
-const s = StyleSheet.create({
+export const sheetStyles = StyleSheet.create({
   // No lineHeight on the page itself: with one there, react-pdf drops the page-number text.
   page: { fontSize: 8, color: colors.ink, paddingTop: 62, paddingBottom: 40, paddingHorizontal: 40 },
   body: { fontSize: 8, lineHeight: 1.3 },
@@ -87,7 +87,9 @@ const s = StyleSheet.create({
   caution: { borderWidth: 1, borderColor: colors.bad, backgroundColor: "#fdf6f6", padding: 6, marginTop: 4 },
 });
 
-const statusWords: Record<DesignView["status"], string> = {
+const s = sheetStyles;
+
+export const statusWords: Record<DesignView["status"], string> = {
   draft: "draft",
   "in-review": "in review",
   approved: "approved",
@@ -104,17 +106,17 @@ function clip(text: string, max: number): string {
   return text.length <= max ? text : `${text.slice(0, max - 1).trimEnd()}…`;
 }
 
-function isoDate(d: Date): string {
+export function isoDate(d: Date): string {
   return d.toISOString().slice(0, 10);
 }
 
-function isoMinute(iso: string): string {
+export function isoMinute(iso: string): string {
   return `${iso.slice(0, 10)} ${iso.slice(11, 16)} UTC`;
 }
 
 type Col<T> = { title: string; width: number | string; render: (row: T) => ReactNode; align?: "left" | "right" };
 
-function Table<T>({ cols, rows, zebra = false }: { cols: Col<T>[]; rows: T[]; zebra?: boolean }) {
+export function Table<T>({ cols, rows, zebra = false }: { cols: Col<T>[]; rows: T[]; zebra?: boolean }) {
   return (
     <View style={s.table}>
       <View style={s.headRow} wrap={false}>
@@ -138,7 +140,13 @@ function Table<T>({ cols, rows, zebra = false }: { cols: Col<T>[]; rows: T[]; ze
 }
 
 /** Label/value rows laid out in two side-by-side columns. */
-function KeyValues({ rows, labelWidth = "42%" }: { rows: { label: string; value: string }[]; labelWidth?: string }) {
+export function KeyValues({
+  rows,
+  labelWidth = "42%",
+}: {
+  rows: { label: string; value: string }[];
+  labelWidth?: string;
+}) {
   const half = Math.ceil(rows.length / 2);
   const cols = [rows.slice(0, half), rows.slice(half)];
   return (
@@ -157,7 +165,7 @@ function KeyValues({ rows, labelWidth = "42%" }: { rows: { label: string; value:
   );
 }
 
-function Bullets({ items }: { items: string[] }) {
+export function Bullets({ items }: { items: string[] }) {
   return (
     <View>
       {items.map((t, i) => (
@@ -184,7 +192,7 @@ const partCols: {
 ];
 
 /** One row per part, its notes on a full-width line beneath. */
-function PartsTable({ parts }: { parts: SheetData["parts"] }) {
+export function PartsTable({ parts }: { parts: SheetData["parts"] }) {
   return (
     <View style={s.table}>
       <View style={s.headRow} wrap={false}>
@@ -219,10 +227,88 @@ function PartsTable({ parts }: { parts: SheetData["parts"] }) {
   );
 }
 
+/** Expected readings with their acceptance bands. */
+export function BenchTable({ rows }: { rows: SheetData["bench"] }) {
+  return (
+    <Table
+      cols={[
+        { title: "Test point", width: "30%", render: (r) => r.label },
+        { title: "Test current", width: "18%", render: (r) => r.current, align: "right" },
+        { title: "Expected output", width: "20%", render: (r) => r.expected, align: "right" },
+        { title: "Accept between", width: "32%", render: (r) => r.band, align: "right" },
+      ]}
+      rows={rows}
+    />
+  );
+}
+
+/** The sheet's title and who made, approved and printed it. */
+export function TitleBlock({
+  view,
+  meta,
+}: {
+  view: SheetHead & Pick<DesignView, "project" | "approval" | "authorName">;
+  meta: SheetMeta;
+}) {
+  return (
+    <>
+      <Text style={s.h1}>{view.name}</Text>
+      <KeyValues
+        labelWidth="34%"
+        rows={[
+          { label: "Design", value: view.name },
+          { label: "Project", value: view.project ?? "—" },
+          { label: "Revision", value: String(view.revision) },
+          { label: "Status", value: statusWords[view.status] },
+          {
+            label: "Approved",
+            value: view.approval ? `by ${view.approval.byName}, ${isoMinute(view.approval.at)}` : "not approved",
+          },
+          { label: "Designed by", value: view.authorName },
+          { label: "Team", value: meta.team },
+          { label: "Sheet date", value: isoDate(meta.generatedAt) },
+        ]}
+      />
+    </>
+  );
+}
+
+/** The first page's content: title block, requirement, parts and cautions. */
+export function FrontPage({
+  view,
+  meta,
+  heading,
+  data,
+}: {
+  view: Parameters<typeof TitleBlock>[0]["view"];
+  meta: SheetMeta;
+  heading: string;
+  data: Pick<SheetData, "requirement" | "parts" | "cautions">;
+}) {
+  return (
+    <>
+      <TitleBlock view={view} meta={meta} />
+      <Text style={s.h2}>{heading}</Text>
+      <KeyValues rows={data.requirement} />
+      <Text style={s.h2}>Parts</Text>
+      <PartsTable parts={data.parts} />
+      <View wrap={false}>
+        <Text style={s.h2}>Cautions</Text>
+        <View style={s.caution}>
+          <Bullets items={data.cautions} />
+        </View>
+      </View>
+    </>
+  );
+}
+
 /** How page numbers are written: known in advance (fast), or worked out by the layout. */
 export type Numbering = { kind: "static"; total: number } | { kind: "dynamic" };
 
-function SheetPage({
+/** What a page's header and footer name: a single design or a range plan alike. */
+export type SheetHead = Pick<DesignView, "name" | "revision" | "status">;
+
+export function SheetPage({
   view,
   meta,
   fonts,
@@ -230,7 +316,7 @@ function SheetPage({
   numbering,
   children,
 }: {
-  view: DesignView;
+  view: SheetHead;
   meta: SheetMeta;
   fonts: string[];
   number: number;
@@ -303,39 +389,7 @@ export function BuildSheetDocument({
       producer="Sensewright"
       subject="Current-sense front end build sheet"
     >
-      {page(
-        1,
-        <>
-          {/* Title block */}
-          <Text style={s.h1}>{view.name}</Text>
-          <KeyValues
-            labelWidth="34%"
-            rows={[
-              { label: "Design", value: view.name },
-              { label: "Project", value: view.project ?? "—" },
-              { label: "Revision", value: String(view.revision) },
-              { label: "Status", value: statusWords[view.status] },
-              {
-                label: "Approved",
-                value: view.approval ? `by ${view.approval.byName}, ${isoMinute(view.approval.at)}` : "not approved",
-              },
-              { label: "Designed by", value: view.authorName },
-              { label: "Team", value: meta.team },
-              { label: "Sheet date", value: isoDate(meta.generatedAt) },
-            ]}
-          />
-          <Text style={s.h2}>Requirement</Text>
-          <KeyValues rows={data.requirement} />
-          <Text style={s.h2}>Parts</Text>
-          <PartsTable parts={data.parts} />
-          <View wrap={false}>
-            <Text style={s.h2}>Cautions</Text>
-            <View style={s.caution}>
-              <Bullets items={data.cautions} />
-            </View>
-          </View>
-        </>,
-      )}
+      {page(1, <FrontPage view={view} meta={meta} heading="Requirement" data={data} />)}
       {page(
         2,
         <>
@@ -392,15 +446,7 @@ export function BuildSheetDocument({
           </View>
           <View wrap={false}>
             <Text style={s.h2}>Bench check</Text>
-            <Table
-              cols={[
-                { title: "Test point", width: "30%", render: (r) => r.label },
-                { title: "Test current", width: "18%", render: (r) => r.current, align: "right" },
-                { title: "Expected output", width: "20%", render: (r) => r.expected, align: "right" },
-                { title: "Accept between", width: "32%", render: (r) => r.band, align: "right" },
-              ]}
-              rows={data.bench}
-            />
+            <BenchTable rows={data.bench} />
             <View style={{ marginTop: 5 }}>
               <Bullets items={data.benchHowTo} />
             </View>

@@ -33,7 +33,7 @@ const s = StyleSheet.create({
 /** The last column takes what is left of the line, so the grid ends at the right margin. */
 const cellWidth = (width: number, last: boolean) => (last ? { flexGrow: 1, flexBasis: width } : { width });
 
-export function ReadingsLog({ bench }: { bench: BenchRow[] }) {
+export function ReadingsLog({ bench, title = "Readings log" }: { bench: BenchRow[]; title?: string }) {
   const fixed = [
     { title: "Serial", width: 84 },
     { title: "Date", width: 54 },
@@ -47,7 +47,7 @@ export function ReadingsLog({ bench }: { bench: BenchRow[] }) {
   const widths = [...fixed.map((c) => c.width), ...bench.map(() => pointWidth), ...tail.map((c) => c.width)];
   return (
     <View wrap={false}>
-      <Text style={s.h2}>Readings log</Text>
+      <Text style={s.h2}>{title}</Text>
       <Text style={s.note}>
         {`One line per unit built. Write each output with its unit (e.g. 36.9 mV). A unit passes when every reading lies in its band. Type the lines in under "Built units" on the design page, or as a CSV with the header: serial,date,${bench.map((b) => b.label).join(",")}.`}
       </Text>

@@ -20,7 +20,7 @@ type Txt = {
   children: string;
 };
 
-function Label({ x, y, size = 7.5, anchor = "start", color = colors.ink, bold = false, children }: Txt) {
+export function Label({ x, y, size = 7.5, anchor = "start", color = colors.ink, bold = false, children }: Txt) {
   // react-pdf's SVG text takes font settings in style; its types only list paint attributes.
   const style = { fontFamily: LABEL_FONTS, fontSize: size, fontWeight: bold ? 700 : 400 } as unknown as Record<
     string,
