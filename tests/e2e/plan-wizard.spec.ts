@@ -126,7 +126,18 @@ test("designer adjusts the proposed plan and saves it", async ({ browser }) => {
   await expect(mp.getByTestId("plan-bench-3")).toBeVisible();
   const sheet = await mp.request.get(`/api/designs/${id}/build-sheet`);
   if (sheet.status() === 200) {
+    // The plan's sheet: every range's parts and bench rows, read back from the PDF's text.
     expect(sheet.headers()["content-type"]).toContain("application/pdf");
+    const { writeFile, mkdtemp } = await import("node:fs/promises");
+    const { execFileSync } = await import("node:child_process");
+    const { join } = await import("node:path");
+    const { tmpdir } = await import("node:os");
+    const pdfPath = join(await mkdtemp(join(tmpdir(), "plan-sheet-")), "sheet.pdf");
+    await writeFile(pdfPath, await sheet.body());
+    const text = execFileSync("pdftotext", ["-layout", pdfPath, "-"]).toString();
+    for (const k of [1, 2, 3]) expect(text).toContain(`Range ${k}`);
+    expect(text).toMatch(/Switch point 1/);
+    expect(text).toMatch(/Switch point 2/);
   } else {
     expect(sheet.status()).toBe(422);
     const download = mp.waitForEvent("download");
