@@ -124,6 +124,11 @@ test("designer adjusts the proposed plan and saves it", async ({ browser }) => {
   await expect(mp.getByTestId("design-status").first()).toHaveText("approved");
   await expect(mp.getByTestId("plan-bench-1")).toBeVisible();
   await expect(mp.getByTestId("plan-bench-3")).toBeVisible();
+  // From the design page to the meter view of the same plan.
+  await mp.getByTestId("plan-meter-link").click();
+  await expect(mp).toHaveURL(new RegExp(`/meter\\?design=${id}$`));
+  await expect(mp.getByTestId("plan-beside-meter")).toContainText(name);
+  await mp.goBack();
   const sheet = await mp.request.get(`/api/designs/${id}/build-sheet`);
   if (sheet.status() === 200) {
     // The plan's sheet: every range's parts and bench rows, read back from the PDF's text.
