@@ -1,13 +1,21 @@
 "use client";
 // A multi-range plan drawn on the current axis: each range a bar from its bottom to its top
 // current, overlaps visible, the required span marked.
-import type { RangePlan } from "@/lib/design/range-plan";
+import type { PlanRangeChoice } from "@/lib/design/plan-choice";
 import { formatSI } from "@/lib/design/format";
 import { logTicks } from "./axes";
 import { usePalette } from "./palette";
 import { useWidth } from "./use-width";
 
-export function RangePlanChart({ plan, minA, maxA }: { plan: RangePlan; minA: number; maxA: number }) {
+export function RangePlanChart({
+  plan,
+  minA,
+  maxA,
+}: {
+  plan: { ranges: PlanRangeChoice[] };
+  minA: number;
+  maxA: number;
+}) {
   const { ref, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const rows = plan.ranges.length;

@@ -5,6 +5,7 @@ import { useQueries } from "@tanstack/react-query";
 import { Axis, Grid, LineSeries, Tooltip, XYChart } from "@visx/xychart";
 import { useEffect, useMemo, useState } from "react";
 import { insertionCurve, insertionSchema, type InsertionResult } from "@/lib/design/insertion";
+import { benchMeterRanges } from "@/lib/design/plan-stretches";
 import { loadModels, type LoadModel } from "@/lib/design/requirement";
 import { formatPercent, formatSI } from "@/lib/design/format";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, siTick } from "@/components/charts/axes";
@@ -14,12 +15,13 @@ import { useWidth } from "@/components/charts/use-width";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 
-/** Typical resistance a handheld meter puts in series on each current range (common practice, no source). */
-const presets = [
-  { label: "10 A range", ohms: "0.1 ohm", note: "about 0.1 Ω" },
-  { label: "milliamp range", ohms: "1.9 ohm", note: "about 1.8–2 Ω" },
-  { label: "microamp range", ohms: "100 ohm", note: "about 100 Ω" },
-];
+/** Typical resistance a handheld meter puts in series on each current range: the engine's benchMeterRanges. */
+const presetWords: Record<(typeof benchMeterRanges)[number]["key"], { label: string; note: string }> = {
+  amps: { label: "10 A range", note: "about 0.1 Ω" },
+  milliamps: { label: "milliamp range", note: "about 1.8–2 Ω" },
+  microamps: { label: "microamp range", note: "about 100 Ω" },
+};
+const presets = benchMeterRanges.map((r) => ({ ...presetWords[r.key], ohms: `${r.seriesOhms} ohm` }));
 
 const modelWords: Record<LoadModel, string> = {
   "constant-current": "Constant current",

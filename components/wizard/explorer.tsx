@@ -1,13 +1,14 @@
 "use client";
 // The live results beside the form: the trade-off, the refusals, the table, the selected
 // candidate in depth, the range plan when one range cannot do, and saving.
-import { memo, useCallback, useEffect, useMemo, type RefObject } from "react";
+import { memo, useCallback, useEffect, useMemo, type ReactNode, type RefObject } from "react";
 import { evaluateCandidate, isInSweep } from "@/lib/design/candidate";
 import { rejectReasonLabels } from "@/lib/design/pair";
 import type { SolveResult } from "@/lib/design/solve";
 import type { Candidate } from "@/lib/design/types";
 import { formatSI } from "@/lib/design/format";
-import { RangePlanChart } from "@/components/charts/range-plan-chart";
+import type { PlanChoice } from "@/lib/design/plan-choice";
+import { planChoiceOf } from "@/lib/design/range-candidates";
 import { TradeOffChart } from "@/components/charts/trade-off-chart";
 import { CandidateStudy } from "@/components/candidates/candidate-study";
 import { CandidateTable } from "@/components/candidates/candidate-table";
@@ -17,10 +18,12 @@ import { candidateKey, choiceFromKey } from "@/lib/wizard/candidate-key";
 import { inWords } from "@/lib/wizard/form-errors";
 import { rankingInWords, recommendationReason, recommendedOf } from "@/lib/wizard/recommend";
 import type { useSolver } from "@/lib/wizard/use-solver";
+import { usePlanCheck } from "@/lib/wizard/use-plan-check";
 import { Button } from "@/components/ui/button";
 import { DefaultsSummary } from "./defaults-summary";
 import { DiagnosisView } from "./diagnosis";
-import { SavePanel, type PickNote } from "./save-panel";
+import { PlanEditor, planStatus } from "./plan-editor";
+import { SavePanel, type PickNote, type PlanToSave } from "./save-panel";
 
 const pairText = (c: { shuntOhms: number; gain: number }) =>
   `${formatSI(c.shuntOhms, "Ω")} × ${Number(c.gain.toPrecision(4))}`;
@@ -40,6 +43,10 @@ export function Explorer({
   setChosen,
   pinned,
   setPinned,
+  plan,
+  setPlan,
+  planEdited,
+  setPlanEdited,
   canSave,
   name,
   setName,
@@ -56,6 +63,10 @@ export function Explorer({
   setChosen: (b: boolean) => void;
   pinned: string[];
   setPinned: (p: string[]) => void;
+  plan: PlanChoice | null;
+  setPlan: (p: PlanChoice | null) => void;
+  planEdited: boolean;
+  setPlanEdited: (b: boolean) => void;
   canSave: boolean;
   name: string;
   setName: (s: string) => void;
@@ -150,6 +161,55 @@ export function Explorer({
   }, [result, selected, chosen, candidate, recommended, recommendedKey]);
   const frontCount = result ? result.candidates.filter((c) => c.pareto).length : 0;
 
+  // The range plan follows the engine's proposal until the designer adjusts it; every plan on
+  // screen is checked by the engine in the plan worker.
+  const proposal = result?.rangePlan ?? null;
+  const proposed = useMemo(() => (proposal ? planChoiceOf(proposal) : null), [proposal]);
+  useEffect(() => {
+    if (!planEdited && proposed !== plan) setPlan(proposed);
+  }, [planEdited, proposed, plan, setPlan]);
+  const planCheck = usePlanCheck();
+  const { check } = planCheck;
+  const planShown = result && plan && (proposal || planEdited) ? plan : null;
+  useEffect(() => {
+    if (req && planShown) check(req, planShown);
+  }, [req, planShown, check]);
+  const planTexts = useMemo(() => (proposal ? [proposal.adds] : []), [proposal]);
+  const planSlot = useMemo(
+    () =>
+      planShown ? (
+        <PlanEditor
+          plan={planShown}
+          setPlan={(p) => {
+            setPlan(p);
+            setPlanEdited(true);
+          }}
+          edited={planEdited}
+          onReset={() => {
+            setPlanEdited(false);
+            setPlan(proposed);
+          }}
+          check={planCheck.state}
+          proposalTexts={planTexts}
+        />
+      ) : null,
+    [planShown, setPlan, setPlanEdited, planEdited, proposed, planCheck.state, planTexts],
+  );
+  const planToSave: PlanToSave | null = useMemo(() => {
+    if (!planShown) return null;
+    const st = planStatus(planCheck.state, planShown);
+    return {
+      choice: planShown,
+      checking: st.kind === "checking",
+      refusal:
+        st.kind === "error"
+          ? st.message
+          : st.kind === "checked" && !st.reply.verdict.sound
+            ? st.reply.verdict.message
+            : null,
+    };
+  }, [planShown, planCheck.state]);
+
   return (
     <div className="flex min-w-0 flex-col gap-4" aria-busy={busy}>
       <div className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
@@ -229,14 +289,16 @@ export function Explorer({
             setSelected={pick}
             pinned={pinned}
             setPinned={setPinned}
+            planSlot={planSlot}
           />
           <Panel title={revise ? `Save revision ${revise.revision + 1}` : "Save"}>
             <DefaultsSummary requirement={req} />
             <div className="mt-3" />
             <SavePanel
               requirement={req}
-              candidate={candidate}
-              note={note}
+              candidate={planToSave ? null : candidate}
+              plan={planToSave}
+              note={planToSave ? null : note}
               onFollow={() => {
                 setChosen(false);
                 setSelected(recommendedKey);
@@ -264,6 +326,7 @@ const Results = memo(function Results({
   setSelected,
   pinned,
   setPinned,
+  planSlot,
 }: {
   result: SolveResult;
   selected: string | null;
@@ -271,6 +334,8 @@ const Results = memo(function Results({
   setSelected: (k: string | null) => void;
   pinned: string[];
   setPinned: (p: string[]) => void;
+  /** The plan editor, when the engine proposes ranges (or the designer is revising a plan). */
+  planSlot: ReactNode;
 }) {
   const req = result.requirement;
   const listed = result.candidates;
@@ -358,47 +423,7 @@ const Results = memo(function Results({
         </Panel>
       )}
 
-      {result.rangePlan && (
-        <Panel title={`Range plan: ${result.rangePlan.ranges.length} ranges`}>
-          <div className="flex flex-col gap-3 text-xs">
-            <RangePlanChart plan={result.rangePlan} minA={req.current.min} maxA={req.current.max} />
-            <table className="w-full">
-              <thead className="text-left text-2xs tracking-wide text-ink-muted">
-                <tr>
-                  <th className="py-1">Range</th>
-                  <th>Shunt</th>
-                  <th>Gain</th>
-                  <th>Covers</th>
-                  <th>Drop at its top (with switch)</th>
-                  <th>Counts at its bottom</th>
-                  <th>Settling</th>
-                </tr>
-              </thead>
-              <tbody className="num">
-                {result.rangePlan.ranges.map((r, i) => (
-                  <tr key={i} className="border-t border-line">
-                    <td className="py-1">{i + 1}</td>
-                    <td>{formatSI(r.shuntOhms, "Ω")}</td>
-                    <td>{Number(r.gain.toPrecision(4))}</td>
-                    <td>
-                      {formatSI(r.minA, "A")} – {formatSI(r.maxA, "A")}
-                    </td>
-                    <td>
-                      {formatSI(r.worstBurdenV, "V")}{" "}
-                      <span className="text-ink-faint">({formatSI(r.switchOhms, "Ω")} switch)</span>
-                    </td>
-                    <td>{Number(r.countsAtBottom.toPrecision(3))}</td>
-                    <td>{formatSI(r.settlingS, "s")}</td>
-                  </tr>
-                ))}
-              </tbody>
-            </table>
-            <p className="text-ink-muted">{result.rangePlan.switchOver}</p>
-            <p className="text-ink-muted">{result.rangePlan.adds}</p>
-            <p className="text-ink-muted">{result.rangePlan.protection}</p>
-          </div>
-        </Panel>
-      )}
+      {planSlot}
 
       <Panel title="Why pairs were refused">
         <Rejections rejected={result.rejected} evaluated={result.evaluated} feasibleCount={result.feasibleCount} />

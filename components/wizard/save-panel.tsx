@@ -1,11 +1,12 @@
 "use client";
-// Name the design and save the chosen pair: POST /api/designs (a new design, with one
+// Name the design and save the chosen pair (or the range plan): POST /api/designs (a new design, with one
 // Idempotency-Key per attempt so a repeated request creates nothing more) or, when revising,
 // PATCH /api/designs/[id] with the revision it started from (409 when someone saved first).
 import { useMutation } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useRef } from "react";
+import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { Requirement } from "@/lib/design/requirement";
 import type { Candidate } from "@/lib/design/types";
 import { formatSI } from "@/lib/design/format";
@@ -17,11 +18,15 @@ type SaveError = { message: string; fieldErrors?: Record<string, string[]>; stat
 /** What to say beside Save about the selected pair: followed from the ranking, or the designer's own pick. */
 export type PickNote = { tone: "info" | "warn" | "bad"; text: string; follow?: Candidate | null };
 
+/** A range plan to save instead of a pair, with the engine's verdict on it. */
+export type PlanToSave = { choice: PlanChoice; checking: boolean; refusal: string | null };
+
 const noteTone = { info: "text-ink-muted", warn: "text-warn", bad: "text-bad" } as const;
 
 export function SavePanel({
   requirement,
   candidate,
+  plan = null,
   note = null,
   onFollow,
   revise,
@@ -34,6 +39,7 @@ export function SavePanel({
 }: {
   requirement: Requirement;
   candidate: Candidate | null;
+  plan?: PlanToSave | null;
   note?: PickNote | null;
   onFollow?: () => void;
   /** Saving makes the next revision of this design instead of a new design. */
@@ -52,7 +58,7 @@ export function SavePanel({
       const design = {
         name: name.trim(),
         requirement,
-        choice: { shuntOhms: candidate!.shuntOhms, gain: candidate!.gain },
+        ...(plan ? { plan: plan.choice } : { choice: { shuntOhms: candidate!.shuntOhms, gain: candidate!.gain } }),
       };
       const res = revise
         ? await fetch(`/api/designs/${revise.id}`, {
@@ -133,16 +139,30 @@ export function SavePanel({
         </Field>
       </div>
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" variant="primary" disabled={!candidate || !candidate.feasible || save.isPending}>
+        <Button
+          type="submit"
+          variant="primary"
+          disabled={
+            (plan ? plan.checking || plan.refusal !== null : !candidate || !candidate.feasible) || save.isPending
+          }
+        >
           {save.isPending
             ? "Saving…"
             : `${revise ? `Save as revision ${revise.revision + 1}` : "Save"}${
-                candidate
-                  ? ` with ${formatSI(candidate.shuntOhms, "Ω")} × ${Number(candidate.gain.toPrecision(4))}`
-                  : ""
+                plan
+                  ? ` the ${plan.choice.ranges.length}-range plan`
+                  : candidate
+                    ? ` with ${formatSI(candidate.shuntOhms, "Ω")} × ${Number(candidate.gain.toPrecision(4))}`
+                    : ""
               }`}
         </Button>
-        {!candidate && <span className="text-xs text-ink-muted">Select a candidate first.</span>}
+        {plan?.checking && <span className="text-xs text-ink-muted">The engine is checking the plan…</span>}
+        {plan?.refusal && (
+          <span className="text-xs text-bad" data-testid="plan-refusal">
+            Not saved as it stands: {plan.refusal}
+          </span>
+        )}
+        {!plan && !candidate && <span className="text-xs text-ink-muted">Select a candidate first.</span>}
         {candidate && !candidate.feasible && (
           <span className="text-xs text-bad">Only a feasible candidate can be saved.</span>
         )}

@@ -6,6 +6,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useForm, type Resolver } from "react-hook-form";
 import { requirementSchema, type Requirement } from "@/lib/design/requirement";
+import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { Choice } from "@/lib/design/types";
 import { candidateKey } from "@/lib/wizard/candidate-key";
 import { deepMerge } from "@/lib/wizard/deep-merge";
@@ -48,8 +49,9 @@ export type ReviseTarget = {
   name: string;
   project: string | null;
   requirement: Requirement;
-  /** The saved pair; null when the design is a range plan (the wizard then starts from its requirement). */
+  /** The saved pair, or (a plan design) the saved plan. */
   choice: Choice | null;
+  plan?: PlanChoice | null;
 };
 
 /** The saved requirement and pair, as the wizard shows them; the saved pair stays picked. */
@@ -65,6 +67,9 @@ function revisionDraft(t: ReviseTarget): Draft {
     selected: t.choice ? candidateKey(t.choice) : null,
     chosen: t.choice !== null,
     pinned: [],
+    // A saved plan stays as saved until the designer changes it.
+    plan: t.plan ?? null,
+    planEdited: Boolean(t.plan),
     name: t.name,
     project: t.project ?? "",
   };
@@ -174,6 +179,8 @@ function WizardForm({
   const [selected, setSelected] = useState<string | null>(initial.selected);
   const [chosen, setChosen] = useState(initial.chosen ?? false);
   const [pinned, setPinned] = useState<string[]>(initial.pinned);
+  const [plan, setPlan] = useState<PlanChoice | null>(initial.plan ?? null);
+  const [planEdited, setPlanEdited] = useState(initial.planEdited ?? false);
   const [name, setName] = useState(initial.name);
   const [project, setProject] = useState(initial.project);
   const [complete, setComplete] = useState(false);
@@ -213,12 +220,29 @@ function WizardForm({
           selected,
           chosen,
           pinned,
+          plan,
+          planEdited,
           name,
           project,
         },
         storageKey,
       ),
-    [getValues, step, visited, dropMode, gainMode, partName, selected, chosen, pinned, name, project, storageKey],
+    [
+      getValues,
+      step,
+      visited,
+      dropMode,
+      gainMode,
+      partName,
+      selected,
+      chosen,
+      pinned,
+      plan,
+      planEdited,
+      name,
+      project,
+      storageKey,
+    ],
   );
   // Keep the draft on every change of the screen's own state and of the form's values.
   useEffect(() => {
@@ -445,6 +469,10 @@ function WizardForm({
           setChosen={setChosen}
           pinned={pinned}
           setPinned={setPinned}
+          plan={plan}
+          setPlan={setPlan}
+          planEdited={planEdited}
+          setPlanEdited={setPlanEdited}
           canSave={canSave}
           name={name}
           setName={setName}

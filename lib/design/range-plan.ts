@@ -80,6 +80,11 @@ export function subModel(req: Requirement, m: Model, lo: number, hi: number): Mo
   };
 }
 
+/** The score that orders pairs on one range (the plan's own pick and the wizard's candidates alike). */
+export function rangeScore(sub: Model, R: number, G: number, errMin: number): number {
+  return defaultScore(sub, sub.iMax * R, sub.lsbV / (R * G), errMin);
+}
+
 /** The best-scoring feasible pair for the range [lo, hi], through the sweep's own loop. */
 function bestPairFor(req: Requirement, m: Model, sw: SweepArrays, lo: number, hi: number): number | null {
   const sub = subModel(req, m, lo, hi);
@@ -92,7 +97,7 @@ function bestPairFor(req: Requirement, m: Model, sw: SweepArrays, lo: number, hi
     if (s.mask[p] !== 0) continue;
     const i = Math.floor(p / nG);
     const R = sw.values[i] as number;
-    const score = defaultScore(sub, hi * R, sub.lsbV / (R * (sw.gains[p - i * nG] as number)), s.errMin[p] as number);
+    const score = rangeScore(sub, R, sw.gains[p - i * nG] as number, s.errMin[p] as number);
     if (score < bestScore) {
       bestScore = score;
       best = p;

@@ -1,4 +1,5 @@
 // The wizard's draft in localStorage, so a reload (or a closed tab) loses nothing.
+import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { WizardValues } from "./form-values";
 
 export type Draft = {
@@ -14,6 +15,9 @@ export type Draft = {
   /** The designer picked `selected` themselves; otherwise the selection follows the ranking. */
   chosen?: boolean;
   pinned: string[];
+  /** The range plan on screen and whether the designer adjusted it (else it follows the engine's proposal). */
+  plan?: PlanChoice | null;
+  planEdited?: boolean;
   name: string;
   project: string;
 };

@@ -4,6 +4,9 @@
 import { buildModel, type Model } from "../../lib/design/model";
 import { parseRequirement, type RequirementInput } from "../../lib/design/requirement";
 import { solve } from "../../lib/design/solve";
+import { evaluatePlan } from "../../lib/design/plan-evaluation";
+import { planStretches } from "../../lib/design/plan-stretches";
+import { moveSwitchPoint, planChoiceOf, rangeCandidates } from "../../lib/design/range-candidates";
 import { sweepGrid, sweepValues } from "../../lib/design/sweep";
 
 /** A pump controller like the demo's (docs/model.md), sensed on the low side (a resistor-pair
@@ -191,7 +194,47 @@ export async function run(): Promise<Record<string, number>> {
     listed = solve(p.requirement).candidates.length;
   });
   const front = solve(r).candidates.filter((c) => c.pareto).length;
+
+  // The wizard's plan editor: one adjustment (a moved switch point) re-checked as the plan worker
+  // does it (each range's own sweep, evaluatePlan, the curves), against a solve of the same
+  // requirement, interleaved. The demo logger (docs/model.md §6) is the requirement.
+  const logger = parseRequirement({
+    current: { min: "3 uA", max: "180 mA" },
+    supply: { voltage: "3.0 V" },
+    drop: { max: "60 mV" },
+  });
+  if (!logger.ok) throw new Error(logger.message);
+  const lr = logger.requirement;
+  const proposal = solve(lr, { diagnose: false }).rangePlan;
+  if (!proposal) throw new Error("bench: the logger gets no range plan");
+  const plan = planChoiceOf(proposal);
+  const at = plan.switchPoints[0]!.upA * 0.9;
+  const recheck = () => {
+    const moved = moveSwitchPoint(plan, 0, at);
+    if (!moved.ok) throw new Error(moved.message);
+    moved.plan.ranges.forEach((_, k) => rangeCandidates(lr, moved.plan, k));
+    evaluatePlan(lr, moved.plan);
+    planStretches(lr, moved.plan);
+  };
+  const solveLogger = () => solve(lr, { diagnose: false });
+  const planTimes: number[] = [];
+  const loggerTimes: number[] = [];
+  for (let k = 0; k < 5; k++) {
+    recheck();
+    solveLogger();
+  }
+  for (let k = 0; k < 21; k++) {
+    let t0 = performance.now();
+    recheck();
+    planTimes.push(performance.now() - t0);
+    t0 = performance.now();
+    solveLogger();
+    loggerTimes.push(performance.now() - t0);
+  }
   return {
+    "planCheck.ms": median(planTimes),
+    "planCheck.solve.ms": median(loggerTimes),
+    "planCheck.ratio": median(planTimes) / median(loggerTimes),
     "sweep.candidates": n,
     "sweep.values": values.length,
     "sweep.gains": gains.length,

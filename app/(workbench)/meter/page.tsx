@@ -1,11 +1,24 @@
 import type { Metadata } from "next";
 import { MeterCheck } from "@/components/meter/meter-check";
+import { PlanBesideMeter, type PlanForMeter } from "@/components/meter/plan-beside-meter";
+import { getDesignView, isUuid } from "@/db/queries/designs";
+import { listPlanDesigns } from "@/db/queries/plan-designs";
 import { requirePageCaller } from "@/lib/auth/gate";
+import { can } from "@/lib/auth/policy";
 
 export const metadata: Metadata = { title: "Meter check" };
 
-export default async function MeterPage() {
-  await requirePageCaller("/meter");
+export default async function MeterPage({ searchParams }: { searchParams: Promise<{ design?: string | string[] }> }) {
+  const caller = await requirePageCaller("/meter");
+  const plans = await listPlanDesigns(caller.teamId, { approvedOnly: !can(caller, "design.read-unapproved") });
+  const asked = (await searchParams).design;
+  const id = typeof asked === "string" && isUuid(asked) ? asked : plans[0]?.id;
+  // Only a plan design the caller may read; anything else leaves the picker on its prompt.
+  const view = id ? await getDesignView(id, caller.teamId) : null;
+  const selected: PlanForMeter | null =
+    view && view.kind === "plan" && can(caller, "design.read", view)
+      ? { id: view.id, name: view.name, revision: view.revision, requirement: view.requirement, plan: view.plan }
+      : null;
   return (
     <div className="flex flex-col gap-4">
       <div>
@@ -16,6 +29,7 @@ export default async function MeterPage() {
         </p>
       </div>
       <MeterCheck />
+      <PlanBesideMeter plans={plans.map(({ id, name }) => ({ id, name }))} selected={selected} />
     </div>
   );
 }

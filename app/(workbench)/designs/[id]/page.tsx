@@ -117,6 +117,15 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
           {viewer.leadsWithBuildSheet && <PlanBuildPanel design={design} viewer={viewer} />}
           {picker}
           <PlanFigures design={design} />
+          <p className="text-xs">
+            <Link
+              href={`/meter?design=${design.id}`}
+              className="text-copper-strong underline"
+              data-testid="plan-meter-link"
+            >
+              This plan beside a bench meter&apos;s current ranges, on the same load
+            </Link>
+          </p>
           {review}
           {!viewer.leadsWithBuildSheet && <PlanBuildPanel design={design} viewer={viewer} />}
           <ProfilesPanel design={design} viewer={viewer} />

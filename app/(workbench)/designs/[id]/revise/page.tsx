@@ -31,9 +31,10 @@ export default async function ReviseDesignPage({ params }: { params: Promise<{ i
           Revise <span data-testid="design-name">{design.name}</span>
         </h1>
         <p className="max-w-3xl text-ink-muted">
-          The wizard starts from revision {design.revision}&apos;s requirement with its saved pair picked. Change what
-          the review asked for; saving makes revision {design.revision + 1} as a draft, to submit again. If someone else
-          saves first, nothing of yours is written and the page says so.
+          The wizard starts from revision {design.revision}&apos;s requirement with its saved{" "}
+          {design.kind === "plan" ? "range plan in the plan editor" : "pair picked"}. Change what the review asked for;
+          saving makes revision {design.revision + 1} as a draft, to submit again. If someone else saves first, nothing
+          of yours is written and the page says so.
         </p>
       </div>
       <Wizard
@@ -45,6 +46,7 @@ export default async function ReviseDesignPage({ params }: { params: Promise<{ i
           project: design.project,
           requirement: design.requirement,
           choice: design.kind === "pair" ? design.choice : null,
+          plan: design.kind === "plan" ? design.plan : null,
         }}
       />
     </div>

@@ -1,0 +1,194 @@
+// A range plan from the wizard: the engine proposes it for the logger that sleeps at microamps and
+// bursts to 180 mA; the designer moves a switch point, picks another pair for one range, and saves.
+import { expect, test, type Page } from "@playwright/test";
+import { apiAs, signInPage } from "../fixtures/auth";
+import { checkScreen, shownText, widths } from "./screen-check";
+
+const shots = process.env.PW_OUTPUT_DIR ?? "test-results/plan-wizard";
+
+async function openLoggerPlan(page: Page) {
+  await page.goto("/designs/new");
+  await page.evaluate(() => window.localStorage.clear());
+  await page.reload();
+  await page.getByText("Start from an example").click();
+  await page.getByRole("button", { name: "Soil-moisture logger, 12-bit converter" }).click();
+  await expect(page.getByRole("heading", { name: /Range plan: 3 ranges/ })).toBeVisible();
+  await expect(page.getByTestId("plan-verdict")).toContainText("The engine accepts this plan");
+}
+
+test("designer adjusts the proposed plan and saves it", async ({ browser }) => {
+  test.setTimeout(120_000);
+  const ctx = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const page = await ctx.newPage();
+  await signInPage(page, "designer");
+  await openLoggerPlan(page);
+  const editor = page.getByTestId("plan-editor");
+  // Each range over its own stretch on the three charts, with the switch points marked.
+  for (const kind of ["error", "burden", "load"])
+    await expect(page.getByTestId(`plan-${kind}-chart`).locator("svg path").first()).toBeVisible();
+  await expect(page.getByTestId("plan-error-chart").getByRole("img")).toHaveAttribute("aria-label", /switch points at/);
+  await expect(editor).toContainText("hysteresis band");
+
+  // Move switch point 1 up to 300 µA: range 2 now reads down from 240 µA (80 %).
+  const up = page.getByLabel("Switch point 1: up to range 2 above");
+  await up.fill("300 uA");
+  await up.press("Enter");
+  await expect(page.getByRole("heading", { name: /Range plan: 3 ranges \(adjusted\)/ })).toBeVisible();
+  await expect(page.getByTestId("switch-1")).toContainText("back down to range 1 below 240 µA");
+  await expect(page.getByTestId("plan-range-2")).toContainText("240 µA – ");
+  // Range 1's pair (tens of ohms at a gain of 500) now overdrives the readout at 300 µA: refused,
+  // and the reason is given beside Save.
+  await expect(page.getByTestId("plan-refusal")).toContainText("Range 1");
+  await expect(page.getByRole("button", { name: /Save the 3-range plan/ })).toBeDisabled();
+  // Bad input names the field and changes nothing.
+  await up.fill("3 parsecs");
+  await up.press("Enter");
+  await expect(page.getByTestId("switch-1")).toContainText("Switch point 1:");
+  await expect(page.getByTestId("switch-1")).toContainText("back down to range 1 below 240 µA");
+
+  // Range 1 takes the best pair of its own new stretch: the engine accepts the plan again.
+  await page.getByRole("button", { name: "Other pairs for range 1" }).click();
+  const first = page.getByRole("radio", { name: /for range 1$/ }).first();
+  const firstLabel = (await first.getAttribute("aria-label"))!.replace(/ for range 1$/, "");
+  await first.click();
+  await expect(page.getByTestId("plan-range-1-pair")).toHaveText(firstLabel);
+  await expect(page.getByTestId("plan-verdict")).toContainText("The engine accepts this plan");
+
+  // Another pair for range 2, from its own candidates.
+  const before = await page.getByTestId("plan-range-2-pair").innerText();
+  await page.getByRole("button", { name: "Other pairs for range 2" }).click();
+  const options = page.getByRole("radio", { name: /for range 2$/ });
+  expect(await options.count()).toBeGreaterThan(1);
+  const second = options.nth(1);
+  const label = (await second.getAttribute("aria-label"))!.replace(/ for range 2$/, "");
+  await second.click();
+  await expect(page.getByTestId("plan-range-2-pair")).toHaveText(label);
+  expect(label).not.toBe(before);
+  await expect(page.getByTestId("plan-verdict")).toContainText("The engine accepts this plan");
+  expect(await shownText(page)).toContain("Range 2 (long dashes)");
+  await checkScreen(page, `${shots}/plan-editor-1280.png`);
+  await page.getByTestId("plan-editor").screenshot({ path: `${shots}/plan-editor-panel-1280.png` });
+
+  const name = `Logger plan ${Date.now().toString(36)}`;
+  await page.getByLabel("Design name").fill(name);
+  const save = page.getByRole("button", { name: "Save the 3-range plan" });
+  await expect(save).toBeEnabled();
+  await save.click();
+  await expect(page).toHaveURL(/\/designs\/[0-9a-f-]{36}$/);
+  const id = page.url().split("/").pop()!;
+  // The server re-derived the plan as adjusted: the moved switch point and both picked pairs.
+  await expect(page.getByTestId("design-revision")).toHaveText("revision 1");
+  await expect(page.getByTestId("plan-switch-points")).toContainText("300 µA");
+  await expect(page.getByTestId("plan-figures")).toContainText(firstLabel.split(" × ")[0]!);
+  await expect(page.getByTestId("plan-figures")).toContainText(label.split(" × ")[0]!);
+  const designer = await apiAs("designer");
+  const saved = (await (await designer.get(`/api/designs/${id}`)).json()) as {
+    plan: { ranges: { shuntOhms: number; gain: number }[]; switchPoints: { upA: number; downA: number }[] };
+  };
+  expect(saved.plan.switchPoints[0]!.upA).toBeCloseTo(300e-6, 12);
+  expect(saved.plan.switchPoints[0]!.downA).toBeCloseTo(240e-6, 12);
+
+  // Revise opens the wizard on the saved plan; moving switch point 2 and saving makes revision 2.
+  await page.goto(`/designs/${id}/revise`);
+  await expect(page.getByRole("heading", { name: /Range plan: 3 ranges \(adjusted\)/ })).toBeVisible();
+  await expect(page.getByLabel("Switch point 1: up to range 2 above")).toHaveValue("300 µA");
+  await expect(page.getByTestId("plan-verdict")).toContainText("The engine accepts this plan");
+  const up2 = page.getByLabel("Switch point 2: up to range 3 above");
+  await up2.fill("4 mA");
+  await up2.press("Enter");
+  await expect(page.getByTestId("switch-2")).toContainText("back down to range 2 below 3.2 mA");
+  await expect(page.getByTestId("plan-verdict")).toContainText("The engine accepts this plan");
+  await page.getByRole("button", { name: "Save as revision 2 the 3-range plan" }).click();
+  await expect(page).toHaveURL(new RegExp(`/designs/${id}$`));
+  await expect(page.getByTestId("design-revision")).toHaveText("revision 2");
+  await expect(page.getByTestId("plan-switch-points")).toContainText("4 mA");
+  await page.getByRole("button", { name: "Submit revision 2 for review" }).click();
+  await expect(page.getByTestId("design-status").first()).toHaveText("in-review");
+  await ctx.close();
+
+  // A reviewer approves it.
+  const rctx = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+  const rp = await rctx.newPage();
+  await signInPage(rp, "reviewer");
+  await rp.goto(`/designs/${id}`);
+  await rp.getByRole("button", { name: "Approve revision 2" }).click();
+  await expect(rp.getByTestId("design-status").first()).toHaveText("approved");
+  await rctx.close();
+
+  // A maker opens the approved plan. The PDF sheet for plans is another branch's work: until it is
+  // merged the page says so and offers the design file, which carries every range.
+  const mctx = await browser.newContext({ viewport: { width: 1280, height: 900 }, acceptDownloads: true });
+  const mp = await mctx.newPage();
+  await signInPage(mp, "maker");
+  await mp.goto(`/designs/${id}`);
+  await expect(mp.getByTestId("design-status").first()).toHaveText("approved");
+  await expect(mp.getByTestId("plan-bench-1")).toBeVisible();
+  await expect(mp.getByTestId("plan-bench-3")).toBeVisible();
+  // From the design page to the meter view of the same plan.
+  await mp.getByTestId("plan-meter-link").click();
+  await expect(mp).toHaveURL(new RegExp(`/meter\\?design=${id}$`));
+  await expect(mp.getByTestId("plan-beside-meter")).toContainText(name);
+  await mp.goBack();
+  const sheet = await mp.request.get(`/api/designs/${id}/build-sheet`);
+  if (sheet.status() === 200) {
+    // The plan's sheet: every range's parts and bench rows, read back from the PDF's text.
+    expect(sheet.headers()["content-type"]).toContain("application/pdf");
+    const { writeFile, mkdtemp } = await import("node:fs/promises");
+    const { execFileSync } = await import("node:child_process");
+    const { join } = await import("node:path");
+    const { tmpdir } = await import("node:os");
+    const pdfPath = join(await mkdtemp(join(tmpdir(), "plan-sheet-")), "sheet.pdf");
+    await writeFile(pdfPath, await sheet.body());
+    const text = execFileSync("pdftotext", ["-layout", pdfPath, "-"]).toString();
+    for (const k of [1, 2, 3]) expect(text).toContain(`Range ${k}`);
+    expect(text).toMatch(/Switch point 1/);
+    expect(text).toMatch(/Switch point 2/);
+  } else {
+    expect(sheet.status()).toBe(422);
+    const download = mp.waitForEvent("download");
+    await mp.getByTestId("download-export").click();
+    const file = await (await download).path();
+    const { readFile } = await import("node:fs/promises");
+    const exported = JSON.parse(await readFile(file, "utf8")) as { plan?: { ranges: unknown[] } };
+    expect(exported.plan?.ranges).toHaveLength(3);
+  }
+  await mctx.close();
+});
+
+test("the meter view: a bench meter's three ranges beside the designed plan", async ({ browser }) => {
+  for (const [width, tag] of [
+    [1280, "1280"],
+    [widths.phone, "390"],
+  ] as const) {
+    const ctx = await browser.newContext({ viewport: { width, height: 900 } });
+    const page = await ctx.newPage();
+    await signInPage(page, "designer");
+    await page.goto("/meter");
+    const panel = page.getByTestId("plan-beside-meter");
+    await expect(panel.getByLabel("Range plan", { exact: true })).toBeVisible();
+    await expect(page.getByTestId("meter-plan-chart").locator("svg path")).toHaveCount(4);
+    for (const key of ["amps", "milliamps", "microamps", "plan"])
+      await expect(page.getByTestId(`meter-vs-${key}-full`)).not.toBeEmpty();
+    // Every plan in this run is the demo logger's (3.0 V, 180 mA, constant current): the milliamp range leaves
+    // 3.0 − 0.18 × 1.9 = 2.658 V (Ohm's law); the microamp range's 100 Ω cannot carry 180 mA.
+    await expect(panel).toContainText("3 µA to 180 mA from 3 V");
+    await expect(page.getByTestId("meter-vs-milliamps-full")).toHaveText("2.66 V");
+    await expect(page.getByTestId("meter-vs-microamps-full")).toHaveText("cannot power the load");
+    await checkScreen(page, `${shots}/meter-plan-${tag}.png`);
+    await panel.screenshot({ path: `${shots}/meter-plan-panel-${tag}.png` });
+    await ctx.close();
+  }
+});
+
+test("the plan editor on a phone", async ({ browser }) => {
+  const ctx = await browser.newContext({ viewport: { width: widths.phone, height: 844 } });
+  const page = await ctx.newPage();
+  await signInPage(page, "designer");
+  await openLoggerPlan(page);
+  await page.getByRole("button", { name: "Other pairs for range 1" }).click();
+  await checkScreen(page, `${shots}/plan-editor-390.png`);
+  await page.getByTestId("plan-editor").screenshot({ path: `${shots}/plan-editor-panel-390.png` });
+  await page.getByTestId("plan-range-1").screenshot({ path: `${shots}/plan-range-1-390.png` });
+  await page.getByTestId("plan-error-chart").screenshot({ path: `${shots}/plan-error-chart-390.png` });
+  await ctx.close();
+});
