@@ -16,8 +16,8 @@ import {
 import type { DesignView } from "@/lib/design-view";
 import { oneLine } from "@/lib/text-field";
 import * as f from "./format";
-import { matchLibraryParts, nameLibraryParts, type LibraryParts } from "./library-parts";
-import { kelvinAdvice, partsList, readoutText, type Part } from "./parts";
+import { designParts, type LibraryParts } from "./library-parts";
+import { kelvinAdvice, readoutText, type Part } from "./parts";
 
 export type Row = { label: string; value: string };
 export type BenchRow = BenchCheckRow & { current: string; expected: string; band: string };
@@ -213,9 +213,7 @@ export function sheetData(view: Pick<DesignView, "requirement" | "choice">, libr
   const budget = budgetRows(req, choice);
   return {
     requirement: requirementRows(req),
-    parts: library
-      ? nameLibraryParts(partsList(req, choice, m), matchLibraryParts(req, choice, m, library))
-      : partsList(req, choice, m),
+    parts: designParts(req, choice, m, library),
     performance: performanceRows(req, m),
     budget: budget.rows,
     budgetTotals: budget.totals,

@@ -100,6 +100,11 @@ export function readoutStepV(req: Requirement): number {
   return r.kind === "adc" ? r.fullScale / 2 ** r.bits : r.fullScale / r.counts;
 }
 
+/** Highest usable output: the readout's full scale or the amplifier's swing, the lower, V. */
+export function outputCeilingV(req: Requirement): number {
+  return Math.min(req.readout.fullScale, req.amplifier.supply - req.amplifier.swingHigh);
+}
+
 export function buildModel(req: Requirement): Model {
   const a = req.amplifier;
   const s = req.shunt;
@@ -122,7 +127,7 @@ export function buildModel(req: Requirement): Model {
     loadMin: req.drop.loadMin ?? -Infinity,
     loadModel: req.load.model === "resistive" ? LOAD_RES : req.load.model === "constant-power" ? LOAD_CP : LOAD_CC,
     lsbV: readoutStepV(req),
-    outCeil: Math.min(req.readout.fullScale, a.supply - a.swingHigh),
+    outCeil: outputCeilingV(req),
     countsAtMin: req.resolution.countsAtMin,
     dTamb,
     tNoiseK,
