@@ -7,7 +7,7 @@ import { BOLTZMANN } from "./model";
 import { rejectReasons } from "./pair";
 import { parseRequirement, type Requirement, type RequirementInput } from "./requirement";
 import { solve } from "./solve";
-import { req } from "./test-helpers";
+import { req, sensorNodeInput } from "./test-helpers";
 import type { RelaxSuggestion } from "./diagnosis";
 
 /** The request with one dotted field set, parsed again as a client would send it. */
@@ -50,14 +50,7 @@ function expectDelivers(r: Requirement, s: RelaxSuggestion) {
 }
 
 describe("diagnosis: a 3.3 V sensor node, 5 µA–250 mA, 50 mV, 12-bit at 3.3 V, 1 % from 1 mA, −20…60 °C", () => {
-  const input: RequirementInput = {
-    current: { min: "5 uA", max: "250 mA" },
-    supply: { voltage: "3.3 V" },
-    drop: { max: "50 mV" },
-    readout: { kind: "adc", bits: 12, fullScale: "3.3 V" },
-    accuracy: { percent: 1, bandMin: "1 mA" },
-    temperature: { min: "-20 degC", max: "60 degC" },
-  };
+  const input = sensorNodeInput;
   const r = req(input);
   const s = solve(r);
 
@@ -121,14 +114,8 @@ describe("diagnosis: a 3.3 V sensor node, 5 µA–250 mA, 50 mV, 12-bit at 3.3 V
 
 describe("diagnosis: relaxations that work, each the smallest step on its ladder", () => {
   it("accuracy-limited: 1 % from 1 mA cannot be met; the target rises, or the band starts higher", () => {
-    const r = req({
-      current: { min: "1 mA", max: "250 mA" },
-      supply: { voltage: "3.3 V" },
-      drop: { max: "50 mV" },
-      readout: { kind: "adc", bits: 12, fullScale: "3.3 V" },
-      accuracy: { percent: 1, bandMin: "1 mA" },
-      temperature: { min: "-20 degC", max: "60 degC" },
-    });
+    // The sensor node from 1 mA: one range spans it, but not at 1 %.
+    const r = req({ ...sensorNodeInput, current: { min: "1 mA", max: "250 mA" } });
     const s = solve(r);
     const relax = s.diagnosis?.relax ?? [];
     const byField = Object.fromEntries(relax.map((x) => [x.field, x]));
@@ -204,16 +191,6 @@ const hardArb = fc
     limit: 20,
   }));
 
-/** The issue's own sensor node, always among the cases tried. */
-const sensorNode: RequirementInput = {
-  current: { min: "5 uA", max: "250 mA" },
-  supply: { voltage: "3.3 V" },
-  drop: { max: "50 mV" },
-  readout: { kind: "adc", bits: 12, fullScale: "3.3 V" },
-  accuracy: { percent: 1, bandMin: "1 mA" },
-  temperature: { min: "-20 degC", max: "60 degC" },
-};
-
 describe("diagnosis: property", () => {
   it("every relax suggestion, applied alone to the request as sent, gives exactly its feasibleCount or its plan (fast-check)", () => {
     let checked = 0;
@@ -231,7 +208,7 @@ describe("diagnosis: property", () => {
           if (x.gives === "rangePlan") plans++;
         }
       }),
-      { numRuns: 40, seed: 20261202, examples: [[sensorNode]] },
+      { numRuns: 40, seed: 20261202, examples: [[sensorNodeInput]] },
     );
     // The generator does reach requirements with suggestions, of both kinds.
     expect(checked).toBeGreaterThan(10);
