@@ -102,12 +102,28 @@ export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
       value: `${f.volts(m.burdenV)} (${f.fraction(m.burdenV / req.supply.voltage)} of the supply)`,
     },
     { label: "Load voltage at maximum current", value: f.volts(m.loadVoltageV) },
+    ...(req.load.model === "constant-current"
+      ? []
+      : [
+          {
+            label: `Current through the shunt at full load (${req.load.model} load)`,
+            value: f.amps(m.operatingCurrentA),
+          },
+        ]),
     {
       label: "Scale factor",
       value: `${f.transimpedance(m.transimpedanceVPerA)}: ${decadeScale(m.transimpedanceVPerA)}`,
     },
     { label: "Output at maximum current", value: `${f.volts(m.outputAtMaxV)} (headroom ${f.volts(m.headroomV)})` },
+    {
+      label: "Output at full load, worst case",
+      value: `${f.volts(m.outputAtMaxWorstV)} with every error that raises it`,
+    },
     { label: "Readout step (LSB) in current", value: f.amps(m.lsbA) },
+    {
+      label: "Smallest step it can tell apart",
+      value: `${f.amps(m.resolvableStepA)} (${m.resolvableStepA > m.lsbA * (1 + 1e-9) ? "the RMS noise, above one step" : "one readout step"})`,
+    },
     { label: "Counts at minimum current", value: formatCount(m.countsAtMin) },
     {
       label: "Error at minimum current (worst case)",
@@ -127,9 +143,9 @@ export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
       value: m.lowestAccurateCurrentA === null ? "none in the span" : f.amps(m.lowestAccurateCurrentA),
     },
     { label: "Bandwidth (−3 dB)", value: f.hertz(m.bandwidthHz) },
-    { label: "Dissipation at maximum current", value: `${f.watts(m.dissipationW)} in a ${f.watts(m.ratingW)} part` },
+    { label: "Dissipation at full load", value: `${f.watts(m.dissipationW)} in a ${f.watts(m.ratingW)} part` },
     {
-      label: "Self-heating at maximum current",
+      label: "Self-heating at full load",
       value: `${f.kelvin(m.selfHeatingK)} (shunt up to about ${f.celsius(req.temperature.max + m.selfHeatingK)})`,
     },
   );
