@@ -112,6 +112,27 @@ describe("diagnosis: a 3.3 V sensor node, 5 µA–250 mA, 50 mV, 12-bit at 3.3 V
   });
 });
 
+describe("diagnosis when a range plan already covers the span", () => {
+  it("suggests only changes that give single pairs: a plan is no news (issue 11's hidden case, 2 µA–120 mA)", () => {
+    const input: RequirementInput = {
+      current: { min: "2 uA", max: "120 mA" },
+      supply: { voltage: "3.0 V" },
+      drop: { max: "50 mV" },
+      readout: { kind: "adc", bits: 12, fullScale: "2.048 V" },
+      resolution: { countsAtMin: 4 },
+    };
+    const s = solve(req(input));
+    expect(s.rangePlan).not.toBeNull();
+    expect(s.diagnosis?.rangePlan).toBeNull();
+    // Starting the span higher lets one pair read it (680 µA, found by the sweep): that is the news.
+    expect(s.diagnosis?.relax.length).toBeGreaterThan(0);
+    for (const x of s.diagnosis?.relax ?? []) {
+      expect(x.gives).toBe("pairs");
+      expectDelivers(appliedToInput(input, x), x);
+    }
+  });
+});
+
 describe("diagnosis: relaxations that work, each the smallest step on its ladder", () => {
   it("accuracy-limited: 1 % from 1 mA cannot be met; the target rises, or the band starts higher", () => {
     // The sensor node from 1 mA: one range spans it, but not at 1 %.

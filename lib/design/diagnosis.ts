@@ -343,7 +343,7 @@ const PLAN_COST_IN_SWEEPS = 16;
  * change that first gives single pairs, and, where a smaller change already allows a plan of
  * switched ranges (the span being too wide for one pair), that one too, marked as a plan.
  */
-function relaxations(req: Requirement, m: Model, sw: SweepArrays): RelaxSuggestion[] {
+function relaxations(req: Requirement, m: Model, sw: SweepArrays, tryPlans: boolean): RelaxSuggestion[] {
   const relax: RelaxSuggestion[] = [];
   let budget = RELAX_PAIR_BUDGET;
   const pairs = sw.mask.length;
@@ -357,9 +357,9 @@ function relaxations(req: Requirement, m: Model, sw: SweepArrays): RelaxSuggesti
       const cm = buildModel(changed);
       const s = sweepGrid(cm, sw.values, sw.gains);
       budget -= pairs;
-      if (s.feasibleCount > 0 || budget <= 0) {
+      if (s.feasibleCount > 0 || budget <= 0 || !tryPlans) {
         // Out of budget, a plan is not tried: the step counts as failing, so a step reported
-        // still works (it was checked) but may not be the smallest.
+        // still works (it was checked) but may not be the smallest. With a plan already, plans are no news.
         const o = { feasibleCount: s.feasibleCount, ranges: 0 };
         if (s.feasibleCount > 0) seen.set(i, o);
         return o;
@@ -398,5 +398,12 @@ function relaxations(req: Requirement, m: Model, sw: SweepArrays): RelaxSuggesti
 }
 
 export function diagnose(req: Requirement, m: Model, sw: SweepArrays, rangePlan: string | null): Diagnosis {
-  return { failing: failingCounts(sw), closest: closestPairs(m, sw), relax: relaxations(req, m, sw), rangePlan };
+  // With a plan already (no reason given why none exists), only changes that give single pairs are news.
+  const tryPlans = rangePlan !== null;
+  return {
+    failing: failingCounts(sw),
+    closest: closestPairs(m, sw),
+    relax: relaxations(req, m, sw, tryPlans),
+    rangePlan,
+  };
 }
