@@ -74,6 +74,9 @@ export function ProfileForm({ name: initialName, mail: initialMail }: { name: st
             </span>
           </label>
         ))}
+        <p className="text-2xs text-ink-faint">
+          Account notices always come: an invitation, and a change of your role in a team (it changes what you may do).
+        </p>
       </fieldset>
       <div className="flex flex-wrap items-center gap-3">
         <Button type="submit" variant="primary" disabled={busy}>

@@ -1,10 +1,21 @@
 // Every figure of one candidate, grouped, in SI with prefixes.
 import { rejectReasonLabels } from "@/lib/design/pair";
 import type { Requirement } from "@/lib/design/requirement";
+import { outputCeilingV } from "@/lib/design/model";
 import type { CandidateDetail } from "@/lib/design/types";
 import { formatPercent, formatSI } from "@/lib/design/format";
 
 type Row = [label: string, value: string, note?: string];
+
+/** Why the current at full load is what it is, in the load model's words. */
+const loadNotes: Record<Requirement["load"]["model"], string> = {
+  "constant-current": "the load draws the maximum current whatever the shunt takes",
+  resistive: "a resistive load draws a little less: the shunt takes some of its voltage",
+  "constant-power": "a constant-power load draws more: it makes up for the voltage the shunt takes",
+};
+
+/** Figures added in v2; a design saved before them has none: shown as a dash. */
+const maybe = (v: number | undefined, unit: string) => (v === undefined ? "—" : formatSI(v, unit));
 
 export function figureGroups(req: Requirement, m: CandidateDetail): { title: string; rows: Row[] }[] {
   const pct = (v: number | null) => (v === null ? "—" : formatPercent(v / 100));
@@ -30,21 +41,41 @@ export function figureGroups(req: Requirement, m: CandidateDetail): { title: str
           formatSI(m.loadVoltageV, "V"),
           req.drop.loadMin !== undefined ? `needs ${formatSI(req.drop.loadMin, "V")}` : undefined,
         ],
-        ["Dissipation at Imax", formatSI(m.dissipationW, "W")],
+        ["Current at full load", maybe(m.operatingCurrentA, "A"), loadNotes[req.load.model]],
+        ["Dissipation at full load", formatSI(m.dissipationW, "W")],
         [
           "Power rating chosen",
           formatSI(m.ratingW, "W"),
           `used at most ${formatPercent(req.shunt.derating)} of rating`,
         ],
-        ["Self-heating", formatSI(m.selfHeatingK, "K"), "above ambient at Imax"],
+        ["Self-heating", formatSI(m.selfHeatingK, "K"), "above ambient at full load"],
+        [
+          "Shunt hot spot",
+          m.hotSpotC === undefined ? "—" : `${Number(m.hotSpotC.toPrecision(3))} °C`,
+          `at the hottest ambient; the part allows ${req.shunt.maxTempC} °C`,
+        ],
       ],
     },
     {
       title: "Signal",
       rows: [
-        ["Output at Imax", formatSI(m.outputAtMaxV, "V"), `full scale ${formatSI(req.readout.fullScale, "V")}`],
+        ["Output at full load", formatSI(m.outputAtMaxV, "V"), "ideal: current × R × G"],
+        [
+          "Output at full load, worst case",
+          maybe(m.outputAtMaxWorstV, "V"),
+          `with every error that can raise it; must stay within ${formatSI(outputCeilingV(req), "V")} (the readout's full scale less its own worst errors, or the amplifier's swing, the lower)`,
+        ],
         ["Headroom", formatSI(m.headroomV, "V")],
         ["Readout step (LSB)", formatSI(m.lsbA, "A")],
+        [
+          "Smallest step it can tell apart",
+          maybe(m.resolvableStepA, "A"),
+          m.resolvableStepA === undefined
+            ? undefined
+            : m.resolvableStepA > m.lsbA * (1 + 1e-9)
+              ? "the RMS noise, larger than one readout step: finer steps drown in it; counts at Imin use this"
+              : "one readout step (the noise is smaller); counts at Imin use this",
+        ],
         ["Counts at Imin", String(Number(m.countsAtMin.toPrecision(3))), `wanted ${req.resolution.countsAtMin}`],
         ["Dead zone", formatSI(m.deadZoneA, "A"), "reads zero below this"],
         ["Bandwidth", formatSI(m.bandwidthHz, "Hz")],

@@ -1,7 +1,6 @@
 import type { PairDesignView as DesignView, DesignViewer } from "@/lib/design-view";
 import { benchHowTo, benchRows, cautions } from "@/lib/build-sheet/sheet-data";
-import { matchLibraryParts, nameLibraryParts, type LibraryParts } from "@/lib/build-sheet/library-parts";
-import { partsList } from "@/lib/build-sheet/parts";
+import { designParts, type LibraryParts } from "@/lib/build-sheet/library-parts";
 import { evaluateCandidate } from "@/lib/design/candidate";
 import { BuildHeader, PartsTable } from "@/components/design/build-parts";
 
@@ -22,10 +21,7 @@ export function BuildSheetPanel({
 }) {
   const maker = viewer.leadsWithBuildSheet;
   const metrics = evaluateCandidate(design.requirement, design.choice);
-  const listed = partsList(design.requirement, design.choice, metrics);
-  const parts = library
-    ? nameLibraryParts(listed, matchLibraryParts(design.requirement, design.choice, metrics, library))
-    : listed;
+  const parts = designParts(design.requirement, design.choice, metrics, library);
   const bench = benchRows(design.requirement, design.choice);
   const howTo = benchHowTo(design.requirement);
   const warnings = cautions(design.requirement, metrics);

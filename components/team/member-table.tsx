@@ -5,16 +5,9 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/field";
 import type { Role } from "@/db/schema";
+import { roleMeans } from "@/lib/role-words";
 
 type Member = { userId: string; email: string; name: string; role: Role; joinedAt: string };
-
-/** What the new role lets the member do, for the confirmation and the notice. */
-const roleMeans: Record<Role, string> = {
-  owner: "they will run the team: invite and remove members, change roles, approve designs",
-  designer: "they will create and edit designs and submit them for review",
-  reviewer: "they will approve or return designs, and no longer edit them",
-  maker: "they will see approved designs only, to build from",
-};
 
 const roleOptions: { value: Role; label: string }[] = [
   { value: "owner", label: "Owner — runs the team" },
@@ -45,7 +38,7 @@ export function MemberTable({ members, canEdit, selfId }: { members: Member[]; c
     else
       setMessage({
         tone: "ok",
-        text: `${member.name} is now a ${role}: ${roleMeans[role]}. It takes effect on their next page, and the team log records it.`,
+        text: `${member.name} is now a ${role}: they will ${roleMeans[role]}. It takes effect on their next page, the team log records it, and they get an e-mail saying so.`,
       });
     router.refresh();
   }
@@ -107,8 +100,8 @@ export function MemberTable({ members, canEdit, selfId }: { members: Member[]; c
         >
           <span className="min-w-0 flex-1">
             Make {pending.member.name}
-            {pending.member.userId === selfId ? " (you)" : ""} a {pending.role} instead of a {pending.member.role}?{" "}
-            {roleMeans[pending.role]}.
+            {pending.member.userId === selfId ? " (you)" : ""} a {pending.role} instead of a {pending.member.role}? They
+            will {roleMeans[pending.role]}.
           </span>
           <Button variant="primary" disabled={busy} onClick={() => change(pending.member, pending.role)}>
             Change the role

@@ -6,6 +6,7 @@ import { formatPercent, formatSI } from "@/lib/design/format";
 import { rejectReasonLabels, rejectReasons } from "@/lib/design/candidate";
 import type { Diagnosis, RelaxSuggestion } from "@/lib/design/diagnosis";
 import { formValueFor, type WizardValues } from "@/lib/wizard/form-values";
+import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 
 /** Constraint names short enough for a line per pair. */
@@ -39,10 +40,15 @@ export function DiagnosisView({ diagnosis, evaluated }: { diagnosis: Diagnosis; 
           <p className="font-medium text-ink">One change that would work:</p>
           <ul className="flex flex-col gap-1.5">
             {diagnosis.relax.map((s, i) => (
-              <li key={s.field} className="flex items-center justify-between gap-2">
+              <li key={`${s.field}-${s.gives}`} className="flex items-center justify-between gap-2">
                 <span className="min-w-0">
                   {i > 0 && <span className="text-ink-muted">or </span>}
                   {s.says}
+                  {s.gives === "rangePlan" && (
+                    <span className="ml-1.5 whitespace-nowrap" data-testid="relax-plan">
+                      <Badge tone="signal">range plan</Badge>
+                    </span>
+                  )}
                 </span>
                 <Button className="shrink-0" onClick={() => apply(s)} aria-label={`Apply: ${s.says}`}>
                   Apply
@@ -51,14 +57,16 @@ export function DiagnosisView({ diagnosis, evaluated }: { diagnosis: Diagnosis; 
             ))}
           </ul>
           <p className="text-2xs text-ink-faint">
-            Each was checked by solving again with that one change; the counts are what it gives.
+            Each was checked by solving again with that one change; the counts are what it gives. A change marked
+            &ldquo;range plan&rdquo; makes no single shunt and gain work, but lets the span be split into switched
+            ranges.
           </p>
         </div>
       ) : (
         <p className="text-ink">
           No single change to the accuracy target or band, the allowed drop, the minimum current, the counts wanted, the
-          ADC&apos;s bits or an output filter makes a pair feasible on its own. Change several at once, or look at what
-          fails below.
+          ADC&apos;s bits, an output filter or the shunt&apos;s tolerance or tempco makes a pair feasible or a range
+          plan possible on its own. Change several at once, or look at what fails below.
         </p>
       )}
       {diagnosis.rangePlan && <p className="text-ink-muted">{diagnosis.rangePlan}</p>}

@@ -40,7 +40,7 @@ describe("memberships", () => {
   });
 
   it("changes a role, keeps it on the membership only, and audits it", async () => {
-    expect(await changeMemberRole(teamId, ids.maker!, "designer", ids.owner!)).toEqual({ ok: true });
+    expect(await changeMemberRole(teamId, ids.maker!, "designer", ids.owner!)).toEqual({ ok: true, before: "maker" });
     expect((await getMember(ids.maker!, teamId))?.role).toBe("designer");
     const log = await listTeamAudit(teamId);
     expect(log[0]).toMatchObject({

@@ -67,7 +67,9 @@ export async function listMembers(teamId: string) {
     .orderBy(asc(users.name));
 }
 
-export type RoleChangeResult = { ok: true } | { ok: false; reason: "not-found" | "conflict"; message: string };
+/** `before`: the role the member had (the same as asked when nothing changed). */
+export type RoleChangeResult =
+  { ok: true; before: Role } | { ok: false; reason: "not-found" | "conflict"; message: string };
 
 /** Changes a member's role; a team always keeps at least one owner. */
 export async function changeMemberRole(
@@ -86,7 +88,7 @@ export async function changeMemberRole(
     const before = current[0]?.role;
     if (!before)
       return { ok: false, reason: "not-found", message: "That person is not a member of this team." } as const;
-    if (before === role) return { ok: true } as const;
+    if (before === role) return { ok: true, before } as const;
     if (before === "owner") {
       const owners = await tx
         .select({ n: sql<number>`count(*)::int` })
@@ -115,7 +117,7 @@ export async function changeMemberRole(
       },
       tx,
     );
-    return { ok: true } as const;
+    return { ok: true, before } as const;
   });
 }
 

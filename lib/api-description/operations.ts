@@ -193,10 +193,10 @@ export const operations: Operation[] = [
   {
     method: "patch",
     path: "/api/team/members/{userId}",
-    summary: "Change a member's role",
+    summary: "Change a member's role (the member is told by e-mail)",
     access: "team.manage-members",
     body: roleChangeSchema,
-    ok: json(200, "{userId, role}"),
+    ok: json(200, "{userId, role, mailed}"),
   },
   {
     method: "delete",

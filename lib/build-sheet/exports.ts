@@ -2,11 +2,12 @@
 // (our own versioned format, which imports back as a new design), and their file names.
 import { z } from "zod";
 import { writeCsv, type CsvCell } from "@/lib/csv-write";
-import { buildNetlist, planChoiceSchema, type Choice, type PlanChoice } from "@/lib/design";
+import { buildNetlist, evaluateCandidate, planChoiceSchema, type Choice, type PlanChoice } from "@/lib/design";
 import type { DesignView, PairDesignView } from "@/lib/design-view";
 import { choiceSchema, oneOfChoiceOrPlan } from "@/lib/saved-designs/service";
 import { designSlug } from "./slug";
-import { partsList, type Part } from "./parts";
+import { designParts, type LibraryParts } from "./library-parts";
+import type { Part } from "./parts";
 import { textField } from "@/lib/text-field";
 
 export const EXPORT_FORMAT = "sensewright-design";
@@ -53,8 +54,9 @@ export function csvCell(p: Part, col: (typeof csvColumns)[number]): CsvCell {
  * RFC 4180: a header row, CRLF line ends, fields quoted when they hold a comma, quote or line break;
  * text that a spreadsheet would run as a formula gets a leading apostrophe (writeCsv).
  */
-export function partsCsv(view: Pick<PairDesignView, "requirement" | "choice">): string {
-  const rows = partsList(view.requirement, view.choice);
+export function partsCsv(view: Pick<PairDesignView, "requirement" | "choice">, library?: LibraryParts): string {
+  // Named after the team-library parts the pair came from, as on the build sheet.
+  const rows = designParts(view.requirement, view.choice, evaluateCandidate(view.requirement, view.choice), library);
   return writeCsv(
     csvColumns,
     rows.map((p) => csvColumns.map((c) => csvCell(p, c))),

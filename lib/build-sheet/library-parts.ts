@@ -5,7 +5,7 @@ import type { CandidateDetail, Choice, Requirement } from "@/lib/design";
 import type { AmplifierValues, ShuntValues } from "@/lib/library/schema";
 import { resistorSetGains } from "@/lib/library/to-requirement";
 import * as f from "./format";
-import { kelvinAdvice, type Part } from "./parts";
+import { kelvinAdvice, partsList, type Part } from "./parts";
 
 /** The team library as stored (GET /api/library's rows). */
 export type LibraryParts = {
@@ -112,4 +112,10 @@ export function nameLibraryParts(parts: Part[], match: LibraryMatch): Part[] {
     if (!lib) return p;
     return { ...p, part: `${lib.name} (team library): ${p.part}`, notes: `${p.notes}${gapsLine(lib)}` };
   });
+}
+
+/** The design's parts list, R1 and U1 named after the team-library parts they came from when a library is given. */
+export function designParts(req: Requirement, choice: Choice, m: CandidateDetail, library?: LibraryParts): Part[] {
+  const listed = partsList(req, choice, m);
+  return library ? nameLibraryParts(listed, matchLibraryParts(req, choice, m, library)) : listed;
 }

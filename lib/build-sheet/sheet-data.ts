@@ -16,9 +16,9 @@ import {
 import type { PairDesignView as DesignView } from "@/lib/design-view";
 import { oneLine } from "@/lib/text-field";
 import * as f from "./format";
-import { matchLibraryParts, nameLibraryParts, type LibraryParts } from "./library-parts";
+import { designParts, type LibraryParts } from "./library-parts";
 import { constructionRows, traceLayoutNotes } from "./front-end-parts";
-import { kelvinAdvice, partsList, readoutText, type Part } from "./parts";
+import { kelvinAdvice, readoutText, type Part } from "./parts";
 
 export type Row = { label: string; value: string };
 export type BenchRow = BenchCheckRow & { current: string; expected: string; band: string };
@@ -104,12 +104,28 @@ export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
       value: `${f.volts(m.burdenV)} (${f.fraction(m.burdenV / req.supply.voltage)} of the supply)`,
     },
     { label: "Load voltage at maximum current", value: f.volts(m.loadVoltageV) },
+    ...(req.load.model === "constant-current"
+      ? []
+      : [
+          {
+            label: `Current through the shunt at full load (${req.load.model} load)`,
+            value: f.amps(m.operatingCurrentA),
+          },
+        ]),
     {
       label: "Scale factor",
       value: `${f.transimpedance(m.transimpedanceVPerA)}: ${decadeScale(m.transimpedanceVPerA)}`,
     },
     { label: "Output at maximum current", value: `${f.volts(m.outputAtMaxV)} (headroom ${f.volts(m.headroomV)})` },
+    {
+      label: "Output at full load, worst case",
+      value: `${f.volts(m.outputAtMaxWorstV)} with every error that raises it`,
+    },
     { label: "Readout step (LSB) in current", value: f.amps(m.lsbA) },
+    {
+      label: "Smallest step it can tell apart",
+      value: `${f.amps(m.resolvableStepA)} (${m.resolvableStepA > m.lsbA * (1 + 1e-9) ? "the RMS noise, above one step" : "one readout step"})`,
+    },
     { label: "Counts at minimum current", value: formatCount(m.countsAtMin) },
     {
       label: "Error at minimum current (worst case)",
@@ -129,9 +145,9 @@ export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
       value: m.lowestAccurateCurrentA === null ? "none in the span" : f.amps(m.lowestAccurateCurrentA),
     },
     { label: "Bandwidth (−3 dB)", value: f.hertz(m.bandwidthHz) },
-    { label: "Dissipation at maximum current", value: `${f.watts(m.dissipationW)} in a ${f.watts(m.ratingW)} part` },
+    { label: "Dissipation at full load", value: `${f.watts(m.dissipationW)} in a ${f.watts(m.ratingW)} part` },
     {
-      label: "Self-heating at maximum current",
+      label: "Self-heating at full load",
       value: `${f.kelvin(m.selfHeatingK)} (shunt up to about ${f.celsius(req.temperature.max + m.selfHeatingK)})`,
     },
   );
@@ -219,9 +235,7 @@ export function sheetData(view: Pick<DesignView, "requirement" | "choice">, libr
   const budget = budgetRows(req, choice);
   return {
     requirement: requirementRows(req),
-    parts: library
-      ? nameLibraryParts(partsList(req, choice, m), matchLibraryParts(req, choice, m, library))
-      : partsList(req, choice, m),
+    parts: designParts(req, choice, m, library),
     performance: performanceRows(req, m),
     budget: budget.rows,
     budgetTotals: budget.totals,

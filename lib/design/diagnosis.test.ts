@@ -5,9 +5,9 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { BOLTZMANN } from "./model";
 import { rejectReasons } from "./pair";
-import { parseRequirement, type Requirement } from "./requirement";
+import { parseRequirement, type Requirement, type RequirementInput } from "./requirement";
 import { solve } from "./solve";
-import { req } from "./test-helpers";
+import { req, sensorNodeInput } from "./test-helpers";
 import type { RelaxSuggestion } from "./diagnosis";
 
 /** The request with one dotted field set, parsed again as a client would send it. */
@@ -25,15 +25,33 @@ function applied(r: Requirement, s: RelaxSuggestion): Requirement {
 const feasibleWith = (r: Requirement, s: RelaxSuggestion, to = s.to) =>
   solve(applied(r, { ...s, to }), { diagnose: false }).feasibleCount;
 
+/** The client's own request with one dotted field set, as the API or the wizard would send it again. */
+function appliedToInput(input: RequirementInput, s: RelaxSuggestion): Requirement {
+  const copy = JSON.parse(JSON.stringify(input)) as Record<string, Record<string, unknown>>;
+  const [group, key] = s.field.split(".") as [string, string];
+  copy[group] = { ...(copy[group] ?? {}), [key]: s.to };
+  const parsed = parseRequirement(copy);
+  if (!parsed.ok) throw new Error(`${s.field} = ${s.to}: ${parsed.message}`);
+  return parsed.requirement;
+}
+
+/** What a suggestion promised, checked by solving again: its pairs, or a plan of its ranges and no pair. */
+function expectDelivers(r: Requirement, s: RelaxSuggestion) {
+  const again = solve(r, { diagnose: false });
+  expect(again.feasibleCount).toBe(s.feasibleCount);
+  if (s.gives === "pairs") {
+    expect(s.feasibleCount).toBeGreaterThan(0);
+    expect(s.rangeCount).toBe(0);
+  } else {
+    expect(s.feasibleCount).toBe(0);
+    expect(again.rangePlan?.ranges.length).toBe(s.rangeCount);
+    expect(s.rangeCount).toBeGreaterThanOrEqual(2);
+  }
+}
+
 describe("diagnosis: a 3.3 V sensor node, 5 µA–250 mA, 50 mV, 12-bit at 3.3 V, 1 % from 1 mA, −20…60 °C", () => {
-  const r = req({
-    current: { min: "5 uA", max: "250 mA" },
-    supply: { voltage: "3.3 V" },
-    drop: { max: "50 mV" },
-    readout: { kind: "adc", bits: 12, fullScale: "3.3 V" },
-    accuracy: { percent: 1, bandMin: "1 mA" },
-    temperature: { min: "-20 degC", max: "60 degC" },
-  });
+  const input = sensorNodeInput;
+  const r = req(input);
   const s = solve(r);
 
   it("counts every failure of every pair, not only the first", () => {
@@ -66,18 +84,59 @@ describe("diagnosis: a 3.3 V sensor node, 5 µA–250 mA, 50 mV, 12-bit at 3.3 V
     expect(s.rangePlan).toBeNull();
     expect(s.diagnosis?.rangePlan).toMatch(/No range plan/);
   });
+
+  it("still says what would work: no single pair spans 50,000 : 1, so the changes that work come with a range plan", () => {
+    // Why no single change gives pairs, by hand: at 250 mA within 50 mV the shunt is at most 0.2 Ω and
+    // R·G·250 mA ≤ 3.3 V, so R·G ≤ 13.2 V/A; one step of 3.3 V/2^12 = 806 µV is then ≥ 61 µA, and
+    // 10 counts need ≥ 0.61 mA, not 5 µA; the 10 mV output floor alone is a 0.76 mA dead zone.
+    expect(3.3 / 2 ** 12 / 13.2).toBeGreaterThan(5e-6 / 10);
+    const relax = s.diagnosis?.relax ?? [];
+    const fields = relax.map((x) => x.field);
+    expect(fields).toContain("accuracy.percent");
+    expect(fields).toContain("accuracy.bandMin");
+    for (const x of relax) {
+      expectDelivers(appliedToInput(input, x), x);
+      expect(x.gives).toBe("rangePlan");
+      expect(x.says).toMatch(/with a plan of \d switched ranges \(no single pair covers it\)$/);
+    }
+    const pct = relax.find((x) => x.field === "accuracy.percent") as RelaxSuggestion;
+    expect(pct.says).toMatch(/^\d+(\.\d+)? % is reachable from 1 mA up with a plan of/);
+    // The step before on the E24 ladder gives neither pairs nor a plan (the smallest working step).
+    const ladder = [1, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2, 2.2, 2.4, 2.7, 3, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2];
+    const before = ladder[ladder.indexOf(pct.to) - 1] as number;
+    const atBefore = solve(appliedToInput(input, { ...pct, to: before }), { diagnose: false });
+    expect(atBefore.feasibleCount).toBe(0);
+    expect(atBefore.rangePlan).toBeNull();
+    const band = relax.find((x) => x.field === "accuracy.bandMin") as RelaxSuggestion;
+    expect(band.says).toMatch(/^1 % is reachable from \d+(\.\d+)? mA up with a plan of/);
+  });
+});
+
+describe("diagnosis when a range plan already covers the span", () => {
+  it("suggests only changes that give single pairs: a plan is no news (issue 11's hidden case, 2 µA–120 mA)", () => {
+    const input: RequirementInput = {
+      current: { min: "2 uA", max: "120 mA" },
+      supply: { voltage: "3.0 V" },
+      drop: { max: "50 mV" },
+      readout: { kind: "adc", bits: 12, fullScale: "2.048 V" },
+      resolution: { countsAtMin: 4 },
+    };
+    const s = solve(req(input));
+    expect(s.rangePlan).not.toBeNull();
+    expect(s.diagnosis?.rangePlan).toBeNull();
+    // Starting the span higher lets one pair read it (680 µA, found by the sweep): that is the news.
+    expect(s.diagnosis?.relax.length).toBeGreaterThan(0);
+    for (const x of s.diagnosis?.relax ?? []) {
+      expect(x.gives).toBe("pairs");
+      expectDelivers(appliedToInput(input, x), x);
+    }
+  });
 });
 
 describe("diagnosis: relaxations that work, each the smallest step on its ladder", () => {
   it("accuracy-limited: 1 % from 1 mA cannot be met; the target rises, or the band starts higher", () => {
-    const r = req({
-      current: { min: "1 mA", max: "250 mA" },
-      supply: { voltage: "3.3 V" },
-      drop: { max: "50 mV" },
-      readout: { kind: "adc", bits: 12, fullScale: "3.3 V" },
-      accuracy: { percent: 1, bandMin: "1 mA" },
-      temperature: { min: "-20 degC", max: "60 degC" },
-    });
+    // The sensor node from 1 mA: one range spans it, but not at 1 %.
+    const r = req({ ...sensorNodeInput, current: { min: "1 mA", max: "250 mA" } });
     const s = solve(r);
     const relax = s.diagnosis?.relax ?? [];
     const byField = Object.fromEntries(relax.map((x) => [x.field, x]));
@@ -85,7 +144,7 @@ describe("diagnosis: relaxations that work, each the smallest step on its ladder
     expect(byField["accuracy.bandMin"]).toBeDefined();
     for (const x of relax) {
       expect(feasibleWith(r, x)).toBe(x.feasibleCount);
-      expect(x.feasibleCount).toBeGreaterThan(0);
+      if (x.gives === "pairs") expect(x.feasibleCount).toBeGreaterThan(0);
     }
     // The step before each on the E24 ladder still gives none.
     const pct = byField["accuracy.percent"] as RelaxSuggestion;
@@ -117,7 +176,10 @@ describe("diagnosis: relaxations that work, each the smallest step on its ladder
       0.0087 + (14.5e-6 / 0.1 + 20e-9 + 2.5 / 2 ** 16 / 2 / 10 + (3 * en * Math.sqrt((Math.PI / 2) * f)) / 0.1) / 0.01;
     expect(errorAt10mA(50e3)).toBeGreaterThan(0.05);
     expect(errorAt10mA(20e3)).toBeLessThan(0.05);
-    const filter = solve(r).diagnosis?.relax.find((x) => x.field === "amplifier.filterHz");
+    const relax = solve(r).diagnosis?.relax ?? [];
+    // A milder filter may already allow a plan of ranges; single pairs need 20 kHz.
+    const filter = relax.find((x) => x.field === "amplifier.filterHz" && x.gives === "pairs");
+    for (const x of relax.filter((y) => y.field === "amplifier.filterHz")) expectDelivers(applied(r, x), x);
     expect(filter?.to).toBe(20_000);
     expect(filter?.says).toBe(`add an output filter at 20 kHz (${filter?.feasibleCount} feasible pairs)`);
     if (filter) expect(feasibleWith(r, filter)).toBe(filter.feasibleCount);
@@ -138,38 +200,39 @@ const hardArb = fc
     series: fc.constantFrom("E6" as const, "E12" as const),
     filter: fc.option(fc.double({ min: 10, max: 1e5, noNaN: true }), { nil: null }),
   })
-  .map((p) =>
-    req({
-      current: { min: p.iMax / 10 ** p.spanDecades, max: p.iMax },
-      supply: { voltage: p.vBus, side: p.side },
-      drop: { max: p.dropFrac * p.vBus },
-      readout: { kind: "adc", bits: p.bits, fullScale: 2.5 },
-      resolution: { countsAtMin: p.countsAtMin },
-      accuracy: { percent: p.percent },
-      shunt: { series: p.series, min: 1e-3, max: 100 },
-      amplifier: { gains: [10, 20, 50, 100, 200, 500], filterHz: p.filter },
-      limit: 20,
-    }),
-  );
+  .map((p): RequirementInput => ({
+    current: { min: p.iMax / 10 ** p.spanDecades, max: p.iMax },
+    supply: { voltage: p.vBus, side: p.side },
+    drop: { max: p.dropFrac * p.vBus },
+    readout: { kind: "adc", bits: p.bits, fullScale: 2.5 },
+    resolution: { countsAtMin: p.countsAtMin },
+    accuracy: { percent: p.percent },
+    shunt: { series: p.series, min: 1e-3, max: 100 },
+    amplifier: { gains: [10, 20, 50, 100, 200, 500], filterHz: p.filter },
+    limit: 20,
+  }));
 
 describe("diagnosis: property", () => {
-  it("every relax suggestion, applied alone to the request, gives exactly its feasibleCount (fast-check)", () => {
+  it("every relax suggestion, applied alone to the request as sent, gives exactly its feasibleCount or its plan (fast-check)", () => {
     let checked = 0;
+    let plans = 0;
     fc.assert(
-      fc.property(hardArb, (r) => {
-        const s = solve(r);
+      fc.property(hardArb, (input) => {
+        const s = solve(req(input));
         if (s.feasibleCount > 0) {
           expect(s.diagnosis).toBeUndefined();
           return;
         }
         for (const x of s.diagnosis?.relax ?? []) {
-          expect(x.feasibleCount).toBeGreaterThan(0);
-          expect(feasibleWith(r, x)).toBe(x.feasibleCount);
+          expectDelivers(appliedToInput(input, x), x);
           checked++;
+          if (x.gives === "rangePlan") plans++;
         }
       }),
-      { numRuns: 40, seed: 20261202 },
+      { numRuns: 40, seed: 20261202, examples: [[sensorNodeInput]] },
     );
-    expect(checked).toBeGreaterThan(10); // the generator does reach requirements with suggestions
+    // The generator does reach requirements with suggestions, of both kinds.
+    expect(checked).toBeGreaterThan(10);
+    expect(plans).toBeGreaterThan(0);
   });
 });

@@ -18,7 +18,8 @@ import {
   type Model,
 } from "./model";
 import { rejectReasons, shuntFigures, type RejectReason } from "./pair";
-import type { Requirement } from "./requirement";
+import { planRanges } from "./range-plan";
+import { RANGE_SWITCH_DROP_SHARE, type Requirement } from "./requirement";
 import { sweepGrid, type SweepArrays } from "./sweep";
 import type { Candidate } from "./types";
 import { formatSI } from "./format";
@@ -26,14 +27,21 @@ import { formatSI } from "./format";
 /** How far a pair misses each constraint it fails, as a ratio to that constraint's limit. */
 export type Violations = Partial<Record<RejectReason, number>>;
 
+/** What a change gives: single feasible pairs, or (no single pair, but) a plan of switched ranges. */
+export type RelaxOutcome = "pairs" | "rangePlan";
+
 export type RelaxSuggestion = {
   /** Dotted path of the requirement field to change. */
   field: string;
   /** The value it had (SI), and the value that makes pairs feasible (SI). */
   from: number;
   to: number;
-  /** Feasible pairs with that one change, from a sweep with it applied. */
+  /** Feasible pairs with that one change, from a sweep with it applied (0 for a range plan). */
   feasibleCount: number;
+  /** Whether the change makes single pairs feasible or only a range plan possible. */
+  gives: RelaxOutcome;
+  /** Ranges in the plan the change yields (0 when it gives single pairs). */
+  rangeCount: number;
   /** The change in words. */
   says: string;
 };
@@ -52,8 +60,8 @@ export type Diagnosis = {
 export const CLOSEST_COUNT = 5;
 /** At most this many pairs are scored for closeness (those with the fewest failures first). */
 const CLOSEST_POOL = 20_000;
-/** Relaxation stops trying further fields once its sweeps have examined this many pairs in all. */
-export const RELAX_PAIR_BUDGET = 60_000_000;
+/** Relaxation stops trying further fields once its sweeps have examined this many pairs in all: a few seconds at most on the largest grid allowed, as /api/solve answers in the request. */
+export const RELAX_PAIR_BUDGET = 20_000_000;
 
 /** Every failure counted, not only the first per pair. */
 function failingCounts(sw: SweepArrays): Record<RejectReason, number> {
@@ -180,12 +188,33 @@ type Relaxable = {
   /** Candidate values, from the smallest change to the largest. */
   steps: number[];
   apply: (r: Requirement, x: number) => Requirement;
-  says: (x: number, n: number) => string;
+  /** The change in words, without what it gives. */
+  says: (x: number) => string;
 };
 
 function pairsWord(n: number): string {
   return `${n.toLocaleString("en")} feasible pair${n === 1 ? "" : "s"}`;
 }
+
+/** What the change gives, in words appended to its own. */
+function givesWords(o: Outcome): string {
+  return o.feasibleCount > 0
+    ? ` (${pairsWord(o.feasibleCount)})`
+    : ` with a plan of ${o.ranges} switched ranges (no single pair covers it)`;
+}
+
+/** 1 %, 0.5 %: a fraction in percent without float noise. */
+const pctText = (fraction: number) => `${Number((fraction * 100).toPrecision(4))} %`;
+
+/** Steps below `from` on a fixed ladder, nearest first. */
+const below = (from: number, ladder: number[]) => ladder.filter((x) => x < from * (1 - 1e-9)).sort((a, b) => b - a);
+
+/**
+ * Shunt tolerances and tempcos as parts are commonly stocked (common practice, no source):
+ * metal-strip and foil shunts come down to 0.1 % or better and 50 → 5 ppm/K.
+ */
+const SHUNT_TOLERANCES = [0.0025, 0.001, 0.0005];
+const SHUNT_TEMPCOS = [25e-6, 15e-6, 10e-6, 5e-6];
 
 function relaxables(req: Requirement, m: Model): Relaxable[] {
   const list: Relaxable[] = [];
@@ -199,24 +228,35 @@ function relaxables(req: Requirement, m: Model): Relaxable[] {
     from: pct,
     steps: e24Ladder(pct, 100),
     apply: (r, x) => ({ ...r, accuracy: { ...r.accuracy, percent: x } }),
-    says: (x, n) => `${x} % is reachable ${bandText} (${pairsWord(n)})`,
+    says: (x) => `${x} % is reachable ${bandText}`,
   });
   list.push({
     field: "accuracy.bandMin",
     from: req.accuracy.bandMin,
     steps: e24Ladder(req.accuracy.bandMin, req.accuracy.bandMax),
     apply: (r, x) => ({ ...r, accuracy: { ...r.accuracy, bandMin: x } }),
-    says: (x, n) => `${pct} % is reachable from ${formatSI(x, "A")} up (${pairsWord(n)})`,
+    says: (x) => `${pct} % is reachable from ${formatSI(x, "A")} up`,
   });
   // With a drop fraction the tighter of the two wins, so raising drop.max alone would change nothing.
-  if (req.drop.fraction === undefined)
+  if (req.drop.fraction === undefined) {
+    // A range switch sized by default takes its share of the drop: it grows with the drop, as a re-read request's would.
+    const switchIsDefault =
+      Math.abs(req.rangeSwitch.onResistance - (RANGE_SWITCH_DROP_SHARE * req.drop.max) / req.current.max) <=
+      1e-12 * req.rangeSwitch.onResistance;
     list.push({
       field: "drop.max",
       from: req.drop.max,
       steps: e24Ladder(req.drop.max, 0.5 * req.supply.voltage),
-      apply: (r, x) => ({ ...r, drop: { ...r.drop, max: x } }),
-      says: (x, n) => `allow a drop of ${formatSI(x, "V")} (${pairsWord(n)})`,
+      apply: (r, x) => ({
+        ...r,
+        drop: { ...r.drop, max: x },
+        rangeSwitch: switchIsDefault
+          ? { ...r.rangeSwitch, onResistance: (RANGE_SWITCH_DROP_SHARE * x) / r.current.max }
+          : r.rangeSwitch,
+      }),
+      says: (x) => `allow a drop of ${formatSI(x, "V")}`,
     });
+  }
   // The minimum current may rise as far as the accuracy band's start and the typical current.
   const minCap = Math.min(req.accuracy.bandMin, req.current.typical ?? Infinity, req.current.max);
   list.push({
@@ -224,7 +264,7 @@ function relaxables(req: Requirement, m: Model): Relaxable[] {
     from: req.current.min,
     steps: e24Ladder(req.current.min, minCap),
     apply: (r, x) => ({ ...r, current: { ...r.current, min: x } }),
-    says: (x, n) => `start the span at ${formatSI(x, "A")} (${pairsWord(n)})`,
+    says: (x) => `start the span at ${formatSI(x, "A")}`,
   });
   const counts = req.resolution.countsAtMin;
   list.push({
@@ -234,7 +274,7 @@ function relaxables(req: Requirement, m: Model): Relaxable[] {
       .filter((x) => x < counts * (1 - 1e-9) && x >= 1)
       .reverse(),
     apply: (r, x) => ({ ...r, resolution: { ...r.resolution, countsAtMin: x } }),
-    says: (x, n) => `ask for ${x} counts at the minimum current (${pairsWord(n)})`,
+    says: (x) => `ask for ${x} counts at the minimum current`,
   });
   if (req.readout.kind === "adc") {
     const bits = req.readout.bits;
@@ -242,9 +282,9 @@ function relaxables(req: Requirement, m: Model): Relaxable[] {
     list.push({
       field: "readout.bits",
       from: bits,
-      steps: Array.from({ length: Math.max(0, Math.min(24, 32) - bits) }, (_, i) => bits + 1 + i),
+      steps: Array.from({ length: Math.max(0, 24 - bits) }, (_, i) => bits + 1 + i),
       apply: (r, x) => ({ ...r, readout: { ...readout, bits: x } }),
-      says: (x, n) => `use a ${x}-bit ADC (${pairsWord(n)})`,
+      says: (x) => `use a ${x}-bit ADC`,
     });
   }
   // The band the noise sees now, at the lowest gain: a filter only helps below it.
@@ -256,50 +296,125 @@ function relaxables(req: Requirement, m: Model): Relaxable[] {
     from: req.amplifier.filterHz ?? corner,
     steps: decadeStepsDown(corner, Math.max(req.bandwidth.min, 0.1)),
     apply: (r, x) => ({ ...r, amplifier: { ...r.amplifier, filterHz: x } }),
-    says: (x, n) =>
-      `${hasFilter ? "lower the output filter to" : "add an output filter at"} ${formatSI(x, "Hz")} (${pairsWord(n)})`,
+    says: (x) => `${hasFilter ? "lower the output filter to" : "add an output filter at"} ${formatSI(x, "Hz")}`,
+  });
+  list.push({
+    field: "shunt.tolerance",
+    from: req.shunt.tolerance,
+    steps: below(req.shunt.tolerance, SHUNT_TOLERANCES),
+    apply: (r, x) => ({ ...r, shunt: { ...r.shunt, tolerance: x } }),
+    says: (x) => `use a ${pctText(x)} shunt`,
+  });
+  list.push({
+    field: "shunt.tempco",
+    from: req.shunt.tempco,
+    steps: below(req.shunt.tempco, SHUNT_TEMPCOS),
+    apply: (r, x) => ({ ...r, shunt: { ...r.shunt, tempco: x } }),
+    says: (x) => `use a shunt of ${Number((x * 1e6).toPrecision(3))} ppm/K`,
   });
   return list;
 }
 
+/** What one change gives: feasible single pairs, else the ranges of a plan (0: none). */
+type Outcome = { feasibleCount: number; ranges: number };
+const works = (o: Outcome) => o.feasibleCount > 0 || o.ranges > 0;
+
 /**
- * The smallest step that gives feasible pairs, by bisection over the steps (feasibility grows
+ * The smallest step whose outcome passes `ok`, by bisection over the steps (feasibility grows
  * with each step: every field here only loosens constraints as it moves). Null when even the
- * last step gives none.
+ * last step fails. Each step's outcome is computed once.
  */
-function smallestWorkingStep(
+function smallestStep(
   steps: number[],
-  count: (x: number) => number,
-): { to: number; feasibleCount: number } | null {
+  outcome: (i: number) => Outcome,
+  ok: (o: Outcome) => boolean,
+): { index: number; outcome: Outcome } | null {
   if (steps.length === 0) return null;
-  const last = steps[steps.length - 1] as number;
-  const lastCount = count(last);
-  if (lastCount === 0) return null;
-  let lo = -1; // known to give none (the requirement as it stands)
-  let hi = steps.length - 1; // known to give some
-  let hiCount = lastCount;
+  const last = outcome(steps.length - 1);
+  if (!ok(last)) return null;
+  let lo = -1; // known to fail (the requirement as it stands)
+  let hi = steps.length - 1; // known to pass
+  let hiOutcome = last;
   while (hi - lo > 1) {
     const mid = (lo + hi) >> 1;
-    const c = count(steps[mid] as number);
-    if (c > 0) {
+    const o = outcome(mid);
+    if (ok(o)) {
       hi = mid;
-      hiCount = c;
+      hiOutcome = o;
     } else lo = mid;
   }
-  return { to: steps[hi] as number, feasibleCount: hiCount };
+  return { index: hi, outcome: hiOutcome };
 }
 
-export function diagnose(req: Requirement, m: Model, sw: SweepArrays, rangePlan: string | null): Diagnosis {
+/** A plan is worked out from several sweeps and a greedy search: charged as this many sweeps (measured: 13–17). */
+const PLAN_COST_IN_SWEEPS = 16;
+
+/**
+ * The smallest single changes that work, each checked by solving again with it applied: the
+ * change that first gives single pairs, and, where a smaller change already allows a plan of
+ * switched ranges (the span being too wide for one pair), that one too, marked as a plan.
+ */
+function relaxations(req: Requirement, m: Model, sw: SweepArrays, tryPlans: boolean): RelaxSuggestion[] {
   const relax: RelaxSuggestion[] = [];
   let budget = RELAX_PAIR_BUDGET;
   const pairs = sw.mask.length;
   for (const r of relaxables(req, m)) {
     if (budget <= 0) break;
-    const found = smallestWorkingStep(r.steps, (x) => {
+    const seen = new Map<number, Outcome>();
+    const outcome = (i: number): Outcome => {
+      const known = seen.get(i);
+      if (known) return known;
+      const changed = r.apply(req, r.steps[i] as number);
+      const cm = buildModel(changed);
+      const s = sweepGrid(cm, sw.values, sw.gains);
       budget -= pairs;
-      return sweepGrid(buildModel(r.apply(req, x)), sw.values, sw.gains).feasibleCount;
-    });
-    if (found) relax.push({ field: r.field, from: r.from, ...found, says: r.says(found.to, found.feasibleCount) });
+      if (s.feasibleCount > 0 || budget <= 0 || !tryPlans) {
+        // Out of budget, a plan is not tried: the step counts as failing, so a step reported
+        // still works (it was checked) but may not be the smallest. With a plan already, plans are no news.
+        const o = { feasibleCount: s.feasibleCount, ranges: 0 };
+        if (s.feasibleCount > 0) seen.set(i, o);
+        return o;
+      }
+      budget -= PLAN_COST_IN_SWEEPS * pairs;
+      const o = { feasibleCount: 0, ranges: planRanges(changed, cm, s)?.ranges.length ?? 0 };
+      seen.set(i, o);
+      return o;
+    };
+    const suggest = (index: number, o: Outcome) => {
+      const to = r.steps[index] as number;
+      relax.push({
+        field: r.field,
+        from: r.from,
+        to,
+        feasibleCount: o.feasibleCount,
+        gives: o.feasibleCount > 0 ? "pairs" : "rangePlan",
+        rangeCount: o.feasibleCount > 0 ? 0 : o.ranges,
+        says: r.says(to) + givesWords(o),
+      });
+    };
+    const first = smallestStep(r.steps, outcome, works);
+    if (!first) continue;
+    suggest(first.index, first.outcome);
+    if (first.outcome.feasibleCount > 0) continue;
+    // Only a plan so far: the further change, if any, at which single pairs work.
+    const rest = r.steps.slice(first.index + 1);
+    const more = smallestStep(
+      rest,
+      (i) => outcome(first.index + 1 + i),
+      (o) => o.feasibleCount > 0,
+    );
+    if (more) suggest(first.index + 1 + more.index, more.outcome);
   }
-  return { failing: failingCounts(sw), closest: closestPairs(m, sw), relax, rangePlan };
+  return relax;
+}
+
+export function diagnose(req: Requirement, m: Model, sw: SweepArrays, rangePlan: string | null): Diagnosis {
+  // With a plan already (no reason given why none exists), only changes that give single pairs are news.
+  const tryPlans = rangePlan !== null;
+  return {
+    failing: failingCounts(sw),
+    closest: closestPairs(m, sw),
+    relax: relaxations(req, m, sw, tryPlans),
+    rangePlan,
+  };
 }

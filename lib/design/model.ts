@@ -105,6 +105,11 @@ export function readoutStepV(req: Requirement): number {
   return r.kind === "adc" ? r.fullScale / 2 ** r.bits : r.fullScale / r.counts;
 }
 
+/** Highest usable output: the readout's full scale less its own worst errors, or the amplifier's swing, the lower, V. */
+export function outputCeilingV(req: Requirement): number {
+  return buildModel(req).outCeil;
+}
+
 export function buildModel(req: Requirement): Model {
   const a = req.amplifier;
   const s = req.shunt;

@@ -4,6 +4,7 @@
 // is marked only when the requirement fields a figure rests on agree. Otherwise each value is
 // shown against its own design's limit.
 import { formatPercent, formatSI, type Requirement } from "@/lib/design";
+import { outputCeilingV } from "@/lib/design/model";
 import { flatten } from "./figures";
 
 /** The requirement paths each figure is taken at (load model: the current itself depends on it). */
@@ -49,6 +50,8 @@ export function againstOwnLimit(figure: string, value: unknown, req: Requirement
         : `from a ${formatSI(req.supply.voltage, "V")} supply`;
     case "outputAtMaxV":
       return `of ${formatSI(req.readout.fullScale, "V")} full scale${share(value, req.readout.fullScale)}`;
+    case "outputAtMaxWorstV":
+      return `of ${formatSI(outputCeilingV(req), "V")} the output may reach${share(value, outputCeilingV(req))}`;
     case "countsAtMin":
       return `${req.resolution.countsAtMin} wanted at ${formatSI(req.current.min, "A")}`;
     case "lsbA":

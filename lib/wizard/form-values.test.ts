@@ -12,6 +12,8 @@ describe("formValueFor", () => {
     ["drop.max", "drop", "max", e24Ladder(1e-4, 10)],
     ["amplifier.filterHz", "amplifier", "filterHz", [0.1, 0.2, 0.5, 1, 2, 5, 10, 20e3, 50e3, 100e3]],
     ["accuracy.percent", "accuracy", "percent", e24Ladder(0.1, 100)],
+    ["shunt.tolerance", "shunt", "tolerance", [0.0025, 0.001, 0.0005]],
+    ["shunt.tempco", "shunt", "tempco", [25e-6, 15e-6, 10e-6, 5e-6]],
   ] as const)("%s reads back exactly", (field, group, key, values) => {
     for (const to of values) {
       const input: Record<string, object> = {
@@ -48,7 +50,10 @@ describe("formValueFor", () => {
       const changed = { ...form, [group]: { ...groups[group], [key]: formValueFor(s) } };
       const again = parseRequirement(changed);
       if (!again.ok) throw new Error(again.message);
-      expect(solve(again.requirement, { diagnose: false }).feasibleCount).toBe(s.feasibleCount);
+      const solved = solve(again.requirement, { diagnose: false });
+      expect(solved.feasibleCount).toBe(s.feasibleCount);
+      // A change that yields a plan of ranges yields that plan through the form too.
+      expect(solved.rangePlan?.ranges.length ?? 0).toBe(s.rangeCount);
     }
   });
 });

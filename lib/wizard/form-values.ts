@@ -137,6 +137,10 @@ export function formValueFor(s: Pick<RelaxSuggestion, "field" | "to">): string |
       return formatSI(s.to, "V", 6);
     case "amplifier.filterHz":
       return formatSI(s.to, "Hz", 6);
+    case "shunt.tolerance":
+      return `${Number((s.to * 100).toPrecision(6))} %`;
+    case "shunt.tempco":
+      return `${Number((s.to * 1e6).toPrecision(6))} ppm/K`;
     default:
       return s.to;
   }

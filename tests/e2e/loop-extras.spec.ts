@@ -99,6 +99,15 @@ test("a role change asks first and says what it means; the timeline and log spea
   await select.selectOption("reviewer");
   await page.getByRole("button", { name: "Change the role" }).click();
   await expect(page.getByTestId("role-notice")).toContainText("Demo Maker is now a reviewer");
+  await expect(page.getByTestId("role-notice")).toContainText("they get an e-mail saying so");
+  // The mail went out after the answer: the owner reads it in the built-in outbox.
+  const roleMail = async () => {
+    const box = (await (await page.request.get("/api/outbox")).json()) as {
+      messages: { to: string; subject: string }[];
+    };
+    return box.messages.filter((m) => m.to === "maker@harbourline.example" && / is now reviewer$/.test(m.subject));
+  };
+  await expect.poll(async () => (await roleMail()).length, { timeout: 10_000 }).toBeGreaterThanOrEqual(1);
   // The page refreshes into the new role before the next change.
   await expect(select).toHaveValue("reviewer");
   await select.selectOption("maker");

@@ -6,6 +6,9 @@ import Papa from "papaparse";
 import { extractText } from "unpdf";
 import { apiAs } from "../fixtures/auth";
 import { loggerRequirement, parsed, firstFeasible } from "../../lib/build-sheet/fixtures";
+import type { LibraryParts } from "../../lib/build-sheet/library-parts";
+import { amplifierInput, shuntInput } from "../../lib/library/schema";
+import { amplifierRequirement, shuntRequirement } from "../../lib/library/to-requirement";
 
 type DesignBody = {
   id: string;
@@ -162,6 +165,45 @@ test.describe("GET /api/designs/[id]/parts.csv", () => {
     expect(Number(byRef.U1?.value_si)).toBe(choice.gain);
   });
 });
+
+test.describe("GET /api/designs/[id]/parts.csv of a design made from team-library parts", () => {
+  test("names the library amplifier and shunt family in the part column, with a coverage line in the notes", async () => {
+    // The demo library as the server stores it (GET /api/library), and a requirement filled from two of its parts.
+    const lib = (await (await designer.get("/api/library")).json()) as LibraryParts;
+    const ampRow = lib.amplifiers.find((a) => a.name.startsWith("SW-CSA-20"));
+    const shuntRow = lib.shunts.find((x) => x.name.startsWith("SW-MF"));
+    if (!ampRow || !shuntRow) throw new Error("demo library parts missing");
+    const amp = amplifierInput.parse(ampRow);
+    const shunt = shuntInput.parse(shuntRow);
+    const requirement = {
+      current: { min: "1 mA", max: "100 mA" },
+      supply: { voltage: "5 V" },
+      drop: { max: "200 mV" },
+      amplifier: amplifierRequirement(amp, 5),
+      shunt: shuntRequirement(shunt),
+    };
+    const libChoice = firstFeasible(parsed(requirement));
+    const made = await designer.post("/api/designs", {
+      data: { name: `Library parts ${stamp}`, requirement, choice: libChoice },
+    });
+    expect(made.status(), await made.text()).toBe(201);
+    const id = ((await made.json()) as { id: string }).id;
+    const res = await designer.get(`/api/designs/${id}/parts.csv`);
+    expect(res.status()).toBe(200);
+    const rows = Papa.parse<Record<string, string>>(await res.text(), { header: true, skipEmptyLines: true });
+    expect(rows.errors).toEqual([]);
+    const byRef = Object.fromEntries(rows.data.map((r) => [r.designator, r]));
+    expect(byRef.U1?.part).toMatch(new RegExp(`^${escapeRe(amp.name)} \\(team library\\): `));
+    expect(byRef.R1?.part).toMatch(new RegExp(`^${escapeRe(shunt.name)} \\(team library\\): `));
+    for (const ref of ["U1", "R1"])
+      expect(byRef[ref]?.notes).toMatch(/The library data cover the requirement\.|Library data stop short: /);
+    // The hand-typed design names no library part.
+    const plain = await designer.get(`/api/designs/${draftId}/parts.csv`);
+    expect(await plain.text()).not.toContain("(team library)");
+  });
+});
+
+const escapeRe = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
 
 test.describe("design export and import", () => {
   test("exports JSON that imports back as a new draft with identical figures", async () => {

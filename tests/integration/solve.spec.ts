@@ -3,6 +3,7 @@
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { apiAs } from "../fixtures/auth";
 import { loggerOneRange } from "../../lib/wizard/scenarios";
+import { sensorNodeInput } from "../../lib/design/test-helpers";
 
 type SolveBody = {
   requirement: Record<string, unknown>;
@@ -248,4 +249,26 @@ test.describe("POST /api/netlist", () => {
     });
     await expect422(res, "offset");
   });
+});
+
+test("nothing feasible: the diagnosis's changes, sent back one at a time, give what they promise (issue 11's sensor node)", async () => {
+  test.setTimeout(60_000);
+  // A copy through JSON, as a client holds it, so one field can be set by its dotted path.
+  const sensorNode = JSON.parse(JSON.stringify(sensorNodeInput)) as Record<string, Record<string, unknown>>;
+  const res = await designer.post("/api/solve", { data: sensorNode });
+  expect(res.status(), await res.text()).toBe(200);
+  type Relax = { field: string; to: number; feasibleCount: number; gives: string; rangeCount: number; says: string };
+  const body = (await res.json()) as SolveBody & { diagnosis?: { relax: Relax[]; rangePlan: string | null } };
+  expect(body.feasibleCount).toBe(0);
+  const relax = body.diagnosis?.relax ?? [];
+  expect(relax.map((r) => r.field)).toEqual(expect.arrayContaining(["accuracy.percent", "accuracy.bandMin"]));
+  for (const r of relax) {
+    const [group, key] = r.field.split(".") as [string, string];
+    const changed = { ...sensorNode, [group]: { ...sensorNode[group], [key]: r.to } };
+    const again = await designer.post("/api/solve", { data: changed });
+    expect(again.status()).toBe(200);
+    const got = (await again.json()) as SolveBody;
+    expect(got.feasibleCount, r.says).toBe(r.feasibleCount);
+    expect(got.rangePlan?.ranges.length ?? 0, r.says).toBe(r.rangeCount);
+  }
 });

@@ -140,6 +140,9 @@ describe("build sheet of a draft (soil logger, low side)", () => {
     expectText(r.all, formatSI(m.dissipationW, "W"));
     expectText(r.all, "Error budget by source");
     expectText(r.all, "Error versus current");
+    // v2 figures: the worst-case output the output check uses, the step the counts check uses.
+    expectText(r.all, `Output at full load, worst case ${formatSI(m.outputAtMaxWorstV, "V")}`);
+    expectText(r.all, `Smallest step it can tell apart ${formatSI(m.resolvableStepA, "A")}`);
   });
 
   it("prints the engine's cautions, the list the candidate study shows", () => {
@@ -217,6 +220,28 @@ describe("build sheet cautions and parts that depend on the design", () => {
     expectText(r.all, "the sense lines sit at 120 V");
     expectText(r.all, "isolated amplifier");
     expectText(r.all, "measurement category");
+  });
+
+  it("gives the current a constant-power load really draws through the shunt", () => {
+    // Constant power P = V·Imax; load voltage (V + √(V² − 4PR))/2 and I = P/V_load (the quadratic
+    // of a constant-power load behind a series resistance, solved by hand): 3.3 W through 0.1 Ω gives
+    // √(10.89 − 1.32) = 3.0935, a load voltage of 3.1968 V and 1.0323 A.
+    const cp = sheetData(
+      fixtureView(
+        {
+          current: { min: "100 mA", max: "1 A" },
+          supply: { voltage: "3.3 V" },
+          drop: { max: "200 mV" },
+          load: { model: "constant-power" },
+        },
+        { name: "Constant-power load", choice: { shuntOhms: 0.1, gain: 20 } },
+      ),
+    );
+    const iOp = 3.3 / ((3.3 + Math.sqrt(3.3 * 3.3 - 4 * 3.3 * 0.1)) / 2);
+    expect(iOp).toBeCloseTo(1.0323, 4);
+    const row = cp.performance.find((x) => x.label.startsWith("Current through the shunt at full load"));
+    expect(row?.label).toContain("constant-power load");
+    expect(row?.value).toBe(f.amps(iOp));
   });
 
   it("lists the gain-setting resistors of a resistor-set gain", async () => {

@@ -1,4 +1,6 @@
-// GET /api/designs/[id]/parts.csv: the parts list (designators, values, ratings, notes) as CSV.
+// GET /api/designs/[id]/parts.csv: the parts list (designators, values, ratings, notes) as CSV,
+// the parts named after the team-library parts the pair came from, as on the build sheet.
+import { listLibrary } from "@/db/queries/library";
 import { apiRoute } from "@/lib/auth/gate";
 import { attachment, exportFileName, partsCsv } from "@/lib/build-sheet/exports";
 import { designViewFor } from "@/lib/saved-designs/access";
@@ -6,7 +8,8 @@ import { planPartsCsv } from "@/lib/build-sheet/plan-exports";
 
 export const GET = apiRoute({ action: "design.read", doing: "download parts lists" }, async ({ caller, params }) => {
   const view = await designViewFor(caller, params.id ?? "");
-  const csv = view.kind === "plan" ? planPartsCsv(view.requirement, view.plan) : partsCsv(view);
+  const csv =
+    view.kind === "plan" ? planPartsCsv(view.requirement, view.plan) : partsCsv(view, await listLibrary(caller.teamId));
   return new Response(csv, {
     headers: {
       "content-type": "text/csv; charset=utf-8; header=present",

@@ -1,7 +1,8 @@
 import { removeMember } from "@/db/queries/invitations";
-import { changeMemberRole } from "@/db/queries/users";
+import { changeMemberRole, findUserById } from "@/db/queries/users";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError, refused } from "@/lib/http";
+import { mailRoleChanged } from "@/lib/mail/role-change";
 import { roleChangeSchema } from "@/lib/team-schemas";
 
 function memberId(params: Record<string, string>): string {
@@ -16,7 +17,19 @@ export const PATCH = apiRoute(
     const userId = memberId(params);
     const result = await changeMemberRole(caller.teamId, userId, body.role, caller.userId);
     if (!result.ok) throw refused(result);
-    return { userId, role: body.role };
+    // The member hears of it by mail, sent after this answer has gone.
+    const member = await findUserById(userId);
+    const mailed = member
+      ? mailRoleChanged({
+          teamId: caller.teamId,
+          teamName: caller.teamName,
+          actor: caller,
+          member: { userId, email: member.email },
+          from: result.before,
+          to: body.role,
+        })
+      : 0;
+    return { userId, role: body.role, mailed };
   },
 );
 
