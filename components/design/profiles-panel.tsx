@@ -9,33 +9,14 @@ import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { formatSI } from "@/lib/design/format";
 import type { DesignView, DesignViewer } from "@/lib/design-view";
-import type { DecimatedSeries } from "@/lib/profile/decimate";
-import type { ProfileSummary } from "@/lib/design/profile";
+import type { ApiError, ProfileDetail, ProfileListItem, ProfilesBody } from "@/lib/api-description/responses";
 
-type ListItem = {
-  id: string;
-  fileName: string;
-  samples: number;
-  revision: number;
-  summary: ProfileSummary;
-  uploadedBy: string;
-  uploadedByName: string;
-  createdAt: string;
-  /** From the policy on the server: the uploader or an owner. */
-  canDelete: boolean;
-};
-
-type Detail = ListItem & {
-  startS: number;
-  endS: number;
-  current: { revision: number; summary: ProfileSummary };
-  design: { shuntOhms: number; gain: number; supplyV: number; fullScaleV: number; lsbA: number };
-  series: DecimatedSeries;
-};
+type ListItem = ProfileListItem;
+type Detail = ProfileDetail;
 
 async function getJson<T>(url: string): Promise<T> {
   const res = await fetch(url);
-  const data = (await res.json().catch(() => ({}))) as T & { message?: string };
+  const data = (await res.json().catch(() => ({}))) as T & Partial<ApiError>;
   if (!res.ok) throw new Error(data.message ?? `The server answered ${res.status}.`);
   return data;
 }
@@ -47,7 +28,7 @@ export function ProfilesPanel({ design, viewer }: { design: DesignView; viewer: 
   const listKey = ["profiles", design.id];
   const list = useQuery({
     queryKey: listKey,
-    queryFn: () => getJson<{ profiles: ListItem[] }>(`/api/designs/${design.id}/profiles`),
+    queryFn: () => getJson<ProfilesBody>(`/api/designs/${design.id}/profiles`),
   });
   const [selected, setSelected] = useState<string | null>(null);
   const profiles = list.data?.profiles ?? [];
@@ -58,7 +39,7 @@ export function ProfilesPanel({ design, viewer }: { design: DesignView; viewer: 
     if (!window.confirm(`Delete the recording ${p.fileName}? This cannot be undone.`)) return;
     setDeleteError(null);
     const res = await fetch(`/api/designs/${design.id}/profiles/${p.id}`, { method: "DELETE" }).catch(() => null);
-    const data = (await res?.json().catch(() => ({}))) as { message?: string } | undefined;
+    const data = (await res?.json().catch(() => ({}))) as Partial<ApiError> | undefined;
     if (!res?.ok) setDeleteError(data?.message ?? "The recording could not be deleted.");
     if (selected === p.id) setSelected(null);
     await qc.invalidateQueries({ queryKey: listKey });

@@ -10,6 +10,7 @@ import { useCallback, useEffect, useMemo, useState } from "react";
 import { StatusBadge } from "@/components/review/status-badge";
 import { Button } from "@/components/ui/button";
 import { formatSI } from "@/lib/design/format";
+import type { ApiError } from "@/lib/api-description/responses";
 import {
   designStatuses,
   listSearch,
@@ -28,7 +29,7 @@ const reachedFrom = new Map<string, { cursor: string; page: number }>();
 
 async function fetchPage(params: ListParams): Promise<DesignsPage> {
   const res = await fetch(`/api/designs${listSearch(params, { limit: String(PAGE_SIZE) })}`);
-  const body = (await res.json().catch(() => null)) as (DesignsPage & { message?: string }) | null;
+  const body = (await res.json().catch(() => null)) as (DesignsPage & Partial<ApiError>) | null;
   if (!res.ok || !body) throw new Error(body?.message ?? `The designs could not be loaded (HTTP ${res.status}).`);
   return body;
 }
@@ -211,7 +212,7 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
                   </td>
                   <td className="hidden whitespace-nowrap px-3 py-1.5 num lg:table-cell">{d.revision}</td>
                   <td className="hidden whitespace-nowrap px-3 py-1.5 num md:table-cell">
-                    {d.shuntOhms !== undefined && d.gain !== undefined && d.shuntOhms !== null && d.gain !== null
+                    {d.shuntOhms !== null && d.gain !== null
                       ? `${formatSI(d.shuntOhms, "Ω")} × ${Number(d.gain.toPrecision(4))}`
                       : "—"}
                   </td>

@@ -5,6 +5,7 @@ import { useQueries } from "@tanstack/react-query";
 import { Axis, Grid, LineSeries, Tooltip, XYChart } from "@visx/xychart";
 import { useEffect, useMemo, useState } from "react";
 import { insertionCurve, insertionSchema, type InsertionResult } from "@/lib/design/insertion";
+import type { ApiError, InsertionBody } from "@/lib/api-description/responses";
 import { loadModels, type LoadModel } from "@/lib/design/requirement";
 import { formatPercent, formatSI } from "@/lib/design/format";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, siTick } from "@/components/charts/axes";
@@ -29,7 +30,7 @@ const modelWords: Record<LoadModel, string> = {
 
 type Inputs = { supply: string; seriesOhms: string; model: LoadModel; current: string; loadMin: string };
 type Answer =
-  { ok: true; result: InsertionResult } | { ok: false; message: string; fieldErrors: Record<string, string[]> };
+  { ok: true; result: InsertionResult } | ({ ok: false } & Required<Pick<ApiError, "message" | "fieldErrors">>);
 
 async function ask(i: Inputs, model: LoadModel): Promise<Answer> {
   const res = await fetch("/api/insertion", {
@@ -37,7 +38,7 @@ async function ask(i: Inputs, model: LoadModel): Promise<Answer> {
     headers: { "content-type": "application/json" },
     body: JSON.stringify({ supply: i.supply, seriesOhms: i.seriesOhms, load: { model, current: i.current } }),
   });
-  const body = (await res.json()) as InsertionResult & { message?: string; fieldErrors?: Record<string, string[]> };
+  const body = (await res.json()) as InsertionBody & Partial<ApiError>;
   if (res.ok) return { ok: true, result: body };
   return {
     ok: false,

@@ -5,8 +5,9 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/field";
 import type { Role } from "@/db/schema";
+import type { ApiError, TeamMember } from "@/lib/api-description/responses";
 
-type Member = { userId: string; email: string; name: string; role: Role; joinedAt: string };
+type Member = TeamMember;
 
 /** What the new role lets the member do, for the confirmation and the notice. */
 const roleMeans: Record<Role, string> = {
@@ -38,7 +39,7 @@ export function MemberTable({ members, canEdit, selfId }: { members: Member[]; c
       headers: { "content-type": "application/json" },
       body: JSON.stringify({ role }),
     });
-    const body = (await res.json().catch(() => ({}))) as { message?: string };
+    const body = (await res.json().catch(() => ({}))) as Partial<ApiError>;
     setBusy(false);
     setPending(null);
     if (!res.ok) setMessage({ tone: "bad", text: body.message ?? `The change was refused (${res.status}).` });

@@ -6,7 +6,7 @@ import { useState } from "react";
 import { useForm, type Resolver } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
-import type { UnitView } from "@/lib/built-units/judge";
+import type { ApiError, UnitBody } from "@/lib/api-description/responses";
 import { recordUnitSchema, todayIso } from "@/lib/built-units/schemas";
 import { formatSI } from "@/lib/design/format";
 import type { BenchCheckRow } from "@/lib/design/bench-check";
@@ -20,7 +20,7 @@ export function RecordUnitForm({
 }: {
   designId: string;
   bench: BenchCheckRow[];
-  onRecorded: (unit: UnitView) => void | Promise<void>;
+  onRecorded: (unit: UnitBody) => void | Promise<void>;
 }) {
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Values>({
@@ -40,8 +40,7 @@ export function RecordUnitForm({
       headers: { "content-type": "application/json" },
       body: JSON.stringify(values),
     }).catch(() => null);
-    const data = (await res?.json().catch(() => ({}))) as
-      (UnitView & { message?: string; fieldErrors?: Record<string, string[]> }) | undefined;
+    const data = (await res?.json().catch(() => ({}))) as (UnitBody & Partial<ApiError>) | undefined;
     if (!res?.ok || !data) {
       setMessage(data?.message ?? "The unit could not be recorded; nothing was stored.");
       for (const [path, msgs] of Object.entries(data?.fieldErrors ?? {})) {

@@ -2,10 +2,13 @@
 // zod schemas: responses.ts builds the route bodies from them, the OpenAPI document is generated
 // from them, and engine-shapes.test.ts checks that each one is exactly its engine type.
 import { z } from "zod";
+import { budgetSourceLabels, type BudgetSource } from "@/lib/design/error-budget";
 import { rejectReasons } from "@/lib/design/pair";
 import { topologies } from "@/lib/design/requirement";
 
 const reason = z.enum(rejectReasons);
+/** The error budget's terms (error-budget.ts `BudgetSource`), listed by its table of labels. */
+export const budgetSource = z.enum(Object.keys(budgetSourceLabels) as [BudgetSource, ...BudgetSource[]]);
 const perReason = z.object(
   Object.fromEntries(rejectReasons.map((r) => [r, z.number()])) as Record<(typeof rejectReasons)[number], z.ZodNumber>,
 );

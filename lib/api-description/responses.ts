@@ -7,6 +7,7 @@ import { designStatusEnum, roleEnum, tokenAccessEnum, verdictEnum } from "@/db/s
 import { gainModes } from "@/lib/library/schema";
 import {
   benchCheckRowShape,
+  budgetSource,
   candidateDetailShape,
   choiceShape,
   insertionShape,
@@ -92,9 +93,9 @@ const invitationRow = z.object({
 const auditEvent = z.object({
   id,
   action: z.string(),
-  targetType: z.string(),
+  targetType: z.string().nullable(),
   targetId: z.string().nullable(),
-  details: z.record(z.string(), z.unknown()).nullable(),
+  details: z.record(z.string(), z.unknown()),
   at: iso,
   actorName: z.string().nullable(),
   actorEmail: z.string().nullable(),
@@ -250,7 +251,6 @@ const unitView = z.object({
   calibration,
   outsideSpread: z.boolean().nullable(),
 });
-const budgetSource = z.string().describe("an error-budget term (error-budget.ts BudgetSource)");
 const unitsSummary = z.object({
   units: z.array(unitView),
   yield: z.object({
@@ -479,7 +479,8 @@ export type DesignsPage = Bodies["designList"];
 export type DesignRow = DesignsPage["designs"][number];
 export type DesignCreated = Bodies["designCreated"];
 export type DesignImported = Bodies["designImported"];
-export type ProfileListItem = Bodies["profiles"]["profiles"][number];
+export type ProfilesBody = Bodies["profiles"];
+export type ProfileListItem = ProfilesBody["profiles"][number];
 export type ProfileUploaded = Bodies["profileUploaded"];
 export type ProfileDetail = Bodies["profile"];
 export type UnitsSummaryBody = Bodies["units"];
