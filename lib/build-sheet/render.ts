@@ -1,5 +1,4 @@
 // Renders a saved design's build sheet to PDF bytes, in typefaces embedded from npm font files.
-import { createElement } from "react";
 import { Font, renderToBuffer } from "@react-pdf/renderer";
 import type { DesignView } from "@/lib/design-view";
 import { breakPoints, sheetFonts } from "./fonts";
@@ -19,8 +18,6 @@ export function pdfPageCount(pdf: Buffer): number {
   return pdf.toString("latin1").match(/\/Type\s*\/Page(?![s\w])/g)?.length ?? 0;
 }
 
-type DocElement = Parameters<typeof renderToBuffer>[0];
-
 export async function renderBuildSheet(view: DesignView, opts: SheetMeta, library?: LibraryParts): Promise<Buffer> {
   return renderSheet(view, sheetData(view, library), opts);
 }
@@ -33,17 +30,9 @@ export async function renderSheet(view: DesignView, data: SheetData, opts: Sheet
   // Page numbers written in advance spare react-pdf a second layout of every page; if some
   // page's content overflowed (a very long name, say), the count is off, so lay it out again
   // with numbers the layout works out.
-  const planned = await renderToBuffer(
-    createElement(BuildSheetDocument, { view, data, meta: opts, fonts }) as unknown as DocElement,
-  );
+  // BuildSheetDocument uses no hooks, so calling it hands react-pdf the <Document> element itself,
+  // which is the element type renderToBuffer is typed for.
+  const planned = await renderToBuffer(BuildSheetDocument({ view, data, meta: opts, fonts }));
   if (pdfPageCount(planned) === PLANNED_PAGES) return planned;
-  return renderToBuffer(
-    createElement(BuildSheetDocument, {
-      view,
-      data,
-      meta: opts,
-      fonts,
-      numbering: { kind: "dynamic" },
-    }) as unknown as DocElement,
-  );
+  return renderToBuffer(BuildSheetDocument({ view, data, meta: opts, fonts, numbering: { kind: "dynamic" } }));
 }
