@@ -14,6 +14,7 @@ import { chartTheme, usePalette } from "@/components/charts/palette";
 import { useWidth } from "@/components/charts/use-width";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
+import { LimitLine } from "@/components/charts/limit-line";
 
 /** Typical resistance a handheld meter puts in series on each current range (common practice, no source). */
 const presets = [
@@ -317,33 +318,16 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
               numTicks={5}
               tickFormat={siTick("V", 3)}
             />
-            <LineSeries
-              dataKey="now"
-              data={[
-                { a: input.load.current, v: 0 },
-                { a: input.load.current, v: input.supply },
-              ]}
-              xAccessor={(d: Pt) => d.a}
-              yAccessor={(d: Pt) => d.v}
+            <LimitLine
+              name="now"
+              direction="vertical"
+              at={input.load.current}
+              span={[0, input.supply]}
               stroke={p.faint}
-              strokeDasharray="2 3"
-              enableEvents={false}
+              dash="2 3"
+              strokeWidth={1}
             />
-            {loadMinV !== undefined && (
-              <LineSeries
-                dataKey="Load minimum"
-                data={[
-                  { a: xd[0], v: loadMinV },
-                  { a: xd[1], v: loadMinV },
-                ]}
-                xAccessor={(d: Pt) => d.a}
-                yAccessor={(d: Pt) => d.v}
-                stroke={p.bad}
-                strokeDasharray="5 3"
-                strokeWidth={2}
-                enableEvents={false}
-              />
-            )}
+            {loadMinV !== undefined && <LimitLine name="Load minimum" at={loadMinV} span={xd} stroke={p.bad} />}
             {curves.map((c) => (
               <LineSeries
                 key={c.model}
