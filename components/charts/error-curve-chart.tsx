@@ -28,7 +28,7 @@ export function ErrorCurveChart({
   bandMinA: number;
   bandMaxA: number;
 }) {
-  const { ref, width } = useWidth<HTMLDivElement>();
+  const { ref, node, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const theme = useMemo(() => chartTheme(p), [p]);
   const colours = [p.copper, p.signal, p.good, p.warn];
@@ -117,7 +117,7 @@ export function ErrorCurveChart({
             )}
             <ChartTooltip
               palette={p}
-              frame={ref}
+              frame={node}
               snapTooltipToDatumX
               showVerticalCrosshair
               showSeriesGlyphs

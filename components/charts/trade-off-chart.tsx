@@ -34,7 +34,7 @@ export function TradeOffChart({
   onSelect: (key: string) => void;
   dropMaxV: number;
 }) {
-  const { ref, width } = useWidth<HTMLDivElement>();
+  const { ref, node, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const theme = useMemo(() => chartTheme(p), [p]);
   const feasible = useMemo(
@@ -153,7 +153,7 @@ export function TradeOffChart({
             )}
             <ChartTooltip
               palette={p}
-              frame={ref}
+              frame={node}
               snapTooltipToDatumX
               snapTooltipToDatumY
               showDatumGlyph={false}

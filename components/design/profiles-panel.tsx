@@ -2,7 +2,7 @@
 
 import { keepPreviousData, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import { ProfileChart, useWidth } from "@/components/profile/profile-chart";
+import { ProfileChart, useProfileWidth } from "@/components/profile/profile-chart";
 import { ProfileSummaryView } from "@/components/profile/profile-summary";
 import { UploadForm } from "@/components/profile/upload-form";
 import { Button } from "@/components/ui/button";
@@ -148,7 +148,7 @@ function ProfileDetail({
   designRevision: number;
   loadMinV?: number;
 }) {
-  const { ref, width } = useWidth();
+  const { ref, width } = useProfileWidth();
   const [zoom, setZoom] = useState<{ from: number; to: number } | null>(null);
   const [log, setLog] = useState<boolean | null>(null);
   const pixels = Math.max(10, width - 128);
