@@ -27,7 +27,7 @@ async function open(): Promise<Handle> {
     const pool = new Pool({ connectionString: DATABASE_URL, max: 10 });
     const db = drizzle(pool, { schema });
     await migrate(db, { migrationsFolder: migrationsFolder() });
-    return { db: db as unknown as Db, kind: "postgres", close: () => pool.end() };
+    return { db: db, kind: "postgres", close: () => pool.end() };
   }
   const inMemory = PGLITE_DIR.startsWith("memory://");
   if (!inMemory) acquireDataDirLock(path.resolve(PGLITE_DIR));
@@ -37,7 +37,7 @@ async function open(): Promise<Handle> {
   const client = new PGlite(inMemory ? undefined : path.resolve(PGLITE_DIR));
   const db = drizzle(client, { schema });
   await migrate(db, { migrationsFolder: migrationsFolder() });
-  return { db: db as unknown as Db, kind: "pglite", close: () => client.close() };
+  return { db: db, kind: "pglite", close: () => client.close() };
 }
 
 function handle(): Promise<Handle> {

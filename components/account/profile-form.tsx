@@ -5,8 +5,9 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
 import { sendJson, type Refusal } from "./send-json";
+import type { MailChoices } from "@/lib/api-description/responses";
 
-export type MailPreferences = { submitted: boolean; returned: boolean; approved: boolean; comments: boolean };
+export type MailPreferences = MailChoices;
 
 const mailChoices: { key: keyof MailPreferences; label: string; hint: string }[] = [
   { key: "submitted", label: "A design is submitted for review", hint: "sent to the team's reviewers" },

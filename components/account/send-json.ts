@@ -1,6 +1,8 @@
 // One JSON request from the account page's forms, with the API's refusal kept whole
 // ({ message, fieldErrors }) so each form can show it beside the field it names.
-export type Refusal = { message: string; fieldErrors?: Record<string, string[]> };
+import type { ApiError } from "@/lib/api-description/responses";
+
+export type Refusal = Pick<ApiError, "message" | "fieldErrors">;
 
 export async function sendJson<T>(
   url: string,

@@ -8,18 +8,9 @@ import { Button } from "@/components/ui/button";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { formatWhen } from "@/lib/saved-designs/when";
 import { sendJson, type Refusal } from "./send-json";
+import type { TokenRow } from "@/lib/api-description/responses";
 
-export type TokenRow = {
-  id: string;
-  name: string;
-  access: "read" | "write";
-  hint: string;
-  teamName: string;
-  createdAt: string;
-  expiresAt: string | null;
-  lastUsedAt: string | null;
-  expired: boolean;
-};
+export type { TokenRow };
 
 const when = (iso: string | null, none: string) => (iso ? formatWhen(iso) : none);
 

@@ -3,6 +3,7 @@
 import Link from "next/link";
 import { useState } from "react";
 import { Button, buttonClass } from "@/components/ui/button";
+import type { ApiError } from "@/lib/api-description/responses";
 
 /** For a signed-in invitee with an account: one press joins; no password is asked or sent. */
 export function JoinTeamButton({
@@ -28,7 +29,7 @@ export function JoinTeamButton({
       body: JSON.stringify({ token }),
     });
     if (res.ok) return setState("joined");
-    const data = (await res.json().catch(() => ({}))) as { message?: string };
+    const data = (await res.json().catch(() => ({}))) as Partial<ApiError>;
     setError(data.message ?? `The server refused (${res.status}).`);
     setState("idle");
   }

@@ -5,8 +5,9 @@ import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
+import type { ApiError } from "@/lib/api-description/responses";
 
-type Refusal = { message: string; fieldErrors?: Record<string, string[]> };
+type Refusal = Pick<ApiError, "message" | "fieldErrors">;
 
 /** An invitation for an e-mail with no account yet: choose a name and a password, then sign in. */
 export function NewAccountForm({ token, email }: { token: string; email: string }) {

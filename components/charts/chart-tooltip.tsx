@@ -2,7 +2,7 @@
 // A tooltip that reads on any background (the chart theme's own is transparent) and goes away
 // when the pointer leaves the chart or Escape is pressed, instead of lingering over the page.
 import { Tooltip, TooltipContext } from "@visx/xychart";
-import { useContext, useEffect, type ComponentProps, type RefObject } from "react";
+import { useContext, useEffect, type ComponentProps } from "react";
 import type { Palette } from "./palette";
 
 export function tooltipStyle(p: Palette) {
@@ -21,11 +21,11 @@ export function tooltipStyle(p: Palette) {
 }
 
 /** Hides the open tooltip when the pointer leaves `frame` or Escape is pressed. */
-function HideOnLeave({ frame }: { frame: RefObject<HTMLElement | null> }) {
+function HideOnLeave({ frame }: { frame: HTMLElement | null }) {
   const ctx = useContext(TooltipContext);
   const hide = ctx?.hideTooltip;
   useEffect(() => {
-    const el = frame.current;
+    const el = frame;
     if (!el || !hide) return;
     const onKey = (e: KeyboardEvent) => e.key === "Escape" && hide();
     el.addEventListener("pointerleave", hide);
@@ -42,7 +42,7 @@ export function ChartTooltip({
   palette,
   frame,
   ...props
-}: ComponentProps<typeof Tooltip> & { palette: Palette; frame: RefObject<HTMLElement | null> }) {
+}: ComponentProps<typeof Tooltip> & { palette: Palette; frame: HTMLElement | null }) {
   return (
     <>
       <HideOnLeave frame={frame} />

@@ -10,6 +10,7 @@ import { SeriesTip } from "./series-tip";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, percentTick, siTick } from "./axes";
 import { chartTheme, usePalette } from "./palette";
 import { useWidth } from "./use-width";
+import { LimitLine } from "@/components/charts/limit-line";
 
 export type ErrorSeries = { key: string; label: string; points: ErrorCurvePoint[]; primary: boolean };
 
@@ -27,7 +28,7 @@ export function ErrorCurveChart({
   bandMinA: number;
   bandMaxA: number;
 }) {
-  const { ref, width } = useWidth<HTMLDivElement>();
+  const { ref, node, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const theme = useMemo(() => chartTheme(p), [p]);
   const colours = [p.copper, p.signal, p.good, p.warn];
@@ -85,19 +86,7 @@ export function ErrorCurveChart({
               tickValues={logTicks(yd[0], yd[1])}
               tickFormat={percentTick}
             />
-            <LineSeries
-              dataKey="Accuracy target"
-              data={[
-                { currentA: bandMinA, v: targetPercent, label: "target" },
-                { currentA: bandMaxA, v: targetPercent, label: "target" },
-              ]}
-              xAccessor={(d) => d.currentA}
-              yAccessor={(d) => d.v}
-              stroke={p.bad}
-              strokeWidth={2}
-              strokeDasharray="5 3"
-              enableEvents={false}
-            />
+            <LimitLine name="Accuracy target" at={targetPercent} span={[bandMinA, bandMaxA]} stroke={p.bad} />
             {series.map((s, i) => (
               <LineSeries
                 key={s.key}
@@ -128,7 +117,7 @@ export function ErrorCurveChart({
             )}
             <ChartTooltip
               palette={p}
-              frame={ref}
+              frame={node}
               snapTooltipToDatumX
               showVerticalCrosshair
               showSeriesGlyphs

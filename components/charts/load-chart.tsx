@@ -8,6 +8,7 @@ import { formatSI } from "@/lib/design/format";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, siTick } from "./axes";
 import { chartTheme, usePalette } from "./palette";
 import { useWidth } from "./use-width";
+import { LimitLine } from "@/components/charts/limit-line";
 
 const HEIGHT = 240;
 type Pt = { currentA: number; v: number };
@@ -77,34 +78,8 @@ export function LoadChart({
               numTicks={5}
               tickFormat={siTick("V", 3)}
             />
-            <LineSeries
-              dataKey="Supply"
-              data={[
-                { currentA: xd[0], v: supplyV },
-                { currentA: xd[1], v: supplyV },
-              ]}
-              xAccessor={(d) => d.currentA}
-              yAccessor={(d) => d.v}
-              stroke={p.faint}
-              strokeDasharray="3 3"
-              strokeWidth={1}
-              enableEvents={false}
-            />
-            {loadMinV !== undefined && (
-              <LineSeries
-                dataKey="Load minimum"
-                data={[
-                  { currentA: xd[0], v: loadMinV },
-                  { currentA: xd[1], v: loadMinV },
-                ]}
-                xAccessor={(d) => d.currentA}
-                yAccessor={(d) => d.v}
-                stroke={p.bad}
-                strokeDasharray="5 3"
-                strokeWidth={2}
-                enableEvents={false}
-              />
-            )}
+            <LimitLine name="Supply" at={supplyV} span={xd} stroke={p.faint} dash="3 3" strokeWidth={1} />
+            {loadMinV !== undefined && <LimitLine name="Load minimum" at={loadMinV} span={xd} stroke={p.bad} />}
             <LineSeries
               dataKey="Load voltage"
               data={ok.map((q) => ({ currentA: q.currentA, v: q.loadVoltageV }))}
@@ -139,19 +114,7 @@ export function LoadChart({
               tickValues={logTicks(yb[0], yb[1])}
               tickFormat={siTick("V")}
             />
-            <LineSeries
-              dataKey="Allowed drop"
-              data={[
-                { currentA: xd[0], v: dropMaxV },
-                { currentA: xd[1], v: dropMaxV },
-              ]}
-              xAccessor={(d) => d.currentA}
-              yAccessor={(d) => d.v}
-              stroke={p.warn}
-              strokeDasharray="5 3"
-              strokeWidth={2}
-              enableEvents={false}
-            />
+            <LimitLine name="Allowed drop" at={dropMaxV} span={xd} stroke={p.warn} />
             <LineSeries
               dataKey="Burden"
               data={ok.map((q) => ({ currentA: q.currentA, v: q.burdenV }))}

@@ -12,6 +12,7 @@ import { ChartTooltip } from "./chart-tooltip";
 import { Shape, ShapeIcon, shapeNames } from "./glyphs";
 import { chartTheme, shade, usePalette } from "./palette";
 import { useWidth } from "./use-width";
+import { LimitLine } from "@/components/charts/limit-line";
 
 const HEIGHT = 300;
 // visx may ask for a datum that has just left the data (pointer moves while the list changes):
@@ -33,7 +34,7 @@ export function TradeOffChart({
   onSelect: (key: string) => void;
   dropMaxV: number;
 }) {
-  const { ref, width } = useWidth<HTMLDivElement>();
+  const { ref, node, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const theme = useMemo(() => chartTheme(p), [p]);
   const feasible = useMemo(
@@ -84,18 +85,14 @@ export function TradeOffChart({
               tickValues={logTicks(yd[0], yd[1])}
               tickFormat={percentTick}
             />
-            <LineSeries
-              dataKey="Allowed drop"
-              data={[
-                { v: dropMaxV, e: yd[0] },
-                { v: dropMaxV, e: yd[1] },
-              ]}
-              xAccessor={(d) => d?.v ?? Number.NaN}
-              yAccessor={(d) => d?.e ?? Number.NaN}
+            <LimitLine
+              name="Allowed drop"
+              direction="vertical"
+              at={dropMaxV}
+              span={yd}
               stroke={p.warn}
-              strokeDasharray="4 3"
+              dash="4 3"
               strokeWidth={1}
-              enableEvents={false}
             />
             {front.length > 1 && (
               <LineSeries
@@ -156,7 +153,7 @@ export function TradeOffChart({
             )}
             <ChartTooltip
               palette={p}
-              frame={ref}
+              frame={node}
               snapTooltipToDatumX
               snapTooltipToDatumY
               showDatumGlyph={false}

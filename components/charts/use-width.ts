@@ -1,20 +1,15 @@
 "use client";
-// The width of a chart's container, so visx gets explicit sizes (see "Stack pitfalls" in docs/architecture.md).
-import { useEffect, useRef, useState } from "react";
+// The width of a chart's container, so visx gets explicit sizes (see "Stack pitfalls" in
+// docs/architecture.md): @visx/responsive measures the parent and follows it as it resizes.
+import { useParentSize } from "@visx/responsive";
 
-export function useWidth<T extends HTMLElement>() {
-  const ref = useRef<T>(null);
-  const [width, setWidth] = useState(0);
-  useEffect(() => {
-    const el = ref.current;
-    if (!el) return;
-    setWidth(Math.floor(el.getBoundingClientRect().width));
-    const ro = new ResizeObserver((entries) => {
-      const w = Math.floor(entries[0]?.contentRect.width ?? 0);
-      setWidth((old) => (Math.abs(old - w) >= 1 ? w : old));
-    });
-    ro.observe(el);
-    return () => ro.disconnect();
-  }, []);
-  return { ref, width };
+/** The container (ref it), the element once mounted, and its whole-pixel width: 0 until measured. */
+export function useWidth<T extends HTMLElement>(initial = 0) {
+  const { parentRef, node, width } = useParentSize<T>({
+    initialSize: { width: initial },
+    debounceTime: 50,
+    enableDebounceLeadingCall: true,
+    ignoreDimensions: ["height", "top", "left"],
+  });
+  return { ref: parentRef, node, width: Math.floor(width) };
 }

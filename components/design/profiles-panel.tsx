@@ -2,51 +2,22 @@
 
 import { keepPreviousData, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import { ProfileChart, useWidth } from "@/components/profile/profile-chart";
+import { ProfileChart, useProfileWidth } from "@/components/profile/profile-chart";
 import { ProfileSummaryView } from "@/components/profile/profile-summary";
 import { UploadForm } from "@/components/profile/upload-form";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { formatSI } from "@/lib/design/format";
 import type { DesignView, DesignViewer } from "@/lib/design-view";
-import type { ProfileSummary } from "@/lib/design/profile";
-import type { PlanProfileRange } from "@/lib/design/plan-switching";
-import type { ChartSeries } from "@/components/profile/profile-chart";
 import { RangeSwatch } from "@/components/profile/range-bands";
+import type { ApiError, ProfileDetail, ProfileListItem, ProfilesBody } from "@/lib/api-description/responses";
 
-type ListItem = {
-  id: string;
-  fileName: string;
-  samples: number;
-  revision: number;
-  summary: ProfileSummary;
-  uploadedBy: string;
-  uploadedByName: string;
-  createdAt: string;
-  /** From the policy on the server: the uploader or an owner. */
-  canDelete: boolean;
-};
-
-type Detail = ListItem & {
-  startS: number;
-  endS: number;
-  current: { revision: number; summary: ProfileSummary };
-  design:
-    | { kind: "pair"; shuntOhms: number; gain: number; supplyV: number; fullScaleV: number; lsbA: number }
-    | {
-        kind: "plan";
-        supplyV: number;
-        fullScaleV: number;
-        lsbA: number;
-        switchDelayS: number;
-        ranges: PlanProfileRange[];
-      };
-  series: ChartSeries;
-};
+type ListItem = ProfileListItem;
+type Detail = ProfileDetail;
 
 async function getJson<T>(url: string): Promise<T> {
   const res = await fetch(url);
-  const data = (await res.json().catch(() => ({}))) as T & { message?: string };
+  const data = (await res.json().catch(() => ({}))) as T & Partial<ApiError>;
   if (!res.ok) throw new Error(data.message ?? `The server answered ${res.status}.`);
   return data;
 }
@@ -58,7 +29,7 @@ export function ProfilesPanel({ design, viewer }: { design: DesignView; viewer: 
   const listKey = ["profiles", design.id];
   const list = useQuery({
     queryKey: listKey,
-    queryFn: () => getJson<{ profiles: ListItem[] }>(`/api/designs/${design.id}/profiles`),
+    queryFn: () => getJson<ProfilesBody>(`/api/designs/${design.id}/profiles`),
   });
   const [selected, setSelected] = useState<string | null>(null);
   const profiles = list.data?.profiles ?? [];
@@ -69,7 +40,7 @@ export function ProfilesPanel({ design, viewer }: { design: DesignView; viewer: 
     if (!window.confirm(`Delete the recording ${p.fileName}? This cannot be undone.`)) return;
     setDeleteError(null);
     const res = await fetch(`/api/designs/${design.id}/profiles/${p.id}`, { method: "DELETE" }).catch(() => null);
-    const data = (await res?.json().catch(() => ({}))) as { message?: string } | undefined;
+    const data = (await res?.json().catch(() => ({}))) as Partial<ApiError> | undefined;
     if (!res?.ok) setDeleteError(data?.message ?? "The recording could not be deleted.");
     if (selected === p.id) setSelected(null);
     await qc.invalidateQueries({ queryKey: listKey });
@@ -178,7 +149,7 @@ function ProfileDetail({
   designRevision: number;
   loadMinV?: number;
 }) {
-  const { ref, width } = useWidth();
+  const { ref, width } = useProfileWidth();
   const [zoom, setZoom] = useState<{ from: number; to: number } | null>(null);
   const [log, setLog] = useState<boolean | null>(null);
   const pixels = Math.max(10, width - 128);

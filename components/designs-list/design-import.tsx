@@ -4,8 +4,9 @@
 // Refusals are shown as the API words them, field by field, and nothing is saved.
 import { useRouter } from "next/navigation";
 import { useId, useRef, useState } from "react";
+import type { ApiError, DesignImported } from "@/lib/api-description/responses";
 
-type Refusal = { message: string; fieldErrors?: Record<string, string[]>; suggestedName?: string };
+type Refusal = Pick<ApiError, "message" | "fieldErrors">;
 
 const MAX_BYTES = 1_000_000;
 
@@ -25,9 +26,8 @@ export function ImportDesign() {
       headers: { "content-type": "application/json" },
       body: text,
     });
-    const body = (await res.json().catch(() => ({ message: `The server answered ${res.status}.` }))) as Refusal & {
-      id?: string;
-    };
+    const body = (await res.json().catch(() => ({ message: `The server answered ${res.status}.` }))) as ApiError &
+      Partial<DesignImported>;
     if (res.status === 201 && body.id) {
       setRetry(null);
       router.push(`/designs/${body.id}`);

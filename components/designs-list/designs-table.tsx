@@ -11,6 +11,7 @@ import { StatusBadge } from "@/components/review/status-badge";
 import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { formatSI } from "@/lib/design/format";
+import type { ApiError } from "@/lib/api-description/responses";
 import {
   designStatuses,
   listSearch,
@@ -29,7 +30,7 @@ const reachedFrom = new Map<string, { cursor: string; page: number }>();
 
 async function fetchPage(params: ListParams): Promise<DesignsPage> {
   const res = await fetch(`/api/designs${listSearch(params, { limit: String(PAGE_SIZE) })}`);
-  const body = (await res.json().catch(() => null)) as (DesignsPage & { message?: string }) | null;
+  const body = (await res.json().catch(() => null)) as (DesignsPage & Partial<ApiError>) | null;
   if (!res.ok || !body) throw new Error(body?.message ?? `The designs could not be loaded (HTTP ${res.status}).`);
   return body;
 }
@@ -217,7 +218,7 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
                   </td>
                   <td className="hidden whitespace-nowrap px-3 py-1.5 num lg:table-cell">{d.revision}</td>
                   <td className="hidden whitespace-nowrap px-3 py-1.5 num md:table-cell">
-                    {d.shuntOhms !== undefined && d.gain !== undefined && d.shuntOhms !== null && d.gain !== null
+                    {d.shuntOhms !== null && d.gain !== null
                       ? `${formatSI(d.shuntOhms, "Ω")} × ${Number(d.gain.toPrecision(4))}`
                       : d.planRanges
                         ? `${d.planRanges} ranges`

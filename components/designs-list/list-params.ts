@@ -1,25 +1,11 @@
 // The designs list's place in the URL (`/designs?q=…&status=…&cursor=…`), read and written the same
 // way by the page (first render on the server) and the table (TanStack Query in the browser).
 import type { DesignStatus } from "@/db/schema";
+import type { DesignRow, DesignsPage } from "@/lib/api-description/responses";
 
 export const designStatuses: readonly DesignStatus[] = ["draft", "in-review", "approved", "returned"];
 
-export type DesignRow = {
-  id: string;
-  name: string;
-  project: string | null;
-  status: DesignStatus;
-  revision: number;
-  updatedAt: string;
-  authorName: string;
-  /** A single pair's shunt and gain (null on a range plan). */
-  shuntOhms?: number | null;
-  gain?: number | null;
-  /** How many ranges a range plan has (null on a single pair). */
-  planRanges?: number | null;
-};
-
-export type DesignsPage = { designs: DesignRow[]; nextCursor: string | null };
+export type { DesignRow, DesignsPage };
 
 export type ListParams = { q: string; status: DesignStatus | ""; cursor: string };
 

@@ -1,7 +1,6 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import type { AmplifierJson, ShuntJson } from "@/db/queries/library";
 import { useRef, useState } from "react";
 import { Badge } from "@/components/ui/badge";
 import { Button, buttonClass } from "@/components/ui/button";
@@ -9,9 +8,10 @@ import { Field, Select } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { tableColumnsOf } from "@/lib/library/fields";
 import type { PartKind } from "@/lib/library/schema";
+import type { AmplifierPart, ApiError, LibraryImported, ShuntPart } from "@/lib/api-description/responses";
 import { PartForm } from "./part-form";
 
-type Part = Record<string, unknown> & { id: string; name: string; updatedAt: string };
+type Part = AmplifierPart | ShuntPart;
 
 const titles: Record<PartKind, string> = { amplifiers: "Amplifiers", shunts: "Shunt families" };
 const singular: Record<PartKind, string> = { amplifiers: "amplifier", shunts: "shunt family" };
@@ -24,8 +24,8 @@ export function LibraryWorkbench({
   canEdit,
 }: {
   // The API's own response types (GET /api/library), not a shape declared again here.
-  amplifiers: AmplifierJson[];
-  shunts: ShuntJson[];
+  amplifiers: AmplifierPart[];
+  shunts: ShuntPart[];
   canEdit: boolean;
 }) {
   const router = useRouter();
@@ -82,7 +82,7 @@ function PartTable({
     if (!window.confirm(`Remove ${part.name} from the library? Designs already saved keep their figures.`)) return;
     const res = await fetch(`/api/library/${kind}/${part.id}`, { method: "DELETE" }).catch(() => null);
     if (!res) return onError("The server could not be reached; nothing was removed.");
-    const data = (await res.json().catch(() => ({}))) as { message?: string };
+    const data = (await res.json().catch(() => ({}))) as Partial<ApiError>;
     if (!res.ok) return onError(data.message ?? `Removing ${part.name} was refused (${res.status}).`);
     onDone(`Removed ${part.name}.`);
   }
@@ -143,7 +143,7 @@ function PartTable({
                   {columns.map((c) => (
                     <td key={c.key} className="num px-2 py-1.5 whitespace-nowrap">
                       {c.key === "fourTerminal" ? (
-                        p.fourTerminal ? (
+                        "fourTerminal" in p && p.fourTerminal ? (
                           <Badge tone="signal">4-terminal</Badge>
                         ) : (
                           <span className="text-ink-faint">2-terminal</span>
@@ -202,12 +202,10 @@ function FragmentRow({
   );
 }
 
-type ImportResult = { created: number; updated: number; kind: PartKind; fileName: string };
-
 function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message: string) => void }) {
   const [kind, setKind] = useState<PartKind>("amplifiers");
   const [error, setError] = useState<string | null>(null);
-  const [problems, setProblems] = useState<{ message: string }[]>([]);
+  const [problems, setProblems] = useState<NonNullable<ApiError["problems"]>>([]);
   const [busy, setBusy] = useState(false);
   const fileRef = useRef<HTMLInputElement>(null);
 
@@ -223,10 +221,7 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
     const res = await fetch("/api/library/import", { method: "POST", body: form }).catch(() => null);
     setBusy(false);
     if (!res) return setError("The server could not be reached; nothing was imported.");
-    const data = (await res.json().catch(() => ({}))) as Partial<ImportResult> & {
-      message?: string;
-      problems?: { message: string }[];
-    };
+    const data = (await res.json().catch(() => ({}))) as Partial<LibraryImported & ApiError>;
     setProblems(!res.ok && data.problems && data.problems.length > 1 ? data.problems : []);
     if (!res.ok) return setError(data.message ?? `The import was refused (${res.status}).`);
     if (fileRef.current) fileRef.current.value = "";

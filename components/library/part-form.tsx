@@ -5,8 +5,9 @@ import { Button } from "@/components/ui/button";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { fieldsOf, formToBody, partToForm } from "@/lib/library/fields";
 import type { PartKind } from "@/lib/library/schema";
+import type { AmplifierPart, ApiError, ShuntPart } from "@/lib/api-description/responses";
 
-type Part = Record<string, unknown> & { id: string; updatedAt: string };
+type Part = AmplifierPart | ShuntPart;
 
 const kindWord: Record<PartKind, string> = { amplifiers: "amplifier", shunts: "shunt family" };
 
@@ -39,11 +40,7 @@ export function PartForm({
     }).catch(() => null);
     setBusy(false);
     if (!res) return setMessage("The server could not be reached; nothing was saved.");
-    const data = (await res.json().catch(() => ({}))) as {
-      message?: string;
-      fieldErrors?: Record<string, string[]>;
-      name?: string;
-    };
+    const data = (await res.json().catch(() => ({}))) as Partial<ApiError & Part>;
     if (!res.ok) {
       const fieldErrors = data.fieldErrors ?? {};
       setErrors(fieldErrors);

@@ -6,6 +6,7 @@ import { Axis, Grid, LineSeries, Tooltip, XYChart } from "@visx/xychart";
 import { useEffect, useMemo, useState } from "react";
 import { insertionCurve, insertionSchema, type InsertionResult } from "@/lib/design/insertion";
 import { benchMeterRanges } from "@/lib/design/plan-stretches";
+import type { ApiError, InsertionBody } from "@/lib/api-description/responses";
 import { loadModels, type LoadModel } from "@/lib/design/requirement";
 import { formatPercent, formatSI } from "@/lib/design/format";
 import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, siTick } from "@/components/charts/axes";
@@ -14,6 +15,7 @@ import { chartTheme, usePalette } from "@/components/charts/palette";
 import { useWidth } from "@/components/charts/use-width";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
+import { LimitLine } from "@/components/charts/limit-line";
 
 /** Typical resistance a handheld meter puts in series on each current range: the engine's benchMeterRanges. */
 const presetWords: Record<(typeof benchMeterRanges)[number]["key"], { label: string; note: string }> = {
@@ -31,7 +33,7 @@ const modelWords: Record<LoadModel, string> = {
 
 type Inputs = { supply: string; seriesOhms: string; model: LoadModel; current: string; loadMin: string };
 type Answer =
-  { ok: true; result: InsertionResult } | { ok: false; message: string; fieldErrors: Record<string, string[]> };
+  { ok: true; result: InsertionResult } | ({ ok: false } & Required<Pick<ApiError, "message" | "fieldErrors">>);
 
 async function ask(i: Inputs, model: LoadModel): Promise<Answer> {
   const res = await fetch("/api/insertion", {
@@ -39,7 +41,7 @@ async function ask(i: Inputs, model: LoadModel): Promise<Answer> {
     headers: { "content-type": "application/json" },
     body: JSON.stringify({ supply: i.supply, seriesOhms: i.seriesOhms, load: { model, current: i.current } }),
   });
-  const body = (await res.json()) as InsertionResult & { message?: string; fieldErrors?: Record<string, string[]> };
+  const body = (await res.json()) as InsertionBody & Partial<ApiError>;
   if (res.ok) return { ok: true, result: body };
   return {
     ok: false,
@@ -318,33 +320,16 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
               numTicks={5}
               tickFormat={siTick("V", 3)}
             />
-            <LineSeries
-              dataKey="now"
-              data={[
-                { a: input.load.current, v: 0 },
-                { a: input.load.current, v: input.supply },
-              ]}
-              xAccessor={(d: Pt) => d.a}
-              yAccessor={(d: Pt) => d.v}
+            <LimitLine
+              name="now"
+              direction="vertical"
+              at={input.load.current}
+              span={[0, input.supply]}
               stroke={p.faint}
-              strokeDasharray="2 3"
-              enableEvents={false}
+              dash="2 3"
+              strokeWidth={1}
             />
-            {loadMinV !== undefined && (
-              <LineSeries
-                dataKey="Load minimum"
-                data={[
-                  { a: xd[0], v: loadMinV },
-                  { a: xd[1], v: loadMinV },
-                ]}
-                xAccessor={(d: Pt) => d.a}
-                yAccessor={(d: Pt) => d.v}
-                stroke={p.bad}
-                strokeDasharray="5 3"
-                strokeWidth={2}
-                enableEvents={false}
-              />
-            )}
+            {loadMinV !== undefined && <LimitLine name="Load minimum" at={loadMinV} span={xd} stroke={p.bad} />}
             {curves.map((c) => (
               <LineSeries
                 key={c.model}

@@ -1,7 +1,7 @@
 "use client";
 
-import { useParentSize } from "@visx/responsive";
 import { scaleLinear, scaleLog } from "@visx/scale";
+import { useWidth } from "@/components/charts/use-width";
 import { useRef, useState } from "react";
 import { formatSI } from "@/lib/design/format";
 import { burdenV, loadVoltageV } from "@/lib/design/profile";
@@ -19,9 +19,9 @@ const CURRENT_H = 230;
 const VOLTAGE_H = 120;
 
 /** Follows the parent's width (explicit height), so the server pixels asked for match the drawing. */
-export function useWidth(initial = 800) {
-  const { parentRef, width } = useParentSize({ initialSize: { width: initial }, debounceTime: 50 });
-  return { ref: parentRef, width: Math.max(320, Math.floor(width || initial)) };
+export function useProfileWidth(initial = 800) {
+  const { ref, width } = useWidth<HTMLDivElement>(initial);
+  return { ref, width: Math.max(320, width || initial) };
 }
 
 /** A linear scale's round ticks (1, 2, 5 × 10^n). */

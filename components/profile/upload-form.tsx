@@ -1,8 +1,9 @@
 "use client";
 
 import { useRef, useState } from "react";
+import type { ApiError, ProfileUploaded } from "@/lib/api-description/responses";
 
-export type UploadError = { message: string; row?: number; line?: number; column?: string };
+export type UploadError = Pick<ApiError, "message" | "row" | "line" | "column">;
 
 /** Drop a recording on the zone or choose it; it uploads at once. Refusals are shown as the server words them. */
 export function UploadForm({ designId, onUploaded }: { designId: string; onUploaded: (id: string) => void }) {
@@ -28,7 +29,7 @@ export function UploadForm({ designId, onUploaded }: { designId: string; onUploa
     setBusy(null);
     if (input.current) input.current.value = "";
     if (!res) return setError({ message: "The server could not be reached; nothing was stored." });
-    const data = (await res.json().catch(() => ({}))) as UploadError & { id?: string; samples?: number };
+    const data = (await res.json().catch(() => ({}))) as ApiError & Partial<ProfileUploaded>;
     if (!res.ok || !data.id)
       return setError({ ...data, message: data.message ?? `The upload was refused (${res.status}).` });
     setDone(`Stored ${file.name}: ${data.samples?.toLocaleString("en-GB")} samples.`);

@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { choiceFields, planFieldInfo, requirementFields } from "@/lib/saved-designs/figures";
 import { formatWhen } from "@/lib/saved-designs/when";
+import type { AuditEvent } from "@/lib/api-description/responses";
 
 /** "choice.shuntOhms" → "shunt", "requirement.current.max" → "maximum current", "plan.ranges.1.gain" → "range 2, gain". */
 function changedLabel(path: string): string {
@@ -21,16 +22,7 @@ function changedLabel(path: string): string {
   return (label ?? path).toLowerCase();
 }
 
-export type AuditEntry = {
-  id: string;
-  action: string;
-  targetType: string | null;
-  targetId: string | null;
-  details: Record<string, unknown>;
-  at: string;
-  actorName: string | null;
-  actorEmail: string | null;
-};
+export type AuditEntry = AuditEvent;
 
 const partKind = (targetType: string | null) =>
   targetType === "library-shunt" ? "shunt family" : targetType === "library-amplifier" ? "amplifier" : "part";

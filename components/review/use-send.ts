@@ -3,6 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 
+import type { ApiError } from "@/lib/api-description/responses";
 export type SendState = { busy: boolean; error: string | null; stale: boolean; ok: string | null };
 
 /** POST/PATCH JSON to the API; a 409 is reported as "someone else changed it" with a reload offer. */
@@ -22,7 +23,7 @@ export function useSend() {
         headers: { "content-type": "application/json" },
         body: JSON.stringify(body),
       });
-      const data = (await res.json().catch(() => ({}))) as { message?: string; fieldErrors?: Record<string, string[]> };
+      const data = (await res.json().catch(() => ({}))) as Partial<ApiError>;
       if (!res.ok) {
         const detail = data.fieldErrors
           ? Object.entries(data.fieldErrors)

@@ -4,8 +4,9 @@
 // the designs list, since a page of the old team's design would not exist in the new one.
 import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
+import type { ApiError, TeamOfMine } from "@/lib/api-description/responses";
 
-export type TeamChoice = { id: string; name: string; role: string };
+export type TeamChoice = TeamOfMine;
 
 export function TeamSwitcher({ teams, currentTeamId }: { teams: TeamChoice[]; currentTeamId: string }) {
   const router = useRouter();
@@ -23,7 +24,7 @@ export function TeamSwitcher({ teams, currentTeamId }: { teams: TeamChoice[]; cu
       headers: { "content-type": "application/json" },
       body: JSON.stringify({ teamId }),
     }).catch(() => null);
-    const data = (await res?.json().catch(() => ({}))) as { message?: string } | undefined;
+    const data = (await res?.json().catch(() => ({}))) as Partial<ApiError> | undefined;
     setBusy(false);
     if (!res?.ok) return setError(data?.message ?? "Could not switch team.");
     router.push("/designs");

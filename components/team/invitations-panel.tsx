@@ -6,18 +6,8 @@ import { Badge } from "@/components/ui/badge";
 import { Button } from "@/components/ui/button";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
-import type { Role } from "@/db/schema";
+import type { ApiError, InvitationCreated, InvitationRow } from "@/lib/api-description/responses";
 import { formatWhen } from "@/lib/saved-designs/when";
-
-export type InvitationRow = {
-  id: string;
-  email: string;
-  role: Role;
-  status: "pending" | "accepted" | "revoked" | "expired";
-  invitedByName: string;
-  createdAt: string;
-  expiresAt: string;
-};
 
 const tone = { pending: "signal", accepted: "good", revoked: "neutral", expired: "warn" } as const;
 
@@ -29,12 +19,7 @@ async function call(url: string, method: string, body?: unknown) {
     headers: { "content-type": "application/json" },
     body: body === undefined ? undefined : JSON.stringify(body),
   });
-  const data = (await res.json().catch(() => ({}))) as {
-    message?: string;
-    fieldErrors?: Record<string, string[]>;
-    link?: string;
-    teamName?: string;
-  };
+  const data = (await res.json().catch(() => ({}))) as Partial<ApiError & InvitationCreated>;
   return { ok: res.ok, status: res.status, data };
 }
 

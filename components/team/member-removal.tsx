@@ -4,9 +4,9 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
-import type { Role } from "@/db/schema";
+import type { ApiError, TeamMember } from "@/lib/api-description/responses";
 
-type Member = { userId: string; name: string; email: string; role: Role };
+type Member = Pick<TeamMember, "userId" | "name" | "email" | "role">;
 
 /** Owners remove members from the team (their account and their designs stay). */
 export function RemoveMembers({ members, selfId }: { members: Member[]; selfId: string }) {
@@ -18,7 +18,7 @@ export function RemoveMembers({ members, selfId }: { members: Member[]; selfId: 
   async function remove(m: Member) {
     setMessage(null);
     const res = await fetch(`/api/team/members/${m.userId}`, { method: "DELETE" });
-    const data = (await res.json().catch(() => ({}))) as { message?: string };
+    const data = (await res.json().catch(() => ({}))) as Partial<ApiError>;
     setConfirming(null);
     setMessage(
       res.ok

@@ -6,8 +6,9 @@ import { Button } from "@/components/ui/button";
 import { Select } from "@/components/ui/field";
 import type { Role } from "@/db/schema";
 import { roleMeans } from "@/lib/role-words";
+import type { ApiError, TeamMember } from "@/lib/api-description/responses";
 
-type Member = { userId: string; email: string; name: string; role: Role; joinedAt: string };
+type Member = TeamMember;
 
 const roleOptions: { value: Role; label: string }[] = [
   { value: "owner", label: "Owner — runs the team" },
@@ -31,7 +32,7 @@ export function MemberTable({ members, canEdit, selfId }: { members: Member[]; c
       headers: { "content-type": "application/json" },
       body: JSON.stringify({ role }),
     });
-    const body = (await res.json().catch(() => ({}))) as { message?: string };
+    const body = (await res.json().catch(() => ({}))) as Partial<ApiError>;
     setBusy(false);
     setPending(null);
     if (!res.ok) setMessage({ tone: "bad", text: body.message ?? `The change was refused (${res.status}).` });

@@ -3,6 +3,7 @@
 // refusal names its row and column.
 import { useState } from "react";
 import { Button, buttonClass } from "@/components/ui/button";
+import type { ApiError, UnitsImported } from "@/lib/api-description/responses";
 
 export function ImportUnitsForm({ designId, onImported }: { designId: string; onImported: () => Promise<void> }) {
   const [file, setFile] = useState<File | null>(null);
@@ -16,7 +17,7 @@ export function ImportUnitsForm({ designId, onImported }: { designId: string; on
     const body = new FormData();
     body.set("file", file);
     const res = await fetch(`/api/designs/${designId}/units/import`, { method: "POST", body }).catch(() => null);
-    const data = (await res?.json().catch(() => ({}))) as { imported?: number; message?: string } | undefined;
+    const data = (await res?.json().catch(() => ({}))) as Partial<UnitsImported & ApiError> | undefined;
     setBusy(false);
     if (res?.ok) {
       setResult({ ok: true, text: `${data?.imported ?? 0} units imported.` });

@@ -3,15 +3,18 @@
 // The same zod schema as the route checks it here first; the server's refusals land on their fields.
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { useForm, type Resolver } from "react-hook-form";
+import { useForm } from "react-hook-form";
+import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
-import type { UnitView } from "@/lib/built-units/judge";
+import type { ApiError, UnitBody } from "@/lib/api-description/responses";
 import { recordUnitSchema, todayIso } from "@/lib/built-units/schemas";
 import { formatSI } from "@/lib/design/format";
 import type { BenchCheckRow } from "@/lib/design/bench-check";
 
-type Values = { serial: string; builtOn: string; readings: { currentA: number; outputV: string }[] };
+// The form holds what a person types (the schema's input) and submits what the schema reads (its output).
+type Typed = z.input<typeof recordUnitSchema>;
+type Read = z.output<typeof recordUnitSchema>;
 
 export function RecordUnitForm({
   designId,
@@ -20,11 +23,11 @@ export function RecordUnitForm({
 }: {
   designId: string;
   bench: BenchCheckRow[];
-  onRecorded: (unit: UnitView) => void | Promise<void>;
+  onRecorded: (unit: UnitBody) => void | Promise<void>;
 }) {
   const [message, setMessage] = useState<string | null>(null);
-  const form = useForm<Values>({
-    resolver: zodResolver(recordUnitSchema) as unknown as Resolver<Values>,
+  const form = useForm<Typed, unknown, Read>({
+    resolver: zodResolver(recordUnitSchema),
     defaultValues: {
       serial: "",
       builtOn: todayIso(),
@@ -33,15 +36,14 @@ export function RecordUnitForm({
   });
   const { errors, isSubmitting } = form.formState;
 
-  async function submit(values: Values) {
+  async function submit(values: Read) {
     setMessage(null);
     const res = await fetch(`/api/designs/${designId}/units`, {
       method: "POST",
       headers: { "content-type": "application/json" },
       body: JSON.stringify(values),
     }).catch(() => null);
-    const data = (await res?.json().catch(() => ({}))) as
-      (UnitView & { message?: string; fieldErrors?: Record<string, string[]> }) | undefined;
+    const data = (await res?.json().catch(() => ({}))) as (UnitBody & Partial<ApiError>) | undefined;
     if (!res?.ok || !data) {
       setMessage(data?.message ?? "The unit could not be recorded; nothing was stored.");
       for (const [path, msgs] of Object.entries(data?.fieldErrors ?? {})) {

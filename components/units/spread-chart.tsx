@@ -8,6 +8,7 @@ import { chartTheme, usePalette } from "@/components/charts/palette";
 import { useWidth } from "@/components/charts/use-width";
 import { formatSI } from "@/lib/design/format";
 import type { PredictedPoint } from "@/lib/design/unit-prediction";
+import { LimitLine } from "@/components/charts/limit-line";
 
 export type PlottedReading = { serial: string; outputV: number; inBand: boolean; selected: boolean };
 
@@ -72,33 +73,25 @@ function PointChart({ point, readings }: { point: PredictedPoint; readings: Plot
               enableEvents={false}
             />
             {[point.minV, point.maxV].map((v, i) => (
-              <LineSeries
+              <LimitLine
                 key={i}
-                dataKey={`band-${i}`}
-                data={[
-                  { x: v, y: 0 },
-                  { x: v, y: top },
-                ]}
-                xAccessor={(d) => d.x}
-                yAccessor={(d) => d.y}
+                name={`band-${i}`}
+                direction="vertical"
+                at={v}
+                span={[0, top]}
                 stroke={p.bad}
-                strokeDasharray="4 3"
+                dash="4 3"
                 strokeWidth={1.2}
-                enableEvents={false}
               />
             ))}
-            <LineSeries
-              dataKey="expected"
-              data={[
-                { x: point.expectedV, y: 0 },
-                { x: point.expectedV, y: top },
-              ]}
-              xAccessor={(d) => d.x}
-              yAccessor={(d) => d.y}
+            <LimitLine
+              name="expected"
+              direction="vertical"
+              at={point.expectedV}
+              span={[0, top]}
               stroke={p.ink}
-              strokeDasharray="1 3"
+              dash="1 3"
               strokeWidth={1}
-              enableEvents={false}
             />
             <GlyphSeries
               dataKey="readings"

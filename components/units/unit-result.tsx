@@ -1,21 +1,21 @@
 // One unit judged against the sheet: pass or fail per reading, the likely cause, its calibration
 // and the error left after correction at each test point.
 import { Badge } from "@/components/ui/badge";
-import type { UnitView } from "@/lib/built-units/judge";
+import type { UnitBody } from "@/lib/api-description/responses";
 import { formatSI } from "@/lib/design/format";
 
 /** Signed percent to two figures; below 0.001 % it is rounding, shown as 0. */
 const pct = (x: number) =>
   Math.abs(x) < 1e-3 ? "0 %" : `${x >= 0 ? "+" : "−"}${String(Number(Math.abs(x).toPrecision(2)))} %`;
 
-export const methodWords: Record<UnitView["calibration"]["method"], string> = {
+export const methodWords: Record<UnitBody["calibration"]["method"], string> = {
   "least-squares": "least-squares line through every reading",
   "two-point": "two-point line",
   "gain-only": "gain only (one reading)",
   none: "no usable reading",
 };
 
-export function UnitResult({ unit }: { unit: UnitView }) {
+export function UnitResult({ unit }: { unit: UnitBody }) {
   const c = unit.calibration;
   return (
     <div className="flex flex-col gap-3" data-testid="unit-result">

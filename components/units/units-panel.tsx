@@ -7,7 +7,7 @@ import { useState } from "react";
 import { Badge } from "@/components/ui/badge";
 import { Button, buttonClass } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
-import type { UnitsSummary, UnitView } from "@/lib/built-units/judge";
+import type { ApiError, UnitBody, UnitsSummaryBody } from "@/lib/api-description/responses";
 import { formatSI } from "@/lib/design/format";
 import type { PredictedPoint } from "@/lib/design/unit-prediction";
 import type { DesignView, DesignViewer } from "@/lib/design-view";
@@ -17,9 +17,9 @@ import { RecordUnitForm } from "./record-unit-form";
 import { SpreadChart } from "./spread-chart";
 import { UnitResult } from "./unit-result";
 
-async function getSummary(url: string): Promise<UnitsSummary> {
+async function getSummary(url: string): Promise<UnitsSummaryBody> {
   const res = await fetch(url);
-  const data = (await res.json().catch(() => ({}))) as UnitsSummary & { message?: string };
+  const data = (await res.json().catch(() => ({}))) as UnitsSummaryBody & Partial<ApiError>;
   if (!res.ok) throw new Error(data.message ?? `The server answered ${res.status}.`);
   return data;
 }
@@ -32,30 +32,30 @@ export function UnitsPanel({ design, viewer }: { design: DesignView; viewer: Des
   const key = ["units", design.id];
   const q = useQuery({ queryKey: key, queryFn: () => getSummary(base) });
   const [selected, setSelected] = useState<string | null>(null);
-  const [lastRecorded, setLastRecorded] = useState<UnitView | null>(null);
+  const [lastRecorded, setLastRecorded] = useState<UnitBody | null>(null);
   const [deleteError, setDeleteError] = useState<string | null>(null);
   const canRecord = viewer.may.recordUnits && design.status === "approved";
   const data = q.data;
   const units = data?.units ?? [];
   const shown = units.find((u) => u.id === selected) ?? null;
 
-  async function recorded(unit: UnitView) {
+  async function recorded(unit: UnitBody) {
     setLastRecorded(unit);
     setSelected(unit.id);
     await qc.invalidateQueries({ queryKey: key });
   }
 
-  async function remove(u: UnitView) {
+  async function remove(u: UnitBody) {
     if (!window.confirm(`Delete unit ${u.serial} and its readings? This cannot be undone.`)) return;
     setDeleteError(null);
     const res = await fetch(`${base}/${u.id}`, { method: "DELETE" }).catch(() => null);
-    const body = (await res?.json().catch(() => ({}))) as { message?: string } | undefined;
+    const body = (await res?.json().catch(() => ({}))) as Partial<ApiError> | undefined;
     if (!res?.ok) setDeleteError(body?.message ?? "The unit could not be deleted.");
     if (lastRecorded?.id === u.id) setLastRecorded(null);
     await qc.invalidateQueries({ queryKey: key });
   }
 
-  const mayDelete = (u: UnitView) =>
+  const mayDelete = (u: UnitBody) =>
     viewer.may.changeOthersUnits || (viewer.may.recordUnits && u.recordedBy === viewer.userId);
 
   const readingsAt = (pt: PredictedPoint) =>

@@ -204,6 +204,9 @@ export function Choice<T extends string>({
   );
 }
 
+/** The wizard's fields that hold one text choice out of a few. */
+type ChoiceField = "supply.side" | "readout.kind" | "shunt.kind" | "shunt.terminals";
+
 /** The same choice bound to a form field (react-hook-form handles the radio group). */
 export function RadioField({
   legend,
@@ -211,18 +214,19 @@ export function RadioField({
   options,
 }: {
   legend: string;
-  name: string;
+  /** A field whose value is one of the options (a text choice such as supply.side). */
+  name: ChoiceField;
   options: { value: string; label: string }[];
 }) {
   const { register } = useFormContext<WizardValues>();
   // useWatch re-renders this group only, not the whole form, on each keystroke elsewhere.
-  const current = useWatch({ name: name as never }) as unknown as string;
+  const current = useWatch<WizardValues, ChoiceField>({ name });
   return (
     <Segmented
       legend={legend}
       options={options}
       isActive={(v) => v === current}
-      input={(v) => <input type="radio" className="sr-only" value={v} {...register(name as never)} />}
+      input={(v) => <input type="radio" className="sr-only" value={v} {...register(name)} />}
     />
   );
 }

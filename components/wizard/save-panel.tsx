@@ -8,12 +8,13 @@ import { useRouter } from "next/navigation";
 import { useRef } from "react";
 import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { Requirement } from "@/lib/design/requirement";
+import type { ApiError, DesignCreated } from "@/lib/api-description/responses";
 import type { Candidate } from "@/lib/design/types";
 import { formatSI } from "@/lib/design/format";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
 
-type SaveError = { message: string; fieldErrors?: Record<string, string[]>; status?: number };
+type SaveError = Pick<ApiError, "message" | "fieldErrors"> & { status?: number };
 
 /** What to say beside Save about the selected pair: followed from the ranking, or the designer's own pick. */
 export type PickNote = { tone: "info" | "warn" | "bad"; text: string; follow?: Candidate | null };
@@ -71,10 +72,9 @@ export function SavePanel({
             headers: { "content-type": "application/json", "idempotency-key": idempotencyKey },
             body: JSON.stringify({ ...design, ...(project.trim() ? { project: project.trim() } : {}) }),
           });
-      const body = (await res.json().catch(() => ({ message: `The server answered ${res.status}` }))) as {
-        id?: string;
-        revision?: number;
-      } & SaveError;
+      const body = (await res
+        .json()
+        .catch(() => ({ message: `The server answered ${res.status}` }))) as Partial<DesignCreated> & ApiError;
       if (!res.ok || (!revise && !body.id))
         throw {
           message: body.message ?? `The server answered ${res.status}`,

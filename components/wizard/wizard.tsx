@@ -4,7 +4,8 @@
 // comes back exactly where the designer left it.
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { FormProvider, useForm, type Resolver } from "react-hook-form";
+import { FormProvider, useForm, type Resolver, type ResolverResult, type ResolverSuccess } from "react-hook-form";
+import { z } from "zod";
 import { requirementSchema, type Requirement } from "@/lib/design/requirement";
 import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { Choice } from "@/lib/design/types";
@@ -75,9 +76,15 @@ function revisionDraft(t: ReviseTarget): Draft {
   };
 }
 
-const parse = zodResolver(requirementSchema) as unknown as Resolver<WizardValues>;
+// The form holds what a person types (WizardValues, all text); the engine's schema reads it into a
+// normalized Requirement, which is what a valid form resolves to.
+// The form's text is the schema's input at run time; the identity preprocess says so to the compiler.
+const wizardSchema = z.preprocess((typed: WizardValues) => typed, requirementSchema);
+const parse: Resolver<WizardValues, unknown, Requirement> = zodResolver(wizardSchema);
 /** The engine's schema, then the working range (an absurd 1e30 A gets a plain message on its field). */
-const withinRange: Resolver<WizardValues> = async (values, context, options) => {
+const resolved = (r: ResolverResult<WizardValues, Requirement>): r is ResolverSuccess<Requirement> =>
+  Object.keys(r.errors).length === 0;
+const withinRange: Resolver<WizardValues, unknown, Requirement> = async (values, context, options) => {
   const r = await parse(values, context, options);
   if (Object.keys(r.errors).length > 0) {
     // Stock schema messages become the field's own words, quoting what was typed.
@@ -103,7 +110,8 @@ const withinRange: Resolver<WizardValues> = async (values, context, options) => 
     }
     return r;
   }
-  const far = outOfRange(r.values as unknown as Requirement);
+  if (!resolved(r)) return r;
+  const far = outOfRange(r.values);
   if (Object.keys(far).length === 0) return r;
   const errors: Record<string, unknown> = {};
   for (const [path, msgs] of Object.entries(far)) {
@@ -162,7 +170,7 @@ function WizardForm({
   revise?: ReviseTarget;
   storageKey: string;
 }) {
-  const methods = useForm<WizardValues>({
+  const methods = useForm<WizardValues, unknown, Requirement>({
     resolver: withinRange,
     defaultValues: deepMerge(readableDefaults, initial.values),
     mode: "onTouched",

@@ -5,13 +5,13 @@ import { alias } from "drizzle-orm/pg-core";
 import { z } from "zod";
 import { designKindOf, parseRequirement, type DesignKind, type Requirement } from "@/lib/design";
 import type { DesignView } from "@/lib/design-view";
+import { isUuid } from "@/lib/ids";
 import { getDb, type Tx } from "../client";
 import { designRevisions, designs, reviews, users, type DesignStatus } from "../schema";
 import { recordAudit } from "./audit";
 
-const uuid = z.uuid();
 /** Ids come from URLs: anything that is not a UUID cannot name a design (and must not reach SQL as one). */
-export const isUuid = (id: string) => uuid.safeParse(id).success;
+export { isUuid };
 
 /**
  * A stored requirement, read back through the engine's schema so defaults added since it was saved

@@ -29,14 +29,11 @@ const listColumns = {
   createdAt: profiles.createdAt,
 };
 
-type ListRow = { [K in keyof typeof listColumns]: unknown } & { createdAt: Date; summary: Record<string, unknown> };
+/** A row as `listColumns` selects it: the summary column is typed by the schema ($type). */
+type ListRow = Omit<ProfileListItem, "createdAt"> & { createdAt: Date };
 
 function toItem(r: ListRow): ProfileListItem {
-  return {
-    ...(r as unknown as ProfileListItem),
-    summary: r.summary as unknown as ProfileSummary,
-    createdAt: r.createdAt.toISOString(),
-  };
+  return { ...r, createdAt: r.createdAt.toISOString() };
 }
 
 export async function listProfiles(designId: string): Promise<ProfileListItem[]> {

@@ -83,3 +83,22 @@ describe("the OpenAPI document", () => {
     expect(JSON.parse(JSON.stringify(doc))).toEqual(doc); // plain JSON all the way down
   });
 });
+
+describe("response types on the client", () => {
+  const componentsRoot = path.join(process.cwd(), "components");
+  const sources = (dir: string): string[] =>
+    fs.readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
+      const full = path.join(dir, e.name);
+      if (e.isDirectory()) return sources(full);
+      return /\.tsx?$/.test(e.name) && !/\.test\.tsx?$/.test(e.name) ? [full] : [];
+    });
+
+  it("come from responses.ts: no component declares the error shape or a body of its own again", () => {
+    // The refusal's fields typed by hand are the sign of a re-declared response (issue 15, item 4).
+    const handWritten = /\b(message\??: string;?\s*(fieldErrors|\})|fieldErrors\??: Record<string, string\[\]>)/;
+    const offenders = sources(componentsRoot)
+      .filter((f) => handWritten.test(fs.readFileSync(f, "utf8")))
+      .map((f) => path.relative(process.cwd(), f));
+    expect(offenders).toEqual([]);
+  });
+});

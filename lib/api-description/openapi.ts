@@ -1,29 +1,19 @@
 // The OpenAPI 3.1 document of the whole API, generated from operations.ts: request bodies and
-// queries from the routes' own zod schemas (zod 4's JSON Schema output, as the client sends it),
+// queries from the routes' own zod schemas (zod 4's JSON Schema of their input, as a client sends
+// it), response bodies from responses.ts (the JSON Schema of their output, as the server sends it),
 // roles from the policy table, and the one error shape every refusal uses.
 import { z } from "zod";
 import { describeRoles, rolesFor, writes } from "@/lib/auth/policy";
 import { operations, type Operation } from "./operations";
+import { apiError } from "./responses";
 
 type JsonSchema = Record<string, unknown>;
 
-function schemaOf(schema: z.ZodType): JsonSchema {
-  const { $schema: _ignored, ...rest } = z.toJSONSchema(schema, { io: "input", unrepresentable: "any" }) as JsonSchema;
+/** A request schema as a client fills it in ("input"), or a response as the server sends it ("output"). */
+function schemaOf(schema: z.ZodType, io: "input" | "output" = "input"): JsonSchema {
+  const { $schema: _ignored, ...rest } = z.toJSONSchema(schema, { io, unrepresentable: "any" }) as JsonSchema;
   return rest;
 }
-
-const errorSchema = {
-  type: "object",
-  required: ["message"],
-  properties: {
-    message: { type: "string", description: "What went wrong, in words; never repeats a secret" },
-    fieldErrors: {
-      type: "object",
-      description: "Per dotted field path, what is wrong with it",
-      additionalProperties: { type: "array", items: { type: "string" } },
-    },
-  },
-};
 
 const errorRef = { $ref: "#/components/schemas/Error" };
 const refusal = (description: string) => ({ description, content: { "application/json": { schema: errorRef } } });
@@ -58,9 +48,10 @@ function operationObject(op: Operation) {
       description: op.ok.description,
       content: op.ok.contentType
         ? { [op.ok.contentType]: { schema: { type: "string" } } }
-        : { "application/json": { schema: op.ok.schema ? schemaOf(op.ok.schema) : { type: "object" } } },
+        : { "application/json": { schema: op.ok.schema ? schemaOf(op.ok.schema, "output") : { type: "object" } } },
     },
   };
+  const changes = op.method !== "get";
   if (op.access !== "public") {
     responses["401"] = refusal("Not signed in, or the bearer token is unknown, revoked or expired");
     responses["403"] = refusal("The role (or a read-only token) does not allow it");
@@ -68,8 +59,16 @@ function operationObject(op: Operation) {
   }
   if (op.path.includes("{")) responses["404"] = refusal("Not found in your team");
   if (op.body || op.query || op.multipart) responses["422"] = refusal("Invalid input, named field by field");
-  if (op.method === "patch") responses["409"] = refusal("Someone else changed it first");
+  if (op.method === "patch")
+    responses["409"] = refusal("Someone else changed it first, or it conflicts with what is stored");
+  else if (changes && op.access !== "public" && op.access !== "engine.use")
+    responses["409"] = refusal("It conflicts with what is stored (a name in use, a step already taken)");
   if (op.multipart || op.body) responses["413"] = refusal("The body is too large");
+  if (op.body) responses["415"] = refusal("The body is not application/json");
+  for (const [status, description] of Object.entries(op.refusals ?? {})) {
+    if (description) responses[status] = refusal(description);
+  }
+  responses["500"] = refusal("An unexpected error; it is logged and nothing was changed");
   return {
     summary: op.summary,
     description: who(op),
@@ -124,7 +123,7 @@ export function openApiDocument() {
         bearer: { type: "http", scheme: "bearer", description: "A personal API token from /account (swt_…)" },
         session: { type: "apiKey", in: "cookie", name: "next-auth.session-token" },
       },
-      schemas: { Error: errorSchema },
+      schemas: { Error: schemaOf(apiError, "output") },
     },
     paths,
   };

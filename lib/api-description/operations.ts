@@ -27,6 +27,7 @@ import {
 import { compareQuery } from "@/lib/saved-designs/compare";
 import { createDesignSchema, patchDesignSchema } from "@/lib/saved-designs/service";
 import { roleChangeSchema } from "@/lib/team-schemas";
+import { responses } from "./responses";
 
 export type Method = "get" | "post" | "patch" | "put" | "delete";
 
@@ -43,73 +44,16 @@ export type Operation = {
   query?: z.ZodType;
   /** multipart/form-data fields, by name. */
   multipart?: Record<string, string>;
-  /** The success response: status, what it is, and its schema or content type. */
+  /** The success response: status, what it is, and its schema (responses.ts) or a file's content type. */
   ok: { status: number; description: string; schema?: z.ZodType; contentType?: string };
-};
-
-// Response shapes the tests check real answers against (api-description.spec.ts).
-const iso = z.string().describe("ISO 8601 date and time");
-export const responses = {
-  health: z.object({ ok: z.literal(true), database: z.enum(["pglite", "postgres"]) }),
-  me: z.object({
-    user: z.object({ id: z.uuid(), email: z.string(), name: z.string() }),
-    teams: z.array(
-      z.object({ id: z.uuid(), name: z.string(), role: z.enum(["owner", "designer", "reviewer", "maker"]) }),
-    ),
-    currentTeamId: z.uuid(),
-    mail: z.object({ submitted: z.boolean(), returned: z.boolean(), approved: z.boolean(), comments: z.boolean() }),
-  }),
-  switchedTeam: z.object({ currentTeamId: z.uuid(), teamName: z.string(), role: z.string() }),
-  tokenCreated: z.object({
-    id: z.uuid(),
-    token: z.string().describe("the secret, shown this once"),
-    name: z.string(),
-    access: z.enum(["read", "write"]),
-    teamId: z.uuid(),
-    createdAt: iso,
-    expiresAt: iso.nullable(),
-  }),
-  tokens: z.object({
-    tokens: z.array(
-      z.object({
-        id: z.uuid(),
-        name: z.string(),
-        access: z.enum(["read", "write"]),
-        hint: z.string(),
-        teamId: z.uuid(),
-        teamName: z.string(),
-        createdAt: iso,
-        expiresAt: iso.nullable(),
-        lastUsedAt: iso.nullable(),
-        expired: z.boolean(),
-      }),
-    ),
-  }),
-  designList: z
-    .object({
-      designs: z.array(
-        z
-          .object({
-            id: z.uuid(),
-            name: z.string(),
-            status: z.enum(["draft", "in-review", "approved", "returned"]),
-            revision: z.number().int(),
-          })
-          .loose(),
-      ),
-    })
-    .loose(),
-  designCreated: z.object({ id: z.uuid(), revision: z.literal(1), status: z.literal("draft") }).loose(),
-  team: z.object({
-    team: z.object({ id: z.uuid(), name: z.string() }).loose(),
-    members: z.array(z.object({ userId: z.uuid(), email: z.string(), name: z.string(), role: z.string() }).loose()),
-  }),
+  /** Refusals particular to this route, beyond those every route of its kind has (openapi.ts). */
+  refusals?: Partial<Record<number, string>>;
 };
 
 /** The invitation-accept body as its route reads it (public route; its schema lives with the route). */
 const acceptBody = z.object({ token: z.string(), name: z.string().optional(), password: z.string() });
 
-const json = (status: number, description: string, schema?: z.ZodType) => ({ status, description, schema });
+const json = (status: number, description: string, schema: z.ZodType) => ({ status, description, schema });
 const file = (contentType: string, description: string) => ({ status: 200, description, contentType });
 
 export const operations: Operation[] = [
@@ -118,7 +62,7 @@ export const operations: Operation[] = [
     path: "/api/openapi.json",
     summary: "This document",
     access: "team.read",
-    ok: json(200, "OpenAPI 3.1"),
+    ok: json(200, "this OpenAPI 3.1 document", responses.openApi),
   },
   {
     method: "get",
@@ -150,6 +94,7 @@ export const operations: Operation[] = [
     sessionOnly: true,
     body: switchTeamSchema,
     ok: json(200, "switched", responses.switchedTeam),
+    refusals: { 404: "You are not a member of that team" },
   },
   {
     method: "put",
@@ -158,7 +103,7 @@ export const operations: Operation[] = [
     access: "account.manage",
     sessionOnly: true,
     body: passwordChangeSchema,
-    ok: json(200, "{ok: true}"),
+    ok: json(200, "changed; this session renewed", responses.passwordChanged),
   },
   {
     method: "get",
@@ -181,7 +126,7 @@ export const operations: Operation[] = [
     path: "/api/tokens/{id}",
     summary: "Revoke one of your tokens",
     access: "account.manage",
-    ok: json(200, "{revoked: true, id}"),
+    ok: json(200, "revoked", responses.tokenRevoked),
   },
   {
     method: "get",
@@ -196,14 +141,14 @@ export const operations: Operation[] = [
     summary: "Change a member's role (the member is told by e-mail)",
     access: "team.manage-members",
     body: roleChangeSchema,
-    ok: json(200, "{userId, role, mailed}"),
+    ok: json(200, "the new role", responses.roleChanged),
   },
   {
     method: "delete",
     path: "/api/team/members/{userId}",
     summary: "Remove a member",
     access: "team.manage-members",
-    ok: json(200, "{userId, removed: true}"),
+    ok: json(200, "removed", responses.memberRemoved),
   },
   {
     method: "get",
@@ -211,21 +156,22 @@ export const operations: Operation[] = [
     summary: "The team's log, newest first",
     access: "team.read-log",
     query: auditQuery,
-    ok: json(200, "{events: [...]}"),
+    ok: json(200, "the events", responses.audit),
   },
   {
     method: "get",
     path: "/api/outbox",
     summary: "Mail the built-in catcher holds",
     access: "team.read-outbox",
-    ok: json(200, "{messages: [{to, subject, text, sentAt}]}"),
+    ok: json(200, "the messages", responses.outbox),
+    refusals: { 409: "Mail goes out through an SMTP server, so there is no outbox to read" },
   },
   {
     method: "get",
     path: "/api/invitations",
     summary: "Invitations of the team",
     access: "team.manage-invitations",
-    ok: json(200, "{invitations: [...]}"),
+    ok: json(200, "the invitations", responses.invitations),
   },
   {
     method: "post",
@@ -233,14 +179,14 @@ export const operations: Operation[] = [
     summary: "Invite someone (or someone to found a new team)",
     access: "team.manage-invitations",
     body: invitationBodySchema,
-    ok: json(201, "the invitation with its single-use link"),
+    ok: json(201, "the invitation with its single-use link", responses.invitationCreated),
   },
   {
     method: "delete",
     path: "/api/invitations/{id}",
     summary: "Revoke a pending invitation",
     access: "team.manage-invitations",
-    ok: json(200, "revoked"),
+    ok: json(200, "revoked", responses.invitationRevoked),
   },
   {
     method: "post",
@@ -248,7 +194,13 @@ export const operations: Operation[] = [
     summary: "Accept an invitation (signed out)",
     access: "public",
     body: acceptBody,
-    ok: json(201, "{email, teamName, role}"),
+    ok: json(201, "joined", responses.invitationAccepted),
+    refusals: {
+      401: "An existing account must be signed in as itself to join",
+      403: "Signed in as someone else than the invitation names",
+      404: "No such invitation",
+      409: "The invitation was used, revoked or has expired",
+    },
   },
   {
     method: "post",
@@ -256,7 +208,7 @@ export const operations: Operation[] = [
     summary: "Sweep shunts and gains for a requirement",
     access: "engine.use",
     body: requirementSchema,
-    ok: json(200, "candidates, counts and a range plan"),
+    ok: json(200, "candidates, counts, a range plan, and a diagnosis when nothing is feasible", responses.solve),
   },
   {
     method: "post",
@@ -264,7 +216,7 @@ export const operations: Operation[] = [
     summary: "What a series resistance does to the load",
     access: "engine.use",
     body: insertionSchema,
-    ok: json(200, "{currentA, loadVoltageV, burdenV, currentChangePercent, powerInSeriesW}"),
+    ok: json(200, "the operating point", responses.insertion),
   },
   {
     method: "post",
@@ -296,14 +248,18 @@ export const operations: Operation[] = [
     summary: "Import a design file as a new draft",
     access: "design.create",
     body: designImportSchema,
-    ok: json(201, "created"),
+    ok: json(201, "created", responses.designImported),
   },
   {
     method: "get",
     path: "/api/designs/{id}",
     summary: "A design with its figures and revisions (a range plan: plan, metrics.ranges, ranges[k].benchCheck)",
     access: "design.read",
-    ok: json(200, "the design"),
+    ok: json(
+      200,
+      "the design: its pair (choice) or its range plan (plan), figures, revisions, reviews",
+      responses.design,
+    ),
   },
   {
     method: "patch",
@@ -311,7 +267,7 @@ export const operations: Operation[] = [
     summary: "Edit a design (name, project, requirement, choice or plan): a new revision, or 409 when stale",
     access: "design.edit",
     body: patchDesignSchema,
-    ok: json(200, "{revision}"),
+    ok: json(200, "the new revision (or, when nothing changed, the same one)", responses.designRevised),
   },
   {
     method: "get",
@@ -319,7 +275,7 @@ export const operations: Operation[] = [
     summary: "Every revision, with a diff of ?a= to ?b=",
     access: "design.read",
     query: revisionsQuery,
-    ok: json(200, "the revisions"),
+    ok: json(200, "the revisions, or two of them and what changed", responses.revisions),
   },
   {
     method: "post",
@@ -327,14 +283,14 @@ export const operations: Operation[] = [
     summary: "Submit for review (mails the reviewers)",
     access: "design.submit",
     body: submitBodySchema,
-    ok: json(200, "{id, revision, status, mailed}"),
+    ok: json(200, "in review", responses.statusChange),
   },
   {
     method: "get",
     path: "/api/designs/{id}/reviews",
     summary: "Verdicts and comments",
     access: "design.read",
-    ok: json(200, "the reviews"),
+    ok: json(200, "the reviews", responses.reviews),
   },
   {
     method: "post",
@@ -342,7 +298,7 @@ export const operations: Operation[] = [
     summary: "Comment (any member), or approve or return (owners, reviewers; never the revision's author)",
     access: "design.comment",
     body: reviewBodySchema,
-    ok: json(201, "{id, revision, status, mailed}"),
+    ok: json(201, "recorded", responses.statusChange),
   },
   {
     method: "get",
@@ -350,7 +306,7 @@ export const operations: Operation[] = [
     summary: "Two to four designs side by side",
     access: "design.read",
     query: compareQuery,
-    ok: json(200, "{designs: [...]}"),
+    ok: json(200, "the designs", responses.compare),
   },
   {
     method: "get",
@@ -379,14 +335,14 @@ export const operations: Operation[] = [
     path: "/api/designs/{id}/export",
     summary: "The design file (JSON) that imports back",
     access: "design.read",
-    ok: json(200, "the design file"),
+    ok: json(200, "the design file", responses.designExport),
   },
   {
     method: "get",
     path: "/api/designs/{id}/profiles",
     summary: "Current recordings of the design",
     access: "design.read",
-    ok: json(200, "{profiles: [...]}"),
+    ok: json(200, "the recordings", responses.profiles),
   },
   {
     method: "post",
@@ -394,7 +350,7 @@ export const operations: Operation[] = [
     summary: "Upload a current recording (CSV, at most 10 MB)",
     access: "profile.upload",
     multipart: { file: "the CSV: a time column and a current column" },
-    ok: json(201, "{id, samples, summary}"),
+    ok: json(201, "stored", responses.profileUploaded),
   },
   {
     method: "get",
@@ -402,21 +358,21 @@ export const operations: Operation[] = [
     summary: "One recording, decimated to ?width= columns over ?from=..?to=",
     access: "design.read",
     query: profileWindowQuery,
-    ok: json(200, "summary and series"),
+    ok: json(200, "summary and series", responses.profile),
   },
   {
     method: "delete",
     path: "/api/designs/{id}/profiles/{profileId}",
     summary: "Delete a recording (its uploader or an owner)",
     access: "profile.delete",
-    ok: json(200, "{deleted: true, id}"),
+    ok: json(200, "deleted", responses.deleted),
   },
   {
     method: "get",
     path: "/api/designs/{id}/units",
     summary: "Built units of an approved design, judged against its bench check, with measured and predicted yield",
     access: "design.read",
-    ok: json(200, "{units, yield: {measured, predicted}, benchCheck, prediction}"),
+    ok: json(200, "the units, yield, spread check, prediction and calibrated accuracy", responses.units),
   },
   {
     method: "post",
@@ -424,7 +380,7 @@ export const operations: Operation[] = [
     summary: "Record a built unit's bench readings (an approved design)",
     access: "unit.record",
     body: recordUnitSchema,
-    ok: json(201, "{id, serial, pass, readings, cause, calibration}"),
+    ok: json(201, "the unit, judged", responses.unit),
   },
   {
     method: "post",
@@ -432,7 +388,7 @@ export const operations: Operation[] = [
     summary: "Record units from a CSV (one row per unit), all or nothing",
     access: "unit.record",
     multipart: { file: "CSV: serial, then one column per test point (name or current)" },
-    ok: json(201, "{units}"),
+    ok: json(201, "recorded", responses.unitsImported),
   },
   {
     method: "get",
@@ -453,14 +409,14 @@ export const operations: Operation[] = [
     path: "/api/designs/{id}/units/calibration.json",
     summary: "The same corrections as JSON",
     access: "design.read",
-    ok: json(200, "{design, revision, units: [{serial, gain, offsetV, residualPercent}]}"),
+    ok: json(200, "the corrections", responses.calibration),
   },
   {
     method: "get",
     path: "/api/designs/{id}/units/{unitId}",
     summary: "One built unit, judged",
     access: "design.read",
-    ok: json(200, "the unit"),
+    ok: json(200, "the unit", responses.unit),
   },
   {
     method: "patch",
@@ -468,21 +424,21 @@ export const operations: Operation[] = [
     summary: "Change a unit's serial, date or readings (makers: only units they recorded)",
     access: "unit.change",
     body: editUnitSchema,
-    ok: json(200, "the unit, judged again"),
+    ok: json(200, "the unit, judged again", responses.unit),
   },
   {
     method: "delete",
     path: "/api/designs/{id}/units/{unitId}",
     summary: "Delete a unit and its readings (makers: only units they recorded)",
     access: "unit.change",
-    ok: json(200, "{deleted: true, id}"),
+    ok: json(200, "deleted", responses.deleted),
   },
   {
     method: "get",
     path: "/api/library",
     summary: "The parts library",
     access: "library.read",
-    ok: json(200, "{amplifiers, shunts}"),
+    ok: json(200, "the parts", responses.library),
   },
   {
     method: "get",
@@ -498,7 +454,7 @@ export const operations: Operation[] = [
     summary: "Import parts from CSV, all or nothing",
     access: "library.edit",
     multipart: { file: "the CSV", kind: "amplifiers or shunts" },
-    ok: json(200, "what was added and updated"),
+    ok: json(200, "what was added and updated", responses.libraryImported),
   },
   {
     method: "post",
@@ -506,7 +462,7 @@ export const operations: Operation[] = [
     summary: "Add an amplifier",
     access: "library.edit",
     body: amplifierInput,
-    ok: json(201, "the part"),
+    ok: json(201, "the part", responses.amplifier),
   },
   {
     method: "patch",
@@ -514,14 +470,14 @@ export const operations: Operation[] = [
     summary: "Edit an amplifier (409 when stale)",
     access: "library.edit",
     body: amplifierPatch,
-    ok: json(200, "the part"),
+    ok: json(200, "the part", responses.amplifier),
   },
   {
     method: "delete",
     path: "/api/library/amplifiers/{id}",
     summary: "Remove an amplifier",
     access: "library.edit",
-    ok: json(200, "removed"),
+    ok: json(200, "removed", responses.deleted),
   },
   {
     method: "post",
@@ -529,7 +485,7 @@ export const operations: Operation[] = [
     summary: "Add a shunt",
     access: "library.edit",
     body: shuntInput,
-    ok: json(201, "the part"),
+    ok: json(201, "the part", responses.shunt),
   },
   {
     method: "patch",
@@ -537,13 +493,13 @@ export const operations: Operation[] = [
     summary: "Edit a shunt (409 when stale)",
     access: "library.edit",
     body: shuntPatch,
-    ok: json(200, "the part"),
+    ok: json(200, "the part", responses.shunt),
   },
   {
     method: "delete",
     path: "/api/library/shunts/{id}",
     summary: "Remove a shunt",
     access: "library.edit",
-    ok: json(200, "removed"),
+    ok: json(200, "removed", responses.deleted),
   },
 ];

@@ -86,31 +86,56 @@ export function sheetFonts(text: string): string[] {
   return [INTER, ...cjk.map((s) => s.family)];
 }
 
-/** Longest run of characters kept on one line; longer runs break (with a hyphen) where they must. */
+/** Longest run of characters kept on one line; longer runs may break between characters. */
 const LONGEST_UNBROKEN = 16;
 const wide = /[\p{Script=Han}\p{Script=Hiragana}\p{Script=Katakana}\p{Script=Hangul}]/u;
+const scriptOf = (ch: string) =>
+  /\p{Script=Latin}/u.test(ch)
+    ? "latin"
+    : /\p{Script=Greek}/u.test(ch)
+      ? "greek"
+      : /\p{Script=Cyrillic}/u.test(ch)
+        ? "cyrillic"
+        : null;
+/** Two neighbours written in different alphabets (digits, signs and µ belong to none). */
+const scriptChanges = (a: string, b: string) => {
+  const [x, y] = [scriptOf(a), scriptOf(b)];
+  return x !== null && y !== null && x !== y;
+};
 
 /**
- * Where react-pdf may break a word. Ordinary words and values are never split (a part number or
- * a figure cut in two is a misreading); a run longer than any such word (a name typed without
- * spaces) and CJK text, which has no spaces, may break between characters rather than run
- * over the next column.
+ * Where react-pdf may break a word, as the parts between break points. Ordinary words and values
+ * are never split (a part number or a figure cut in two is a misreading); CJK text, which has no
+ * spaces, may break before and after each character, and a run longer than any such word (a name
+ * typed without spaces) where its script changes and every few characters.
+ *
+ * Every break point is an empty part, never a hyphenation point: react-pdf sets a hyphen at a
+ * hyphenation point it breaks at, in the font of the text before it, so "测试" would print as
+ * "测" + a missing-glyph box and a name would not read back as typed. An empty part is a
+ * zero-width space to its line breaker (textkit's getNodes: a blank syllable is glue, and no
+ * hyphen penalty follows a syllable whose successor is empty). A CJK character is also fenced
+ * at the word's ends, because a change of font between runs is otherwise a hyphenation point.
  */
 export function breakPoints(word: string): string[] {
   const chars = [...word];
-  if (chars.length <= LONGEST_UNBROKEN && !wide.test(word)) return [word];
+  const long = chars.length > LONGEST_UNBROKEN;
+  if (!long && !wide.test(word)) return [word];
   const parts: string[] = [];
   let run = "";
   let count = 0;
-  for (const ch of chars) {
+  const cut = () => {
+    if (run) parts.push(run, "");
+    else if (parts.at(-1) !== "") parts.push("");
+    run = "";
+    count = 0;
+  };
+  chars.forEach((ch, i) => {
+    const previous = chars[i - 1];
+    if (wide.test(ch) || (long && previous !== undefined && scriptChanges(previous, ch))) cut();
     run += ch;
     count += 1;
-    if (wide.test(ch) || count >= LONGEST_UNBROKEN / 2) {
-      parts.push(run);
-      run = "";
-      count = 0;
-    }
-  }
+    if (wide.test(ch) || (long && count >= LONGEST_UNBROKEN / 2)) cut();
+  });
   if (run) parts.push(run);
   return parts;
 }

@@ -1,5 +1,4 @@
 // Renders a saved design's build sheet to PDF bytes, in typefaces embedded from npm font files.
-import { createElement } from "react";
 import { Font, renderToBuffer } from "@react-pdf/renderer";
 import type { PairDesignView as DesignView } from "@/lib/design-view";
 import { breakPoints, sheetFonts } from "./fonts";
@@ -22,8 +21,6 @@ export function pdfPageCount(pdf: Buffer): number {
   return pdf.toString("latin1").match(/\/Type\s*\/Page(?![s\w])/g)?.length ?? 0;
 }
 
-type DocElement = Parameters<typeof renderToBuffer>[0];
-
 export async function renderBuildSheet(view: DesignView, opts: SheetMeta, library?: LibraryParts): Promise<Buffer> {
   return renderSheet(view, sheetData(view, library), opts);
 }
@@ -36,19 +33,11 @@ export async function renderSheet(view: DesignView, data: SheetData, opts: Sheet
   // Page numbers written in advance spare react-pdf a second layout of every page; if some
   // page's content overflowed (a very long name, say), the count is off, so lay it out again
   // with numbers the layout works out.
-  const planned = await renderToBuffer(
-    createElement(BuildSheetDocument, { view, data, meta: opts, fonts }) as unknown as DocElement,
-  );
+  // BuildSheetDocument uses no hooks, so calling it hands react-pdf the <Document> element itself,
+  // which is the element type renderToBuffer is typed for.
+  const planned = await renderToBuffer(BuildSheetDocument({ view, data, meta: opts, fonts }));
   if (pdfPageCount(planned) === PLANNED_PAGES) return planned;
-  return renderToBuffer(
-    createElement(BuildSheetDocument, {
-      view,
-      data,
-      meta: opts,
-      fonts,
-      numbering: { kind: "dynamic" },
-    }) as unknown as DocElement,
-  );
+  return renderToBuffer(BuildSheetDocument({ view, data, meta: opts, fonts, numbering: { kind: "dynamic" } }));
 }
 
 /** A range plan's sheet (lib/build-sheet/plan-sheet-data.ts words the engine's figures). */
@@ -62,7 +51,6 @@ export async function renderPlanBuildSheet(
   opts = { ...opts, team: oneLine(opts.team) };
   const data = planSheetData(req, plan);
   const fonts = fontsFor(view, data, opts);
-  return renderToBuffer(
-    createElement(PlanBuildSheetDocument, { view, req, data, meta: opts, fonts }) as unknown as DocElement,
-  );
+  // PlanBuildSheetDocument uses no hooks: calling it hands react-pdf the <Document> element itself.
+  return renderToBuffer(PlanBuildSheetDocument({ view, req, data, meta: opts, fonts }));
 }

@@ -1,7 +1,17 @@
 // A user's ranking expression over candidate fields, e.g. "burdenV * 1000 + errorAtMinPercent".
 // Parsed and compiled once by a limited mathjs instance; only arithmetic on known fields and
 // a short list of pure functions gets through (mathjs's security guidance, plus a tree walk).
-import { all, create, type EvalFunction, type MathNode } from "mathjs";
+import {
+  all,
+  create,
+  isConstantNode,
+  isFunctionNode,
+  isOperatorNode,
+  isParenthesisNode,
+  isSymbolNode,
+  type EvalFunction,
+  type MathNode,
+} from "mathjs";
 
 /** Fields a ranking expression may use (lower result ranks first). */
 export const rankFields = [
@@ -81,43 +91,39 @@ function parser(): (expr: string) => MathNode {
 const fieldSet = new Set<string>(rankFields);
 
 function check(node: MathNode): void {
+  // mathjs's own type guards narrow each node to its class, with its typed fields.
+  if (isConstantNode(node)) {
+    const v: unknown = node.value;
+    if (typeof v !== "number" || !Number.isFinite(v))
+      throw new RankExpressionError(
+        `Ranking expression: only numbers are allowed as constants, not ${JSON.stringify(v)}`,
+      );
+    return;
+  }
+  if (isSymbolNode(node)) {
+    if (!fieldSet.has(node.name) && !allowedConstants.has(node.name))
+      throw new RankExpressionError(
+        `Ranking expression: unknown name "${node.name}"; use candidate fields (${rankFields.join(", ")})`,
+      );
+    return;
+  }
+  if (isOperatorNode(node)) {
+    if (!allowedOperators.has(node.fn))
+      throw new RankExpressionError(`Ranking expression: operator "${node.op}" is not allowed; use + - * / ^`);
+    node.args.forEach(check);
+    return;
+  }
+  if (isParenthesisNode(node)) return check(node.content);
+  if (isFunctionNode(node)) {
+    const name = isSymbolNode(node.fn) ? node.fn.name : null;
+    if (name === null || !allowedFunctions.has(name))
+      throw new RankExpressionError(
+        `Ranking expression: function "${name ?? "?"}" is not allowed; use ${[...allowedFunctions].join(", ")}`,
+      );
+    node.args.forEach(check);
+    return;
+  }
   switch (node.type) {
-    case "ConstantNode": {
-      const v = (node as unknown as { value: unknown }).value;
-      if (typeof v !== "number" || !Number.isFinite(v))
-        throw new RankExpressionError(
-          `Ranking expression: only numbers are allowed as constants, not ${JSON.stringify(v)}`,
-        );
-      return;
-    }
-    case "SymbolNode": {
-      const name = (node as unknown as { name: string }).name;
-      if (!fieldSet.has(name) && !allowedConstants.has(name))
-        throw new RankExpressionError(
-          `Ranking expression: unknown name "${name}"; use candidate fields (${rankFields.join(", ")})`,
-        );
-      return;
-    }
-    case "OperatorNode": {
-      const op = node as unknown as { fn: string; op: string; args: MathNode[] };
-      if (!allowedOperators.has(op.fn))
-        throw new RankExpressionError(`Ranking expression: operator "${op.op}" is not allowed; use + - * / ^`);
-      op.args.forEach(check);
-      return;
-    }
-    case "ParenthesisNode":
-      check((node as unknown as { content: MathNode }).content);
-      return;
-    case "FunctionNode": {
-      const fn = node as unknown as { fn: MathNode; args: MathNode[] };
-      const name = fn.fn.type === "SymbolNode" ? (fn.fn as unknown as { name: string }).name : null;
-      if (name === null || !allowedFunctions.has(name))
-        throw new RankExpressionError(
-          `Ranking expression: function "${name ?? "?"}" is not allowed; use ${[...allowedFunctions].join(", ")}`,
-        );
-      fn.args.forEach(check);
-      return;
-    }
     case "AssignmentNode":
     case "FunctionAssignmentNode":
       throw new RankExpressionError("Ranking expression: assignments and function definitions are not allowed");

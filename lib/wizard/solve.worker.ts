@@ -5,7 +5,9 @@ import { solve } from "@/lib/design/solve";
 import { outOfRange } from "./ranges";
 import type { SolveReply, SolveRequest } from "./solver-protocol";
 
-const post = (reply: SolveReply) => (self as unknown as { postMessage(m: SolveReply): void }).postMessage(reply);
+// The app compiles with the DOM's types, where self is a window; in this worker it is the worker's
+// scope, whose postMessage(message) the window's one-argument overload describes.
+const post = (reply: SolveReply) => self.postMessage(reply);
 
 self.addEventListener("message", (event: MessageEvent<SolveRequest>) => {
   const { id, input } = event.data;

@@ -98,7 +98,7 @@ test("a maker types in a unit's readings, sees one out of band with its cause, a
   await page.goto(`/designs/${id}`);
   await expect(page.getByTestId("units-panel").getByTestId("spread-point").first()).toBeVisible();
   await page.getByTestId("units-panel").scrollIntoViewIfNeeded();
-  await page.waitForTimeout(400);
+  await expect(page.getByTestId("units-panel")).toBeInViewport();
   await page.screenshot({ path: `${shots}/units-390.png`, fullPage: true });
   await page.getByTestId("units-panel").screenshot({ path: `${shots}/units-panel-390.png` });
   await noSidewaysScroll(page);

@@ -317,6 +317,20 @@ function words(pdf: Buffer): Word[] {
   return out;
 }
 
+/** Page 1's title block: the words of the Design value, and those to the right of its column. */
+function designCell(all: Word[]) {
+  const p1 = all.filter((w) => w.page === 1);
+  const label = (t: string) => p1.find((w) => w.text === t && w.xMin < 60);
+  const design = label("Design");
+  const project = label("Project");
+  expect(design && project).toBeTruthy();
+  // The title block's left column: half the 515 pt text width less half the 12 pt gap.
+  const columnRight = 40 + (515.28 - 12) / 2;
+  const row = p1.filter((w) => w.yMin >= design!.yMin - 1 && w.yMax <= project!.yMin + 1);
+  const value = row.filter((w) => w.xMin > design!.xMax && w.xMin < columnRight);
+  return { value, right: row.filter((w) => w.xMin >= columnRight), columnRight };
+}
+
 describe("names in any script", () => {
   // Latin with «», Greek (µ is the micro sign, Ω the ohm letter), Cyrillic and Chinese.
   const name = "Shunt «µΩ» Проверка тока 测试电流 Δ-Messung";
@@ -343,6 +357,37 @@ describe("names in any script", () => {
   });
 });
 
+describe("a long name that changes script inside its words", () => {
+  // No spaces where the script changes, so the line must break inside a word: between Chinese
+  // characters, where Latin meets Cyrillic, in a long run. Each break must add nothing.
+  const name =
+    "Shunt«µΩ»Проверкатокаизмерение测试电流测量装置ΔMessungStromsensorЛабораторнаяпроверка测试ΩµLatin 电源监控 Проект";
+  let all: Word[];
+  beforeAll(async () => {
+    all = words((await render(fixtureView(loggerRequirement, { name, status: "approved" }), "name-scripts")).pdf);
+  });
+
+  it("comes back from pdftotext exactly, with no hyphen or box where a line breaks", () => {
+    const { value, columnRight } = designCell(all);
+    expect(new Set(value.map((w) => w.yMin)).size, "wrapped over lines").toBeGreaterThan(2);
+    // pdftotext gives each line's words; the name's one space separates two of them.
+    expect(
+      value
+        .map((w) => w.text)
+        .join("")
+        .normalize("NFKC"),
+    ).toBe(name.replace(/ /g, "").normalize("NFKC"));
+    for (const w of value) {
+      expect(w.text, "a hyphen at a break").not.toMatch(/-/);
+      expect(w.xMax, w.text).toBeLessThanOrEqual(columnRight + 0.5);
+    }
+  });
+
+  it("is set from typefaces that hold every character (no missing-glyph box)", () => {
+    for (const ch of new Set(name.replace(/\s/g, ""))) expect(drawable(ch, name), ch).toBe(true);
+  });
+});
+
 describe("a 300-character name", () => {
   // Typed without a single space: the worst case for a line breaker.
   const name = "FieldLoggerBenchAdapterSecondBuild".repeat(9).slice(0, 300);
@@ -360,21 +405,13 @@ describe("a 300-character name", () => {
     }
   });
 
-  it("wraps inside its column of the title block and leaves the next column clear", () => {
-    const p1 = all.filter((w) => w.page === 1);
-    const label = (t: string) => p1.find((w) => w.text === t && w.xMin < 60);
-    const design = label("Design");
-    const project = label("Project");
-    expect(design && project).toBeTruthy();
-    // The title block's left column: half the 515 pt text width less half the 12 pt gap.
-    const columnRight = 40 + (515.28 - 12) / 2;
-    const row = p1.filter((w) => w.yMin >= design!.yMin - 1 && w.yMax <= project!.yMin + 1);
-    const value = row.filter((w) => w.xMin > design!.xMax && w.xMin < columnRight);
+  it("wraps inside its column of the title block, reads back whole, and leaves the next column clear", () => {
+    const { value, right, columnRight } = designCell(all);
     expect(value.length).toBeGreaterThan(3); // the name, wrapped over several lines
-    expect(value.map((w) => w.text.replace(/-$/, "")).join("")).toBe(name);
+    // Broken where it must be, with nothing added: no hyphen, no missing-glyph box.
+    expect(value.map((w) => w.text).join("")).toBe(name);
     for (const w of value) expect(w.xMax, w.text).toBeLessThanOrEqual(columnRight + 0.5);
     // Nothing of the name reaches the right-hand column (Status, Approved, ...).
-    const right = row.filter((w) => w.xMin >= columnRight);
     expect(right.map((w) => w.text)).toContain("Approved");
     expect(right.map((w) => w.text).join(" ")).not.toMatch(/FieldLogger/);
   });

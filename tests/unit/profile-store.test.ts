@@ -52,10 +52,10 @@ describe("profile storage", () => {
     // 1.5 = 0x3FF8000000000000, least significant byte first.
     expect(Array.from(raw!.bytes.subarray(0, 8))).toEqual([0, 0, 0, 0, 0, 0, 0xf8, 0x3f]);
     expect(raw!.bytes.byteLength).toBe(24);
-    const result = (await db.execute(
-      sql`select encode(times_s, 'hex') as h from profiles where id = ${id}`,
-    )) as unknown as { rows: { h: string }[] };
-    const [hex] = result.rows;
+    const [hex] = await db
+      .select({ h: sql<string>`encode(${profiles.timesS}, 'hex')` })
+      .from(profiles)
+      .where(eq(profiles.id, id));
     expect(hex!.h.slice(16, 32)).toBe("000000000000e03f"); // 0.5 little-endian
 
     const back = await getProfile(designId, id);

@@ -33,7 +33,7 @@ function T({
   size?: number;
   children: string;
 }) {
-  const style = { fontFamily: LABEL_FONTS, fontSize: size } as unknown as Record<string, string>;
+  const style = { fontFamily: LABEL_FONTS, fontSize: size };
   return (
     <Text x={x} y={y} fill={color} textAnchor={anchor} style={style}>
       {children}

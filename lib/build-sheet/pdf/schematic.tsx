@@ -21,11 +21,8 @@ type Txt = {
 };
 
 export function Label({ x, y, size = 7.5, anchor = "start", color = colors.ink, bold = false, children }: Txt) {
-  // react-pdf's SVG text takes font settings in style; its types only list paint attributes.
-  const style = { fontFamily: LABEL_FONTS, fontSize: size, fontWeight: bold ? 700 : 400 } as unknown as Record<
-    string,
-    string
-  >;
+  // react-pdf's SVG text takes font settings in style (types/react-pdf-svg-text.d.ts).
+  const style = { fontFamily: LABEL_FONTS, fontSize: size, fontWeight: bold ? 700 : 400 };
   return (
     <Text x={x} y={y} fill={color} textAnchor={anchor} style={style}>
       {children}

@@ -1,4 +1,4 @@
-import { isUuid } from "@/db/queries/designs";
+import { isUuid } from "@/lib/ids";
 import { revokeInvitation } from "@/db/queries/invitations";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError, refused } from "@/lib/http";

@@ -1,5 +1,5 @@
 import { revokeToken } from "@/db/queries/tokens";
-import { isUuid } from "@/db/queries/designs";
+import { isUuid } from "@/lib/ids";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
 

@@ -2,7 +2,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { Wizard } from "@/components/wizard/wizard";
-import { getDesignView, isUuid } from "@/db/queries/designs";
+import { getDesignView } from "@/db/queries/designs";
+import { isUuid } from "@/lib/ids";
 import { requirePageCaller } from "@/lib/auth/gate";
 
 export const metadata: Metadata = { title: "Revise design" };

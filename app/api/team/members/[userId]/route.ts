@@ -3,11 +3,12 @@ import { changeMemberRole, findUserById } from "@/db/queries/users";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError, refused } from "@/lib/http";
 import { mailRoleChanged } from "@/lib/mail/role-change";
+import { isUuid } from "@/lib/ids";
 import { roleChangeSchema } from "@/lib/team-schemas";
 
 function memberId(params: Record<string, string>): string {
   const userId = params.userId ?? "";
-  if (!/^[0-9a-f-]{36}$/i.test(userId)) throw new HttpError(404, "That person is not a member of this team.");
+  if (!isUuid(userId)) throw new HttpError(404, "That person is not a member of this team.");
   return userId;
 }
 
