@@ -5,8 +5,8 @@ import { rangeCandidates } from "@/lib/design/range-candidates";
 import { planVerdict } from "./plan-verdict";
 import type { PlanCheckReply, PlanCheckRequest } from "./plan-protocol";
 
-const post = (reply: PlanCheckReply) =>
-  (self as unknown as { postMessage(m: PlanCheckReply): void }).postMessage(reply);
+// In this worker self is the worker's scope, whose postMessage(message) the DOM's window overload describes.
+const post = (reply: PlanCheckReply) => self.postMessage(reply);
 
 self.addEventListener("message", (event: MessageEvent<PlanCheckRequest>) => {
   const { id, requirement, plan } = event.data;
