@@ -85,9 +85,10 @@ test.afterAll(async () => {
 });
 
 let id: string;
+const savedName = `Logger plan ${unique()}`;
 
 test("a plan is saved and read back with per-range figures and bench rows from the engine", async () => {
-  const res = await save(designer, `Logger plan ${unique()}`, { plan });
+  const res = await save(designer, savedName, { plan });
   expect(res.status(), await res.text()).toBe(201);
   const created = (await res.json()) as { id: string; revision: number; status: string };
   expect(created).toMatchObject({ revision: 1, status: "draft" });
@@ -161,6 +162,17 @@ test("a plan design goes through review: submit, approve", async () => {
   const d = (await (await maker.get(`/api/designs/${id}`)).json()) as PlanDesign;
   expect(d).toMatchObject({ status: "approved", revision: 2, kind: "plan" });
   expect(d.revisions.map((r) => r.kind)).toEqual(["plan", "plan"]);
+  // The mail to reviewers describes the plan range by range (sent after the response: poll, bounded).
+  const owner = await apiAs("owner");
+  const requested = async () =>
+    (
+      (await (await owner.get("/api/outbox")).json()) as { messages: { to: string; subject: string; text: string }[] }
+    ).messages.find((m) => m.subject.includes(savedName) && m.to === "reviewer@harbourline.example");
+  await expect
+    .poll(async () => (await requested())?.text ?? "", { timeout: 10_000 })
+    .toContain(`A range plan of ${plan.ranges.length} ranges`);
+  expect((await requested())?.text).toMatch(/Range 1: 3 µA to /);
+  await owner.dispose();
 });
 
 test("the parts of the build that read one pair say so with 422, never a 500", async () => {
