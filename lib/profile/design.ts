@@ -10,5 +10,6 @@ export function profileDesignOf(design: Pick<DesignView, "requirement" | "choice
     supplyV: design.requirement.supply.voltage,
     fullScaleV: design.requirement.readout.fullScale,
     lsbA: design.metrics.lsbA,
+    zeroLevelV: design.requirement.amplifier.reference?.voltage ?? 0,
   };
 }
