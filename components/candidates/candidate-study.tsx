@@ -8,7 +8,8 @@ import type { Requirement } from "@/lib/design/requirement";
 import type { CandidateDetail, Choice } from "@/lib/design/types";
 import { formatSI } from "@/lib/design/format";
 import { BudgetBar } from "@/components/charts/budget-bar";
-import { ErrorCurveChart, type ErrorSeries } from "@/components/charts/error-curve-chart";
+import { type ErrorSeries } from "@/components/charts/error-curve-chart";
+import { SpanErrorChart } from "@/components/charts/signed-error-chart";
 import { LoadChart } from "@/components/charts/load-chart";
 import { Panel } from "@/components/ui/panel";
 import { candidateKey } from "@/lib/wizard/candidate-key";
@@ -64,7 +65,7 @@ export function CandidateStudy({
     <div className="flex flex-col gap-4">
       <div className="grid grid-cols-1 gap-4 xl:grid-cols-2">
         <Panel title="Error across the span">
-          <ErrorCurveChart
+          <SpanErrorChart
             series={series}
             targetPercent={req.accuracy.percent}
             bandMinA={req.accuracy.bandMin}
@@ -83,7 +84,7 @@ export function CandidateStudy({
                   onClick={() => setBudgetAt(k)}
                   className={`rounded border px-2 py-0.5 ${budgetAt === k ? "border-copper bg-copper-soft text-copper-strong" : "border-line text-ink-muted hover:text-ink"}`}
                 >
-                  at {k === "min" ? "Imin" : k === "max" ? "Imax" : "typical"}
+                  at {k === "min" ? (req.current.min < 0 ? "−Imax" : "Imin") : k === "max" ? "Imax" : "typical"}
                 </button>
               ))}
           </div>

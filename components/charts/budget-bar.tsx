@@ -13,8 +13,8 @@ export function BudgetBar({ terms, currentA, label }: { terms: BudgetTerm[]; cur
   return (
     <figure className="flex flex-col gap-2">
       <figcaption className="text-xs text-ink-muted">
-        {label}: worst case {formatSI(total, "A")} at {formatSI(currentA, "A")} ({formatPercent(total / currentA)} of
-        reading)
+        {label}: worst case {formatSI(total, "A")} at {formatSI(currentA, "A")} (
+        {formatPercent(total / Math.abs(currentA))} of reading)
       </figcaption>
       <div
         className="flex h-4 w-full overflow-hidden rounded border border-line"
@@ -43,6 +43,9 @@ export function BudgetBar({ terms, currentA, label }: { terms: BudgetTerm[]; cur
                   aria-hidden
                 />
                 {t.label}
+                {t.removedA ? (
+                  <span className="text-ink-faint"> (calibration took out {formatSI(t.removedA, "A")})</span>
+                ) : null}
               </td>
               <td className="whitespace-nowrap py-0.5 pr-2 text-right">{formatSI(t.errorA, "A")}</td>
               <td className="whitespace-nowrap py-0.5 text-right text-ink-muted">{formatPercent(t.share)} of budget</td>

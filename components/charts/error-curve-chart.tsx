@@ -22,17 +22,22 @@ export function ErrorCurveChart({
   targetPercent,
   bandMinA,
   bandMaxA,
+  negative = false,
 }: {
   series: ErrorSeries[];
   targetPercent: number;
   bandMinA: number;
   bandMaxA: number;
+  /** A signed span's negative direction, drawn by magnitude on the same log axis and labelled with its sign. */
+  negative?: boolean;
 }) {
   const { ref, node, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const theme = useMemo(() => chartTheme(p), [p]);
   const colours = [p.copper, p.signal, p.good, p.warn];
   const all = series.flatMap((s) => s.points);
+  const ampTick = siTick("A");
+  const xTick = negative ? (v: number) => `−${ampTick(v)}` : ampTick;
   const xd = logDomain(
     all.map((q) => q.currentA),
     0.02,
@@ -75,9 +80,9 @@ export function ErrorCurveChart({
             <Axis
               orientation="bottom"
               labelOffset={bottomLabelOffset}
-              label="Current"
+              label={negative ? "Current, negative direction" : "Current"}
               tickValues={logTicks(xd[0], xd[1])}
-              tickFormat={siTick("A")}
+              tickFormat={xTick}
             />
             <Axis
               orientation="left"
@@ -126,7 +131,7 @@ export function ErrorCurveChart({
                 if (!near) return null;
                 return (
                   <SeriesTip
-                    title={`at ${formatSI(near.currentA, "A")}`}
+                    title={`at ${formatSI(negative ? -near.currentA : near.currentA, "A")}`}
                     byKey={(tooltipData?.datumByKey ?? {}) as Record<string, { datum: Pt }>}
                     skip={["Accuracy target"]}
                     value={(d) => (Number.isFinite(d.v) ? formatPercent(d.v / 100) : "off the chart")}

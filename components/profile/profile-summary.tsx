@@ -40,16 +40,30 @@ export function ProfileSummaryView({ summary, loadMinV }: { summary: ProfileSumm
           note={summary.durationS >= 120 ? formatDuration(summary.durationS) : undefined}
         />
         <Figure
-          label="Charge"
+          label={summary.chargeOutC ? "Net charge" : "Charge"}
           value={formatSI(summary.chargeC, "C")}
           note={`${formatSI(summary.chargeC / 3600, "Ah")}`}
         />
+        {summary.chargeOutC ? (
+          <>
+            <Figure
+              label="Charge in (I > 0)"
+              value={formatSI(summary.chargeInC, "C")}
+              note={formatSI(summary.chargeInC / 3600, "Ah")}
+            />
+            <Figure
+              label="Charge out (I < 0)"
+              value={formatSI(summary.chargeOutC, "C")}
+              note={formatSI(summary.chargeOutC / 3600, "Ah")}
+            />
+          </>
+        ) : null}
         <Figure label="Average current" value={formatSI(summary.averageCurrentA, "A")} />
         <Figure label="Peak current" value={formatSI(summary.peakCurrentA, "A")} />
         <Figure
           label="Largest burden"
           value={formatSI(summary.maxBurdenV, "V")}
-          note={plan ? "through the range in use, its switch included" : "peak current × shunt"}
+          note={plan ? "through the range in use, its switch included" : "largest |current| × shunt"}
         />
         <Figure
           label="Lowest load voltage"

@@ -20,6 +20,7 @@ import {
   TerminalFields,
   ThermalEmfFields,
 } from "./front-end-fields";
+import { ReadoutErrorFields, ZeroLevelFields } from "./readout-error-fields";
 
 export type StepKey = "span" | "supply" | "readout" | "shunt" | "amplifier" | "temperature";
 
@@ -42,7 +43,7 @@ export const steps: StepDef[] = [
     key: "readout",
     title: "Readout",
     blurb: "What reads the amplifier's output, and how well.",
-    fields: ["readout", "resolution", "accuracy"],
+    fields: ["readout", "resolution", "accuracy", "calibration"],
   },
   {
     key: "shunt",
@@ -86,7 +87,7 @@ export function SpanStep({ live }: { live: LiveErrors }) {
         unit="A"
         label="Minimum current"
         placeholder="3 uA"
-        hint="e.g. 3 uA (sleep current)"
+        hint="e.g. 3 uA (sleep current); below zero for a bidirectional span, e.g. −20 A of charge"
         extraError={live("current.min")}
       />
       <FormField
@@ -244,6 +245,7 @@ export function ReadoutStep({ live }: { live: LiveErrors }) {
           />
         </>
       )}
+      <ReadoutErrorFields kind={kind === "meter" ? "meter" : "adc"} live={live} />
       <FormField
         name="resolution.countsAtMin"
         label="Counts wanted at minimum current"
@@ -621,6 +623,7 @@ export function AmplifierStep({
         placeholder="50 mV"
         extraError={live("amplifier.swingHigh")}
       />
+      <ZeroLevelFields live={live} />
     </div>
   );
 }

@@ -166,6 +166,8 @@ export const profileSummaryShape = z.object({
   samples: z.number(),
   durationS: z.number(),
   chargeC: z.number(),
+  chargeInC: z.number(),
+  chargeOutC: z.number(),
   averageCurrentA: z.number(),
   peakCurrentA: z.number(),
   maxBurdenV: z.number(),
@@ -183,4 +185,5 @@ export const profileDesignShape = z.object({
   supplyV: z.number(),
   fullScaleV: z.number(),
   lsbA: z.number(),
+  zeroLevelV: z.number().optional(),
 });

@@ -5,6 +5,7 @@ import * as f from "./format";
 import type { Part } from "./part";
 import { filterParts, padNote, traceShuntPart } from "./front-end-parts";
 import { resistorCode } from "@/lib/design/resistor-code";
+import { readoutErrorText, zeroLevelParts } from "./readout-zero-text";
 
 export type { Part } from "./part";
 
@@ -75,6 +76,7 @@ export function partsList(
   if (pair) parts.push(...gainPairParts(req, pair, { rf: "R2", rg: "R3", amplifier: "U1", rf2: "R4", rg2: "R5" }));
   const nextR = parts.filter((p) => p.designator.startsWith("R")).length + 1;
   parts.push(...filterParts(req, nextR, 2));
+  parts.push(...zeroLevelParts(req));
   parts.push(
     {
       designator: "C1",
@@ -192,6 +194,6 @@ export function gainPairParts(
 export function readoutText(req: Requirement): string {
   const r = req.readout;
   return r.kind === "adc"
-    ? `ADC, ${r.bits} bits, ${f.volts(r.fullScale)} full scale`
-    : `meter range ${f.volts(r.fullScale)} full scale, ${r.counts} counts`;
+    ? `ADC, ${r.bits} bits, ${f.volts(r.fullScale)} full scale; ${readoutErrorText(req)}`
+    : `meter range ${f.volts(r.fullScale)} full scale, ${r.counts} counts; ${readoutErrorText(req)}`;
 }

@@ -6,6 +6,7 @@ import {
   decadeScale,
   errorAt,
   errorCurve,
+  curveByMagnitude,
   evaluateCandidate,
   type BenchCheckRow,
   type CandidateDetail,
@@ -19,6 +20,7 @@ import * as f from "./format";
 import { designParts, type LibraryParts } from "./library-parts";
 import { constructionRows, traceLayoutNotes } from "./front-end-parts";
 import { kelvinAdvice, readoutText, type Part } from "./parts";
+import { calibrationText } from "./readout-zero-text";
 
 export type Row = { label: string; value: string };
 export type BenchRow = BenchCheckRow & { current: string; expected: string; band: string };
@@ -70,6 +72,7 @@ export function requirementRows(req: Requirement): Row[] {
   rows.push(
     { label: "Load", value: req.load.model.replace("-", " ") },
     { label: "Readout", value: readoutText(req) },
+    { label: "Calibration", value: calibrationText(req) },
     { label: "Counts at minimum current", value: `at least ${formatCount(req.resolution.countsAtMin)}` },
     {
       label: "Accuracy target",
@@ -239,7 +242,7 @@ export function sheetData(view: Pick<DesignView, "requirement" | "choice">, libr
     performance: performanceRows(req, m),
     budget: budget.rows,
     budgetTotals: budget.totals,
-    curve: errorCurve(req, choice, 60),
+    curve: curveByMagnitude(errorCurve(req, choice, 60)),
     bench: benchRows(req, choice),
     benchHowTo: benchHowTo(req),
     layout: layoutNotes(req, choice),

@@ -201,3 +201,12 @@ export function lowestAccurateCurrent(req: Requirement, m: Model, choice: Choice
   }
   return b;
 }
+
+/**
+ * A curve by current magnitude, for log axes that cannot show a sign: a signed span's worst case is
+ * the same at −I and +I (docs/model.md §3), so its two branches fold onto one, out to its larger end.
+ */
+export function curveByMagnitude<T extends { currentA: number }>(curve: T[]): T[] {
+  const out = curve.map((p) => ({ ...p, currentA: Math.abs(p.currentA) })).sort((a, b) => a.currentA - b.currentA);
+  return out.filter((p, k) => k === 0 || p.currentA > (out[k - 1] as T).currentA * (1 + 1e-12));
+}

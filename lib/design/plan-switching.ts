@@ -4,7 +4,7 @@
 // profiles"; API.md v2: rangeSwitches, timeInRangeS).
 import { buildModel, resolvableStepA } from "./model";
 import type { PlanChoice, SwitchPoint } from "./plan-choice";
-import type { ProfileSummary } from "./profile";
+import { segmentCharge, type ProfileSummary } from "./profile";
 import { readoutStepV } from "./model";
 import type { Requirement } from "./requirement";
 import type { Amps, Ohms, Seconds, Volts } from "./units";
@@ -180,6 +180,8 @@ export function summarizePlanProfile(
   const trace = traceRanges(timesS, currentsA, d.switchPoints, d.switchDelayS, (k) => d.ranges[k]!.maxA);
   const samplesInRange = new Array<number>(d.ranges.length).fill(0);
   let charge = 0;
+  let chargeIn = 0;
+  let chargeOut = 0;
   let peak = -Infinity;
   let maxDrop = -Infinity;
   let clipped = 0;
@@ -197,7 +199,13 @@ export function summarizePlanProfile(
     if (I > r.clipCurrentA) clipped++;
     if (I < r.resolvableStepA) below++;
     if (trace.late[i]) late++;
-    if (i > 0) charge += ((currentsA[i - 1]! + I) / 2) * (timesS[i]! - timesS[i - 1]!);
+    if (i > 0) {
+      const dt = timesS[i]! - timesS[i - 1]!;
+      charge += ((currentsA[i - 1]! + I) / 2) * dt;
+      const seg = segmentCharge(currentsA[i - 1]!, I, dt);
+      chargeIn += seg.inC;
+      chargeOut += seg.outC;
+    }
   }
   const durationS = timesS[n - 1]! - timesS[0]!;
   const lowest = d.ranges[0]!;
@@ -208,6 +216,8 @@ export function summarizePlanProfile(
       samples: n,
       durationS,
       chargeC: charge,
+      chargeInC: chargeIn,
+      chargeOutC: chargeOut,
       averageCurrentA: charge / durationS,
       peakCurrentA: peak,
       maxBurdenV: maxDrop,

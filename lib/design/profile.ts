@@ -12,12 +12,18 @@ export type ProfileDesign = {
   fullScaleV: Volts;
   /** One readout step referred to current (the engine's lsbA). */
   lsbA: Amps;
+  /** A bidirectional design's zero-current output level (left out: 0 V). */
+  zeroLevelV?: Volts;
 };
 
 export type ProfileSummary = {
   samples: number;
   durationS: Seconds;
+  /** Net charge: the trapezoid integral of the signed current, C. */
   chargeC: number;
+  /** Charge carried by the positive samples alone, and by the negative ones (as a positive number), C. */
+  chargeInC: number;
+  chargeOutC: number;
   averageCurrentA: Amps;
   peakCurrentA: Amps;
   maxBurdenV: Volts;
@@ -45,40 +51,70 @@ export function clipCurrent(d: ProfileDesign): Amps {
   return d.fullScaleV / (d.shuntOhms * d.gain);
 }
 
-/** Whether a sample's ideal output I·R·G exceeds the readout's full scale. */
+/**
+ * Whether a sample's ideal output leaves the readout's window: above full scale, or (a negative
+ * current on a design with a zero-current level) below zero volts.
+ */
 export function isClipped(currentA: Amps, d: ProfileDesign): boolean {
-  return currentA * d.shuntOhms * d.gain > d.fullScaleV;
+  const v = (d.zeroLevelV ?? 0) + currentA * d.shuntOhms * d.gain;
+  return v > d.fullScaleV || (currentA < 0 && v < 0);
 }
 
-/** Whether a sample's current is below one readout step. */
+/** Whether a sample's current magnitude is below one readout step. */
 export function isBelowStep(currentA: Amps, d: ProfileDesign): boolean {
-  return currentA < d.lsbA;
+  return Math.abs(currentA) < d.lsbA;
+}
+
+/**
+ * The trapezoid between two samples split into its positive and negative areas: a segment that
+ * crosses zero crosses it where the straight line between the samples does.
+ */
+export function segmentCharge(i0: Amps, i1: Amps, dt: Seconds): { inC: number; outC: number } {
+  if (i0 >= 0 && i1 >= 0) return { inC: ((i0 + i1) / 2) * dt, outC: 0 };
+  if (i0 <= 0 && i1 <= 0) return { inC: 0, outC: (-(i0 + i1) / 2) * dt };
+  const tz = (dt * i0) / (i0 - i1); // time to the crossing
+  const first = (i0 / 2) * tz;
+  const second = (i1 / 2) * (dt - tz);
+  return first > 0 ? { inC: first, outC: -second } : { inC: second, outC: -first };
 }
 
 export function summarizeProfile(timesS: Float64Array, currentsA: Float64Array, d: ProfileDesign): ProfileSummary {
   const n = timesS.length;
   if (n < 2 || currentsA.length !== n) throw new Error("a profile needs at least two samples of time and current");
   let charge = 0;
+  let chargeIn = 0;
+  let chargeOut = 0;
   let peak = -Infinity;
+  let largest = 0;
   let clipped = 0;
   let below = 0;
   for (let k = 0; k < n; k++) {
     const i = currentsA[k]!;
     if (i > peak) peak = i;
+    if (Math.abs(i) > largest) largest = Math.abs(i);
     if (isClipped(i, d)) clipped++;
     if (isBelowStep(i, d)) below++;
-    if (k > 0) charge += ((currentsA[k - 1]! + i) / 2) * (timesS[k]! - timesS[k - 1]!);
+    if (k > 0) {
+      const dt = timesS[k]! - timesS[k - 1]!;
+      charge += ((currentsA[k - 1]! + i) / 2) * dt;
+      const seg = segmentCharge(currentsA[k - 1]!, i, dt);
+      chargeIn += seg.inC;
+      chargeOut += seg.outC;
+    }
   }
   const durationS = timesS[n - 1]! - timesS[0]!;
-  const maxBurdenV = burdenV(peak, d.shuntOhms);
+  // The drop is |I|·R either way; the load is left least at the largest magnitude.
+  const maxBurdenV = burdenV(largest, d.shuntOhms);
   return {
     samples: n,
     durationS,
     chargeC: charge,
+    chargeInC: chargeIn,
+    chargeOutC: chargeOut,
     averageCurrentA: charge / durationS,
     peakCurrentA: peak,
     maxBurdenV,
-    minLoadVoltageV: loadVoltageV(peak, d),
+    minLoadVoltageV: loadVoltageV(largest, d),
     clippedPercent: (100 * clipped) / n,
     belowResolutionPercent: (100 * below) / n,
     clipCurrentA: clipCurrent(d),

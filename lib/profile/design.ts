@@ -19,6 +19,7 @@ export function profileDesignOf(design: Pick<PairDesignView, "requirement" | "ch
     supplyV: design.requirement.supply.voltage,
     fullScaleV: design.requirement.readout.fullScale,
     lsbA: design.metrics.lsbA,
+    zeroLevelV: design.requirement.amplifier.reference?.voltage ?? 0,
   };
 }
 

@@ -10,7 +10,20 @@ export type WizardValues = {
   supply: { voltage: string; side: "low" | "high" };
   drop: { max?: string; fraction?: string; loadMin?: string };
   load: { model: LoadModel };
-  readout: { kind: "adc" | "meter"; bits?: number; counts?: number; fullScale: string; sampleRateHz?: string };
+  readout: {
+    kind: "adc" | "meter";
+    bits?: number;
+    counts?: number;
+    fullScale: string;
+    sampleRateHz?: string;
+    // The readout's own error (left out: an ideal readout).
+    reference?: { tolerance?: string; tempco?: string };
+    offsetLsb?: number;
+    gainError?: string;
+    inlLsb?: number;
+    accuracy?: { percentOfReading?: string; digits?: number };
+  };
+  calibration: "none" | "one-point" | "two-point";
   resolution: { countsAtMin: number };
   accuracy: { percent: string; bandMin?: string; bandMax?: string };
   temperature: { min: string; max: string };
@@ -50,6 +63,8 @@ export type WizardValues = {
     swingLow: string;
     swingHigh: string;
     cmrrDb: number;
+    /** A bidirectional span's zero-current output level; a blank voltage is placed by the engine. */
+    reference: { voltage?: string; tolerance: string; tempco: string };
   };
   limit: number;
   /** The input filter's checkbox (not part of the requirement: the schema ignores it). */
@@ -64,6 +79,7 @@ export const readableDefaults: WizardValues = {
   drop: { max: "60 mV" },
   load: { model: "constant-current" },
   readout: { kind: "adc", bits: 12, counts: 2000, fullScale: "2.5 V", sampleRateHz: "1 kHz" },
+  calibration: "none",
   resolution: { countsAtMin: 10 },
   accuracy: { percent: "2" },
   temperature: { min: "0 °C", max: "70 °C" },
@@ -102,6 +118,7 @@ export const readableDefaults: WizardValues = {
     swingLow: "10 mV",
     swingHigh: "50 mV",
     cmrrDb: 120,
+    reference: { tolerance: "0.2 %", tempco: "25 ppm/K" },
   },
   limit: 200,
   inputFilterOn: false,

@@ -4,6 +4,7 @@
 import { formatSI } from "@/lib/design/format";
 import type { Requirement } from "@/lib/design/requirement";
 import { readableDefaults, type WizardValues } from "./form-values";
+import { defaultZeroLevelV, largestMagnitude, outputWindow } from "@/lib/design/bidirectional";
 
 const exact = (x: number, unit: string) => formatSI(x, unit, 12);
 const plain = (x: number) => String(Number(x.toPrecision(12)));
@@ -37,9 +38,42 @@ function withoutShown(req: Requirement): Record<string, unknown> {
   return copy;
 }
 
+/** The readout's own error as typed, only the figures the saved requirement states. */
+function readoutErrorValues(r: Requirement["readout"]) {
+  if (r.kind === "meter") {
+    const acc = r.accuracy;
+    if (!acc) return {};
+    return {
+      accuracy: {
+        ...(acc.percentOfReading !== undefined ? { percentOfReading: percent(acc.percentOfReading) } : {}),
+        ...(acc.digits !== undefined ? { digits: acc.digits } : {}),
+      },
+    };
+  }
+  return {
+    ...(r.reference
+      ? {
+          reference: {
+            ...(r.reference.tolerance !== undefined ? { tolerance: percent(r.reference.tolerance) } : {}),
+            ...(r.reference.tempco !== undefined ? { tempco: ppm(r.reference.tempco) } : {}),
+          },
+        }
+      : {}),
+    ...(r.offsetLsb !== undefined ? { offsetLsb: r.offsetLsb } : {}),
+    ...(r.gainError !== undefined ? { gainError: percent(r.gainError) } : {}),
+    ...(r.inlLsb !== undefined ? { inlLsb: r.inlLsb } : {}),
+  };
+}
+
 export function revisionStart(req: Requirement): RevisionStart {
   const a = req.amplifier;
   const share = req.drop.fraction !== undefined;
+  // Defaults that follow the span (a signed span's band is a magnitude; its zero level is placed).
+  const signed = req.current.min < 0;
+  const top = largestMagnitude(req.current);
+  const bandMinDefault = signed ? 0.1 * top : Math.max(req.current.min, 0.1 * req.current.max);
+  const bandMaxDefault = signed ? top : req.current.max;
+  const zeroDefault = defaultZeroLevelV(req.current, outputWindow(a, req.readout.fullScale));
   const values: WizardValues = {
     current: {
       min: exact(req.current.min, "A"),
@@ -59,16 +93,23 @@ export function revisionStart(req: Requirement): RevisionStart {
             bits: req.readout.bits,
             fullScale: exact(req.readout.fullScale, "V"),
             sampleRateHz: exact(req.readout.sampleRateHz, "Hz"),
+            ...readoutErrorValues(req.readout),
           }
-        : { kind: "meter", counts: req.readout.counts, fullScale: exact(req.readout.fullScale, "V") },
+        : {
+            kind: "meter",
+            counts: req.readout.counts,
+            fullScale: exact(req.readout.fullScale, "V"),
+            ...readoutErrorValues(req.readout),
+          },
+    calibration: req.calibration,
     resolution: { countsAtMin: req.resolution.countsAtMin },
     accuracy: {
       percent: plain(req.accuracy.percent),
       // A band left at its default follows the span; only a band the designer set is written out.
-      ...(Math.abs(req.accuracy.bandMin - Math.max(req.current.min, 0.1 * req.current.max)) > 1e-12 * req.current.max
+      ...(Math.abs(req.accuracy.bandMin - bandMinDefault) > 1e-12 * top
         ? { bandMin: exact(req.accuracy.bandMin, "A") }
         : {}),
-      ...(Math.abs(req.accuracy.bandMax - req.current.max) > 1e-12 * req.current.max
+      ...(Math.abs(req.accuracy.bandMax - bandMaxDefault) > 1e-12 * top
         ? { bandMax: exact(req.accuracy.bandMax, "A") }
         : {}),
     },
@@ -116,6 +157,11 @@ export function revisionStart(req: Requirement): RevisionStart {
       swingLow: exact(a.swingLow, "V"),
       swingHigh: exact(a.swingHigh, "V"),
       cmrrDb: a.cmrrDb,
+      reference: {
+        ...(Math.abs(a.reference.voltage - zeroDefault) > 1e-12 ? { voltage: exact(a.reference.voltage, "V") } : {}),
+        tolerance: percent(a.reference.tolerance),
+        tempco: ppm(a.reference.tempco),
+      },
     },
     limit: req.limit,
     inputFilterOn: req.inputFilter !== null,

@@ -14,6 +14,8 @@ type Bound = {
   min: number;
   max: number;
   get: (r: Requirement) => number | undefined;
+  /** A signed quantity (a bidirectional span's currents): the bounds hold for its magnitude. */
+  signed?: boolean;
 };
 
 const bounds: Bound[] = [
@@ -25,6 +27,7 @@ const bounds: Bound[] = [
     min: 1e-12,
     max: 1e4,
     get: (r) => r.current.min,
+    signed: true,
   },
   {
     path: "current.max",
@@ -43,6 +46,7 @@ const bounds: Bound[] = [
     min: 1e-12,
     max: 1e4,
     get: (r) => r.current.typical,
+    signed: true,
   },
   {
     path: "supply.voltage",
@@ -142,12 +146,19 @@ function message(b: Bound, v: number): string {
   return `${b.label}: ${plainly(v, b.unit)} is outside the range this workbench designs for (${lo} to ${plainly(b.max, b.unit)})`;
 }
 
+function outside(b: Bound, v: number): boolean {
+  const x = b.signed ? Math.abs(v) : v;
+  // A signed field's zero is the schema's to refuse, with its own words.
+  if (b.signed && x === 0) return false;
+  return x < b.min || x > b.max;
+}
+
 /** A plain range message per field whose value lies outside the working range. */
 export function outOfRange(req: Requirement): FieldErrors {
   const out: FieldErrors = {};
   for (const b of bounds) {
     const v = b.get(req);
-    if (v !== undefined && (v < b.min || v > b.max)) out[b.path] = [message(b, v)];
+    if (v !== undefined && outside(b, v)) out[b.path] = [message(b, v)];
   }
   return out;
 }
@@ -160,7 +171,7 @@ export function outOfRangeTyped(values: unknown): FieldErrors {
     for (const k of b.path.split(".")) node = (node as Record<string, unknown> | undefined)?.[k];
     if (typeof node !== "string" && typeof node !== "number") continue;
     const r = parseQuantity(node, b.dim);
-    if (r.ok && (r.value < b.min || r.value > b.max)) out[b.path] = [message(b, r.value)];
+    if (r.ok && outside(b, r.value)) out[b.path] = [message(b, r.value)];
   }
   return out;
 }

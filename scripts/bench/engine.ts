@@ -15,7 +15,16 @@ export const benchRequirement: RequirementInput = {
   current: { min: "20 mA", max: "2 A" },
   supply: { voltage: "12 V", side: "low" },
   drop: { max: "100 mV" },
-  readout: { kind: "adc", bits: 16, fullScale: "2.5 V" },
+  // The converter's own error stated, so that its terms are in the inner loop (issue 14).
+  readout: {
+    kind: "adc",
+    bits: 16,
+    fullScale: "2.5 V",
+    reference: { tolerance: "0.1 %", tempco: "20 ppm/K" },
+    offsetLsb: 2,
+    gainError: "0.05 %",
+    inlLsb: 1,
+  },
   resolution: { countsAtMin: 10 },
   amplifier: { gains: { series: "E12", min: 5, max: 200 } },
   // Issue 14's front-end terms in the inner loop: an input filter, 2-terminal pads, thermal EMF.
@@ -88,8 +97,11 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
       iOp = disc < 0 ? NaN : (m.vBus * m.iMax) / ((m.vBus + Math.sqrt(disc)) / 2);
     }
     const dropFails =
-      !(burden <= m.dropMax * slack) || m.iMax * path > m.dropMax * slack || m.vBus - burden < m.loadMin / slack;
-    const iHeat = Number.isNaN(iOp) ? m.iMax : iOp;
+      !(burden <= m.dropMax * slack) ||
+      m.iMax * path > m.dropMax * slack ||
+      m.iNeg * path > m.dropMax * slack ||
+      m.vBus - burden < m.loadMin / slack;
+    const iHeat = Math.max(Number.isNaN(iOp) ? m.iMax : iOp, m.iNeg);
     const power = iHeat * iHeat * R;
     let rating = NaN;
     if (m.ambientDerate > 0) {
@@ -108,12 +120,17 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
     const vLo = m.high ? m.vBus - b : 0;
     const vHi = m.high ? m.vBus : b;
     const offsetBase = (m.vosWorst + m.fe.filterBiasV + m.fe.thermalEmfV) / R + m.ib;
+    const accOffsetBase =
+      (m.accOffKeep * (m.vosRef + m.fe.filterBiasV) + (m.vosWorst - m.vosRef) + m.fe.thermalEmfV) / R +
+      m.accOffKeep * m.ib;
     const noisePerR = Math.sqrt(m.en2 + m.fourKT * R) / R;
     const heat = m.alphaR * R * theta;
     const gainConst = m.gainConst + m.fe.padOhmsWorst / R;
-    const gainLo = gainConst + heat * m.bandLo * m.bandLo;
-    const gainHi = gainConst + heat * m.bandHi * m.bandHi;
-    const gainMin = gainConst + heat * m.iMin * m.iMin;
+    const accGain =
+      m.accGainConst + m.accEpsKeep * m.fe.filterLoading + (m.accEpsKeep * m.fe.padOhms + m.fe.padOhmsWorst - m.fe.padOhms) / R;
+    const gainLo = accGain + heat * m.bandLo * m.bandLo;
+    const gainHi = accGain + heat * m.bandHi * m.bandHi;
+    const gainMin = accGain + heat * m.iMin * m.iMin;
     for (let j = 0; j < nG; j++) {
       const G = gains[j] as number;
       const rg = R * G;
@@ -123,20 +140,26 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
       if ((m.topology === 2 && m.high) || k * vHi > m.cmMax * slack || k * vLo < m.cmMin / slack) bits |= 2;
       const offA = offsetBase + (cmErr[j] as number) / R;
       const noiseRms = noisePerR * (sqrtNbw[j] as number);
-      const outWorst = (iOp + iOp * (gainConst + eps + heat * iOp * iOp) + offA + m.crest * noiseRms) * rg;
+      const outWorst =
+        (iOp * (1 + gainConst + heat * iOp * iOp + eps) + offA + m.crest * noiseRms) * rg + m.vRef + m.refErrV;
       if (outWorst > m.outCeil * slack) bits |= 4;
+      const gNeg = 1 + gainConst + heat * m.iNeg * m.iNeg;
+      const outLow = m.vRef - m.refErrV - (m.iNeg * (gNeg + eps) + offA + m.crest * noiseRms) * rg;
+      if (m.signed && outLow < m.swingLow / slack) bits |= 4;
       const step = Math.max(m.lsbV / rg, noiseRms);
       if (m.iMin < (m.countsAtMin / slack) * step) bits |= 8;
       if (Number.isNaN(rating) || hot) bits |= 16;
       if ((bw[j] as number) < m.bwReq / slack) bits |= 32;
-      const fixedA = offA + m.lsbV / (2 * rg) + m.crest * noiseRms;
-      const lo = gainLo + eps + fixedA / m.bandLo;
-      const hi = gainHi + eps + fixedA / m.bandHi;
+      const accOffA = accOffsetBase + (m.accOffKeep * (cmErr[j] as number)) / R;
+      const fixedA = accOffA + m.accOutV / rg + m.crest * noiseRms;
+      const epsAcc = m.accEpsKeep * eps;
+      const lo = gainLo + epsAcc + fixedA / m.bandLo;
+      const hi = gainHi + epsAcc + fixedA / m.bandHi;
       if (lo > m.accRatio * slack || hi > m.accRatio * slack) bits |= 64;
-      if (m.swingLow / rg + offA > m.iMin * slack) bits |= 128;
+      if ((m.deadFloorV + m.refErrV) / rg + offA > m.iMin * slack) bits |= 128;
       const p = i * nG + j;
       mask[p] = bits;
-      errMin[p] = gainMin + eps + fixedA / m.iMin;
+      errMin[p] = gainMin + epsAcc + fixedA / m.iMin;
       if (bits === 0) feasible++;
       else {
         const kk = 31 - Math.clz32(bits & -bits);

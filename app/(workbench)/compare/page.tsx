@@ -5,6 +5,7 @@ import { CompareTable } from "@/components/compare/compare-table";
 import { EmptyState } from "@/components/ui/panel";
 import { getDesignView } from "@/db/queries/designs";
 import { errorCurve, loadCurve, planCurve } from "@/lib/design";
+import { curveByMagnitude } from "@/lib/design/error-budget";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
 import { designViewerFor, type DesignView } from "@/lib/design-view";
@@ -51,9 +52,11 @@ export default async function ComparePage({
   const errorSeries: CurveSeries[] = designs.map((d) => ({
     key: d.id,
     label: d.name,
-    points: (d.kind === "plan" ? planCurve(d.requirement, d.plan, 60) : errorCurve(d.requirement, d.choice, 60)).map(
-      (p) => ({ x: p.currentA, y: p.worstPercent }),
-    ),
+    // By magnitude: a bidirectional design's error is the same either way.
+    points: (d.kind === "plan"
+      ? planCurve(d.requirement, d.plan, 60)
+      : curveByMagnitude(errorCurve(d.requirement, d.choice, 60))
+    ).map((p) => ({ x: p.currentA, y: p.worstPercent })),
   }));
   const burdenSeries: CurveSeries[] = designs.map((d) => ({
     key: d.id,

@@ -1,0 +1,54 @@
+// Build-sheet words for issue 14's parts: the readout's own error, the calibration the design
+// counts on, and a bidirectional design's zero-current reference (the engine has the figures).
+import { calibrationRemoves, readoutErrorStated } from "@/lib/design/readout-error";
+import type { Requirement } from "@/lib/design";
+import type { Part } from "./parts";
+import * as f from "./format";
+
+/** The readout's stated error, or that none was stated (an ideal readout counted). */
+export function readoutErrorText(req: Requirement): string {
+  const r = req.readout;
+  if (!readoutErrorStated(r)) return "its own error not stated: counted as ideal (half a step)";
+  if (r.kind === "meter") {
+    const a = r.accuracy ?? {};
+    return `accuracy ±(${f.fraction(a.percentOfReading ?? 0)} of reading + ${a.digits ?? 0.5} digits)`;
+  }
+  return [
+    `reference ±${f.fraction(r.reference?.tolerance ?? 0)}, ${f.ppmPerK(r.reference?.tempco ?? 0)}`,
+    `offset ±${r.offsetLsb ?? 0} LSB`,
+    `gain error ±${f.fraction(r.gainError ?? 0)}`,
+    `INL ±${r.inlLsb ?? 0} LSB`,
+  ].join("; ");
+}
+
+/** The calibration row of the requirement table. */
+export function calibrationText(req: Requirement): string {
+  const name = {
+    none: "None",
+    "one-point": "One point, at zero current",
+    "two-point": "Two points, zero and near full scale",
+  }[req.calibration];
+  return `${name}. Takes out: ${calibrationRemoves(req.calibration)}`;
+}
+
+/** The zero-current reference feeding the amplifier's reference input, when the design has one. */
+export function zeroLevelParts(req: Requirement): Part[] {
+  const ref = req.amplifier.reference;
+  if (!(ref.voltage > 0)) return [];
+  return [
+    {
+      designator: "U2",
+      part: "Zero-current reference for U1's reference input (a voltage reference, or a divider from one, buffered)",
+      value: f.volts(ref.voltage),
+      valueSI: ref.voltage,
+      unit: "V",
+      code: null,
+      tolerance: `±${f.fraction(ref.tolerance)}`,
+      tempco: `${f.ppmPerK(ref.tempco)} or better`,
+      rating: "—",
+      notes:
+        `The output sits here at zero current and swings both ways (${f.amps(req.current.min)} to ${f.amps(req.current.max)}). ` +
+        "Drive the reference input from a low impedance: a resistor in series with it upsets the amplifier's gain and common-mode rejection (common practice, no source).",
+    },
+  ];
+}
