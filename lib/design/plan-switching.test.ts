@@ -7,6 +7,7 @@ import {
   type PlanProfileDesign,
 } from "./plan-switching";
 import { req } from "./test-helpers";
+import { parseRequirement } from "./requirement";
 
 // A two-range plan with round numbers, so every figure below can be counted by hand:
 // range 0 is 10 Ω + 0.1 Ω of switch up to 1 mA, range 1 is 0.1 Ω + 0.1 Ω down to 0.8 mA;
@@ -158,5 +159,21 @@ describe("planProfileDesign", () => {
     // The default switch delay (DEFAULTS.md, from memory) and on-resistance (a tenth of the drop at 180 mA).
     expect(d.switchDelayS).toBe(100e-6);
     expect(d.ranges[0]!.switchOhms).toBeCloseTo(0.006 / 0.18, 12);
+  });
+});
+
+describe("rangeSwitch.delay (a requirement field)", () => {
+  const base = { current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" } };
+  it("reads a time with its prefix, and defaults to 100 µs (DEFAULTS.md, from memory)", () => {
+    expect(req({ ...base, rangeSwitch: { delay: "2 ms" } }).rangeSwitch.delay).toBeCloseTo(2e-3, 15);
+    expect(req(base).rangeSwitch.delay).toBe(100e-6);
+  });
+  it("refuses a negative delay or a quantity that is not a time, on the field's path", () => {
+    const neg = parseRequirement({ ...base, rangeSwitch: { delay: "-1 ms" } });
+    expect(neg.ok).toBe(false);
+    if (!neg.ok) expect(neg.fieldErrors["rangeSwitch.delay"]?.[0]).toMatch(/Range switch delay cannot be negative/);
+    const volts = parseRequirement({ ...base, rangeSwitch: { delay: "5 V" } });
+    expect(volts.ok).toBe(false);
+    if (!volts.ok) expect(volts.fieldErrors["rangeSwitch.delay"]?.[0]).toMatch(/not a time/);
   });
 });
