@@ -1,38 +1,10 @@
 import { describe, expect, it } from "vitest";
 import { summarizePlanProfile, type PlanProfileDesign } from "@/lib/design/plan-switching";
+import { twoRangeDesign } from "@/lib/design/test-helpers";
 import { decimateMinMax } from "./decimate";
 import { planSeriesOverlay } from "./plan-series";
 
-// Two ranges with round numbers: 10 Ω + 0.1 Ω switch up to 1 mA, 0.1 Ω + 0.1 Ω above; 3 V supply.
-const d: PlanProfileDesign = {
-  supplyV: 3,
-  fullScaleV: 2.5,
-  dropMaxV: 0.06,
-  switchDelayS: 0,
-  switchPoints: [{ upA: 1e-3, downA: 0.8e-3 }],
-  ranges: [
-    {
-      minA: 1e-6,
-      maxA: 1e-3,
-      shuntOhms: 10,
-      gain: 100,
-      switchOhms: 0.1,
-      lsbA: 1e-7,
-      resolvableStepA: 0.2e-3,
-      clipCurrentA: 2.5e-3,
-    },
-    {
-      minA: 0.8e-3,
-      maxA: 0.1,
-      shuntOhms: 0.1,
-      gain: 100,
-      switchOhms: 0.1,
-      lsbA: 1e-4,
-      resolvableStepA: 1e-3,
-      clipCurrentA: 0.25,
-    },
-  ],
-};
+const d: PlanProfileDesign = twoRangeDesign(0);
 
 describe("planSeriesOverlay", () => {
   const t = Float64Array.from([0, 1, 2, 3, 4, 5], (ms) => ms * 1e-3);
