@@ -98,45 +98,78 @@ function RangeFigures({ design }: { design: PlanDesignView }) {
   const { ranges } = design.metrics;
   const groups = figureRows(design.requirement, ranges.length - 1);
   return (
-    <div className="overflow-x-auto">
-      <table className="w-full text-left text-xs num" data-testid="plan-figures">
-        <thead className="text-ink-muted">
-          <tr className="border-b border-line">
-            <th className="py-1 pr-2 font-medium">Figure</th>
-            {ranges.map((_r, k) => (
-              <th key={k} className="py-1 pl-2 text-right font-medium">
-                Range {k + 1}
-              </th>
+    <>
+      {/* A phone: one block per range, so no range hides past the edge. */}
+      <div className="flex flex-col gap-3 sm:hidden" data-testid="plan-figures-stacked">
+        {ranges.map((r, k) => (
+          <section key={k} className="rounded border border-line px-3 py-2" aria-label={`Range ${k + 1}`}>
+            <h3 className="text-xs font-semibold">
+              Range {k + 1}: {formatSI(r.minA, "A")} to {formatSI(r.maxA, "A")}
+            </h3>
+            {groups.map((g) => (
+              <div key={g.title} className="mt-1 text-xs num">
+                <p className="pt-1 text-2xs font-semibold tracking-wide text-ink-faint">{g.title}</p>
+                <dl>
+                  {g.rows
+                    .filter((row) => row.label !== "Span")
+                    .map((row) => (
+                      <div
+                        key={row.label}
+                        className="flex justify-between gap-3 border-b border-line py-0.5 last:border-0"
+                      >
+                        <dt className="text-ink-muted">
+                          {row.label}
+                          {row.note && <span className="block text-2xs text-ink-faint">{row.note}</span>}
+                        </dt>
+                        <dd className="whitespace-nowrap text-right">{row.value(r, k)}</dd>
+                      </div>
+                    ))}
+                </dl>
+              </div>
             ))}
-          </tr>
-        </thead>
-        {groups.map((g) => (
-          <tbody key={g.title}>
-            <tr>
-              <th
-                colSpan={ranges.length + 1}
-                className="pb-1 pt-3 text-left text-2xs font-semibold tracking-wide text-ink-faint"
-              >
-                {g.title}
-              </th>
-            </tr>
-            {g.rows.map((row) => (
-              <tr key={row.label} className="border-b border-line last:border-0">
-                <td className="py-1 pr-2">
-                  {row.label}
-                  {row.note && <span className="block text-2xs text-ink-faint">{row.note}</span>}
-                </td>
-                {ranges.map((r, k) => (
-                  <td key={k} className="whitespace-nowrap py-1 pl-2 text-right">
-                    {row.value(r, k)}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
+          </section>
         ))}
-      </table>
-    </div>
+      </div>
+      <div className="hidden overflow-x-auto sm:block">
+        <table className="w-full text-left text-xs num" data-testid="plan-figures">
+          <thead className="text-ink-muted">
+            <tr className="border-b border-line">
+              <th className="py-1 pr-2 font-medium">Figure</th>
+              {ranges.map((_r, k) => (
+                <th key={k} className="py-1 pl-2 text-right font-medium">
+                  Range {k + 1}
+                </th>
+              ))}
+            </tr>
+          </thead>
+          {groups.map((g) => (
+            <tbody key={g.title}>
+              <tr>
+                <th
+                  colSpan={ranges.length + 1}
+                  className="pb-1 pt-3 text-left text-2xs font-semibold tracking-wide text-ink-faint"
+                >
+                  {g.title}
+                </th>
+              </tr>
+              {g.rows.map((row) => (
+                <tr key={row.label} className="border-b border-line last:border-0">
+                  <td className="py-1 pr-2">
+                    {row.label}
+                    {row.note && <span className="block text-2xs text-ink-faint">{row.note}</span>}
+                  </td>
+                  {ranges.map((r, k) => (
+                    <td key={k} className="whitespace-nowrap py-1 pl-2 text-right">
+                      {row.value(r, k)}
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          ))}
+        </table>
+      </div>
+    </>
   );
 }
 

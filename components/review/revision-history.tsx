@@ -47,12 +47,20 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
                 <td className="py-1 pr-3 text-xs text-ink-muted">{formatWhen(r.createdAt)}</td>
                 {r.kind === "plan" ? (
                   <>
-                    {/* A plan: its shunts and gains, lowest range first. */}
+                    {/* A plan: its shunts and gains, lowest range first, one range a line. */}
                     <td className="py-1 pr-3 text-right" title={`A range plan of ${r.plan.ranges.length} ranges`}>
-                      {r.plan.ranges.map((x) => formatSI(x.shuntOhms, "Ω")).join(" · ")}
+                      {r.plan.ranges.map((x, k) => (
+                        <span key={k} className="block whitespace-nowrap">
+                          {formatSI(x.shuntOhms, "Ω")}
+                        </span>
+                      ))}
                     </td>
                     <td className="py-1 pr-3 text-right">
-                      {r.plan.ranges.map((x) => formatSI(x.gain, "")).join(" · ")}
+                      {r.plan.ranges.map((x, k) => (
+                        <span key={k} className="block whitespace-nowrap">
+                          {formatSI(x.gain, "")}
+                        </span>
+                      ))}
                     </td>
                   </>
                 ) : (

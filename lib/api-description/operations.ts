@@ -286,7 +286,7 @@ export const operations: Operation[] = [
   {
     method: "post",
     path: "/api/designs",
-    summary: "Save a design",
+    summary: "Save a design: one shunt and gain (choice) or a range plan (plan), exactly one",
     access: "design.create",
     body: createDesignSchema,
     ok: json(201, "created", responses.designCreated),
@@ -302,14 +302,14 @@ export const operations: Operation[] = [
   {
     method: "get",
     path: "/api/designs/{id}",
-    summary: "A design with its figures and revisions",
+    summary: "A design with its figures and revisions (a range plan: plan, metrics.ranges, ranges[k].benchCheck)",
     access: "design.read",
     ok: json(200, "the design"),
   },
   {
     method: "patch",
     path: "/api/designs/{id}",
-    summary: "Edit a design: a new revision, or 409 when stale",
+    summary: "Edit a design (name, project, requirement, choice or plan): a new revision, or 409 when stale",
     access: "design.edit",
     body: patchDesignSchema,
     ok: json(200, "{revision}"),
