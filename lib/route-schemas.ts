@@ -51,7 +51,11 @@ export const profileWindowQuery = z.object({
 /** `?offset=0` leaves the amplifier offset out of a netlist. */
 export const netlistQuery = z.object({
   offset: z.enum(["0", "1"], { error: 'offset: expected "0" (leave the offset out) or "1"' }).optional(),
-  // A range plan: one range's deck alone (1-based); left out, every range's deck.
+});
+
+/** A saved design's netlist: as above, and for a range plan one range's deck alone (1-based). */
+export const designNetlistQuery = netlistQuery.extend({
+  // Left out: every range's deck.
   range: z.coerce
     .number({ error: "range: expected a range number such as 1" })
     .int({ error: "range: expected a whole range number such as 1" })

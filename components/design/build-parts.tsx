@@ -54,6 +54,11 @@ export function BuildHeader({
         <a href={`${base}/export`} download className={buttonClass("secondary")} data-testid="download-export">
           Design file (JSON)
         </a>
+        {extra.map((l) => (
+          <a key={l.href} href={l.href} download className={buttonClass("secondary")} data-testid={l.testId}>
+            {l.label}
+          </a>
+        ))}
       </nav>
     </header>
   );

@@ -56,7 +56,14 @@ export function RangeBands({
               style={{ color: "rgb(255 255 255 / 0.7)" }}
             />
             {w >= 22 && (
-              <text x={a + w / 2} y={top + 10} textAnchor="middle" className="fill-ink text-[9px] font-semibold">
+              // A light halo keeps the label readable over the pattern.
+              <text
+                x={a + w / 2}
+                y={top + 10}
+                textAnchor="middle"
+                className="fill-ink text-[9px] font-semibold"
+                style={{ stroke: "rgb(255 255 255 / 0.85)", strokeWidth: 3, paintOrder: "stroke" }}
+              >
                 {`R${s.range + 1}`}
               </text>
             )}

@@ -6,42 +6,11 @@ import {
   summarizePlanProfile,
   type PlanProfileDesign,
 } from "./plan-switching";
-import { req } from "./test-helpers";
 
-// A two-range plan with round numbers, so every figure below can be counted by hand:
-// range 0 is 10 Ω + 0.1 Ω of switch up to 1 mA, range 1 is 0.1 Ω + 0.1 Ω down to 0.8 mA;
-// switch up above 1 mA, back down below 0.8 mA; 3 V supply, 60 mV allowed drop.
-function design(delayS: number): PlanProfileDesign {
-  return {
-    supplyV: 3,
-    fullScaleV: 2.5,
-    dropMaxV: 0.06,
-    switchDelayS: delayS,
-    switchPoints: [{ upA: 1e-3, downA: 0.8e-3 }],
-    ranges: [
-      {
-        minA: 1e-6,
-        maxA: 1e-3,
-        shuntOhms: 10,
-        gain: 100,
-        switchOhms: 0.1,
-        lsbA: 1e-7,
-        resolvableStepA: 0.2e-3,
-        clipCurrentA: 2.5e-3,
-      },
-      {
-        minA: 0.8e-3,
-        maxA: 0.1,
-        shuntOhms: 0.1,
-        gain: 100,
-        switchOhms: 0.1,
-        lsbA: 1e-4,
-        resolvableStepA: 1e-3,
-        clipCurrentA: 0.25,
-      },
-    ],
-  };
-}
+import { parseRequirement } from "./requirement";
+import { req, twoRangeDesign } from "./test-helpers";
+
+const design = twoRangeDesign;
 
 // One sample per millisecond: asleep, a burst to 50 mA, a tail at 0.9 mA (inside the hysteresis),
 // a drop to 0.5 mA (below the switch-down point), asleep again.
@@ -158,5 +127,21 @@ describe("planProfileDesign", () => {
     // The default switch delay (DEFAULTS.md, from memory) and on-resistance (a tenth of the drop at 180 mA).
     expect(d.switchDelayS).toBe(100e-6);
     expect(d.ranges[0]!.switchOhms).toBeCloseTo(0.006 / 0.18, 12);
+  });
+});
+
+describe("rangeSwitch.delay (a requirement field)", () => {
+  const base = { current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" } };
+  it("reads a time with its prefix, and defaults to 100 µs (DEFAULTS.md, from memory)", () => {
+    expect(req({ ...base, rangeSwitch: { delay: "2 ms" } }).rangeSwitch.delay).toBeCloseTo(2e-3, 15);
+    expect(req(base).rangeSwitch.delay).toBe(100e-6);
+  });
+  it("refuses a negative delay or a quantity that is not a time, on the field's path", () => {
+    const neg = parseRequirement({ ...base, rangeSwitch: { delay: "-1 ms" } });
+    expect(neg.ok).toBe(false);
+    if (!neg.ok) expect(neg.fieldErrors["rangeSwitch.delay"]?.[0]).toMatch(/Range switch delay cannot be negative/);
+    const volts = parseRequirement({ ...base, rangeSwitch: { delay: "5 V" } });
+    expect(volts.ok).toBe(false);
+    if (!volts.ok) expect(volts.fieldErrors["rangeSwitch.delay"]?.[0]).toMatch(/not a time/);
   });
 });

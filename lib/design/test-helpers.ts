@@ -1,5 +1,6 @@
 // Test-only helper: parse a requirement or fail loudly.
 import { parseRequirement, type Requirement, type RequirementInput } from "./requirement";
+import type { PlanProfileDesign } from "./plan-switching";
 
 export function req(input: RequirementInput): Requirement {
   const r = parseRequirement(input);
@@ -19,3 +20,37 @@ export const sensorNodeInput: RequirementInput = {
   accuracy: { percent: 1, bandMin: "1 mA" },
   temperature: { min: "-20 °C", max: "60 °C" },
 };
+// A two-range plan with round numbers, so every figure below can be counted by hand:
+// range 0 is 10 Ω + 0.1 Ω of switch up to 1 mA, range 1 is 0.1 Ω + 0.1 Ω down to 0.8 mA;
+// switch up above 1 mA, back down below 0.8 mA; 3 V supply, 60 mV allowed drop.
+export function twoRangeDesign(delayS: number): PlanProfileDesign {
+  return {
+    supplyV: 3,
+    fullScaleV: 2.5,
+    dropMaxV: 0.06,
+    switchDelayS: delayS,
+    switchPoints: [{ upA: 1e-3, downA: 0.8e-3 }],
+    ranges: [
+      {
+        minA: 1e-6,
+        maxA: 1e-3,
+        shuntOhms: 10,
+        gain: 100,
+        switchOhms: 0.1,
+        lsbA: 1e-7,
+        resolvableStepA: 0.2e-3,
+        clipCurrentA: 2.5e-3,
+      },
+      {
+        minA: 0.8e-3,
+        maxA: 0.1,
+        shuntOhms: 0.1,
+        gain: 100,
+        switchOhms: 0.1,
+        lsbA: 1e-4,
+        resolvableStepA: 1e-3,
+        clipCurrentA: 0.25,
+      },
+    ],
+  };
+}

@@ -65,7 +65,7 @@ for (const viewport of [
     await expect(page.getByTestId("plan-bench-2")).toContainText("Switch point 2, switching up");
     await expect(page.getByTestId("caution-range-switch")).toContainText("make-before-break");
     await expect(page.getByTestId("caution-codes")).toBeVisible();
-    await expect(page.getByTestId("plan-build-pending")).toContainText("not available for a range plan yet");
+    await expect(page.getByTestId("build-sheet-panel")).toContainText("Range switch, range 1");
     // Rendered text, not the source: the panel titles as CSS shows them.
     const titles = await page.locator("section h2").allInnerTexts();
     expect(titles.join(" | ")).toMatch(/Range plan: 3 ranges, each on its own span/i);

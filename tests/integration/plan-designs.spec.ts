@@ -176,7 +176,8 @@ test("a plan design goes through review: submit, approve", async () => {
 });
 
 test("the parts of the build that read one pair say so with 422, never a 500", async () => {
-  for (const path of ["build-sheet", "netlist", "parts.csv", "units"]) {
+  // The build sheet, netlist, parts list and profiles read plans now (tests/integration/plan-build.spec.ts).
+  for (const path of ["units"]) {
     const res = await designer.get(`/api/designs/${id}/${path}`);
     expect(res.status(), path).toBe(422);
     expect((await res.json()).message).toMatch(/not available for a range plan yet/);

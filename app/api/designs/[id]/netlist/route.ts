@@ -6,10 +6,10 @@ import { attachment, designNetlist, exportFileName } from "@/lib/build-sheet/exp
 import { designViewFor } from "@/lib/saved-designs/access";
 import { planDesignNetlist } from "@/lib/build-sheet/plan-exports";
 import { HttpError } from "@/lib/http";
-import { netlistQuery } from "@/lib/route-schemas";
+import { designNetlistQuery } from "@/lib/route-schemas";
 
 export const GET = apiRoute(
-  { action: "design.read", doing: "download netlists", query: netlistQuery },
+  { action: "design.read", doing: "download netlists", query: designNetlistQuery },
   async ({ caller, params, query }) => {
     const view = await designViewFor(caller, params.id ?? "");
     const includeOffset = query.offset !== "0";
