@@ -117,7 +117,10 @@ function RangeFigures({ design }: { design: PlanDesignView }) {
                         key={row.label}
                         className="flex justify-between gap-3 border-b border-line py-0.5 last:border-0"
                       >
-                        <dt className="text-ink-muted">{row.label}</dt>
+                        <dt className="text-ink-muted">
+                          {row.label}
+                          {row.note && <span className="block text-2xs text-ink-faint">{row.note}</span>}
+                        </dt>
                         <dd className="whitespace-nowrap text-right">{row.value(r, k)}</dd>
                       </div>
                     ))}

@@ -4,6 +4,7 @@
 import { formatSI } from "@/lib/design/format";
 import type { DesignKind } from "@/lib/design/design-kind";
 import type { PlanMetrics } from "@/lib/design/plan-evaluation";
+import type { Requirement } from "@/lib/design/requirement";
 import type { FieldInfo } from "./figures";
 
 /**
@@ -26,45 +27,64 @@ export function planWholeSpanFigures(metrics: PlanMetrics): Record<string, numbe
 
 export type PlanRow = { key: string; info: FieldInfo; values: (string | number | null)[] };
 
-/** Rows describing each design's ranges (a single pair is one range): the pair, span and drop of each. */
-export function planRows(designs: DesignKind[]): PlanRow[] {
-  const plans = designs.map((d) => (d.kind === "plan" ? d.metrics : null));
-  const most = Math.max(0, ...plans.map((p) => p?.ranges.length ?? 0));
-  const rows: PlanRow[] = [
+type RangeCells = { pair: string; worstBurdenV: number; countsAtBottom: number; errorAtMinPercent: number };
+
+const pairText = (R: number, G: number, lo: number, hi: number) =>
+  `${formatSI(R, "Ω")} × ${Number(G.toPrecision(4))}, ${formatSI(lo, "A")} to ${formatSI(hi, "A")}`;
+
+/** Each design's ranges; a single pair is one range over the whole span (no switch in series). */
+function rangesOf(d: { requirement: Requirement } & DesignKind): RangeCells[] {
+  if (d.kind === "plan")
+    return d.metrics.ranges.map((r) => ({
+      pair: pairText(r.shuntOhms, r.gain, r.minA, r.maxA),
+      worstBurdenV: r.worstBurdenV,
+      countsAtBottom: r.countsAtBottom,
+      errorAtMinPercent: r.errorAtMinPercent,
+    }));
+  const m = d.metrics;
+  return [
     {
-      key: "plan.rangeCount",
-      info: { label: "Ranges", kind: "count" },
-      values: plans.map((p) => p?.ranges.length ?? 1),
+      pair: pairText(m.shuntOhms, m.gain, d.requirement.current.min, d.requirement.current.max),
+      worstBurdenV: m.burdenV,
+      countsAtBottom: m.countsAtMin,
+      errorAtMinPercent: m.errorAtMinPercent,
     },
   ];
+}
+
+/** Rows describing each design's ranges (a single pair is one range): the pair, span, drop and bottom of each. */
+export function planRows(designs: ({ requirement: Requirement } & DesignKind)[]): PlanRow[] {
+  const all = designs.map(rangesOf);
+  const most = Math.max(0, ...all.map((r) => r.length));
+  const rows: PlanRow[] = [
+    { key: "plan.rangeCount", info: { label: "Ranges", kind: "count" }, values: all.map((r) => r.length) },
+  ];
+  const cell = <K extends keyof RangeCells>(k: number, key: K) => all.map((r) => r[k]?.[key] ?? null);
   for (let k = 0; k < most; k++) {
-    rows.push({
-      key: `plan.ranges.${k}`,
-      info: { label: `Range ${k + 1}: pair and span`, kind: "text" },
-      values: plans.map((p) => {
-        const r = p?.ranges[k];
-        return r
-          ? `${formatSI(r.shuntOhms, "Ω")} × ${Number(r.gain.toPrecision(4))}, ${formatSI(r.minA, "A")} to ${formatSI(r.maxA, "A")}`
-          : null;
-      }),
-    });
-    rows.push({
-      key: `plan.ranges.${k}.worstBurdenV`,
-      info: { label: `Range ${k + 1}: worst drop, switch included`, kind: "si", unit: "V" },
-      values: plans.map((p) => p?.ranges[k]?.worstBurdenV ?? null),
-    });
-    rows.push({
-      key: `plan.ranges.${k}.countsAtBottom`,
-      info: { label: `Range ${k + 1}: steps at its bottom`, kind: "plain" },
-      values: plans.map((p) => p?.ranges[k]?.countsAtBottom ?? null),
-    });
-    rows.push({
-      key: `plan.ranges.${k}.errorAtMinPercent`,
-      info: { label: `Range ${k + 1}: worst-case error at its bottom`, kind: "percent" },
-      values: plans.map((p) => p?.ranges[k]?.errorAtMinPercent ?? null),
-    });
+    rows.push(
+      {
+        key: `plan.ranges.${k}`,
+        info: { label: `Range ${k + 1}: pair and span`, kind: "text" },
+        values: cell(k, "pair"),
+      },
+      {
+        key: `plan.ranges.${k}.worstBurdenV`,
+        info: { label: `Range ${k + 1}: worst drop at its top (switch included)`, kind: "si", unit: "V" },
+        values: cell(k, "worstBurdenV"),
+      },
+      {
+        key: `plan.ranges.${k}.countsAtBottom`,
+        info: { label: `Range ${k + 1}: steps at its bottom`, kind: "plain" },
+        values: cell(k, "countsAtBottom"),
+      },
+      {
+        key: `plan.ranges.${k}.errorAtMinPercent`,
+        info: { label: `Range ${k + 1}: worst-case error at its bottom`, kind: "percent" },
+        values: cell(k, "errorAtMinPercent"),
+      },
+    );
   }
-  if (plans.some((p) => p && p.ranges.length > 1))
+  if (designs.some((d) => d.kind === "plan"))
     rows.push({
       key: "plan.switchPoints",
       info: { label: "Switch points (up above / down below)", kind: "text" },

@@ -102,3 +102,32 @@ test("a moved switch point shows in the revision diff in words", async ({ page }
   await diff.scrollIntoViewIfNeeded();
   await page.screenshot({ path: `${shots}/plan-design-diff.png`, fullPage: true });
 });
+
+test("a plan compares beside a single pair: per-range rows, and no 'best' on figures it does not share", async ({
+  page,
+}) => {
+  const reviewer = await apiAs("reviewer");
+  const find = async (q: string) =>
+    ((await (await reviewer.get(`/api/designs?q=${encodeURIComponent(q)}`)).json()) as { designs: { id: string }[] })
+      .designs[0]!.id;
+  const planId = await find(planName);
+  const pairId = await find("Logger radio-burst range");
+  await reviewer.dispose();
+  for (const viewport of [
+    { width: 1280, height: 900 },
+    { width: 390, height: 844 },
+  ]) {
+    await page.setViewportSize(viewport);
+    if (viewport.width === 1280) await signInPage(page, "reviewer");
+    await page.goto(`/compare?ids=${planId},${pairId}`);
+    await expect(page.getByTestId("compare-column")).toHaveCount(2);
+    await expect(page.getByTestId("row-plan.rangeCount").locator("td")).toHaveText(["3", "1"]);
+    await expect(page.getByTestId("row-plan.ranges.0").locator("td").first()).toContainText("3 µA to");
+    // Figures the plan does not take at the pair's points stay unranked ("—" for the plan).
+    await expect(page.getByTestId("row-dissipationW").locator("td").first()).toHaveText("—");
+    await expect(page.getByTestId("row-dissipationW").locator("[data-best]")).toHaveCount(0);
+    // The two designs have different spans: the drop at the maximum current is read against each one's limit.
+    await expect(page.getByTestId("compare-error-chart").locator("path[stroke]")).not.toHaveCount(0);
+    await page.screenshot({ path: `${shots}/plan-compare-${viewport.width}.png`, fullPage: true });
+  }
+});
