@@ -53,6 +53,16 @@ export const netlistQuery = z.object({
   offset: z.enum(["0", "1"], { error: 'offset: expected "0" (leave the offset out) or "1"' }).optional(),
 });
 
+/** A saved design's netlist: as above, and for a range plan one range's deck alone (1-based). */
+export const designNetlistQuery = netlistQuery.extend({
+  // Left out: every range's deck.
+  range: z.coerce
+    .number({ error: "range: expected a range number such as 1" })
+    .int({ error: "range: expected a whole range number such as 1" })
+    .min(1, { error: "range: ranges are numbered from 1" })
+    .optional(),
+});
+
 const positiveFinite = (label: string) =>
   z
     .number({ error: `${label}: expected a number in SI units` })

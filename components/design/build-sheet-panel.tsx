@@ -3,8 +3,7 @@ import { benchHowTo, benchRows, cautions } from "@/lib/build-sheet/sheet-data";
 import { matchLibraryParts, nameLibraryParts, type LibraryParts } from "@/lib/build-sheet/library-parts";
 import { partsList } from "@/lib/build-sheet/parts";
 import { evaluateCandidate } from "@/lib/design/candidate";
-import { Badge } from "@/components/ui/badge";
-import { buttonClass } from "@/components/ui/button";
+import { BuildHeader, PartsTable } from "@/components/design/build-parts";
 
 /**
  * What a maker builds and checks from: the downloads (build sheet PDF, SPICE netlist, parts CSV,
@@ -21,8 +20,6 @@ export function BuildSheetPanel({
   /** The team library, to name the parts the pair came from. */
   library?: LibraryParts;
 }) {
-  const base = `/api/designs/${design.id}`;
-  const approved = design.status === "approved";
   const maker = viewer.leadsWithBuildSheet;
   const metrics = evaluateCandidate(design.requirement, design.choice);
   const listed = partsList(design.requirement, design.choice, metrics);
@@ -38,98 +35,10 @@ export function BuildSheetPanel({
       data-testid="build-sheet-panel"
       className={`rounded-panel border bg-panel ${maker ? "border-copper shadow-sm" : "border-line"}`}
     >
-      <header className="flex flex-wrap items-center justify-between gap-3 border-b border-line px-4 py-3">
-        <div className="min-w-0">
-          <h2
-            id="build-sheet-heading"
-            className={maker ? "text-base font-semibold" : "text-xs font-semibold tracking-wide text-ink-muted"}
-          >
-            Build and bench check
-          </h2>
-          <p className="mt-0.5 text-xs text-ink-muted">
-            {approved ? (
-              <>
-                <Badge tone="good">approved</Badge> Revision {design.revision} is approved: build from this sheet.
-              </>
-            ) : (
-              <>
-                <Badge tone="bad">not approved</Badge> A preview for review: the sheet says “not approved” on every
-                page. Do not build from it.
-              </>
-            )}
-          </p>
-        </div>
-        <nav aria-label="Downloads" className="flex flex-wrap gap-2">
-          <a
-            href={`${base}/build-sheet`}
-            download
-            className={buttonClass("primary")}
-            data-testid="download-build-sheet"
-          >
-            Build sheet (PDF)
-          </a>
-          <a href={`${base}/parts.csv`} download className={buttonClass("secondary")} data-testid="download-parts-csv">
-            Parts list (CSV)
-          </a>
-          <a href={`${base}/netlist`} download className={buttonClass("secondary")} data-testid="download-netlist">
-            SPICE netlist
-          </a>
-          <a href={`${base}/export`} download className={buttonClass("secondary")} data-testid="download-export">
-            Design file (JSON)
-          </a>
-        </nav>
-      </header>
+      <BuildHeader design={design} maker={maker} />
 
       <div className="flex flex-col gap-5 p-4">
-        <div>
-          <h3 className="mb-1.5 text-sm font-semibold">Parts</h3>
-          <div className="overflow-x-auto">
-            <table className="w-full text-left text-sm" data-testid="parts-table">
-              <thead className="border-b border-line text-xs text-ink-muted">
-                <tr>
-                  <th scope="col" className="py-1 pr-3 font-medium">
-                    Ref
-                  </th>
-                  <th scope="col" className="py-1 pr-3 font-medium">
-                    Part
-                  </th>
-                  <th scope="col" className="py-1 pr-3 font-medium">
-                    Value
-                  </th>
-                  <th scope="col" className="py-1 pr-3 font-medium">
-                    Tolerance
-                  </th>
-                  <th scope="col" className="py-1 pr-3 font-medium">
-                    Tempco
-                  </th>
-                  <th scope="col" className="py-1 pr-3 font-medium">
-                    Rating
-                  </th>
-                </tr>
-              </thead>
-              {parts.map((p) => (
-                <tbody key={p.designator} className="border-b border-line align-top">
-                  <tr>
-                    <th scope="row" className="pt-1.5 pr-3 font-semibold">
-                      {p.designator}
-                    </th>
-                    <td className="pt-1.5 pr-3">{p.part}</td>
-                    <td className="pt-1.5 pr-3 font-semibold num whitespace-nowrap">{p.value}</td>
-                    <td className="pt-1.5 pr-3 num">{p.tolerance}</td>
-                    <td className="pt-1.5 pr-3 num">{p.tempco}</td>
-                    <td className="pt-1.5 pr-3 num whitespace-nowrap">{p.rating}</td>
-                  </tr>
-                  <tr>
-                    <td />
-                    <td colSpan={5} className="pb-1.5 pr-3 text-xs text-ink-muted">
-                      {p.notes}
-                    </td>
-                  </tr>
-                </tbody>
-              ))}
-            </table>
-          </div>
-        </div>
+        <PartsTable parts={parts} />
 
         <div>
           <h3 className="mb-1.5 text-sm font-semibold">Bench check</h3>

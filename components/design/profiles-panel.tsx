@@ -9,8 +9,10 @@ import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { formatSI } from "@/lib/design/format";
 import type { DesignView, DesignViewer } from "@/lib/design-view";
-import type { DecimatedSeries } from "@/lib/profile/decimate";
 import type { ProfileSummary } from "@/lib/design/profile";
+import type { PlanProfileRange } from "@/lib/design/plan-switching";
+import type { ChartSeries } from "@/components/profile/profile-chart";
+import { RangeSwatch } from "@/components/profile/range-bands";
 
 type ListItem = {
   id: string;
@@ -29,8 +31,17 @@ type Detail = ListItem & {
   startS: number;
   endS: number;
   current: { revision: number; summary: ProfileSummary };
-  design: { shuntOhms: number; gain: number; supplyV: number; fullScaleV: number; lsbA: number };
-  series: DecimatedSeries;
+  design:
+    | { kind: "pair"; shuntOhms: number; gain: number; supplyV: number; fullScaleV: number; lsbA: number }
+    | {
+        kind: "plan";
+        supplyV: number;
+        fullScaleV: number;
+        lsbA: number;
+        switchDelayS: number;
+        ranges: PlanProfileRange[];
+      };
+  series: ChartSeries;
 };
 
 async function getJson<T>(url: string): Promise<T> {
@@ -252,7 +263,8 @@ function ProfileDetail({
             width={width}
             log={useLog}
             design={{
-              shuntOhms: d.design.shuntOhms,
+              // A plan's load voltage comes with the series; the shunt is not used for it.
+              shuntOhms: d.design.kind === "pair" ? d.design.shuntOhms : 0,
               supplyV: d.design.supplyV,
               lsbA: d.design.lsbA,
               clipCurrentA: d.current.summary.clipCurrentA,
@@ -277,11 +289,20 @@ function ProfileDetail({
             <span className="inline-block size-3 bg-bad/20" /> clipped: output past the readout&apos;s full scale
           </li>
           <li className="flex items-center gap-1.5">
-            <span className="inline-block size-3 bg-warn/15" /> below one readout step ({formatSI(d.design.lsbA, "A")})
+            <span className="inline-block size-3 bg-warn/15" />{" "}
+            {d.design.kind === "plan"
+              ? "below one resolvable step of the range in use"
+              : `below one readout step (${formatSI(d.design.lsbA, "A")})`}
           </li>
+          {d.design.kind === "plan" &&
+            d.design.ranges.map((r, k) => (
+              <li key={`range-${k}`} className="flex items-center gap-1.5" data-testid={`range-key-${k + 1}`}>
+                <RangeSwatch range={k} /> R{k + 1}: read on range {k + 1} ({formatSI(r.minA, "A")} to{" "}
+                {formatSI(r.maxA, "A")}, {formatSI(r.shuntOhms, "Ω")})
+              </li>
+            ))}
           {loadMinV !== undefined &&
-            loadMinV >=
-              d.design.supplyV - 4 * d.series.currentA.reduce((a, b) => Math.max(a, b), 0) * d.design.shuntOhms && (
+            loadMinV >= d.design.supplyV - 4 * (d.design.supplyV - (summary?.minLoadVoltageV ?? d.design.supplyV)) && (
               <li className="flex items-center gap-1.5">
                 <span className="inline-block h-0.5 w-4 border-t border-dashed border-bad" /> required minimum load
                 voltage ({formatSI(loadMinV, "V")})

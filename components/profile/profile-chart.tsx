@@ -6,8 +6,13 @@ import { useRef, useState } from "react";
 import { formatSI } from "@/lib/design/format";
 import { burdenV, loadVoltageV } from "@/lib/design/profile";
 import type { DecimatedSeries } from "@/lib/profile/decimate";
+import type { PlanSeriesOverlay } from "@/lib/profile/plan-series";
+import { RangeBands, RangePatterns } from "./range-bands";
 
 export type ChartDesign = { shuntOhms: number; supplyV: number; lsbA: number; clipCurrentA: number; loadMinV?: number };
+
+/** A range plan's recording: the stretches read on each range and the load voltage at each point. */
+export type ChartSeries = DecimatedSeries & { plan?: Omit<PlanSeriesOverlay, "clipped" | "belowStep"> };
 
 const M = { left: 64, right: 64, top: 12, gap: 34, bottom: 30 };
 const CURRENT_H = 230;
@@ -34,7 +39,7 @@ export function ProfileChart({
   log,
   onZoom,
 }: {
-  series: DecimatedSeries;
+  series: ChartSeries;
   design: ChartDesign;
   width: number;
   log: boolean;
@@ -80,7 +85,13 @@ export function ProfileChart({
   // Load voltage = supply − I·R; the burden I·R reads on the right axis of the same curve.
   const vTop = M.top + CURRENT_H + M.gap;
   const supply = design.supplyV;
-  const maxBurden = Math.max(burdenV(peak, design.shuntOhms), 1e-12);
+  // A plan's load voltage comes with the series (through the path in use, from the engine).
+  const plan = series.plan;
+  const loadAt = (i: number, k: number) => (plan ? plan.loadV[k]! : loadVoltageV(i, design));
+  const maxBurden = Math.max(
+    plan ? plan.loadV.reduce((m, v) => Math.max(m, supply - v), 0) : burdenV(peak, design.shuntOhms),
+    1e-12,
+  );
   // The required minimum load voltage is drawn when it is near enough not to flatten the curve.
   const loadMin =
     design.loadMinV !== undefined && design.loadMinV >= supply - 4 * maxBurden ? design.loadMinV : undefined;
@@ -92,7 +103,7 @@ export function ProfileChart({
   const currentPath = pathOf(series.tS, values, x, yCurrent);
   const loadPath = pathOf(
     series.tS,
-    values.map((i) => loadVoltageV(i, design)),
+    values.map((i, k) => loadAt(i, k)),
     x,
     yVolt,
   );
@@ -147,7 +158,9 @@ export function ProfileChart({
         <clipPath id="profile-clip-bottom">
           <rect x={M.left} y={vTop} width={plotW} height={VOLTAGE_H} />
         </clipPath>
+        {plan && <RangePatterns />}
       </defs>
+      {plan && <RangeBands stretches={plan.ranges} x={x} top={yTop} height={CURRENT_H} />}
 
       {/* Shaded stretches, over both plots. */}
       {series.belowStep.map(([a, b], k) => (
@@ -298,7 +311,8 @@ export function ProfileChart({
           right={M.left + plotW}
           t={series.tS[hover]!}
           i={series.currentA[hover]!}
-          loadV={loadVoltageV(series.currentA[hover]!, design)}
+          loadV={loadAt(series.currentA[hover]!, hover)}
+          range={plan ? plan.rangeAt[hover] : undefined}
         />
       )}
       {/* Catches the pointer over the plots. */}
@@ -322,6 +336,7 @@ function HoverReadout({
   t,
   i,
   loadV,
+  range,
 }: {
   x: number;
   top: number;
@@ -330,8 +345,12 @@ function HoverReadout({
   t: number;
   i: number;
   loadV: number;
+  /** A plan: the range the sample was read on (0-based). */
+  range?: number;
 }) {
-  const text = `${formatSI(t, "s", 5)} · ${formatSI(i, "A")} · load ${formatSI(loadV, "V", 4)}`;
+  const text =
+    `${formatSI(t, "s", 5)} · ${formatSI(i, "A")} · load ${formatSI(loadV, "V", 4)}` +
+    (range !== undefined ? ` · range ${range + 1}` : "");
   const w = text.length * 6 + 12;
   const left = x + 8 + w > right ? x - 8 - w : x + 8;
   return (

@@ -4,6 +4,7 @@ import { useState } from "react";
 import { Field, TextInput } from "@/components/ui/field";
 import { formatSI } from "@/lib/design/format";
 import { batteryLifeS, type ProfileSummary } from "@/lib/design/profile";
+import type { PlanProfileSummary } from "@/lib/design/plan-switching";
 import { formatDuration, parseCapacityC } from "@/lib/profile/capacity";
 
 const pct = (p: number) => `${String(Number(p.toPrecision(3)))} %`;
@@ -21,8 +22,14 @@ function Figure({ label, value, note, tone }: { label: string; value: string; no
 }
 
 /** The issue's summary figures, in SI with prefixes, and the battery-life estimate. */
+/** A range plan's summary carries the switching rule's figures. */
+function isPlanSummary(s: ProfileSummary): s is PlanProfileSummary {
+  return Array.isArray((s as Partial<PlanProfileSummary>).timeInRangeS);
+}
+
 export function ProfileSummaryView({ summary, loadMinV }: { summary: ProfileSummary; loadMinV?: number }) {
   const lowLoad = loadMinV !== undefined && summary.minLoadVoltageV < loadMinV;
+  const plan = isPlanSummary(summary) ? summary : null;
   return (
     <div className="flex flex-col gap-3">
       <dl className="grid grid-cols-2 gap-2 sm:grid-cols-3 lg:grid-cols-5" data-testid="profile-summary">
@@ -39,7 +46,11 @@ export function ProfileSummaryView({ summary, loadMinV }: { summary: ProfileSumm
         />
         <Figure label="Average current" value={formatSI(summary.averageCurrentA, "A")} />
         <Figure label="Peak current" value={formatSI(summary.peakCurrentA, "A")} />
-        <Figure label="Largest burden" value={formatSI(summary.maxBurdenV, "V")} note="peak current × shunt" />
+        <Figure
+          label="Largest burden"
+          value={formatSI(summary.maxBurdenV, "V")}
+          note={plan ? "through the range in use, its switch included" : "peak current × shunt"}
+        />
         <Figure
           label="Lowest load voltage"
           value={formatSI(summary.minLoadVoltageV, "V", 4)}
@@ -49,18 +60,53 @@ export function ProfileSummaryView({ summary, loadMinV }: { summary: ProfileSumm
         <Figure
           label="Clipped"
           value={pct(summary.clippedPercent)}
-          note={`samples above ${formatSI(summary.clipCurrentA, "A")} (full scale)`}
+          note={
+            plan
+              ? "samples past full scale on the range they were read on"
+              : `samples above ${formatSI(summary.clipCurrentA, "A")} (full scale)`
+          }
           tone={summary.clippedPercent > 0 ? "bad" : undefined}
         />
         <Figure
           label="Below one step"
           value={pct(summary.belowResolutionPercent)}
-          note={`samples under ${formatSI(summary.lsbA, "A")}`}
+          note={
+            plan ? "samples under one resolvable step of their range" : `samples under ${formatSI(summary.lsbA, "A")}`
+          }
           tone={summary.belowResolutionPercent > 0 ? "warn" : undefined}
         />
       </dl>
+      {plan && <PlanFigures summary={plan} />}
       <BatteryLife averageCurrentA={summary.averageCurrentA} />
     </div>
+  );
+}
+
+/** What the switching rule did over the recording: switches, time per range, samples read late. */
+function PlanFigures({ summary }: { summary: PlanProfileSummary }) {
+  const total = summary.timeInRangeS.reduce((a, b) => a + b, 0) || 1;
+  return (
+    <dl className="grid grid-cols-2 gap-2 sm:grid-cols-3 lg:grid-cols-5" data-testid="plan-profile-summary">
+      <Figure
+        label="Range switches"
+        value={summary.rangeSwitches.toLocaleString("en-GB")}
+        note={`switch delay ${formatSI(summary.switchDelayS, "s")}`}
+      />
+      {summary.timeInRangeS.map((t, k) => (
+        <Figure
+          key={k}
+          label={`Time on range ${k + 1}`}
+          value={formatSI(t, "s")}
+          note={`${pct((100 * t) / total)} of the time, ${(summary.samplesInRange[k] ?? 0).toLocaleString("en-GB")} samples`}
+        />
+      ))}
+      <Figure
+        label="Read before the switch acted"
+        value={summary.clippedBeforeSwitchSamples.toLocaleString("en-GB")}
+        note={`samples above their range's top while the switch waited (${pct(summary.clippedBeforeSwitchPercent)})`}
+        tone={summary.clippedBeforeSwitchSamples > 0 ? "warn" : undefined}
+      />
+    </dl>
   );
 }
 

@@ -19,6 +19,7 @@ import {
   libraryExportQuery,
   netlistCandidateSchema,
   netlistQuery,
+  designNetlistQuery,
   profileWindowQuery,
   reviewBodySchema,
   revisionsQuery,
@@ -362,9 +363,9 @@ export const operations: Operation[] = [
   {
     method: "get",
     path: "/api/designs/{id}/netlist",
-    summary: "The design's SPICE netlist",
+    summary: "The design's SPICE netlist (a range plan: one .op deck per range, or one with ?range=N)",
     access: "design.read",
-    query: netlistQuery,
+    query: designNetlistQuery,
     ok: file("text/plain", "the netlist"),
   },
   {

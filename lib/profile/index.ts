@@ -8,3 +8,4 @@ export * from "./decimate";
 export * from "./limits";
 export * from "./design";
 export * from "./capacity";
+export * from "./plan-series";

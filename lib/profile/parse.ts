@@ -169,7 +169,10 @@ export function parseProfileCsv(text: string): ParseOutcome {
  * infinite burden on a real shunt), or null when all are: such a profile is refused, not stored.
  */
 export function nonFiniteFigure(summary: Record<string, unknown>): string | null {
-  for (const [key, value] of Object.entries(summary))
+  for (const [key, value] of Object.entries(summary)) {
     if (typeof value === "number" && !Number.isFinite(value)) return key;
+    // A range plan's per-range figures (timeInRangeS, samplesInRange).
+    if (Array.isArray(value) && value.some((v) => typeof v === "number" && !Number.isFinite(v))) return key;
+  }
   return null;
 }

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { notFound } from "next/navigation";
 import { BuildSheetPanel } from "@/components/design/build-sheet-panel";
 import { DesignFigures } from "@/components/design/design-figures";
-import { PlanBuildPending } from "@/components/design/plan-build-pending";
+import { PlanBuildPanel } from "@/components/design/plan-build-panel";
 import { PlanFigures } from "@/components/design/plan-figures";
 import { ProfilesPanel } from "@/components/design/profiles-panel";
 import { ComparePicker } from "@/components/review/compare-picker";
@@ -114,7 +114,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
       </header>
       {design.kind === "plan" ? (
         <>
-          {viewer.leadsWithBuildSheet && <PlanBuildPending design={design} />}
+          {viewer.leadsWithBuildSheet && <PlanBuildPanel design={design} viewer={viewer} />}
           {picker}
           <PlanFigures design={design} />
           <p className="text-xs">
@@ -127,7 +127,8 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
             </Link>
           </p>
           {review}
-          {!viewer.leadsWithBuildSheet && <PlanBuildPending design={design} />}
+          {!viewer.leadsWithBuildSheet && <PlanBuildPanel design={design} viewer={viewer} />}
+          <ProfilesPanel design={design} viewer={viewer} />
         </>
       ) : (
         <>
