@@ -2,7 +2,13 @@
 // bursts to 180 mA; the designer moves a switch point, picks another pair for one range, and saves.
 import { expect, test, type Page } from "@playwright/test";
 import { apiAs, signInPage } from "../fixtures/auth";
+import { execFileSync } from "node:child_process";
+import { readFile } from "node:fs/promises";
+import { formatSI } from "@/lib/design/format";
+import { resistorCode } from "@/lib/design/resistor-code";
 import { checkScreen, shownText, widths } from "./screen-check";
+
+const squash = (s: string) => s.normalize("NFKC").replace(/\s+/g, " ");
 
 const shots = process.env.PW_OUTPUT_DIR ?? "test-results/plan-wizard";
 
@@ -115,8 +121,7 @@ test("designer adjusts the proposed plan and saves it", async ({ browser }) => {
   await expect(rp.getByTestId("design-status").first()).toHaveText("approved");
   await rctx.close();
 
-  // A maker opens the approved plan. The PDF sheet for plans is another branch's work: until it is
-  // merged the page says so and offers the design file, which carries every range.
+  // A maker opens the approved plan and builds from its sheet.
   const mctx = await browser.newContext({ viewport: { width: 1280, height: 900 }, acceptDownloads: true });
   const mp = await mctx.newPage();
   await signInPage(mp, "maker");
@@ -129,29 +134,39 @@ test("designer adjusts the proposed plan and saves it", async ({ browser }) => {
   await expect(mp).toHaveURL(new RegExp(`/meter\\?design=${id}$`));
   await expect(mp.getByTestId("plan-beside-meter")).toContainText(name);
   await mp.goBack();
-  const sheet = await mp.request.get(`/api/designs/${id}/build-sheet`);
-  if (sheet.status() === 200) {
-    // The plan's sheet: every range's parts and bench rows, read back from the PDF's text.
-    expect(sheet.headers()["content-type"]).toContain("application/pdf");
-    const { writeFile, mkdtemp } = await import("node:fs/promises");
-    const { execFileSync } = await import("node:child_process");
-    const { join } = await import("node:path");
-    const { tmpdir } = await import("node:os");
-    const pdfPath = join(await mkdtemp(join(tmpdir(), "plan-sheet-")), "sheet.pdf");
-    await writeFile(pdfPath, await sheet.body());
-    const text = execFileSync("pdftotext", ["-layout", pdfPath, "-"]).toString();
-    for (const k of [1, 2, 3]) expect(text).toContain(`Range ${k}`);
-    expect(text).toMatch(/Switch point 1/);
-    expect(text).toMatch(/Switch point 2/);
-  } else {
-    expect(sheet.status()).toBe(422);
-    const download = mp.waitForEvent("download");
-    await mp.getByTestId("download-export").click();
-    const file = await (await download).path();
-    const { readFile } = await import("node:fs/promises");
-    const exported = JSON.parse(await readFile(file, "utf8")) as { plan?: { ranges: unknown[] } };
-    expect(exported.plan?.ranges).toHaveLength(3);
-  }
+  // The maker downloads the sheet from the page and reads it back (pdftotext, poppler-utils):
+  // every range's parts and bench rows, the figures from GET /api/designs/[id] (the engine's).
+  const download = mp.waitForEvent("download");
+  await mp.getByTestId("download-build-sheet").click();
+  const pdf = await readFile(await (await download).path());
+  const text = squash(execFileSync("pdftotext", ["-raw", "-", "-"], { input: pdf, encoding: "utf8" }));
+  expect(text).not.toContain("NOT APPROVED");
+  const makerApi = await apiAs("maker");
+  const view = (await (await makerApi.get(`/api/designs/${id}`)).json()) as {
+    metrics: {
+      ranges: {
+        shuntOhms: number;
+        benchCheck: { currentA: number; expectedV: number; minV: number; maxV: number }[];
+      }[];
+    };
+    plan: { switchPoints: { upA: number; downA: number }[] };
+  };
+  expect(view.metrics.ranges).toHaveLength(3);
+  view.metrics.ranges.forEach((r, k) => {
+    expect(text).toContain(squash(`${formatSI(r.shuntOhms, "Ω")} (${resistorCode(r.shuntOhms)})`));
+    expect(text).toContain(`Range switch, range ${k + 1}`);
+    expect(text).toContain(`Bench check, range ${k + 1}`);
+    expect(r.benchCheck.length).toBeGreaterThan(0);
+    for (const row of r.benchCheck)
+      expect(text).toContain(
+        squash(
+          `${formatSI(row.currentA, "A")} ${formatSI(row.expectedV, "V")} ${formatSI(row.minV, "V")} to ${formatSI(row.maxV, "V")}`,
+        ),
+      );
+  });
+  // The adjusted switch points (300 µA, then 4 mA in revision 2) are the sheet's switching rule.
+  expect(text).toContain(squash(`rises above ${formatSI(300e-6, "A")}`));
+  expect(text).toContain(squash(`rises above ${formatSI(4e-3, "A")}`));
   await mctx.close();
 });
 
