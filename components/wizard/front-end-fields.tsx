@@ -23,9 +23,8 @@ function useKeptValues(names: readonly string[]) {
     kept.set(control, store);
     for (const n of names) {
       const saved = store.get(n);
-      const now = getValues(n as never) as unknown;
-      if (saved !== undefined && saved !== "" && (now === undefined || now === ""))
-        setValue(n as never, saved as never);
+      // A remounted field holds its default again: what the designer had typed wins.
+      if (saved !== undefined) setValue(n as never, saved as never);
     }
     return () => {
       for (const n of names) store.set(n, getValues(n as never));
@@ -35,6 +34,7 @@ function useKeptValues(names: readonly string[]) {
   }, [control]);
 }
 
+const emfNames = ["shunt.thermalEmf", "shunt.gradient"] as const;
 const traceNames = [
   "shunt.trace.width",
   "shunt.trace.length",
@@ -156,6 +156,7 @@ function PadField({ live }: { live: LiveErrors }) {
 }
 
 export function ThermalEmfFields({ live }: { live: LiveErrors }) {
+  useKeptValues(emfNames);
   return (
     <>
       <FormField

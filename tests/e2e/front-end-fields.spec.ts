@@ -53,6 +53,7 @@ for (const width of [1280, 390]) {
     await expect(page.locator("#f-shunt-trace-width-error")).toHaveText("");
     await field(page, "Longest trace the board allows").fill("40 mm");
     await field(page, "Copper thickness").fill("70 µm");
+    await field(page, "Thermal EMF of the shunt's joints").fill("2 µV/K");
     await field(page, "Temperature difference between its ends").fill("1 K");
     await look(page, `shunt-copper-${width}`);
 
@@ -64,6 +65,7 @@ for (const width of [1280, 390]) {
     await look(page, `shunt-two-terminal-${width}`);
     await page.getByText("A copper trace on the board").click();
     await expect(field(page, "Trace width")).toHaveValue("10 mm");
+    await expect(field(page, "Copper thickness")).toHaveValue("70 µm");
     await next(page);
 
     // The input filter: ticking it fills a suggestion for a 1 kHz ADC and states its corner.
@@ -85,10 +87,12 @@ for (const width of [1280, 390]) {
     await expect(page.getByTestId("candidate-row").first()).toBeVisible({ timeout: 30_000 });
     await page.getByTestId("candidate-row").first().click();
     const detail = page.getByTestId("candidate-detail");
-    await expect(detail).toContainText("Input filter: bias and offset current through its resistors");
-    await expect(detail).toContainText("Thermal EMF at the shunt's joints");
+    await expect(detail).toBeVisible();
+    const budget = page.getByRole("img", { name: /^Error budget at / }).locator("xpath=ancestor::figure[1]");
+    await expect(budget).toContainText("Input filter: bias and offset current through its resistors");
+    await expect(budget).toContainText("Thermal EMF at the shunt's joints");
     await checkScreen(page, `${shots}/results-budget-${width}.png`);
-    await detail.screenshot({ path: `${shots}/results-budget-${width}-detail.png` });
+    await budget.screenshot({ path: `${shots}/results-budget-${width}-detail.png` });
     await ctx.close();
   });
 }
