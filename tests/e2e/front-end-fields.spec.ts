@@ -59,6 +59,8 @@ for (const width of [1280, 390]) {
 
     // Back to a resistor: Kelvin by default; two terminals ask for the pads.
     await page.getByText("A resistor", { exact: true }).click();
+    await expect(field(page, "Shunt tolerance")).toHaveValue("0.5 %");
+    await expect(field(page, "Candidates listed")).toHaveValue("200");
     await expect(field(page, "Pad and solder resistance")).toHaveCount(0);
     await page.getByText("2 terminals, across the pads").click();
     await expect(field(page, "Pad and solder resistance")).toHaveValue("0.5 mΩ");
