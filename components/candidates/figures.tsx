@@ -31,12 +31,19 @@ export function figureGroups(req: Requirement, m: CandidateDetail): { title: str
           req.drop.loadMin !== undefined ? `needs ${formatSI(req.drop.loadMin, "V")}` : undefined,
         ],
         ["Dissipation at Imax", formatSI(m.dissipationW, "W")],
+        // A copper trace has no rating: its limit is the power that heats it to the shunt's maximum temperature.
+        req.shunt.trace
+          ? ["Trace may dissipate", formatSI(m.ratingW, "W"), `before it passes ${formatSI(req.shunt.maxTempC, "°C")}`]
+          : [
+              "Power rating chosen",
+              formatSI(m.ratingW, "W"),
+              `used at most ${formatPercent(req.shunt.derating)} of rating`,
+            ],
         [
-          "Power rating chosen",
-          formatSI(m.ratingW, "W"),
-          `used at most ${formatPercent(req.shunt.derating)} of rating`,
+          "Self-heating",
+          formatSI(m.selfHeatingK, "K"),
+          req.shunt.trace ? "above ambient at Imax (IPC-2221)" : "above ambient at Imax",
         ],
-        ["Self-heating", formatSI(m.selfHeatingK, "K"), "above ambient at Imax"],
       ],
     },
     {
