@@ -43,12 +43,19 @@ export function figureGroups(req: Requirement, m: CandidateDetail): { title: str
         ],
         ["Current at full load", maybe(m.operatingCurrentA, "A"), loadNotes[req.load.model]],
         ["Dissipation at full load", formatSI(m.dissipationW, "W")],
+        // A copper trace has no rating: its limit is the power that heats it to the shunt's maximum temperature.
+        req.shunt.trace
+          ? ["Trace may dissipate", formatSI(m.ratingW, "W"), `before it passes ${formatSI(req.shunt.maxTempC, "°C")}`]
+          : [
+              "Power rating chosen",
+              formatSI(m.ratingW, "W"),
+              `used at most ${formatPercent(req.shunt.derating)} of rating`,
+            ],
         [
-          "Power rating chosen",
-          formatSI(m.ratingW, "W"),
-          `used at most ${formatPercent(req.shunt.derating)} of rating`,
+          "Self-heating",
+          formatSI(m.selfHeatingK, "K"),
+          req.shunt.trace ? "above ambient at full load (IPC-2221)" : "above ambient at full load",
         ],
-        ["Self-heating", formatSI(m.selfHeatingK, "K"), "above ambient at full load"],
         [
           "Shunt hot spot",
           m.hotSpotC === undefined ? "—" : `${Number(m.hotSpotC.toPrecision(3))} °C`,

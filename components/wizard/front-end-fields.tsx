@@ -2,7 +2,8 @@
 // The wizard's fields for how the shunt is built and connected, and for the input filter
 // (issue 14): trace geometry, Kelvin or 2-terminal sensing, thermal EMF, and an RC filter
 // offered with a starting value for the readout's sample rate.
-import { useFormContext, useWatch } from "react-hook-form";
+import { useEffect } from "react";
+import { useFormContext, useWatch, type Control } from "react-hook-form";
 import { formatSI } from "@/lib/design/format";
 import { filterCornerHz, suggestInputFilter } from "@/lib/design/input-filter";
 import { parseQuantity } from "@/lib/design/units";
@@ -10,6 +11,42 @@ import type { WizardValues } from "@/lib/wizard/form-values";
 import { FormField, RadioField, SelectField } from "./form-field";
 
 type LiveErrors = (path: string) => string | undefined;
+
+// The form drops a field's value when the field leaves the screen (shouldUnregister), so a
+// designer who flips between resistor and trace would lose what was typed: keep it per form.
+const kept = new WeakMap<Control<WizardValues>, Map<string, unknown>>();
+
+function useKeptValues(names: readonly string[]) {
+  const { control, getValues, setValue } = useFormContext<WizardValues>();
+  useEffect(() => {
+    const store = kept.get(control) ?? new Map<string, unknown>();
+    kept.set(control, store);
+    for (const n of names) {
+      const saved = store.get(n);
+      // A remounted field holds its default again: what the designer had typed wins.
+      if (saved !== undefined) setValue(n as never, saved as never);
+    }
+    return () => {
+      for (const n of names) store.set(n, getValues(n as never));
+    };
+    // The names are fixed per component.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [control]);
+}
+
+const emfNames = ["shunt.thermalEmf", "shunt.gradient"] as const;
+const traceNames = [
+  "shunt.trace.width",
+  "shunt.trace.length",
+  "shunt.trace.thickness",
+  "shunt.trace.tolerance",
+] as const;
+const filterNames = [
+  "inputFilter.resistance",
+  "inputFilter.capacitance",
+  "inputFilter.tolerance",
+  "amplifier.offsetCurrent",
+] as const;
 
 const read = (v: unknown, dim: Parameters<typeof parseQuantity>[1]): number | null => {
   if (typeof v !== "string" && typeof v !== "number") return null;
@@ -33,6 +70,7 @@ export function ShuntKindChoice() {
 }
 
 export function CopperTraceFields({ live }: { live: LiveErrors }) {
+  useKeptValues(traceNames);
   return (
     <>
       <p className="col-span-2 text-2xs text-ink-muted">
@@ -65,9 +103,10 @@ export function CopperTraceFields({ live }: { live: LiveErrors }) {
       <SelectField
         name="shunt.trace.layer"
         label="Layer"
+        hint="An inner layer carries half the current for the same rise"
         options={[
-          { value: "external", label: "Outer layer (cooled by air)" },
-          { value: "internal", label: "Inner layer (half the current for the same rise)" },
+          { value: "external", label: "Outer" },
+          { value: "internal", label: "Inner" },
         ]}
       />
       <FormField
@@ -97,21 +136,27 @@ export function TerminalFields({ live }: { live: LiveErrors }) {
           ]}
         />
       </div>
-      {terminals === "2" && (
-        <FormField
-          name="shunt.padResistance"
-          unit="Ω"
-          label="Pad and solder resistance"
-          placeholder="0.5 mΩ"
-          hint="Adds to the value the amplifier sees: 0.5 mΩ on 1 mΩ reads 50 % high"
-          extraError={live("shunt.padResistance")}
-        />
-      )}
+      {terminals === "2" && <PadField live={live} />}
     </>
   );
 }
 
+function PadField({ live }: { live: LiveErrors }) {
+  useKeptValues(["shunt.padResistance"]);
+  return (
+    <FormField
+      name="shunt.padResistance"
+      unit="Ω"
+      label="Pad and solder resistance"
+      placeholder="0.5 mΩ"
+      hint="Adds to the value the amplifier sees: 0.5 mΩ on 1 mΩ reads 50 % high"
+      extraError={live("shunt.padResistance")}
+    />
+  );
+}
+
 export function ThermalEmfFields({ live }: { live: LiveErrors }) {
+  useKeptValues(emfNames);
   return (
     <>
       <FormField
@@ -165,55 +210,64 @@ export function InputFilterFields({ live }: { live: LiveErrors }) {
           type="checkbox"
           {...register("inputFilterOn", {
             onChange: (e: { target: { checked: boolean } }) => {
-              if (e.target.checked && !getValues("inputFilter.resistance")) setTimeout(offer, 0);
+              // After the fields mount (and get back any values they had), fill only what is empty.
+              if (e.target.checked)
+                setTimeout(() => {
+                  if (!getValues("inputFilter.resistance")) offer();
+                }, 0);
             },
           })}
         />
         RC filter at the amplifier&apos;s inputs (a resistor in each leg, a capacitor from each leg to ground)
       </label>
-      {on && (
-        <>
-          <FormField
-            name="inputFilter.resistance"
-            unit="Ω"
-            label="Resistor, each leg"
-            placeholder="47 Ω"
-            extraError={live("inputFilter.resistance")}
-          />
-          <FormField
-            name="inputFilter.capacitance"
-            unit="F"
-            label="Capacitor, each leg to ground"
-            placeholder="4.7 µF"
-            extraError={live("inputFilter.capacitance")}
-          />
-          <FormField
-            name="inputFilter.tolerance"
-            unit="ratio"
-            label="Filter resistor tolerance"
-            placeholder="1 %"
-            extraError={live("inputFilter.tolerance")}
-          />
-          <FormField
-            name="amplifier.offsetCurrent"
-            unit="A"
-            label="Input offset current (optional)"
-            kind="optional"
-            placeholder="2 nA"
-            hint="Default: the bias current, the worst case"
-            extraError={live("amplifier.offsetCurrent")}
-          />
-          <p className="col-span-2 text-2xs text-ink-muted" data-testid="filter-corner">
-            {corner !== null ? `Corner ${formatSI(corner, "Hz")} (1/(2π·R·C)). ` : ""}
-            It narrows the noise bandwidth; its cost, the bias currents through its resistors (and in a difference
-            stage, their share of the input resistors), shows as its own rows in the error budget.{" "}
-            <button type="button" className="text-signal underline" onClick={offer}>
-              Start from the suggested values
-            </button>{" "}
-            (corner at a tenth of the sample rate).
-          </p>
-        </>
-      )}
+      {on && <FilterValues live={live} offer={offer} corner={corner} />}
     </fieldset>
+  );
+}
+
+function FilterValues({ live, offer, corner }: { live: LiveErrors; offer: () => void; corner: number | null }) {
+  useKeptValues(filterNames);
+  return (
+    <>
+      <FormField
+        name="inputFilter.resistance"
+        unit="Ω"
+        label="Resistor, each leg"
+        placeholder="47 Ω"
+        extraError={live("inputFilter.resistance")}
+      />
+      <FormField
+        name="inputFilter.capacitance"
+        unit="F"
+        label="Capacitor, each leg to ground"
+        placeholder="4.7 µF"
+        extraError={live("inputFilter.capacitance")}
+      />
+      <FormField
+        name="inputFilter.tolerance"
+        unit="ratio"
+        label="Filter resistor tolerance"
+        placeholder="1 %"
+        extraError={live("inputFilter.tolerance")}
+      />
+      <FormField
+        name="amplifier.offsetCurrent"
+        unit="A"
+        label="Input offset current (optional)"
+        kind="optional"
+        placeholder="2 nA"
+        hint="Default: the bias current, the worst case"
+        extraError={live("amplifier.offsetCurrent")}
+      />
+      <p className="col-span-2 text-2xs text-ink-muted" data-testid="filter-corner">
+        {corner !== null ? `Corner ${formatSI(corner, "Hz")} (1/(2π·R·C)). ` : ""}
+        It narrows the noise bandwidth; its cost, the bias currents through its resistors (and in a difference stage,
+        their share of the input resistors), shows as its own rows in the error budget.{" "}
+        <button type="button" className="text-signal underline" onClick={offer}>
+          Start from the suggested values
+        </button>{" "}
+        (corner at a tenth of the sample rate).
+      </p>
+    </>
   );
 }

@@ -297,9 +297,10 @@ export function ShuntStep({ live }: { live: LiveErrors }) {
     }
   };
   const kind = useWatch<WizardValues, "shunt.kind">({ name: "shunt.kind" });
+  // Distinct keys: React must not hand one branch's input boxes (and their typed text) to the other.
   if (kind === "copper-trace")
     return (
-      <div className="grid grid-cols-2 gap-3">
+      <div key="copper-trace" className="grid grid-cols-2 gap-3">
         <ShuntKindChoice />
         <CopperTraceFields live={live} />
         <ThermalEmfFields live={live} />
@@ -314,7 +315,7 @@ export function ShuntStep({ live }: { live: LiveErrors }) {
       </div>
     );
   return (
-    <div className="grid grid-cols-2 gap-3">
+    <div key="resistor" className="grid grid-cols-2 gap-3">
       <ShuntKindChoice />
       <LibraryPicker
         id="f-library-shunt"

@@ -148,7 +148,12 @@ export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
       value: m.lowestAccurateCurrentA === null ? "none in the span" : f.amps(m.lowestAccurateCurrentA),
     },
     { label: "Bandwidth (−3 dB)", value: f.hertz(m.bandwidthHz) },
-    { label: "Dissipation at full load", value: `${f.watts(m.dissipationW)} in a ${f.watts(m.ratingW)} part` },
+    {
+      label: "Dissipation at full load",
+      value: req.shunt.trace
+        ? `${f.watts(m.dissipationW)} in the trace (it may take ${f.watts(m.ratingW)} before it passes ${f.celsius(req.shunt.maxTempC)})`
+        : `${f.watts(m.dissipationW)} in a ${f.watts(m.ratingW)} part`,
+    },
     {
       label: "Self-heating at full load",
       value: `${f.kelvin(m.selfHeatingK)} (shunt up to about ${f.celsius(req.temperature.max + m.selfHeatingK)})`,

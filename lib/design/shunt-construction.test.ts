@@ -132,6 +132,12 @@ describe("copper-trace shunts through the sweep", () => {
       /Trace width: 10 mA is a current, not a length/,
     );
   });
+  it("a form's blank trace boxes mean no trace: fine for a resistor, refused for a copper trace", () => {
+    const blankTrace = { width: "", length: "", thickness: "35 um", layer: "external" } as const;
+    expect(req({ ...base, shunt: { trace: blankTrace } }).shunt.trace).toBeNull();
+    const copper = parseRequirement({ ...base, shunt: { kind: "copper-trace", trace: blankTrace } });
+    expect(!copper.ok && copper.fieldErrors["shunt.trace"]?.[0]).toMatch(/needs its trace/);
+  });
   it("a normalized copper requirement reads back the same (saved designs re-open)", () => {
     expect(req(r as never)).toEqual(r);
   });

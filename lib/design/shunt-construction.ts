@@ -68,7 +68,15 @@ export const shuntConstructionFields = {
       z.enum(shuntKinds, { error: `Shunt kind: expected one of ${shuntKinds.join(", ")}` }).default("resistor"),
     )
     .default("resistor"),
-  trace: z.preprocess((v) => (v === null ? undefined : v), traceSchema.optional()),
+  // A form's blank width and length (a resistor chosen) mean no trace, as leaving it out does.
+  trace: z.preprocess(
+    (v) =>
+      v === null ||
+      (typeof v === "object" && blank((v as { width?: unknown }).width) && blank((v as { length?: unknown }).length))
+        ? undefined
+        : v,
+    traceSchema.optional(),
+  ),
   terminals: terminalsField,
   padResistance: z.preprocess(
     (v) => (blank(v) ? undefined : v),

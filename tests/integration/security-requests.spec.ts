@@ -425,7 +425,7 @@ test.describe("spreadsheet formulas (item 10)", () => {
     const id = await createDesignId();
     const csv = await (await designer.get(`/api/designs/${id}/parts.csv`)).text();
     const rows = csv.trim().split("\r\n");
-    expect(rows[0]).toBe("designator,part,value,tolerance,tempco,rating,notes,value_si,unit");
+    expect(rows[0]).toBe("designator,part,value,tolerance,tempco,rating,notes,value_si,unit,code");
     for (const row of rows.slice(1)) expect(row).not.toMatch(/(^|,)[=+\-@]/);
   });
 });

@@ -8,6 +8,8 @@ import { fixtureView, loggerRequirement, packMonitorRequirement } from "@/lib/bu
 import { partsList } from "@/lib/build-sheet/parts";
 import { renderBuildSheet } from "@/lib/build-sheet/render";
 import { sheetData } from "@/lib/build-sheet/sheet-data";
+import { designExport, type DesignExport } from "@/lib/build-sheet/exports";
+import { parseRequirement } from "@/lib/design/requirement";
 import { traceResistance } from "@/lib/design/copper-trace";
 
 const meta = { team: "Harbourline Labs", generatedAt: new Date("2026-12-01T09:30:00Z") };
@@ -57,6 +59,21 @@ describe("pack monitor on a copper trace, with an input filter", () => {
     expect(all).toContain(`tap B at ${lengthMm} mm`);
     expect(all).toContain("Input filter resistor, + leg");
     expect(all).toContain("47R");
+  });
+});
+
+describe("JSON export of the pack monitor", () => {
+  it("carries the trace, the filter and their figures, and its requirement reads back unchanged", () => {
+    const view = fixtureView(packMonitorRequirement, { name: "Pack monitor, discharge" });
+    const file = JSON.parse(JSON.stringify(designExport(view, new Date("2026-12-01T09:30:00Z")))) as DesignExport;
+    expect(file.requirement.shunt.kind).toBe("copper-trace");
+    expect(file.requirement.shunt.trace?.width).toBe(0.01);
+    expect(file.requirement.inputFilter).toEqual({ resistance: 47, capacitance: 33e-6, tolerance: 0.01 });
+    if (!("traceLengthM" in file.metrics)) throw new Error("a single pair's export carries its figures");
+    expect(file.metrics.traceLengthM).toBeCloseTo(0.02, 12);
+    expect(file.metrics.inputFilterCornerHz).toBeCloseTo(1 / (2 * Math.PI * 47 * 33e-6), 9);
+    const again = parseRequirement(file.requirement);
+    expect(again.ok && again.requirement).toEqual(view.requirement);
   });
 });
 
