@@ -100,7 +100,7 @@ export function partsList(
       tolerance: "—",
       tempco: "—",
       rating: "—",
-      notes: `Output to the readout (${readoutText(req)}); take GND from U1's ground, not from the shunt's current path.`,
+      notes: `Output to the readout (${readoutShortText(req)}); take GND from U1's ground, not from the shunt's current path.`,
     },
   );
   return parts;
@@ -191,9 +191,14 @@ export function gainPairParts(
   ];
 }
 
-export function readoutText(req: Requirement): string {
+/** The readout in a few words (the schematic's box): kind, resolution and full scale. */
+export function readoutShortText(req: Requirement): string {
   const r = req.readout;
   return r.kind === "adc"
-    ? `ADC, ${r.bits} bits, ${f.volts(r.fullScale)} full scale; ${readoutErrorText(req)}`
-    : `meter range ${f.volts(r.fullScale)} full scale, ${r.counts} counts; ${readoutErrorText(req)}`;
+    ? `ADC, ${r.bits} bits, ${f.volts(r.fullScale)} full scale`
+    : `meter range ${f.volts(r.fullScale)} full scale, ${r.counts} counts`;
+}
+
+export function readoutText(req: Requirement): string {
+  return `${readoutShortText(req)}; ${readoutErrorText(req)}`;
 }

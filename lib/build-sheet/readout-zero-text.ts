@@ -8,7 +8,7 @@ import * as f from "./format";
 /** The readout's stated error, or that none was stated (an ideal readout counted). */
 export function readoutErrorText(req: Requirement): string {
   const r = req.readout;
-  if (!readoutErrorStated(r)) return "its own error not stated: counted as ideal (half a step)";
+  if (!readoutErrorStated(r)) return "own error not stated (counted as ideal)";
   if (r.kind === "meter") {
     const a = r.accuracy ?? {};
     return `accuracy ±(${f.fraction(a.percentOfReading ?? 0)} of reading + ${a.digits ?? 0.5} digits)`;
@@ -28,6 +28,8 @@ export function calibrationText(req: Requirement): string {
     "one-point": "One point, at zero current",
     "two-point": "Two points, zero and near full scale",
   }[req.calibration];
+  // Without a calibration there is nothing to say beyond "none": keep the front page short.
+  if (req.calibration === "none") return "None: every error term is counted";
   return `${name}. Takes out: ${calibrationRemoves(req.calibration)}`;
 }
 

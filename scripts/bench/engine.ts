@@ -127,7 +127,9 @@ export function baselineSweep(m: Model, values: Float64Array, gains: Float64Arra
     const heat = m.alphaR * R * theta;
     const gainConst = m.gainConst + m.fe.padOhmsWorst / R;
     const accGain =
-      m.accGainConst + m.accEpsKeep * m.fe.filterLoading + (m.accEpsKeep * m.fe.padOhms + m.fe.padOhmsWorst - m.fe.padOhms) / R;
+      m.accGainConst +
+      m.accEpsKeep * m.fe.filterLoading +
+      (m.accEpsKeep * m.fe.padOhms + m.fe.padOhmsWorst - m.fe.padOhms) / R;
     const gainLo = accGain + heat * m.bandLo * m.bandLo;
     const gainHi = accGain + heat * m.bandHi * m.bandHi;
     const gainMin = accGain + heat * m.iMin * m.iMin;

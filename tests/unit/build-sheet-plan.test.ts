@@ -8,6 +8,7 @@ import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { beforeAll, describe, expect, it } from "vitest";
+import { resistorCode } from "@/lib/design/resistor-code";
 import {
   evaluatePlan,
   formatSI,
@@ -155,10 +156,11 @@ describe.each(cases)("build sheet of a range plan: %s", (name, req) => {
   it("the parts CSV names the same parts, one row each, with SI values", () => {
     const csv = planPartsCsv(req, plan);
     const lines = csv.trim().split("\r\n");
-    expect(lines[0]).toBe("designator,part,value,tolerance,tempco,rating,notes,value_si,unit");
+    expect(lines[0]).toBe("designator,part,value,tolerance,tempco,rating,notes,value_si,unit,code");
     ranges.forEach((r, k) => {
       const row = lines.find((l) => l.startsWith(`R${k + 1},`));
-      expect(row).toMatch(new RegExp(`,${r.shuntOhms},ohm$`));
+      // …, value_si, unit, and the IEC 60062 code (resistor-code.ts) last.
+      expect(row).toMatch(new RegExp(`,${r.shuntOhms},ohm,${resistorCode(r.shuntOhms)}$`));
       expect(lines.some((l) => l.startsWith(`Q${k + 1},`))).toBe(true);
       expect(lines.some((l) => l.startsWith(`U${k + 1},`))).toBe(true);
     });
