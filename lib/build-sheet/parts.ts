@@ -2,7 +2,7 @@
 // from the saved requirement and choice; figures from the engine.
 import { evaluateCandidate, resistorPairFor, type CandidateDetail, type Choice, type Requirement } from "@/lib/design";
 import * as f from "./format";
-import { readoutErrorText, zeroLevelParts } from "./readout-zero-text";
+import { zeroLevelParts } from "./readout-zero-text";
 
 export type Part = {
   designator: string;
@@ -151,6 +151,6 @@ export function partsList(
 export function readoutText(req: Requirement): string {
   const r = req.readout;
   return r.kind === "adc"
-    ? `ADC, ${r.bits} bits, ${f.volts(r.fullScale)} full scale; ${readoutErrorText(req)}`
-    : `meter range ${f.volts(r.fullScale)} full scale, ${r.counts} counts; ${readoutErrorText(req)}`;
+    ? `ADC, ${r.bits} bits, ${f.volts(r.fullScale)} full scale`
+    : `meter range ${f.volts(r.fullScale)} full scale, ${r.counts} counts`;
 }
