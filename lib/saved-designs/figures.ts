@@ -57,6 +57,17 @@ export const requirementFields: Record<string, FieldInfo> = {
   "amplifier.swingHigh": { label: "Output headroom below supply", kind: "si", unit: "V" },
   "amplifier.filterHz": { label: "Output filter corner", kind: "si", unit: "Hz" },
   "amplifier.cmrrDb": { label: "CMRR", kind: "db" },
+  "amplifier.reference.voltage": { label: "Zero-current output level", kind: "si", unit: "V" },
+  "amplifier.reference.tolerance": { label: "Zero-level tolerance", kind: "fraction" },
+  "amplifier.reference.tempco": { label: "Zero-level tempco", kind: "ppm" },
+  "readout.reference.tolerance": { label: "ADC reference tolerance", kind: "fraction" },
+  "readout.reference.tempco": { label: "ADC reference tempco", kind: "ppm" },
+  "readout.offsetLsb": { label: "ADC offset", kind: "count", unit: "LSB" },
+  "readout.gainError": { label: "ADC gain error", kind: "fraction" },
+  "readout.inlLsb": { label: "ADC INL", kind: "count", unit: "LSB" },
+  "readout.accuracy.percentOfReading": { label: "Meter accuracy, % of reading", kind: "fraction" },
+  "readout.accuracy.digits": { label: "Meter accuracy, digits", kind: "count", unit: "digits" },
+  calibration: { label: "Calibration", kind: "text" },
   limit: { label: "Candidates kept", kind: "count" },
 };
 
