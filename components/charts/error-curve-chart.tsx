@@ -80,7 +80,7 @@ export function ErrorCurveChart({
             <Axis
               orientation="bottom"
               labelOffset={bottomLabelOffset}
-              label={negative ? "Current, negative direction" : "Current"}
+              label={negative ? "Current, I < 0" : "Current"}
               tickValues={logTicks(xd[0], xd[1])}
               tickFormat={xTick}
             />

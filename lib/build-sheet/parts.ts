@@ -5,7 +5,7 @@ import * as f from "./format";
 import type { Part } from "./part";
 import { filterParts, padNote, traceShuntPart } from "./front-end-parts";
 import { resistorCode } from "@/lib/design/resistor-code";
-import { readoutErrorText, zeroLevelParts } from "./readout-zero-text";
+import { zeroLevelParts } from "./readout-zero-text";
 
 export type { Part } from "./part";
 
@@ -100,7 +100,7 @@ export function partsList(
       tolerance: "—",
       tempco: "—",
       rating: "—",
-      notes: `Output to the readout (${readoutShortText(req)}); take GND from U1's ground, not from the shunt's current path.`,
+      notes: `Output to the readout (${readoutText(req)}); take GND from U1's ground, not from the shunt's current path.`,
     },
   );
   return parts;
@@ -191,14 +191,10 @@ export function gainPairParts(
   ];
 }
 
-/** The readout in a few words (the schematic's box): kind, resolution and full scale. */
-export function readoutShortText(req: Requirement): string {
+/** The readout in a few words (its own error has a row of its own): kind, resolution and full scale. */
+export function readoutText(req: Requirement): string {
   const r = req.readout;
   return r.kind === "adc"
     ? `ADC, ${r.bits} bits, ${f.volts(r.fullScale)} full scale`
     : `meter range ${f.volts(r.fullScale)} full scale, ${r.counts} counts`;
-}
-
-export function readoutText(req: Requirement): string {
-  return `${readoutShortText(req)}; ${readoutErrorText(req)}`;
 }

@@ -20,7 +20,7 @@ import * as f from "./format";
 import { designParts, type LibraryParts } from "./library-parts";
 import { constructionRows, traceLayoutNotes } from "./front-end-parts";
 import { kelvinAdvice, readoutText, type Part } from "./parts";
-import { calibrationText } from "./readout-zero-text";
+import { calibrationText, readoutErrorText } from "./readout-zero-text";
 
 export type Row = { label: string; value: string };
 export type BenchRow = BenchCheckRow & { current: string; expected: string; band: string };
@@ -72,6 +72,7 @@ export function requirementRows(req: Requirement): Row[] {
   rows.push(
     { label: "Load", value: req.load.model.replace("-", " ") },
     { label: "Readout", value: readoutText(req) },
+    { label: "Readout's own error", value: readoutErrorText(req) },
     { label: "Calibration", value: calibrationText(req) },
     { label: "Counts at minimum current", value: `at least ${formatCount(req.resolution.countsAtMin)}` },
     {

@@ -17,6 +17,7 @@ const stepOfGroup: Record<string, string> = {
   limit: "Shunt",
   amplifier: "Amplifier",
   temperature: "Temperature",
+  calibration: "Readout",
 };
 
 const extraLabels: Record<string, string> = {

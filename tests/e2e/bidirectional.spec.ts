@@ -37,6 +37,7 @@ for (const [w, width] of Object.entries(widths)) {
     await expect(field(page, "Reference tolerance").first()).toHaveValue("0.1 %");
     await expect(field(page, "Offset error")).toHaveValue("2");
     await page.getByLabel("Calibration before use").selectOption("one-point");
+    await field(page, "Accuracy band from (optional)").fill("2 A");
     await checkScreen(page, `${shots}/readout-fields-${w}.png`);
 
     await next(page, /Shunt/);
@@ -52,7 +53,7 @@ for (const [w, width] of Object.entries(widths)) {
     await chart.scrollIntoViewIfNeeded();
     await expect(chart).toContainText("Negative direction (I < 0), by magnitude");
     await expect(chart).toContainText("Positive direction (I > 0)");
-    await expect(chart).toContainText("Current, negative direction");
+    await expect(chart).toContainText("Current, I < 0");
     await expect(chart).toContainText("−");
     const text = await shownText(page);
     expect(text).toContain("ADC reference (tolerance and tempco)");

@@ -4,7 +4,7 @@
 import { Circle, G, Line, Path, Polygon, Rect, Svg, Text } from "@react-pdf/renderer";
 import type { Choice, Requirement } from "@/lib/design";
 import * as f from "../format";
-import { gainResistors, kelvinAdvice, readoutShortText } from "../parts";
+import { gainResistors, kelvinAdvice, readoutText } from "../parts";
 import { colors, LABEL_FONTS } from "./theme";
 
 export const SCHEMATIC_W = 515;
@@ -221,10 +221,10 @@ export function Schematic({ req, choice }: { req: Requirement; choice: Choice })
         Readout
       </Label>
       <Label x={readX + 60} y={ampCy + 3} anchor="middle" size={6.5}>
-        {readoutShortText(req).split(", ").slice(0, 2).join(", ")}
+        {readoutText(req).split(", ").slice(0, 2).join(", ")}
       </Label>
       <Label x={readX + 60} y={ampCy + 12} anchor="middle" size={6.5}>
-        {readoutShortText(req).split(", ").slice(2).join(", ")}
+        {readoutText(req).split(", ").slice(2).join(", ")}
       </Label>
       <Label x={SCHEMATIC_W - 2} y={SCHEMATIC_H - 4} anchor="end" size={6.5} color={colors.muted}>
         {high ? "High side: shunt between supply and load" : "Low side: shunt between load and ground"}
