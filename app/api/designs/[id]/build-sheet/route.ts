@@ -4,14 +4,14 @@
 import { listLibrary } from "@/db/queries/library";
 import { apiRoute } from "@/lib/auth/gate";
 import { attachment, exportFileName } from "@/lib/build-sheet/exports";
-import { renderBuildSheet } from "@/lib/build-sheet/render";
+import { renderBuildSheetOffThread } from "@/lib/build-sheet/render-pool";
 import { designViewFor } from "@/lib/saved-designs/access";
 
 export const GET = apiRoute({ action: "design.read", doing: "download build sheets" }, async ({ caller, params }) => {
   const view = await designViewFor(caller, params.id ?? "");
   // The team library names the parts the pair came from.
   const library = await listLibrary(caller.teamId);
-  const pdf = await renderBuildSheet(view, { team: caller.teamName, generatedAt: new Date() }, library);
+  const pdf = await renderBuildSheetOffThread(view, { team: caller.teamName, generatedAt: new Date() }, library);
   return new Response(new Uint8Array(pdf), {
     headers: {
       "content-type": "application/pdf",
