@@ -32,9 +32,11 @@ async function open(): Promise<Handle> {
   const inMemory = PGLITE_DIR.startsWith("memory://");
   if (!inMemory) acquireDataDirLock(path.resolve(PGLITE_DIR));
   const { PGlite } = await import("@electric-sql/pglite");
+  // Trigram search on design names (migration 0008 creates the extension; PGlite ships it separately).
+  const { pg_trgm } = await import("@electric-sql/pglite/contrib/pg_trgm");
   const { drizzle } = await import("drizzle-orm/pglite");
   const { migrate } = await import("drizzle-orm/pglite/migrator");
-  const client = new PGlite(inMemory ? undefined : path.resolve(PGLITE_DIR));
+  const client = new PGlite({ dataDir: inMemory ? undefined : path.resolve(PGLITE_DIR), extensions: { pg_trgm } });
   const db = drizzle(client, { schema });
   await migrate(db, { migrationsFolder: migrationsFolder() });
   return { db: db, kind: "pglite", close: () => client.close() };

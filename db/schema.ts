@@ -115,6 +115,11 @@ export const designs = pgTable(
     // declared DESC (NULLS LAST) would not serve.
     index("designs_team_updated").on(t.teamId, t.updatedAt, t.id),
     index("designs_team_status_updated").on(t.teamId, t.status, t.updatedAt, t.id),
+    // Search (`q`) matches a substring of the name or the project, case-insensitively (ILIKE
+    // '%q%'): a btree cannot serve that, trigram GIN indexes can (pg_trgm; the migration creates
+    // the extension, and db/client.ts loads it into PGlite).
+    index("designs_name_trgm").using("gin", t.name.op("gin_trgm_ops")),
+    index("designs_project_trgm").using("gin", t.project.op("gin_trgm_ops")),
   ],
 );
 

@@ -23,8 +23,32 @@ export async function startServer() {
   if (e.SEED_DEMO === "1" && (await seedDemoIfEmpty())) console.log("[db] demo team Harbourline Labs loaded");
   const { startMail } = await import("@/lib/mail/start");
   await startMail();
+  await keepPlannerStatistics();
   await warmUp();
   void warmRoutes(e.PORT);
+}
+
+/** How often PGlite's statistics are checked while the server runs (a server's autovacuum naps 1 min). */
+const STATISTICS_CHECK_MS = 10 * 60 * 1000;
+
+/**
+ * PGlite has no autovacuum: analyze what changed since the last start now, before the first
+ * request, and check again every few minutes (db/queries/planner-statistics.ts says why).
+ */
+async function keepPlannerStatistics() {
+  const { refreshPlannerStatistics } = await import("@/db/queries/planner-statistics");
+  const refresh = async () => {
+    const t0 = performance.now();
+    try {
+      const analyzed = await refreshPlannerStatistics();
+      if (analyzed.length)
+        console.log(`[db] statistics of ${analyzed.join(", ")} refreshed in ${Math.round(performance.now() - t0)} ms`);
+    } catch (err) {
+      console.warn(`[db] statistics not refreshed: ${(err as Error).message}`);
+    }
+  };
+  await refresh();
+  setInterval(() => void refresh(), STATISTICS_CHECK_MS).unref();
 }
 
 /**
@@ -81,11 +105,15 @@ async function warmUp() {
     if (parsed.ok) solve(parsed.requirement);
     const { pingDatabase } = await import("@/db/queries/health");
     await pingDatabase();
-    const { renderBuildSheet } = await import("@/lib/build-sheet/render");
-    await renderBuildSheet(fixtureView(loggerRequirement, { status: "draft" }), {
-      team: "warm-up",
-      generatedAt: new Date(),
-    });
+    // Through the pool, one sheet per worker at once, so every worker thread starts and loads
+    // react-pdf and the typefaces now.
+    const { renderBuildSheetOffThread, SHEET_WORKERS } = await import("@/lib/build-sheet/render-pool");
+    const sample = fixtureView(loggerRequirement, { status: "draft" });
+    await Promise.all(
+      Array.from({ length: SHEET_WORKERS }, () =>
+        renderBuildSheetOffThread(sample, { team: "warm-up", generatedAt: new Date() }),
+      ),
+    );
     console.log(`[start] engine, database and build sheet warmed in ${Math.round(performance.now() - t0)} ms`);
   } catch (err) {
     console.warn(`[start] warm-up skipped: ${(err as Error).message}`);

@@ -45,6 +45,9 @@ async function main() {
     await getDb(); // takes the directory's lock, or refuses a directory a server holds
     await seedDemoIfEmpty();
     await seedScaleTeam(counts);
+    // PGlite has no autovacuum: without this the first server start pays for it (or plans blind).
+    const { refreshPlannerStatistics } = await import("../db/queries/planner-statistics");
+    await refreshPlannerStatistics();
   } catch (e) {
     console.error(`[seed:scale] ${(e as Error).message}`);
     process.exit(1);

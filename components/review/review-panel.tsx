@@ -1,17 +1,18 @@
 import { Panel } from "@/components/ui/panel";
-import type { RevisionRecord } from "@/db/queries/designs";
+import type { RevisionHead } from "@/db/queries/designs";
 import type { ReviewRecord } from "@/db/queries/reviews";
 import type { DesignView, DesignViewer } from "@/lib/design-view";
 import { AuditTimeline, type AuditEntry } from "./audit-timeline";
 import { CommentThreads } from "./comment-thread";
 import { ReviewActions } from "./review-actions";
-import { RevisionHistory } from "./revision-history";
+import { RevisionHistory, type RevisionDiff } from "./revision-history";
 
 /** The design page's review section: status and verdicts, comments, revisions, timeline. */
 export function ReviewPanel(props: {
   design: DesignView;
   viewer: DesignViewer;
-  revisions: RevisionRecord[];
+  revisions: RevisionHead[];
+  firstDiff: RevisionDiff;
   reviews: ReviewRecord[];
   audit: AuditEntry[];
 }) {
@@ -26,7 +27,7 @@ export function ReviewPanel(props: {
       </Panel>
       <div className="flex min-w-0 flex-col gap-4">
         <Panel title="Revisions">
-          <RevisionHistory revisions={props.revisions} />
+          <RevisionHistory designId={design.id} revisions={props.revisions} firstDiff={props.firstDiff} />
         </Panel>
         <Panel title="Timeline">
           <AuditTimeline entries={props.audit} />

@@ -1,10 +1,11 @@
 "use client";
 
+import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Badge } from "@/components/ui/badge";
-import type { RevisionRecord } from "@/db/queries/designs";
+import type { RevisionHead } from "@/db/queries/designs";
 import { formatSI } from "@/lib/design/format";
-import { diffRevisions } from "@/lib/saved-designs/diff";
+import type { Change } from "@/lib/saved-designs/diff";
 import { formatWhen } from "@/lib/saved-designs/when";
 
 const narrowSelect = "rounded border border-line bg-panel px-2 py-1 text-sm num focus:border-copper focus:outline-none";
@@ -17,14 +18,43 @@ const groupNames = {
   figures: "Figures",
 } as const;
 
-/** Every saved revision, and what changed between any two of them. */
-export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) {
-  const last = revisions.at(-1)?.revision ?? 1;
-  const [a, setA] = useState(Math.max(1, last - 1));
-  const [b, setB] = useState(last);
-  const ra = revisions.find((r) => r.revision === a);
-  const rb = revisions.find((r) => r.revision === b);
-  const changes = ra && rb ? diffRevisions(ra, rb) : [];
+/** What changed from revision `a` to `b`, as the server worked it out (the page brings the first pair). */
+export type RevisionDiff = { a: number; b: number; changes: Change[] };
+
+async function fetchDiff(designId: string, a: number, b: number): Promise<Change[]> {
+  const res = await fetch(`/api/designs/${designId}/revisions?a=${a}&b=${b}`);
+  const data = (await res.json().catch(() => ({}))) as { changes?: Change[]; message?: string };
+  if (!res.ok || !data.changes) throw new Error(data.message ?? `The server answered ${res.status}.`);
+  return data.changes;
+}
+
+/**
+ * Every saved revision, and what changed between any two of them. The list holds each revision's
+ * head only; the changes between a pair are worked out on the server (the two revisions' full
+ * records), the page's first pair with the page and any other pair when it is picked.
+ */
+export function RevisionHistory({
+  designId,
+  revisions,
+  firstDiff,
+}: {
+  designId: string;
+  revisions: RevisionHead[];
+  firstDiff: RevisionDiff;
+}) {
+  const [a, setA] = useState(firstDiff.a);
+  const [b, setB] = useState(firstDiff.b);
+  const isFirst = a === firstDiff.a && b === firstDiff.b;
+  const diff = useQuery({
+    queryKey: ["revision-diff", designId, a, b],
+    queryFn: () => fetchDiff(designId, a, b),
+    enabled: a !== b && !isFirst,
+    initialData: isFirst ? firstDiff.changes : undefined,
+    placeholderData: keepPreviousData,
+    staleTime: Infinity, // revisions never change
+    retry: false,
+  });
+  const changes = a === b ? [] : (diff.data ?? []);
   return (
     <div className="flex flex-col gap-3">
       <div className="overflow-x-auto">
@@ -48,14 +78,14 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
                 {r.kind === "plan" ? (
                   <>
                     {/* A plan: its shunts and gains, lowest range first, one range a line. */}
-                    <td className="py-1 pr-3 text-right" title={`A range plan of ${r.plan.ranges.length} ranges`}>
+                    <td className="py-1 pr-3 text-right num" title={`A range plan of ${r.plan.ranges.length} ranges`}>
                       {r.plan.ranges.map((x, k) => (
                         <span key={k} className="block whitespace-nowrap">
                           {formatSI(x.shuntOhms, "Ω")}
                         </span>
                       ))}
                     </td>
-                    <td className="py-1 pr-3 text-right">
+                    <td className="py-1 pr-3 text-right num">
                       {r.plan.ranges.map((x, k) => (
                         <span key={k} className="block whitespace-nowrap">
                           {formatSI(x.gain, "")}
@@ -65,8 +95,8 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
                   </>
                 ) : (
                   <>
-                    <td className="whitespace-nowrap py-1 pr-3 text-right">{formatSI(r.choice.shuntOhms, "Ω")}</td>
-                    <td className="whitespace-nowrap py-1 pr-3 text-right">{formatSI(r.choice.gain, "")}</td>
+                    <td className="whitespace-nowrap py-1 pr-3 text-right num">{formatSI(r.choice.shuntOhms, "Ω")}</td>
+                    <td className="whitespace-nowrap py-1 pr-3 text-right num">{formatSI(r.choice.gain, "")}</td>
                   </>
                 )}
                 <td className="py-1 text-xs">
@@ -92,12 +122,18 @@ export function RevisionHistory({ revisions }: { revisions: RevisionRecord[] }) 
             <span className="text-ink-muted">to</span>
             <RevisionSelect label="To revision" value={b} onChange={setB} revisions={revisions} />
           </div>
-          {changes.length === 0 ? (
+          {diff.isError && a !== b ? (
+            <p className="text-xs text-bad" role="alert">
+              The changes from revision {a} to {b} could not be read: {diff.error.message}
+            </p>
+          ) : diff.isFetching && !diff.isPlaceholderData && changes.length === 0 ? (
+            <p className="text-xs text-ink-faint">Reading the changes…</p>
+          ) : changes.length === 0 ? (
             <p className="text-xs text-ink-faint">
               {a === b ? "Pick two different revisions." : "Nothing differs between these revisions."}
             </p>
           ) : (
-            <table className="w-full text-left text-sm">
+            <table className={`w-full text-left text-sm ${diff.isPlaceholderData ? "opacity-60" : ""}`}>
               <thead className="text-xs text-ink-muted">
                 <tr className="border-b border-line">
                   <th className="py-1 pr-3 font-medium">Field</th>

@@ -24,6 +24,7 @@ import { DefaultsSummary } from "./defaults-summary";
 import { DiagnosisView } from "./diagnosis";
 import { PlanEditor, planStatus } from "./plan-editor";
 import { SavePanel, type PickNote, type PlanToSave } from "./save-panel";
+import { SweepProgress } from "./sweep-progress";
 
 const pairText = (c: { shuntOhms: number; gain: number }) =>
   `${formatSI(c.shuntOhms, "Ω")} × ${Number(c.gain.toPrecision(4))}`;
@@ -75,7 +76,7 @@ export function Explorer({
   onSaved: () => void;
   revise?: { id: string; revision: number };
 }) {
-  const { state, busy, last: shown } = solver;
+  const { state, busy, sweeping, last: shown } = solver;
   const result = shown?.result ?? null;
 
   // Listed candidates plus the engine's decade-scale picks, which may lie outside the list.
@@ -218,13 +219,7 @@ export function Explorer({
         </h2>
         <p className="text-xs text-ink-muted num" role="status" aria-live="polite" data-testid="solve-status">
           {busy ? (
-            <span className="inline-flex items-center gap-1.5">
-              <span
-                className="inline-block h-2.5 w-2.5 animate-spin rounded-full border-2 border-copper border-t-transparent"
-                aria-hidden
-              />
-              Solving…
-            </span>
+            <SweepProgress sweeping={sweeping} />
           ) : result ? (
             `${result.evaluated.toLocaleString("en")} pairs swept in ${formatSI(shown!.solveMs / 1000, "s", 2)}: ${result.feasibleCount.toLocaleString("en")} feasible, ${frontCount} on the Pareto front`
           ) : (

@@ -1,6 +1,6 @@
 // Designs and their immutable revisions. Every write is one transaction with its audit event;
 // an edit is a compare-and-set on designs.revision, so a stale edit writes nothing.
-import { and, asc, desc, eq, ilike, or, sql, type SQL } from "drizzle-orm";
+import { and, asc, desc, eq, ilike, inArray, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { z } from "zod";
 import { designKindOf, parseRequirement, type DesignKind, type Requirement } from "@/lib/design";
@@ -210,42 +210,79 @@ async function approvalsOf(designId: string): Promise<Map<number, ApprovalInfo>>
   return out;
 }
 
-/** Every revision of a design, oldest first, with its author and approval. Assumes the design was scoped already. */
-export async function listRevisions(designId: string) {
+/** A revision's head: what a list of revisions shows, without its requirement and figures. */
+const revisionHead = {
+  revision: designRevisions.revision,
+  name: designRevisions.name,
+  choice: designRevisions.choice,
+  plan: designRevisions.plan,
+  authorId: designRevisions.authorId,
+  authorName: users.name,
+  createdAt: designRevisions.createdAt,
+};
+
+/** The design's revisions: all, or the numbers in `only`. */
+const revisionsOf = (designId: string, only?: number[]) =>
+  only
+    ? and(eq(designRevisions.designId, designId), inArray(designRevisions.revision, only))
+    : eq(designRevisions.designId, designId);
+
+/** Rows as the screens take them: ISO times, and the approval given on each revision, if any. */
+async function withApprovals<R extends { revision: number; createdAt: Date }>(designId: string, rows: R[]) {
+  const approvals = await approvalsOf(designId);
+  return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString(), approval: approvals.get(r.revision) ?? null }));
+}
+
+/**
+ * Revisions of a design with their requirement and figures, oldest first; all of them, or only the
+ * numbers in `only` (a diff needs two, not fifty). Assumes the design was scoped already.
+ */
+export async function listRevisions(designId: string, only?: number[]) {
   const db = await getDb();
   const rows = await db
-    .select({
-      revision: designRevisions.revision,
-      name: designRevisions.name,
-      requirement: designRevisions.requirement,
-      choice: designRevisions.choice,
-      plan: designRevisions.plan,
-      metrics: designRevisions.metrics,
-      authorId: designRevisions.authorId,
-      authorName: users.name,
-      createdAt: designRevisions.createdAt,
-    })
+    .select({ ...revisionHead, requirement: designRevisions.requirement, metrics: designRevisions.metrics })
     .from(designRevisions)
     .innerJoin(users, eq(users.id, designRevisions.authorId))
-    .where(eq(designRevisions.designId, designId))
+    .where(revisionsOf(designId, only))
     .orderBy(asc(designRevisions.revision));
-  const approvals = await approvalsOf(designId);
-  return rows.map(({ choice, plan, metrics, ...r }) => ({
+  const kinds = rows.map(({ choice, plan, metrics, ...r }) => ({
     ...r,
     ...designKindOf({ choice, plan, metrics }),
     requirement: storedRequirement(r.requirement),
-    createdAt: r.createdAt.toISOString(),
-    approval: approvals.get(r.revision) ?? null,
   }));
+  return withApprovals(designId, kinds);
 }
 export type RevisionRecord = Awaited<ReturnType<typeof listRevisions>>[number];
+
+/**
+ * The head of every revision (number, name, author, time, choice, approval), oldest first: a design
+ * page lists fifty revisions, and parsing and shipping fifty requirements and candidate records
+ * cost more than the rest of the page.
+ */
+export async function listRevisionHeads(designId: string) {
+  const db = await getDb();
+  const rows = await db
+    .select(revisionHead)
+    .from(designRevisions)
+    .innerJoin(users, eq(users.id, designRevisions.authorId))
+    .where(revisionsOf(designId))
+    .orderBy(asc(designRevisions.revision));
+  // Exactly one of choice and plan is set (a check constraint says so).
+  const heads = rows.map(({ choice, plan, ...r }) =>
+    plan
+      ? { ...r, kind: "plan" as const, choice: null, plan }
+      : { ...r, kind: "pair" as const, choice: choice!, plan: null },
+  );
+  return withApprovals(designId, heads);
+}
+export type RevisionHead = Awaited<ReturnType<typeof listRevisionHeads>>[number];
 
 /** The saved design as the screens see it, or null when it is not this team's. */
 export async function getDesignView(designId: string, teamId: string): Promise<DesignView | null> {
   const found = await getDesign(designId, teamId);
   if (!found) return null;
   const { design, current, authorName } = found;
-  const revisions = await listRevisions(design.id);
+  const revisions = await listRevisionHeads(design.id);
   const approval = revisions.find((r) => r.revision === design.revision)?.approval ?? null;
   return {
     id: design.id,

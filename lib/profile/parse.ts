@@ -1,6 +1,15 @@
 // Reads a current recording from CSV: a time column and a current column, units in the header.
-// Papa parses row by row (walkCsv's step) and the first problem stops it; nothing partial is returned.
-import { CsvRefusal, headerKey, readNumberCell, splitHeaderUnit, truncate, unitScale, walkCsv } from "./csv";
+// walkCsv reads row by row and the first problem stops it; nothing partial is returned.
+import {
+  CsvRefusal,
+  headerKey,
+  plainNumber,
+  readNumberCell,
+  splitHeaderUnit,
+  truncate,
+  unitScale,
+  walkCsv,
+} from "./csv";
 
 export type ProfileSeries = {
   /** Seconds, strictly increasing. */
@@ -75,6 +84,14 @@ class Float64Builder {
   }
 }
 
+/** A cell's number, or why it is not one; a plain number skips the result object (a million rows). */
+function numberIn(cell: string): number | string {
+  const plain = plainNumber(cell);
+  if (Number.isFinite(plain)) return plain;
+  const read = readNumberCell(cell);
+  return read.ok ? read.value : read.reason;
+}
+
 /** Whole-file limits: more rows than this is refused before memory runs out. */
 export const MAX_PROFILE_ROWS = 5_000_000;
 
@@ -89,7 +106,34 @@ export function parseProfileCsv(text: string): ParseOutcome {
   let width = 0;
   let charge = 0;
 
+  /** Adds a row that passes every check; false (nothing added) when any check would refuse it. */
+  const addPlain = (tS: number, iA: number): boolean => {
+    if (!Number.isFinite(tS) || !Number.isFinite(iA)) return false;
+    if (times.length > 0) {
+      if (!(tS > times.last())) return false;
+      const next = charge + ((currents.last() + iA) / 2) * (tS - times.last());
+      if (!Number.isFinite(next)) return false;
+      charge = next;
+    }
+    times.push(tS);
+    currents.push(iA);
+    return true;
+  };
+
   const walk = walkCsv(text, {
+    // The common row, two plain numbers, without splitting it into cells; anything else goes to row().
+    plainRow(line, from, to, delimiter) {
+      if (!header || width !== 2) return false;
+      const cut = line.indexOf(delimiter, from);
+      if (cut === -1 || cut >= to) return false;
+      const second = line.indexOf(delimiter, cut + 1);
+      if (second !== -1 && second < to) return false;
+      const a = plainNumber(line.slice(from, cut));
+      const b = plainNumber(line.slice(cut + 1, to));
+      if (Number.isNaN(a) || Number.isNaN(b)) return false;
+      const timeFirst = header.time.index === 0;
+      return addPlain((timeFirst ? a : b) * header.time.scale, (timeFirst ? b : a) * header.current.scale);
+    },
     header(cells, line) {
       const h = readProfileHeader(cells, line);
       if (h instanceof CsvRefusal) return h;
@@ -106,12 +150,12 @@ export function parseProfileCsv(text: string): ParseOutcome {
           { row, line },
         );
       }
-      const t = readNumberCell(cells[header.time.index] ?? "");
-      if (!t.ok) return new CsvRefusal(t.reason, { row, line, column: header.time.label });
-      const i = readNumberCell(cells[header.current.index] ?? "");
-      if (!i.ok) return new CsvRefusal(i.reason, { row, line, column: header.current.label });
-      const tS = t.value * header.time.scale;
-      const iA = i.value * header.current.scale;
+      const t = numberIn(cells[header.time.index] ?? "");
+      if (typeof t === "string") return new CsvRefusal(t, { row, line, column: header.time.label });
+      const i = numberIn(cells[header.current.index] ?? "");
+      if (typeof i === "string") return new CsvRefusal(i, { row, line, column: header.current.label });
+      const tS = t * header.time.scale;
+      const iA = i * header.current.scale;
       if (!Number.isFinite(tS) || !Number.isFinite(iA)) {
         const column = Number.isFinite(tS) ? header.current.label : header.time.label;
         return new CsvRefusal("the value is too large to be a finite number in SI units", { row, line, column });
@@ -119,7 +163,7 @@ export function parseProfileCsv(text: string): ParseOutcome {
       if (times.length > 0 && !(tS > times.last())) {
         const previous = Number((times.last() / header.time.scale).toPrecision(12));
         return new CsvRefusal(
-          `time must increase from row to row, but ${t.value} is not after the previous row's ${previous}`,
+          `time must increase from row to row, but ${t} is not after the previous row's ${previous}`,
           {
             row,
             line,

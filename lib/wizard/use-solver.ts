@@ -1,6 +1,8 @@
 "use client";
-// Runs the engine's sweep in a Web Worker, coalescing edits: at most one sweep runs, and
-// only the latest input waits behind it, so typing never queues stale work or blocks the page.
+// Runs the engine's sweep in a Web Worker, coalescing edits: at most one sweep runs, and only the
+// latest input waits behind it, so typing never queues stale work or blocks the page. A sweep that
+// has run past CANCEL_AFTER_MS when a newer edit arrives is stale and long (up to 2,000,000 pairs):
+// its worker is stopped and a fresh one solves the newer input, rather than making the person wait.
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { FieldErrors } from "@/lib/design/requirement";
 import type { SolveResult } from "@/lib/design/solve";
@@ -13,33 +15,54 @@ export type SolverState =
 
 /** Debounce for bursts of keystrokes; short, so the edit-to-redraw time stays well under 100 ms. */
 const DEBOUNCE_MS = 10;
+/** A sweep running longer than this shows its progress (the time it has taken so far). */
+export const SLOW_MS = 200;
+/**
+ * A sweep still running this long after it started is cancelled when an edit makes it stale. Not
+ * sooner: a fresh worker loads the engine again (100–300 ms), so a shorter sweep is better awaited.
+ */
+const CANCEL_AFTER_MS = 600;
+
+/** A sweep under way: since when (performance.now()), for the progress line. */
+export type Sweeping = { since: number } | null;
 
 export function useSolver() {
   const worker = useRef<Worker | null>(null);
-  const inFlight = useRef<SolveRequest | null>(null);
+  const inFlight = useRef<(SolveRequest & { startedAt: number }) | null>(null);
   const pending = useRef<SolveRequest | null>(null);
   const editTimes = useRef(new Map<number, number>());
   const nextId = useRef(1);
   const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const slowTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const [state, setState] = useState<SolverState>({ status: "idle" });
   const [busy, setBusy] = useState(false);
+  // Set only once a sweep has run SLOW_MS: a quick one never flashes a progress line.
+  const [sweeping, setSweeping] = useState<Sweeping>(null);
   // The last good result stays on screen while the form holds an error.
   const [last, setLast] = useState<{ result: SolveResult; solveMs: number } | null>(null);
+  const start = useRef<() => void>(() => undefined);
 
   const dispatch = useCallback(() => {
     const w = worker.current;
     if (!w || inFlight.current || !pending.current) return;
-    inFlight.current = pending.current;
+    const startedAt = performance.now();
+    inFlight.current = { ...pending.current, startedAt };
     pending.current = null;
     setBusy(true);
-    w.postMessage(inFlight.current);
+    if (slowTimer.current) clearTimeout(slowTimer.current);
+    slowTimer.current = setTimeout(() => setSweeping({ since: startedAt }), SLOW_MS);
+    w.postMessage({ id: inFlight.current.id, input: inFlight.current.input } satisfies SolveRequest);
+  }, []);
+
+  const settle = useCallback(() => {
+    if (slowTimer.current) clearTimeout(slowTimer.current);
+    setSweeping(null);
   }, []);
 
   useEffect(() => {
-    const w = new Worker(new URL("./solve.worker.ts", import.meta.url), { name: "sensewright-solver" });
-    worker.current = w;
-    w.onmessage = (event: MessageEvent<SolveReply>) => {
+    const onReply = (event: MessageEvent<SolveReply>) => {
       const reply = event.data;
+      if (reply.id !== inFlight.current?.id) return; // from a worker stopped meanwhile
       inFlight.current = null;
       const editAt = editTimes.current.get(reply.id) ?? performance.now();
       editTimes.current.delete(reply.id);
@@ -54,6 +77,7 @@ export function useSolver() {
         dispatch();
         return;
       }
+      settle();
       setBusy(false);
       if (reply.ok) setLast({ result: reply.result, solveMs: reply.solveMs });
       setState(
@@ -62,8 +86,9 @@ export function useSolver() {
           : { status: "invalid", id: reply.id, fieldErrors: reply.fieldErrors, message: reply.message, editAt },
       );
     };
-    w.onerror = (event) => {
+    const onError = (event: ErrorEvent) => {
       inFlight.current = null;
+      settle();
       setBusy(false);
       setState({
         status: "invalid",
@@ -73,13 +98,22 @@ export function useSolver() {
         editAt: performance.now(),
       });
     };
+    start.current = () => {
+      worker.current?.terminate();
+      const w = new Worker(new URL("./solve.worker.ts", import.meta.url), { name: "sensewright-solver" });
+      w.onmessage = onReply;
+      w.onerror = onError;
+      worker.current = w;
+    };
+    start.current();
     dispatch();
     return () => {
-      w.terminate();
+      worker.current?.terminate();
       worker.current = null;
       if (timer.current) clearTimeout(timer.current);
+      if (slowTimer.current) clearTimeout(slowTimer.current);
     };
-  }, [dispatch]);
+  }, [dispatch, settle]);
 
   /** Queue a sweep of `input` (raw form values); `editAt` is when the edit happened (performance.now()). */
   const request = useCallback(
@@ -91,10 +125,20 @@ export function useSolver() {
       pending.current = { id, input: JSON.parse(JSON.stringify(input ?? {})) as unknown };
       setBusy(true);
       if (timer.current) clearTimeout(timer.current);
-      timer.current = setTimeout(dispatch, DEBOUNCE_MS);
+      timer.current = setTimeout(() => {
+        const running = inFlight.current;
+        // A long sweep made stale by this edit: stop its worker and solve the edit on a fresh one.
+        if (running && performance.now() - running.startedAt >= CANCEL_AFTER_MS) {
+          editTimes.current.delete(running.id);
+          inFlight.current = null;
+          settle();
+          start.current();
+        }
+        dispatch();
+      }, DEBOUNCE_MS);
     },
-    [dispatch],
+    [dispatch, settle],
   );
 
-  return { state, busy, last, request };
+  return { state, busy, sweeping, last, request };
 }

@@ -25,6 +25,16 @@ export async function run(): Promise<Record<string, number>> {
     await page.goto(`${BASE}/designs/new`);
     await page.evaluate(() => window.localStorage.clear());
     await page.reload();
+    // A new design starts empty ("Waiting for a complete requirement"): give it the demo logger's
+    // span and supply, then go back to the span step, whose maximum current the edits nudge.
+    await page.getByLabel("Minimum current", { exact: true }).fill("2 mA");
+    await page.getByLabel("Maximum current", { exact: true }).fill("180 mA");
+    await page.getByRole("button", { name: /^Next: / }).click();
+    await page.getByLabel("Supply voltage", { exact: true }).fill("3 V");
+    await page
+      .getByRole("list", { name: "Steps" })
+      .getByRole("button", { name: /Current span/ })
+      .click();
     await page
       .getByTestId("solve-status")
       .filter({ hasText: /feasible/ })

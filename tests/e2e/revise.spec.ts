@@ -55,6 +55,17 @@ test("designer → returned → revise → resubmit → approve", async ({ brows
   await expect(page.getByTestId("design-status").first()).toHaveText("draft");
   await expect(page.getByTestId("revision-diff")).toContainText("Allowed drop");
   await expect(page.getByTestId("revision-diff")).toContainText("50 mV");
+  // Another pair is worked out by the server on demand: from 2 back to 1, then the same one twice.
+  const diff = page.getByTestId("revision-diff");
+  await diff.getByLabel("From revision").selectOption("2");
+  await expect(diff).toContainText("Pick two different revisions.");
+  await diff.getByLabel("To revision").selectOption("1");
+  await expect(diff.locator("thead")).toContainText("Revision 2");
+  await expect(diff.locator("tbody")).toContainText("Allowed drop");
+  await expect(diff.locator("tbody")).toContainText("60 mV");
+  await diff.getByLabel("From revision").selectOption("1");
+  await diff.getByLabel("To revision").selectOption("2");
+  await expect(diff.locator("tbody")).toContainText("50 mV");
   await expect(page.getByTestId("audit-timeline")).toContainText("saved revision 2 (changed allowed drop");
   await page.getByRole("button", { name: "Submit revision 2 for review" }).click();
   await expect(page.getByTestId("design-status").first()).toHaveText("in-review");

@@ -94,6 +94,21 @@ test("search matches name or project, case-insensitively; status filters", async
   expect((await listPage(designer, { q: "%" })).designs).toEqual([]);
 });
 
+test("search finds any substring of a name or project, shorter than a trigram too", async () => {
+  // Mid-word pieces of "Pager check added A/B" and of the project tag: the trigram index serves
+  // three characters and more, and the same ILIKE answers one or two.
+  const names = async (q: string) =>
+    (await listPage(designer, { q, limit: 200 })).designs.filter((d) => d.project === tag).map((d) => d.name);
+  expect((await names("ger che")).length).toBe(made.length);
+  expect((await names("heck ADD")).sort()).toEqual(["Pager check added A", "Pager check added B"]);
+  expect((await names("ed A")).sort()).toEqual(["Pager check added A"]);
+  const byProjectPiece = await listPage(designer, { q: tag.slice(3, 12), limit: 200 });
+  expect(byProjectPiece.designs.filter((d) => d.project === tag)).toHaveLength(made.length);
+  // Two characters, below a trigram: still a plain substring match.
+  expect((await names("gE")).length).toBe(made.length);
+  expect(await names("zzqx")).toEqual([]);
+});
+
 test("a cursor from another team's list, or an altered one, is refused with 422 on cursor", async () => {
   const outsider = await makeOutsider(owner);
   await save(outsider, "Other team one", "Elsewhere");

@@ -11,7 +11,7 @@ import { ReviewPanel } from "@/components/review/review-panel";
 import { StatusBadge, statusExplained } from "@/components/review/status-badge";
 import { UnitsPanel } from "@/components/units/units-panel";
 import { listTargetAudit } from "@/db/queries/audit";
-import { getDesignView, listRevisions, pageDesigns } from "@/db/queries/designs";
+import { getDesignView, listRevisionHeads, listRevisions, pageDesigns } from "@/db/queries/designs";
 import { isUuid } from "@/lib/ids";
 import { listLibrary } from "@/db/queries/library";
 import { listReviews } from "@/db/queries/reviews";
@@ -19,6 +19,7 @@ import { formatSI } from "@/lib/design/format";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
 import { designViewerFor } from "@/lib/design-view";
+import { diffRevisions } from "@/lib/saved-designs/diff";
 import { formatWhen } from "@/lib/saved-designs/when";
 
 export const metadata: Metadata = { title: "Design" };
@@ -31,8 +32,13 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
   // Makers see approved designs only; anything else is "not found" for them, as in the API.
   if (!design || !can(caller, "design.read", design)) notFound();
   const viewer = designViewerFor(caller, design);
-  const [revisions, reviews, audit, others, library] = await Promise.all([
-    listRevisions(design.id),
+  // The history lists each revision's head; the one diff it opens on (the last save against the
+  // one before) is worked out here from those two revisions' full records.
+  const last = design.revision;
+  const firstPair = [Math.max(1, last - 1), last] as const;
+  const [revisions, pair, reviews, audit, others, library] = await Promise.all([
+    listRevisionHeads(design.id),
+    listRevisions(design.id, [...firstPair]),
     listReviews(design.id),
     listTargetAudit(caller.teamId, "design", design.id),
     // The picker offers the team's 50 most recently changed designs; the list page reaches the rest.
@@ -41,6 +47,8 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
     ),
     listLibrary(caller.teamId),
   ]);
+  const [from, to] = pair;
+  const firstDiff = { a: firstPair[0], b: firstPair[1], changes: from && to ? diffRevisions(from, to) : [] };
   const picker = (
     <ComparePicker
       current={{ id: design.id, name: design.name }}
@@ -54,6 +62,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
       design={design}
       viewer={viewer}
       revisions={revisions}
+      firstDiff={firstDiff}
       reviews={reviews}
       audit={audit.map((e) => ({ ...e, at: e.at.toISOString() }))}
     />

@@ -1,4 +1,4 @@
-import { listRevisions, reviseDesign } from "@/db/queries/designs";
+import { listRevisionHeads, reviseDesign } from "@/db/queries/designs";
 import { listReviews } from "@/db/queries/reviews";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError, refused } from "@/lib/http";
@@ -9,7 +9,7 @@ import { evaluatePicked, patchDesignSchema, pickedOf } from "@/lib/saved-designs
 
 export const GET = apiRoute({ action: "design.read", doing: "open designs" }, async ({ caller, params }) => {
   const { design, current, authorName } = await designFor(caller, params.id ?? "");
-  const revisions = await listRevisions(design.id);
+  const revisions = await listRevisionHeads(design.id);
   const approval = revisions.find((r) => r.revision === design.revision)?.approval ?? null;
   return {
     id: design.id,

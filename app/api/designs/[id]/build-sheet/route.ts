@@ -5,17 +5,14 @@
 import { listLibrary } from "@/db/queries/library";
 import { apiRoute } from "@/lib/auth/gate";
 import { attachment, exportFileName } from "@/lib/build-sheet/exports";
-import { renderBuildSheet, renderPlanBuildSheet } from "@/lib/build-sheet/render";
+import { renderBuildSheetOffThread } from "@/lib/build-sheet/render-pool";
 import { designViewFor } from "@/lib/saved-designs/access";
 
 export const GET = apiRoute({ action: "design.read", doing: "download build sheets" }, async ({ caller, params }) => {
   const view = await designViewFor(caller, params.id ?? "");
-  const meta = { team: caller.teamName, generatedAt: new Date() };
-  const pdf =
-    view.kind === "plan"
-      ? await renderPlanBuildSheet(view, view.requirement, view.plan, meta)
-      : // The team library names the parts the pair came from.
-        await renderBuildSheet(view, meta, await listLibrary(caller.teamId));
+  // Off the request thread; a pair's parts are named after the team-library parts it came from.
+  const library = view.kind === "plan" ? undefined : await listLibrary(caller.teamId);
+  const pdf = await renderBuildSheetOffThread(view, { team: caller.teamName, generatedAt: new Date() }, library);
   return new Response(new Uint8Array(pdf), {
     headers: {
       "content-type": "application/pdf",

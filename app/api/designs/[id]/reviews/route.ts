@@ -41,7 +41,7 @@ export const POST = apiRoute(
     if (!result.ok) throw refused(result);
     const reviews = await listReviews(design.id);
     const parent = body.parentId ? reviews.find((r) => r.id === body.parentId) : undefined;
-    const revAuthor = (await listRevisions(design.id)).find((r) => r.revision === result.revision)?.authorId;
+    const revAuthor = (await listRevisions(design.id, [result.revision]))[0]?.authorId;
     const recipients = [revAuthor ?? current.authorId, parent?.authorId].filter((x): x is string => !!x);
     const mailed = await mailReviewed(
       caller.teamId,

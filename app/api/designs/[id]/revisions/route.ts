@@ -10,12 +10,14 @@ export const GET = apiRoute(
   { action: "design.read", doing: "read revisions", query: revisionsQuery },
   async ({ caller, params, query }) => {
     const { design } = await designFor(caller, params.id ?? "");
-    const revisions = await listRevisions(design.id);
-    if (query.a === undefined && query.b === undefined) return { id: design.id, revision: design.revision, revisions };
+    if (query.a === undefined && query.b === undefined)
+      return { id: design.id, revision: design.revision, revisions: await listRevisions(design.id) };
     if (query.a === undefined || query.b === undefined)
       throw new HttpError(422, "Give both revisions to compare: ?a=1&b=2.", {
         [query.a === undefined ? "a" : "b"]: ["is needed with the other"],
       });
+    // A diff reads its two revisions only (the design page asks for one at every change of its pickers).
+    const revisions = await listRevisions(design.id, [query.a, query.b]);
     const a = revisions.find((r) => r.revision === query.a);
     const b = revisions.find((r) => r.revision === query.b);
     if (!a || !b) {
