@@ -5,6 +5,7 @@ import { useState } from "react";
 import { Badge } from "@/components/ui/badge";
 import type { RevisionHead } from "@/db/queries/designs";
 import { formatSI } from "@/lib/design/format";
+import type { ApiError, RevisionPairDiff } from "@/lib/api-description/responses";
 import type { Change } from "@/lib/saved-designs/diff";
 import { formatWhen } from "@/lib/saved-designs/when";
 
@@ -23,9 +24,9 @@ export type RevisionDiff = { a: number; b: number; changes: Change[] };
 
 async function fetchDiff(designId: string, a: number, b: number): Promise<Change[]> {
   const res = await fetch(`/api/designs/${designId}/revisions?a=${a}&b=${b}`);
-  const data = (await res.json().catch(() => ({}))) as { changes?: Change[]; message?: string };
+  const data = (await res.json().catch(() => ({}))) as Partial<RevisionPairDiff & ApiError>;
   if (!res.ok || !data.changes) throw new Error(data.message ?? `The server answered ${res.status}.`);
-  return data.changes;
+  return data.changes as Change[];
 }
 
 /**

@@ -523,6 +523,8 @@ export type DesignsPage = Bodies["designList"];
 export type DesignRow = DesignsPage["designs"][number];
 export type DesignCreated = Bodies["designCreated"];
 export type DesignImported = Bodies["designImported"];
+/** GET /api/designs/[id]/revisions?a=&b=: two revisions and what changed between them. */
+export type RevisionPairDiff = Extract<Bodies["revisions"], { changes: unknown }>;
 export type ProfilesBody = Bodies["profiles"];
 export type ProfileListItem = ProfilesBody["profiles"][number];
 export type ProfileUploaded = Bodies["profileUploaded"];

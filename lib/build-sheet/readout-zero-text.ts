@@ -2,7 +2,7 @@
 // counts on, and a bidirectional design's zero-current reference (the engine has the figures).
 import { calibrationRemoves, readoutErrorStated } from "@/lib/design/readout-error";
 import type { Requirement } from "@/lib/design";
-import type { Part } from "./parts";
+import type { Part } from "./part";
 import * as f from "./format";
 
 /** The readout's stated error, or that none was stated (an ideal readout counted). */
