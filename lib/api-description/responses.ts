@@ -119,8 +119,20 @@ const planBenchCheck = z.object({ ranges: z.array(z.object({ benchCheck: z.array
 /** A design has either one pair (`choice`) or a range plan (`plan`), and the figures of the one it has. */
 const pairOrPlan = <T extends z.ZodRawShape>(shape: T) =>
   z.union([
-    z.object({ ...shape, choice: choiceShape, metrics: candidateDetailShape }),
-    z.object({ ...shape, plan: planChoiceShape, metrics: planMetrics }),
+    z.object({
+      ...shape,
+      kind: z.literal("pair").optional(),
+      choice: choiceShape,
+      plan: z.null().optional(),
+      metrics: candidateDetailShape,
+    }),
+    z.object({
+      ...shape,
+      kind: z.literal("plan").optional(),
+      choice: z.null().optional(),
+      plan: planChoiceShape,
+      metrics: planMetrics,
+    }),
   ]);
 const revisionRow = pairOrPlan({
   revision: z.number().int(),

@@ -143,9 +143,9 @@ test("parts.csv lists every range's shunt, switch and amplifier with SI values",
   const res = await designer.get(`/api/designs/${design.id}/parts.csv`);
   expect(res.status()).toBe(200);
   const lines = (await res.text()).trim().split("\r\n");
-  expect(lines[0]).toBe("designator,part,value,tolerance,tempco,rating,notes,value_si,unit");
+  expect(lines[0]).toBe("designator,part,value,tolerance,tempco,rating,notes,value_si,unit,code");
   design.plan.ranges.forEach((r, k) => {
-    expect(lines.find((l) => l.startsWith(`R${k + 1},`))).toMatch(new RegExp(`,${r.shuntOhms},ohm$`));
+    expect(lines.find((l) => l.startsWith(`R${k + 1},`))).toMatch(new RegExp(`,${r.shuntOhms},ohm,[0-9RKMG]+$`));
     expect(lines.some((l) => l.startsWith(`Q${k + 1},`))).toBe(true);
     expect(lines.some((l) => l.startsWith(`U${k + 1},`))).toBe(true);
   });
