@@ -1,11 +1,12 @@
 // Thin adapters between raw request bodies and the engine's parsers, shared by the stateless
 // engine routes: the engine's own dotted field errors come back unchanged (or under a prefix).
-import { parseRequirement, type Requirement } from "@/lib/design";
+import type { Requirement } from "@/lib/design";
+import { parseRequirementInput } from "@/lib/design/ambiguous-percent";
 import { HttpError, type FieldErrors } from "@/lib/http";
 
-/** The requirement in `raw`, or a 422 carrying the engine's field errors (paths under `prefix`). */
+/** The client's requirement in `raw`, or a 422 carrying the engine's field errors (paths under `prefix`). */
 export function requirementOr422(raw: unknown, prefix = ""): Requirement {
-  const parsed = parseRequirement(raw);
+  const parsed = parseRequirementInput(raw);
   if (parsed.ok) return parsed.requirement;
   const fieldErrors: FieldErrors = {};
   for (const [path, messages] of Object.entries(parsed.fieldErrors)) {

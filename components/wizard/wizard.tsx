@@ -6,6 +6,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useForm, type Resolver, type ResolverResult, type ResolverSuccess } from "react-hook-form";
 import { z } from "zod";
+import { ambiguousPercentErrors } from "@/lib/design/ambiguous-percent";
 import { requirementSchema, type Requirement } from "@/lib/design/requirement";
 import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { Choice } from "@/lib/design/types";
@@ -99,10 +100,12 @@ const withinRange: Resolver<WizardValues, unknown, Requirement> = async (values,
       };
       walk(valueAt(r.errors, path), path);
     }
-    // A field typed far out of range says so even while another field is still incomplete.
-    const far = outOfRangeTyped(values);
+    // A field typed far out of range says so even while another field is still incomplete; a bare
+    // percent that reads two ways says so in place of any other message on its field.
+    const ambiguous = ambiguousPercentErrors(values, "type");
+    const far = { ...outOfRangeTyped(values), ...ambiguous };
     for (const [path, msgs] of Object.entries(far)) {
-      if (valueAt(r.errors, path)) continue;
+      if (valueAt(r.errors, path) && !ambiguous[path]) continue;
       const keys = path.split(".");
       let node = r.errors as Record<string, unknown>;
       for (const k of keys.slice(0, -1)) node = (node[k] ??= {}) as Record<string, unknown>;
@@ -111,7 +114,7 @@ const withinRange: Resolver<WizardValues, unknown, Requirement> = async (values,
     return r;
   }
   if (!resolved(r)) return r;
-  const far = outOfRange(r.values);
+  const far = { ...outOfRange(r.values), ...ambiguousPercentErrors(values, "type") };
   if (Object.keys(far).length === 0) return r;
   const errors: Record<string, unknown> = {};
   for (const [path, msgs] of Object.entries(far)) {

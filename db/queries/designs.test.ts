@@ -1,5 +1,6 @@
 // Compare-and-set on design revisions, against a real (in-memory) PGlite.
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { parseRequirementInput } from "@/lib/design/ambiguous-percent";
 import { evaluateDesign } from "@/lib/saved-designs/service";
 import { closeDb, getDb } from "../client";
 import { designRevisions, memberships, teams, users } from "../schema";
@@ -91,6 +92,23 @@ describe("design revisions", () => {
     const db = await getDb();
     const rows = await db.select().from(designRevisions);
     expect(rows.filter((r) => r.designId === id)).toHaveLength(2);
+  });
+
+  it("loads a saved 0.05 % target, stored as a bare number that client input would refuse", async () => {
+    const figures = first();
+    const requirement = { ...figures.requirement, accuracy: { ...figures.requirement.accuracy, percent: 0.05 } };
+    const { id } = await createDesign({
+      ...figures,
+      requirement,
+      teamId,
+      userId: ids.designer!,
+      name: `fine ${suffix}`,
+    });
+    const view = await getDesignView(id, teamId);
+    expect(view?.requirement.accuracy.percent).toBe(0.05);
+    expect(view?.requirement).toEqual(requirement);
+    // The same stored JSON sent back as a client's body is ambiguous (issue 11 item 9).
+    expect(parseRequirementInput(JSON.parse(JSON.stringify(view?.requirement))).ok).toBe(false);
   });
 
   it("does not find or edit another team's design", async () => {

@@ -225,6 +225,11 @@ export function parseQuantity(input: number | string, dim: Dimension, label?: st
   return { ok: true, value };
 }
 
+/** A number with no unit: a JSON number, or text holding only a number ("0.02", " 2 "). */
+export function isBareNumber(input: unknown): input is number | string {
+  return typeof input === "number" || (typeof input === "string" && plainNumber.test(normalizeText(input)));
+}
+
 /**
  * A field whose name says "percent" (accuracy.percent): a bare number, or text holding only a
  * number, is in percent as the name says ("2" is 2 %); text with a sign reads as in any ratio
@@ -233,7 +238,7 @@ export function parseQuantity(input: number | string, dim: Dimension, label?: st
 export function parsePercent(input: number | string, label?: string): ParseResult {
   const r = parseQuantity(input, "fraction", label);
   if (!r.ok) return r;
-  if (typeof input === "number" || plainNumber.test(normalizeText(input))) return r;
+  if (isBareNumber(input)) return r;
   return { ok: true, value: roundSig(r.value * 100) };
 }
 

@@ -5,7 +5,7 @@ import { createDesign } from "@/db/queries/designs";
 import { withIdempotencyKey } from "@/db/queries/idempotency";
 import type { Caller } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
-import { evaluatePicked, pickedOf } from "./service";
+import { evaluatePicked, pickedOf, type RequirementSource } from "./service";
 import type { Choice, PlanChoice } from "@/lib/design";
 
 /** Exactly one of choice and plan (the request schemas see to it; pickedOf refuses otherwise). */
@@ -21,8 +21,9 @@ export async function saveNewDesign(
   caller: Pick<Caller, "teamId" | "userId">,
   body: NewDesign,
   idempotencyKey?: string,
+  from: RequirementSource = "input",
 ) {
-  const evaluated = evaluatePicked(body.requirement, pickedOf(body));
+  const evaluated = evaluatePicked(body.requirement, pickedOf(body), from);
   const input = {
     ...evaluated,
     teamId: caller.teamId,

@@ -19,6 +19,7 @@ import {
   type PlanChoice,
   type Requirement,
 } from "@/lib/design";
+import { parseRequirementInput } from "@/lib/design/ambiguous-percent";
 import { HttpError, type FieldErrors } from "@/lib/http";
 import { textField } from "@/lib/text-field";
 
@@ -80,8 +81,14 @@ function prefixed(errors: FieldErrors, prefix: string): FieldErrors {
   return Object.fromEntries(Object.entries(errors).map(([k, v]) => [`${prefix}.${k}`, v]));
 }
 
-function parsedRequirement(requirementInput: unknown): Requirement {
-  const parsed = parseRequirement(requirementInput);
+/**
+ * Where a requirement comes from: a person's `input` (ambiguous bare percent numbers refused), or a
+ * `stored` one (the saved revision, or an exported file, whose normalized accuracy.percent is a bare number).
+ */
+export type RequirementSource = "input" | "stored";
+
+function parsedRequirement(requirementInput: unknown, from: RequirementSource): Requirement {
+  const parsed = from === "input" ? parseRequirementInput(requirementInput) : parseRequirement(requirementInput);
   if (parsed.ok) return parsed.requirement;
   const fieldErrors = prefixed(parsed.fieldErrors, "requirement");
   const [path, msgs] = Object.entries(fieldErrors)[0] ?? ["requirement", ["is invalid"]];
@@ -102,18 +109,26 @@ export function pickedOf(b: { choice?: Choice; plan?: PlanChoice }): Picked {
 }
 
 /** A pair or a plan, whichever was picked, through the engine. */
-export function evaluatePicked(requirementInput: unknown, picked: Picked): EvaluatedDesign {
+export function evaluatePicked(
+  requirementInput: unknown,
+  picked: Picked,
+  from: RequirementSource = "input",
+): EvaluatedDesign {
   return picked.plan
-    ? evaluatePlanDesign(requirementInput, picked.plan)
-    : evaluateDesign(requirementInput, picked.choice);
+    ? evaluatePlanDesign(requirementInput, picked.plan, from)
+    : evaluateDesign(requirementInput, picked.choice, from);
 }
 
 /**
  * Parses the requirement and re-derives every range of the plan from the engine; a plan the engine
  * would not propose as sound is refused with 422 on the range (or switch point) at fault.
  */
-export function evaluatePlanDesign(requirementInput: unknown, plan: PlanChoice): EvaluatedPlan {
-  const req = parsedRequirement(requirementInput);
+export function evaluatePlanDesign(
+  requirementInput: unknown,
+  plan: PlanChoice,
+  from: RequirementSource = "input",
+): EvaluatedPlan {
+  const req = parsedRequirement(requirementInput, from);
   const e = evaluatePlan(req, plan);
   if (!e.ok) throw new HttpError(422, `The range plan is not sound: ${e.message}.`, { [e.path]: [e.message] });
   return {
@@ -126,8 +141,12 @@ export function evaluatePlanDesign(requirementInput: unknown, plan: PlanChoice):
 }
 
 /** Parses the requirement, checks the choice is one the sweep examines and passes every constraint. */
-export function evaluateDesign(requirementInput: unknown, choice: Choice): EvaluatedPair {
-  const req = parsedRequirement(requirementInput);
+export function evaluateDesign(
+  requirementInput: unknown,
+  choice: Choice,
+  from: RequirementSource = "input",
+): EvaluatedPair {
+  const req = parsedRequirement(requirementInput, from);
   if (!isInSweep(req, choice)) {
     const fieldErrors: FieldErrors = {};
     if (!shuntInSweep(req, choice.shuntOhms)) {

@@ -1,5 +1,6 @@
 // The wizard's form shape: what the designer types (unit strings), one field per input.
 // The engine's requirement schema validates it as it stands (extra keys are ignored).
+import { accuracyTargetText } from "@/lib/design/ambiguous-percent";
 import type { RelaxSuggestion } from "@/lib/design/diagnosis";
 import { formatSI } from "@/lib/design/format";
 import type { LoadModel, RequirementInput } from "@/lib/design/requirement";
@@ -146,7 +147,7 @@ export function valuesFrom(input: RequirementInput): WizardValues {
 export function formValueFor(s: Pick<RelaxSuggestion, "field" | "to">): string | number {
   switch (s.field) {
     case "accuracy.percent":
-      return String(s.to);
+      return accuracyTargetText(s.to);
     case "accuracy.bandMin":
     case "current.min":
       return formatSI(s.to, "A", 6);

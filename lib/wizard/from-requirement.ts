@@ -1,6 +1,7 @@
 // A saved (normalized, SI) requirement back into the wizard's typed form, for revising a design.
 // Values are written with 12 significant figures so the round trip through the parser is exact and
 // an untouched field never shows up as a change in the next revision.
+import { accuracyTargetText } from "@/lib/design/ambiguous-percent";
 import { formatSI } from "@/lib/design/format";
 import type { Requirement } from "@/lib/design/requirement";
 import { readableDefaults, type WizardValues } from "./form-values";
@@ -104,7 +105,7 @@ export function revisionStart(req: Requirement): RevisionStart {
     calibration: req.calibration,
     resolution: { countsAtMin: req.resolution.countsAtMin },
     accuracy: {
-      percent: plain(req.accuracy.percent),
+      percent: accuracyTargetText(req.accuracy.percent),
       // A band left at its default follows the span; only a band the designer set is written out.
       ...(Math.abs(req.accuracy.bandMin - bandMinDefault) > 1e-12 * top
         ? { bandMin: exact(req.accuracy.bandMin, "A") }

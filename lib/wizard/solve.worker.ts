@@ -1,6 +1,6 @@
 // The solver off the main thread: parse the raw form values with the engine's schema, sweep,
 // and post the result back. Only the latest request matters; the page drops stale replies.
-import { parseRequirement } from "@/lib/design/requirement";
+import { parseRequirementInput } from "@/lib/design/ambiguous-percent";
 import { solve } from "@/lib/design/solve";
 import { outOfRange } from "./ranges";
 import type { SolveReply, SolveRequest } from "./solver-protocol";
@@ -12,7 +12,7 @@ const post = (reply: SolveReply) => self.postMessage(reply);
 self.addEventListener("message", (event: MessageEvent<SolveRequest>) => {
   const { id, input } = event.data;
   try {
-    const parsed = parseRequirement(input);
+    const parsed = parseRequirementInput(input, "type");
     if (!parsed.ok) {
       post({ id, ok: false, fieldErrors: parsed.fieldErrors, message: parsed.message });
       return;

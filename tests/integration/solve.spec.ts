@@ -97,6 +97,22 @@ test.describe("POST /api/solve refusals", () => {
       text: /unknown name "price"/,
     },
     { name: "a ranking expression that is not text", body: { ...base, rank: 42 }, path: "rank" },
+    {
+      // Issue 11 item 9: a bare 0.02 reads like the fraction drop.fraction takes (2 %).
+      name: "a bare accuracy target of 0.02",
+      body: { ...base, accuracy: { percent: 0.02 } },
+      path: "accuracy.percent",
+      text: /0\.02 reads as 0\.02 %; if you meant 2 %, send 2 or "2 %"; for 0\.02 %, send "0\.02 %"/,
+    },
+    {
+      name: "a bare meter accuracy, named in percent but read as a share",
+      body: {
+        ...base,
+        readout: { kind: "meter", counts: 6000, fullScale: "600 mV", accuracy: { percentOfReading: 0.5, digits: 2 } },
+      },
+      path: "readout.accuracy.percentOfReading",
+      text: /a bare 0\.5 reads as a share of the reading, 50 %/,
+    },
   ];
   for (const c of cases) {
     test(`${c.name} → 422 on ${c.path}`, async () => {
@@ -104,6 +120,20 @@ test.describe("POST /api/solve refusals", () => {
       await expect422(res, c.path, c.text);
     });
   }
+
+  test("an accuracy target with its sign, or a bare one of 0.1 and up, is taken as percent", async () => {
+    for (const [percent, expected] of [
+      ["0.02 %", 0.02],
+      ["500 ppm", 0.05],
+      [0.1, 0.1],
+      ["2", 2],
+    ] as const) {
+      const res = await designer.post("/api/solve", { data: { ...base, accuracy: { percent }, limit: 1 } });
+      expect(res.status(), await res.text()).toBe(200);
+      const body = (await res.json()) as { requirement: { accuracy: { percent: number } } };
+      expect(body.requirement.accuracy.percent).toBe(expected);
+    }
+  });
 
   test("malformed JSON → 422 on (body)", async () => {
     const res = await designer.post("/api/solve", {

@@ -57,11 +57,13 @@ export const PATCH = apiRoute({ action: "design.edit", body: patchDesignSchema }
     });
   }
   // A body's own choice or plan wins (either kind may become the other); else the saved one is re-evaluated.
+  // A requirement in the body is the client's; else the saved one is re-read as stored.
   const evaluated = evaluatePicked(
     body.requirement ?? current.requirement,
     body.plan !== undefined || body.choice !== undefined
       ? pickedOf(body)
       : pickedOf({ choice: current.choice ?? undefined, plan: current.plan ?? undefined }),
+    body.requirement === undefined ? "stored" : "input",
   );
   const name = body.name ?? design.name;
   const project = body.project === undefined ? design.project : (body.project ?? null);

@@ -14,7 +14,9 @@ export const POST = apiRoute(
   { action: "design.create", doing: "import designs", body: designImportSchema },
   async ({ caller, body }) => {
     // A bad file is refused for what is wrong with it first (422 naming the field).
-    evaluatePicked(body.requirement, pickedOf(body));
+    // The file's requirement is the exported, normalized one (accuracy.percent a bare number in %),
+    // so it is read as stored: a design exported at 0.05 % imports back (DEFAULTS.md).
+    evaluatePicked(body.requirement, pickedOf(body), "stored");
     // Two designs of one name in a team are easy to confuse: say so and offer a free name.
     const taken = await namesLike(caller.teamId, body.name);
     if (taken.some((t) => t.toLowerCase() === body.name.toLowerCase())) {
@@ -26,7 +28,7 @@ export const POST = apiRoute(
       );
       return json({ message: e.message, fieldErrors: e.fieldErrors, suggestedName: suggested }, 409);
     }
-    const created = await saveNewDesign(caller, body);
+    const created = await saveNewDesign(caller, body, undefined, "stored");
     return json({ ...created, name: body.name }, 201);
   },
 );
