@@ -176,7 +176,8 @@ export function budgetRows(req: Requirement, choice: Choice): { rows: BudgetRow[
     return {
       label: t.label,
       atMin: f.amps(t.errorA),
-      atMinPercent: f.percent((100 * t.errorA) / req.current.min),
+      // By magnitude: a signed span's lower end is its largest negative current.
+      atMinPercent: f.percent((100 * t.errorA) / Math.abs(req.current.min)),
       atMax: f.amps(h.errorA),
       atMaxPercent: f.percent((100 * h.errorA) / req.current.max),
     };
