@@ -180,6 +180,12 @@ describe("the build sheet builds it", () => {
       "Input filter: bias",
       "Thermal EMF",
       "Shunt tempco",
+      // The schematic: the trace with its taps, each leg's filter parts, U1's zero-level input.
+      "Kelvin tap A",
+      "Kelvin tap B",
+      "copper trace",
+      "47 Ω, 33 μF", // NFKC folds the micro sign into Greek mu
+      "ref: U2, 1.25 V",
     ])
       expect(text, s).toContain(s);
   });
