@@ -154,6 +154,19 @@ describe("the build sheet builds it", () => {
       expect(p.code, p.designator).toMatch(/^[0-9]*[RKMGT][0-9]*$/);
   });
 
+  it("states the output at both ends around the zero level, and the sign's dead band", () => {
+    const rows = Object.fromEntries(sheetData(view).performance.map((r) => [r.label, r.value]));
+    // Vz + I·R·G: 1.25 V ± 20 A × R·G (the referenced stage's transfer, hand calculation).
+    const v = (I: number) => `${Number((1.25 + I * RG).toPrecision(3))} V`;
+    expect(rows["Output at zero current"]).toMatch(/^1\.25 V/);
+    expect(rows["Output at maximum current"]).toBe(`${v(20)} at 20 A`);
+    expect(rows["Output at the largest negative current"]).toBe(
+      `${Number(((1.25 - 20 * RG) * 1e3).toPrecision(3))} mV at -20 A`,
+    );
+    expect(rows["Sign uncertain within"]).toMatch(/^±[0-9.]+ mA of zero/);
+    expect(rows["Reads as zero below"]).toBeUndefined();
+  });
+
   it("states each budget row as a positive share of its current, the negative end too", () => {
     const d = sheetData(view);
     for (const row of d.budget) {
