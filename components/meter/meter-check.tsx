@@ -115,7 +115,7 @@ export function MeterCheck() {
           <Field
             id="m-current"
             label="Load current at full supply"
-            hint="What the circuit draws with nothing in series"
+            hint="What the circuit draws with nothing in series; below zero for current flowing back (charging, regenerating)"
             error={err("load.current")}
           >
             <TextInput
@@ -275,6 +275,8 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
   const { ref, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const theme = useMemo(() => chartTheme(p), [p]);
+  // A negative current (flowing back from the load side) is drawn by its magnitude on the log axis.
+  const back = input.load.current < 0;
   const from = input.load.current / 1000;
   const to = input.load.current * 3;
   const curves = useMemo(
@@ -290,8 +292,10 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
     resistive: p.signal,
     "constant-power": p.good,
   };
-  const xd = logDomain([from, to], 0);
-  const yd: [number, number] = [0, input.supply * 1.05];
+  const xd = logDomain([Math.abs(from), Math.abs(to)], 0);
+  // Current flowing back lifts the load side above the supply.
+  const topV = Math.max(input.supply, ...curves.flatMap((c) => c.points.map((q) => q.loadVoltageV)));
+  const yd: [number, number] = [0, topV * 1.05];
   return (
     <div>
       <div ref={ref} style={{ height: 260 }} data-testid="meter-chart">
@@ -309,7 +313,7 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
             <Axis
               orientation="bottom"
               labelOffset={bottomLabelOffset}
-              label="Load current at full supply"
+              label={back ? "Current flowing back (magnitude)" : "Load current at full supply"}
               tickValues={logTicks(xd[0], xd[1])}
               tickFormat={siTick("A")}
             />
@@ -323,8 +327,8 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
             <LimitLine
               name="now"
               direction="vertical"
-              at={input.load.current}
-              span={[0, input.supply]}
+              at={Math.abs(input.load.current)}
+              span={[0, topV]}
               stroke={p.faint}
               dash="2 3"
               strokeWidth={1}
@@ -334,7 +338,7 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
               <LineSeries
                 key={c.model}
                 dataKey={modelWords[c.model]}
-                data={c.points.map((q) => ({ a: q.nominalA, v: q.loadVoltageV }))}
+                data={c.points.map((q) => ({ a: Math.abs(q.nominalA), v: q.loadVoltageV }))}
                 xAccessor={(d: Pt) => d.a}
                 yAccessor={(d: Pt) => d.v}
                 stroke={colours[c.model]}
@@ -350,7 +354,7 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
                 if (!near) return null;
                 return (
                   <SeriesTip
-                    title={`load drawing ${formatSI(near.a, "A")}`}
+                    title={back ? `${formatSI(near.a, "A")} flowing back` : `load drawing ${formatSI(near.a, "A")}`}
                     byKey={tooltipData.datumByKey}
                     skip={["now", "Load minimum"]}
                     value={(d) => formatSI(d.v, "V")}

@@ -407,7 +407,9 @@ const Results = memo(function Results({
             {formatSI(req.current.max, "A")}.{" "}
             {result.rangePlan
               ? "A plan with several ranges does; see below."
-              : "Relax the drop, the counts at the minimum current or the accuracy target, or widen the shunt bounds and gains."}
+              : req.shunt.trace
+                ? "Relax the drop, the counts at the minimum current or the accuracy target, or change the trace's width or longest length, and the gains."
+                : "Relax the drop, the counts at the minimum current or the accuracy target, or widen the shunt bounds and gains."}
           </p>
         )}
       </Panel>

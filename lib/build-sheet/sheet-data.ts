@@ -16,6 +16,7 @@ import {
 } from "@/lib/design";
 import type { PairDesignView as DesignView } from "@/lib/design-view";
 import { oneLine } from "@/lib/text-field";
+import { isSigned, signedOutputV } from "@/lib/design/bidirectional";
 import * as f from "./format";
 import { designParts, type LibraryParts } from "./library-parts";
 import { constructionRows, traceLayoutNotes } from "./front-end-parts";
@@ -120,7 +121,7 @@ export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
       label: "Scale factor",
       value: `${f.transimpedance(m.transimpedanceVPerA)}: ${decadeScale(m.transimpedanceVPerA)}`,
     },
-    { label: "Output at maximum current", value: `${f.volts(m.outputAtMaxV)} (headroom ${f.volts(m.headroomV)})` },
+    ...outputRows(req, m),
     {
       label: "Output at full load, worst case",
       value: `${f.volts(m.outputAtMaxWorstV)} with every error that raises it`,
@@ -161,11 +162,31 @@ export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
     },
   );
   if (m.deadZoneA > 0)
-    rows.push({
-      label: "Reads as zero below",
-      value: `${f.amps(m.deadZoneA)} (output floor ${f.volts(req.amplifier.swingLow)})`,
-    });
+    rows.push(
+      isSigned(req.current)
+        ? // A signed span has no floor at zero: its dead zone is where the offsets can flip the sign.
+          { label: "Sign uncertain within", value: `±${f.amps(m.deadZoneA)} of zero (zero level's error and offsets)` }
+        : {
+            label: "Reads as zero below",
+            value: `${f.amps(m.deadZoneA)} (output floor ${f.volts(req.amplifier.swingLow)})`,
+          },
+    );
   return rows;
+}
+
+/** The output at the span's ends: a signed span's sits on its zero level, both ways. */
+function outputRows(req: Requirement, m: CandidateDetail): Row[] {
+  if (!isSigned(req.current))
+    return [
+      { label: "Output at maximum current", value: `${f.volts(m.outputAtMaxV)} (headroom ${f.volts(m.headroomV)})` },
+    ];
+  const zeroV = req.amplifier.reference.voltage;
+  const at = (I: number) => f.volts(signedOutputV(zeroV, m.transimpedanceVPerA, I));
+  return [
+    { label: "Output at zero current", value: `${f.volts(zeroV)} (the zero level)` },
+    { label: "Output at maximum current", value: `${at(req.current.max)} at ${f.amps(req.current.max)}` },
+    { label: "Output at the largest negative current", value: `${at(req.current.min)} at ${f.amps(req.current.min)}` },
+  ];
 }
 
 export function budgetRows(req: Requirement, choice: Choice): { rows: BudgetRow[]; totals: SheetData["budgetTotals"] } {
@@ -176,7 +197,8 @@ export function budgetRows(req: Requirement, choice: Choice): { rows: BudgetRow[
     return {
       label: t.label,
       atMin: f.amps(t.errorA),
-      atMinPercent: f.percent((100 * t.errorA) / req.current.min),
+      // By magnitude: a signed span's lower end is its largest negative current.
+      atMinPercent: f.percent((100 * t.errorA) / Math.abs(req.current.min)),
       atMax: f.amps(h.errorA),
       atMaxPercent: f.percent((100 * h.errorA) / req.current.max),
     };

@@ -136,3 +136,8 @@ export function signedSpanIssues(
     });
   return out;
 }
+
+/** Nominal output of a referenced stage at signed current I, V: zero level + I·R·G (the stage's transfer). */
+export function signedOutputV(zeroV: number, transimpedanceVPerA: number, currentA: number): number {
+  return zeroV + currentA * transimpedanceVPerA;
+}

@@ -20,7 +20,7 @@ import {
 import { rejectReasons, shuntFigures, type RejectReason } from "./pair";
 import { planRanges } from "./range-plan";
 import { RANGE_SWITCH_DROP_SHARE, type Requirement } from "./requirement";
-import { sweepGrid, type SweepArrays } from "./sweep";
+import { sweepGrid, sweepValues, type SweepArrays } from "./sweep";
 import type { Candidate } from "./types";
 import { formatSI } from "./format";
 
@@ -190,6 +190,8 @@ type Relaxable = {
   apply: (r: Requirement, x: number) => Requirement;
   /** The change in words, without what it gives. */
   says: (x: number) => string;
+  /** The change alters the shunt values on offer (a trace's length), so each try sweeps them anew. */
+  newValues?: true;
 };
 
 function pairsWord(n: number): string {
@@ -298,6 +300,20 @@ function relaxables(req: Requirement, m: Model): Relaxable[] {
     apply: (r, x) => ({ ...r, amplifier: { ...r.amplifier, filterHz: x } }),
     says: (x) => `${hasFilter ? "lower the output filter to" : "add an output filter at"} ${formatSI(x, "Hz")}`,
   });
+  const trace = req.shunt.trace;
+  if (trace) {
+    // A copper trace's tolerance is its etch and plating and its tempco is copper's: neither is a
+    // part to choose. What the designer can change is how long a run the board allows (more ohms).
+    list.push({
+      field: "shunt.trace.length",
+      from: trace.length,
+      steps: [1.5, 2, 3, 5].map((k) => trace.length * k),
+      apply: (r, x) => ({ ...r, shunt: { ...r.shunt, trace: r.shunt.trace && { ...r.shunt.trace, length: x } } }),
+      says: (x) => `allow the trace up to ${formatSI(x, "m")} long at ${formatSI(trace.width, "m")} wide`,
+      newValues: true,
+    });
+    return list;
+  }
   list.push({
     field: "shunt.tolerance",
     from: req.shunt.tolerance,
@@ -366,8 +382,9 @@ function relaxations(req: Requirement, m: Model, sw: SweepArrays, tryPlans: bool
       if (known) return known;
       const changed = r.apply(req, r.steps[i] as number);
       const cm = buildModel(changed);
-      const s = sweepGrid(cm, sw.values, sw.gains);
-      budget -= pairs;
+      const values = r.newValues ? sweepValues(changed) : sw.values;
+      const s = sweepGrid(cm, values, sw.gains);
+      budget -= values.length * sw.gains.length;
       if (s.feasibleCount > 0 || budget <= 0 || !tryPlans) {
         // Out of budget, a plan is not tried: the step counts as failing, so a step reported
         // still works (it was checked) but may not be the smallest. With a plan already, plans are no news.

@@ -22,7 +22,14 @@ export const insertionSchema = z.object({
     model: z
       .enum(loadModels, { error: `Load model: expected one of ${loadModels.join(", ")}` })
       .default("constant-current"),
-    current: positiveQ("current", "Load current"),
+    // Signed: below zero the current flows back from the load side into the supply (a charger into
+    // a battery, a regenerating motor), as in a bidirectional span (API.md v2).
+    current: quantity("current", "Load current").check(
+      z.superRefine((v: number, ctx) => {
+        if (v === 0)
+          ctx.addIssue({ code: "custom", message: "Load current cannot be zero: nothing flows to insert into" });
+      }),
+    ),
   }),
 });
 export type InsertionInput = z.input<typeof insertionSchema>;
@@ -38,8 +45,10 @@ export type InsertionResult = {
 
 /** No operating point: the load cannot be powered through that resistance. */
 export class InsertionError extends Error {
-  readonly field = "seriesOhms";
-  constructor(message: string) {
+  constructor(
+    message: string,
+    readonly field: "seriesOhms" | "load.model" = "seriesOhms",
+  ) {
     super(message);
     this.name = "InsertionError";
   }
@@ -49,7 +58,16 @@ function fmt(x: number): string {
   return String(Number(x.toPrecision(4)));
 }
 
-/** Current through the path for a load model, or an explanation of why there is none. */
+/** A negative current through a resistive load: a resistor cannot drive current back. */
+export const RESISTIVE_BACKFLOW =
+  "A resistive load cannot send current back into the supply: describe a charge or regeneration current as a constant-current or constant-power load";
+
+/**
+ * Current through the path for a load model, or an explanation of why there is none. A negative
+ * current flows back from the load side: a constant current is set by its source whatever the
+ * series resistance; a constant power below zero is a source delivering |P|, whose terminal sits
+ * at V_load = (V + √(V² − 4·P·R))/2 > V (the same quadratic, P·R < 0 keeps it real).
+ */
 export function operatingCurrent(
   supplyV: number,
   seriesOhms: number,
@@ -57,7 +75,7 @@ export function operatingCurrent(
   nominalA: number,
 ): number | string {
   const R = seriesOhms;
-  if (model === "resistive") return supplyV / (supplyV / nominalA + R);
+  if (model === "resistive") return nominalA < 0 ? RESISTIVE_BACKFLOW : supplyV / (supplyV / nominalA + R);
   if (model === "constant-current") {
     if (nominalA * R > supplyV)
       return `A constant-current load of ${fmt(nominalA)} A cannot be powered through ${fmt(R)} Ω from ${fmt(supplyV)} V: the resistance alone would need ${fmt(nominalA * R)} V`;
@@ -74,13 +92,14 @@ export function operatingCurrent(
 export function insertion(input: Insertion): InsertionResult {
   const { supply, seriesOhms, load } = input;
   const i = operatingCurrent(supply, seriesOhms, load.model, load.current);
-  if (typeof i === "string") throw new InsertionError(i);
-  const burdenV = i * seriesOhms;
+  if (typeof i === "string") throw new InsertionError(i, i === RESISTIVE_BACKFLOW ? "load.model" : "seriesOhms");
+  // The drop's size either way; the load side sits below the supply, or above it when the current flows back.
   return {
     currentA: i,
-    loadVoltageV: supply - burdenV,
-    burdenV,
-    currentChangePercent: (100 * (i - load.current)) / load.current,
+    loadVoltageV: supply - i * seriesOhms,
+    burdenV: Math.abs(i) * seriesOhms,
+    // Of the magnitude, so "−4 %" reads as less current either way round.
+    currentChangePercent: (100 * (Math.abs(i) - Math.abs(load.current))) / Math.abs(load.current),
     powerInSeriesW: i * i * seriesOhms,
   };
 }
@@ -89,7 +108,7 @@ export type InsertionCurvePoint = InsertionResult & { nominalA: number };
 
 /**
  * The insertion result across load currents (log-spaced, nominal current at full supply),
- * from `fromA` to `toA`; currents with no operating point are left out.
+ * from `fromA` to `toA`, both of one sign; currents with no operating point are left out.
  */
 export function insertionCurve(
   input: Insertion,

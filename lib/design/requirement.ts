@@ -4,7 +4,7 @@
 import { z } from "zod";
 import { isSeriesName, seriesNames, seriesValues, type SeriesName } from "./eseries";
 import { commonFixedGains, resistorPairGains, type GainSet } from "./gains";
-import { traceLengths } from "./copper-trace";
+import { TRACE_GRID_M, traceLengths } from "./copper-trace";
 import { inputFilterField } from "./input-filter";
 import { blank, nonNegative, positive, q } from "./quantity-rules";
 import {
@@ -463,8 +463,10 @@ function crossFieldRules(b: Base, ctx: z.RefinementCtx) {
       );
     if (n * g > maxSweepPairs)
       issue(
-        ["shunt", "max"],
-        `That is ${n * g} shunt and gain pairs; narrow the shunt bounds or the gains to at most ${maxSweepPairs}`,
+        trace ? ["shunt", "trace", "length"] : ["shunt", "max"],
+        trace
+          ? `That is ${n * g} trace length and gain pairs (${n} lengths, one every ${TRACE_GRID_M * 1e3} mm); shorten the trace's longest length or give fewer gains, to at most ${maxSweepPairs}`
+          : `That is ${n * g} shunt and gain pairs; narrow the shunt bounds or the gains to at most ${maxSweepPairs}`,
       );
   }
   if (Array.isArray(amplifier.gains) && amplifier.gains.length > 10_000)

@@ -57,4 +57,27 @@ describe("formValueFor", () => {
       expect(solved.rangePlan?.ranges.length ?? 0).toBe(s.rangeCount);
     }
   });
+  it("a longer copper trace, applied as the form's length, gives the count it promised", () => {
+    const form = {
+      current: { min: "10 mA", max: "1 A" },
+      supply: { voltage: "12 V", side: "low" as const },
+      drop: { max: "100 mV" },
+      readout: { kind: "adc" as const, bits: 12, fullScale: "2.5 V" },
+      resolution: { countsAtMin: 10 },
+      accuracy: { percent: 50 },
+      shunt: { kind: "copper-trace" as const, trace: { width: "1 mm", length: "5 mm", thickness: "35 um" } },
+      amplifier: { gains: [20, 50, 100] },
+    };
+    const first = parseRequirement(form);
+    if (!first.ok) throw new Error(first.message);
+    const s = solve(first.requirement).diagnosis?.relax.find((x) => x.field === "shunt.trace.length");
+    if (!s) throw new Error("no longer trace suggested");
+    expect(formValueFor(s)).toMatch(/ mm$/);
+    const again = parseRequirement({
+      ...form,
+      shunt: { ...form.shunt, trace: { ...form.shunt.trace, length: formValueFor(s) } },
+    });
+    if (!again.ok) throw new Error(again.message);
+    expect(solve(again.requirement, { diagnose: false }).feasibleCount).toBe(s.feasibleCount);
+  });
 });

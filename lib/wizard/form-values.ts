@@ -155,6 +155,8 @@ export function formValueFor(s: Pick<RelaxSuggestion, "field" | "to">): string |
       return formatSI(s.to, "V", 6);
     case "amplifier.filterHz":
       return formatSI(s.to, "Hz", 6);
+    case "shunt.trace.length":
+      return formatSI(s.to, "m", 6);
     case "shunt.tolerance":
       return `${Number((s.to * 100).toPrecision(6))} %`;
     case "shunt.tempco":

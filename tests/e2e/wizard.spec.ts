@@ -133,6 +133,29 @@ test("the meter check gives the worked case: 200 mA from 2.0 V through 1.9 Ω", 
   await shot(page, "7-meter");
 });
 
+test("the meter check takes a charge current flowing back: −20 A through 100 mΩ lifts the load side to 50 V", async ({
+  page,
+}) => {
+  await signInPage(page, "designer");
+  await page.goto("/meter");
+  await page.getByLabel("Supply voltage", { exact: true }).fill("48 V");
+  await page.getByLabel("Load current at full supply", { exact: true }).fill("-20 A");
+  await page.getByLabel("Load behaviour", { exact: true }).selectOption("constant-current");
+  await page.getByLabel("Series resistance", { exact: true }).fill("100 mohm");
+  // V − I·R with I = −20 A (Ohm's law, the sign kept); the drop is |I|·R.
+  await expect(page.getByTestId("meter-burden")).toHaveText("2 V");
+  await expect(page.getByTestId("meter-load-voltage")).toHaveText("50 V");
+  await expect(page.getByRole("table", { name: "Figures by load behaviour" })).toContainText(
+    "cannot send current back",
+  );
+  await expect(page.getByTestId("meter-chart").locator("svg").first()).toBeVisible();
+  await expect(page.getByText("Current flowing back (magnitude)")).toBeVisible();
+  await shot(page, "7-meter-negative");
+  await page.setViewportSize({ width: 390, height: 844 });
+  await expect(page.getByTestId("meter-load-voltage")).toBeVisible();
+  await shot(page, "7-meter-negative-phone");
+});
+
 test("a span too wide for one range shows its range plan on the current axis", async ({ page }) => {
   await signInPage(page, "designer");
   await page.goto("/designs/new");

@@ -233,6 +233,29 @@ test.describe("POST /api/insertion", () => {
     await expect422(res, "seriesOhms", /no operating point/);
   });
 
+  test("−20 A flowing back through 1 mΩ from 48 V: 20 mV drop, the load side at 48.02 V (V − I·R)", async () => {
+    const res = await designer.post("/api/insertion", {
+      data: { supply: "48 V", seriesOhms: "1 mohm", load: { model: "constant-current", current: "-20 A" } },
+    });
+    expect(res.status()).toBe(200);
+    const r = (await res.json()) as Record<string, number>;
+    expect(r.currentA).toBe(-20);
+    expect(r.burdenV).toBeCloseTo(0.02, 12);
+    expect(r.loadVoltageV).toBeCloseTo(48.02, 12);
+    expect(r.powerInSeriesW).toBeCloseTo(0.4, 12); // Joule: I²R either way
+  });
+
+  test("a resistive load sending current back → 422 on load.model; zero current → 422 on load.current", async () => {
+    const back = await designer.post("/api/insertion", {
+      data: { supply: "48 V", seriesOhms: "1 mohm", load: { model: "resistive", current: "-2 A" } },
+    });
+    await expect422(back, "load.model", /cannot send current back/);
+    const zero = await designer.post("/api/insertion", {
+      data: { supply: "48 V", seriesOhms: "1 mohm", load: { current: "0 A" } },
+    });
+    await expect422(zero, "load.current", /cannot be zero/);
+  });
+
   test("a current for the series resistance → 422 on seriesOhms", async () => {
     const res = await designer.post("/api/insertion", {
       data: { supply: "2 V", seriesOhms: "2 mA", load: { current: "1 mA" } },

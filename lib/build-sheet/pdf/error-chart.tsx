@@ -44,8 +44,11 @@ function T({
 export function ErrorChart({ req, curve }: { req: Requirement; curve: ErrorCurvePoint[] }) {
   const pts = curve.filter((p) => Number.isFinite(p.worstPercent) && p.worstPercent > 0 && p.rssPercent > 0);
   if (pts.length < 2) return null;
-  const xLo = req.current.min;
-  const xHi = req.current.max;
+  // A signed span arrives folded by magnitude (curveByMagnitude): its axis runs over |I|, since log
+  // axes cannot show a sign; a one-way span keeps its own ends.
+  const signed = req.current.min < 0;
+  const xLo = signed ? pts[0]!.currentA : req.current.min;
+  const xHi = signed ? pts.at(-1)!.currentA : req.current.max;
   const target = req.accuracy.percent;
   const yVals = pts.flatMap((p) => [p.worstPercent, p.rssPercent]).concat(target);
   // Whole decades on the y axis so the grid reads at a glance.
@@ -87,7 +90,7 @@ export function ErrorChart({ req, curve }: { req: Requirement; curve: ErrorCurve
         {xTicks.at(-1) && Math.abs(sx(xTicks.at(-1)!) - (M.left + w)) < 18 ? "" : f.amps(xHi)}
       </T>
       <T x={M.left + w / 2} y={CHART_H - 3} anchor="middle" color={colors.ink}>
-        Current (log scale)
+        {signed ? "Current, either direction (log scale)" : "Current (log scale)"}
       </T>
       {/* The accuracy target over its band */}
       <Line

@@ -4,7 +4,8 @@
 import { Circle, G, Line, Path, Polygon, Rect, Svg, Text } from "@react-pdf/renderer";
 import type { Choice, Requirement } from "@/lib/design";
 import * as f from "../format";
-import { gainResistors, kelvinAdvice, readoutText } from "../parts";
+import { traceLengthOf } from "@/lib/design/front-end";
+import { gainResistors, kelvinAdvice, partsList, readoutText } from "../parts";
 import { colors, LABEL_FONTS } from "./theme";
 
 export const SCHEMATIC_W = 515;
@@ -33,29 +34,58 @@ export function Label({ x, y, size = 7.5, anchor = "start", color = colors.ink, 
 const W = { stroke: colors.ink, strokeWidth: 1 };
 
 /** A chain element between y0 and y1 at column x: a shunt or a load. */
-function Shunt({ x, y0, y1, ohms }: { x: number; y0: number; y1: number; ohms: number }) {
+/** `trace`: a copper-trace shunt's width and sensed length (m), drawn as a bare copper run. */
+function Shunt({
+  x,
+  y0,
+  y1,
+  ohms,
+  trace,
+}: {
+  x: number;
+  y0: number;
+  y1: number;
+  ohms: number;
+  trace: { width: number; length: number } | null;
+}) {
   const top = y0 + 8;
   const bottom = y1 - 8;
   const tapTop = top + 7;
   const tapBottom = bottom - 7;
+  const edge = trace ? 4 : 9;
   return (
     <G>
       <Line x1={x} y1={y0} x2={x} y2={top} {...W} />
       <Line x1={x} y1={bottom} x2={x} y2={y1} {...W} />
-      <Rect
-        x={x - 9}
-        y={top}
-        width={18}
-        height={bottom - top}
-        fill={colors.copperSoft}
-        stroke={colors.copper}
-        strokeWidth={1.2}
-      />
+      {trace ? (
+        // A copper run, not a part: a narrow solid bar the width of the wire's copper.
+        <Rect x={x - 4} y={top} width={8} height={bottom - top} fill={colors.copper} stroke={colors.copper} />
+      ) : (
+        <Rect
+          x={x - 9}
+          y={top}
+          width={18}
+          height={bottom - top}
+          fill={colors.copperSoft}
+          stroke={colors.copper}
+          strokeWidth={1.2}
+        />
+      )}
       {/* Sense taps from the inner terminals, drawn apart from the current leads. */}
-      <Line x1={x + 9} y1={tapTop} x2={x + 40} y2={tapTop} stroke={colors.signal} strokeWidth={1} />
-      <Line x1={x + 9} y1={tapBottom} x2={x + 40} y2={tapBottom} stroke={colors.signal} strokeWidth={1} />
-      <Circle cx={x + 9} cy={tapTop} r={1.6} fill={colors.signal} />
-      <Circle cx={x + 9} cy={tapBottom} r={1.6} fill={colors.signal} />
+      <Line x1={x + edge} y1={tapTop} x2={x + 40} y2={tapTop} stroke={colors.signal} strokeWidth={1} />
+      <Line x1={x + edge} y1={tapBottom} x2={x + 40} y2={tapBottom} stroke={colors.signal} strokeWidth={1} />
+      <Circle cx={x + edge} cy={tapTop} r={1.6} fill={colors.signal} />
+      <Circle cx={x + edge} cy={tapBottom} r={1.6} fill={colors.signal} />
+      {trace ? (
+        <G>
+          <Label x={x + edge + 3} y={tapTop + 8} size={6} color={colors.signal}>
+            Kelvin tap A
+          </Label>
+          <Label x={x + edge + 3} y={tapBottom - 3} size={6} color={colors.signal}>
+            Kelvin tap B
+          </Label>
+        </G>
+      ) : null}
       <Label x={x - 14} y={(top + bottom) / 2 - 3} anchor="end" bold>
         R1
       </Label>
@@ -63,8 +93,18 @@ function Shunt({ x, y0, y1, ohms }: { x: number; y0: number; y1: number; ohms: n
         {f.ohms(ohms)}
       </Label>
       <Label x={x - 14} y={(top + bottom) / 2 + 15} anchor="end" size={6.5} color={colors.muted}>
-        {kelvinAdvice(ohms) === "part" ? "4-terminal" : "Kelvin pads"}
+        {trace ? "copper trace" : kelvinAdvice(ohms) === "part" ? "4-terminal" : "Kelvin pads"}
       </Label>
+      {trace ? (
+        <G>
+          <Label x={x - 14} y={(top + bottom) / 2 + 23} anchor="end" size={6.5} color={colors.muted}>
+            {`${f.formatLength(trace.width)} wide,`}
+          </Label>
+          <Label x={x - 14} y={(top + bottom) / 2 + 31} anchor="end" size={6.5} color={colors.muted}>
+            {`taps ${f.formatLength(trace.length)} apart`}
+          </Label>
+        </G>
+      ) : null}
       <Label x={x + 4} y={y0 + 6} size={6.5} color={colors.muted}>
         sp
       </Label>
@@ -96,6 +136,55 @@ function Load({ x, y0, y1, label }: { x: number; y0: number; y1: number; label: 
   );
 }
 
+type FilterLegs = { r: [string, string]; c: [string, string]; ohms: number; farads: number };
+
+/** The filter's designators as the parts list numbers them, so the drawing and the list agree. */
+function filterDesignators(req: Requirement, choice: Choice): FilterLegs | null {
+  const flt = req.inputFilter;
+  if (!flt) return null;
+  const parts = partsList(req, choice);
+  const rs = parts.filter((p) => p.part.startsWith("Input filter resistor")).map((p) => p.designator);
+  const cs = parts.filter((p) => p.part.startsWith("Ceramic capacitor, C0G")).map((p) => p.designator);
+  if (rs.length !== 2 || cs.length !== 2) return null;
+  return { r: [rs[0]!, rs[1]!], c: [cs[0]!, cs[1]!], ohms: flt.resistance, farads: flt.capacitance };
+}
+
+/** Each sense leg's series R and its C to ground, drawn on the leg between the taps and U1. */
+function InputFilterLegs({ x0, yP, yN, filter }: { x0: number; yP: number; yN: number; filter: FilterLegs }) {
+  const rW = 16;
+  const cX = x0 + rW + 8;
+  const leg = (y: number, k: 0 | 1, dir: -1 | 1) => {
+    const plate = y + dir * 9;
+    const gnd = y + dir * 16;
+    return (
+      <G key={k}>
+        <Rect x={x0} y={y - 3} width={rW} height={6} fill="#ffffff" stroke={colors.ink} strokeWidth={0.9} />
+        <Label x={x0 + rW / 2} y={y + (dir < 0 ? 9 : -5)} anchor="middle" size={6}>
+          {filter.r[k]}
+        </Label>
+        <Circle cx={cX} cy={y} r={1.3} fill={colors.signal} />
+        <Line x1={cX} y1={y} x2={cX} y2={plate} {...W} />
+        <Line x1={cX - 5} y1={plate} x2={cX + 5} y2={plate} stroke={colors.ink} strokeWidth={1.2} />
+        <Line x1={cX - 5} y1={plate + dir * 3} x2={cX + 5} y2={plate + dir * 3} stroke={colors.ink} strokeWidth={1.2} />
+        <Line x1={cX} y1={plate + dir * 3} x2={cX} y2={gnd} {...W} />
+        <Line x1={cX - 4} y1={gnd} x2={cX + 4} y2={gnd} {...W} />
+        <Label x={cX + 7} y={plate + dir * 1.5 + 2} size={6}>
+          {filter.c[k]}
+        </Label>
+      </G>
+    );
+  };
+  return (
+    <G>
+      {leg(yP, 0, -1)}
+      {leg(yN, 1, 1)}
+      <Label x={x0 + rW / 2} y={yP + 18} anchor="middle" size={6} color={colors.muted}>
+        {`${f.ohms(filter.ohms)}, ${f.farads(filter.farads)}`}
+      </Label>
+    </G>
+  );
+}
+
 export function Schematic({ req, choice }: { req: Requirement; choice: Choice }) {
   const high = req.supply.side === "high";
   const bx = 62; // the supply's column
@@ -117,6 +206,9 @@ export function Schematic({ req, choice }: { req: Requirement; choice: Choice })
   const outX = ampX + 62;
   const readX = 392;
   const pair = gainResistors(req, choice);
+  const traceLength = traceLengthOf(req, choice.shuntOhms);
+  const trace = req.shunt.trace && traceLength !== null ? { width: req.shunt.trace.width, length: traceLength } : null;
+  const filter = filterDesignators(req, choice);
   const loadText: [string, string] = [`${req.load.model.replace("-", " ")} load`, `up to ${f.amps(req.current.max)}`];
   return (
     <Svg width={SCHEMATIC_W} height={SCHEMATIC_H} viewBox={`0 0 ${SCHEMATIC_W} ${SCHEMATIC_H}`}>
@@ -156,7 +248,7 @@ export function Schematic({ req, choice }: { req: Requirement; choice: Choice })
       <Line x1={cx} y1={yBus} x2={cx} y2={a.y0} {...W} />
       <Line x1={cx} y1={a.y1} x2={cx} y2={b.y0} {...W} />
       <Line x1={cx} y1={b.y1} x2={cx} y2={yGnd} {...W} />
-      <Shunt x={cx} y0={shuntAt.y0} y1={shuntAt.y1} ohms={choice.shuntOhms} />
+      <Shunt x={cx} y0={shuntAt.y0} y1={shuntAt.y1} ohms={choice.shuntOhms} trace={trace} />
       <Load x={cx} y0={loadAt.y0} y1={loadAt.y1} label={loadText} />
       {/* Sense pair to the amplifier */}
       <Path
@@ -173,12 +265,14 @@ export function Schematic({ req, choice }: { req: Requirement; choice: Choice })
       />
       <Line x1={cx + 40} y1={tapTop} x2={cx + 49} y2={tapTop} stroke={colors.signal} strokeWidth={1} />
       <Line x1={cx + 40} y1={tapBottom} x2={cx + 49} y2={tapBottom} stroke={colors.signal} strokeWidth={1} />
-      <Label x={cx + 50} y={tapTop - 3} size={6.5} color={colors.signal}>
+      {/* With a filter on the legs, the leg names move in towards R1 to clear its resistors. */}
+      <Label x={cx + (filter ? 20 : 50)} y={tapTop - 3} size={6.5} color={colors.signal}>
         sense +
       </Label>
-      <Label x={cx + 50} y={tapBottom + 9} size={6.5} color={colors.signal}>
+      <Label x={cx + (filter ? 20 : 50)} y={tapBottom + 9} size={6.5} color={colors.signal}>
         sense −
       </Label>
+      {filter ? <InputFilterLegs x0={cx + 56} yP={tapTop} yN={tapBottom} filter={filter} /> : null}
       {/* Amplifier */}
       <Polygon
         points={`${ampX},${ampCy - 30} ${ampX},${ampCy + 30} ${outX},${ampCy}`}
@@ -202,6 +296,15 @@ export function Schematic({ req, choice }: { req: Requirement; choice: Choice })
         <Label x={ampX} y={ampCy + 51} size={6.5} color={colors.muted}>
           {`set by R2 ${f.ohms(pair.rfOhms)} / R3 ${f.ohms(pair.rgOhms)}`}
         </Label>
+      ) : null}
+      {req.amplifier.reference.voltage > 0 ? (
+        // A signed span's zero-current level, from U2 (the parts list's zero reference).
+        <G>
+          <Line x1={ampX + 40} y1={ampCy + 11} x2={ampX + 40} y2={ampCy + 24} {...W} />
+          <Label x={ampX + 44} y={ampCy + 30} size={6.5} color={colors.muted}>
+            {`ref: U2, ${f.volts(req.amplifier.reference.voltage)}`}
+          </Label>
+        </G>
       ) : null}
       <Line x1={ampX + 28} y1={ampCy - 17} x2={ampX + 28} y2={ampCy - 38} {...W} />
       <Label x={ampX + 32} y={ampCy - 33} size={6.5} color={colors.muted}>
