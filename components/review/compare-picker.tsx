@@ -22,14 +22,15 @@ export function ComparePicker({ current, others }: { current: { id: string; name
       <fieldset className="mt-2 flex flex-col gap-1">
         <legend className="sr-only">Designs to compare with {current.name}</legend>
         {others.map((o) => (
-          <label key={o.id} className="flex items-center gap-2">
+          // On a phone a long name wraps under its box instead of pushing the page sideways.
+          <label key={o.id} className="flex min-w-0 flex-wrap items-center gap-x-2">
             <input
               type="checkbox"
               checked={picked.includes(o.id)}
               onChange={() => toggle(o.id)}
               disabled={!picked.includes(o.id) && picked.length >= 3}
             />
-            <span>{o.name}</span>
+            <span className="min-w-0 break-words">{o.name}</span>
             <span className="text-xs text-ink-faint">
               {o.project ?? "no project"} · {o.status}
             </span>
