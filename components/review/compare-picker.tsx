@@ -19,7 +19,8 @@ export function ComparePicker({ current, others }: { current: { id: string; name
       <summary className="cursor-pointer text-xs font-medium text-ink-muted">
         Compare with… (up to three other designs)
       </summary>
-      <fieldset className="mt-2 flex flex-col gap-1">
+      {/* min-w-0: a fieldset is otherwise as wide as its longest unbreakable name. */}
+      <fieldset className="mt-2 flex min-w-0 flex-col gap-1">
         <legend className="sr-only">Designs to compare with {current.name}</legend>
         {others.map((o) => (
           // On a phone a long name wraps under its box instead of pushing the page sideways.
@@ -30,7 +31,7 @@ export function ComparePicker({ current, others }: { current: { id: string; name
               onChange={() => toggle(o.id)}
               disabled={!picked.includes(o.id) && picked.length >= 3}
             />
-            <span className="min-w-0 break-words">{o.name}</span>
+            <span className="min-w-0 [overflow-wrap:anywhere]">{o.name}</span>
             <span className="text-xs text-ink-faint">
               {o.project ?? "no project"} · {o.status}
             </span>

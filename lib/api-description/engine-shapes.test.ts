@@ -117,7 +117,13 @@ describe("the design answer (API.md v2, Designs)", () => {
   };
 
   it("takes a pair design: choice, its figures and a bench check", () => {
-    const pair = { ...base, choice: low, metrics: evaluateCandidate(requirement, low), benchCheck: bench };
+    const pair = {
+      ...base,
+      kind: "pair",
+      choice: low,
+      metrics: evaluateCandidate(requirement, low),
+      benchCheck: bench,
+    };
     expect(responses.design.safeParse(overJson(pair)).error?.issues ?? []).toEqual([]);
   });
 
@@ -130,7 +136,14 @@ describe("the design answer (API.md v2, Designs)", () => {
       switchPoints: [{ upA: 0.05, downA: 0.04 }],
     };
     const metrics = { ranges: [evaluateCandidate(requirement, low), evaluateCandidate(requirement, high)] };
-    const planned = { ...base, plan, metrics, benchCheck: { ranges: [{ benchCheck: bench }, { benchCheck: bench }] } };
+    // As GET /api/designs/[id] serves it: each range's bench check under ranges[k] (API.md v2).
+    const planned = {
+      ...base,
+      kind: "plan",
+      plan,
+      metrics,
+      ranges: plan.ranges.map((r) => ({ ...r, benchCheck: bench })),
+    };
     expect(responses.design.safeParse(overJson(planned)).error?.issues ?? []).toEqual([]);
     // Not both, and not a pair's figures on a plan.
     expect(responses.design.safeParse(overJson({ ...planned, metrics: metrics.ranges[0] })).success).toBe(false);

@@ -115,7 +115,6 @@ const review = z.object({
 });
 /** A plan design's figures: one set per range (API.md v2, "Designs"). */
 const planMetrics = z.object({ ranges: z.array(candidateDetailShape.loose()) });
-const planBenchCheck = z.object({ ranges: z.array(z.object({ benchCheck: z.array(benchCheckRowShape) }).loose()) });
 /** A design has either one pair (`choice`) or a range plan (`plan`), and the figures of the one it has. */
 const pairOrPlan = <T extends z.ZodRawShape>(shape: T) =>
   z.union([
@@ -187,16 +186,25 @@ const designFields = {
 };
 const benchCheck = z.array(benchCheckRowShape);
 const design = z.union([
-  z.object({ ...designFields, choice: choiceShape, metrics: candidateDetailShape, benchCheck }),
   z.object({
     ...designFields,
+    kind: z.literal("pair").describe("one shunt and gain"),
+    choice: choiceShape,
+    metrics: candidateDetailShape,
+    benchCheck,
+  }),
+  z.object({
+    ...designFields,
+    kind: z.literal("plan").describe("a range plan"),
     plan: planChoiceShape,
     metrics: planMetrics,
-    benchCheck: z.union([benchCheck, planBenchCheck]).describe("per range on a plan design"),
+    ranges: z
+      .array(z.object({ minA: z.number(), maxA: z.number(), shuntOhms: z.number(), gain: z.number(), benchCheck }))
+      .describe("per range, its bench check (API.md v2: ranges[k].benchCheck)"),
   }),
 ]);
 const change = z.object({
-  group: z.enum(["design", "requirement", "choice", "figures"]),
+  group: z.enum(["design", "requirement", "choice", "plan", "figures"]),
   path: z.string(),
   label: z.string(),
   a: z.unknown(),
