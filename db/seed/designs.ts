@@ -11,6 +11,7 @@
 //   filter (a meter reads slowly) and a 3 % target; the choice nearest 1 mV per µA is taken.
 // And the logger as the whole instrument: 3 µA asleep to 180 mA transmitting, saved as the range plan
 // the engine proposes for it (through the same service as POST /api/designs) and approved.
+import { planChoiceOf } from "@/lib/design/range-candidates";
 import { parseRequirement, solve, type Candidate, type PlanChoice, type RequirementInput } from "@/lib/design";
 import { saveNewDesign } from "@/lib/saved-designs/create";
 import { changedFields } from "@/lib/saved-designs/diff";
@@ -103,10 +104,7 @@ export function demoPlan(input: RequirementInput): PlanChoice {
   if (!parsed.ok) throw new Error(`demo plan: ${parsed.message}`);
   const plan = solve(parsed.requirement).rangePlan;
   if (!plan) throw new Error("demo plan: the engine proposed no range plan for the logger");
-  return {
-    ranges: plan.ranges.map(({ minA, maxA, shuntOhms, gain }) => ({ minA, maxA, shuntOhms, gain })),
-    switchPoints: plan.switchPoints.map(({ upA, downA }) => ({ upA, downA })),
-  };
+  return planChoiceOf(plan);
 }
 
 /** The Pareto candidate a demo design uses, or an error naming the scenario. */

@@ -73,6 +73,7 @@ export const rangePlanShape = z.object({
       switchOhms: z.number(),
       worstBurdenV: z.number(),
       faultCurrentA: z.number(),
+      faultDissipationW: z.number(),
       ratingW: z.number(),
       countsAtBottom: z.number(),
       settlingS: z.number(),

@@ -9,6 +9,7 @@ import {
   type Requirement,
   type RequirementInput,
 } from "@/lib/design";
+import { planChoiceOf } from "@/lib/design/range-candidates";
 import type { PairDesignView as DesignView } from "@/lib/design-view";
 import type { DesignStatus } from "@/db/schema";
 
@@ -98,8 +99,5 @@ export const loggerPlanRequirement: RequirementInput = {
 export function proposedPlan(req: Requirement): PlanChoice {
   const plan = solve(req).rangePlan;
   if (!plan) throw new Error("the engine proposed no range plan for the fixture requirement");
-  return {
-    ranges: plan.ranges.map(({ minA, maxA, shuntOhms, gain }) => ({ minA, maxA, shuntOhms, gain })),
-    switchPoints: plan.switchPoints.map((p) => ({ ...p })),
-  };
+  return planChoiceOf(plan);
 }

@@ -50,7 +50,7 @@ export function planPartsList(req: Requirement, ranges: PlanRangeMetrics[]): Par
         `Range ${k + 1}, ${f.amps(r.minA)} to ${f.amps(r.maxA)}. ` +
         (top
           ? `Dissipates ${f.watts(r.dissipationW)} at the maximum current. `
-          : `Rated for ${f.amps(r.faultCurrentA)} (${f.watts(r.faultCurrentA * r.faultCurrentA * r.shuntOhms)}), the most it carries before the protection closes ${d.switch(n - 1)}. `) +
+          : `Rated for ${f.amps(r.faultCurrentA)} (${f.watts(r.faultDissipationW)}), the most it carries before the protection closes ${d.switch(n - 1)}. `) +
         `${kelvinAdviceText(r.shuntOhms)}.`,
     });
   });

@@ -71,7 +71,7 @@ export function planRangeRows(req: Requirement, r: PlanRangeMetrics, k: number, 
   if (!top)
     rows.push({
       label: "Most current before the protection acts",
-      value: `${f.amps(r.faultCurrentA)} (${f.watts(r.faultCurrentA * r.faultCurrentA * r.shuntOhms)} in the shunt)`,
+      value: `${f.amps(r.faultCurrentA)} (${f.watts(r.faultDissipationW)} in the shunt)`,
     });
   return rows;
 }

@@ -1,3 +1,4 @@
+import { planChoiceOf } from "./range-candidates";
 import { describe, expect, it } from "vitest";
 import { seriesValues } from "./eseries";
 import { buildModel } from "./model";
@@ -24,10 +25,7 @@ const hidden = req({
 function proposed(r: Requirement): PlanChoice {
   const plan = solve(r).rangePlan;
   if (!plan) throw new Error("the engine proposed no plan");
-  return {
-    ranges: plan.ranges.map(({ minA, maxA, shuntOhms, gain }) => ({ minA, maxA, shuntOhms, gain })),
-    switchPoints: plan.switchPoints.map((s) => ({ ...s })),
-  };
+  return planChoiceOf(plan);
 }
 
 /** A copy of the plan with one change. */

@@ -36,6 +36,8 @@ export type PlannedRange = {
    * range, the current at which its path's drop reaches the allowed drop and the protection closes.
    */
   faultCurrentA: number;
+  /** What this range's shunt dissipates at faultCurrentA: I²·R, W. */
+  faultDissipationW: number;
   /** Power rating chosen for this range's shunt at faultCurrentA (after derating), W. */
   ratingW: number;
   /** Resolvable steps (readout step or noise, the larger) at this range's bottom current. */
@@ -260,6 +262,7 @@ export function plannedRange(
     switchOhms: ron,
     worstBurdenV: operatingBurden(sub, R + ron),
     faultCurrentA: fault,
+    faultDissipationW: fault * fault * R,
     ratingW: ratingFor(sub, fault * fault * R) || largestRating(sub),
     countsAtBottom: minA / resolvableStepA(sub, R, G),
     settlingS: settlingTime(req, m, G),
@@ -275,7 +278,7 @@ export function protectionText(req: Requirement, m: Model, ranges: PlannedRange[
   const lowerText = lower
     .map(
       (r) =>
-        `the ${formatSI(r.shuntOhms, "Ω")} shunt carries at most ${formatSI(r.faultCurrentA, "A")} (${formatSI(r.faultCurrentA * r.faultCurrentA * r.shuntOhms, "W")}, within its ${formatSI(r.ratingW, "W")} rating after derating)`,
+        `the ${formatSI(r.shuntOhms, "Ω")} shunt carries at most ${formatSI(r.faultCurrentA, "A")} (${formatSI(r.faultDissipationW, "W")}, within its ${formatSI(r.ratingW, "W")} rating after derating)`,
     )
     .join("; ");
   return (
