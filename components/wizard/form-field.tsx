@@ -230,3 +230,6 @@ export function RadioField({
     />
   );
 }
+
+/** The live (worker-side) message for a field path, if the engine refuses what is typed there. */
+export type LiveErrors = (path: string) => string | undefined;

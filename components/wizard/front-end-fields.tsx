@@ -8,9 +8,7 @@ import { formatSI } from "@/lib/design/format";
 import { filterCornerHz, suggestInputFilter } from "@/lib/design/input-filter";
 import { parseQuantity } from "@/lib/design/units";
 import type { WizardValues } from "@/lib/wizard/form-values";
-import { FormField, RadioField, SelectField } from "./form-field";
-
-type LiveErrors = (path: string) => string | undefined;
+import { FormField, RadioField, SelectField, type LiveErrors } from "./form-field";
 
 // The form drops a field's value when the field leaves the screen (shouldUnregister), so a
 // designer who flips between resistor and trace would lose what was typed: keep it per form.

@@ -14,9 +14,7 @@ import {
 } from "@/lib/design/readout-error";
 import { DEFAULT_ZERO_REFERENCE } from "@/lib/design/bidirectional";
 import type { WizardValues } from "@/lib/wizard/form-values";
-import { FormField, SelectField } from "./form-field";
-
-type LiveErrors = (path: string) => string | undefined;
+import { FormField, SelectField, type LiveErrors } from "./form-field";
 
 /** A blank box is "not stated"; anything else is read as a number of LSB or counts. */
 const optionalNumber = (v: unknown) =>

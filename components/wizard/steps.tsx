@@ -12,7 +12,7 @@ import {
   type LibraryAmplifierRow,
   type LibraryShuntRow,
 } from "@/lib/wizard/library";
-import { Choice, FormField, RadioField, SelectField } from "./form-field";
+import { Choice, FormField, RadioField, SelectField, type LiveErrors } from "./form-field";
 import {
   CopperTraceFields,
   InputFilterFields,
@@ -284,6 +284,20 @@ export function ReadoutStep({ live }: { live: LiveErrors }) {
   );
 }
 
+/** How many candidates the table lists: the same field on both kinds of shunt. */
+function CandidateLimitField({ live }: { live: LiveErrors }) {
+  return (
+    <FormField
+      name="limit"
+      label="Candidates listed"
+      kind="number"
+      placeholder="200"
+      hint="The front, then the best of the rest"
+      extraError={live("limit")}
+    />
+  );
+}
+
 export function ShuntStep({ live }: { live: LiveErrors }) {
   const { setValue } = useFormContext<WizardValues>();
   const library = useLibrary();
@@ -304,14 +318,7 @@ export function ShuntStep({ live }: { live: LiveErrors }) {
         <ShuntKindChoice />
         <CopperTraceFields live={live} />
         <ThermalEmfFields live={live} />
-        <FormField
-          name="limit"
-          label="Candidates listed"
-          kind="number"
-          placeholder="200"
-          hint="The front, then the best of the rest"
-          extraError={live("limit")}
-        />
+        <CandidateLimitField live={live} />
       </div>
     );
   return (
@@ -387,14 +394,7 @@ export function ShuntStep({ live }: { live: LiveErrors }) {
       </div>
       <TerminalFields live={live} />
       <ThermalEmfFields live={live} />
-      <FormField
-        name="limit"
-        label="Candidates listed"
-        kind="number"
-        placeholder="200"
-        hint="The front, then the best of the rest"
-        extraError={live("limit")}
-      />
+      <CandidateLimitField live={live} />
     </div>
   );
 }
@@ -653,5 +653,3 @@ export function TemperatureStep({ live }: { live: LiveErrors }) {
     </div>
   );
 }
-
-export type LiveErrors = (path: string) => string | undefined;
