@@ -150,7 +150,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
           {review}
           {!viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} library={library} />}
           <ProfilesPanel design={design} viewer={viewer} />
-          {caller.role !== "maker" && <UnitsPanel design={design} viewer={viewer} />}
+          {!viewer.leadsWithBuildSheet && <UnitsPanel design={design} viewer={viewer} />}
         </>
       )}
     </div>

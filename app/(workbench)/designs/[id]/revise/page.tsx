@@ -5,6 +5,7 @@ import { Wizard } from "@/components/wizard/wizard";
 import { getDesignView } from "@/db/queries/designs";
 import { isUuid } from "@/lib/ids";
 import { requirePageCaller } from "@/lib/auth/gate";
+import { can } from "@/lib/auth/policy";
 
 export const metadata: Metadata = { title: "Revise design" };
 
@@ -14,8 +15,9 @@ export default async function ReviseDesignPage({ params }: { params: Promise<{ i
   const caller = await requirePageCaller(`/designs/${id}/revise`);
   if (!isUuid(id)) notFound();
   const design = await getDesignView(id, caller.teamId);
-  if (!design || (caller.role === "maker" && design.status !== "approved")) notFound();
-  const canSave = caller.role === "owner" || caller.role === "designer";
+  // The policy says who may see the design and who may save its next revision.
+  if (!design || !can(caller, "design.read", design)) notFound();
+  const canSave = can(caller, "design.edit");
   return (
     <div className="flex flex-col gap-4">
       <div>
