@@ -14,7 +14,7 @@ import {
 import { useMemo, useState } from "react";
 import { SortableHead } from "@/components/candidates/sortable-head";
 import { isInSeries, type SeriesName } from "@/lib/design/eseries";
-import { rejectReasonLabels } from "@/lib/design/pair";
+import { rejectReasonLabels } from "@/lib/design/reject-reasons";
 import type { Candidate } from "@/lib/design/types";
 import { formatPercent, formatSI } from "@/lib/design/format";
 import { Badge } from "@/components/ui/badge";

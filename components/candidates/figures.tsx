@@ -1,7 +1,6 @@
 // Every figure of one candidate, grouped, in SI with prefixes.
-import { rejectReasonLabels } from "@/lib/design/pair";
+import { rejectReasonLabels } from "@/lib/design/reject-reasons";
 import type { Requirement } from "@/lib/design/requirement";
-import { outputCeilingV } from "@/lib/design/model";
 import type { CandidateDetail } from "@/lib/design/types";
 import { formatPercent, formatSI } from "@/lib/design/format";
 
@@ -17,7 +16,11 @@ const loadNotes: Record<Requirement["load"]["model"], string> = {
 /** Figures added in v2; a design saved before them has none: shown as a dash. */
 const maybe = (v: number | undefined, unit: string) => (v === undefined ? "—" : formatSI(v, unit));
 
-export function figureGroups(req: Requirement, m: CandidateDetail): { title: string; rows: Row[] }[] {
+export function figureGroups(
+  req: Requirement,
+  m: CandidateDetail,
+  outputCeilingV: number,
+): { title: string; rows: Row[] }[] {
   const pct = (v: number | null) => (v === null ? "—" : formatPercent(v / 100));
   return [
     {
@@ -70,7 +73,7 @@ export function figureGroups(req: Requirement, m: CandidateDetail): { title: str
         [
           "Output at full load, worst case",
           maybe(m.outputAtMaxWorstV, "V"),
-          `with every error that can raise it; must stay within ${formatSI(outputCeilingV(req), "V")} (the readout's full scale less its own worst errors, or the amplifier's swing, the lower)`,
+          `with every error that can raise it; must stay within ${formatSI(outputCeilingV, "V")} (the readout's full scale less its own worst errors, or the amplifier's swing, the lower)`,
         ],
         ["Headroom", formatSI(m.headroomV, "V")],
         ["Readout step (LSB)", formatSI(m.lsbA, "A")],
@@ -115,7 +118,7 @@ export function figureGroups(req: Requirement, m: CandidateDetail): { title: str
   ];
 }
 
-export function Figures({ req, m }: { req: Requirement; m: CandidateDetail }) {
+export function Figures({ req, m, outputCeilingV }: { req: Requirement; m: CandidateDetail; outputCeilingV: number }) {
   return (
     <div className="flex flex-col gap-3">
       {!m.feasible && (
@@ -129,7 +132,7 @@ export function Figures({ req, m }: { req: Requirement; m: CandidateDetail }) {
         </div>
       )}
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
-        {figureGroups(req, m).map((g) => (
+        {figureGroups(req, m, outputCeilingV).map((g) => (
           <div key={g.title}>
             <h4 className="mb-1 text-2xs font-semibold tracking-wide text-ink-faint">{g.title}</h4>
             <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-xs">

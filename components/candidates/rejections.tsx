@@ -1,5 +1,5 @@
 // Why pairs were refused: counts by first failing constraint, in plain words.
-import { rejectReasonLabels, rejectReasons, type RejectReason } from "@/lib/design/pair";
+import { rejectReasonLabels, rejectReasons, type RejectReason } from "@/lib/design/reject-reasons";
 
 export function Rejections({
   rejected,

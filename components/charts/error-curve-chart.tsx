@@ -1,13 +1,14 @@
 "use client";
 // Worst-case error (% of reading) against current across the span, log–log, for the selected
 // candidate and pinned ones, with the accuracy target drawn over its band.
-import { Axis, Grid, LineSeries, XYChart } from "@visx/xychart";
+import { LineSeries, XYChart } from "@visx/xychart";
 import { useId, useMemo } from "react";
 import type { ErrorCurvePoint } from "@/lib/design/error-budget";
 import { formatPercent, formatSI } from "@/lib/design/format";
 import { ChartTooltip } from "./chart-tooltip";
 import { SeriesTip } from "./series-tip";
-import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, percentTick, siTick } from "./axes";
+import { chartMargin, logDomain, percentTick, siTick } from "./axes";
+import { ChartAxes } from "./chart-axes";
 import { chartTheme, usePalette } from "./palette";
 import { useWidth } from "./use-width";
 import { LimitLine } from "@/components/charts/limit-line";
@@ -76,20 +77,10 @@ export function ErrorCurveChart({
                 />
               </clipPath>
             </defs>
-            <Grid columns rows numTicks={6} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
-            <Axis
-              orientation="bottom"
-              labelOffset={bottomLabelOffset}
-              label={negative ? "Current, I < 0" : "Current"}
-              tickValues={logTicks(xd[0], xd[1])}
-              tickFormat={xTick}
-            />
-            <Axis
-              orientation="left"
-              labelOffset={leftLabelOffset}
-              label="Error, % of reading"
-              tickValues={logTicks(yd[0], yd[1])}
-              tickFormat={percentTick}
+            <ChartAxes
+              gridStroke={p.line}
+              x={{ label: negative ? "Current, I < 0" : "Current", tick: xTick, logDomain: xd }}
+              y={{ label: "Error, % of reading", tick: percentTick, logDomain: yd }}
             />
             <LimitLine name="Accuracy target" at={targetPercent} span={[bandMinA, bandMaxA]} stroke={p.bad} />
             {series.map((s, i) => (

@@ -1,11 +1,12 @@
 "use client";
 // What the shunt does to the load across the span: burden (log–log) and the voltage left at
 // the load (log current, linear volts) with the load's minimum.
-import { Axis, Grid, LineSeries, Tooltip, XYChart } from "@visx/xychart";
+import { LineSeries, Tooltip, XYChart } from "@visx/xychart";
 import { useMemo } from "react";
 import type { LoadCurvePoint } from "@/lib/design/error-budget";
 import { formatSI } from "@/lib/design/format";
-import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, siTick } from "./axes";
+import { chartMargin, logDomain, siTick } from "./axes";
+import { ChartAxes } from "./chart-axes";
 import { chartTheme, usePalette } from "./palette";
 import { useWidth } from "./use-width";
 import { LimitLine } from "@/components/charts/limit-line";
@@ -35,6 +36,7 @@ export function LoadChart({
   const lo = Math.min(loadMinV ?? supplyV, ...ok.map((q) => q.loadVoltageV));
   const yd: [number, number] = [Math.max(0, lo - 0.08 * supplyV), supplyV * 1.02];
   const yb = logDomain([...ok.map((q) => q.burdenV), dropMaxV]);
+  const currentAxis = { label: "Current", tick: siTick("A"), logDomain: xd };
   const half = width > 640 ? Math.floor((width - 16) / 2) : width;
   const tip = (unit: string) => (
     <Tooltip<Pt>
@@ -52,6 +54,7 @@ export function LoadChart({
   );
   return (
     <div ref={ref} data-testid="load-chart" className="flex flex-wrap gap-4">
+      {width === 0 && <div className="w-full" style={{ height: HEIGHT }} aria-hidden />}
       {width > 0 && ok.length > 0 && (
         <>
           <XYChart
@@ -63,20 +66,11 @@ export function LoadChart({
             yScale={{ type: "linear", domain: yd, zero: false }}
             accessibilityLabel="Voltage left at the load against current"
           >
-            <Grid columns rows numTicks={5} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
-            <Axis
-              orientation="bottom"
-              labelOffset={bottomLabelOffset}
-              label="Current"
-              tickValues={logTicks(xd[0], xd[1])}
-              tickFormat={siTick("A")}
-            />
-            <Axis
-              orientation="left"
-              labelOffset={leftLabelOffset}
-              label="Voltage at the load"
-              numTicks={5}
-              tickFormat={siTick("V", 3)}
+            <ChartAxes
+              gridStroke={p.line}
+              gridTicks={5}
+              x={currentAxis}
+              y={{ label: "Voltage at the load", tick: siTick("V", 3) }}
             />
             <LimitLine name="Supply" at={supplyV} span={xd} stroke={p.faint} dash="3 3" strokeWidth={1} />
             {loadMinV !== undefined && <LimitLine name="Load minimum" at={loadMinV} span={xd} stroke={p.bad} />}
@@ -99,20 +93,11 @@ export function LoadChart({
             yScale={{ type: "log", domain: yb }}
             accessibilityLabel="Burden voltage against current"
           >
-            <Grid columns rows numTicks={5} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
-            <Axis
-              orientation="bottom"
-              labelOffset={bottomLabelOffset}
-              label="Current"
-              tickValues={logTicks(xd[0], xd[1])}
-              tickFormat={siTick("A")}
-            />
-            <Axis
-              orientation="left"
-              labelOffset={leftLabelOffset}
-              label="Burden (drop across the shunt)"
-              tickValues={logTicks(yb[0], yb[1])}
-              tickFormat={siTick("V")}
+            <ChartAxes
+              gridStroke={p.line}
+              gridTicks={5}
+              x={currentAxis}
+              y={{ label: "Burden (drop across the shunt)", tick: siTick("V"), logDomain: yb }}
             />
             <LimitLine name="Allowed drop" at={dropMaxV} span={xd} stroke={p.warn} />
             <LineSeries

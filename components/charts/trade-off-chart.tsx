@@ -1,13 +1,14 @@
 "use client";
 // Burden at Imax against worst-case error at Imin, both log: every listed feasible candidate,
 // the Pareto front as a line, gains told apart by shape and shade; click a point to select it.
-import { Axis, GlyphSeries, Grid, LineSeries, XYChart } from "@visx/xychart";
+import { GlyphSeries, LineSeries, XYChart } from "@visx/xychart";
 import { useMemo } from "react";
 import type { Candidate } from "@/lib/design/types";
 import { formatPercent, formatSI } from "@/lib/design/format";
 import { candidateKey } from "@/lib/wizard/candidate-key";
 import { gainGroups } from "@/lib/wizard/gain-groups";
-import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, percentTick, siTick } from "./axes";
+import { chartMargin, logDomain, percentTick, siTick } from "./axes";
+import { ChartAxes } from "./chart-axes";
 import { ChartTooltip } from "./chart-tooltip";
 import { Shape, ShapeIcon, shapeNames } from "./glyphs";
 import { chartTheme, shade, usePalette } from "./palette";
@@ -70,20 +71,10 @@ export function TradeOffChart({
             }}
             pointerEventsDataKey="nearest"
           >
-            <Grid columns rows numTicks={6} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
-            <Axis
-              orientation="bottom"
-              labelOffset={bottomLabelOffset}
-              label="Burden at maximum current"
-              tickValues={logTicks(xd[0], xd[1])}
-              tickFormat={siTick("V")}
-            />
-            <Axis
-              orientation="left"
-              labelOffset={leftLabelOffset}
-              label="Error at minimum current"
-              tickValues={logTicks(yd[0], yd[1])}
-              tickFormat={percentTick}
+            <ChartAxes
+              gridStroke={p.line}
+              x={{ label: "Burden at maximum current", tick: siTick("V"), logDomain: xd }}
+              y={{ label: "Error at minimum current", tick: percentTick, logDomain: yd }}
             />
             <LimitLine
               name="Allowed drop"

@@ -2,8 +2,9 @@
 // Overlaid curves of the compared designs: worst-case error and burden against current, log–log.
 // The series are computed by the engine on the server; this only draws them.
 import { scaleLog } from "@visx/scale";
-import { Axis, Grid, LineSeries, XYChart, buildChartTheme } from "@visx/xychart";
+import { LineSeries, XYChart, buildChartTheme } from "@visx/xychart";
 import { formatPercent, formatSI } from "@/lib/design/format";
+import { ChartAxes } from "@/components/charts/chart-axes";
 import { useWidth } from "@/components/charts/use-width";
 import { seriesColours } from "./colours";
 
@@ -31,12 +32,6 @@ function logDomain(values: number[]): [number, number] {
   return [a, b > a ? b : a * 10];
 }
 
-/** The decades of a log domain: the scale's own ticks that are powers of ten. */
-const decades = (domain: [number, number]) =>
-  scaleLog({ domain })
-    .ticks()
-    .filter((t) => Math.abs(Math.log10(t) - Math.round(Math.log10(t))) < 1e-9);
-
 const margin = { top: 12, right: 16, bottom: 40, left: 76 };
 
 export function CurveChart({
@@ -56,50 +51,44 @@ export function CurveChart({
   height: number;
   testId: string;
 }) {
-  // Up to `width`, narrower when the frame is (a phone): never wider than what holds it.
+  // Up to `width`, narrower when the frame is (a phone): never wider than what holds it. Until the
+  // frame is measured a blank of the chart's height holds its place, so no width is guessed.
   const { ref, width: room } = useWidth<HTMLElement>();
-  const drawn = room > 0 ? Math.min(width, Math.max(280, room)) : width;
+  const drawn = room > 0 ? Math.min(width, Math.max(280, room)) : 0;
   const xd = logDomain(series.flatMap((s) => s.points.map((p) => p.x)));
   const yd = logDomain(series.flatMap((s) => s.points.map((p) => p.y)));
   const fmtY = (v: number) => (yUnit === "%" ? formatPercent(v / 100) : formatSI(v, yUnit));
   return (
     <figure ref={ref} className="flex min-w-0 flex-col gap-1" data-testid={testId}>
       <figcaption className="text-xs font-semibold text-ink-muted">{title}</figcaption>
-      <XYChart
-        width={drawn}
-        height={height}
-        margin={margin}
-        theme={theme}
-        xScale={{ type: "log", domain: xd }}
-        yScale={{ type: "log", domain: yd }}
-        accessibilityLabel={title}
-      >
-        <Grid columns rows numTicks={6} lineStyle={{ strokeWidth: 0.5 }} />
-        <Axis
-          orientation="bottom"
-          label="Current"
-          tickValues={decades(xd)}
-          tickFormat={(v: number) => formatSI(v, "A")}
-        />
-        <Axis
-          orientation="left"
-          label={yLabel}
-          labelOffset={44}
-          tickValues={decades(yd)}
-          tickFormat={(v: number) => fmtY(v)}
-        />
-        {series.map((s, i) => (
-          <LineSeries
-            key={s.key}
-            dataKey={s.label}
-            data={s.points.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y) && p.x > 0 && p.y > 0)}
-            xAccessor={(d: { x: number; y: number }) => d.x}
-            yAccessor={(d: { x: number; y: number }) => d.y}
-            stroke={seriesColours[i % seriesColours.length]}
-            strokeWidth={2}
+      {drawn === 0 && <div style={{ height }} aria-hidden />}
+      {drawn > 0 && (
+        <XYChart
+          width={drawn}
+          height={height}
+          margin={margin}
+          theme={theme}
+          xScale={{ type: "log", domain: xd }}
+          yScale={{ type: "log", domain: yd }}
+          accessibilityLabel={title}
+        >
+          <ChartAxes
+            x={{ label: "Current", tick: (v) => formatSI(v, "A"), logDomain: xd }}
+            y={{ label: yLabel, tick: fmtY, logDomain: yd }}
           />
-        ))}
-      </XYChart>
+          {series.map((s, i) => (
+            <LineSeries
+              key={s.key}
+              dataKey={s.label}
+              data={s.points.filter((p) => Number.isFinite(p.x) && Number.isFinite(p.y) && p.x > 0 && p.y > 0)}
+              xAccessor={(d: { x: number; y: number }) => d.x}
+              yAccessor={(d: { x: number; y: number }) => d.y}
+              stroke={seriesColours[i % seriesColours.length]}
+              strokeWidth={2}
+            />
+          ))}
+        </XYChart>
+      )}
       <ul className="flex flex-wrap gap-3 text-xs">
         {series.map((s, i) => (
           <li key={s.key} className="flex items-center gap-1.5">

@@ -2,7 +2,7 @@
 
 import { keepPreviousData, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
-import { ProfileChart, useProfileWidth } from "@/components/profile/profile-chart";
+import { PROFILE_CHART_HEIGHT, ProfileChart, useProfileWidth } from "@/components/profile/profile-chart";
 import { ProfileSummaryView } from "@/components/profile/profile-summary";
 import { UploadForm } from "@/components/profile/upload-form";
 import { Button } from "@/components/ui/button";
@@ -163,6 +163,8 @@ function ProfileDetail({
       }
       return getJson<Detail>(`/api/designs/${designId}/profiles/${profileId}?${q.toString()}`);
     },
+    // The server decimates to the chart's pixels: ask once the frame is measured.
+    enabled: width > 0,
     placeholderData: keepPreviousData,
   });
   const d = query.data;
@@ -228,7 +230,7 @@ function ProfileDetail({
         </>
       )}
       <div ref={ref} className="w-full overflow-hidden">
-        {d && (
+        {d && width > 0 && (
           <ProfileChart
             series={d.series}
             width={width}
@@ -245,7 +247,11 @@ function ProfileDetail({
           />
         )}
         {!d && !query.isError && (
-          <div className="h-[426px] animate-pulse rounded bg-sunken" aria-label="Loading the chart" />
+          <div
+            className="animate-pulse rounded bg-sunken"
+            style={{ height: PROFILE_CHART_HEIGHT }}
+            aria-label="Loading the chart"
+          />
         )}
       </div>
       {d && (

@@ -2,14 +2,15 @@
 // "What does my meter's current range do to my circuit?" The figures come from /api/insertion
 // for all three load behaviours; the curves from the engine's insertionCurve.
 import { useQueries } from "@tanstack/react-query";
-import { Axis, Grid, LineSeries, Tooltip, XYChart } from "@visx/xychart";
+import { LineSeries, Tooltip, XYChart } from "@visx/xychart";
 import { useEffect, useMemo, useState } from "react";
 import { insertionCurve, insertionSchema, type InsertionResult } from "@/lib/design/insertion";
 import { benchMeterRanges } from "@/lib/design/plan-stretches";
 import type { ApiError, InsertionBody } from "@/lib/api-description/responses";
 import { loadModels, type LoadModel } from "@/lib/design/requirement";
 import { formatPercent, formatSI } from "@/lib/design/format";
-import { bottomLabelOffset, chartMargin, leftLabelOffset, logDomain, logTicks, siTick } from "@/components/charts/axes";
+import { chartMargin, logDomain, siTick } from "@/components/charts/axes";
+import { ChartAxes } from "@/components/charts/chart-axes";
 import { SeriesTip } from "@/components/charts/series-tip";
 import { chartTheme, usePalette } from "@/components/charts/palette";
 import { useWidth } from "@/components/charts/use-width";
@@ -309,20 +310,15 @@ function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertio
             yScale={{ type: "linear", domain: yd }}
             accessibilityLabel="Voltage at the load against load current"
           >
-            <Grid columns rows numTicks={5} lineStyle={{ stroke: p.line, strokeWidth: 0.5 }} />
-            <Axis
-              orientation="bottom"
-              labelOffset={bottomLabelOffset}
-              label={back ? "Current flowing back (magnitude)" : "Load current at full supply"}
-              tickValues={logTicks(xd[0], xd[1])}
-              tickFormat={siTick("A")}
-            />
-            <Axis
-              orientation="left"
-              labelOffset={leftLabelOffset}
-              label="Voltage at the load"
-              numTicks={5}
-              tickFormat={siTick("V", 3)}
+            <ChartAxes
+              gridStroke={p.line}
+              gridTicks={5}
+              x={{
+                label: back ? "Current flowing back (magnitude)" : "Load current at full supply",
+                tick: siTick("A"),
+                logDomain: xd,
+              }}
+              y={{ label: "Voltage at the load", tick: siTick("V", 3) }}
             />
             <LimitLine
               name="now"

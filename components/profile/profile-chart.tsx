@@ -18,11 +18,18 @@ const M = { left: 64, right: 64, top: 12, gap: 34, bottom: 30 };
 const CURRENT_H = 230;
 const VOLTAGE_H = 120;
 
-/** Follows the parent's width (explicit height), so the server pixels asked for match the drawing. */
-export function useProfileWidth(initial = 800) {
-  const { ref, width } = useWidth<HTMLDivElement>(initial);
-  return { ref, width: Math.max(320, width || initial) };
+/**
+ * Follows the parent's width (explicit height), so the server pixels asked for match the drawing:
+ * 0 until the parent is measured (nothing is drawn or asked for at a guessed width), then at least
+ * 320 px (narrower, the frame scrolls).
+ */
+export function useProfileWidth() {
+  const { ref, width } = useWidth<HTMLDivElement>();
+  return { ref, width: width > 0 ? Math.max(320, width) : 0 };
 }
+
+/** The chart's whole height, for the place it holds while loading. */
+export const PROFILE_CHART_HEIGHT = M.top + CURRENT_H + M.gap + VOLTAGE_H + M.bottom;
 
 /** A linear scale's round ticks (1, 2, 5 × 10^n). */
 const linearTicks = (lo: number, hi: number, count: number) => scaleLinear({ domain: [lo, hi] }).ticks(count);
@@ -46,7 +53,7 @@ export function ProfileChart({
   onZoom: (fromS: number, toS: number) => void;
 }) {
   const plotW = Math.max(10, width - M.left - M.right);
-  const height = M.top + CURRENT_H + M.gap + VOLTAGE_H + M.bottom;
+  const height = PROFILE_CHART_HEIGHT;
   const { fromS, toS } = series;
   const span = toS - fromS || 1;
   const xScale = scaleLinear({ domain: [fromS, fromS + span], range: [M.left, M.left + plotW] });

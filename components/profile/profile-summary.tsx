@@ -5,7 +5,7 @@ import { Field, TextInput } from "@/components/ui/field";
 import { formatSI } from "@/lib/design/format";
 import { batteryLifeS, type ProfileSummary } from "@/lib/design/profile";
 import type { PlanProfileSummary } from "@/lib/design/plan-switching";
-import { formatDuration, parseCapacityC } from "@/lib/profile/capacity";
+import { formatDuration } from "@/lib/profile/duration";
 
 const pct = (p: number) => `${String(Number(p.toPrecision(3)))} %`;
 
@@ -124,12 +124,29 @@ function PlanFigures({ summary }: { summary: PlanProfileSummary }) {
   );
 }
 
+type CapacityParser = (text: string) => number | null;
+
 function BatteryLife({ averageCurrentA }: { averageCurrentA: number }) {
   const [text, setText] = useState("");
-  const capacity = text.trim() === "" ? null : parseCapacityC(text);
+  // The capacity parser (the engine's unit parser) loads when the field is first used, not with the page.
+  const [parser, setParser] = useState<CapacityParser | "loading" | "failed" | null>(null);
+  const loadParser = () => {
+    if (parser !== null && parser !== "failed") return;
+    setParser("loading");
+    import("@/lib/profile/capacity").then(
+      (m) => setParser(() => m.parseCapacityC),
+      () => setParser("failed"),
+    );
+  };
+  const typed = text.trim() !== "";
+  const capacity = typed && typeof parser === "function" ? parser(text) : null;
   const life = capacity === null ? null : batteryLifeS(capacity, averageCurrentA);
   const error =
-    text.trim() !== "" && capacity === null ? 'Write a capacity such as "220 mAh", "2.4 Ah" or "800 C"' : undefined;
+    parser === "failed"
+      ? "The capacity check could not be loaded; type again to retry."
+      : typed && typeof parser === "function" && capacity === null
+        ? 'Write a capacity such as "220 mAh", "2.4 Ah" or "800 C"'
+        : undefined;
   return (
     <div className="flex flex-wrap items-start gap-4 rounded border border-line bg-sunken/40 px-3 py-2">
       <div className="w-56">
@@ -138,7 +155,11 @@ function BatteryLife({ averageCurrentA }: { averageCurrentA: number }) {
             id="battery-capacity"
             value={text}
             placeholder="220 mAh"
-            onChange={(e) => setText(e.target.value)}
+            onFocus={loadParser}
+            onChange={(e) => {
+              loadParser();
+              setText(e.target.value);
+            }}
             aria-invalid={error ? true : undefined}
           />
         </Field>

@@ -1,20 +1,43 @@
 "use client";
 // Typing in one unit's readings from the sheet: a serial, the date, and one field per test point.
 // The same zod schema as the route checks it here first; the server's refusals land on their fields.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, type Resolver } from "react-hook-form";
 import type { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
 import type { ApiError, UnitBody } from "@/lib/api-description/responses";
-import { recordUnitSchema, todayIso } from "@/lib/built-units/schemas";
+import type { recordUnitSchema } from "@/lib/built-units/schemas";
+import { todayIso } from "@/lib/built-units/today";
 import { formatSI } from "@/lib/design/format";
 import type { BenchCheckRow } from "@/lib/design/bench-check";
 
 // The form holds what a person types (the schema's input) and submits what the schema reads (its output).
 type Typed = z.input<typeof recordUnitSchema>;
 type Read = z.output<typeof recordUnitSchema>;
+
+// The schema and its unit parser load on the form's first focus (or submit), once per page.
+let loading: Promise<Resolver<Typed, unknown, Read>> | null = null;
+const loadResolver = () =>
+  (loading ??= import("./record-unit-resolver").then(
+    (m) => m.recordUnitResolver,
+    (e: unknown) => {
+      loading = null;
+      throw e;
+    },
+  ));
+const resolver: Resolver<Typed, unknown, Read> = async (values, context, options) => {
+  try {
+    return await (
+      await loadResolver()
+    )(values, context, options);
+  } catch {
+    return {
+      values: {},
+      errors: { root: { type: "load", message: "The form's checks could not be loaded; try again." } },
+    };
+  }
+};
 
 export function RecordUnitForm({
   designId,
@@ -27,7 +50,7 @@ export function RecordUnitForm({
 }) {
   const [message, setMessage] = useState<string | null>(null);
   const form = useForm<Typed, unknown, Read>({
-    resolver: zodResolver(recordUnitSchema),
+    resolver,
     defaultValues: {
       serial: "",
       builtOn: todayIso(),
@@ -60,6 +83,7 @@ export function RecordUnitForm({
   return (
     <form
       onSubmit={form.handleSubmit(submit)}
+      onFocus={() => void loadResolver().catch(() => undefined)}
       noValidate
       aria-label="Record a built unit"
       className="flex flex-col gap-3"
@@ -114,7 +138,7 @@ export function RecordUnitForm({
           {isSubmitting ? "Recording…" : "Record unit"}
         </Button>
         <p aria-live="polite" className="text-sm text-bad">
-          {message}
+          {message ?? errors.root?.message}
         </p>
       </div>
     </form>

@@ -1,7 +1,7 @@
 // The build sheet's share of issue 14: a copper-trace shunt's geometry and Kelvin taps, a
 // 2-terminal shunt's pads, the input filter's parts, and the rows that state them.
 import { copperTempcoAt, ipc2221Rise } from "@/lib/design/copper-trace";
-import { traceLengthOf } from "@/lib/design/front-end";
+import { jointThermalEmfV, traceLengthOf } from "@/lib/design/front-end";
 import { filterCornerHz } from "@/lib/design/input-filter";
 import type { Requirement } from "@/lib/design/requirement";
 import type { CandidateDetail, Choice } from "@/lib/design/types";
@@ -120,7 +120,7 @@ export function constructionRows(req: Requirement): { label: string; value: stri
   if (s.gradient > 0)
     rows.push({
       label: "Thermal EMF at the shunt's joints",
-      value: `${f.volts(s.thermalEmf)}/K over ${f.kelvin(s.gradient)}: ${f.volts(s.thermalEmf * s.gradient)}`,
+      value: `${f.volts(s.thermalEmf)}/K over ${f.kelvin(s.gradient)}: ${f.volts(jointThermalEmfV(s))}`,
     });
   return rows;
 }

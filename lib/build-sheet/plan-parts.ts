@@ -1,7 +1,7 @@
 // The parts list of a range plan: a shunt, a switch and an amplifier per range, the gain parts,
 // the protection that keeps a low range alive at full current, decoupling and connectors. Values
 // come from the saved requirement and plan; figures from the engine (evaluatePlan).
-import type { PlanRangeMetrics, Requirement } from "@/lib/design";
+import { rangeSwitchW, type PlanRangeMetrics, type Requirement } from "@/lib/design";
 import * as f from "./format";
 import {
   amplifierPart,
@@ -72,7 +72,7 @@ export function planPartsList(req: Requirement, ranges: PlanRangeMetrics[]): Par
       notes:
         `Blocks at least ${f.volts(vSwitch)} (twice the supply) and carries ${f.amps(current)} ` +
         (top
-          ? `continuously (${f.watts(current * current * ron)} at ${f.ohms(ron)}); the protection closes it at full current.`
+          ? `continuously (${f.watts(rangeSwitchW(req, current))} at ${f.ohms(ron)}); the protection closes it at full current.`
           : `until the protection acts (the range's own top is ${f.amps(r.maxA)}).`) +
         ` Its on-resistance is in the plan's drop: a higher one takes the range past the allowed ${f.volts(req.drop.max)}.`,
     });

@@ -49,7 +49,4 @@ export const editUnitSchema = z.object({
 });
 export type EditUnitBody = z.infer<typeof editUnitSchema>;
 
-/** Today's date in UTC as YYYY-MM-DD (the default "date built"). */
-export function todayIso(now = new Date()): string {
-  return now.toISOString().slice(0, 10);
-}
+export { todayIso } from "./today";

@@ -40,6 +40,11 @@ export type FrontEnd = {
   trace: { width: number; thickness: number; layer: TraceLayer } | null;
 };
 
+/** Thermal EMF of the shunt's joints: their coefficient times the gradient across the shunt, V. */
+export function jointThermalEmfV(shunt: Pick<Requirement["shunt"], "thermalEmf" | "gradient">): number {
+  return shunt.thermalEmf * shunt.gradient;
+}
+
 /** The input filter's, pads' and joints' figures for a requirement; `dTamb` the ambient excursion from 25 °C, K. */
 export function buildFrontEnd(req: Requirement, dTamb: number, vCm: number, difference: boolean): FrontEnd {
   const f = req.inputFilter;
@@ -52,7 +57,7 @@ export function buildFrontEnd(req: Requirement, dTamb: number, vCm: number, diff
     filterBiasV: f ? filterBiasErrorV(f, a.biasCurrent, ios) : 0,
     filterLoading: f && difference ? differenceLoading(f) : 0,
     filterCmV: f && difference ? differenceFilterCmV(f, vCm) : 0,
-    thermalEmfV: s.thermalEmf * s.gradient,
+    thermalEmfV: jointThermalEmfV(s),
     padOhms: s.padResistance,
     padOhmsWorst: s.padResistance * (1 + copperTempcoAt(25) * dTamb),
     trace: s.trace ? { width: s.trace.width, thickness: s.trace.thickness, layer: s.trace.layer } : null,

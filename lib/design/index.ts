@@ -44,7 +44,7 @@ export * from "./plan-choice";
 export { evaluatePlan, type PlanEvaluation, type PlanMetrics, type PlanRangeMetrics } from "./plan-evaluation";
 export * from "./design-kind";
 export * from "./plan-cautions";
-export * from "./plan-curves";
+export * from "./plan-stretches";
 export * from "./plan-switching";
 export * from "./plan-netlist";
 export * from "./resistor-code";

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { planCautions, unprotectedShuntW } from "./plan-cautions";
+import { planCautions, rangeSwitchW, unprotectedShuntW } from "./plan-cautions";
 import { evaluatePlan } from "./plan-evaluation";
 import { solve } from "./solve";
 import { req } from "./test-helpers";
@@ -32,5 +32,14 @@ describe("cautions for a range plan", () => {
     expect(keys).toContain("fuse");
     expect(keys).toContain("codes");
     expect(keys.indexOf("range-switch")).toBeLessThan(keys.indexOf("fuse"));
+  });
+});
+
+describe("the range switch's own dissipation", () => {
+  it("is I²·Ron (Joule's law), with the default Ron of a tenth of the drop at full current", () => {
+    // DEFAULTS.md: Ron = 0.1 · 60 mV / 180 mA = 33.3 mΩ; 180 mA² · 33.3 mΩ = 1.08 mW (by hand).
+    expect(logger.rangeSwitch.onResistance).toBeCloseTo(0.006 / 0.18, 12);
+    expect(rangeSwitchW(logger, 0.18)).toBeCloseTo(1.08e-3, 12);
+    expect(rangeSwitchW(logger, -0.18)).toBeCloseTo(1.08e-3, 12);
   });
 });

@@ -15,6 +15,14 @@ export function unprotectedShuntW(req: Requirement, r: Pick<PlanRangeMetrics, "s
   return Math.min(req.current.max ** 2 * R, req.supply.voltage ** 2 / R);
 }
 
+/**
+ * What a range switch dissipates carrying `currentA` through its on-resistance (Joule's law,
+ * P = I²·Ron): the top range's switch carries the span's maximum continuously.
+ */
+export function rangeSwitchW(req: Requirement, currentA: number): number {
+  return currentA ** 2 * req.rangeSwitch.onResistance;
+}
+
 export function planCautions(req: Requirement, metrics: PlanMetrics): Caution[] {
   const ranges = metrics.ranges;
   const hottest = ranges.reduce((k, r, i) => (r.selfHeatingK > (ranges[k]?.selfHeatingK ?? -Infinity) ? i : k), 0);

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { benchMeterRanges, meterBesidePlan, planStretches } from "./plan-stretches";
+import { benchMeterRanges, meterBesidePlan, planCurve, planStretches, rangeInUse } from "./plan-stretches";
 import { planChoiceOf } from "./range-candidates";
 import { solve } from "./solve";
 import { req } from "./test-helpers";
@@ -98,5 +98,43 @@ describe("a bench meter's ranges beside the plan, same load", () => {
     // RL = 3.0 V / 180 mA = 16.667 Ω; 3.0 · 16.667 / (16.667 + 1.9) = 2.6930 V (by hand).
     expect(q.loadVoltageV).toBeCloseTo((3.0 * (3.0 / 0.18)) / (3.0 / 0.18 + 1.9), 9);
     expect(q.loadVoltageV).toBeCloseTo(2.693, 3);
+  });
+});
+
+describe("the plan along the span, the range in use on a rising current", () => {
+  it("uses range k up to its switch-up point, then the next", () => {
+    const up = plan.switchPoints[0]?.upA ?? NaN;
+    expect(rangeInUse(plan, logger.current.min)).toBe(0);
+    expect(rangeInUse(plan, up)).toBe(0);
+    expect(rangeInUse(plan, up * 1.01)).toBe(1);
+    expect(rangeInUse(plan, logger.current.max)).toBe(plan.ranges.length - 1);
+  });
+
+  it("drops I·(R + Ron) on the load (Ohm's law, constant-current load) and stays within the allowed drop", () => {
+    const curve = planCurve(logger, plan, 40);
+    expect(curve[0]?.currentA).toBe(3e-6);
+    expect(curve.at(-1)?.currentA).toBe(0.18);
+    for (const p of curve) {
+      const r = plan.ranges[p.range];
+      if (!r) throw new Error("no range");
+      expect(p.burdenV).toBeCloseTo(p.currentA * (r.shuntOhms + ron), 12);
+      expect(p.loadVoltageV).toBeCloseTo(3 - p.burdenV, 12);
+      expect(p.burdenV).toBeLessThanOrEqual(0.06 * (1 + 1e-9));
+      expect(p.worstPercent).toBeGreaterThan(0);
+    }
+    // Every range takes part.
+    expect(new Set(curve.map((p) => p.range)).size).toBe(plan.ranges.length);
+  });
+
+  it("agrees with the stretches where both read the same range at the same current (the span's ends)", () => {
+    const curve = planCurve(logger, plan, 40);
+    const stretches = planStretches(logger, plan, 25);
+    const first = stretches.ranges[0]!.points[0]!;
+    const last = stretches.ranges.at(-1)!.points.at(-1)!;
+    // The lowest range starts at the span's minimum and the top one ends at its maximum.
+    expect(first.currentA).toBe(logger.current.min);
+    expect(last.currentA).toBe(logger.current.max);
+    expect(curve[0]).toEqual({ ...first, range: 0 });
+    expect(curve.at(-1)).toEqual({ ...last, range: plan.ranges.length - 1 });
   });
 });

@@ -1,8 +1,9 @@
-// A range plan as one instrument across the span: each range's error, drop and load voltage over
-// its own stretch (for the charts), and the voltage a plan leaves the load beside a bench meter's
-// current ranges on the same load.
+// A range plan as one instrument across the span, the one place its curves are worked out: each
+// range's error, drop and load voltage over its own stretch (the wizard's plan charts), the same
+// figures along the span with the range in use on a rising current (the compare page), and the
+// voltage a plan leaves the load beside a bench meter's current ranges on the same load.
 import { errorAtWith, logSpace } from "./error-budget";
-import { buildModel, operatingBurden } from "./model";
+import { buildModel, operatingBurden, type Model } from "./model";
 import { operatingCurrent } from "./insertion";
 import type { PlanChoice, SwitchPoint } from "./plan-choice";
 import { subModel } from "./range-plan";
@@ -38,28 +39,28 @@ export type PlanStretches = {
 };
 
 /**
- * Each range over its own stretch [minA, maxA] (the stretches overlap in the hysteresis bands):
- * the worst-case and RSS error of docs/model.md §3 with that range's pair, rating and
- * self-heating (range-plan.ts subModel), and the drop I·(R + Ron) of its path in the
- * requirement's load model (operatingBurden with the load drawing I at full supply).
+ * One range read at current I: the worst-case and RSS error of docs/model.md §3 with that range's
+ * pair, rating and self-heating (`sub`, range-plan.ts subModel), and the drop I·(R + Ron) of its
+ * path in the requirement's load model (operatingBurden with the load drawing I at full supply).
  */
+function rangeAt(req: Requirement, sub: Model, r: PlanChoice["ranges"][number], I: number): PlanStretchPoint {
+  const e = errorAtWith(req, sub, { shuntOhms: r.shuntOhms, gain: r.gain }, I);
+  const burdenV = operatingBurden({ ...sub, iMax: I }, r.shuntOhms + sub.switchOhms);
+  return {
+    currentA: I,
+    worstPercent: e.worstPercent,
+    rssPercent: e.rssPercent,
+    burdenV,
+    loadVoltageV: sub.vBus - burdenV,
+  };
+}
+
+/** Each range over its own stretch [minA, maxA] (the stretches overlap in the hysteresis bands). */
 export function planStretches(req: Requirement, plan: PlanChoice, pointsPerRange = 40): PlanStretches {
   const m = buildModel(req);
-  const ron = req.rangeSwitch.onResistance;
   const ranges = plan.ranges.map((r, index) => {
     const sub = subModel(req, m, r.minA, r.maxA);
-    const choice = { shuntOhms: r.shuntOhms, gain: r.gain };
-    const points = logSpace(r.minA, r.maxA, pointsPerRange).map((I) => {
-      const e = errorAtWith(req, sub, choice, I);
-      const burdenV = operatingBurden({ ...sub, iMax: I }, r.shuntOhms + ron);
-      return {
-        currentA: I,
-        worstPercent: e.worstPercent,
-        rssPercent: e.rssPercent,
-        burdenV,
-        loadVoltageV: sub.vBus - burdenV,
-      };
-    });
+    const points = logSpace(r.minA, r.maxA, pointsPerRange).map((I) => rangeAt(req, sub, r, I));
     return { index, minA: r.minA, maxA: r.maxA, shuntOhms: r.shuntOhms, gain: r.gain, points };
   });
   return {
@@ -72,6 +73,36 @@ export function planStretches(req: Requirement, plan: PlanChoice, pointsPerRange
     bandMinA: req.accuracy.bandMin,
     bandMaxA: req.accuracy.bandMax,
   };
+}
+
+/** A point of the plan along the span: the figures of the range in use there on a rising current. */
+export type PlanCurvePoint = PlanStretchPoint & {
+  /** 0-based index of the range in use on a rising current. */
+  range: number;
+};
+
+/** The range in use at current I on a rising current: the lowest whose switch-up point it has not passed. */
+export function rangeInUse(plan: PlanChoice, I: number): number {
+  const k = plan.switchPoints.findIndex((s) => I <= s.upA);
+  return k < 0 ? plan.ranges.length - 1 : k;
+}
+
+/**
+ * The plan read as one instrument along the span: at each current the range in use while the
+ * current rises (range k up to its switch-up point). Falling currents stay on the higher range
+ * down to the switch-down point; those readings lie between the two ranges' curves there
+ * (planStretches draws both).
+ */
+export function planCurve(req: Requirement, plan: PlanChoice, points = 60): PlanCurvePoint[] {
+  const m = buildModel(req);
+  const subs = plan.ranges.map((r) => subModel(req, m, r.minA, r.maxA));
+  return logSpace(req.current.min, req.current.max, points).map((I) => {
+    const range = rangeInUse(plan, I);
+    const r = plan.ranges[range];
+    const sub = subs[range];
+    if (!r || !sub) throw new Error("a plan without ranges");
+    return { ...rangeAt(req, sub, r, I), range };
+  });
 }
 
 /**

@@ -24,21 +24,12 @@ import {
   zeroReferenceField,
   type ZeroReference,
 } from "./bidirectional";
+import { topologies, type Topology } from "./topology";
+
+export { topologies, topologyLabels, type Topology } from "./topology";
 
 export const loadModels = ["constant-current", "resistive", "constant-power"] as const;
 export type LoadModel = (typeof loadModels)[number];
-
-/** How the amplifier is built (API.md v2): an integrated part, or an op-amp stage with its resistors. */
-export const topologies = ["current-sense", "difference", "non-inverting", "instrumentation"] as const;
-export type Topology = (typeof topologies)[number];
-
-/** The topologies in the trade's words, for forms and tables. */
-export const topologyLabels: Record<Topology, string> = {
-  "current-sense": "Current-sense amplifier (integrated, fixed gains)",
-  difference: "Difference amplifier (op-amp and four resistors)",
-  "non-inverting": "Non-inverting op-amp stage (ground-referenced, low side only)",
-  instrumentation: "Instrumentation amplifier",
-};
 
 /**
  * Input common-mode range by topology when the request gives none, V (from memory: typical of

@@ -1,7 +1,7 @@
 // How each library field is shown and typed on the screen: the label in the trade's words, the
 // SI value formatted with a prefix for the table and the form, and how the form's text goes to the API.
 import { formatSI } from "@/lib/design/format";
-import { topologies, topologyLabels, type Topology } from "@/lib/design/requirement";
+import { topologies, topologyLabels, type Topology } from "@/lib/design/topology";
 import type { PartKind } from "./schema";
 
 export type FieldKind = "text" | "quantity" | "numberList" | "quantityList" | "select" | "checkbox" | "number";

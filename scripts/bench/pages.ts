@@ -2,15 +2,17 @@
 // <script src> tags of the page as served (Next 16's build no longer prints first-load sizes).
 // The floor is a plain signed-in page (the outbox: the workbench's layout and a server-rendered
 // list); budgets are above it: a list page at most 40 kB, a page that parses quantities as they
-// are typed (the wizard, the meter check) at most 150 kB.
+// are typed (the wizard, the meter check) at most 150 kB. A design page (the demo pump controller:
+// figures, charts, reviews, built units) shows saved figures and parses nothing as it is typed, so
+// it carries no unit parser either: at most 100 kB above the floor (its charts draw with visx).
 // Prints js.<page>.kB, js.<page>.above_floor.kB and js.budgets_met (1 or 0); asserts nothing.
 import { gzipSync } from "node:zlib";
 import { signIn, startBenchApp } from "../bench-app";
 
 const PORT = Number(process.env.BENCH_PAGES_PORT ?? 3319);
 
-/** Page name in the output → path and the budget above the floor, kB (none for the floor). */
-const PAGES: { name: string; path: string; budgetKB?: number }[] = [
+/** Page name in the output → path (or the demo design whose page it is) and the budget above the floor, kB. */
+const PAGES: { name: string; path: string | { designProject: string }; budgetKB?: number }[] = [
   { name: "floor", path: "/outbox" },
   { name: "designs", path: "/designs", budgetKB: 40 },
   { name: "library", path: "/library", budgetKB: 40 },
@@ -18,6 +20,7 @@ const PAGES: { name: string; path: string; budgetKB?: number }[] = [
   // The meter check validates quantities as they are typed, so it carries the unit parser.
   { name: "meter", path: "/meter", budgetKB: 150 },
   { name: "designs_new", path: "/designs/new", budgetKB: 150 },
+  { name: "design", path: { designProject: "Pump controller" }, budgetKB: 100 },
 ];
 
 const scriptSources = (html: string) => [...html.matchAll(/<script[^>]*\ssrc="([^"]+)"/g)].map((m) => m[1] ?? "");
@@ -30,9 +33,18 @@ export async function run(): Promise<Record<string, number>> {
     const request = page.context().request;
     const gz = new Map<string, number>();
     const out: Record<string, number> = {};
+    const designPath = async (project: string) => {
+      const list = await request.get(`${base}/api/designs?q=${encodeURIComponent(project)}`);
+      const found = ((await list.json()) as { designs: { id: string; project: string | null }[] }).designs.find(
+        (d) => d.project === project,
+      );
+      if (!found) throw new Error(`no demo design of the project "${project}"`);
+      return `/designs/${found.id}`;
+    };
     for (const p of PAGES) {
-      const res = await request.get(`${base}${p.path}`);
-      if (!res.ok()) throw new Error(`${p.path} answered ${res.status()}`);
+      const path = typeof p.path === "string" ? p.path : await designPath(p.path.designProject);
+      const res = await request.get(`${base}${path}`);
+      if (!res.ok()) throw new Error(`${path} answered ${res.status()}`);
       let bytes = 0;
       for (const src of new Set(scriptSources(await res.text()))) {
         if (!gz.has(src)) {
