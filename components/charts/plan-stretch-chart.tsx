@@ -2,6 +2,7 @@
 // A range plan drawn as one instrument: each range's curve over its own stretch of current, the
 // switch points (up: solid, down: dashed) and the hysteresis band between them shaded. Ranges
 // differ by Okabe–Ito hue, by dash pattern and by a numbered label, never by colour alone.
+import { scaleLinear, scaleLog } from "@visx/scale";
 import { useId } from "react";
 import type { PlanStretchPoint, PlanStretches } from "@/lib/design/plan-stretches";
 import { formatPercent, formatSI } from "@/lib/design/format";
@@ -49,15 +50,6 @@ const spec: Record<
   },
 };
 
-function linTicks(lo: number, hi: number, n = 5): number[] {
-  const raw = (hi - lo) / n;
-  const mag = 10 ** Math.floor(Math.log10(raw));
-  const step = [1, 2, 2.5, 5, 10].map((m) => m * mag).find((s) => s >= raw) ?? raw;
-  const out: number[] = [];
-  for (let v = Math.ceil(lo / step) * step; v <= hi + 1e-12; v += step) out.push(v);
-  return out;
-}
-
 export function PlanStretchChart({ curves, kind }: { curves: PlanStretches; kind: PlanStretchKind }) {
   const { ref, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
@@ -83,12 +75,10 @@ export function PlanStretchChart({ curves, kind }: { curves: PlanStretches; kind
   }
   const w = Math.max(0, width - M.left - M.right);
   const h = HEIGHT - M.top - M.bottom;
-  const sx = (a: number) => M.left + ((Math.log10(a) - Math.log10(xd[0])) / Math.log10(xd[1] / xd[0])) * w;
-  const sy = (v: number) =>
-    s.log
-      ? M.top + h - ((Math.log10(v) - Math.log10(yd[0])) / Math.log10(yd[1] / yd[0])) * h
-      : M.top + h - ((v - yd[0]) / (yd[1] - yd[0])) * h;
-  const yTicks = s.log ? logTicks(yd[0], yd[1], 6) : linTicks(yd[0], yd[1]);
+  const sx = scaleLog({ domain: xd, range: [M.left, M.left + w] });
+  const ys = (s.log ? scaleLog : scaleLinear)({ domain: yd, range: [M.top + h, M.top] });
+  const sy = (v: number) => ys(v);
+  const yTicks = s.log ? logTicks(yd[0], yd[1], 6) : scaleLinear({ domain: yd }).ticks(5);
   const xTicks = logTicks(xd[0], xd[1], width < 480 ? 4 : 8);
   const path = (pts: PlanStretchPoint[]) =>
     pts

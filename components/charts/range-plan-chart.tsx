@@ -1,6 +1,7 @@
 "use client";
 // A multi-range plan drawn on the current axis: each range a bar from its bottom to its top
 // current, overlaps visible, the required span marked.
+import { scaleLog } from "@visx/scale";
 import type { PlanRangeChoice } from "@/lib/design/plan-choice";
 import { formatSI } from "@/lib/design/format";
 import { logTicks } from "./axes";
@@ -26,11 +27,10 @@ export function RangePlanChart({
   const height = top + rows * rowH + 34;
   const lo = minA / 2;
   const hi = maxA * 2;
-  const sx = (a: number) =>
-    left + ((Math.log10(a) - Math.log10(lo)) / (Math.log10(hi) - Math.log10(lo))) * (width - left - right);
+  const sx = scaleLog({ domain: [lo, hi], range: [left, width - right] });
   const ticks = logTicks(lo, hi, 8);
   return (
-    <div ref={ref} data-testid="range-plan-chart">
+    <div ref={ref} data-testid="range-plan-chart" style={{ minHeight: height }}>
       {width > 0 && (
         <svg
           width={width}
