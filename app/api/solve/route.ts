@@ -5,10 +5,6 @@ import { RankExpressionError, solve } from "@/lib/design";
 import { apiRoute } from "@/lib/auth/gate";
 import { HttpError } from "@/lib/http";
 import { objectBody, requirementOr422 } from "@/lib/engine-requests";
-import { warmSolver } from "@/lib/route-warm-up";
-
-// This route's own copy of the engine runs once as the module loads (start-up asks for it).
-warmSolver();
 
 export const POST = apiRoute({ action: "engine.use", body: z.unknown(), doing: "run the solver" }, async ({ body }) => {
   const { rank, ...rest } = objectBody(body);

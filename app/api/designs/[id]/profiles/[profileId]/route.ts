@@ -5,10 +5,6 @@ import { profileWindowQuery } from "@/lib/route-schemas";
 import { HttpError } from "@/lib/http";
 import { isUuid } from "@/lib/ids";
 import { clipCurrent, decimateMinMax, judgeRecording, planSeriesOverlay } from "@/lib/profile";
-import { warmProfileChart } from "@/lib/route-warm-up";
-
-// This route's own copy of the profile code runs once as the module loads (start-up asks for it).
-warmProfileChart();
 
 const profileNotFound = () => new HttpError(404, "That profile was not found on this design.");
 
