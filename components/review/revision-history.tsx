@@ -9,6 +9,9 @@ import type { ApiError, RevisionPairDiff } from "@/lib/api-description/responses
 import type { Change } from "@/lib/saved-designs/diff";
 import { formatWhen } from "@/lib/saved-designs/when";
 
+/** Rows shown before "Show all": the recent history a review reads; the rest one click away. */
+const RECENT = 10;
+
 const narrowSelect = "rounded border border-line bg-panel px-2 py-1 text-sm num focus:border-copper focus:outline-none";
 
 const groupNames = {
@@ -44,6 +47,9 @@ export function RevisionHistory({
   firstDiff: RevisionDiff;
 }) {
   const [a, setA] = useState(firstDiff.a);
+  const [all, setAll] = useState(false);
+  const newestFirst = [...revisions].reverse();
+  const shown = all ? newestFirst : newestFirst.slice(0, RECENT);
   const [b, setB] = useState(firstDiff.b);
   const isFirst = a === firstDiff.a && b === firstDiff.b;
   const diff = useQuery({
@@ -71,7 +77,7 @@ export function RevisionHistory({
             </tr>
           </thead>
           <tbody>
-            {[...revisions].reverse().map((r) => (
+            {shown.map((r) => (
               <tr key={r.revision} className="border-b border-line last:border-0">
                 <td className="py-1 pr-3">{r.revision}</td>
                 <td className="py-1 pr-3">{r.authorName}</td>
@@ -114,6 +120,16 @@ export function RevisionHistory({
             ))}
           </tbody>
         </table>
+        {newestFirst.length > RECENT && (
+          <button
+            type="button"
+            onClick={() => setAll((v) => !v)}
+            aria-expanded={all}
+            className="mt-1 text-xs text-copper hover:underline"
+          >
+            {all ? `Show the ${RECENT} most recent only` : `Show all ${newestFirst.length} revisions`}
+          </button>
+        )}
       </div>
       {revisions.length > 1 ? (
         <div className="flex flex-col gap-2" data-testid="revision-diff">

@@ -5,7 +5,16 @@ import { evaluateDesign } from "@/lib/saved-designs/service";
 import { closeDb, getDb } from "../client";
 import { designRevisions, memberships, teams, users } from "../schema";
 import { listTargetAudit } from "./audit";
-import { changeDesignStatus, createDesign, getDesign, getDesignView, listRevisions, reviseDesign } from "./designs";
+import {
+  changeDesignStatus,
+  createDesign,
+  getDesign,
+  getDesignView,
+  getDesignViews,
+  getDesignWithHeads,
+  listRevisions,
+  reviseDesign,
+} from "./designs";
 import { addReview } from "./reviews";
 
 const suffix = Math.random().toString(36).slice(2, 8);
@@ -165,6 +174,29 @@ describe("design revisions", () => {
       "design.submitted",
       "design.created",
     ]);
+  });
+
+  it("reads several designs at once as one at a time does, in the order asked, null where not this team's", async () => {
+    const a = await newDesign(`batch a ${suffix}`);
+    const b = await newDesign(`batch b ${suffix}`);
+    expect(await revise(b.id, 1, `batch b, edited ${suffix}`)).toEqual({ ok: true, revision: 2 });
+    const theirs = await createDesign({
+      ...first(),
+      teamId: otherTeamId,
+      userId: ids.designer!,
+      name: `theirs ${suffix}`,
+    });
+    const views = await getDesignViews([b.id, "not-a-uuid", theirs.id, a.id], teamId);
+    expect(views).toEqual([await getDesignView(b.id, teamId), null, null, await getDesignView(a.id, teamId)]);
+    expect(views[0]).toMatchObject({ revision: 2, name: `batch b, edited ${suffix}` });
+    expect(views[0]?.revisions.map((r) => r.revision)).toEqual([1, 2]);
+    // The page's heads are those of its design only, oldest first.
+    const withHeads = await getDesignWithHeads(b.id, teamId);
+    expect(withHeads?.heads.map((h) => [h.revision, h.name])).toEqual([
+      [1, `batch b ${suffix}`],
+      [2, `batch b, edited ${suffix}`],
+    ]);
+    expect(await getDesignViews(["not-a-uuid", "also-not"], teamId)).toEqual([null, null]);
   });
 
   it("refuses a verdict on a design that is not in review", async () => {

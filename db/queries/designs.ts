@@ -9,6 +9,7 @@ import { isUuid } from "@/lib/ids";
 import { getDb, type Tx } from "../client";
 import { designRevisions, designs, reviews, users, type DesignStatus } from "../schema";
 import { recordAudit } from "./audit";
+import { RevisionMemo, revisionKey } from "@/lib/saved-designs/revision-memo";
 
 /** Ids come from URLs: anything that is not a UUID cannot name a design (and must not reach SQL as one). */
 export { isUuid };
@@ -21,6 +22,14 @@ export function storedRequirement(stored: unknown): Requirement {
   const parsed = parseRequirement(stored);
   return parsed.ok ? parsed.requirement : (stored as Requirement);
 }
+
+/**
+ * The stored requirement of one revision, parsed once per process: the parse (zod, every default)
+ * cost more than the query that read it, and a revision's requirement never changes.
+ */
+const parsedRequirements = new RevisionMemo<Requirement>(4000);
+const revisionRequirement = (designId: string, revision: number, stored: unknown) =>
+  parsedRequirements.get(revisionKey(designId, revision), () => storedRequirement(stored));
 
 /** What one save stores: the normalized requirement and either a pair or a plan, with the engine's figures. */
 export type SavedFigures = { requirement: Requirement } & DesignKind;
@@ -176,18 +185,21 @@ export async function pageDesigns(teamId: string, opts: DesignListQuery) {
   };
 }
 
-/** The design with its current revision, scoped by team: another team's design is null. */
-export async function getDesign(designId: string, teamId: string) {
-  if (!isUuid(designId)) return null;
-  const db = await getDb();
-  const rows = await db
+/** Designs, each with its current revision and that revision's author's name. */
+const designsWithCurrent = (db: Awaited<ReturnType<typeof getDb>>) =>
+  db
     .select({ design: designs, current: designRevisions, authorName: author.name })
     .from(designs)
     .innerJoin(
       designRevisions,
       and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)),
     )
-    .innerJoin(author, eq(author.id, designRevisions.authorId))
+    .innerJoin(author, eq(author.id, designRevisions.authorId));
+
+/** The design with its current revision, scoped by team: another team's design is null. */
+export async function getDesign(designId: string, teamId: string) {
+  if (!isUuid(designId)) return null;
+  const rows = await designsWithCurrent(await getDb())
     .where(and(eq(designs.id, designId), eq(designs.teamId, teamId)))
     .limit(1);
   return rows[0] ?? null;
@@ -197,16 +209,29 @@ export type ApprovalInfo = { revision: number; byName: string; byId: string; at:
 
 /** Approvals of a design, by revision (each approval belongs to the revision it was given on). */
 async function approvalsOf(designId: string): Promise<Map<number, ApprovalInfo>> {
+  return (await approvalsOfEach([designId])).get(designId) ?? new Map();
+}
+
+/** Approvals of several designs in one read: by design, then by revision (the latest one given on it). */
+async function approvalsOfEach(designIds: string[]): Promise<Map<string, Map<number, ApprovalInfo>>> {
   const db = await getDb();
   const rows = await db
-    .select({ revision: reviews.revision, byName: users.name, byId: users.id, at: reviews.createdAt })
+    .select({
+      designId: reviews.designId,
+      revision: reviews.revision,
+      byName: users.name,
+      byId: users.id,
+      at: reviews.createdAt,
+    })
     .from(reviews)
     .innerJoin(users, eq(users.id, reviews.authorId))
-    .where(and(eq(reviews.designId, designId), eq(reviews.verdict, "approve")))
+    .where(and(inArray(reviews.designId, designIds), eq(reviews.verdict, "approve")))
     .orderBy(asc(reviews.createdAt));
-  const out = new Map<number, ApprovalInfo>();
+  const out = new Map<string, Map<number, ApprovalInfo>>(designIds.map((id) => [id, new Map()]));
   for (const r of rows)
-    out.set(r.revision, { revision: r.revision, byName: r.byName, byId: r.byId, at: r.at.toISOString() });
+    out
+      .get(r.designId)
+      ?.set(r.revision, { revision: r.revision, byName: r.byName, byId: r.byId, at: r.at.toISOString() });
   return out;
 }
 
@@ -248,7 +273,7 @@ export async function listRevisions(designId: string, only?: number[]) {
   const kinds = rows.map(({ choice, plan, metrics, ...r }) => ({
     ...r,
     ...designKindOf({ choice, plan, metrics }),
-    requirement: storedRequirement(r.requirement),
+    requirement: revisionRequirement(designId, r.revision, r.requirement),
   }));
   return withApprovals(designId, kinds);
 }
@@ -260,29 +285,71 @@ export type RevisionRecord = Awaited<ReturnType<typeof listRevisions>>[number];
  * cost more than the rest of the page.
  */
 export async function listRevisionHeads(designId: string) {
+  return (await revisionHeadsOfEach([designId])).get(designId) ?? [];
+}
+
+/** The heads of several designs' revisions in two reads (heads, approvals) whatever their number, by design. */
+async function revisionHeadsOfEach(designIds: string[]) {
   const db = await getDb();
-  const rows = await db
-    .select(revisionHead)
-    .from(designRevisions)
-    .innerJoin(users, eq(users.id, designRevisions.authorId))
-    .where(revisionsOf(designId))
-    .orderBy(asc(designRevisions.revision));
+  const [rows, approvals] = await Promise.all([
+    db
+      .select({ ...revisionHead, designId: designRevisions.designId })
+      .from(designRevisions)
+      .innerJoin(users, eq(users.id, designRevisions.authorId))
+      .where(inArray(designRevisions.designId, designIds))
+      .orderBy(asc(designRevisions.designId), asc(designRevisions.revision)),
+    approvalsOfEach(designIds),
+  ]);
   // Exactly one of choice and plan is set (a check constraint says so).
-  const heads = rows.map(({ choice, plan, ...r }) =>
-    plan
-      ? { ...r, kind: "plan" as const, choice: null, plan }
-      : { ...r, kind: "pair" as const, choice: choice!, plan: null },
-  );
-  return withApprovals(designId, heads);
+  const heads = rows.map(({ choice, plan, designId, ...r }) => ({
+    designId,
+    head: {
+      ...(plan
+        ? { ...r, kind: "plan" as const, choice: null, plan }
+        : { ...r, kind: "pair" as const, choice: choice!, plan: null }),
+      createdAt: r.createdAt.toISOString(),
+      approval: approvals.get(designId)?.get(r.revision) ?? null,
+    },
+  }));
+  const out = new Map(designIds.map((id) => [id, [] as (typeof heads)[number]["head"][]]));
+  for (const { designId, head } of heads) out.get(designId)?.push(head);
+  return out;
 }
 export type RevisionHead = Awaited<ReturnType<typeof listRevisionHeads>>[number];
 
 /** The saved design as the screens see it, or null when it is not this team's. */
 export async function getDesignView(designId: string, teamId: string): Promise<DesignView | null> {
+  return (await getDesignWithHeads(designId, teamId))?.view ?? null;
+}
+
+/** The design as the screens see it and the heads of its revisions, read once for a page that shows both. */
+export async function getDesignWithHeads(
+  designId: string,
+  teamId: string,
+): Promise<{ view: DesignView; heads: RevisionHead[] } | null> {
   const found = await getDesign(designId, teamId);
   if (!found) return null;
-  const { design, current, authorName } = found;
-  const revisions = await listRevisionHeads(design.id);
+  const heads = await listRevisionHeads(found.design.id);
+  return { view: designViewOf(found, heads), heads };
+}
+
+/**
+ * Several designs as the screens see them, in the order asked, null where one is not this team's
+ * (or the id is not one): three reads however many designs, for the compare page.
+ */
+export async function getDesignViews(designIds: string[], teamId: string): Promise<(DesignView | null)[]> {
+  const ids = [...new Set(designIds.filter(isUuid))];
+  if (ids.length === 0) return designIds.map(() => null);
+  const rows = await designsWithCurrent(await getDb()).where(and(inArray(designs.id, ids), eq(designs.teamId, teamId)));
+  const heads = rows.length ? await revisionHeadsOfEach(rows.map((r) => r.design.id)) : new Map();
+  const views = new Map(rows.map((r) => [r.design.id, designViewOf(r, heads.get(r.design.id) ?? [])]));
+  return designIds.map((id) => views.get(id) ?? null);
+}
+
+function designViewOf(
+  { design, current, authorName }: NonNullable<Awaited<ReturnType<typeof getDesign>>>,
+  revisions: RevisionHead[],
+): DesignView {
   const approval = revisions.find((r) => r.revision === design.revision)?.approval ?? null;
   return {
     id: design.id,
@@ -290,7 +357,7 @@ export async function getDesignView(designId: string, teamId: string): Promise<D
     project: design.project,
     status: design.status,
     revision: design.revision,
-    requirement: storedRequirement(current.requirement),
+    requirement: revisionRequirement(design.id, current.revision, current.requirement),
     ...designKindOf(current),
     authorId: current.authorId,
     authorName,

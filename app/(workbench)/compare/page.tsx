@@ -3,14 +3,13 @@ import Link from "next/link";
 import { CurveChart, type CurveSeries } from "@/components/compare/compare-charts";
 import { CompareTable } from "@/components/compare/compare-table";
 import { EmptyState } from "@/components/ui/panel";
-import { getDesignView } from "@/db/queries/designs";
-import { errorCurve, loadCurve, planCurve } from "@/lib/design";
-import { curveByMagnitude } from "@/lib/design/error-budget";
+import { getDesignViews } from "@/db/queries/designs";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
 import { designViewerFor, type DesignView } from "@/lib/design-view";
 import { builtYieldOf } from "@/lib/built-units/record";
 import { compareQuery } from "@/lib/saved-designs/compare";
+import { compareCurves } from "@/lib/saved-designs/compare-curves";
 
 export const metadata: Metadata = { title: "Compare designs" };
 
@@ -34,7 +33,7 @@ export default async function ComparePage({
       </EmptyState>
     );
   }
-  const found = await Promise.all(parsed.data.ids.map((id) => getDesignView(id, caller.teamId)));
+  const found = await getDesignViews(parsed.data.ids, caller.teamId);
   const designs = found.filter((d): d is DesignView => !!d && can(caller, "design.read", d));
   const missing = found.length - designs.length;
   if (designs.length < 2) {
@@ -48,23 +47,9 @@ export default async function ComparePage({
       </EmptyState>
     );
   }
-  // A range plan is drawn as one instrument: at each current, the range in use on a rising current.
-  const errorSeries: CurveSeries[] = designs.map((d) => ({
-    key: d.id,
-    label: d.name,
-    // By magnitude: a bidirectional design's error is the same either way.
-    points: (d.kind === "plan"
-      ? planCurve(d.requirement, d.plan, 60)
-      : curveByMagnitude(errorCurve(d.requirement, d.choice, 60))
-    ).map((p) => ({ x: p.currentA, y: p.worstPercent })),
-  }));
-  const burdenSeries: CurveSeries[] = designs.map((d) => ({
-    key: d.id,
-    label: d.name,
-    points: (d.kind === "plan" ? planCurve(d.requirement, d.plan, 60) : loadCurve(d.requirement, d.choice, 60)).map(
-      (p) => ({ x: p.currentA, y: p.burdenV }),
-    ),
-  }));
+  const curves = designs.map(compareCurves);
+  const errorSeries: CurveSeries[] = designs.map((d, k) => ({ key: d.id, label: d.name, points: curves[k]!.error }));
+  const burdenSeries: CurveSeries[] = designs.map((d, k) => ({ key: d.id, label: d.name, points: curves[k]!.burden }));
   return (
     <div className="flex flex-col gap-4">
       <div>

@@ -11,7 +11,7 @@ import { ReviewPanel } from "@/components/review/review-panel";
 import { StatusBadge, statusExplained } from "@/components/review/status-badge";
 import { UnitsPanel } from "@/components/units/units-panel";
 import { listTargetAudit } from "@/db/queries/audit";
-import { getDesignView, listRevisionHeads, listRevisions, pageDesigns } from "@/db/queries/designs";
+import { getDesignWithHeads } from "@/db/queries/designs";
 import { isUuid } from "@/lib/ids";
 import { listLibrary } from "@/db/queries/library";
 import { listReviews } from "@/db/queries/reviews";
@@ -19,7 +19,7 @@ import { formatSI } from "@/lib/design/format";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
 import { designViewerFor } from "@/lib/design-view";
-import { diffRevisions } from "@/lib/saved-designs/diff";
+import { revisionChanges } from "@/lib/saved-designs/revision-changes";
 import { formatWhen } from "@/lib/saved-designs/when";
 
 export const metadata: Metadata = { title: "Design" };
@@ -28,35 +28,24 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
   const { id } = await params;
   const caller = await requirePageCaller(`/designs/${id}`);
   if (!isUuid(id)) notFound();
-  const design = await getDesignView(id, caller.teamId);
+  const found = await getDesignWithHeads(id, caller.teamId);
   // Makers see approved designs only; anything else is "not found" for them, as in the API.
-  if (!design || !can(caller, "design.read", design)) notFound();
+  if (!found || !can(caller, "design.read", found.view)) notFound();
+  const { view: design, heads: revisions } = found;
   const viewer = designViewerFor(caller, design);
   // The history lists each revision's head; the one diff it opens on (the last save against the
-  // one before) is worked out here from those two revisions' full records.
+  // one before) is worked out from those two revisions' full records, once: revisions never change.
   const last = design.revision;
   const firstPair = [Math.max(1, last - 1), last] as const;
-  const [revisions, pair, reviews, audit, others, library] = await Promise.all([
-    listRevisionHeads(design.id),
-    listRevisions(design.id, [...firstPair]),
+  const [changes, reviews, audit, library] = await Promise.all([
+    revisionChanges(design.id, ...firstPair),
     listReviews(design.id),
     listTargetAudit(caller.teamId, "design", design.id),
-    // The picker offers the team's 50 most recently changed designs; the list page reaches the rest.
-    pageDesigns(caller.teamId, { approvedOnly: !can(caller, "design.read-unapproved"), limit: 50 }).then(
-      (p) => p.designs,
-    ),
     listLibrary(caller.teamId),
   ]);
-  const [from, to] = pair;
-  const firstDiff = { a: firstPair[0], b: firstPair[1], changes: from && to ? diffRevisions(from, to) : [] };
-  const picker = (
-    <ComparePicker
-      current={{ id: design.id, name: design.name }}
-      others={others
-        .filter((d) => d.id !== design.id)
-        .map((d) => ({ id: d.id, name: d.name, project: d.project, status: d.status }))}
-    />
-  );
+  const firstDiff = { a: firstPair[0], b: firstPair[1], changes };
+  // The picker reads the team's designs itself when it is opened.
+  const picker = <ComparePicker current={{ id: design.id, name: design.name }} />;
   const review = (
     <ReviewPanel
       design={design}
