@@ -1,13 +1,12 @@
 "use client";
 // Before saving: the span and supply, then every value set differently from the documented
 // defaults, step by step — including steps never opened — so nothing hidden travels into a design.
-import { useMemo } from "react";
 import { formatSI } from "@/lib/design/format";
 import type { Requirement } from "@/lib/design/requirement";
-import { differencesFromDefaults } from "@/lib/wizard/from-defaults";
+import type { StepDifferences } from "@/lib/wizard/from-defaults";
 
-export function DefaultsSummary({ requirement }: { requirement: Requirement }) {
-  const groups = useMemo(() => differencesFromDefaults(requirement), [requirement]);
+/** `groups`: differencesFromDefaults(requirement), worked out beside the sweep in the solver worker. */
+export function DefaultsSummary({ requirement, groups }: { requirement: Requirement; groups: StepDifferences[] }) {
   const count = groups.reduce((n, g) => n + g.changes.length, 0);
   return (
     <div className="flex flex-col gap-2 text-xs" data-testid="defaults-summary">

@@ -5,7 +5,6 @@ import { z } from "zod";
 import { isSeriesName, seriesNames, seriesValues, type SeriesName } from "./eseries";
 import { commonFixedGains, resistorPairGains, type GainSet } from "./gains";
 import { TRACE_GRID_M, traceLengths } from "./copper-trace";
-import { inputFilterField } from "./input-filter";
 import { blank, nonNegative, positive, q } from "./quantity-rules";
 import {
   constructionIssues,
@@ -14,31 +13,33 @@ import {
   type ShuntConstruction,
 } from "./shunt-construction";
 import { parsePercent, quantity } from "./units";
-import { adcErrorFields, calibrationField, meterErrorFields } from "./readout-error";
+import {
+  adcErrorFields,
+  calibrationField,
+  inputFilterField,
+  meterErrorFields,
+  zeroReferenceField,
+} from "./requirement-fields";
 import {
   defaultZeroLevelV,
   isSigned,
   largestMagnitude,
   outputWindow,
   signedSpanIssues,
-  zeroReferenceField,
   type ZeroReference,
 } from "./bidirectional";
 
-export const loadModels = ["constant-current", "resistive", "constant-power"] as const;
-export type LoadModel = (typeof loadModels)[number];
+import { loadModels, topologies, type Topology } from "./requirement-options";
 
-/** How the amplifier is built (API.md v2): an integrated part, or an op-amp stage with its resistors. */
-export const topologies = ["current-sense", "difference", "non-inverting", "instrumentation"] as const;
-export type Topology = (typeof topologies)[number];
-
-/** The topologies in the trade's words, for forms and tables. */
-export const topologyLabels: Record<Topology, string> = {
-  "current-sense": "Current-sense amplifier (integrated, fixed gains)",
-  difference: "Difference amplifier (op-amp and four resistors)",
-  "non-inverting": "Non-inverting op-amp stage (ground-referenced, low side only)",
-  instrumentation: "Instrumentation amplifier",
-};
+// The choices and start values live in a module without zod, for screens that only list them.
+export {
+  defaultRequirementInput,
+  loadModels,
+  topologies,
+  topologyLabels,
+  type LoadModel,
+  type Topology,
+} from "./requirement-options";
 
 /**
  * Input common-mode range by topology when the request gives none, V (from memory: typical of
@@ -509,12 +510,3 @@ export function parseRequirement(input: unknown): ParseRequirementResult {
     .join("\n");
   return { ok: false, message, fieldErrors };
 }
-
-/** The demo soil-moisture logger (docs/model.md §6): the wizard's start values. */
-export const defaultRequirementInput: RequirementInput = {
-  current: { min: "3 uA", max: "180 mA" },
-  supply: { voltage: "3.0 V", side: "low" },
-  drop: { max: "60 mV" },
-  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
-  resolution: { countsAtMin: 10 },
-};
