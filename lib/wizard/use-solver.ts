@@ -11,7 +11,7 @@ import { measureSince } from "./measure";
 import type { DifferencesReply, SolveReply, SolveRequest } from "./solver-protocol";
 
 /** A solve on screen: its result, the sweep's time, and when the edit it answers happened. */
-export type Solved = { result: SolveResult; solveMs: number; editAt: number };
+export type Solved = { id: number; result: SolveResult; solveMs: number; editAt: number };
 
 export type SolverState =
   | { status: "idle" }
@@ -42,9 +42,8 @@ export function useSolver() {
   const [sweeping, setSweeping] = useState<Sweeping>(null);
   // The last good result stays on screen while the form holds an error.
   const [last, setLast] = useState<Solved | null>(null);
-  // The save summary's differences from the defaults, which follow each solved reply; the previous
-  // requirement's stay until they come.
-  const [differences, setDifferences] = useState<StepDifferences[]>([]);
+  // The save summary's differences from the defaults, which follow each solved reply.
+  const [differences, setDifferences] = useState<{ id: number; groups: StepDifferences[] } | null>(null);
   const lastSolved = useRef(0);
   const start = useRef<() => void>(() => undefined);
 
@@ -68,7 +67,7 @@ export function useSolver() {
   useEffect(() => {
     const onReply = (event: MessageEvent<SolveReply | DifferencesReply>) => {
       if ("differences" in event.data) {
-        if (event.data.id === lastSolved.current) setDifferences(event.data.differences);
+        if (event.data.id === lastSolved.current) setDifferences({ id: event.data.id, groups: event.data.differences });
         return;
       }
       const reply = event.data;
@@ -87,7 +86,7 @@ export function useSolver() {
       setBusy(false);
       if (reply.ok) {
         lastSolved.current = reply.id;
-        setLast({ result: reply.result, solveMs: reply.solveMs, editAt });
+        setLast({ id: reply.id, result: reply.result, solveMs: reply.solveMs, editAt });
       }
       setState(
         reply.ok
@@ -147,5 +146,7 @@ export function useSolver() {
     [dispatch, settle],
   );
 
-  return { state, busy, sweeping, last, differences, request };
+  /** The differences of the result on screen; null until the worker has sent them. */
+  const shownDifferences = last && differences?.id === last.id ? differences.groups : null;
+  return { state, busy, sweeping, last, differences: shownDifferences, request };
 }
