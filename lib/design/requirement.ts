@@ -29,17 +29,10 @@ import {
   type ZeroReference,
 } from "./bidirectional";
 
-import { loadModels, topologies, type Topology } from "./requirement-options";
+import { defaultRequirementInput as startValues, loadModels, topologies, type Topology } from "./requirement-options";
 
 // The choices and start values live in a module without zod, for screens that only list them.
-export {
-  defaultRequirementInput,
-  loadModels,
-  topologies,
-  topologyLabels,
-  type LoadModel,
-  type Topology,
-} from "./requirement-options";
+export { loadModels, topologies, topologyLabels, type LoadModel, type Topology } from "./requirement-options";
 
 /**
  * Input common-mode range by topology when the request gives none, V (from memory: typical of
@@ -510,3 +503,6 @@ export function parseRequirement(input: unknown): ParseRequirementResult {
     .join("\n");
   return { ok: false, message, fieldErrors };
 }
+
+/** The wizard's start values (./requirement-options), checked here against the schema's input type. */
+export const defaultRequirementInput: RequirementInput = startValues;
