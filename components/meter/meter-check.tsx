@@ -4,10 +4,10 @@
 import { useQueries } from "@tanstack/react-query";
 import { LineSeries, Tooltip, XYChart } from "@visx/xychart";
 import { useEffect, useMemo, useState } from "react";
-import { insertionCurve, insertionSchema, type InsertionResult } from "@/lib/design/insertion";
+import { insertionCurve, type Insertion, type InsertionResult } from "@/lib/design/insertion";
 import { benchMeterRanges } from "@/lib/design/plan-stretches";
 import type { ApiError, InsertionBody } from "@/lib/api-description/responses";
-import { loadModels, type LoadModel } from "@/lib/design/requirement";
+import { loadModels, type LoadModel } from "@/lib/design/requirement-options";
 import { formatPercent, formatSI } from "@/lib/design/format";
 import { chartMargin, logDomain, siTick } from "@/components/charts/axes";
 import { ChartAxes } from "@/components/charts/chart-axes";
@@ -51,6 +51,21 @@ async function ask(i: Inputs, model: LoadModel): Promise<Answer> {
   };
 }
 
+type InsertionSchema = (typeof import("@/lib/design/insertion-schema"))["insertionSchema"];
+
+/** The request's schema (zod and the unit parser), loaded after first paint: null until then. */
+function useInsertionSchema(): InsertionSchema | null {
+  const [schema, setSchema] = useState<InsertionSchema | null>(null);
+  useEffect(() => {
+    let live = true;
+    void import("@/lib/design/insertion-schema").then((m) => live && setSchema(() => m.insertionSchema));
+    return () => {
+      live = false;
+    };
+  }, []);
+  return schema;
+}
+
 function useDebounced<T>(value: T, ms: number): T {
   const [v, setV] = useState(value);
   useEffect(() => {
@@ -70,19 +85,21 @@ export function MeterCheck() {
   });
   const set = (k: keyof Inputs) => (v: string) => setInputs((s) => ({ ...s, [k]: v }));
   const asked = useDebounced(inputs, 150);
-  const parsed = insertionSchema.safeParse({
+  const schema = useInsertionSchema();
+  // Until the schema has loaded (just after first paint) the server's answer names any field at fault.
+  const parsed = schema?.safeParse({
     supply: asked.supply,
     seriesOhms: asked.seriesOhms,
     load: { model: asked.model, current: asked.current },
   });
   const localErrors: Record<string, string> = {};
-  if (!parsed.success) for (const i of parsed.error.issues) localErrors[i.path.join(".")] ??= i.message;
+  if (parsed && !parsed.success) for (const i of parsed.error.issues) localErrors[i.path.join(".")] ??= i.message;
 
   const answers = useQueries({
     queries: loadModels.map((model) => ({
       queryKey: ["insertion", asked.supply, asked.seriesOhms, asked.current, model],
       queryFn: () => ask(asked, model),
-      enabled: parsed.success,
+      enabled: parsed?.success ?? true,
       staleTime: Infinity,
     })),
   });
@@ -96,8 +113,8 @@ export function MeterCheck() {
   const loadMin = (() => {
     const t = asked.loadMin.trim();
     if (!t) return undefined;
-    const r = insertionSchema.shape.supply.safeParse(t);
-    return r.success ? r.data : undefined;
+    const r = schema?.shape.supply.safeParse(t);
+    return r?.success ? r.data : undefined;
   })();
 
   return (
@@ -190,7 +207,7 @@ export function MeterCheck() {
             </p>
           ) : (
             <p className="text-sm text-ink-muted">
-              {parsed.success ? "Working it out…" : "Fix the marked entry to see the figures."}
+              {parsed?.success !== false ? "Working it out…" : "Fix the marked entry to see the figures."}
             </p>
           )}
         </Panel>
@@ -232,10 +249,12 @@ export function MeterCheck() {
           </table>
         </Panel>
         <Panel title="Voltage left at the load across load currents">
-          {parsed.success ? (
+          {parsed?.success ? (
             <InsertionChart input={parsed.data} loadMinV={loadMin} />
           ) : (
-            <p className="text-sm text-ink-muted">Fix the marked entry to draw the curves.</p>
+            <p className="text-sm text-ink-muted">
+              {parsed ? "Fix the marked entry to draw the curves." : "Working it out…"}
+            </p>
           )}
         </Panel>
         <p className="text-2xs text-ink-faint">
@@ -272,7 +291,7 @@ function Readout({ r }: { r: InsertionResult }) {
 
 type Pt = { a: number; v: number };
 
-function InsertionChart({ input, loadMinV }: { input: ReturnType<typeof insertionSchema.parse>; loadMinV?: number }) {
+function InsertionChart({ input, loadMinV }: { input: Insertion; loadMinV?: number }) {
   const { ref, width } = useWidth<HTMLDivElement>();
   const p = usePalette();
   const theme = useMemo(() => chartTheme(p), [p]);

@@ -1,7 +1,7 @@
 "use client";
 // The live results beside the form: the trade-off, the refusals, the table, the selected
 // candidate in depth, the range plan when one range cannot do, and saving.
-import { memo, useCallback, useEffect, useMemo, type ReactNode, type RefObject } from "react";
+import { memo, useCallback, useDeferredValue, useEffect, useMemo, type ReactNode, type RefObject } from "react";
 import { evaluateCandidate, isInSweep } from "@/lib/design/candidate";
 import { rejectReasonLabels } from "@/lib/design/pair";
 import type { SolveResult } from "@/lib/design/solve";
@@ -17,7 +17,8 @@ import { Panel } from "@/components/ui/panel";
 import { candidateKey, choiceFromKey } from "@/lib/wizard/candidate-key";
 import { inWords } from "@/lib/wizard/form-errors";
 import { rankingInWords, recommendationReason, recommendedOf } from "@/lib/wizard/recommend";
-import type { useSolver } from "@/lib/wizard/use-solver";
+import type { Solved, useSolver } from "@/lib/wizard/use-solver";
+import { measureSince } from "@/lib/wizard/measure";
 import { usePlanCheck } from "@/lib/wizard/use-plan-check";
 import { Button } from "@/components/ui/button";
 import { DefaultsSummary } from "./defaults-summary";
@@ -111,11 +112,7 @@ export function Explorer({
   const editAt = state.status === "solved" ? state.editAt : null;
   useEffect(() => {
     if (solvedId === null || editAt === null) return;
-    try {
-      performance.measure("wizard-resolve", { start: editAt, end: performance.now() });
-    } catch {
-      /* a browser without User Timing level 3: nothing to record */
-    }
+    measureSince("wizard-resolve", editAt);
   }, [solvedId, editAt]);
 
   const req = result?.requirement;
@@ -278,7 +275,7 @@ export function Explorer({
             </div>
           ) : null}
           <Results
-            result={result}
+            shown={shown!}
             selected={selected}
             recommendedKey={recommendedKey}
             setSelected={pick}
@@ -287,7 +284,7 @@ export function Explorer({
             planSlot={planSlot}
           />
           <Panel title={revise ? `Save revision ${revise.revision + 1}` : "Save"}>
-            <DefaultsSummary requirement={req} />
+            <DefaultsSummary requirement={req} groups={solver.differences} />
             <div className="mt-3" />
             <SavePanel
               requirement={req}
@@ -315,7 +312,7 @@ export function Explorer({
 
 /** Everything drawn from one solve; memoised so busy flags and typing elsewhere do not redraw the charts. */
 const Results = memo(function Results({
-  result,
+  shown,
   selected,
   recommendedKey,
   setSelected,
@@ -323,7 +320,7 @@ const Results = memo(function Results({
   setPinned,
   planSlot,
 }: {
-  result: SolveResult;
+  shown: Solved;
   selected: string | null;
   recommendedKey: string | null;
   setSelected: (k: string | null) => void;
@@ -332,18 +329,12 @@ const Results = memo(function Results({
   /** The plan editor, when the engine proposes ranges (or the designer is revising a plan). */
   planSlot: ReactNode;
 }) {
+  const result = shown.result;
   const req = result.requirement;
   const listed = result.candidates;
   const feasibleListed = result.candidates.filter((c) => c.feasible).length;
-  const choice = selected ? choiceFromKey(selected) : null;
-  const listedKeys = useMemo(
-    () => new Set([...(result.decadeScales ?? []), ...result.candidates].map(candidateKey)),
-    [result],
-  );
-  const pinnedChoices = useMemo(
-    () => pinned.map(choiceFromKey).filter((c): c is NonNullable<typeof c> => c !== null),
-    [pinned],
-  );
+  // What lies below the chart follows a deferred copy of the solve (see Below).
+  const later = useDeferredValue(shown);
   return (
     <>
       {req.readout.kind === "meter" && (
@@ -422,6 +413,60 @@ const Results = memo(function Results({
 
       {planSlot}
 
+      <Below
+        shown={later}
+        selected={selected}
+        recommendedKey={recommendedKey}
+        setSelected={setSelected}
+        pinned={pinned}
+        setPinned={setPinned}
+      />
+    </>
+  );
+});
+
+/**
+ * The refusals, the table and the selected pair in depth. They draw from a deferred copy of the
+ * solve: React commits the trade-off chart first and may interrupt this part for a newer edit,
+ * so hundreds of table cells and the study's curves (worked out on this thread) never hold up
+ * the chart the designer is watching.
+ */
+const Below = memo(function Below({
+  shown,
+  selected,
+  recommendedKey,
+  setSelected,
+  pinned,
+  setPinned,
+}: {
+  shown: Solved;
+  selected: string | null;
+  recommendedKey: string | null;
+  setSelected: (k: string | null) => void;
+  pinned: string[];
+  setPinned: (p: string[]) => void;
+}) {
+  const result = shown.result;
+  const req = result.requirement;
+  const listed = result.candidates;
+  const listedKeys = useMemo(
+    () => new Set([...(result.decadeScales ?? []), ...result.candidates].map(candidateKey)),
+    [result],
+  );
+  const choice = useMemo(
+    () => (selected && listedKeys.has(selected) ? choiceFromKey(selected) : null),
+    [selected, listedKeys],
+  );
+  const pinnedChoices = useMemo(
+    () => pinned.map(choiceFromKey).filter((c): c is NonNullable<typeof c> => c !== null),
+    [pinned],
+  );
+  // Edit → everything below the chart drawn as well (scripts/bench/wizard.ts reads "wizard-settled").
+  useEffect(() => {
+    measureSince("wizard-settled", shown.editAt);
+  }, [shown]);
+  return (
+    <>
       <Panel title="Why pairs were refused">
         <Rejections rejected={result.rejected} evaluated={result.evaluated} feasibleCount={result.feasibleCount} />
       </Panel>
@@ -441,9 +486,7 @@ const Results = memo(function Results({
         <p className="mt-2 text-2xs text-ink-faint">{rankingInWords(result)}</p>
       </Panel>
 
-      {choice && selected && listedKeys.has(selected) && (
-        <CandidateStudy req={req} choice={choice} pinned={pinnedChoices} />
-      )}
+      {choice && <CandidateStudy req={req} choice={choice} pinned={pinnedChoices} />}
     </>
   );
 });

@@ -6,8 +6,8 @@ import { useEffect } from "react";
 import { useFormContext, useWatch, type Control } from "react-hook-form";
 import { formatSI } from "@/lib/design/format";
 import { filterCornerHz, suggestInputFilter } from "@/lib/design/input-filter";
-import { parseQuantity } from "@/lib/design/units";
 import type { WizardValues } from "@/lib/wizard/form-values";
+import { readQuantity, useQuantity } from "@/lib/wizard/use-quantity";
 import { FormField, RadioField, SelectField, type LiveErrors } from "./form-field";
 
 // The form drops a field's value when the field leaves the screen (shouldUnregister), so a
@@ -45,12 +45,6 @@ const filterNames = [
   "inputFilter.tolerance",
   "amplifier.offsetCurrent",
 ] as const;
-
-const read = (v: unknown, dim: Parameters<typeof parseQuantity>[1]): number | null => {
-  if (typeof v !== "string" && typeof v !== "number") return null;
-  const r = parseQuantity(v, dim);
-  return r.ok ? r.value : null;
-};
 
 export function ShuntKindChoice() {
   return (
@@ -184,20 +178,24 @@ export function InputFilterFields({ live }: { live: LiveErrors }) {
   const on = useWatch<WizardValues, "inputFilterOn">({ name: "inputFilterOn" });
   const r = useWatch<WizardValues, "inputFilter.resistance">({ name: "inputFilter.resistance" });
   const c = useWatch<WizardValues, "inputFilter.capacitance">({ name: "inputFilter.capacitance" });
-  const offer = () => {
+  const offer = async () => {
     const v = getValues();
-    const fs = v.readout.kind === "adc" ? read(v.readout.sampleRateHz ?? "1 kHz", "frequency") : 10;
+    const [fs, offsetV, offsetCurrentA] = await Promise.all([
+      v.readout.kind === "adc" ? readQuantity(v.readout.sampleRateHz ?? "1 kHz", "frequency") : 10,
+      readQuantity(v.amplifier.offset, "voltage"),
+      readQuantity(v.amplifier.offsetCurrent || v.amplifier.biasCurrent, "current"),
+    ]);
     const s = suggestInputFilter({
       readoutHz: (fs ?? 1000) / (v.readout.kind === "adc" ? 10 : 1),
       bandwidthMinHz: 0,
-      offsetV: read(v.amplifier.offset, "voltage") ?? 10e-6,
-      offsetCurrentA: read(v.amplifier.offsetCurrent || v.amplifier.biasCurrent, "current") ?? 20e-9,
+      offsetV: offsetV ?? 10e-6,
+      offsetCurrentA: offsetCurrentA ?? 20e-9,
     });
     setValue("inputFilter.resistance", formatSI(s.resistance, "Ω"), { shouldDirty: true });
     setValue("inputFilter.capacitance", formatSI(s.capacitance, "F"), { shouldDirty: true });
   };
-  const rOhm = read(r ?? "", "resistance");
-  const cF = read(c ?? "", "capacitance");
+  const rOhm = useQuantity(r ?? "", "resistance");
+  const cF = useQuantity(c ?? "", "capacitance");
   const corner =
     rOhm && cF && rOhm > 0 && cF > 0 ? filterCornerHz({ resistance: rOhm, capacitance: cF, tolerance: 0 }) : null;
   return (
@@ -211,7 +209,7 @@ export function InputFilterFields({ live }: { live: LiveErrors }) {
               // After the fields mount (and get back any values they had), fill only what is empty.
               if (e.target.checked)
                 setTimeout(() => {
-                  if (!getValues("inputFilter.resistance")) offer();
+                  if (!getValues("inputFilter.resistance")) void offer();
                 }, 0);
             },
           })}
@@ -223,7 +221,15 @@ export function InputFilterFields({ live }: { live: LiveErrors }) {
   );
 }
 
-function FilterValues({ live, offer, corner }: { live: LiveErrors; offer: () => void; corner: number | null }) {
+function FilterValues({
+  live,
+  offer,
+  corner,
+}: {
+  live: LiveErrors;
+  offer: () => Promise<void>;
+  corner: number | null;
+}) {
   useKeptValues(filterNames);
   return (
     <>
@@ -261,7 +267,7 @@ function FilterValues({ live, offer, corner }: { live: LiveErrors; offer: () => 
         {corner !== null ? `Corner ${formatSI(corner, "Hz")} (1/(2π·R·C)). ` : ""}
         It narrows the noise bandwidth; its cost, the bias currents through its resistors (and in a difference stage,
         their share of the input resistors), shows as its own rows in the error budget.{" "}
-        <button type="button" className="text-signal underline" onClick={offer}>
+        <button type="button" className="text-signal underline" onClick={() => void offer()}>
           Start from the suggested values
         </button>{" "}
         (corner at a tenth of the sample rate).

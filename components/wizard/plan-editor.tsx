@@ -7,11 +7,11 @@ import { formatPercent, formatSI } from "@/lib/design/format";
 import type { PlanChoice } from "@/lib/design/plan-choice";
 import { moveSwitchPoint, withRangePair, type RangeCandidates } from "@/lib/design/range-candidates";
 import { SWITCH_DOWN_FRACTION } from "@/lib/design/range-plan";
-import { parseQuantity } from "@/lib/design/units";
 import { PlanStretchChart, PlanStretchLegend } from "@/components/charts/plan-stretch-chart";
 import { RangePlanChart } from "@/components/charts/range-plan-chart";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
+import { check } from "@/lib/wizard/checker";
 import type { PlanCheckState } from "@/lib/wizard/use-plan-check";
 
 const pairText = (c: { shuntOhms: number; gain: number }) =>
@@ -263,8 +263,13 @@ function SwitchPointRow({
     setError(null);
     setPlan(moved.plan);
   };
-  const commit = () => {
-    const r = parseQuantity(typed.trim(), "current", `Switch point ${index + 1}`);
+  const commit = async () => {
+    const r = await check({
+      kind: "quantity",
+      input: typed.trim(),
+      dim: "current",
+      label: `Switch point ${index + 1}`,
+    });
     if (!r.ok) {
       setError(r.message);
       return;
@@ -282,11 +287,11 @@ function SwitchPointRow({
             id={`${id}-up`}
             value={typed}
             onChange={(e) => setTyped(e.target.value)}
-            onBlur={commit}
+            onBlur={() => void commit()}
             onKeyDown={(e) => {
               if (e.key === "Enter") {
                 e.preventDefault();
-                commit();
+                void commit();
               }
             }}
             aria-invalid={error ? true : undefined}

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
 import { seriesNames } from "@/lib/design/eseries";
-import { topologies, topologyLabels } from "@/lib/design/requirement";
+import { topologies, topologyLabels } from "@/lib/design/requirement-options";
 import type { WizardValues } from "@/lib/wizard/form-values";
 import { LibraryPicker, useLibrary } from "./library-picker";
 import {

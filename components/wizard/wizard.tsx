@@ -2,22 +2,17 @@
 // The design wizard: the requirement form (steps) on the left, the live-solved explorer on
 // the right. The form is mounted only once the saved draft has been read, so a reload
 // comes back exactly where the designer left it.
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { FormProvider, useForm, type Resolver, type ResolverResult, type ResolverSuccess } from "react-hook-form";
-import { z } from "zod";
-import { ambiguousPercentErrors } from "@/lib/design/ambiguous-percent";
-import { requirementSchema, type Requirement } from "@/lib/design/requirement";
+import { FormProvider, useForm, type Resolver } from "react-hook-form";
+import type { Requirement } from "@/lib/design/requirement";
 import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { Choice } from "@/lib/design/types";
 import { candidateKey } from "@/lib/wizard/candidate-key";
 import { deepMerge } from "@/lib/wizard/deep-merge";
 import { clearDraft, draftKey, loadDraft, saveDraft, type Draft } from "@/lib/wizard/draft";
-import { errorPaths, inWords, valueAt } from "@/lib/wizard/form-errors";
+import { check, warmChecker } from "@/lib/wizard/checker";
+import { engineErrorsFor, errorPaths } from "@/lib/wizard/form-errors";
 import { revisionStart } from "@/lib/wizard/from-requirement";
-import { outOfRange, outOfRangeTyped } from "@/lib/wizard/ranges";
-import { convertDrop } from "@/lib/wizard/drop-mode";
-import { engineErrorsFor } from "@/lib/wizard/form-errors";
 import { readableDefaults, valuesFrom, type WizardValues } from "@/lib/wizard/form-values";
 import { scenarios } from "@/lib/wizard/scenarios";
 import { useSolver } from "@/lib/wizard/use-solver";
@@ -77,53 +72,12 @@ function revisionDraft(t: ReviseTarget): Draft {
   };
 }
 
-// The form holds what a person types (WizardValues, all text); the engine's schema reads it into a
-// normalized Requirement, which is what a valid form resolves to.
-// The form's text is the schema's input at run time; the identity preprocess says so to the compiler.
-const wizardSchema = z.preprocess((typed: WizardValues) => typed, requirementSchema);
-const parse: Resolver<WizardValues, unknown, Requirement> = zodResolver(wizardSchema);
-/** The engine's schema, then the working range (an absurd 1e30 A gets a plain message on its field). */
-const resolved = (r: ResolverResult<WizardValues, Requirement>): r is ResolverSuccess<Requirement> =>
-  Object.keys(r.errors).length === 0;
-const withinRange: Resolver<WizardValues, unknown, Requirement> = async (values, context, options) => {
-  const r = await parse(values, context, options);
-  if (Object.keys(r.errors).length > 0) {
-    // Stock schema messages become the field's own words, quoting what was typed.
-    for (const path of errorPaths(r.errors)) {
-      const walk = (node: unknown, at: string) => {
-        const n = node as { message?: unknown } & Record<string, unknown>;
-        if (!n || typeof n !== "object") return;
-        if (typeof n.message === "string") n.message = inWords(at, n.message, valueAt(values, at));
-        // A list carries its own message and one per bad entry: word them all.
-        for (const [k, v] of Object.entries(n))
-          if (k !== "ref" && k !== "message" && k !== "type") walk(v, `${at}.${k}`);
-      };
-      walk(valueAt(r.errors, path), path);
-    }
-    // A field typed far out of range says so even while another field is still incomplete; a bare
-    // percent that reads two ways says so in place of any other message on its field.
-    const ambiguous = ambiguousPercentErrors(values, "type");
-    const far = { ...outOfRangeTyped(values), ...ambiguous };
-    for (const [path, msgs] of Object.entries(far)) {
-      if (valueAt(r.errors, path) && !ambiguous[path]) continue;
-      const keys = path.split(".");
-      let node = r.errors as Record<string, unknown>;
-      for (const k of keys.slice(0, -1)) node = (node[k] ??= {}) as Record<string, unknown>;
-      node[keys.at(-1)!] = { type: "range", message: msgs[0] };
-    }
-    return r;
-  }
-  if (!resolved(r)) return r;
-  const far = { ...outOfRange(r.values), ...ambiguousPercentErrors(values, "type") };
-  if (Object.keys(far).length === 0) return r;
-  const errors: Record<string, unknown> = {};
-  for (const [path, msgs] of Object.entries(far)) {
-    const keys = path.split(".");
-    let node = errors;
-    for (const k of keys.slice(0, -1)) node = (node[k] ??= {}) as Record<string, unknown>;
-    node[keys.at(-1)!] = { type: "range", message: msgs[0] };
-  }
-  return { values: {}, errors: errors as never };
+// The form holds what a person types (WizardValues, all text); the engine's schema, in the check
+// worker, reads it into a normalized Requirement, which is what a valid form resolves to
+// (lib/wizard/form-check.ts).
+const inWorker: Resolver<WizardValues, unknown, Requirement> = async (values) => {
+  const r = await check({ kind: "form", values });
+  return r.ok ? { values: r.requirement, errors: {} } : { values: {}, errors: r.errors };
 };
 
 export function Wizard({ canSave, revise }: { canSave: boolean; revise?: ReviseTarget }) {
@@ -174,7 +128,7 @@ function WizardForm({
   storageKey: string;
 }) {
   const methods = useForm<WizardValues, unknown, Requirement>({
-    resolver: withinRange,
+    resolver: inWorker,
     defaultValues: deepMerge(readableDefaults, initial.values),
     mode: "onTouched",
     shouldUnregister: true,
@@ -204,6 +158,8 @@ function WizardForm({
   const { request: solve } = solver;
   const base = useMemo(() => (revise ? revisionStart(revise.requirement).base : null), [revise]);
   const request = useCallback((values: unknown) => solve(base ? deepMerge(base, values) : values), [solve, base]);
+  // The check worker loads the schema and the unit parser while the person reads the first step.
+  useEffect(warmChecker, []);
   useEffect(() => {
     request(getValues());
     const sub = watch((values) => {
@@ -323,12 +279,14 @@ function WizardForm({
   // Switching how the allowed drop is given converts the value: 60 mV of 3 V is 2 %.
   const switchDropMode = (to: "volts" | "share") => {
     if (to === dropMode) return;
-    const converted = convertDrop(getValues(), to);
+    const converting = check({ kind: "convertDrop", values: getValues(), to });
     setDropMode(to);
     clearErrors(["drop.max", "drop.fraction"] as never);
-    if (converted !== null)
-      // Let the other input mount before filling it.
-      setTimeout(() => setValue(to === "share" ? "drop.fraction" : "drop.max", converted, { shouldDirty: true }), 0);
+    // The other input mounts meanwhile; fill it once the worker has converted the value.
+    void converting.then((converted) => {
+      if (converted !== null)
+        setTimeout(() => setValue(to === "share" ? "drop.fraction" : "drop.max", converted, { shouldDirty: true }), 0);
+    });
   };
   const next = async () => {
     const def = steps[step]!;

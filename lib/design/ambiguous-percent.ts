@@ -7,8 +7,9 @@
 import { parseRequirement, type FieldErrors, type ParseRequirementResult } from "./requirement";
 import { isBareNumber, roundSig } from "./units";
 
-/** Below this a bare accuracy target reads like a fraction (0.02 for 2 %). Common practice, no source. */
-export const AMBIGUOUS_PERCENT_BELOW = 0.1;
+import { AMBIGUOUS_PERCENT_BELOW } from "./accuracy-text";
+
+export { AMBIGUOUS_PERCENT_BELOW, accuracyTargetText } from "./accuracy-text";
 
 /** How the message tells the person to give the value: an API body sends, a form is typed into. */
 export type Verb = "send" | "type";
@@ -66,9 +67,4 @@ export function parseRequirementInput(raw: unknown, verb: Verb = "send"): ParseR
     .map(([path, msgs]) => `${path}: ${msgs.join("; ")}`)
     .join("\n");
   return { ok: false, message, fieldErrors };
-}
-
-/** An accuracy target (%) as form text that reads back to it: with its sign where a bare number is refused. */
-export function accuracyTargetText(percent: number): string {
-  return percent > 0 && percent < AMBIGUOUS_PERCENT_BELOW ? `${percent} %` : String(percent);
 }

@@ -1,45 +1,12 @@
 // Bidirectional spans (issue 14, item 1): a span whose current.min is below zero is read around
 // a zero-current output level, amplifier.reference, whose own error is an offset source.
 // docs/model.md §3 "Signed spans" states the meaning of each constraint for such a span.
-import { z } from "zod";
-import { quantity } from "./units";
 
 /**
  * The zero-current level's error when the request gives none (from memory): a level divided
  * down from a precision reference with 0.1 % resistors and buffered, ±0.2 % and 25 ppm/K.
  */
 export const DEFAULT_ZERO_REFERENCE = { tolerance: 0.002, tempco: 25e-6 } as const;
-
-/** `amplifier.reference` (API.md v2). Voltage left out: placed by `defaultZeroLevelV`. */
-export const zeroReferenceField = z
-  .object({
-    voltage: z.preprocess(
-      (v) => (v === "" || v === null ? undefined : v),
-      quantity("voltage", "Zero-current output level")
-        .check(
-          z.superRefine((v: number, ctx) => {
-            if (!(v >= 0)) ctx.addIssue({ code: "custom", message: "Zero-current output level cannot be negative" });
-          }),
-        )
-        .optional(),
-    ),
-    tolerance: quantity("fraction", "Zero-level tolerance")
-      .check(
-        z.superRefine((v: number, ctx) => {
-          if (!(v >= 0 && v < 0.2))
-            ctx.addIssue({ code: "custom", message: "Zero-level tolerance must be between 0 and 20 %" });
-        }),
-      )
-      .default(DEFAULT_ZERO_REFERENCE.tolerance),
-    tempco: quantity("tempco", "Zero-level tempco")
-      .check(
-        z.superRefine((v: number, ctx) => {
-          if (!(v >= 0)) ctx.addIssue({ code: "custom", message: "Zero-level tempco cannot be negative" });
-        }),
-      )
-      .default(DEFAULT_ZERO_REFERENCE.tempco),
-  })
-  .prefault({});
 
 export type ZeroReference = { voltage: number; tolerance: number; tempco: number };
 

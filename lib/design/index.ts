@@ -32,6 +32,7 @@ export {
 export * from "./bench-check";
 export { decadeScale, decadeScaleLabel } from "./decade";
 export * from "./insertion";
+export { insertionSchema } from "./insertion-schema";
 export * from "./netlist";
 export * from "./monte-carlo";
 export { mulberry32 } from "./prng";

@@ -2,41 +2,10 @@
 // each input leg and a capacitor from each leg to ground. It band-limits the signal and the
 // noise, and costs accuracy: the amplifier's bias currents flow through its resistors, and in a
 // difference stage those resistors add to the stage's input resistors.
-import { z } from "zod";
 import { seriesValues } from "./eseries";
-import { blank, positive, q } from "./quantity-rules";
 
 /** Tolerance of the filter resistors when the request gives none (from memory: ordinary 1 % thick-film chips). */
 export const DEFAULT_FILTER_TOLERANCE = 0.01;
-
-export const inputFilterField = z.preprocess(
-  (v) =>
-    blank(v) ||
-    (typeof v === "object" &&
-      v !== null &&
-      blank((v as { resistance?: unknown }).resistance) &&
-      blank((v as { capacitance?: unknown }).capacitance))
-      ? null
-      : v,
-  z
-    .object(
-      {
-        resistance: q("resistance", "Input filter resistor (each leg)", positive("Input filter resistor")),
-        capacitance: q("capacitance", "Input filter capacitor (each leg)", positive("Input filter capacitor")),
-        tolerance: z.preprocess(
-          (v) => (blank(v) ? undefined : v),
-          q(
-            "fraction",
-            "Input filter resistor tolerance",
-            (v) => (v >= 0 && v < 0.2) || "Input filter resistor tolerance must be between 0 and 20 %",
-          ).default(DEFAULT_FILTER_TOLERANCE),
-        ),
-      },
-      { error: "Input filter: expected an object with resistance and capacitance (each leg)" },
-    )
-    .nullable()
-    .default(null),
-);
 
 export type InputFilter = { resistance: number; capacitance: number; tolerance: number };
 

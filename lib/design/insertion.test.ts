@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { insertion, InsertionError, insertionCurve, insertionSchema } from "./insertion";
+import { insertion, InsertionError, insertionCurve } from "./insertion";
+import { insertionSchema } from "./insertion-schema";
 
 describe("insertion", () => {
   it("parses unit strings in the body", () => {

@@ -1,8 +1,6 @@
 // The readout's own error (issue 14, item 2): an ADC's reference, offset, gain error and INL,
 // or a meter's ±(% of reading + digits), and what a one- or two-point calibration takes out.
 // Field names are API.md v2's; the defaults are a class of part, from memory (DEFAULTS.md).
-import { z } from "zod";
-import { quantity } from "./units";
 
 /** A reading's calibration before use (DEFAULTS.md, docs/model.md §3 "Calibration"). */
 export const calibrations = ["none", "one-point", "two-point"] as const;
@@ -27,56 +25,6 @@ export const DEFAULT_ADC_OFFSET_LSB = 2;
 export const DEFAULT_ADC_GAIN_ERROR = 0.0005;
 export const DEFAULT_ADC_INL_LSB = 1;
 export const DEFAULT_METER_ACCURACY = { percentOfReading: 0.005, digits: 2 } as const;
-
-const ratio = (label: string, max: number) =>
-  quantity("fraction", label).check(
-    z.superRefine((v: number, ctx) => {
-      if (!(v >= 0 && v < max))
-        ctx.addIssue({ code: "custom", message: `${label} must be between 0 and ${max * 100} %` });
-    }),
-  );
-const nonNegative = (dim: Parameters<typeof quantity>[0], label: string) =>
-  quantity(dim, label).check(
-    z.superRefine((v: number, ctx) => {
-      if (!(v >= 0)) ctx.addIssue({ code: "custom", message: `${label} cannot be negative` });
-    }),
-  );
-const lsb = (label: string) =>
-  z
-    .number({ error: `${label}: expected a number of LSB` })
-    .min(0, { error: `${label} cannot be negative` })
-    .max(1e6, { error: `${label} must be at most 1000000 LSB` });
-
-/** The ADC fields of API.md v2, spread into the ADC readout's schema. */
-export const adcErrorFields = {
-  reference: z
-    .object({
-      tolerance: ratio("ADC reference tolerance", 0.2).optional(),
-      tempco: nonNegative("tempco", "ADC reference tempco").optional(),
-    })
-    .optional(),
-  offsetLsb: lsb("ADC offset").optional(),
-  gainError: ratio("ADC gain error", 0.2).optional(),
-  inlLsb: lsb("ADC INL").optional(),
-};
-
-/** The meter's accuracy of API.md v2, spread into the meter readout's schema. */
-export const meterErrorFields = {
-  accuracy: z
-    .object({
-      percentOfReading: ratio("Meter accuracy, % of reading", 0.5).optional(),
-      digits: z
-        .number({ error: "Meter accuracy, digits: expected a number of counts" })
-        .min(0, { error: "Meter accuracy, digits cannot be negative" })
-        .max(1e6, { error: "Meter accuracy, digits must be at most 1000000" })
-        .optional(),
-    })
-    .optional(),
-};
-
-export const calibrationField = z
-  .enum(calibrations, { error: `Calibration: expected one of ${calibrations.join(", ")}` })
-  .default("none");
 
 /** The readout as the normalized requirement holds it (only what this module reads). */
 export type ReadoutWithErrors =

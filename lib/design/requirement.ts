@@ -5,7 +5,6 @@ import { z } from "zod";
 import { isSeriesName, seriesNames, seriesValues, type SeriesName } from "./eseries";
 import { commonFixedGains, resistorPairGains, type GainSet } from "./gains";
 import { TRACE_GRID_M, traceLengths } from "./copper-trace";
-import { inputFilterField } from "./input-filter";
 import { blank, nonNegative, positive, q } from "./quantity-rules";
 import {
   constructionIssues,
@@ -14,22 +13,25 @@ import {
   type ShuntConstruction,
 } from "./shunt-construction";
 import { parsePercent, quantity } from "./units";
-import { adcErrorFields, calibrationField, meterErrorFields } from "./readout-error";
+import {
+  adcErrorFields,
+  calibrationField,
+  inputFilterField,
+  meterErrorFields,
+  zeroReferenceField,
+} from "./requirement-fields";
 import {
   defaultZeroLevelV,
   isSigned,
   largestMagnitude,
   outputWindow,
   signedSpanIssues,
-  zeroReferenceField,
   type ZeroReference,
 } from "./bidirectional";
-import { topologies, type Topology } from "./topology";
+import { defaultRequirementInput as startValues, loadModels, topologies, type Topology } from "./requirement-options";
 
-export { topologies, topologyLabels, type Topology } from "./topology";
-
-export const loadModels = ["constant-current", "resistive", "constant-power"] as const;
-export type LoadModel = (typeof loadModels)[number];
+// The choices and start values live in a module without zod, for screens that only list them.
+export { loadModels, topologies, topologyLabels, type LoadModel, type Topology } from "./requirement-options";
 
 /**
  * Input common-mode range by topology when the request gives none, V (from memory: typical of
@@ -501,11 +503,5 @@ export function parseRequirement(input: unknown): ParseRequirementResult {
   return { ok: false, message, fieldErrors };
 }
 
-/** The demo soil-moisture logger (docs/model.md §6): the wizard's start values. */
-export const defaultRequirementInput: RequirementInput = {
-  current: { min: "3 uA", max: "180 mA" },
-  supply: { voltage: "3.0 V", side: "low" },
-  drop: { max: "60 mV" },
-  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
-  resolution: { countsAtMin: 10 },
-};
+/** The wizard's start values (./requirement-options), checked here against the schema's input type. */
+export const defaultRequirementInput: RequirementInput = startValues;

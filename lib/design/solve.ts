@@ -13,12 +13,15 @@ import {
 } from "./model";
 import { paretoFrontSorted } from "./pareto";
 import { rejectReasons, type RejectReason } from "./pair";
+import { defaultRankingText } from "./ranking-text";
 import { compileRankExpression, type CompiledRank, type RankScope } from "./rank";
 import { diagnose, type Diagnosis } from "./diagnosis";
 import { planRanges, whyNoPlan, type RangePlan } from "./range-plan";
 import type { Requirement } from "./requirement";
 import { sweepGrid, sweepValues, type SweepArrays } from "./sweep";
 import type { Candidate } from "./types";
+
+export { defaultRankingText };
 
 export type SolveResult = {
   requirement: Requirement;
@@ -37,9 +40,6 @@ export type SolveResult = {
 
 /** `diagnose: false` skips the diagnosis (its relaxations re-run the sweep many times). */
 export type SolveOptions = { rankExpression?: string; diagnose?: boolean };
-
-export const defaultRankingText =
-  "Sum of each objective as a share of its limit: errorAtMinPercent / accuracy target + burdenV / allowed drop + lsbA / (Imin / counts at Imin); lower first.";
 
 function popcount(x: number): number {
   let c = 0;

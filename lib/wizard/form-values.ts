@@ -1,6 +1,6 @@
 // The wizard's form shape: what the designer types (unit strings), one field per input.
 // The engine's requirement schema validates it as it stands (extra keys are ignored).
-import { accuracyTargetText } from "@/lib/design/ambiguous-percent";
+import { accuracyTargetText } from "@/lib/design/accuracy-text";
 import type { RelaxSuggestion } from "@/lib/design/diagnosis";
 import { formatSI } from "@/lib/design/format";
 import type { LoadModel, RequirementInput } from "@/lib/design/requirement";

@@ -1,7 +1,7 @@
 // A saved (normalized, SI) requirement back into the wizard's typed form, for revising a design.
 // Values are written with 12 significant figures so the round trip through the parser is exact and
 // an untouched field never shows up as a change in the next revision.
-import { accuracyTargetText } from "@/lib/design/ambiguous-percent";
+import { accuracyTargetText } from "@/lib/design/accuracy-text";
 import { formatSI } from "@/lib/design/format";
 import type { Requirement } from "@/lib/design/requirement";
 import { readableDefaults, type WizardValues } from "./form-values";

@@ -1,6 +1,7 @@
 // The recommended pair and why, in words: the top of the engine's ranking (lib/design/solve.ts
 // ranks the front by how much of each limit a pair uses), described by those same shares.
-import { defaultRankingText, type SolveResult } from "@/lib/design/solve";
+import { defaultRankingText } from "@/lib/design/ranking-text";
+import type { SolveResult } from "@/lib/design/solve";
 import { formatPercent, formatSI } from "@/lib/design/format";
 import type { Candidate } from "@/lib/design/types";
 

@@ -1,5 +1,6 @@
 // Start points for the wizard, from the invented demo scenario (docs/model.md §6).
-import { defaultRequirementInput, type RequirementInput } from "@/lib/design/requirement";
+import { defaultRequirementInput } from "@/lib/design/requirement-options";
+import type { RequirementInput } from "@/lib/design/requirement";
 
 export type Scenario = { key: string; title: string; summary: string; input: RequirementInput };
 

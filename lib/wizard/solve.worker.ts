@@ -2,12 +2,13 @@
 // and post the result back. Only the latest request matters; the page drops stale replies.
 import { parseRequirementInput } from "@/lib/design/ambiguous-percent";
 import { solve } from "@/lib/design/solve";
+import { differencesFromDefaults } from "./from-defaults";
 import { outOfRange } from "./ranges";
-import type { SolveReply, SolveRequest } from "./solver-protocol";
+import type { DifferencesReply, SolveReply, SolveRequest } from "./solver-protocol";
 
 // The app compiles with the DOM's types, where self is a window; in this worker it is the worker's
 // scope, whose postMessage(message) the window's one-argument overload describes.
-const post = (reply: SolveReply) => self.postMessage(reply);
+const post = (reply: SolveReply | DifferencesReply) => self.postMessage(reply);
 
 self.addEventListener("message", (event: MessageEvent<SolveRequest>) => {
   const { id, input } = event.data;
@@ -25,6 +26,7 @@ self.addEventListener("message", (event: MessageEvent<SolveRequest>) => {
     const t0 = performance.now();
     const result = solve(parsed.requirement);
     post({ id, ok: true, result, solveMs: performance.now() - t0 });
+    post({ id, differences: differencesFromDefaults(parsed.requirement) });
   } catch (e) {
     post({ id, ok: false, fieldErrors: {}, message: e instanceof Error ? e.message : String(e) });
   }

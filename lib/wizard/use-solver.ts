@@ -6,15 +6,18 @@
 import { useCallback, useEffect, useRef, useState } from "react";
 import type { FieldErrors } from "@/lib/design/requirement";
 import type { SolveResult } from "@/lib/design/solve";
-import type { SolveReply, SolveRequest } from "./solver-protocol";
+import type { StepDifferences } from "./from-defaults";
+import { measureSince } from "./measure";
+import type { DifferencesReply, SolveReply, SolveRequest } from "./solver-protocol";
+
+/** A solve on screen: its result, the sweep's time, and when the edit it answers happened. */
+export type Solved = { id: number; result: SolveResult; solveMs: number; editAt: number };
 
 export type SolverState =
   | { status: "idle" }
   | { status: "solved"; id: number; result: SolveResult; solveMs: number; editAt: number }
   | { status: "invalid"; id: number; fieldErrors: FieldErrors; message: string; editAt: number };
 
-/** Debounce for bursts of keystrokes; short, so the edit-to-redraw time stays well under 100 ms. */
-const DEBOUNCE_MS = 10;
 /** A sweep running longer than this shows its progress (the time it has taken so far). */
 export const SLOW_MS = 200;
 /**
@@ -32,14 +35,16 @@ export function useSolver() {
   const pending = useRef<SolveRequest | null>(null);
   const editTimes = useRef(new Map<number, number>());
   const nextId = useRef(1);
-  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const slowTimer = useRef<ReturnType<typeof setTimeout> | null>(null);
   const [state, setState] = useState<SolverState>({ status: "idle" });
   const [busy, setBusy] = useState(false);
   // Set only once a sweep has run SLOW_MS: a quick one never flashes a progress line.
   const [sweeping, setSweeping] = useState<Sweeping>(null);
   // The last good result stays on screen while the form holds an error.
-  const [last, setLast] = useState<{ result: SolveResult; solveMs: number } | null>(null);
+  const [last, setLast] = useState<Solved | null>(null);
+  // The save summary's differences from the defaults, which follow each solved reply.
+  const [differences, setDifferences] = useState<{ id: number; groups: StepDifferences[] } | null>(null);
+  const lastSolved = useRef(0);
   const start = useRef<() => void>(() => undefined);
 
   const dispatch = useCallback(() => {
@@ -60,18 +65,18 @@ export function useSolver() {
   }, []);
 
   useEffect(() => {
-    const onReply = (event: MessageEvent<SolveReply>) => {
+    const onReply = (event: MessageEvent<SolveReply | DifferencesReply>) => {
+      if ("differences" in event.data) {
+        if (event.data.id === lastSolved.current) setDifferences({ id: event.data.id, groups: event.data.differences });
+        return;
+      }
       const reply = event.data;
       if (reply.id !== inFlight.current?.id) return; // from a worker stopped meanwhile
       inFlight.current = null;
       const editAt = editTimes.current.get(reply.id) ?? performance.now();
       editTimes.current.delete(reply.id);
       // Edit → answer from the worker (the rest of "wizard-resolve" is drawing).
-      try {
-        performance.measure("wizard-roundtrip", { start: editAt, end: performance.now() });
-      } catch {
-        /* no User Timing level 3 */
-      }
+      measureSince("wizard-roundtrip", editAt);
       // A newer input is waiting: skip drawing this one and solve that instead.
       if (pending.current) {
         dispatch();
@@ -79,7 +84,10 @@ export function useSolver() {
       }
       settle();
       setBusy(false);
-      if (reply.ok) setLast({ result: reply.result, solveMs: reply.solveMs });
+      if (reply.ok) {
+        lastSolved.current = reply.id;
+        setLast({ id: reply.id, result: reply.result, solveMs: reply.solveMs, editAt });
+      }
       setState(
         reply.ok
           ? { status: "solved", id: reply.id, result: reply.result, solveMs: reply.solveMs, editAt }
@@ -110,7 +118,6 @@ export function useSolver() {
     return () => {
       worker.current?.terminate();
       worker.current = null;
-      if (timer.current) clearTimeout(timer.current);
       if (slowTimer.current) clearTimeout(slowTimer.current);
     };
   }, [dispatch, settle]);
@@ -124,21 +131,22 @@ export function useSolver() {
       // Keep a plain copy: the form hands out live objects.
       pending.current = { id, input: JSON.parse(JSON.stringify(input ?? {})) as unknown };
       setBusy(true);
-      if (timer.current) clearTimeout(timer.current);
-      timer.current = setTimeout(() => {
-        const running = inFlight.current;
-        // A long sweep made stale by this edit: stop its worker and solve the edit on a fresh one.
-        if (running && performance.now() - running.startedAt >= CANCEL_AFTER_MS) {
-          editTimes.current.delete(running.id);
-          inFlight.current = null;
-          settle();
-          start.current();
-        }
-        dispatch();
-      }, DEBOUNCE_MS);
+      // No debounce: a burst of keystrokes is coalesced by the queue itself (the first goes at once,
+      // the rest wait as one pending input behind it), so a single edit never waits on a timer.
+      const running = inFlight.current;
+      // A long sweep made stale by this edit: stop its worker and solve the edit on a fresh one.
+      if (running && performance.now() - running.startedAt >= CANCEL_AFTER_MS) {
+        editTimes.current.delete(running.id);
+        inFlight.current = null;
+        settle();
+        start.current();
+      }
+      dispatch();
     },
     [dispatch, settle],
   );
 
-  return { state, busy, sweeping, last, request };
+  /** The differences of the result on screen; null until the worker has sent them. */
+  const shownDifferences = last && differences?.id === last.id ? differences.groups : null;
+  return { state, busy, sweeping, last, differences: shownDifferences, request };
 }
