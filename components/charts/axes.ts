@@ -19,6 +19,19 @@ export function logTicks(lo: number, hi: number, max = 7): number[] {
   return out.length >= 2 ? out : [lo, hi];
 }
 
+/**
+ * At most `max` of a log axis's ticks, so labels never run into each other on a narrow chart:
+ * decades first (mantissa 1), then every n-th of what remains.
+ */
+export function thinTicks(values: number[], max: number): number[] {
+  if (values.length <= max) return values;
+  const decades = values.filter((v) => Math.abs(Math.log10(v) - Math.round(Math.log10(v))) < 1e-9);
+  const pool = decades.length >= 2 ? decades : values;
+  if (pool.length <= max) return pool;
+  const step = Math.ceil(pool.length / Math.max(max, 2));
+  return pool.filter((_, i) => i % step === 0);
+}
+
 /** A log domain at least `minRatio` wide, padded by a fraction of a decade on each side. */
 export function logDomain(values: number[], pad = 0.08, minRatio = 3): [number, number] {
   const pos = values.filter((v) => v > 0 && Number.isFinite(v));

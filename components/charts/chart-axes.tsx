@@ -3,8 +3,9 @@
 // log current (or burden) axis: a log axis is ticked at decades (and 2, 5 within them on a short
 // span, axes.ts logTicks) over its domain, a linear one at round values. Rendered inside
 // <XYChart>, whose scales it reads.
-import { Axis, Grid } from "@visx/xychart";
-import { bottomLabelOffset, leftLabelOffset, logTicks } from "./axes";
+import { Axis, DataContext, Grid } from "@visx/xychart";
+import { useContext } from "react";
+import { bottomLabelOffset, leftLabelOffset, logTicks, thinTicks } from "./axes";
 
 export type AxisSpec = {
   label: string;
@@ -15,8 +16,16 @@ export type AxisSpec = {
   numTicks?: number;
 };
 
-const ticks = (a: AxisSpec) =>
-  a.logDomain ? { tickValues: logTicks(a.logDomain[0], a.logDomain[1]) } : { numTicks: a.numTicks ?? 5 };
+/** Room one tick label needs along its axis, px ("500 µV" across, a line of text up). */
+const LABEL_ACROSS_PX = 58;
+const LABEL_UP_PX = 24;
+
+const ticks = (a: AxisSpec, room: number) => {
+  const max = Math.max(2, Math.floor(room) + 1);
+  return a.logDomain
+    ? { tickValues: thinTicks(logTicks(a.logDomain[0], a.logDomain[1]), max) }
+    : { numTicks: Math.min(a.numTicks ?? 5, max) };
+};
 
 export function ChartAxes({
   x,
@@ -30,6 +39,10 @@ export function ChartAxes({
   gridStroke?: string;
   gridTicks?: number;
 }) {
+  // The plotting area's size, from the chart the axes sit in (0 before it is measured).
+  const { innerWidth = 0, innerHeight = 0 } = useContext(DataContext);
+  const across = innerWidth > 0 ? innerWidth / LABEL_ACROSS_PX : Infinity;
+  const up = innerHeight > 0 ? innerHeight / LABEL_UP_PX : Infinity;
   return (
     <>
       <Grid
@@ -42,14 +55,14 @@ export function ChartAxes({
         orientation="bottom"
         labelOffset={bottomLabelOffset}
         label={x.label}
-        {...ticks(x)}
+        {...ticks(x, across)}
         tickFormat={(v: number) => x.tick(v)}
       />
       <Axis
         orientation="left"
         labelOffset={leftLabelOffset}
         label={y.label}
-        {...ticks(y)}
+        {...ticks(y, up)}
         tickFormat={(v: number) => y.tick(v)}
       />
     </>
