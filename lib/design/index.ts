@@ -48,3 +48,4 @@ export * from "./plan-curves";
 export * from "./plan-switching";
 export * from "./plan-netlist";
 export * from "./resistor-code";
+export * from "./signed-output";

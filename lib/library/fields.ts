@@ -105,32 +105,36 @@ export const shuntFields: FieldSpec[] = [
 // Readout parts: the keys are the requirement's readout names (API.md v2); a dotted key is a figure
 // inside a group (reference.tolerance), as the API's field errors name it.
 const lsbs = (v: unknown) => (typeof v === "number" ? `${v} LSB` : "");
+// Six figures: a 4.096 V full scale must not come back from the edit form as 4.1 V.
+const si6 = (unit: string) => (v: unknown) => (typeof v === "number" ? formatSI(v, unit, 6) : "");
+const percent6 = (v: unknown) => (typeof v === "number" ? `${Number((v * 100).toPrecision(6))} %` : "");
+const ppm6 = (v: unknown) => (typeof v === "number" ? `${Number((v * 1e6).toPrecision(6))} ppm/K` : "");
 
 export const adcFields: FieldSpec[] = [
   { key: "name", label: "Name", kind: "text", show: plain },
   { key: "bits", label: "Resolution (bits)", kind: "number", show: (v) => (typeof v === "number" ? `${v} bit` : "") },
-  { key: "fullScale", label: "Full scale", kind: "quantity", show: si("V"), hint: "e.g. 2.5 V" },
+  { key: "fullScale", label: "Full scale", kind: "quantity", show: si6("V"), hint: "e.g. 2.5 V" },
   {
     key: "sampleRateHz",
     label: "Highest sample rate",
     kind: "quantity",
-    show: si("Hz"),
+    show: si6("Hz"),
     hint: "e.g. 10 kHz; the wizard starts the design's rate here",
   },
   {
     key: "reference.tolerance",
     label: "Reference tolerance",
     kind: "quantity",
-    show: percent,
+    show: percent6,
     hint: "Initial accuracy of its voltage reference, e.g. 0.1 %",
   },
-  { key: "reference.tempco", label: "Reference tempco", kind: "quantity", show: ppm, hint: "e.g. 20 ppm/K" },
+  { key: "reference.tempco", label: "Reference tempco", kind: "quantity", show: ppm6, hint: "e.g. 20 ppm/K" },
   { key: "offsetLsb", label: "Offset error (LSB)", kind: "number", show: lsbs, hint: "e.g. 2" },
   {
     key: "gainError",
     label: "Gain error (reference excluded)",
     kind: "quantity",
-    show: percent,
+    show: percent6,
     hint: "e.g. 0.05 %",
   },
   { key: "inlLsb", label: "Integral nonlinearity, INL (LSB)", kind: "number", show: lsbs, hint: "e.g. 1" },
@@ -138,13 +142,13 @@ export const adcFields: FieldSpec[] = [
 
 export const meterFields: FieldSpec[] = [
   { key: "name", label: "Name", kind: "text", show: plain },
-  { key: "fullScale", label: "Range full scale", kind: "quantity", show: si("V"), hint: "e.g. 200 mV" },
+  { key: "fullScale", label: "Range full scale", kind: "quantity", show: si6("V"), hint: "e.g. 200 mV" },
   { key: "counts", label: "Counts", kind: "number", show: plain, hint: "Counts across the range, e.g. 2000" },
   {
     key: "accuracy.percentOfReading",
     label: "Accuracy, % of reading",
     kind: "quantity",
-    show: percent,
+    show: percent6,
     hint: "e.g. 0.5 %",
   },
   {
