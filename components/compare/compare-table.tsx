@@ -73,7 +73,13 @@ function Section({
         </th>
       </tr>
       {list.map((r) => {
-        const apart = requirements ? basisDiffers(r.key, requirements) : [];
+        // Only designs that have the figure are weighed (a one-way design has no negative end).
+        const apart = requirements
+          ? basisDiffers(
+              r.key,
+              requirements.filter((_, i) => r.values[i] !== undefined && r.values[i] !== null),
+            )
+          : [];
         const best = mark && apart.length === 0 ? bestIndexes(r.values, r.info) : [];
         return (
           <tr key={r.key} className="border-b border-line last:border-0" data-testid={`row-${r.key}`}>

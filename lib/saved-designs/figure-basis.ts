@@ -15,6 +15,11 @@ import { flatten } from "./figures";
  */
 const derivedBasis: Record<string, { label: string; of: (r: Requirement) => unknown }> = {
   "span.direction": { label: "span direction (one way or both)", of: (r) => isSigned(r.current) },
+  // A signed span's rating is chosen for its larger direction, which may be the negative one.
+  "span.reverse": {
+    label: "largest negative current",
+    of: (r) => (isSigned(r.current) ? r.current.min : null),
+  },
   "span.lowEnd": {
     label: "smallest current of interest",
     of: (r) => (isSigned(r.current) ? r.accuracy.bandMin : r.current.min),
@@ -31,7 +36,7 @@ export const figureBasis: Record<string, string[]> = {
   burdenV: ["current.max", "supply.voltage", "load.model"],
   loadVoltageV: ["current.max", "supply.voltage", "load.model"],
   dissipationW: ["current.max", "supply.voltage", "load.model"],
-  ratingW: ["current.max", "supply.voltage", "load.model", "shunt.derating"],
+  ratingW: ["current.max", "supply.voltage", "load.model", "shunt.derating", "span.reverse"],
   selfHeatingK: ["current.max", "supply.voltage", "load.model"],
   headroomV: [
     "current.max",

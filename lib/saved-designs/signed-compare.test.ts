@@ -74,6 +74,11 @@ describe("best marks between a one-way and a bidirectional design", () => {
     expect(basisLabel(apart[0]!, () => undefined)).toBe("span direction (one way or both)");
   });
 
+  it("leave the power rating unranked: a signed design's is chosen for its larger, negative end", () => {
+    expect(basisDiffers("ratingW", reqs)).toEqual(["span.reverse"]);
+    expect(basisDiffers("ratingW", [small.requirement, large.requirement])).toEqual([]);
+  });
+
   it("rank the minimum-current figures by the current they are taken at, the signed span's band low end", () => {
     // Both are taken at 3 A: the one-way span's minimum, the signed span's accuracy band low end.
     expect(basisDiffers("errorAtMinPercent", reqs)).toEqual([]);
