@@ -311,6 +311,46 @@ export const libraryShunts = pgTable(
   (t) => [uniqueIndex("library_shunts_team_name").on(t.teamId, t.name)],
 );
 
+// Readouts (issue 14): an ADC or a meter range under the requirement's readout names (API.md v2),
+// the reference and accuracy groups as the JSON objects the API reads and writes.
+export const libraryAdcs = pgTable(
+  "library_adcs",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    teamId: uuid("team_id")
+      .notNull()
+      .references(() => teams.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    bits: integer("bits").notNull(),
+    fullScale: doublePrecision("full_scale_v").notNull(),
+    sampleRateHz: doublePrecision("sample_rate_hz").notNull(),
+    reference: jsonb("reference").$type<{ tolerance: number; tempco: number }>().notNull(),
+    offsetLsb: doublePrecision("offset_lsb").notNull(),
+    gainError: doublePrecision("gain_error").notNull(),
+    inlLsb: doublePrecision("inl_lsb").notNull(),
+    createdAt: createdAt(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("library_adcs_team_name").on(t.teamId, t.name)],
+);
+
+export const libraryMeters = pgTable(
+  "library_meters",
+  {
+    id: uuid("id").primaryKey().defaultRandom(),
+    teamId: uuid("team_id")
+      .notNull()
+      .references(() => teams.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    fullScale: doublePrecision("full_scale_v").notNull(),
+    counts: integer("counts").notNull(),
+    accuracy: jsonb("accuracy").$type<{ percentOfReading: number; digits: number }>().notNull(),
+    createdAt: createdAt(),
+    updatedAt: timestamp("updated_at", { withTimezone: true }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("library_meters_team_name").on(t.teamId, t.name)],
+);
+
 // Built units (the maker's loop): one row per unit built from an approved revision, its bench
 // readings in their own rows. Judgements are worked out by the engine on read, never stored.
 export const builtUnits = pgTable(
@@ -398,6 +438,8 @@ export type MailMessage = typeof mailMessages.$inferSelect;
 export type Profile = typeof profiles.$inferSelect;
 export type LibraryAmplifier = typeof libraryAmplifiers.$inferSelect;
 export type LibraryShunt = typeof libraryShunts.$inferSelect;
+export type LibraryAdc = typeof libraryAdcs.$inferSelect;
+export type LibraryMeter = typeof libraryMeters.$inferSelect;
 export type BuiltUnit = typeof builtUnits.$inferSelect;
 export type UnitReadingRow = typeof unitReadings.$inferSelect;
 export const roles = roleEnum.enumValues;

@@ -69,7 +69,13 @@ export function figureGroups(
     {
       title: "Signal",
       rows: [
-        ["Output at full load", formatSI(m.outputAtMaxV, "V"), "ideal: current × R × G"],
+        [
+          "Output at full load",
+          formatSI(m.outputAtMaxV, "V"),
+          req.amplifier.reference.voltage > 0
+            ? `ideal: the ${formatSI(req.amplifier.reference.voltage, "V")} zero level + current × R × G`
+            : "ideal: current × R × G",
+        ],
         [
           "Output at full load, worst case",
           maybe(m.outputAtMaxWorstV, "V"),

@@ -2,7 +2,7 @@ import Link from "next/link";
 import { StatusBadge } from "@/components/review/status-badge";
 import type { DesignView, DesignViewer } from "@/lib/design-view";
 import { bestIndexes } from "@/lib/saved-designs/compare";
-import { againstOwnLimit, basisDiffers } from "@/lib/saved-designs/figure-basis";
+import { againstOwnLimit, basisDiffers, basisLabel } from "@/lib/saved-designs/figure-basis";
 import {
   choiceFields,
   flatten,
@@ -12,6 +12,7 @@ import {
   type FieldInfo,
 } from "@/lib/saved-designs/figures";
 import { planRows, planWholeSpanFigures } from "@/lib/saved-designs/plan-compare";
+import { reverseFields, reverseFigures } from "@/lib/saved-designs/signed-compare";
 import { CompareVerdict } from "./compare-verdict";
 import { seriesColours } from "./colours";
 
@@ -72,7 +73,13 @@ function Section({
         </th>
       </tr>
       {list.map((r) => {
-        const apart = requirements ? basisDiffers(r.key, requirements) : [];
+        // Only designs that have the figure are weighed (a one-way design has no negative end).
+        const apart = requirements
+          ? basisDiffers(
+              r.key,
+              requirements.filter((_, i) => r.values[i] !== undefined && r.values[i] !== null),
+            )
+          : [];
         const best = mark && apart.length === 0 ? bestIndexes(r.values, r.info) : [];
         return (
           <tr key={r.key} className="border-b border-line last:border-0" data-testid={`row-${r.key}`}>
@@ -89,7 +96,7 @@ function Section({
               {r.info.better && apart.length > 0 && (
                 <span className="block text-2xs text-ink-faint" data-testid="not-ranked">
                   not ranked: taken at a different{" "}
-                  {apart.map((p) => (requirementFields[p]?.label ?? p).toLowerCase()).join(", ")}
+                  {apart.map((p) => basisLabel(p, (q) => requirementFields[q]?.label)).join(", ")}
                 </span>
               )}
             </th>
@@ -201,6 +208,14 @@ export function CompareTable({
             mark
             requirements={designs.map((d) => d.requirement)}
           />
+          {designs.some((d) => d.requirement.current.min < 0) && (
+            <Section
+              title="The negative direction (bidirectional designs; the rows above take the positive end)"
+              list={rows(reverseFields, designs.map(reverseFigures))}
+              mark
+              requirements={designs.map((d) => d.requirement)}
+            />
+          )}
           {built.some(Boolean) && (
             <Section
               title="Built units"

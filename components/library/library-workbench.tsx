@@ -8,24 +8,24 @@ import { Field, Select } from "@/components/ui/field";
 import { Panel } from "@/components/ui/panel";
 import { tableColumnsOf } from "@/lib/library/fields";
 import type { PartKind } from "@/lib/library/schema";
-import type { AmplifierPart, ApiError, LibraryImported, ShuntPart } from "@/lib/api-description/responses";
-import { PartForm } from "./part-form";
+import type { ApiError, LibraryBody, LibraryImported } from "@/lib/api-description/responses";
+import { PartForm, kindWord, type Part } from "./part-form";
 
-type Part = AmplifierPart | ShuntPart;
-
-const titles: Record<PartKind, string> = { amplifiers: "Amplifiers", shunts: "Shunt families" };
-const singular: Record<PartKind, string> = { amplifiers: "amplifier", shunts: "shunt family" };
+const titles: Record<PartKind, string> = {
+  amplifiers: "Amplifiers",
+  shunts: "Shunt families",
+  adcs: "ADCs",
+  meters: "Meter ranges",
+};
 
 type Notice = { tone: "good" | "bad"; text: string } | null;
 
 export function LibraryWorkbench({
-  amplifiers,
-  shunts,
+  library,
   canEdit,
 }: {
-  // The API's own response types (GET /api/library), not a shape declared again here.
-  amplifiers: AmplifierPart[];
-  shunts: ShuntPart[];
+  // The API's own response type (GET /api/library), not a shape declared again here.
+  library: LibraryBody;
   canEdit: boolean;
 }) {
   const router = useRouter();
@@ -43,20 +43,16 @@ export function LibraryWorkbench({
       >
         {notice?.text}
       </p>
-      <PartTable
-        kind="amplifiers"
-        parts={amplifiers}
-        canEdit={canEdit}
-        onDone={done}
-        onError={(t) => setNotice({ tone: "bad", text: t })}
-      />
-      <PartTable
-        kind="shunts"
-        parts={shunts}
-        canEdit={canEdit}
-        onDone={done}
-        onError={(t) => setNotice({ tone: "bad", text: t })}
-      />
+      {(["amplifiers", "shunts", "adcs", "meters"] as const).map((kind) => (
+        <PartTable
+          key={kind}
+          kind={kind}
+          parts={library[kind]}
+          canEdit={canEdit}
+          onDone={done}
+          onError={(t) => setNotice({ tone: "bad", text: t })}
+        />
+      ))}
       <ImportExport canEdit={canEdit} onDone={done} />
     </div>
   );
@@ -98,7 +94,7 @@ function PartTable({
       actions={
         canEdit && editing !== "new" ? (
           <Button variant="secondary" onClick={() => setEditing("new")}>
-            Add {singular[kind]}
+            Add {kindWord[kind]}
           </Button>
         ) : null
       }
@@ -111,7 +107,11 @@ function PartTable({
       {parts.length === 0 ? (
         <p className="text-ink-muted">
           No {titles[kind].toLowerCase()} yet.
-          {canEdit ? ` Add one, or import a CSV below.` : " Owners and designers add them."}
+          {canEdit
+            ? kind === "adcs" || kind === "meters"
+              ? " Add one from its data sheet."
+              : " Add one, or import a CSV below."
+            : " Owners and designers add them."}
         </p>
       ) : (
         <div className="overflow-x-auto">

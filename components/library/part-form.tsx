@@ -5,11 +5,16 @@ import { Button } from "@/components/ui/button";
 import { Field, Select, TextInput } from "@/components/ui/field";
 import { fieldsOf, formToBody, partToForm } from "@/lib/library/fields";
 import type { PartKind } from "@/lib/library/schema";
-import type { AmplifierPart, ApiError, ShuntPart } from "@/lib/api-description/responses";
+import type { AdcPart, AmplifierPart, ApiError, MeterPart, ShuntPart } from "@/lib/api-description/responses";
 
-type Part = AmplifierPart | ShuntPart;
+export type Part = AmplifierPart | ShuntPart | AdcPart | MeterPart;
 
-const kindWord: Record<PartKind, string> = { amplifiers: "amplifier", shunts: "shunt family" };
+export const kindWord: Record<PartKind, string> = {
+  amplifiers: "amplifier",
+  shunts: "shunt family",
+  adcs: "ADC",
+  meters: "meter range",
+};
 
 /** Adds a part (part = null) or edits one; unit strings are read by the server, errors land beside the field. */
 export function PartForm({

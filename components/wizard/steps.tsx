@@ -21,6 +21,7 @@ import {
   ThermalEmfFields,
 } from "./front-end-fields";
 import { ReadoutErrorFields, ZeroLevelFields } from "./readout-error-fields";
+import { ReadoutLibraryPicker } from "./readout-library-picker";
 
 export type StepKey = "span" | "supply" | "readout" | "shunt" | "amplifier" | "temperature";
 
@@ -192,6 +193,7 @@ export function ReadoutStep({ live }: { live: LiveErrors }) {
   const kind = useWatch<WizardValues, "readout.kind">({ name: "readout.kind" });
   return (
     <div className="grid grid-cols-2 gap-3">
+      <ReadoutLibraryPicker />
       <div className="col-span-2">
         <RadioField
           legend="Read by"

@@ -1,33 +1,63 @@
-// The team's parts library: amplifiers and shunt families, scoped by team on every query.
+// The team's parts library: amplifiers, shunt families, ADCs and meter ranges, scoped by team on every query.
 import { and, asc, eq, inArray } from "drizzle-orm";
-import type { AmplifierValues, PartKind, ShuntValues } from "@/lib/library/schema";
+import type { AdcValues, AmplifierValues, MeterValues, PartKind, ShuntValues } from "@/lib/library/schema";
 import { getDb, type Tx } from "../client";
-import { libraryAmplifiers, libraryShunts, type LibraryAmplifier, type LibraryShunt } from "../schema";
+import {
+  libraryAdcs,
+  libraryAmplifiers,
+  libraryMeters,
+  libraryShunts,
+  type LibraryAdc,
+  type LibraryAmplifier,
+  type LibraryMeter,
+  type LibraryShunt,
+} from "../schema";
 import { recordAudit } from "./audit";
 
 /** A row as the API sends it: dates as ISO strings. */
 export type Json<T> = { [K in keyof T]: T[K] extends Date ? string : T[K] };
 export type AmplifierJson = Json<LibraryAmplifier>;
 export type ShuntJson = Json<LibraryShunt>;
+export type AdcJson = Json<LibraryAdc>;
+export type MeterJson = Json<LibraryMeter>;
 
 function toJson<T extends { createdAt: Date; updatedAt: Date }>(row: T): Json<T> {
   return { ...row, createdAt: row.createdAt.toISOString(), updatedAt: row.updatedAt.toISOString() } as Json<T>;
 }
 
-const tables = { amplifiers: libraryAmplifiers, shunts: libraryShunts } as const;
-const auditType: Record<PartKind, string> = { amplifiers: "library-amplifier", shunts: "library-shunt" };
+const tables = {
+  amplifiers: libraryAmplifiers,
+  shunts: libraryShunts,
+  adcs: libraryAdcs,
+  meters: libraryMeters,
+} as const;
+const auditType: Record<PartKind, string> = {
+  amplifiers: "library-amplifier",
+  shunts: "library-shunt",
+  adcs: "library-adc",
+  meters: "library-meter",
+};
 
-export async function listLibrary(teamId: string): Promise<{ amplifiers: AmplifierJson[]; shunts: ShuntJson[] }> {
+export type LibraryJson = { amplifiers: AmplifierJson[]; shunts: ShuntJson[]; adcs: AdcJson[]; meters: MeterJson[] };
+
+export async function listLibrary(teamId: string): Promise<LibraryJson> {
   const db = await getDb();
-  const [amplifiers, shunts] = await Promise.all([
+  const [amplifiers, shunts, adcs, meters] = await Promise.all([
     db
       .select()
       .from(libraryAmplifiers)
       .where(eq(libraryAmplifiers.teamId, teamId))
       .orderBy(asc(libraryAmplifiers.name)),
     db.select().from(libraryShunts).where(eq(libraryShunts.teamId, teamId)).orderBy(asc(libraryShunts.name)),
+    db.select().from(libraryAdcs).where(eq(libraryAdcs.teamId, teamId)).orderBy(asc(libraryAdcs.name)),
+    db.select().from(libraryMeters).where(eq(libraryMeters.teamId, teamId)).orderBy(asc(libraryMeters.name)),
   ]);
-  return { amplifiers: amplifiers.map(toJson), shunts: shunts.map(toJson) };
+  return {
+    amplifiers: amplifiers.map(toJson),
+    shunts: shunts.map(toJson),
+    adcs: adcs.map(toJson),
+    meters: meters.map(toJson),
+  };
 }
 
 export async function getAmplifier(teamId: string, id: string): Promise<LibraryAmplifier | null> {
@@ -207,6 +237,101 @@ export async function updateShunt(
       tx,
     );
     return { ok: true, row: toJson(row!) };
+  });
+}
+
+/** A readout part (ADC or meter range) by kind: one table each, the same rules as the other parts. */
+type ReadoutKind = "adcs" | "meters";
+type ReadoutValues = { adcs: AdcValues; meters: MeterValues };
+type ReadoutRow = { adcs: LibraryAdc; meters: LibraryMeter };
+const readoutWord: Record<ReadoutKind, string> = { adcs: "ADC", meters: "meter range" };
+
+export async function getReadoutPart<K extends ReadoutKind>(
+  kind: K,
+  teamId: string,
+  id: string,
+): Promise<ReadoutRow[K] | null> {
+  const db = await getDb();
+  const t = tables[kind] as typeof libraryAdcs;
+  const [row] = await db
+    .select()
+    .from(t)
+    .where(and(eq(t.teamId, teamId), eq(t.id, id)));
+  return (row as ReadoutRow[K] | undefined) ?? null;
+}
+
+export async function createReadoutPart<K extends ReadoutKind>(
+  kind: K,
+  teamId: string,
+  values: ReadoutValues[K],
+  actorId: string,
+): Promise<WriteResult<Json<ReadoutRow[K]>>> {
+  const db = await getDb();
+  return db.transaction(async (tx) => {
+    if (await nameTaken(tx, kind, teamId, values.name)) return duplicate(values.name);
+    const t = tables[kind] as typeof libraryAdcs;
+    const [row] = await tx
+      .insert(t)
+      .values({ ...(values as AdcValues), teamId })
+      .returning();
+    await recordAudit(
+      {
+        teamId,
+        actorId,
+        action: "library.create",
+        targetType: auditType[kind],
+        targetId: row!.id,
+        details: { name: values.name },
+      },
+      tx,
+    );
+    return { ok: true, row: toJson(row!) as unknown as Json<ReadoutRow[K]> };
+  });
+}
+
+/** As updateAmplifier: a part changed since it was read (updatedAt) is refused, never overwritten. */
+export async function updateReadoutPart<K extends ReadoutKind>(
+  kind: K,
+  teamId: string,
+  id: string,
+  values: ReadoutValues[K],
+  expectedUpdatedAt: string | undefined,
+  actorId: string,
+): Promise<WriteResult<Json<ReadoutRow[K]>>> {
+  const db = await getDb();
+  const t = tables[kind] as typeof libraryAdcs;
+  return db.transaction(async (tx) => {
+    const [current] = await tx
+      .select({ updatedAt: t.updatedAt })
+      .from(t)
+      .where(and(eq(t.teamId, teamId), eq(t.id, id)))
+      .for("update");
+    if (!current)
+      return { ok: false, reason: "not-found", message: `That ${readoutWord[kind]} was not found in the library.` };
+    if (expectedUpdatedAt && current.updatedAt.toISOString() !== expectedUpdatedAt)
+      return {
+        ok: false,
+        reason: "conflict",
+        message: `Someone changed this ${readoutWord[kind]} since you opened it; reload and make your change again.`,
+      };
+    if (await nameTaken(tx, kind, teamId, values.name, id)) return duplicate(values.name);
+    const [row] = await tx
+      .update(t)
+      .set({ ...(values as AdcValues), updatedAt: new Date() })
+      .where(and(eq(t.teamId, teamId), eq(t.id, id)))
+      .returning();
+    await recordAudit(
+      {
+        teamId,
+        actorId,
+        action: "library.update",
+        targetType: auditType[kind],
+        targetId: id,
+        details: { name: values.name },
+      },
+      tx,
+    );
+    return { ok: true, row: toJson(row!) as unknown as Json<ReadoutRow[K]> };
   });
 }
 

@@ -1,7 +1,16 @@
 // Demo parts library: invented generic parts with made-up names (no real part numbers or makers).
-import { amplifierInput, shuntInput, type AmplifierInput, type ShuntInput } from "@/lib/library/schema";
+import {
+  adcInput,
+  amplifierInput,
+  meterInput,
+  shuntInput,
+  type AdcInput,
+  type AmplifierInput,
+  type MeterInput,
+  type ShuntInput,
+} from "@/lib/library/schema";
 import { getDb } from "../client";
-import { libraryAmplifiers, libraryShunts } from "../schema";
+import { libraryAdcs, libraryAmplifiers, libraryMeters, libraryShunts } from "../schema";
 import type { DemoIds } from "./team";
 
 export const demoAmplifiers: AmplifierInput[] = [
@@ -122,6 +131,40 @@ export const demoShunts: ShuntInput[] = [
   },
 ];
 
+// Invented readouts: a converter class with an external series reference, and a handheld-class
+// meter's millivolt range (figures of a class of part, from memory; no particular product).
+export const demoAdcs: AdcInput[] = [
+  {
+    name: "SW-ADC12 converter with 2.5 V reference",
+    bits: 12,
+    fullScale: "2.5 V",
+    sampleRateHz: "10 kHz",
+    reference: { tolerance: "0.1 %", tempco: "20 ppm/K" },
+    offsetLsb: 2,
+    gainError: "0.05 %",
+    inlLsb: 1,
+  },
+  {
+    name: "SW-ADC16 precision converter, 4.096 V",
+    bits: 16,
+    fullScale: "4.096 V",
+    sampleRateHz: "1 kHz",
+    reference: { tolerance: "0.05 %", tempco: "5 ppm/K" },
+    offsetLsb: 4,
+    gainError: "0.02 %",
+    inlLsb: 2,
+  },
+];
+
+export const demoMeters: MeterInput[] = [
+  {
+    name: "SW-DM20 handheld, 200 mV range",
+    fullScale: "200 mV",
+    counts: 2000,
+    accuracy: { percentOfReading: "0.5 %", digits: 2 },
+  },
+];
+
 /** Loads the demo parts into the demo team's library. */
 export async function seedDemoLibrary(ids: DemoIds): Promise<void> {
   const db = await getDb();
@@ -129,5 +172,7 @@ export async function seedDemoLibrary(ids: DemoIds): Promise<void> {
     for (const a of demoAmplifiers)
       await tx.insert(libraryAmplifiers).values({ ...amplifierInput.parse(a), teamId: ids.teamId });
     for (const s of demoShunts) await tx.insert(libraryShunts).values({ ...shuntInput.parse(s), teamId: ids.teamId });
+    for (const a of demoAdcs) await tx.insert(libraryAdcs).values({ ...adcInput.parse(a), teamId: ids.teamId });
+    for (const m of demoMeters) await tx.insert(libraryMeters).values({ ...meterInput.parse(m), teamId: ids.teamId });
   });
 }

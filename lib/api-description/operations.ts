@@ -12,7 +12,16 @@ import {
 import type { Action } from "@/lib/auth/policy";
 import { designImportSchema } from "@/lib/build-sheet/exports";
 import { editUnitSchema, recordUnitSchema } from "@/lib/built-units/schemas";
-import { amplifierInput, amplifierPatch, shuntInput, shuntPatch } from "@/lib/library/schema";
+import {
+  adcInput,
+  adcPatch,
+  amplifierInput,
+  amplifierPatch,
+  meterInput,
+  meterPatch,
+  shuntInput,
+  shuntPatch,
+} from "@/lib/library/schema";
 import {
   auditQuery,
   invitationBodySchema,
@@ -500,6 +509,52 @@ export const operations: Operation[] = [
     method: "delete",
     path: "/api/library/shunts/{id}",
     summary: "Remove a shunt",
+    access: "library.edit",
+    ok: json(200, "removed", responses.deleted),
+  },
+  {
+    method: "post",
+    path: "/api/library/adcs",
+    summary: "Add an ADC",
+    access: "library.edit",
+    body: adcInput,
+    ok: json(201, "the part", responses.adc),
+  },
+  {
+    method: "patch",
+    path: "/api/library/adcs/{id}",
+    summary: "Edit an ADC (409 when stale)",
+    access: "library.edit",
+    body: adcPatch,
+    ok: json(200, "the part", responses.adc),
+  },
+  {
+    method: "delete",
+    path: "/api/library/adcs/{id}",
+    summary: "Remove an ADC",
+    access: "library.edit",
+    ok: json(200, "removed", responses.deleted),
+  },
+  {
+    method: "post",
+    path: "/api/library/meters",
+    summary: "Add a meter range",
+    access: "library.edit",
+    body: meterInput,
+    ok: json(201, "the part", responses.meter),
+  },
+  {
+    method: "patch",
+    path: "/api/library/meters/{id}",
+    summary: "Edit a meter range (409 when stale)",
+    access: "library.edit",
+    body: meterPatch,
+    ok: json(200, "the part", responses.meter),
+  },
+  {
+    method: "delete",
+    path: "/api/library/meters/{id}",
+    summary: "Remove a meter range",
     access: "library.edit",
     ok: json(200, "removed", responses.deleted),
   },

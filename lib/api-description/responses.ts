@@ -401,6 +401,23 @@ const shuntPart = z.object({
   ratingsW: z.array(z.number()),
   fourTerminal: z.boolean(),
 });
+// Readout parts under the requirement's readout names (API.md v2).
+const adcPart = z.object({
+  ...stamps,
+  bits: z.number().int(),
+  fullScale: z.number(),
+  sampleRateHz: z.number(),
+  reference: z.object({ tolerance: z.number(), tempco: z.number() }),
+  offsetLsb: z.number(),
+  gainError: z.number(),
+  inlLsb: z.number(),
+});
+const meterPart = z.object({
+  ...stamps,
+  fullScale: z.number(),
+  counts: z.number().int(),
+  accuracy: z.object({ percentOfReading: z.number(), digits: z.number() }),
+});
 const deleted = z.object({ deleted: z.literal(true), id });
 
 export const responses = {
@@ -519,9 +536,16 @@ export const responses = {
       }),
     ),
   }),
-  library: z.object({ amplifiers: z.array(amplifierPart), shunts: z.array(shuntPart) }),
+  library: z.object({
+    amplifiers: z.array(amplifierPart),
+    shunts: z.array(shuntPart),
+    adcs: z.array(adcPart),
+    meters: z.array(meterPart),
+  }),
   amplifier: amplifierPart,
   shunt: shuntPart,
+  adc: adcPart,
+  meter: meterPart,
   libraryImported: z.object({
     kind: z.enum(["amplifiers", "shunts"]),
     fileName: z.string(),
@@ -557,6 +581,8 @@ export type UnitsImported = Bodies["unitsImported"];
 export type LibraryBody = Bodies["library"];
 export type AmplifierPart = Bodies["amplifier"];
 export type ShuntPart = Bodies["shunt"];
+export type AdcPart = Bodies["adc"];
+export type MeterPart = Bodies["meter"];
 export type LibraryImported = Bodies["libraryImported"];
 export type InsertionBody = Bodies["insertion"];
 export type StatusChange = Bodies["statusChange"];

@@ -2,16 +2,18 @@
 // covering the requirement (Ohm's and Joule's laws on round numbers for the rating: 100 mA through
 // 1 Ω dissipates 10 mW; half a rating used at most, common practice, no source).
 import { describe, expect, it } from "vitest";
-import { demoAmplifiers, demoShunts } from "@/db/seed/library";
+import { demoAdcs, demoAmplifiers, demoMeters, demoShunts } from "@/db/seed/library";
 import { evaluateCandidate, parseRequirement, type Choice } from "@/lib/design";
-import { amplifierInput, shuntInput } from "@/lib/library/schema";
-import { amplifierRequirement, shuntRequirement } from "@/lib/library/to-requirement";
+import { adcInput, amplifierInput, meterInput, shuntInput } from "@/lib/library/schema";
+import { adcRequirement, amplifierRequirement, meterRequirement, shuntRequirement } from "@/lib/library/to-requirement";
 import { matchLibraryParts, nameLibraryParts, type LibraryParts } from "./library-parts";
 import { partsList } from "./parts";
 
 const library: LibraryParts = {
   amplifiers: demoAmplifiers.map((a) => amplifierInput.parse(a)),
   shunts: demoShunts.map((s) => shuntInput.parse(s)),
+  adcs: demoAdcs.map((a) => adcInput.parse(a)),
+  meters: demoMeters.map((m) => meterInput.parse(m)),
 };
 const amp = library.amplifiers.find((a) => a.name.startsWith("SW-CSA-20"))!;
 const thinFilm = shuntInput.parse(demoShunts.find((s) => s.name.startsWith("SW-MF"))!);
@@ -57,6 +59,45 @@ describe("library parts on the build sheet", () => {
     if (!p.ok) throw new Error(p.message);
     const choice = { shuntOhms: 0.249, gain: 20 };
     const m = evaluateCandidate(p.requirement, choice);
-    expect(matchLibraryParts(p.requirement, choice, m, library)).toEqual({ amplifier: null, shunt: null });
+    expect(matchLibraryParts(p.requirement, choice, m, library)).toEqual({
+      amplifier: null,
+      shunt: null,
+      readout: null,
+    });
+  });
+
+  it("names the library ADC on the readout connector, and a rate above the part's as a gap", () => {
+    const adc = library.adcs!.find((a) => a.name.startsWith("SW-ADC12"))!;
+    const at = (readout: object) => {
+      const p = parseRequirement({ current: { min: "1 mA", max: "100 mA" }, supply: { voltage: "5 V" }, readout });
+      if (!p.ok) throw new Error(p.message);
+      const choice = { shuntOhms: 0.249, gain: 20 };
+      const m = evaluateCandidate(p.requirement, choice);
+      return nameLibraryParts(
+        partsList(p.requirement, choice, m),
+        matchLibraryParts(p.requirement, choice, m, library),
+      );
+    };
+    const j1 = at(adcRequirement(adc)).find((p) => p.designator === "J1")!;
+    expect(j1.part).toBe(`2-way connector: OUT and GND, to ${adc.name} (team library)`);
+    expect(j1.notes).toContain("The library data cover the requirement.");
+    const fast = at({ ...adcRequirement(adc), sampleRateHz: 50_000 }).find((p) => p.designator === "J1")!;
+    expect(fast.notes).toContain("the design samples at 50 kHz, above its highest rate of 10 kHz");
+    // The same converter with its own error left out (an ideal readout) is not the library part.
+    const ideal = at({ kind: "adc", bits: 12, fullScale: 2.5 }).find((p) => p.designator === "J1")!;
+    expect(ideal.part).toBe("2-way connector: OUT and GND");
+  });
+
+  it("names the library meter range the readout came from", () => {
+    const meter = library.meters![0]!;
+    const p = parseRequirement({
+      current: { min: "1 mA", max: "100 mA" },
+      supply: { voltage: "5 V" },
+      readout: meterRequirement(meter),
+    });
+    if (!p.ok) throw new Error(p.message);
+    const choice = { shuntOhms: 0.249, gain: 5 };
+    const m = evaluateCandidate(p.requirement, choice);
+    expect(matchLibraryParts(p.requirement, choice, m, library).readout).toEqual({ name: meter.name, gaps: [] });
   });
 });

@@ -2,7 +2,7 @@
 // the requirement. A design stores the figures the wizard filled from the library, not the part's
 // id, so a part matches when every data-sheet figure the requirement took from it is the same.
 import type { CandidateDetail, Choice, Requirement } from "@/lib/design";
-import type { AmplifierValues, ShuntValues } from "@/lib/library/schema";
+import type { AdcValues, AmplifierValues, MeterValues, ShuntValues } from "@/lib/library/schema";
 import { resistorSetGains } from "@/lib/library/to-requirement";
 import * as f from "./format";
 import { kelvinAdvice, partsList, type Part } from "./parts";
@@ -11,10 +11,13 @@ import { kelvinAdvice, partsList, type Part } from "./parts";
 export type LibraryParts = {
   amplifiers: (AmplifierValues & { name: string })[];
   shunts: (Omit<ShuntValues, "series"> & { name: string; series: string })[];
+  /** Readouts (absent from libraries read before they held any). */
+  adcs?: AdcValues[];
+  meters?: MeterValues[];
 };
 type LibraryShunt = LibraryParts["shunts"][number];
 export type LibraryPart = { name: string; gaps: string[] };
-export type LibraryMatch = { amplifier: LibraryPart | null; shunt: LibraryPart | null };
+export type LibraryMatch = { amplifier: LibraryPart | null; shunt: LibraryPart | null; readout: LibraryPart | null };
 
 const same = (a: number, b: number) => Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b), 1e-30);
 
@@ -80,7 +83,53 @@ function shuntGaps(req: Requirement, choice: Choice, m: CandidateDetail, s: Libr
   return gaps;
 }
 
-/** The library parts the design's amplifier and shunt figures came from, if any, with their gaps. */
+/** An ADC matches when the readout states every figure the part gives (its rate may be lower). */
+function adcMatches(req: Requirement, a: AdcValues): boolean {
+  const r = req.readout;
+  if (r.kind !== "adc") return false;
+  const known = (v: number | undefined, w: number) => v !== undefined && same(v, w);
+  return (
+    r.bits === a.bits &&
+    same(r.fullScale, a.fullScale) &&
+    known(r.reference?.tolerance, a.reference.tolerance) &&
+    known(r.reference?.tempco, a.reference.tempco) &&
+    known(r.offsetLsb, a.offsetLsb) &&
+    known(r.gainError, a.gainError) &&
+    known(r.inlLsb, a.inlLsb)
+  );
+}
+
+function meterMatches(req: Requirement, m: MeterValues): boolean {
+  const r = req.readout;
+  if (r.kind !== "meter") return false;
+  const acc = r.accuracy;
+  return (
+    r.counts === m.counts &&
+    same(r.fullScale, m.fullScale) &&
+    acc?.percentOfReading !== undefined &&
+    same(acc.percentOfReading, m.accuracy.percentOfReading) &&
+    acc.digits !== undefined &&
+    same(acc.digits, m.accuracy.digits)
+  );
+}
+
+/** The library ADC or meter range the design's readout figures came from, with its gaps. */
+export function matchLibraryReadout(req: Requirement, library: LibraryParts): LibraryPart | null {
+  const r = req.readout;
+  if (r.kind === "adc") {
+    const adc = library.adcs?.find((a) => adcMatches(req, a));
+    if (!adc) return null;
+    const gaps =
+      r.sampleRateHz > adc.sampleRateHz * (1 + 1e-9)
+        ? [`the design samples at ${f.hertz(r.sampleRateHz)}, above its highest rate of ${f.hertz(adc.sampleRateHz)}`]
+        : [];
+    return { name: adc.name, gaps };
+  }
+  const meter = library.meters?.find((m) => meterMatches(req, m));
+  return meter ? { name: meter.name, gaps: [] } : null;
+}
+
+/** The library parts the design's amplifier, shunt and readout figures came from, if any, with their gaps. */
 export function matchLibraryParts(
   req: Requirement,
   choice: Choice,
@@ -98,6 +147,7 @@ export function matchLibraryParts(
   return {
     amplifier: amp ? { name: amp.name, gaps: amplifierGaps(req, choice, amp) } : null,
     shunt: shunt ? { name: shunt.name, gaps: shuntGaps(req, choice, m, shunt) } : null,
+    readout: matchLibraryReadout(req, library),
   };
 }
 
@@ -105,16 +155,22 @@ export function matchLibraryParts(
 export const gapsLine = (p: LibraryPart) =>
   p.gaps.length ? ` Library data stop short: ${p.gaps.join("; ")}.` : " The library data cover the requirement.";
 
-/** The parts list with R1 and U1 named after their library parts, each with its coverage line. */
+/** The parts list with R1, U1 and the readout's connector J1 named after their library parts, each with its coverage line. */
 export function nameLibraryParts(parts: Part[], match: LibraryMatch): Part[] {
   return parts.map((p) => {
+    if (p.designator === "J1" && match.readout)
+      return {
+        ...p,
+        part: `${p.part}, to ${match.readout.name} (team library)`,
+        notes: `${p.notes}${gapsLine(match.readout)}`,
+      };
     const lib = p.designator === "R1" ? match.shunt : p.designator === "U1" ? match.amplifier : null;
     if (!lib) return p;
     return { ...p, part: `${lib.name} (team library): ${p.part}`, notes: `${p.notes}${gapsLine(lib)}` };
   });
 }
 
-/** The design's parts list, R1 and U1 named after the team-library parts they came from when a library is given. */
+/** The design's parts list, R1, U1 and J1 named after the team-library parts they came from when a library is given. */
 export function designParts(req: Requirement, choice: Choice, m: CandidateDetail, library?: LibraryParts): Part[] {
   const listed = partsList(req, choice, m);
   return library ? nameLibraryParts(listed, matchLibraryParts(req, choice, m, library)) : listed;

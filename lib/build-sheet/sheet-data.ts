@@ -17,6 +17,7 @@ import {
 import type { PairDesignView as DesignView } from "@/lib/design-view";
 import { oneLine } from "@/lib/text-field";
 import { isSigned, signedOutputV } from "@/lib/design/bidirectional";
+import { signedOutputEnds } from "@/lib/design/signed-output";
 import * as f from "./format";
 import { designParts, type LibraryParts } from "./library-parts";
 import { constructionRows, traceLayoutNotes } from "./front-end-parts";
@@ -122,10 +123,7 @@ export function performanceRows(req: Requirement, m: CandidateDetail): Row[] {
       value: `${f.transimpedance(m.transimpedanceVPerA)}: ${decadeScale(m.transimpedanceVPerA)}`,
     },
     ...outputRows(req, m),
-    {
-      label: "Output at full load, worst case",
-      value: `${f.volts(m.outputAtMaxWorstV)} with every error that raises it`,
-    },
+    ...worstOutputRows(req, m),
     { label: "Readout step (LSB) in current", value: f.amps(m.lsbA) },
     {
       label: "Smallest step it can tell apart",
@@ -186,6 +184,33 @@ function outputRows(req: Requirement, m: CandidateDetail): Row[] {
     { label: "Output at zero current", value: `${f.volts(zeroV)} (the zero level)` },
     { label: "Output at maximum current", value: `${at(req.current.max)} at ${f.amps(req.current.max)}` },
     { label: "Output at the largest negative current", value: `${at(req.current.min)} at ${f.amps(req.current.min)}` },
+  ];
+}
+
+/**
+ * The worst-case output at full load. A signed span has two ends, each against its side of the
+ * window: +Imax with every error that raises it against the ceiling, −|Imin| with every error that
+ * lowers it against the floor (the engine's signedOutputEnds, the figures the sweep judged).
+ */
+function worstOutputRows(req: Requirement, m: CandidateDetail): Row[] {
+  const ends = signedOutputEnds(req, { shuntOhms: m.shuntOhms, gain: m.gain });
+  if (!ends)
+    return [
+      {
+        label: "Output at full load, worst case",
+        value: `${f.volts(m.outputAtMaxWorstV)} with every error that raises it`,
+      },
+    ];
+  const room = (v: number) => (v >= 0 ? `${f.volts(v)} to spare` : `clips: ${f.volts(-v)} short`);
+  return [
+    {
+      label: `Output at full load (${f.amps(ends.highCurrentA)}), worst case`,
+      value: `${f.volts(ends.highWorstV)} with every error that raises it; ceiling ${f.volts(ends.ceilV)} (${room(ends.highMarginV)})`,
+    },
+    {
+      label: `Output at full reverse load (${f.amps(ends.lowCurrentA)}), worst case`,
+      value: `${f.volts(ends.lowWorstV)} with every error that lowers it; floor ${f.volts(ends.floorV)} (${room(ends.lowMarginV)})`,
+    },
   ];
 }
 

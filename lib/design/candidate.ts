@@ -34,7 +34,8 @@ export function candidateFigures(m: Model, R: number, G: number): Candidate {
     operatingCurrentA: iOp,
     dissipationW: iOp * iOp * R,
     ratingW: Number.isNaN(sf.rating) ? largestRating(m) : sf.rating,
-    outputAtMaxV: iOp * rg,
+    // The output rides on the zero-current level (0 V unless the stage is referenced, as a signed span's is).
+    outputAtMaxV: m.vRef + iOp * rg,
     outputAtMaxWorstV: outputWorstV(m, R, G, sf.theta, iOp),
     lsbA: m.lsbV / rg,
     resolvableStepA: resolvableStepA(m, R, G),

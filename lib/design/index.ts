@@ -49,3 +49,4 @@ export * from "./plan-stretches";
 export * from "./plan-switching";
 export * from "./plan-netlist";
 export * from "./resistor-code";
+export * from "./signed-output";

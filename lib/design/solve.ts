@@ -93,14 +93,14 @@ function rankScope(m: Model, sw: SweepArrays, p: number, scope: RankScope): Rank
   scope.burdenV = m.iMax * R;
   scope.dissipationW = iOp * iOp * R;
   scope.ratingW = Number.isNaN(rating) ? (m.ratings[m.ratings.length - 1] ?? NaN) : rating;
-  scope.outputAtMaxV = iOp * rg;
+  scope.outputAtMaxV = m.vRef + iOp * rg;
   scope.lsbA = m.lsbV / rg;
   scope.offsetErrorA = m.vosRef / R;
   scope.errorAtMinPercent = 100 * (sw.errMin[p] as number);
   scope.countsAtMin = m.iMin / resolvableStepA(m, R, G);
   scope.bandwidthHz = signalBandwidth(m, G);
   scope.deadZoneA = deadZoneA(m, R, G);
-  scope.headroomV = m.outCeil - iOp * rg;
+  scope.headroomV = m.outCeil - scope.outputAtMaxV;
   scope.selfHeatingK = scope.dissipationW * (sw.theta[i] as number);
   return scope;
 }

@@ -15,7 +15,7 @@ export type Candidate = {
   /** At operatingCurrentA. */
   dissipationW: number;
   ratingW: number;
-  /** Ideal output at operatingCurrentA: I·R·G, V. */
+  /** Ideal output at operatingCurrentA: the zero-current level + I·R·G, V. */
   outputAtMaxV: number;
   /** Highest output the error budget allows at full load (the output constraint uses it), V. */
   outputAtMaxWorstV: number;

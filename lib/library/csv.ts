@@ -13,7 +13,13 @@ import {
   unitScale,
   walkCsv,
 } from "@/lib/profile/csv";
-import { amplifierInput, shuntInput, type AmplifierValues, type PartKind, type ShuntValues } from "./schema";
+import {
+  amplifierInput,
+  shuntInput,
+  type AmplifierValues,
+  type CsvPartKind as PartKind,
+  type ShuntValues,
+} from "./schema";
 
 type Cell = "text" | "number" | "list" | "quantityList" | "bool" | Dimension;
 

@@ -102,14 +102,90 @@ export const shuntFields: FieldSpec[] = [
   { key: "fourTerminal", label: "4-terminal (Kelvin) connection", kind: "checkbox", show: (v) => (v ? "yes" : "no") },
 ];
 
-export const fieldsOf: Record<PartKind, FieldSpec[]> = { amplifiers: amplifierFields, shunts: shuntFields };
+// Readout parts: the keys are the requirement's readout names (API.md v2); a dotted key is a figure
+// inside a group (reference.tolerance), as the API's field errors name it.
+const lsbs = (v: unknown) => (typeof v === "number" ? `${v} LSB` : "");
+// Six figures: a 4.096 V full scale must not come back from the edit form as 4.1 V.
+const si6 = (unit: string) => (v: unknown) => (typeof v === "number" ? formatSI(v, unit, 6) : "");
+const percent6 = (v: unknown) => (typeof v === "number" ? `${Number((v * 100).toPrecision(6))} %` : "");
+const ppm6 = (v: unknown) => (typeof v === "number" ? `${Number((v * 1e6).toPrecision(6))} ppm/K` : "");
+
+export const adcFields: FieldSpec[] = [
+  { key: "name", label: "Name", kind: "text", show: plain },
+  { key: "bits", label: "Resolution (bits)", kind: "number", show: (v) => (typeof v === "number" ? `${v} bit` : "") },
+  { key: "fullScale", label: "Full scale", kind: "quantity", show: si6("V"), hint: "e.g. 2.5 V" },
+  {
+    key: "sampleRateHz",
+    label: "Highest sample rate",
+    kind: "quantity",
+    show: si6("Hz"),
+    hint: "e.g. 10 kHz; the wizard starts the design's rate here",
+  },
+  {
+    key: "reference.tolerance",
+    label: "Reference tolerance",
+    kind: "quantity",
+    show: percent6,
+    hint: "Initial accuracy of its voltage reference, e.g. 0.1 %",
+  },
+  { key: "reference.tempco", label: "Reference tempco", kind: "quantity", show: ppm6, hint: "e.g. 20 ppm/K" },
+  { key: "offsetLsb", label: "Offset error (LSB)", kind: "number", show: lsbs, hint: "e.g. 2" },
+  {
+    key: "gainError",
+    label: "Gain error (reference excluded)",
+    kind: "quantity",
+    show: percent6,
+    hint: "e.g. 0.05 %",
+  },
+  { key: "inlLsb", label: "Integral nonlinearity, INL (LSB)", kind: "number", show: lsbs, hint: "e.g. 1" },
+];
+
+export const meterFields: FieldSpec[] = [
+  { key: "name", label: "Name", kind: "text", show: plain },
+  { key: "fullScale", label: "Range full scale", kind: "quantity", show: si6("V"), hint: "e.g. 200 mV" },
+  { key: "counts", label: "Counts", kind: "number", show: plain, hint: "Counts across the range, e.g. 2000" },
+  {
+    key: "accuracy.percentOfReading",
+    label: "Accuracy, % of reading",
+    kind: "quantity",
+    show: percent6,
+    hint: "e.g. 0.5 %",
+  },
+  {
+    key: "accuracy.digits",
+    label: "Accuracy, digits",
+    kind: "number",
+    show: plain,
+    hint: "Counts added to the % of reading, e.g. 2",
+  },
+];
+
+export const fieldsOf: Record<PartKind, FieldSpec[]> = {
+  amplifiers: amplifierFields,
+  shunts: shuntFields,
+  adcs: adcFields,
+  meters: meterFields,
+};
+
+/** A field's value in a part, following a dotted key into its group. */
+export function valueAt(part: Record<string, unknown>, key: string): unknown {
+  return key
+    .split(".")
+    .reduce<unknown>((o, k) => (typeof o === "object" && o !== null ? (o as never)[k] : undefined), part);
+}
+
+function setAt(target: Record<string, unknown>, key: string, value: unknown) {
+  const [head, ...rest] = key.split(".");
+  if (rest.length === 0) target[head!] = value;
+  else setAt((target[head!] ??= {}) as Record<string, unknown>, rest.join("."), value);
+}
 
 export type TableColumn = { key: string; label: string; show: (part: Record<string, unknown>) => string };
 
 const field = (kind: PartKind, key: string) => fieldsOf[kind].find((f) => f.key === key)!;
 const column = (kind: PartKind, key: string, label?: string): TableColumn => {
   const f = field(kind, key);
-  return { key, label: label ?? f.label, show: (p) => f.show(p[key]) };
+  return { key, label: label ?? f.label, show: (p) => f.show(valueAt(p, key)) };
 };
 
 /** The tables show the figures that tell parts apart; the form holds every field. */
@@ -147,6 +223,29 @@ export const tableColumnsOf: Record<PartKind, TableColumn[]> = {
     column("shunts", "ratingsW"),
     { key: "fourTerminal", label: "Connection", show: (p) => (p.fourTerminal ? "4-terminal" : "2-terminal") },
   ],
+  adcs: [
+    column("adcs", "bits", "Bits"),
+    column("adcs", "fullScale"),
+    column("adcs", "sampleRateHz", "Sample rate"),
+    column("adcs", "reference.tolerance", "Reference"),
+    column("adcs", "reference.tempco", "Ref. tempco"),
+    column("adcs", "offsetLsb", "Offset"),
+    column("adcs", "gainError"),
+    column("adcs", "inlLsb", "INL"),
+  ],
+  meters: [
+    column("meters", "fullScale", "Range"),
+    column("meters", "counts"),
+    {
+      key: "accuracy",
+      label: "Accuracy",
+      show: (p) => {
+        const a = valueAt(p, "accuracy.percentOfReading");
+        const d = valueAt(p, "accuracy.digits");
+        return typeof a === "number" && typeof d === "number" ? `±(${percent(a)} + ${d} digits)` : "";
+      },
+    },
+  ],
 };
 
 /** The form's text for each field as the API body (unit strings are parsed on the server). */
@@ -154,12 +253,15 @@ export function formToBody(kind: PartKind, form: Record<string, string | boolean
   const body: Record<string, unknown> = {};
   for (const f of fieldsOf[kind]) {
     const raw = form[f.key];
-    if (f.kind === "checkbox") body[f.key] = raw === true;
-    else if (f.kind === "numberList")
-      body[f.key] = splitItems(String(raw ?? "")).map((s) => (Number.isFinite(Number(s)) ? Number(s) : s));
-    else if (f.kind === "quantityList") body[f.key] = splitItems(String(raw ?? ""));
-    else if (f.kind === "number") body[f.key] = String(raw ?? "").trim() === "" ? "" : Number(raw);
-    else body[f.key] = String(raw ?? "").trim();
+    const text = String(raw ?? "").trim();
+    let value: unknown;
+    if (f.kind === "checkbox") value = raw === true;
+    else if (f.kind === "numberList") value = splitItems(text).map((s) => (Number.isFinite(Number(s)) ? Number(s) : s));
+    else if (f.kind === "quantityList") value = splitItems(text);
+    // A word in a number box goes as typed, so the server's message names the field.
+    else if (f.kind === "number") value = text === "" ? "" : Number.isFinite(Number(text)) ? Number(text) : text;
+    else value = text;
+    setAt(body, f.key, value);
   }
   return body;
 }
@@ -177,8 +279,8 @@ export function partToForm(kind: PartKind, part: Record<string, unknown> | null)
   for (const f of fieldsOf[kind]) {
     if (f.kind === "checkbox") out[f.key] = part ? part[f.key] === true : false;
     else if (!part) out[f.key] = f.kind === "select" ? (f.options?.[kind === "shunts" ? 4 : 0]?.value ?? "") : "";
-    else if (f.kind === "number") out[f.key] = plain(part[f.key]);
-    else out[f.key] = f.show(part[f.key]);
+    else if (f.kind === "number") out[f.key] = plain(valueAt(part, f.key));
+    else out[f.key] = f.show(valueAt(part, f.key));
   }
   return out;
 }

@@ -152,5 +152,82 @@ export type ShuntValues = z.output<typeof shuntInput>;
 export const checkAmplifier = (merged: unknown) => amplifierInput.safeParse(merged);
 export const checkShunt = (merged: unknown) => shuntInput.safeParse(merged);
 
-export type PartKind = "amplifiers" | "shunts";
-export const partKinds = ["amplifiers", "shunts"] as const;
+// Readouts (issue 14): an ADC or a meter range, under the requirement's readout field names (API.md v2)
+// so a part maps onto `readout` one to one. Every error figure is required: a library part states
+// its data sheet, where a request that leaves a figure out is read as an ideal readout.
+const wholeNumber = (label: string, min: number, max: number) =>
+  z
+    .number({ error: `${label}: expected a whole number` })
+    .int({ error: `${label} must be a whole number` })
+    .min(min, { error: `${label} must be at least ${min}` })
+    .max(max, { error: `${label} must be at most ${max}` });
+const lsb = (label: string) =>
+  z
+    .number({ error: `${label}: expected a number of LSB` })
+    .min(0, { error: `${label} cannot be negative` })
+    .max(1e6, { error: `${label} must be at most 1000000 LSB` });
+const ratioBelow = (label: string, max: number) =>
+  quantity("fraction", label).check(
+    z.superRefine((v: number, ctx) => {
+      if (!(v >= 0 && v < max))
+        ctx.addIssue({ code: "custom", message: `${label} must be between 0 and ${max * 100} % (e.g. "0.1 %")` });
+    }),
+  );
+const group = (label: string) => ({
+  error: (iss: { input?: unknown }) =>
+    iss.input === undefined ? `${label} is required` : `${label}: expected an object`,
+});
+
+export const adcObject = z.object({
+  name: partName,
+  // The engine's own limits on a readout (lib/design/requirement.ts), so every part fits a design.
+  bits: wholeNumber("ADC resolution (bits)", 4, 32),
+  fullScale: positive("voltage", "ADC full scale"),
+  sampleRateHz: positive("frequency", "Highest sample rate"),
+  reference: z.object(
+    {
+      tolerance: ratioBelow("Reference tolerance", 0.2),
+      tempco: nonNegative("tempco", "Reference tempco"),
+    },
+    group("Reference"),
+  ),
+  offsetLsb: lsb("Offset error"),
+  gainError: ratioBelow("Gain error", 0.2),
+  inlLsb: lsb("Integral nonlinearity (INL)"),
+});
+export const adcInput = adcObject;
+export const adcPatch = adcObject
+  .extend({ reference: adcObject.shape.reference.partial().optional() })
+  .partial()
+  .extend({ updatedAt: z.string().optional() });
+export type AdcInput = z.input<typeof adcInput>;
+export type AdcValues = z.output<typeof adcInput>;
+
+export const meterObject = z.object({
+  name: partName,
+  fullScale: positive("voltage", "Range full scale"),
+  counts: wholeNumber("Counts", 10, 10_000_000),
+  accuracy: z.object(
+    {
+      percentOfReading: ratioBelow("Accuracy, % of reading", 0.5),
+      digits: z
+        .number({ error: "Accuracy, digits: expected a number of counts" })
+        .min(0, { error: "Accuracy, digits cannot be negative" })
+        .max(1e6, { error: "Accuracy, digits must be at most 1000000" }),
+    },
+    group("Accuracy"),
+  ),
+});
+export const meterInput = meterObject;
+export const meterPatch = meterObject
+  .extend({ accuracy: meterObject.shape.accuracy.partial().optional() })
+  .partial()
+  .extend({ updatedAt: z.string().optional() });
+export type MeterInput = z.input<typeof meterInput>;
+export type MeterValues = z.output<typeof meterInput>;
+
+export type PartKind = "amplifiers" | "shunts" | "adcs" | "meters";
+export const partKinds = ["amplifiers", "shunts", "adcs", "meters"] as const;
+/** The kinds a CSV file holds (readouts are added and edited on the page or through the API). */
+export type CsvPartKind = "amplifiers" | "shunts";
+export const csvPartKinds = ["amplifiers", "shunts"] as const;

@@ -13,11 +13,19 @@ export function mergePatch<T>(
   schema: z.ZodType<T>,
 ): T {
   const { updatedAt: _u, ...fields } = patch;
-  const merged = { ...stored, ...Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined)) };
+  const merged: Record<string, unknown> = { ...stored };
+  for (const [k, v] of Object.entries(fields)) {
+    if (v === undefined) continue;
+    // A readout's groups (reference, accuracy) take a patch of one figure without losing the other.
+    merged[k] = isPlainObject(v) && isPlainObject(stored[k]) ? { ...stored[k], ...v } : v;
+  }
   const parsed = schema.safeParse(merged);
   if (!parsed.success) throw invalid(parsed.error);
   return parsed.data;
 }
+
+const isPlainObject = (v: unknown): v is Record<string, unknown> =>
+  typeof v === "object" && v !== null && !Array.isArray(v);
 
 /** The written row, or the refusal as an HttpError. */
 export function written<T>(result: WriteResult<T>): T {

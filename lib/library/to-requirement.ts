@@ -1,6 +1,6 @@
-// A library part as the requirement's amplifier or shunt group, for the wizard's parts step.
+// A library part as the requirement's amplifier, shunt or readout group, for the wizard's steps.
 import type { RequirementInput } from "@/lib/design";
-import type { AmplifierValues, ShuntValues } from "./schema";
+import type { AdcValues, AmplifierValues, MeterValues, ShuntValues } from "./schema";
 
 type AmplifierGroup = NonNullable<RequirementInput["amplifier"]>;
 type ShuntGroup = NonNullable<RequirementInput["shunt"]>;
@@ -48,5 +48,35 @@ export function shuntRequirement(shunt: ShuntValues): ShuntGroup {
     tolerance: shunt.toleranceFraction,
     tempco: shunt.tempcoPerK,
     ratings: [...shunt.ratingsW],
+  };
+}
+
+type ReadoutGroup = NonNullable<RequirementInput["readout"]>;
+
+/**
+ * The requirement's `readout` for a library ADC: every figure under the same name (API.md v2), so
+ * its own error counts in the budget. The part's highest sample rate is the design's rate until
+ * the designer lowers it.
+ */
+export function adcRequirement(adc: AdcValues): ReadoutGroup {
+  return {
+    kind: "adc",
+    bits: adc.bits,
+    fullScale: adc.fullScale,
+    sampleRateHz: adc.sampleRateHz,
+    reference: { tolerance: adc.reference.tolerance, tempco: adc.reference.tempco },
+    offsetLsb: adc.offsetLsb,
+    gainError: adc.gainError,
+    inlLsb: adc.inlLsb,
+  };
+}
+
+/** The requirement's `readout` for a library meter range, its accuracy as ±(% of reading + digits). */
+export function meterRequirement(meter: MeterValues): ReadoutGroup {
+  return {
+    kind: "meter",
+    fullScale: meter.fullScale,
+    counts: meter.counts,
+    accuracy: { percentOfReading: meter.accuracy.percentOfReading, digits: meter.accuracy.digits },
   };
 }

@@ -1,6 +1,7 @@
 // The team library as the wizard reads it (GET /api/library, db/schema.ts columns), and an
 // amplifier row turned into the wizard's amplifier fields.
 import { formatSI } from "@/lib/design/format";
+import type { AdcValues, MeterValues } from "@/lib/library/schema";
 import { resistorSetGains } from "@/lib/library/to-requirement";
 import type { WizardValues } from "./form-values";
 
@@ -39,17 +40,27 @@ export type LibraryShuntRow = {
   fourTerminal: boolean;
 };
 
-export type Library = { amplifiers: LibraryAmplifierRow[]; shunts: LibraryShuntRow[] };
+export type LibraryAdcRow = AdcValues & { id: string };
+export type LibraryMeterRow = MeterValues & { id: string };
+
+export type Library = {
+  amplifiers: LibraryAmplifierRow[];
+  shunts: LibraryShuntRow[];
+  adcs: LibraryAdcRow[];
+  meters: LibraryMeterRow[];
+};
 
 /** The library, or an empty one when the route is missing or refuses (the wizard still works). */
 export async function fetchLibrary(): Promise<Library> {
   const res = await fetch("/api/library", { headers: { accept: "application/json" } });
-  if (res.status === 404) return { amplifiers: [], shunts: [] };
+  if (res.status === 404) return { amplifiers: [], shunts: [], adcs: [], meters: [] };
   if (!res.ok) throw new Error(`The library answered ${res.status}`);
   const body = (await res.json()) as Partial<Library>;
   return {
     amplifiers: Array.isArray(body.amplifiers) ? body.amplifiers : [],
     shunts: Array.isArray(body.shunts) ? body.shunts : [],
+    adcs: Array.isArray(body.adcs) ? body.adcs : [],
+    meters: Array.isArray(body.meters) ? body.meters : [],
   };
 }
 
@@ -89,5 +100,29 @@ export function libraryShuntValues(s: LibraryShuntRow): Partial<WizardValues["sh
     tolerance: pct(s.toleranceFraction),
     tempco: ppm(s.tempcoPerK),
     ratings: s.ratingsW.map((w) => si(w, "W")),
+  };
+}
+
+/** A library ADC as the wizard's readout fields: the same figures as adcRequirement, as text. */
+export function libraryAdcValues(a: LibraryAdcRow): WizardValues["readout"] {
+  return {
+    kind: "adc",
+    bits: a.bits,
+    fullScale: si(a.fullScale, "V"),
+    sampleRateHz: si(a.sampleRateHz, "Hz"),
+    reference: { tolerance: pct(a.reference.tolerance), tempco: ppm(a.reference.tempco) },
+    offsetLsb: a.offsetLsb,
+    gainError: pct(a.gainError),
+    inlLsb: a.inlLsb,
+  };
+}
+
+/** A library meter range as the wizard's readout fields (meterRequirement's figures, as text). */
+export function libraryMeterValues(m: LibraryMeterRow): WizardValues["readout"] {
+  return {
+    kind: "meter",
+    fullScale: si(m.fullScale, "V"),
+    counts: m.counts,
+    accuracy: { percentOfReading: pct(m.accuracy.percentOfReading), digits: m.accuracy.digits },
   };
 }

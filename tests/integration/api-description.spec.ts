@@ -4,7 +4,16 @@
 import { expect, test, type APIResponse } from "@playwright/test";
 import { openApiDocument } from "../../lib/api-description/openapi";
 import { apiAs, type DemoRole } from "../fixtures/auth";
-import { amplifierBody, choice, makeTwoTeamMember, requirement, shuntBody, unique } from "./authz-helpers";
+import {
+  adcBody,
+  amplifierBody,
+  choice,
+  makeTwoTeamMember,
+  meterBody,
+  requirement,
+  shuntBody,
+  unique,
+} from "./authz-helpers";
 import { Conformance, type OpenApiDocument } from "./openapi-conformance";
 import { profileRequirement } from "./profiles-helpers";
 
@@ -160,6 +169,21 @@ test("the served document is the generated one, and every documented operation a
   );
   await designer.patch(`/api/library/shunts/${shunt.id}`, { data: { updatedAt: shunt.updatedAt, fourTerminal: true } });
   await designer.delete(`/api/library/shunts/${shunt.id}`);
+  const adc = await bodyOf<{ id: string; updatedAt: string }>(
+    await designer.post("/api/library/adcs", { data: adcBody(`Described ADC ${unique()}`) }),
+    201,
+  );
+  await designer.patch(`/api/library/adcs/${adc.id}`, {
+    data: { updatedAt: adc.updatedAt, reference: { tempco: "10 ppm/K" } },
+  });
+  await designer.patch(`/api/library/adcs/${adc.id}`, { data: { bits: 3 } }); // 422 naming the field
+  await designer.delete(`/api/library/adcs/${adc.id}`);
+  const meter = await bodyOf<{ id: string; updatedAt: string }>(
+    await designer.post("/api/library/meters", { data: meterBody(`Described meter ${unique()}`) }),
+    201,
+  );
+  await designer.patch(`/api/library/meters/${meter.id}`, { data: { updatedAt: meter.updatedAt, counts: 4000 } });
+  await designer.delete(`/api/library/meters/${meter.id}`);
   const shunts = await designer.get("/api/library/export?kind=shunts");
   await designer.post("/api/library/import", {
     multipart: { kind: "shunts", file: csvFile("s.csv", await shunts.text()) },

@@ -44,6 +44,22 @@ export const shuntBody = (name: string) => ({
   ratingsW: ["0.5 W", "1 W"],
   fourTerminal: false,
 });
+export const adcBody = (name: string) => ({
+  name,
+  bits: 16,
+  fullScale: "4.096 V",
+  sampleRateHz: "2 kHz",
+  reference: { tolerance: "0.05 %", tempco: "5 ppm/K" },
+  offsetLsb: 3,
+  gainError: "0.02 %",
+  inlLsb: 2,
+});
+export const meterBody = (name: string) => ({
+  name,
+  fullScale: "2 V",
+  counts: 20000,
+  accuracy: { percentOfReading: "0.1 %", digits: 5 },
+});
 export const unique = () => `${Date.now().toString(36)}${Math.random().toString(36).slice(2, 7)}`;
 
 /** Joins through an invitation link as a new account; returns the signed-in context. */

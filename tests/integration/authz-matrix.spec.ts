@@ -11,7 +11,9 @@ import {
   requirement,
   submitDesign,
   unique,
+  adcBody,
   amplifierBody,
+  meterBody,
   shuntBody,
   type Contexts,
   type Who,
@@ -35,7 +37,17 @@ type Row = {
 };
 
 let c: Contexts;
-const f = { draft: "", approved: "", approvedB: "", reviewerId: "", makerId: "", amplifierId: "", shuntId: "" };
+const f = {
+  draft: "",
+  approved: "",
+  approvedB: "",
+  reviewerId: "",
+  makerId: "",
+  amplifierId: "",
+  shuntId: "",
+  adcId: "",
+  meterId: "",
+};
 const NO_SUCH = "00000000-0000-4000-8000-000000000000";
 
 const fixed = (path: string, data?: unknown) => async (): Promise<Cell> => ({ path, data });
@@ -427,6 +439,30 @@ const routes: Row[] = [
     expect: editors(200, 404),
   },
   {
+    name: "POST /api/library/adcs",
+    method: "POST",
+    setup: async (who) => ({ path: "/api/library/adcs", data: adcBody(`Matrix ADC ${who} ${unique()}`) }),
+    expect: editors(201),
+  },
+  {
+    name: "PATCH /api/library/adcs/[id]",
+    method: "PATCH",
+    setup: async () => ({ path: `/api/library/adcs/${f.adcId}`, data: { inlLsb: 3 } }),
+    expect: editors(200, 404),
+  },
+  {
+    name: "POST /api/library/meters",
+    method: "POST",
+    setup: async (who) => ({ path: "/api/library/meters", data: meterBody(`Matrix meter ${who} ${unique()}`) }),
+    expect: editors(201),
+  },
+  {
+    name: "PATCH /api/library/meters/[id]",
+    method: "PATCH",
+    setup: async () => ({ path: `/api/library/meters/${f.meterId}`, data: { accuracy: { digits: 3 } } }),
+    expect: editors(200, 404),
+  },
+  {
     name: "POST /api/library/import",
     method: "POST",
     setup: async (who) => ({ path: "/api/library/import", multipart: shuntCsv(`Matrix import ${who} ${unique()}`) }),
@@ -448,6 +484,18 @@ const routes: Row[] = [
     name: "DELETE /api/library/shunts/[unknown]",
     method: "DELETE",
     setup: fixed(`/api/library/shunts/${NO_SUCH}`),
+    expect: editors(404),
+  },
+  {
+    name: "DELETE /api/library/adcs/[unknown]",
+    method: "DELETE",
+    setup: fixed(`/api/library/adcs/${NO_SUCH}`),
+    expect: editors(404),
+  },
+  {
+    name: "DELETE /api/library/meters/[unknown]",
+    method: "DELETE",
+    setup: fixed(`/api/library/meters/${NO_SUCH}`),
     expect: editors(404),
   },
 
@@ -562,6 +610,12 @@ test.describe.serial("authorization matrix", () => {
     const shunt = await c.designer.post("/api/library/shunts", { data: shuntBody(`Matrix shunt ${unique()}`) });
     expect(shunt.status(), await shunt.text()).toBe(201);
     f.shuntId = ((await shunt.json()) as { id: string }).id;
+    const adc = await c.designer.post("/api/library/adcs", { data: adcBody(`Matrix ADC ${unique()}`) });
+    expect(adc.status(), await adc.text()).toBe(201);
+    f.adcId = ((await adc.json()) as { id: string }).id;
+    const meter = await c.designer.post("/api/library/meters", { data: meterBody(`Matrix meter ${unique()}`) });
+    expect(meter.status(), await meter.text()).toBe(201);
+    f.meterId = ((await meter.json()) as { id: string }).id;
   });
 
   test.afterAll(async () => {

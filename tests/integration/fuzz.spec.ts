@@ -8,7 +8,16 @@
 import fc from "fast-check";
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { apiAs } from "../fixtures/auth";
-import { acceptAndSignIn, amplifierBody, choice, requirement, shuntBody, unique } from "./authz-helpers";
+import {
+  acceptAndSignIn,
+  adcBody,
+  amplifierBody,
+  choice,
+  meterBody,
+  requirement,
+  shuntBody,
+  unique,
+} from "./authz-helpers";
 
 type Route = {
   name: string;
@@ -16,13 +25,15 @@ type Route = {
   path: () => string;
   valid: () => unknown;
   /** Which list a 2xx adds to, for the count check afterwards. */
-  creates?: "designs" | "amplifiers" | "shunts";
+  creates?: "designs" | "amplifiers" | "shunts" | "adcs" | "meters";
 };
 
-const ids = { design: "", amplifier: "", shunt: "", member: "" };
+const ids = { design: "", amplifier: "", shunt: "", adc: "", meter: "", member: "" };
 
 const amplifier = () => amplifierBody(`Fuzz amp ${unique()}`);
 const shunt = () => shuntBody(`Fuzz shunt ${unique()}`);
+const adc = () => adcBody(`Fuzz ADC ${unique()}`);
+const meter = () => meterBody(`Fuzz meter ${unique()}`);
 // The default sweep (no shunt or gain bounds given): a mutation can narrow it or break it, not widen it.
 const smallRequirement = requirement;
 
@@ -85,6 +96,27 @@ const routes: Route[] = [
     method: "PATCH",
     path: () => `/api/library/shunts/${ids.shunt}`,
     valid: () => ({ tempcoPerK: "75 ppm/K" }),
+  },
+  { name: "POST /api/library/adcs", method: "POST", path: () => "/api/library/adcs", valid: adc, creates: "adcs" },
+  {
+    // A figure inside a group: the merge keeps the group's other figure.
+    name: "PATCH /api/library/adcs/[id]",
+    method: "PATCH",
+    path: () => `/api/library/adcs/${ids.adc}`,
+    valid: () => ({ reference: { tempco: "10 ppm/K" } }),
+  },
+  {
+    name: "POST /api/library/meters",
+    method: "POST",
+    path: () => "/api/library/meters",
+    valid: meter,
+    creates: "meters",
+  },
+  {
+    name: "PATCH /api/library/meters/[id]",
+    method: "PATCH",
+    path: () => `/api/library/meters/${ids.meter}`,
+    valid: () => ({ accuracy: { digits: 3 } }),
   },
   { name: "POST /api/solve", method: "POST", path: () => "/api/solve", valid: () => smallRequirement },
   {
@@ -232,8 +264,8 @@ async function everyDesign(ctx: APIRequestContext): Promise<{ id: string; revisi
 test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
   let owner: APIRequestContext;
   let anon: APIRequestContext;
-  const before = { designs: 0, amplifiers: 0, shunts: 0 };
-  const created = { designs: 0, amplifiers: 0, shunts: 0 };
+  const before = { designs: 0, amplifiers: 0, shunts: 0, adcs: 0, meters: 0 };
+  const created = { designs: 0, amplifiers: 0, shunts: 0, adcs: 0, meters: 0 };
   const refMs = new Map<string, number>();
 
   const send = async (ctx: APIRequestContext, route: Route, attempt: Attempt) => {
@@ -256,6 +288,8 @@ test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
       (await (await owner.post("/api/library/amplifiers", { data: amplifier() })).json()) as { id: string }
     ).id;
     ids.shunt = ((await (await owner.post("/api/library/shunts", { data: shunt() })).json()) as { id: string }).id;
+    ids.adc = ((await (await owner.post("/api/library/adcs", { data: adc() })).json()) as { id: string }).id;
+    ids.meter = ((await (await owner.post("/api/library/meters", { data: meter() })).json()) as { id: string }).id;
     const email = `fuzz-member-${unique()}@invitee.example`;
     const invite = await owner.post("/api/invitations", { data: { email, role: "maker" } });
     const member = await acceptAndSignIn(((await invite.json()) as { link: string }).link, email, "Fuzz Member");
@@ -263,11 +297,16 @@ test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
     ids.member = team.members.find((m) => m.email === email)!.userId;
     await member.dispose();
     const designs = { designs: await everyDesign(owner) };
-    const library = (await (await owner.get("/api/library")).json()) as { amplifiers: unknown[]; shunts: unknown[] };
+    const library = (await (await owner.get("/api/library")).json()) as Record<
+      "amplifiers" | "shunts" | "adcs" | "meters",
+      unknown[]
+    >;
     Object.assign(before, {
       designs: designs.designs.length,
       amplifiers: library.amplifiers.length,
       shunts: library.shunts.length,
+      adcs: library.adcs.length,
+      meters: library.meters.length,
     });
   });
   test.afterAll(async () => {
@@ -327,12 +366,12 @@ test.describe.serial("fuzz: malformed bodies on every JSON route", () => {
       expect(full.revision, `current revision of ${d.id}`).toBe(numbers.at(-1));
       expect(full.name).not.toMatch(/[\u0000\r\n]/);
     }
-    const library = (await (await owner.get("/api/library")).json()) as {
-      amplifiers: { name: string }[];
-      shunts: { name: string }[];
-    };
-    expect(library.amplifiers.length).toBe(before.amplifiers + created.amplifiers);
-    expect(library.shunts.length).toBe(before.shunts + created.shunts);
+    const library = (await (await owner.get("/api/library")).json()) as Record<
+      "amplifiers" | "shunts" | "adcs" | "meters",
+      { name: string }[]
+    >;
+    for (const kind of ["amplifiers", "shunts", "adcs", "meters"] as const)
+      expect(library[kind].length, kind).toBe(before[kind] + created[kind]);
     // Every API answer is still quick and well-formed.
     expect((await anon.get("/api/health")).status()).toBe(200);
   });

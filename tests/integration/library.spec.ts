@@ -2,10 +2,10 @@
 // or nothing with the row and column named, export imports back unchanged.
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { apiAs } from "../fixtures/auth";
-import { amplifierBody } from "./authz-helpers";
+import { adcBody, amplifierBody, meterBody } from "./authz-helpers";
 
 type Part = Record<string, unknown> & { id: string; name: string; updatedAt: string };
-type Library = { amplifiers: Part[]; shunts: Part[] };
+type Library = { amplifiers: Part[]; shunts: Part[]; adcs: Part[]; meters: Part[] };
 
 let designer: APIRequestContext;
 let owner: APIRequestContext;
@@ -148,4 +148,81 @@ test("export round-trips through import", async () => {
     expect(await (await designer.get(`/api/library/export?kind=${kind}`)).text()).toBe(csv);
   }
   expect((await designer.get("/api/library/export?kind=resistors")).status()).toBe(422);
+});
+
+test("ADCs and meter ranges: every member reads the demo ones under the readout's names", async () => {
+  const lib = await library(maker);
+  const adc = lib.adcs.find((a) => a.name.startsWith("SW-ADC12"))!;
+  expect(adc).toMatchObject({
+    bits: 12,
+    fullScale: 2.5,
+    sampleRateHz: 10_000,
+    reference: { tolerance: 0.001, tempco: 20e-6 },
+    offsetLsb: 2,
+    gainError: 0.0005,
+    inlLsb: 1,
+  });
+  expect(lib.meters.find((m) => m.name.startsWith("SW-DM20"))).toMatchObject({
+    fullScale: 0.2,
+    counts: 2000,
+    accuracy: { percentOfReading: 0.005, digits: 2 },
+  });
+  expect((await maker.post("/api/library/adcs", { data: adcBody(`maker ${tag}`) })).status()).toBe(403);
+  expect((await maker.patch(`/api/library/adcs/${adc.id}`, { data: { bits: 14 } })).status()).toBe(403);
+  expect((await maker.delete(`/api/library/meters/${lib.meters[0]!.id}`)).status()).toBe(403);
+  expect(await library(maker)).toEqual(lib);
+});
+
+test("a designer adds, edits and removes an ADC; one figure of a group patches alone; stale and bad input refused", async () => {
+  const created = await designer.post("/api/library/adcs", { data: adcBody(`Bench ADC ${tag}`) });
+  expect(created.status(), await created.text()).toBe(201);
+  const a = (await created.json()) as Part;
+  expect(a).toMatchObject({ bits: 16, fullScale: 4.096, sampleRateHz: 2000, reference: { tolerance: 0.0005 } });
+  expect((await designer.post("/api/library/adcs", { data: adcBody(`Bench ADC ${tag}`) })).status()).toBe(422);
+
+  const bad = await designer.post("/api/library/adcs", {
+    data: { ...adcBody(`Bad ${tag}`), reference: { tolerance: "2 mV", tempco: "5 ppm/K" }, inlLsb: -1 },
+  });
+  expect(bad.status()).toBe(422);
+  const errors = ((await bad.json()) as { fieldErrors: Record<string, string[]> }).fieldErrors;
+  expect(errors["reference.tolerance"]?.[0]).toMatch(/Reference tolerance/);
+  expect(errors.inlLsb?.[0]).toBe("Integral nonlinearity (INL) cannot be negative");
+
+  const edited = await owner.patch(`/api/library/adcs/${a.id}`, {
+    data: { reference: { tempco: "10 ppm/K" }, updatedAt: a.updatedAt },
+  });
+  expect(edited.status(), await edited.text()).toBe(200);
+  expect(((await edited.json()) as Part).reference).toEqual({ tolerance: 0.0005, tempco: 10e-6 });
+  const stale = await designer.patch(`/api/library/adcs/${a.id}`, { data: { bits: 14, updatedAt: a.updatedAt } });
+  expect(stale.status()).toBe(409);
+  expect(((await stale.json()) as { message: string }).message).toMatch(/Someone changed this ADC/);
+  const wrong = await designer.patch(`/api/library/adcs/${a.id}`, { data: { bits: 3 } });
+  expect(wrong.status()).toBe(422);
+  expect(((await wrong.json()) as { message: string }).message).toMatch(/ADC resolution \(bits\) must be at least 4/);
+
+  expect((await designer.delete(`/api/library/adcs/${a.id}`)).status()).toBe(200);
+  expect((await designer.delete(`/api/library/adcs/${a.id}`)).status()).toBe(404);
+  expect((await designer.patch(`/api/library/adcs/not-an-id`, { data: { bits: 12 } })).status()).toBe(404);
+});
+
+test("a designer adds, edits and removes a meter range; its accuracy is required and named", async () => {
+  const { accuracy: _a, ...noAccuracy } = meterBody(`No accuracy ${tag}`);
+  const missing = await designer.post("/api/library/meters", { data: noAccuracy });
+  expect(missing.status()).toBe(422);
+  expect(((await missing.json()) as { fieldErrors: Record<string, string[]> }).fieldErrors.accuracy).toEqual([
+    "Accuracy is required",
+  ]);
+  const created = await designer.post("/api/library/meters", { data: meterBody(`Bench meter ${tag}`) });
+  expect(created.status(), await created.text()).toBe(201);
+  const m = (await created.json()) as Part;
+  const edited = await designer.patch(`/api/library/meters/${m.id}`, {
+    data: { accuracy: { percentOfReading: "0.05 %" }, updatedAt: m.updatedAt },
+  });
+  expect(edited.status(), await edited.text()).toBe(200);
+  expect(((await edited.json()) as Part).accuracy).toEqual({ percentOfReading: 0.0005, digits: 5 });
+  const tooFew = await designer.patch(`/api/library/meters/${m.id}`, { data: { counts: 5 } });
+  expect(((await tooFew.json()) as { fieldErrors: Record<string, string[]> }).fieldErrors.counts).toEqual([
+    "Counts must be at least 10",
+  ]);
+  expect((await designer.delete(`/api/library/meters/${m.id}`)).status()).toBe(200);
 });

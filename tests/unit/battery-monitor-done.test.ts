@@ -3,10 +3,6 @@
 // amplifier's inputs and read by a 16-bit ADC whose own error is stated. The engine must find
 // pairs that work, its budget must carry every issue-14 source, and the build sheet (read back
 // with Poppler's pdftotext, as a maker's viewer would copy it) must say how to build it.
-import { spawnSync } from "node:child_process";
-import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
-import { tmpdir } from "node:os";
-import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { fixtureView, parsed } from "@/lib/build-sheet/fixtures";
 import { partsList } from "@/lib/build-sheet/parts";
@@ -16,6 +12,7 @@ import { evaluateCandidate, solve, type RequirementInput } from "@/lib/design";
 import { COPPER_RESISTIVITY_20C, COPPER_TEMPCO_20C, copperTempcoAt } from "@/lib/design/copper-trace";
 import { budgetTerms, errorAt } from "@/lib/design/error-budget";
 import { buildModel } from "@/lib/design/model";
+import { flatPdfText as pdftotext } from "../fixtures/pdftotext";
 
 const batteryMonitor: RequirementInput = {
   current: { min: "-20 A", max: "20 A", typical: "5 A" },
@@ -125,17 +122,6 @@ describe("the engine sizes the monitor", () => {
     expect(metrics.traceLengthM).toBeCloseTo(lengthM, 6);
   });
 });
-
-// Poppler's pdftotext reads the text layer as a viewer's copy and search would.
-function pdftotext(pdf: Buffer): string {
-  const dir = mkdtempSync(path.join(tmpdir(), "monitor-sheet-"));
-  const file = path.join(dir, "sheet.pdf");
-  writeFileSync(file, pdf);
-  const out = spawnSync("pdftotext", ["-enc", "UTF-8", file, "-"], { encoding: "utf8" });
-  rmSync(dir, { recursive: true, force: true });
-  if (out.status !== 0) throw new Error(`pdftotext failed (is poppler-utils installed?): ${out.stderr}`);
-  return out.stdout.normalize("NFKC").replace(/\s+/g, " ");
-}
 
 describe("the build sheet builds it", () => {
   const view = fixtureView(batteryMonitor, { name: "Pack monitor, both ways", choice });

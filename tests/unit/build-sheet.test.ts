@@ -7,6 +7,7 @@ import { spawnSync } from "node:child_process";
 import { mkdirSync, mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import path from "node:path";
+import { pdftotext } from "../fixtures/pdftotext";
 import { extractText } from "unpdf";
 import { beforeAll, describe, expect, it } from "vitest";
 import {
@@ -286,17 +287,6 @@ describe("page numbers when a page overflows its plan", () => {
     text.map(squash).forEach((page, i) => expect(page).toContain(`Page ${i + 1} of ${text.length}`));
   });
 });
-
-// Poppler's pdftotext reads the text layer as a viewer's copy and search would (CI installs it).
-function pdftotext(pdf: Buffer, args: string[]): string {
-  const dir = mkdtempSync(path.join(tmpdir(), "sheet-text-"));
-  const file = path.join(dir, "sheet.pdf");
-  writeFileSync(file, pdf);
-  const out = spawnSync("pdftotext", [...args, "-enc", "UTF-8", file, "-"], { encoding: "utf8" });
-  rmSync(dir, { recursive: true, force: true });
-  if (out.status !== 0) throw new Error(`pdftotext failed (is poppler-utils installed?): ${out.stderr}`);
-  return out.stdout;
-}
 
 type Word = { page: number; text: string; xMin: number; xMax: number; yMin: number; yMax: number };
 

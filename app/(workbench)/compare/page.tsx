@@ -50,6 +50,8 @@ export default async function ComparePage({
   const curves = designs.map(compareCurves);
   const errorSeries: CurveSeries[] = designs.map((d, k) => ({ key: d.id, label: d.name, points: curves[k]!.error }));
   const burdenSeries: CurveSeries[] = designs.map((d, k) => ({ key: d.id, label: d.name, points: curves[k]!.burden }));
+  // A bidirectional design is drawn by magnitude: its error and drop are the same at −I and +I.
+  const either = designs.some((d) => d.requirement.current.min < 0) ? " (magnitude, either direction)" : "";
   return (
     <div className="flex flex-col gap-4">
       <div>
@@ -59,7 +61,9 @@ export default async function ComparePage({
           takes that figure at the same points (the same span, supply and readout it rests on); otherwise each value is
           shown against its own design&apos;s limit. Rows whose values differ are in full ink. A range plan shows, among
           the whole-span figures, only those it takes at the same points as a single pair (the drop and load voltage at
-          the maximum current, the error and steps at the minimum); its per-range figures follow, unranked.
+          the maximum current, the error and steps at the minimum); its per-range figures follow, unranked. A
+          bidirectional design&apos;s figures at its positive end are in the figure rows, those at its negative end in
+          their own rows below them.
           {missing > 0 &&
             ` ${missing} of the designs asked for ${missing === 1 ? "was" : "were"} not found and ${missing === 1 ? "is" : "are"} left out.`}
         </p>
@@ -69,7 +73,7 @@ export default async function ComparePage({
         data-testid="compare-charts"
       >
         <CurveChart
-          title="Worst-case error against current"
+          title={`Worst-case error against current${either}`}
           series={errorSeries}
           yUnit="%"
           yLabel="Error, % of reading"
@@ -78,7 +82,7 @@ export default async function ComparePage({
           testId="compare-error-chart"
         />
         <CurveChart
-          title="Burden voltage against current"
+          title={`Burden voltage against current${either}`}
           series={burdenSeries}
           yUnit="V"
           yLabel="Burden"

@@ -15,12 +15,13 @@ export default async function LibraryPage() {
       <div>
         <h1 className="text-lg font-semibold">Parts library</h1>
         <p className="max-w-prose text-ink-muted">
-          The amplifiers and shunt families {caller.teamName} builds with. The design wizard&apos;s parts step picks
-          from them; figures are the data-sheet values the error budget uses (worst case at 25 °C, drifts per kelvin).
+          The amplifiers, shunt families and readouts (ADCs, meter ranges) {caller.teamName} builds with. The design
+          wizard&apos;s parts and readout steps pick from them; figures are the data-sheet values the error budget uses
+          (worst case at 25 °C, drifts per kelvin).
           {canEdit ? "" : " Owners and designers edit the library."}
         </p>
       </div>
-      <LibraryWorkbench amplifiers={library.amplifiers} shunts={library.shunts} canEdit={canEdit} />
+      <LibraryWorkbench library={library} canEdit={canEdit} />
     </div>
   );
 }

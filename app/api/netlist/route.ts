@@ -33,7 +33,16 @@ export const POST = apiRoute(
       const [path, messages] = Object.entries(errors)[0] ?? ["(body)", ["is invalid"]];
       throw new HttpError(422, `Invalid input at ${path}: ${messages[0]}`, errors);
     }
-    const text = buildNetlist(requirement, candidate, { includeOffset: query.offset !== "0" });
+    let text: string;
+    try {
+      text = buildNetlist(requirement, candidate, { includeOffset: query.offset !== "0" });
+    } catch (e) {
+      // A span so wide that a figure overflows (I·R·G past the largest number) has no netlist.
+      if (!(e instanceof RangeError)) throw e;
+      throw new HttpError(422, "Invalid input at requirement.current: a figure of this span overflows the netlist", {
+        "requirement.current": ["The span is too wide to write as a netlist: a figure overflows"],
+      });
+    }
     return new Response(text, { headers: { "content-type": "text/plain; charset=utf-8" } });
   },
 );

@@ -1,0 +1,3 @@
+import { readoutItemRoutes } from "@/lib/library/readout-routes";
+
+export const { PATCH, DELETE } = readoutItemRoutes("adcs");

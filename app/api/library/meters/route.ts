@@ -1,0 +1,3 @@
+import { readoutCollectionRoutes } from "@/lib/library/readout-routes";
+
+export const { POST } = readoutCollectionRoutes("meters");
