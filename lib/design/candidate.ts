@@ -29,10 +29,11 @@ export function candidateFigures(m: Model, R: number, G: number): Candidate {
     shuntOhms: R,
     gain: G,
     transimpedanceVPerA: rg,
-    // A 2-terminal shunt's pads are in the load's path too.
-    burdenV: m.iMax * (R + m.fe.padOhms),
+    // A 2-terminal shunt's pads are in the load's path too. A signed span drops and heats most in
+    // its larger direction (the charger's current may exceed the load's): both are taken there.
+    burdenV: Math.max(m.iMax, m.iNeg) * (R + m.fe.padOhms),
     operatingCurrentA: iOp,
-    dissipationW: iOp * iOp * R,
+    dissipationW: Math.max(iOp, m.iNeg) ** 2 * R,
     ratingW: Number.isNaN(sf.rating) ? largestRating(m) : sf.rating,
     // The output rides on the zero-current level (0 V unless the stage is referenced, as a signed span's is).
     outputAtMaxV: m.vRef + iOp * rg,

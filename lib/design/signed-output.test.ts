@@ -82,3 +82,15 @@ describe("a signed span's output at both ends, worst case", () => {
     expect(signedOutputEnds(req({ ...pack, current: { min: "1 A", max: "10 A" } }), choice)).toBeNull();
   });
 });
+
+describe("a signed span heats and drops most in its larger direction", () => {
+  it("−30 A / +10 A through 1 mΩ: 30² × 1 mΩ = 0.9 W and 30 mV, not the +10 A end's 0.1 W and 10 mV", () => {
+    // P = I²·R and V = I·R (Joule's and Ohm's laws) at the larger magnitude, |−30 A|.
+    const r = req({ ...pack, current: { min: "-30 A", max: "10 A" }, drop: { max: "50 mV" } });
+    const d = evaluateCandidate(r, choice);
+    expect(d.dissipationW).toBeCloseTo(0.9, 12);
+    expect(d.burdenV).toBeCloseTo(0.03, 12);
+    // The hot spot is the hottest ambient plus that dissipation's rise.
+    expect(d.hotSpotC - d.selfHeatingK).toBeCloseTo(r.temperature.max, 9);
+  });
+});
