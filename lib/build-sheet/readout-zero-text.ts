@@ -1,24 +1,17 @@
 // Build-sheet words for issue 14's parts: the readout's own error, the calibration the design
 // counts on, and a bidirectional design's zero-current reference (the engine has the figures).
-import { calibrationRemoves, readoutErrorStated } from "@/lib/design/readout-error";
+import { calibrationRemoves, readoutFigures, readoutFiguresBasis } from "@/lib/design/readout-error";
 import type { Requirement } from "@/lib/design";
 import type { Part } from "./part";
 import * as f from "./format";
 
-/** The readout's stated error, or that none was stated (an ideal readout counted). */
+/**
+ * The readout's own error as the design counts it: each figure, and for those the request leaves
+ * out, that they are typical of a class of part, not stated (readout-error.ts).
+ */
 export function readoutErrorText(req: Requirement): string {
-  const r = req.readout;
-  if (!readoutErrorStated(r)) return "own error not stated (counted as ideal)";
-  if (r.kind === "meter") {
-    const a = r.accuracy ?? {};
-    return `accuracy ±(${f.fraction(a.percentOfReading ?? 0)} of reading + ${a.digits ?? 0.5} digits)`;
-  }
-  return [
-    `reference ±${f.fraction(r.reference?.tolerance ?? 0)}, ${f.ppmPerK(r.reference?.tempco ?? 0)}`,
-    `offset ±${r.offsetLsb ?? 0} LSB`,
-    `gain error ±${f.fraction(r.gainError ?? 0)}`,
-    `INL ±${r.inlLsb ?? 0} LSB`,
-  ].join("; ");
+  const fields = readoutFigures(req.readout).map((x) => x.field);
+  return readoutFiguresBasis(req.readout, fields);
 }
 
 /** The calibration row of the requirement table. */

@@ -195,7 +195,8 @@ export function budgetRows(req: Requirement, choice: Choice): { rows: BudgetRow[
   const rows = lo.terms.map((t, i) => {
     const h = hi.terms[i]!;
     return {
-      label: t.label,
+      // The readout's own lines say whether their figures are stated or typical of a class of part.
+      label: t.basis ? `${t.label} (${t.basis})` : t.label,
       atMin: f.amps(t.errorA),
       // By magnitude: a signed span's lower end is its largest negative current.
       atMinPercent: f.percent((100 * t.errorA) / Math.abs(req.current.min)),
