@@ -160,7 +160,8 @@ export function formatReadoutFigure(f: ReadoutFigure): string {
   if (f.unit === "ratio") return `±${formatPercent(f.value)}`;
   if (f.unit === "1/K") return `${Number((f.value * 1e6).toPrecision(3))} ppm/K`;
   if (f.unit === "LSB") return `±${Number(f.value.toPrecision(3))} LSB`;
-  return `${Number(f.value.toPrecision(3))} digits`;
+  const n = Number(f.value.toPrecision(3));
+  return `${n} digit${n === 1 ? "" : "s"}`;
 }
 
 /**
