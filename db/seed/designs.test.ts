@@ -5,7 +5,7 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { evaluateCandidate, evaluatePlan, parseRequirement } from "@/lib/design";
 import { readoutFigures } from "@/lib/design/readout-error";
-import { demoLoggerInput, demoLoggerReadout } from "@/lib/design/test-helpers";
+import { demoLoggerInput, demoLoggerReadout, demoPumpReadout } from "@/lib/design/test-helpers";
 import { closeDb, getDb } from "../client";
 import { listDesigns, listRevisions } from "../queries/designs";
 import { listReviews } from "../queries/reviews";
@@ -67,10 +67,12 @@ describe("demo designs", () => {
 });
 
 describe("the demo logger's readout", () => {
-  it("is the one the engine's tests read the logger with (lib/design/test-helpers.ts), its own error stated", () => {
+  it("is the one the engine's tests read the logger and the pump controller with (lib/design/test-helpers.ts), its own error stated", () => {
     expect(demoPlanDesign.requirement).toEqual(demoLoggerInput);
     const burst = demoDesigns.find((d) => d.name === "Logger radio-burst range")!.requirement;
     expect({ readout: burst.readout, calibration: burst.calibration }).toEqual(demoLoggerReadout);
+    const pump = demoDesigns.find((d) => d.project === "Pump controller")!.requirement;
+    expect({ readout: pump.readout, calibration: pump.calibration }).toEqual(demoPumpReadout);
   });
   it("every demo design states every figure of its readout's own error", () => {
     for (const d of [...demoDesigns, demoPlanDesign]) {

@@ -37,7 +37,7 @@ describe("error budget across the span", () => {
     // The converter's figures are not stated: each of its lines says so and names its class.
     const own = t.filter((x) => x.source.startsWith("readout") && x.source !== "readout");
     expect(own.map((x) => x.basis)).toEqual([
-      "reference tolerance ±0.1 %, reference tempco 20 ppm/K, typical of a general-purpose converter with a series reference, not stated",
+      "reference ±0.1 %, reference drift 20 ppm/K, typical of a general-purpose converter with a series reference, not stated",
       "±0.05 %, typical of a general-purpose converter with a series reference, not stated",
       "±2 LSB, typical of a general-purpose converter with a series reference, not stated",
       "±1 LSB, typical of a general-purpose converter with a series reference, not stated",

@@ -42,11 +42,11 @@ describe("a meter's ±(% of reading + digits)", () => {
     expect((termOf(terms, "readoutGain") + termOf(terms, "readout")) / I).toBeCloseTo(0.015, 12);
     const basis = (s: string) => terms.find((t) => t.source === s)?.basis;
     expect(basis("readoutGain")).toBe("±0.5 %, typical of a handheld meter's DC millivolt ranges, not stated");
-    expect(basis("readout")).toBe("2 digits, typical of a handheld meter's DC millivolt ranges, not stated");
+    expect(basis("readout")).toBe("±2 digits, typical of a handheld meter's DC millivolt ranges, not stated");
     // Half stated: the stated figure as stated, the other typical.
     const half = errorAt(meter({ digits: 1 }), choice, I).terms;
     expect((termOf(half, "readoutGain") + termOf(half, "readout")) / I).toBeCloseTo(0.005 + 0.005, 12);
-    expect(half.find((t) => t.source === "readout")?.basis).toBe("1 digit, stated");
+    expect(half.find((t) => t.source === "readout")?.basis).toBe("±1 digit, stated");
   });
 });
 

@@ -120,20 +120,14 @@ export function readoutFigures(r: ReadoutWithErrors): ReadoutFigure[] {
     const a = r.accuracy ?? {};
     const t = DEFAULT_METER_ACCURACY;
     return [
-      figure(
-        "readout.accuracy.percentOfReading",
-        "accuracy, % of reading",
-        "ratio",
-        a.percentOfReading,
-        t.percentOfReading,
-      ),
-      figure("readout.accuracy.digits", "accuracy, digits", "counts", a.digits, t.digits),
+      figure("readout.accuracy.percentOfReading", "accuracy", "ratio", a.percentOfReading, t.percentOfReading),
+      figure("readout.accuracy.digits", "plus", "counts", a.digits, t.digits),
     ];
   }
   const ref = DEFAULT_ADC_REFERENCE;
   return [
-    figure("readout.reference.tolerance", "reference tolerance", "ratio", r.reference?.tolerance, ref.tolerance),
-    figure("readout.reference.tempco", "reference tempco", "1/K", r.reference?.tempco, ref.tempco),
+    figure("readout.reference.tolerance", "reference", "ratio", r.reference?.tolerance, ref.tolerance),
+    figure("readout.reference.tempco", "reference drift", "1/K", r.reference?.tempco, ref.tempco),
     figure("readout.offsetLsb", "offset", "LSB", r.offsetLsb, DEFAULT_ADC_OFFSET_LSB),
     figure("readout.gainError", "gain error", "ratio", r.gainError, DEFAULT_ADC_GAIN_ERROR),
     figure("readout.inlLsb", "INL", "LSB", r.inlLsb, DEFAULT_ADC_INL_LSB),
@@ -155,13 +149,13 @@ export function assumedBasis(kind: ReadoutWithErrors["kind"]): string {
   return `typical of ${readoutClassNames[kind]}, not stated`;
 }
 
-/** A figure as a person reads it: "±0.1 %", "20 ppm/K", "±2 LSB", "2 digits". */
+/** A figure as a person reads it: "±0.1 %", "20 ppm/K", "±2 LSB", "±2 digits". */
 export function formatReadoutFigure(f: ReadoutFigure): string {
   if (f.unit === "ratio") return `±${formatPercent(f.value)}`;
   if (f.unit === "1/K") return `${Number((f.value * 1e6).toPrecision(3))} ppm/K`;
   if (f.unit === "LSB") return `±${Number(f.value.toPrecision(3))} LSB`;
   const n = Number(f.value.toPrecision(3));
-  return `${n} digit${n === 1 ? "" : "s"}`;
+  return `±${n} digit${n === 1 ? "" : "s"}`;
 }
 
 /**

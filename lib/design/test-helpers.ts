@@ -25,7 +25,25 @@ export const demoLoggerReadout = {
     inlLsb: 1,
   },
   calibration: "one-point",
-} as const satisfies RequirementInput;
+} as const satisfies Pick<RequirementInput, "readout" | "calibration">;
+
+/**
+ * The demo pump controller's converter as db/seed/designs.ts states it (invented: reference ±0.1 %,
+ * 25 ppm/K; ±3 LSB offset, ±0.2 % gain error, ±1.5 LSB INL at 12 bits on 3.3 V), calibrated at the
+ * end of the line at zero and near full scale (two points).
+ */
+export const demoPumpReadout = {
+  readout: {
+    kind: "adc",
+    bits: 12,
+    fullScale: "3.3 V",
+    reference: { tolerance: "0.1 %", tempco: "25 ppm/K" },
+    offsetLsb: 3,
+    gainError: "0.2 %",
+    inlLsb: 1.5,
+  },
+  calibration: "two-point",
+} as const satisfies Pick<RequirementInput, "readout" | "calibration">;
 
 /** docs/model.md §6: the demo logger, 3 µA asleep to 180 mA transmitting, from a 3.0 V cell, 60 mV allowed. */
 export const demoLoggerInput = {
