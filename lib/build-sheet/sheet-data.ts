@@ -22,6 +22,7 @@ import { designParts, type LibraryParts } from "./library-parts";
 import { constructionRows, traceLayoutNotes } from "./front-end-parts";
 import { kelvinAdvice, readoutText, type Part } from "./parts";
 import { calibrationText, readoutErrorText } from "./readout-zero-text";
+import { savedPairVerdict } from "@/lib/design/saved-verdict";
 
 export type Row = { label: string; value: string };
 export type BenchRow = BenchCheckRow & { current: string; expected: string; band: string };
@@ -39,6 +40,8 @@ export type SheetData = {
   layout: string[];
   cautions: string[];
   metrics: CandidateDetail;
+  /** Set when the saved pair fails under today's model: printed first on the front page. */
+  modelFails: string | null;
 };
 
 /**
@@ -277,5 +280,9 @@ export function sheetData(view: Pick<DesignView, "requirement" | "choice">, libr
     layout: layoutNotes(req, choice),
     cautions: cautions(req, m),
     metrics: m,
+    modelFails: (() => {
+      const v = savedPairVerdict(req, choice);
+      return v.fails ? v.statement : null;
+    })(),
   };
 }
