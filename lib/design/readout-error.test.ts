@@ -244,5 +244,12 @@ describe("Monte Carlo with the readout's own error", () => {
     expect(Math.max(Math.abs(row.min), Math.abs(row.max))).toBeLessThanOrEqual(worst);
     const rowIdeal = monteCarlo(ideal, choice, { currentsA: [0.5], draws: 3000 }).rows[0]!;
     expect(row.std).toBeGreaterThan(2 * rowIdeal.std);
+    // It says which figures it drew from the requirement and which from the class (not stated).
+    expect(mc.readoutFigures.filter((f) => f.stated).map((f) => f.field)).toEqual([
+      "readout.reference.tolerance",
+      "readout.reference.tempco",
+      "readout.gainError",
+    ]);
+    expect(mc.readoutFigures.find((f) => f.field === "readout.offsetLsb")).toMatchObject({ value: 2, stated: false });
   });
 });
