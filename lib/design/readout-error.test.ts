@@ -91,7 +91,16 @@ describe("a converter whose own error is not stated reads with its class's typic
     };
     expect(solve(req({ ...burst, readout: ideal })).feasibleCount).toBeGreaterThan(0);
     // 12 bits: 3.5 LSB of fixed error (offset, INL, half a step) where half a step was counted.
-    expect(solve(req({ ...burst, readout: { kind: "adc", bits: 12, fullScale: "2.5 V" } })).feasibleCount).toBe(0);
+    const unstated = solve(req({ ...burst, readout: { kind: "adc", bits: 12, fullScale: "2.5 V" } }));
+    expect(unstated.feasibleCount).toBe(0);
+    // The sweep says what it counted: every figure typical of the class, none stated.
+    expect(unstated.readoutFigures.map((f) => [f.field, f.value, f.stated])).toEqual([
+      ["readout.reference.tolerance", 0.001, false],
+      ["readout.reference.tempco", 20e-6, false],
+      ["readout.offsetLsb", 2, false],
+      ["readout.gainError", 0.0005, false],
+      ["readout.inlLsb", 1, false],
+    ]);
     // Zeroed once (a one-point calibration), the class's offset is out and pairs are feasible again.
     expect(
       solve(req({ ...burst, readout: { kind: "adc", bits: 12, fullScale: "2.5 V" }, calibration: "one-point" }))
