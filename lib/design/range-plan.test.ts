@@ -7,10 +7,7 @@ import { demoLoggerInput, req } from "./test-helpers";
 describe("range plans for spans too wide for one range", () => {
   const cases = [
     // docs/model.md §6: the soil-moisture logger, 3 µA asleep to 180 mA transmitting, from 3.0 V.
-    [
-      "the demo logger, 3 µA .. 180 mA",
-      req(demoLoggerInput),
-    ],
+    ["the demo logger, 3 µA .. 180 mA", req(demoLoggerInput)],
     [
       "3 µA .. 6 A at 24 V",
       req({
