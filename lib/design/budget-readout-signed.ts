@@ -56,11 +56,20 @@ const readoutLineFields: Record<"adc" | "meter", Partial<Record<string, readonly
   meter: { readoutGain: ["readout.accuracy.percentOfReading"], readout: ["readout.accuracy.digits"] },
 };
 
+/** Worked out once per readout: the budget is asked at many currents (a bisection, a curve). */
+const basisCache = new WeakMap<Requirement["readout"], Partial<Record<string, string>>>();
+
 /**
- * The figures behind one of the readout's budget lines and whether the request states them
- * ("±2 LSB, typical of …, not stated"); undefined for a line that is not the readout's own error.
+ * The figures behind each of the readout's budget lines and whether the request states them
+ * ("±2 LSB, typical of …, not stated"), by source; lines that are not the readout's own error are absent.
  */
-export function readoutLineBasis(req: Requirement, source: string): string | undefined {
-  const fields = readoutLineFields[req.readout.kind][source];
-  return fields ? readoutFiguresBasis(req.readout, fields) : undefined;
+export function readoutLineBases(req: Requirement): Partial<Record<string, string>> {
+  const cached = basisCache.get(req.readout);
+  if (cached) return cached;
+  const fields = readoutLineFields[req.readout.kind];
+  const bases = Object.fromEntries(
+    Object.entries(fields).map(([source, f]) => [source, readoutFiguresBasis(req.readout, f ?? [])]),
+  );
+  basisCache.set(req.readout, bases);
+  return bases;
 }

@@ -14,7 +14,7 @@ import { frontEndSourceLabels, frontEndTerms, type FrontEndSource } from "./fron
 import { shuntFigures } from "./pair";
 import { signedSpanCurrents } from "./bidirectional";
 import {
-  readoutLineBasis,
+  readoutLineBases,
   readoutSignedLabels,
   readoutSignedTerms,
   type ReadoutSignedSource,
@@ -98,10 +98,11 @@ export function budgetTerms(req: Requirement, m: Model, choice: Choice, current:
       t.errorA > 0 ? t.keptA(m.accEpsKeep, m.accOffKeep) / t.errorA : 1,
     ]),
   ];
+  const bases = readoutLineBases(req);
   return values.map(([source, full, keep]) => {
     const term: BudgetTerm = { source, label: budgetSourceLabels[source], errorA: full * keep };
     if (keep < 1 && full !== 0) term.removedA = full * (1 - keep);
-    const basis = readoutLineBasis(req, source);
+    const basis = bases[source];
     if (basis) term.basis = basis;
     return term;
   });
