@@ -510,11 +510,23 @@ export function parseRequirement(input: unknown): ParseRequirementResult {
   return { ok: false, message, fieldErrors };
 }
 
-/** The demo soil-moisture logger (docs/model.md §6): the wizard's start values. */
+/**
+ * The demo soil-moisture logger (docs/model.md §6): the wizard's example start values, its
+ * converter's own error stated as the demo states it (db/seed/designs.ts) and zeroed once.
+ */
 export const defaultRequirementInput: RequirementInput = {
   current: { min: "3 uA", max: "180 mA" },
   supply: { voltage: "3.0 V", side: "low" },
   drop: { max: "60 mV" },
-  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+  readout: {
+    kind: "adc",
+    bits: 12,
+    fullScale: "2.5 V",
+    reference: { tolerance: "0.05 %", tempco: "10 ppm/K" },
+    offsetLsb: 2,
+    gainError: "0.1 %",
+    inlLsb: 1,
+  },
   resolution: { countsAtMin: 10 },
+  calibration: "one-point",
 };
