@@ -43,6 +43,7 @@ export function BudgetBar({ terms, currentA, label }: { terms: BudgetTerm[]; cur
                   aria-hidden
                 />
                 {t.label}
+                {t.basis ? <span className="text-ink-muted"> ({t.basis})</span> : null}
                 {t.removedA ? (
                   <span className="text-ink-faint"> (calibration took out {formatSI(t.removedA, "A")})</span>
                 ) : null}

@@ -5,9 +5,25 @@
 import { BuildHeader, PartsTable } from "@/components/design/build-parts";
 import { planSheetData } from "@/lib/build-sheet/plan-sheet-data";
 import type { DesignViewer, PlanDesignView } from "@/lib/design-view";
+import { savedPlanVerdict } from "@/lib/design/saved-verdict";
 
 export function PlanBuildPanel({ design, viewer }: { design: PlanDesignView; viewer: DesignViewer }) {
   const maker = viewer.leadsWithBuildSheet;
+  // A plan that fails under today's model has no sheet to build from: say so (the page's notice names why).
+  const verdict = savedPlanVerdict(design.requirement, design.plan);
+  if (verdict.fails)
+    return (
+      <section
+        aria-labelledby="build-sheet-heading"
+        data-testid="build-sheet-panel"
+        className="rounded-panel border border-bad/40 bg-panel p-4"
+      >
+        <h2 id="build-sheet-heading" className="text-sm font-semibold">
+          No build sheet for this revision
+        </h2>
+        <p className="mt-1 text-xs text-ink-muted">{verdict.statement}</p>
+      </section>
+    );
   const data = planSheetData(design.requirement, design.plan);
   const decks = design.plan.ranges.map((_, k) => ({
     href: `/api/designs/${design.id}/netlist?range=${k + 1}`,

@@ -1,7 +1,8 @@
 "use client";
 // The wizard's fields for the readout's own error, the calibration, and a bidirectional span's
-// zero-current output level (issue 14). Blank readout figures mean an ideal readout; one button
-// fills a class of part's typical figures (lib/design/readout-error.ts, from memory).
+// zero-current output level (issue 14). A blank readout figure is read with its class of part's
+// typical figure (lib/design/readout-error.ts, from memory), shown as the box's placeholder; one
+// button writes those figures in, to edit them into the part's own.
 import { useFormContext } from "react-hook-form";
 import {
   calibrationLabels,
@@ -11,6 +12,7 @@ import {
   DEFAULT_ADC_OFFSET_LSB,
   DEFAULT_ADC_REFERENCE,
   DEFAULT_METER_ACCURACY,
+  readoutClassNames,
 } from "@/lib/design/readout-error";
 import { DEFAULT_ZERO_REFERENCE } from "@/lib/design/bidirectional";
 import type { WizardValues } from "@/lib/wizard/form-values";
@@ -60,12 +62,12 @@ export function ReadoutErrorFields({ kind, live }: { kind: "adc" | "meter"; live
         {kind === "adc" ? "The converter's own error" : "The meter's stated accuracy"}
       </legend>
       <p className="col-span-2 text-2xs text-ink-muted">
-        Blank boxes count an ideal {kind === "adc" ? "converter" : "meter"} (half a step).{" "}
+        A blank box is read with the figure shown in it, typical of {readoutClassNames[kind]} (from memory), and the
+        budget marks it &ldquo;not stated&rdquo;. Type your part&apos;s figures from its data sheet; 0 counts an ideal
+        part.{" "}
         <button type="button" onClick={fill} className="text-copper-strong underline underline-offset-2">
           Fill typical figures
-        </button>{" "}
-        ({kind === "adc" ? "a general-purpose reference and converter" : "a handheld meter's DC millivolt ranges"}; from
-        memory: replace with your part&apos;s).
+        </button>
       </p>
       {kind === "adc" ? (
         <>

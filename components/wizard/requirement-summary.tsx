@@ -1,6 +1,7 @@
 // A saved requirement in words and SI figures, for the design page.
 import type { Requirement } from "@/lib/design/requirement";
 import { formatPercent, formatSI } from "@/lib/design/format";
+import { calibrationText, readoutErrorText } from "@/lib/build-sheet/readout-zero-text";
 
 const loadWords = {
   "constant-current": "constant current",
@@ -30,6 +31,9 @@ export function requirementRows(r: Requirement): [string, string][] {
     ],
     ["Minimum load voltage", r.drop.loadMin !== undefined ? formatSI(r.drop.loadMin, "V") : "not given"],
     ["Readout", readout],
+    // Stated figures, then those typical of a class of part (not stated), in the build sheet's words.
+    ["Readout's own error", readoutErrorText(r)],
+    ["Calibration", calibrationText(r)],
     ["Counts at minimum current", String(r.resolution.countsAtMin)],
     [
       "Accuracy target",

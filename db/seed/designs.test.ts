@@ -4,10 +4,13 @@
 // built: db/seed/units.ts), the bench adapter a draft.
 import { afterAll, describe, expect, it } from "vitest";
 import { evaluateCandidate, evaluatePlan, parseRequirement } from "@/lib/design";
+import { readoutFigures } from "@/lib/design/readout-error";
+import { demoLoggerInput, demoLoggerReadout, demoPumpReadout } from "@/lib/design/test-helpers";
 import { closeDb, getDb } from "../client";
 import { listDesigns, listRevisions } from "../queries/designs";
 import { listReviews } from "../queries/reviews";
 import { teams } from "../schema";
+import { demoDesigns, demoPlanDesign } from "./designs";
 import { seedDemoIfEmpty } from "./index";
 
 afterAll(closeDb);
@@ -60,5 +63,22 @@ describe("demo designs", () => {
     const [r1, r2] = await listRevisions(pump.id);
     if (r1?.kind !== "pair" || r2?.kind !== "pair") throw new Error("the pump controller is a single pair");
     expect(r2.metrics.burdenV).toBeLessThan(r1.metrics.burdenV);
+  });
+});
+
+describe("the demo logger's readout", () => {
+  it("is the one the engine's tests read the logger and the pump controller with (lib/design/test-helpers.ts), its own error stated", () => {
+    expect(demoPlanDesign.requirement).toEqual(demoLoggerInput);
+    const burst = demoDesigns.find((d) => d.name === "Logger radio-burst range")!.requirement;
+    expect({ readout: burst.readout, calibration: burst.calibration }).toEqual(demoLoggerReadout);
+    const pump = demoDesigns.find((d) => d.project === "Pump controller")!.requirement;
+    expect({ readout: pump.readout, calibration: pump.calibration }).toEqual(demoPumpReadout);
+  });
+  it("every demo design states every figure of its readout's own error", () => {
+    for (const d of [...demoDesigns, demoPlanDesign]) {
+      const parsed = parseRequirement(d.requirement);
+      if (!parsed.ok) throw new Error(parsed.message);
+      expect(readoutFigures(parsed.requirement.readout).filter((f) => !f.stated)).toEqual([]);
+    }
   });
 });

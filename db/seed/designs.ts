@@ -11,6 +11,17 @@
 //   filter (a meter reads slowly) and a 3 % target; the choice nearest 1 mV per µA is taken.
 // And the logger as the whole instrument: 3 µA asleep to 180 mA transmitting, saved as the range plan
 // the engine proposes for it (through the same service as POST /api/designs) and approved.
+//
+// Each design states its readout's own error as its designer would from the part's data (invented
+// figures of an ordinary part of its class), and the calibration its bench really does:
+// - the logger reads an external 2.5 V reference (±0.05 %, 10 ppm/K) into its microcontroller's
+//   12-bit converter (±2 LSB offset, ±0.1 % gain error, ±1 LSB INL); its production test zeroes
+//   each board with the load disconnected (a one-point calibration);
+// - the pump controller's 3.3 V converter and reference (±0.1 %, 25 ppm/K; ±3 LSB, ±0.2 %,
+//   ±1.5 LSB) are calibrated at the end of the line at zero and at a known 5 A (two points);
+// - the bench adapter's handheld meter states ±(0.5 % of reading + 2 digits) on its 200 mV range,
+//   and the adapter is zeroed with no current before each session (one point).
+// Without them the engine reads each readout with its class's typical figures (DEFAULTS.md).
 import { planChoiceOf } from "@/lib/design/range-candidates";
 import { parseRequirement, solve, type Candidate, type PlanChoice, type RequirementInput } from "@/lib/design";
 import { saveNewDesign } from "@/lib/saved-designs/create";
@@ -19,6 +30,17 @@ import { evaluateDesign } from "@/lib/saved-designs/service";
 import { changeDesignStatus, createDesign, reviseDesign } from "../queries/designs";
 import { addReview } from "../queries/reviews";
 import type { DemoIds } from "./team";
+
+/** The logger's converter as its designer states it (both logger designs read it). */
+const loggerReadout = {
+  kind: "adc",
+  bits: 12,
+  fullScale: "2.5 V",
+  reference: { tolerance: "0.05 %", tempco: "10 ppm/K" },
+  offsetLsb: 2,
+  gainError: "0.1 %",
+  inlLsb: 1,
+} as const satisfies RequirementInput["readout"];
 
 type DemoDesign = {
   name: string;
@@ -39,8 +61,9 @@ export const demoDesigns: DemoDesign[] = [
       current: { min: "2 mA", max: "180 mA" },
       supply: { voltage: "3.0 V", side: "low" },
       drop: { max: "60 mV" },
-      readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+      readout: loggerReadout,
       resolution: { countsAtMin: 10 },
+      calibration: "one-point",
     },
     pick: (front) => front[0],
     state: "approved",
@@ -52,8 +75,17 @@ export const demoDesigns: DemoDesign[] = [
       current: { min: "100 mA", max: "6 A" },
       supply: { voltage: "24 V", side: "high" },
       drop: { max: "150 mV" },
-      readout: { kind: "adc", bits: 12, fullScale: "3.3 V" },
+      readout: {
+        kind: "adc",
+        bits: 12,
+        fullScale: "3.3 V",
+        reference: { tolerance: "0.1 %", tempco: "25 ppm/K" },
+        offsetLsb: 3,
+        gainError: "0.2 %",
+        inlLsb: 1.5,
+      },
       resolution: { countsAtMin: 10 },
+      calibration: "two-point",
       amplifier: { cmrrDb: 120 },
     },
     pick: (front) => front[0],
@@ -70,8 +102,14 @@ export const demoDesigns: DemoDesign[] = [
       current: { min: "2 uA", max: "180 uA" },
       supply: { voltage: "3.3 V", side: "low" },
       drop: { max: "20 mV" },
-      readout: { kind: "meter", fullScale: "200 mV", counts: 2000 },
+      readout: {
+        kind: "meter",
+        fullScale: "200 mV",
+        counts: 2000,
+        accuracy: { percentOfReading: "0.5 %", digits: 2 },
+      },
       resolution: { countsAtMin: 10 },
+      calibration: "one-point",
       accuracy: { percent: 3 },
       amplifier: { swingLow: "1 mV", filterHz: "10 Hz" },
     },
@@ -91,8 +129,9 @@ export const demoPlanDesign = {
     current: { min: "3 uA", max: "180 mA" },
     supply: { voltage: "3.0 V", side: "low" },
     drop: { max: "60 mV" },
-    readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+    readout: loggerReadout,
     resolution: { countsAtMin: 10 },
+    calibration: "one-point",
   } satisfies RequirementInput,
   approvalNote:
     "Each range reads within its limits on its own span, the switch points overlap, and the comparator keeps the low ranges alive at 180 mA; approved for a first build.",

@@ -52,6 +52,8 @@ describe("engine shapes", () => {
         supply: { voltage: "3.0 V", side: "low" },
         drop: { max: "60 mV" },
         readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+        // Zeroed once: its converter's typical offset (not stated) is then out of the 2 % budget.
+        calibration: "one-point",
       }),
     );
     expect(result.feasibleCount).toBeGreaterThan(0);

@@ -142,6 +142,15 @@ export const solveShape = z.object({
   diagnosis: diagnosisShape.optional(),
   ranking: z.string(),
   decadeScales: z.array(candidateShape.extend({ scale: z.string() })),
+  readoutFigures: z.array(
+    z.object({
+      field: z.string(),
+      name: z.string(),
+      value: z.number(),
+      unit: z.enum(["ratio", "1/K", "LSB", "counts"]),
+      stated: z.boolean(),
+    }),
+  ),
 });
 
 /** insertion.ts `InsertionResult`. */

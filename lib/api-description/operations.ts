@@ -324,6 +324,7 @@ export const operations: Operation[] = [
     summary: "The build sheet",
     access: "design.read",
     ok: file("application/pdf", "the PDF"),
+    refusals: { 409: "A saved range plan that fails under the current model (the message names the constraint)" },
   },
   {
     method: "get",
@@ -339,6 +340,7 @@ export const operations: Operation[] = [
     summary: "Parts list",
     access: "design.read",
     ok: file("text/csv", "the parts"),
+    refusals: { 409: "A saved range plan that fails under the current model (the message names the constraint)" },
   },
   {
     method: "get",

@@ -1,5 +1,6 @@
 // Designs for tests and the benchmark, built from the engine: the demo team's soil-moisture
-// logger (its radio-burst range, low side) and its pump controller (high side, 24 V, 6 A).
+// logger (its radio-burst range, low side) and its pump controller (high side, 24 V, 6 A), each
+// with its converter's own error and calibration as the demo states them (db/seed/designs.ts).
 import {
   evaluateCandidate,
   parseRequirement,
@@ -10,6 +11,7 @@ import {
   type RequirementInput,
 } from "@/lib/design";
 import { planChoiceOf } from "@/lib/design/range-candidates";
+import { demoLoggerReadout, demoPumpReadout } from "@/lib/design/test-helpers";
 import type { PairDesignView as DesignView } from "@/lib/design-view";
 import type { DesignStatus } from "@/db/schema";
 
@@ -17,7 +19,7 @@ export const loggerRequirement: RequirementInput = {
   current: { min: "1 mA", max: "180 mA", typical: "45 mA" },
   supply: { voltage: "3.0 V", side: "low" },
   drop: { max: "60 mV" },
-  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+  ...demoLoggerReadout,
   resolution: { countsAtMin: 10 },
 };
 
@@ -25,7 +27,7 @@ export const pumpRequirement: RequirementInput = {
   current: { min: "300 mA", max: "6 A", typical: "2.5 A" },
   supply: { voltage: "24 V", side: "high" },
   drop: { max: "100 mV" },
-  readout: { kind: "adc", bits: 12, fullScale: "3.3 V" },
+  ...demoPumpReadout,
   resolution: { countsAtMin: 10 },
   accuracy: { percent: 3 },
 };
@@ -91,7 +93,7 @@ export const loggerPlanRequirement: RequirementInput = {
   current: { min: "3 uA", max: "180 mA" },
   supply: { voltage: "3.0 V", side: "low" },
   drop: { max: "60 mV" },
-  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+  ...demoLoggerReadout,
   resolution: { countsAtMin: 10 },
 };
 

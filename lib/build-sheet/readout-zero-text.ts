@@ -1,36 +1,33 @@
 // Build-sheet words for issue 14's parts: the readout's own error, the calibration the design
 // counts on, and a bidirectional design's zero-current reference (the engine has the figures).
-import { calibrationRemoves, readoutErrorStated } from "@/lib/design/readout-error";
+import { assumedBasis, calibrationLabels, formatReadoutFigure, readoutFigures } from "@/lib/design/readout-error";
 import type { Requirement } from "@/lib/design";
 import type { Part } from "./part";
 import * as f from "./format";
 
-/** The readout's stated error, or that none was stated (an ideal readout counted). */
+/**
+ * The readout's own error as the design counts it, short enough for the front page: the stated
+ * figures, then those the request leaves out as typical of a class of part, not stated.
+ */
 export function readoutErrorText(req: Requirement): string {
-  const r = req.readout;
-  if (!readoutErrorStated(r)) return "own error not stated (counted as ideal)";
-  if (r.kind === "meter") {
-    const a = r.accuracy ?? {};
-    return `accuracy ±(${f.fraction(a.percentOfReading ?? 0)} of reading + ${a.digits ?? 0.5} digits)`;
-  }
-  return [
-    `reference ±${f.fraction(r.reference?.tolerance ?? 0)}, ${f.ppmPerK(r.reference?.tempco ?? 0)}`,
-    `offset ±${r.offsetLsb ?? 0} LSB`,
-    `gain error ±${f.fraction(r.gainError ?? 0)}`,
-    `INL ±${r.inlLsb ?? 0} LSB`,
-  ].join("; ");
+  const figures = readoutFigures(req.readout);
+  const words = (stated: boolean) =>
+    figures
+      .filter((x) => x.stated === stated)
+      .map((x) => `${x.name} ${formatReadoutFigure(x)}`)
+      .join(", ");
+  const stated = words(true);
+  const assumed = words(false);
+  if (!assumed) return `${stated} (stated)`;
+  const typical = `${assumed} (${assumedBasis(req.readout.kind)})`;
+  return stated ? `${stated} (stated); ${typical}` : typical;
 }
 
-/** The calibration row of the requirement table. */
+/** The calibration row of the requirement table: what it takes out in a few words (the budget shows what remains). */
 export function calibrationText(req: Requirement): string {
-  const name = {
-    none: "None",
-    "one-point": "One point, at zero current",
-    "two-point": "Two points, zero and near full scale",
-  }[req.calibration];
   // Without a calibration there is nothing to say beyond "none": keep the front page short.
   if (req.calibration === "none") return "None: every error term is counted";
-  return `${name}. Takes out: ${calibrationRemoves(req.calibration)}`;
+  return calibrationLabels[req.calibration];
 }
 
 /** The zero-current reference feeding the amplifier's reference input, when the design has one. */

@@ -23,6 +23,7 @@ import { designParts, type LibraryParts } from "./library-parts";
 import { constructionRows, traceLayoutNotes } from "./front-end-parts";
 import { kelvinAdvice, readoutText, type Part } from "./parts";
 import { calibrationText, readoutErrorText } from "./readout-zero-text";
+import { savedPairVerdict } from "@/lib/design/saved-verdict";
 
 export type Row = { label: string; value: string };
 export type BenchRow = BenchCheckRow & { current: string; expected: string; band: string };
@@ -40,6 +41,8 @@ export type SheetData = {
   layout: string[];
   cautions: string[];
   metrics: CandidateDetail;
+  /** Set when the saved pair fails under today's model: printed first on the front page. */
+  modelFails: string | null;
 };
 
 /**
@@ -220,7 +223,8 @@ export function budgetRows(req: Requirement, choice: Choice): { rows: BudgetRow[
   const rows = lo.terms.map((t, i) => {
     const h = hi.terms[i]!;
     return {
-      label: t.label,
+      // The readout's own lines say whether their figures are stated or typical of a class of part.
+      label: t.basis ? `${t.label} (${t.basis})` : t.label,
       atMin: f.amps(t.errorA),
       // By magnitude: a signed span's lower end is its largest negative current.
       atMinPercent: f.percent((100 * t.errorA) / Math.abs(req.current.min)),
@@ -301,5 +305,9 @@ export function sheetData(view: Pick<DesignView, "requirement" | "choice">, libr
     layout: layoutNotes(req, choice),
     cautions: cautions(req, m),
     metrics: m,
+    modelFails: (() => {
+      const v = savedPairVerdict(req, choice);
+      return v.fails ? v.statement : null;
+    })(),
   };
 }

@@ -93,7 +93,11 @@ describe("diagnosis: a 3.3 V sensor node, 5 µA–250 mA, 50 mV, 12-bit at 3.3 V
     const relax = s.diagnosis?.relax ?? [];
     const fields = relax.map((x) => x.field);
     expect(fields).toContain("accuracy.percent");
-    expect(fields).toContain("accuracy.bandMin");
+    // No band start meets 1 %: the converter's own error is not stated, so its class's figures count
+    // (from memory, readout-error.ts): 0.1 % + 20 ppm/K·45 K + 0.05 % = 0.24 % of reading, on top of
+    // the 0.87 % above, is 1.11 % at every current.
+    expect(0.001 + 20e-6 * 45 + 0.0005 + 0.0087).toBeGreaterThan(0.01);
+    expect(fields).not.toContain("accuracy.bandMin");
     for (const x of relax) {
       expectDelivers(appliedToInput(input, x), x);
       expect(x.gives).toBe("rangePlan");
@@ -107,8 +111,6 @@ describe("diagnosis: a 3.3 V sensor node, 5 µA–250 mA, 50 mV, 12-bit at 3.3 V
     const atBefore = solve(appliedToInput(input, { ...pct, to: before }), { diagnose: false });
     expect(atBefore.feasibleCount).toBe(0);
     expect(atBefore.rangePlan).toBeNull();
-    const band = relax.find((x) => x.field === "accuracy.bandMin") as RelaxSuggestion;
-    expect(band.says).toMatch(/^1 % is reachable from \d+(\.\d+)? mA up with a plan of/);
   });
 });
 
@@ -120,6 +122,8 @@ describe("diagnosis when a range plan already covers the span", () => {
       drop: { max: "50 mV" },
       readout: { kind: "adc", bits: 12, fullScale: "2.048 V" },
       resolution: { countsAtMin: 4 },
+      // Zeroed once: without it the converter's typical offset (not stated) leaves no single change that works.
+      calibration: "one-point",
     };
     const s = solve(req(input));
     expect(s.rangePlan).not.toBeNull();
@@ -135,8 +139,10 @@ describe("diagnosis when a range plan already covers the span", () => {
 
 describe("diagnosis: relaxations that work, each the smallest step on its ladder", () => {
   it("accuracy-limited: 1 % from 1 mA cannot be met; the target rises, or the band starts higher", () => {
-    // The sensor node from 1 mA: one range spans it, but not at 1 %.
-    const r = req({ ...sensorNodeInput, current: { min: "1 mA", max: "250 mA" } });
+    // The sensor node from 1 mA: one range spans it, but not at 1 %. Calibrated at two points, so
+    // the 25 °C gain errors (the converter's typical figures, not stated, among them) are out and a
+    // band that starts higher can meet 1 % (without, its drift and tolerances alone pass 1 %: above).
+    const r = req({ ...sensorNodeInput, current: { min: "1 mA", max: "250 mA" }, calibration: "two-point" });
     const s = solve(r);
     const relax = s.diagnosis?.relax ?? [];
     const byField = Object.fromEntries(relax.map((x) => [x.field, x]));

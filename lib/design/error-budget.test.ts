@@ -30,9 +30,19 @@ describe("error budget across the span", () => {
   });
   it("labels every source in plain words", () => {
     const t = errorAt(r, choice, 0.01).terms;
-    expect(t).toHaveLength(11);
-    for (const term of t) expect(term.label).toMatch(/^[A-Z][a-z]/);
-    expect(errorBreakdownCurve(r, choice, 5)[0]?.terms).toHaveLength(11);
+    // Eleven of the front end, four of the converter's own error (reference, gain, offset, INL).
+    expect(t).toHaveLength(15);
+    for (const term of t) expect(term.label).toMatch(/^(ADC |[A-Z][a-z])/); // the trade says ADC
+    expect(errorBreakdownCurve(r, choice, 5)[0]?.terms).toHaveLength(15);
+    // The converter's figures are not stated: each of its lines says so and names its class.
+    const own = t.filter((x) => x.source.startsWith("readout") && x.source !== "readout");
+    expect(own.map((x) => x.basis)).toEqual([
+      "reference ±0.1 %, reference drift 20 ppm/K, typical of a general-purpose converter with a series reference, not stated",
+      "±0.05 %, typical of a general-purpose converter with a series reference, not stated",
+      "±2 LSB, typical of a general-purpose converter with a series reference, not stated",
+      "±1 LSB, typical of a general-purpose converter with a series reference, not stated",
+    ]);
+    expect(t.filter((x) => x.basis === undefined)).toHaveLength(11);
   });
   it("the lowest accurate current meets the target, and a slightly lower one does not", () => {
     expect(solve(r).feasibleCount).toBeGreaterThan(0);

@@ -13,7 +13,12 @@ import {
 import { frontEndSourceLabels, frontEndTerms, type FrontEndSource } from "./front-end-budget";
 import { shuntFigures } from "./pair";
 import { signedSpanCurrents } from "./bidirectional";
-import { readoutSignedLabels, readoutSignedTerms, type ReadoutSignedSource } from "./budget-readout-signed";
+import {
+  readoutLineBases,
+  readoutSignedLabels,
+  readoutSignedTerms,
+  type ReadoutSignedSource,
+} from "./budget-readout-signed";
 import type { Requirement } from "./requirement";
 import type { Choice } from "./types";
 
@@ -48,8 +53,12 @@ export const budgetSourceLabels: Record<BudgetSource, string> = {
   ...frontEndSourceLabels,
 };
 
-/** `removedA`: what the requirement's calibration took out of this term (absent: nothing). */
-export type BudgetTerm = { source: BudgetSource; label: string; errorA: number; removedA?: number };
+/**
+ * `removedA`: what the requirement's calibration took out of this term (absent: nothing).
+ * `basis`: for the readout's own error, its figures and whether the request states them or they
+ * are typical of a class of part (readout-error.ts).
+ */
+export type BudgetTerm = { source: BudgetSource; label: string; errorA: number; removedA?: number; basis?: string };
 export type ErrorAtResult = {
   worstA: number;
   rssA: number;
@@ -89,9 +98,12 @@ export function budgetTerms(req: Requirement, m: Model, choice: Choice, current:
       t.errorA > 0 ? t.keptA(m.accEpsKeep, m.accOffKeep) / t.errorA : 1,
     ]),
   ];
+  const bases = readoutLineBases(req);
   return values.map(([source, full, keep]) => {
     const term: BudgetTerm = { source, label: budgetSourceLabels[source], errorA: full * keep };
     if (keep < 1 && full !== 0) term.removedA = full * (1 - keep);
+    const basis = bases[source];
+    if (basis) term.basis = basis;
     return term;
   });
 }

@@ -3,6 +3,7 @@
 // published formula; the engine must agree and must refuse each pair for the right reason.
 import { describe, expect, it } from "vitest";
 import { benchCheck } from "./bench-check";
+import { readoutOwnSources } from "./budget-readout-signed";
 import { evaluateCandidate } from "./candidate";
 import { errorAt } from "./error-budget";
 import { BOLTZMANN, buildModel, derateAt } from "./model";
@@ -134,10 +135,13 @@ describe("3. output and dead zone with the errors included; bench-check bands in
     });
     const d = evaluateCandidate(r, { shuntOhms: 0.05, gain: 50 });
     expect(d.outputAtMaxV).toBeCloseTo(2.5, 12); // 1 A · 50 mΩ · 50
-    // Worst output: (I + every error but the readout's half step)·R·G, by hand from the budget.
+    // Worst output: (I + every error but the readout's half step and its own error, which act on
+    // the reading, not on the output voltage)·R·G, by hand from the budget.
     const b = errorAt(r, { shuntOhms: 0.05, gain: 50 }, 1);
-    const half = b.terms.find((x) => x.source === "readout")?.errorA ?? NaN;
-    rel(d.outputAtMaxWorstV, (1 + b.worstA - half) * 2.5, 1e-12);
+    const ofReading = b.terms
+      .filter((x) => x.source === "readout" || readoutOwnSources.includes(x.source))
+      .reduce((s, x) => s + x.errorA, 0);
+    rel(d.outputAtMaxWorstV, (1 + b.worstA - ofReading) * 2.5, 1e-12);
     expect(d.outputAtMaxWorstV).toBeGreaterThan(2.5);
     expect(d.reasons).toContain("output");
   });

@@ -42,6 +42,7 @@ export * from "./calibrated-accuracy";
 export * from "./cautions";
 export * from "./profile";
 export * from "./plan-choice";
+export * from "./saved-verdict";
 export { evaluatePlan, type PlanEvaluation, type PlanMetrics, type PlanRangeMetrics } from "./plan-evaluation";
 export * from "./design-kind";
 export * from "./plan-cautions";

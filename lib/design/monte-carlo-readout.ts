@@ -1,6 +1,7 @@
 // Monte Carlo draws of issue 14's sources, each with its stated distribution (docs/model.md §3):
 // the zero-current level and the readout's own error, drawn once per built unit.
 import type { Model } from "./model";
+import { withTypicalReadoutErrors } from "./readout-error";
 import type { Requirement } from "./requirement";
 
 /** A draw uniform on ±half. */
@@ -23,10 +24,11 @@ export function drawZeroLevelV(req: Requirement, u: Uniform): (t: number) => num
  * reference tolerance and tempco, gain error, offset and INL each uniform within ± its figure, the
  * INL taken as a fixed share of ±INL for the unit (its shape along the codes is not modelled), then
  * rounded to a code and clipped to the codes there are. Meter: its % of reading uniform, and its
- * digits uniform within ±(digits − ½) counts beyond the rounding the reading itself does.
+ * digits uniform within ±(digits − ½) counts beyond the rounding the reading itself does. A figure
+ * the request leaves out is drawn from its class's typical figure, as the budget counts it.
  */
 export function drawReadout(req: Requirement, m: Model, u: Uniform): (vOut: number, t: number) => number {
-  const r = req.readout;
+  const r = withTypicalReadoutErrors(req.readout);
   const step = m.read.stepV;
   if (r.kind === "adc") {
     const refTol = u(r.reference?.tolerance ?? 0);

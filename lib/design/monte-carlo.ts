@@ -1,6 +1,7 @@
 // Monte Carlo spread of the reading error for one pair: every part drawn uniformly within
 // its tolerance band, noise Gaussian, the output quantised and clipped as the readout sees it.
 import { drawReadout, drawZeroLevelV } from "./monte-carlo-readout";
+import { readoutFigures, type ReadoutFigure } from "./readout-error";
 import { buildModel, commonModeErrorV, gainSetError, type Model, noiseRmsA, REFERENCE_C } from "./model";
 import { drawFrontEnd } from "./front-end";
 import { shuntFigures } from "./pair";
@@ -24,7 +25,11 @@ export type MonteCarloRow = {
   withinTargetPercent: number;
 };
 
-export type MonteCarloResult = { draws: number; seed: number; rows: MonteCarloRow[] };
+/**
+ * `readoutFigures`: the readout's own error each unit was drawn with, and whether the requirement
+ * states each figure or it is typical of a class of part, not stated (readout-error.ts).
+ */
+export type MonteCarloResult = { draws: number; seed: number; rows: MonteCarloRow[]; readoutFigures: ReadoutFigure[] };
 
 export type MonteCarloOptions = { currentsA?: number[]; draws?: number; seed?: number };
 
@@ -178,5 +183,5 @@ export function monteCarlo(req: Requirement, choice: Choice, opts: MonteCarloOpt
       withinTargetPercent: (100 * within) / draws,
     };
   });
-  return { draws, seed, rows };
+  return { draws, seed, rows, readoutFigures: readoutFigures(req.readout) };
 }

@@ -2,10 +2,10 @@ import { describe, expect, it } from "vitest";
 import { planCautions, rangeSwitchW, unprotectedShuntW } from "./plan-cautions";
 import { evaluatePlan } from "./plan-evaluation";
 import { solve } from "./solve";
-import { req } from "./test-helpers";
+import { demoLoggerInput, req } from "./test-helpers";
 
 // docs/model.md §6: the demo logger, 3 µA–180 mA on a 3.0 V cell, 60 mV allowed.
-const logger = req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } });
+const logger = req(demoLoggerInput);
 
 describe("cautions for a range plan", () => {
   const proposed = solve(logger).rangePlan;

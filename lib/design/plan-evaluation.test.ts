@@ -8,11 +8,11 @@ import { evaluatePlan } from "./plan-evaluation";
 import { subModel } from "./range-plan";
 import type { Requirement } from "./requirement";
 import { solve } from "./solve";
-import { req } from "./test-helpers";
+import { demoLoggerInput, req } from "./test-helpers";
 
 // docs/model.md §6: the demo soil-moisture logger, 3 µA asleep to 180 mA transmitting, on a 3.0 V cell
 // (db/seed uses the same span, supply and allowed drop).
-const logger = req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } });
+const logger = req(demoLoggerInput);
 // The hidden-style case of issue 13: 2 µA–120 mA, 3.0 V, 50 mV, 12-bit ADC at 2.048 V, 4 counts at the bottom.
 const hidden = req({
   current: { min: "2 uA", max: "120 mA" },
@@ -205,12 +205,7 @@ describe("evaluatePlan refuses an unsound plan, naming the range at fault", () =
 
   it("a low range unprotected at the span's full current", () => {
     // Offer only 100 mW parts and allow 6 % of the rating: at most 6 mW in any shunt.
-    const r = req({
-      current: { min: "3 uA", max: "180 mA" },
-      supply: { voltage: "3.0 V" },
-      drop: { max: "60 mV" },
-      shunt: { ratings: ["100 mW"], derating: 0.06 },
-    });
+    const r = req({ ...demoLoggerInput, shunt: { ratings: ["100 mW"], derating: 0.06 } });
     const p = proposed(r);
     // Find a pair that works on the middle range's own span but whose shunt would burn before the bypass closes.
     const m = buildModel(r);

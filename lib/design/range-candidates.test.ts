@@ -2,10 +2,10 @@ import { describe, expect, it } from "vitest";
 import { evaluatePlan } from "./plan-evaluation";
 import { moveSwitchPoint, planChoiceOf, rangeCandidates, withRangePair } from "./range-candidates";
 import { solve } from "./solve";
-import { req } from "./test-helpers";
+import { demoLoggerInput, req } from "./test-helpers";
 
 // docs/model.md §6: the demo logger, 3 µA asleep to 180 mA transmitting, from a 3.0 V cell.
-const logger = req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } });
+const logger = req(demoLoggerInput);
 // The hidden-style case of issue 13: 2 µA–120 mA, 50 mV, 12-bit.
 const hidden = req({
   current: { min: "2 uA", max: "120 mA" },

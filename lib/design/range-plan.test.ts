@@ -2,15 +2,12 @@ import { describe, expect, it } from "vitest";
 import { evaluateCandidate } from "./candidate";
 import { solve } from "./solve";
 import { SWITCH_DOWN_FRACTION } from "./range-plan";
-import { req } from "./test-helpers";
+import { demoLoggerInput, req } from "./test-helpers";
 
 describe("range plans for spans too wide for one range", () => {
   const cases = [
     // docs/model.md §6: the soil-moisture logger, 3 µA asleep to 180 mA transmitting, from 3.0 V.
-    [
-      "the demo logger, 3 µA .. 180 mA",
-      req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } }),
-    ],
+    ["the demo logger, 3 µA .. 180 mA", req(demoLoggerInput)],
     [
       "3 µA .. 6 A at 24 V",
       req({
@@ -74,7 +71,10 @@ describe("range plans for spans too wide for one range", () => {
   });
 
   it("proposes no plan when one range is enough", () => {
-    expect(solve(req({ current: { min: "10 mA", max: "180 mA" }, supply: { voltage: "3 V" } })).rangePlan).toBeNull();
+    // Zeroed once, the converter's typical offset (not stated) is out of the 2 % budget and one range reads 10 mA–180 mA.
+    const r = req({ current: { min: "10 mA", max: "180 mA" }, supply: { voltage: "3 V" }, calibration: "one-point" });
+    expect(solve(r).feasibleCount).toBeGreaterThan(0);
+    expect(solve(r).rangePlan).toBeNull();
   });
 
   it("the hidden case, 2 µA–120 mA at 3.0 V, 50 mV, 12-bit at 2.048 V, 4 counts at the bottom, gets a plan", () => {
@@ -96,7 +96,7 @@ describe("range plans for spans too wide for one range", () => {
 });
 
 describe("range switches and protection (issue 11, item 8)", () => {
-  const logger = req({ current: { min: "3 uA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } });
+  const logger = req(demoLoggerInput);
   const plan = solve(logger).rangePlan;
 
   it("names the switch's on-resistance (by default a tenth of the allowed drop at full current) and counts it in each range's burden", () => {

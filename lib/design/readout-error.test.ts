@@ -6,6 +6,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { errorAt } from "./error-budget";
 import { monteCarlo } from "./monte-carlo";
+import { solve } from "./solve";
 import { req } from "./test-helpers";
 
 const termOf = (terms: { source: string; errorA: number }[], source: string) =>
@@ -13,7 +14,7 @@ const termOf = (terms: { source: string; errorA: number }[], source: string) =>
 
 describe("a meter's ±(% of reading + digits)", () => {
   // A 2000-count meter on its 200 mV range: one count is 200 mV / 2000 = 0.1 mV.
-  const meter = (accuracy?: { percentOfReading: string; digits: number }) =>
+  const meter = (accuracy?: { percentOfReading?: string; digits?: number }) =>
     req({
       current: { min: "2 uA", max: "180 uA" },
       supply: { voltage: "3.3 V" },
@@ -30,10 +31,81 @@ describe("a meter's ±(% of reading + digits)", () => {
     // 0.5 % of reading + 2 × 0.1 mV / 20 mV = 0.5 % + 1 % = 1.5 %.
     const readingShare = (termOf(terms, "readoutGain") + termOf(terms, "readout")) / I;
     expect(readingShare).toBeCloseTo(0.015, 12);
-    // The half-count model (no accuracy stated): ½ × 0.1 mV / 20 mV = 0.25 %, and no % of reading line.
-    const ideal = errorAt(meter(), choice, I).terms;
+    // The half-count model, an ideal meter stated as ±(0 % + 0 digits): ½ × 0.1 mV / 20 mV = 0.25 %.
+    const ideal = errorAt(meter({ percentOfReading: "0 %", digits: 0 }), choice, I).terms;
     expect(termOf(ideal, "readout") / I).toBeCloseTo(0.0025, 12);
-    expect(ideal.some((t) => t.source === "readoutGain")).toBe(false);
+    expect(termOf(ideal, "readoutGain")).toBe(0);
+  });
+  it("a meter whose accuracy is not stated reads with its class's ±(0.5 % + 2 digits): 1.5 % at 20 mV", () => {
+    // The class figures are from memory (a handheld meter's DC millivolt ranges; readout-error.ts).
+    const terms = errorAt(meter(), choice, I).terms;
+    expect((termOf(terms, "readoutGain") + termOf(terms, "readout")) / I).toBeCloseTo(0.015, 12);
+    const basis = (s: string) => terms.find((t) => t.source === s)?.basis;
+    expect(basis("readoutGain")).toBe("±0.5 %, typical of a handheld meter's DC millivolt ranges, not stated");
+    expect(basis("readout")).toBe("±2 digits, typical of a handheld meter's DC millivolt ranges, not stated");
+    // Half stated: the stated figure as stated, the other typical.
+    const half = errorAt(meter({ digits: 1 }), choice, I).terms;
+    expect((termOf(half, "readoutGain") + termOf(half, "readout")) / I).toBeCloseTo(0.005 + 0.005, 12);
+    expect(half.find((t) => t.source === "readout")?.basis).toBe("±1 digit, stated");
+  });
+});
+
+describe("a converter whose own error is not stated reads with its class's typical figures, never as ideal", () => {
+  // The class figures (from memory; readout-error.ts, DEFAULTS.md): reference ±0.1 %, 20 ppm/K;
+  // offset ±2 LSB; gain error ±0.05 %; INL ±1 LSB. 16 bits at 2.5 V: 1 LSB = 2.5 V / 65536.
+  // Default ambient 0…70 °C: 45 K from 25 °C at the hot end (DEFAULTS.md).
+  const choice = { shuntOhms: 0.05, gain: 20 };
+  const rg = 0.05 * 20;
+  const lsb = 2.5 / 65536;
+  it("adds each class figure to the budget, worked by hand at 0.5 A", () => {
+    const t = errorAt(req(adcInput), choice, 0.5).terms;
+    expect(termOf(t, "readoutReference")).toBeCloseTo(0.5 * (0.001 + 20e-6 * 45), 15); // 0.95 mA
+    expect(termOf(t, "readoutGain")).toBeCloseTo(0.5 * 0.0005, 15); // 0.25 mA
+    expect(termOf(t, "readoutOffset")).toBeCloseTo((2 * lsb) / rg, 15); // 76.3 µA
+    expect(termOf(t, "readoutInl")).toBeCloseTo(lsb / rg, 15); // 38.1 µA
+    for (const x of t.filter((x) =>
+      ["readoutReference", "readoutGain", "readoutOffset", "readoutInl"].includes(x.source),
+    ))
+      expect(x.basis).toMatch(/typical of a general-purpose converter with a series reference, not stated$/);
+  });
+  it("uses a stated figure as stated, 0 included, and the class figure for the rest", () => {
+    const r = req({ ...adcInput, readout: { ...adcInput.readout, offsetLsb: 0, gainError: "0.2 %" } });
+    const t = errorAt(r, choice, 0.5).terms;
+    expect(termOf(t, "readoutOffset")).toBe(0);
+    expect(termOf(t, "readoutGain")).toBeCloseTo(0.5 * 0.002, 15);
+    expect(termOf(t, "readoutInl")).toBeCloseTo(lsb / rg, 15);
+    expect(t.find((x) => x.source === "readoutOffset")?.basis).toBe("±0 LSB, stated");
+    expect(t.find((x) => x.source === "readoutGain")?.basis).toBe("±0.2 %, stated");
+  });
+  it("the demo logger's burst range is feasible only with an ideal converter, which must now be stated to count", () => {
+    // docs/model.md §6: 2 mA–180 mA from 3.0 V, 60 mV, 12 bits at 2.5 V, 2 % from 18 mA.
+    const burst = { current: { min: "2 mA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } };
+    const ideal = {
+      kind: "adc" as const,
+      bits: 12,
+      fullScale: "2.5 V",
+      reference: { tolerance: 0, tempco: 0 },
+      offsetLsb: 0,
+      gainError: 0,
+      inlLsb: 0,
+    };
+    expect(solve(req({ ...burst, readout: ideal })).feasibleCount).toBeGreaterThan(0);
+    // 12 bits: 3.5 LSB of fixed error (offset, INL, half a step) where half a step was counted.
+    const unstated = solve(req({ ...burst, readout: { kind: "adc", bits: 12, fullScale: "2.5 V" } }));
+    expect(unstated.feasibleCount).toBe(0);
+    // The sweep says what it counted: every figure typical of the class, none stated.
+    expect(unstated.readoutFigures.map((f) => [f.field, f.value, f.stated])).toEqual([
+      ["readout.reference.tolerance", 0.001, false],
+      ["readout.reference.tempco", 20e-6, false],
+      ["readout.offsetLsb", 2, false],
+      ["readout.gainError", 0.0005, false],
+      ["readout.inlLsb", 1, false],
+    ]);
+    // Zeroed once (a one-point calibration), the class's offset is out and pairs are feasible again.
+    expect(
+      solve(req({ ...burst, readout: { kind: "adc", bits: 12, fullScale: "2.5 V" }, calibration: "one-point" }))
+        .feasibleCount,
+    ).toBeGreaterThan(0);
   });
 });
 
@@ -169,7 +241,11 @@ describe("Monte Carlo with the readout's own error", () => {
       ...base,
       readout: { ...adcInput.readout, reference: { tolerance: "1 %", tempco: "50 ppm/K" }, gainError: "0.5 %" },
     });
-    const ideal = req(base);
+    // An ideal converter, stated (left out, it would read with its class's typical figures).
+    const ideal = req({
+      ...base,
+      readout: { ...adcInput.readout, reference: { tolerance: 0, tempco: 0 }, offsetLsb: 0, gainError: 0, inlLsb: 0 },
+    });
     const choice = { shuntOhms: 0.05, gain: 20 };
     const mc = monteCarlo(withErr, choice, { currentsA: [0.5], draws: 3000 });
     const row = mc.rows[0]!;
@@ -177,5 +253,12 @@ describe("Monte Carlo with the readout's own error", () => {
     expect(Math.max(Math.abs(row.min), Math.abs(row.max))).toBeLessThanOrEqual(worst);
     const rowIdeal = monteCarlo(ideal, choice, { currentsA: [0.5], draws: 3000 }).rows[0]!;
     expect(row.std).toBeGreaterThan(2 * rowIdeal.std);
+    // It says which figures it drew from the requirement and which from the class (not stated).
+    expect(mc.readoutFigures.filter((f) => f.stated).map((f) => f.field)).toEqual([
+      "readout.reference.tolerance",
+      "readout.reference.tempco",
+      "readout.gainError",
+    ]);
+    expect(mc.readoutFigures.find((f) => f.field === "readout.offsetLsb")).toMatchObject({ value: 2, stated: false });
   });
 });

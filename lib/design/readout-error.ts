@@ -1,6 +1,7 @@
 // The readout's own error (issue 14, item 2): an ADC's reference, offset, gain error and INL,
 // or a meter's ±(% of reading + digits), and what a one- or two-point calibration takes out.
 // Field names are API.md v2's; the defaults are a class of part, from memory (DEFAULTS.md).
+import { formatPercent } from "./format";
 
 /** A reading's calibration before use (DEFAULTS.md, docs/model.md §3 "Calibration"). */
 export const calibrations = ["none", "one-point", "two-point"] as const;
@@ -16,9 +17,9 @@ export const calibrationLabels: Record<Calibration, string> = {
  * Typical figures of a class of part (from memory): an ADC fed by a general-purpose series voltage
  * reference (±0.1 %, 20 ppm/K) with ±2 LSB offset, ±0.05 % gain error (reference excluded) and
  * ±1 LSB INL; a handheld-class meter on its DC millivolt ranges, ±(0.5 % of reading + 2 digits).
- * The wizard offers them and the cautions measure a design against them; a request that leaves a
- * figure out is read with an ideal readout (half a step), as before issue 14, because these figures
- * turn every demo design and many saved ones infeasible (DEFAULTS.md says why).
+ * A figure the request leaves out is read with these, never as ideal: a wrong "feasible" is the
+ * worst failure of a design tool, and a real converter or meter always has its own error. A figure
+ * the request states, 0 included, is used as stated (DEFAULTS.md says why).
  */
 export const DEFAULT_ADC_REFERENCE = { tolerance: 0.001, tempco: 20e-6 } as const;
 export const DEFAULT_ADC_OFFSET_LSB = 2;
@@ -44,16 +45,89 @@ export type ReadoutWithErrors =
       accuracy?: { percentOfReading?: number; digits?: number };
     };
 
-/** Whether the request states any of the readout's own error (else it is read as ideal). */
-export function readoutErrorStated(r: ReadoutWithErrors): boolean {
-  if (r.kind === "meter") return r.accuracy?.percentOfReading !== undefined || r.accuracy?.digits !== undefined;
-  return (
-    r.reference?.tolerance !== undefined ||
-    r.reference?.tempco !== undefined ||
-    r.offsetLsb !== undefined ||
-    r.gainError !== undefined ||
-    r.inlLsb !== undefined
-  );
+/** The class of part whose typical figures stand in for what the request leaves out. */
+export const readoutClassNames = {
+  adc: "a general-purpose converter with a series reference",
+  meter: "a handheld meter's DC millivolt ranges",
+} as const;
+
+/** One figure of the readout's own error, as the model reads it. */
+export type ReadoutFigure = {
+  /** Dotted path in the requirement (API.md v2). */
+  field: string;
+  name: string;
+  value: number;
+  unit: "ratio" | "1/K" | "LSB" | "counts";
+  /** false: left out of the request, read with the class figure (DEFAULTS.md). */
+  stated: boolean;
+};
+
+/** Every figure of the readout's own error, each with whether the request states it. */
+export function readoutFigures(r: ReadoutWithErrors): ReadoutFigure[] {
+  if (r.kind === "meter") {
+    const a = r.accuracy ?? {};
+    const t = DEFAULT_METER_ACCURACY;
+    return [
+      figure("readout.accuracy.percentOfReading", "accuracy", "ratio", a.percentOfReading, t.percentOfReading),
+      figure("readout.accuracy.digits", "plus", "counts", a.digits, t.digits),
+    ];
+  }
+  const ref = DEFAULT_ADC_REFERENCE;
+  return [
+    figure("readout.reference.tolerance", "reference", "ratio", r.reference?.tolerance, ref.tolerance),
+    figure("readout.reference.tempco", "reference drift", "1/K", r.reference?.tempco, ref.tempco),
+    figure("readout.offsetLsb", "offset", "LSB", r.offsetLsb, DEFAULT_ADC_OFFSET_LSB),
+    figure("readout.gainError", "gain error", "ratio", r.gainError, DEFAULT_ADC_GAIN_ERROR),
+    figure("readout.inlLsb", "INL", "LSB", r.inlLsb, DEFAULT_ADC_INL_LSB),
+  ];
+}
+
+function figure(
+  field: string,
+  name: string,
+  unit: ReadoutFigure["unit"],
+  given: number | undefined,
+  typical: number,
+): ReadoutFigure {
+  return { field, name, unit, value: given ?? typical, stated: given !== undefined };
+}
+
+/** "typical of <class>, not stated": the words for a figure the request left out. */
+export function assumedBasis(kind: ReadoutWithErrors["kind"]): string {
+  return `typical of ${readoutClassNames[kind]}, not stated`;
+}
+
+/** A figure as a person reads it: "±0.1 %", "20 ppm/K", "±2 LSB", "±2 digits". */
+export function formatReadoutFigure(f: ReadoutFigure): string {
+  if (f.unit === "ratio") return `±${formatPercent(f.value)}`;
+  if (f.unit === "1/K") return `${Number((f.value * 1e6).toPrecision(3))} ppm/K`;
+  if (f.unit === "LSB") return `±${Number(f.value.toPrecision(3))} LSB`;
+  const n = Number(f.value.toPrecision(3));
+  return `±${n} digit${n === 1 ? "" : "s"}`;
+}
+
+/**
+ * The figures behind some of the readout's figures, and where they come from:
+ * "±2 LSB, typical of a general-purpose converter with a series reference, not stated" or "±2 LSB, stated".
+ * Figures of mixed origin name which is which.
+ */
+export function readoutFiguresBasis(r: ReadoutWithErrors, fields: readonly string[]): string {
+  const fs = readoutFigures(r).filter((f) => fields.includes(f.field));
+  const stated = fs.filter((f) => f.stated);
+  const assumed = fs.filter((f) => !f.stated);
+  const words = (list: ReadoutFigure[]) =>
+    list.map((f) => (fs.length > 1 ? `${f.name} ${formatReadoutFigure(f)}` : formatReadoutFigure(f))).join(", ");
+  const parts: string[] = [];
+  if (stated.length) parts.push(`${words(stated)}, stated`);
+  if (assumed.length) parts.push(`${words(assumed)}, ${assumedBasis(r.kind)}`);
+  return parts.join("; ");
+}
+
+/** The figures the request leaves out, in words (empty: it states them all). */
+export function assumedReadoutText(r: ReadoutWithErrors): string {
+  const assumed = readoutFigures(r).filter((f) => !f.stated);
+  if (!assumed.length) return "";
+  return `${assumed.map((f) => `${f.name} ${formatReadoutFigure(f)}`).join(", ")}: ${assumedBasis(r.kind)} (from memory; DEFAULTS.md)`;
 }
 
 /** The same readout with the class-of-part figures in every figure it leaves out. */
@@ -96,16 +170,19 @@ export type ReadoutErrors = {
   quantV: number;
 };
 
+/** The model's figures: what the request states, and the class figures for what it leaves out. */
 export function readoutErrors(r: ReadoutWithErrors, dTamb: number): ReadoutErrors {
+  const v = Object.fromEntries(readoutFigures(r).map((f) => [f.field, f.value]));
+  const at = (field: string) => v[field] ?? 0;
   if (r.kind === "adc") {
     const stepV = r.fullScale / 2 ** r.bits;
     return {
       stepV,
-      refTol: r.reference?.tolerance ?? 0,
-      refDrift: (r.reference?.tempco ?? 0) * dTamb,
-      gain: r.gainError ?? 0,
-      offsetV: (r.offsetLsb ?? 0) * stepV,
-      inlV: (r.inlLsb ?? 0) * stepV,
+      refTol: at("readout.reference.tolerance"),
+      refDrift: at("readout.reference.tempco") * dTamb,
+      gain: at("readout.gainError"),
+      offsetV: at("readout.offsetLsb") * stepV,
+      inlV: at("readout.inlLsb") * stepV,
       quantV: stepV / 2,
     };
   }
@@ -114,10 +191,10 @@ export function readoutErrors(r: ReadoutWithErrors, dTamb: number): ReadoutError
     stepV,
     refTol: 0,
     refDrift: 0,
-    gain: r.accuracy?.percentOfReading ?? 0,
+    gain: at("readout.accuracy.percentOfReading"),
     offsetV: 0,
     inlV: 0,
-    quantV: Math.max(0.5, r.accuracy?.digits ?? 0) * stepV,
+    quantV: Math.max(0.5, at("readout.accuracy.digits")) * stepV,
   };
 }
 

@@ -8,11 +8,23 @@ export type LoadModel = (typeof loadModels)[number];
 // The topologies live in ./topology (the parts library lists them too).
 export { topologies, topologyLabels, type Topology } from "./topology";
 
-/** The demo soil-moisture logger (docs/model.md §6): the wizard's start values. */
+/**
+ * The demo soil-moisture logger (docs/model.md §6): the wizard's example start values, its
+ * converter's own error stated as the demo states it (db/seed/designs.ts) and zeroed once.
+ */
 export const defaultRequirementInput = {
   current: { min: "3 uA", max: "180 mA" },
   supply: { voltage: "3.0 V", side: "low" },
   drop: { max: "60 mV" },
-  readout: { kind: "adc", bits: 12, fullScale: "2.5 V" },
+  readout: {
+    kind: "adc",
+    bits: 12,
+    fullScale: "2.5 V",
+    reference: { tolerance: "0.05 %", tempco: "10 ppm/K" },
+    offsetLsb: 2,
+    gainError: "0.1 %",
+    inlLsb: 1,
+  },
   resolution: { countsAtMin: 10 },
+  calibration: "one-point",
 } as const;

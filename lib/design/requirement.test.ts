@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { defaultRequirementInput, parseRequirement, requirementSchema } from "./requirement";
 import { commonFixedGains } from "./gains";
+import { demoLoggerInput } from "./test-helpers";
 
 const base = {
   current: { min: "3 uA", max: "180 mA" },
@@ -117,7 +118,8 @@ describe("parseRequirement: defaults and normalisation", () => {
     if (!again.ok) throw new Error(again.message);
     expect(again.requirement).toEqual(r.requirement);
   });
-  it("the demo start values parse", () => {
+  it("the demo start values parse, and are the demo logger the engine's tests use", () => {
     expect(requirementSchema.safeParse(defaultRequirementInput).success).toBe(true);
+    expect(defaultRequirementInput).toEqual(demoLoggerInput);
   });
 });

@@ -5,6 +5,7 @@ import { seriesValues } from "./eseries";
 import { buildModel, operatingBurden } from "./model";
 import { dominates } from "./pareto";
 import { rejectReasons } from "./pair";
+import { readoutFigures } from "./readout-error";
 import { RankExpressionError } from "./rank";
 import type { Requirement } from "./requirement";
 import { solve } from "./solve";
@@ -58,8 +59,17 @@ function independentChecks(r: Requirement, c: ReturnType<typeof evaluateCandidat
     vIn.some((v) => k * v > cm.max * tol || k * v * tol < cm.min)
   )
     failed.push("commonMode");
-  if (c.outputAtMaxWorstV > Math.min(r.readout.fullScale, r.amplifier.supply - r.amplifier.swingHigh) * tol)
-    failed.push("output");
+  // An ADC's last code comes early by its reference's tolerance and drift, its gain error and its
+  // offset (docs/model.md §3); a figure not stated is its class's typical one (readout-error.ts).
+  const fig = (field: string) => readoutFigures(r.readout).find((f) => f.field === field)?.value ?? 0;
+  const dT = Math.max(Math.abs(r.temperature.max - 25), Math.abs(r.temperature.min - 25));
+  const readTop =
+    r.readout.kind === "adc"
+      ? r.readout.fullScale *
+          (1 - fig("readout.reference.tolerance") - fig("readout.reference.tempco") * dT - fig("readout.gainError")) -
+        (fig("readout.offsetLsb") * r.readout.fullScale) / 2 ** r.readout.bits
+      : r.readout.fullScale;
+  if (c.outputAtMaxWorstV > Math.min(readTop, r.amplifier.supply - r.amplifier.swingHigh) * tol) failed.push("output");
   if ((r.current.min / Math.max(c.lsbA, c.noiseA)) * tol < r.resolution.countsAtMin) failed.push("counts");
   // Linear derating above the knee to none at the maximum temperature (the resistor derating curve).
   const tMax = r.temperature.max;

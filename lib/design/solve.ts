@@ -20,6 +20,7 @@ import { planRanges, whyNoPlan, type RangePlan } from "./range-plan";
 import type { Requirement } from "./requirement";
 import { sweepGrid, sweepValues, type SweepArrays } from "./sweep";
 import type { Candidate } from "./types";
+import { readoutFigures, type ReadoutFigure } from "./readout-error";
 
 export { defaultRankingText };
 
@@ -36,6 +37,11 @@ export type SolveResult = {
   ranking: string;
   /** Feasible pairs with a decade scale factor (1 mV per mA, …), the best per decade. */
   decadeScales: (Candidate & { scale: string })[];
+  /**
+   * The readout's own error the sweep counted: each figure with `stated: false` where the request
+   * leaves it out and it is typical of a class of part (readout-error.ts, from memory).
+   */
+  readoutFigures: ReadoutFigure[];
 };
 
 /** `diagnose: false` skips the diagnosis (its relaxations re-run the sweep many times). */
@@ -200,6 +206,7 @@ export function solve(req: Requirement, opts: SolveOptions = {}): SolveResult {
     rangePlan,
     ranking: rank ? `By the expression ${rank.source}; lower first.` : defaultRankingText,
     decadeScales,
+    readoutFigures: readoutFigures(req.readout),
   };
   if (sw.feasibleCount === 0 && opts.diagnose !== false)
     result.diagnosis = diagnose(req, m, sw, rangePlan ? null : whyNoPlan(req, m, sw));

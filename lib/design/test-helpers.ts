@@ -9,6 +9,52 @@ export function req(input: RequirementInput): Requirement {
 }
 
 /**
+ * The demo logger's converter as db/seed/designs.ts states it (an invented part of an ordinary
+ * class: external 2.5 V reference ±0.05 %, 10 ppm/K; ±2 LSB offset, ±0.1 % gain error, ±1 LSB INL),
+ * zeroed once at production test (a one-point calibration). db/seed/designs.test.ts checks the
+ * seed states the same.
+ */
+export const demoLoggerReadout = {
+  readout: {
+    kind: "adc",
+    bits: 12,
+    fullScale: "2.5 V",
+    reference: { tolerance: "0.05 %", tempco: "10 ppm/K" },
+    offsetLsb: 2,
+    gainError: "0.1 %",
+    inlLsb: 1,
+  },
+  calibration: "one-point",
+} as const satisfies Pick<RequirementInput, "readout" | "calibration">;
+
+/**
+ * The demo pump controller's converter as db/seed/designs.ts states it (invented: reference ±0.1 %,
+ * 25 ppm/K; ±3 LSB offset, ±0.2 % gain error, ±1.5 LSB INL at 12 bits on 3.3 V), calibrated at the
+ * end of the line at zero and near full scale (two points).
+ */
+export const demoPumpReadout = {
+  readout: {
+    kind: "adc",
+    bits: 12,
+    fullScale: "3.3 V",
+    reference: { tolerance: "0.1 %", tempco: "25 ppm/K" },
+    offsetLsb: 3,
+    gainError: "0.2 %",
+    inlLsb: 1.5,
+  },
+  calibration: "two-point",
+} as const satisfies Pick<RequirementInput, "readout" | "calibration">;
+
+/** docs/model.md §6: the demo logger, 3 µA asleep to 180 mA transmitting, from a 3.0 V cell, 60 mV allowed. */
+export const demoLoggerInput = {
+  current: { min: "3 uA", max: "180 mA" },
+  supply: { voltage: "3.0 V", side: "low" },
+  drop: { max: "60 mV" },
+  ...demoLoggerReadout,
+  resolution: { countsAtMin: 10 },
+} as const satisfies RequirementInput;
+
+/**
  * Issue 11's sensor node: a 3.3 V node at 5 µA–250 mA, 50 mV allowed, 12-bit at 3.3 V, 1 % from
  * 1 mA over −20…60 °C. No single pair covers it; the diagnosis must still say what would work.
  */

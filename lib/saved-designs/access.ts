@@ -5,7 +5,8 @@ import "server-only";
 import { getDesign, getDesignView } from "@/db/queries/designs";
 import type { Caller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
-import type { PairDesignView } from "@/lib/design-view";
+import type { DesignView, PairDesignView } from "@/lib/design-view";
+import { savedPlanVerdict } from "@/lib/design/saved-verdict";
 import { HttpError } from "@/lib/http";
 
 export const designNotFound = () => new HttpError(404, "That design was not found in your team.");
@@ -47,4 +48,15 @@ export async function pairDesignViewFor(caller: Caller, id: string, what: string
   const view = await designViewFor(caller, id);
   if (view.kind === "plan") throw rangePlanNotYet(what);
   return view;
+}
+
+/**
+ * A saved range plan that fails under today's model has no build sheet or parts list (each range's
+ * figures come from re-deriving the plan): 409, with the failing constraint named. A pair's sheet
+ * prints with the same statement on its front page instead.
+ */
+export function refuseFailingPlan(view: DesignView): void {
+  if (view.kind !== "plan") return;
+  const verdict = savedPlanVerdict(view.requirement, view.plan);
+  if (verdict.fails) throw new HttpError(409, verdict.statement, { plan: [verdict.statement] });
 }

@@ -17,7 +17,7 @@ export type WizardValues = {
     counts?: number;
     fullScale: string;
     sampleRateHz?: string;
-    // The readout's own error (left out: an ideal readout).
+    // The readout's own error (left out: its class's typical figures, lib/design/readout-error.ts).
     reference?: { tolerance?: string; tempco?: string };
     offsetLsb?: number;
     gainError?: string;

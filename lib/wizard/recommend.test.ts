@@ -3,12 +3,15 @@
 import { describe, expect, it } from "vitest";
 import { parseRequirement } from "@/lib/design/requirement";
 import { solve } from "@/lib/design/solve";
+import { demoLoggerReadout } from "@/lib/design/test-helpers";
 import { recommendationReason, recommendedOf } from "./recommend";
 
+// The demo logger's burst range with its converter stated and zeroed once (db/seed/designs.ts).
 const p = parseRequirement({
   current: { min: "2 mA", max: "180 mA" },
   supply: { voltage: "3 V" },
   drop: { max: "60 mV" },
+  ...demoLoggerReadout,
 });
 if (!p.ok) throw new Error(p.message);
 const result = solve(p.requirement);

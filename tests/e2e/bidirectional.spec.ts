@@ -32,7 +32,9 @@ for (const [w, width] of Object.entries(widths)) {
     await next(page, /Readout/);
     await field(page, "ADC resolution (bits)").fill("16");
     const box = page.getByTestId("readout-error");
-    await expect(box).toContainText("Blank boxes count an ideal converter");
+    await expect(box).toContainText(
+      "A blank box is read with the figure shown in it, typical of a general-purpose converter with a series reference (from memory)",
+    );
     await box.getByRole("button", { name: "Fill typical figures" }).click();
     await expect(field(page, "Reference tolerance").first()).toHaveValue("0.1 %");
     await expect(field(page, "Offset error")).toHaveValue("2");
@@ -57,6 +59,8 @@ for (const [w, width] of Object.entries(widths)) {
     await expect(chart).toContainText("−");
     const text = await shownText(page);
     expect(text).toContain("ADC reference (tolerance and tempco)");
+    // Filled in from the class figures, the figures are now the request's own: stated.
+    expect(text).toContain("(reference ±0.1 %, reference drift 20 ppm/K, stated)");
     await chart.screenshot({ path: `${shots}/signed-chart-${w}.png` });
     await checkScreen(page, `${shots}/signed-page-${w}.png`);
     await ctx.close();

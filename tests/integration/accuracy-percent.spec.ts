@@ -4,12 +4,22 @@
 import { expect, test, type APIRequestContext } from "@playwright/test";
 import { apiAs } from "../fixtures/auth";
 
-// Tight parts so that a 0.08 % target has feasible pairs (115 of them, by the engine's sweep).
+// Tight parts so that a 0.08 % target has feasible pairs (30 of them, by the engine's sweep),
+// a precision converter among them: its own error stated, as a class's typical figures alone
+// (0.24 % of reading) would leave none.
 const tight = (percent: string | number) => ({
   current: { min: "100 mA", max: "1 A" },
   supply: { voltage: "12 V" },
   drop: { max: "100 mV" },
-  readout: { kind: "adc", bits: 16, fullScale: "2.5 V" },
+  readout: {
+    kind: "adc",
+    bits: 16,
+    fullScale: "2.5 V",
+    reference: { tolerance: "0.01 %", tempco: "2 ppm/K" },
+    offsetLsb: 1,
+    gainError: "0.01 %",
+    inlLsb: 1,
+  },
   accuracy: { percent, bandMin: "500 mA" },
   shunt: { tolerance: "0.01 %", tempco: "2 ppm/K" },
   amplifier: {

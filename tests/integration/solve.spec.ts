@@ -314,7 +314,10 @@ test("nothing feasible: the diagnosis's changes, sent back one at a time, give w
   const body = (await res.json()) as SolveBody & { diagnosis?: { relax: Relax[]; rangePlan: string | null } };
   expect(body.feasibleCount).toBe(0);
   const relax = body.diagnosis?.relax ?? [];
-  expect(relax.map((r) => r.field)).toEqual(expect.arrayContaining(["accuracy.percent", "accuracy.bandMin"]));
+  expect(relax.map((r) => r.field)).toContain("accuracy.percent");
+  // Its converter's own error is not stated: the class's typical figures (0.24 % of reading) on top
+  // of its 0.87 % of gain-type errors put 1 % out of reach at any band start (lib/design/diagnosis.test.ts).
+  expect(relax.map((r) => r.field)).not.toContain("accuracy.bandMin");
   for (const r of relax) {
     const [group, key] = r.field.split(".") as [string, string];
     const changed = { ...sensorNode, [group]: { ...sensorNode[group], [key]: r.to } };

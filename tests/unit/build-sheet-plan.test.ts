@@ -93,10 +93,10 @@ describe.each(cases)("build sheet of a range plan: %s", (name, req) => {
     const codes: Record<number, string> = {
       41.2: "41R2",
       1.07: "1R07",
-      0.274: "R274",
+      0.226: "R226",
       30.1: "30R1",
       0.464: "R464",
-      0.015: "R015",
+      0.00806: "R00806",
     };
     ranges.forEach((r, k) => {
       const code = codes[r.shuntOhms];

@@ -284,11 +284,17 @@ export function FrontPage({
   view: Parameters<typeof TitleBlock>[0]["view"];
   meta: SheetMeta;
   heading: string;
-  data: Pick<SheetData, "requirement" | "parts" | "cautions">;
+  data: Pick<SheetData, "requirement" | "parts" | "cautions"> & { modelFails?: string | null };
 }) {
   return (
     <>
       <TitleBlock view={view} meta={meta} />
+      {data.modelFails ? (
+        <View style={s.caution}>
+          <Text style={{ fontWeight: 700, color: colors.bad }}>FAILS UNDER THE CURRENT MODEL: do not build</Text>
+          <Text>{data.modelFails}</Text>
+        </View>
+      ) : null}
       <Text style={s.h2}>{heading}</Text>
       <KeyValues rows={data.requirement} />
       <Text style={s.h2}>Parts</Text>

@@ -5,6 +5,7 @@ import { BuildSheetPanel } from "@/components/design/build-sheet-panel";
 import { DesignFigures } from "@/components/design/design-figures";
 import { PlanBuildPanel } from "@/components/design/plan-build-panel";
 import { PlanFigures } from "@/components/design/plan-figures";
+import { SavedVerdictNotice } from "@/components/design/saved-verdict-notice";
 import { ProfilesPanel } from "@/components/design/profiles-panel";
 import { ComparePicker } from "@/components/review/compare-picker";
 import { ReviewPanel } from "@/components/review/review-panel";
@@ -16,6 +17,7 @@ import { isUuid } from "@/lib/ids";
 import { listLibrary } from "@/db/queries/library";
 import { listReviews } from "@/db/queries/reviews";
 import { formatSI } from "@/lib/design/format";
+import { savedPairVerdict, savedPlanVerdict } from "@/lib/design/saved-verdict";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
 import { designViewerFor } from "@/lib/design-view";
@@ -56,6 +58,11 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
       audit={audit.map((e) => ({ ...e, at: e.at.toISOString() }))}
     />
   );
+  // The saved figures are the ones it was approved on; today's model may no longer pass them.
+  const verdict =
+    design.kind === "plan"
+      ? savedPlanVerdict(design.requirement, design.plan)
+      : savedPairVerdict(design.requirement, design.choice);
   const worstDropV =
     design.kind === "plan" ? Math.max(...design.metrics.ranges.map((r) => r.worstBurdenV)) : design.metrics.burdenV;
   return (
@@ -111,6 +118,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
           </dl>
         )}
       </header>
+      <SavedVerdictNotice verdict={verdict} />
       {design.kind === "plan" ? (
         <>
           {viewer.leadsWithBuildSheet && <PlanBuildPanel design={design} viewer={viewer} />}

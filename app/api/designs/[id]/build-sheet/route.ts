@@ -6,10 +6,11 @@ import { listLibrary } from "@/db/queries/library";
 import { apiRoute } from "@/lib/auth/gate";
 import { attachment, exportFileName } from "@/lib/build-sheet/exports";
 import { renderBuildSheetOffThread } from "@/lib/build-sheet/render-pool";
-import { designViewFor } from "@/lib/saved-designs/access";
+import { designViewFor, refuseFailingPlan } from "@/lib/saved-designs/access";
 
 export const GET = apiRoute({ action: "design.read", doing: "download build sheets" }, async ({ caller, params }) => {
   const view = await designViewFor(caller, params.id ?? "");
+  refuseFailingPlan(view);
   // Off the request thread; a pair's parts are named after the team-library parts it came from.
   const library = view.kind === "plan" ? undefined : await listLibrary(caller.teamId);
   const pdf = await renderBuildSheetOffThread(view, { team: caller.teamName, generatedAt: new Date() }, library);

@@ -3,11 +3,12 @@
 import { listLibrary } from "@/db/queries/library";
 import { apiRoute } from "@/lib/auth/gate";
 import { attachment, exportFileName, partsCsv } from "@/lib/build-sheet/exports";
-import { designViewFor } from "@/lib/saved-designs/access";
+import { designViewFor, refuseFailingPlan } from "@/lib/saved-designs/access";
 import { planPartsCsv } from "@/lib/build-sheet/plan-exports";
 
 export const GET = apiRoute({ action: "design.read", doing: "download parts lists" }, async ({ caller, params }) => {
   const view = await designViewFor(caller, params.id ?? "");
+  refuseFailingPlan(view);
   const csv =
     view.kind === "plan" ? planPartsCsv(view.requirement, view.plan) : partsCsv(view, await listLibrary(caller.teamId));
   return new Response(csv, {
