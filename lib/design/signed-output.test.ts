@@ -4,7 +4,7 @@
 import { describe, expect, it } from "vitest";
 import { evaluateCandidate } from "./candidate";
 import { signedOutputEnds } from "./signed-output";
-import { req } from "./test-helpers";
+import { idealConverter, req } from "./test-helpers";
 
 // An amplifier with no error of its own, so the hand figures hold only the shunt's tolerance and
 // the zero level's: 10 A each way through 1 mΩ at gain 50 swings ±0.5 V about 1.25 V.
@@ -22,7 +22,8 @@ const pack = {
   current: { min: "-10 A", max: "10 A" },
   supply: { voltage: "48 V", side: "low" as const },
   drop: { max: "50 mV" },
-  readout: { kind: "adc" as const, bits: 16, fullScale: "2.5 V" },
+  // A converter with no error of its own, stated: the ceiling is its full scale exactly.
+  readout: { kind: "adc" as const, bits: 16, fullScale: "2.5 V", ...idealConverter },
   shunt: { tolerance: "1 %", tempco: "0 ppm/K" },
   accuracy: { crestFactor: 0 },
   amplifier: ideal,

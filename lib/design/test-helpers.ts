@@ -9,6 +9,17 @@ export function req(input: RequirementInput): Requirement {
 }
 
 /**
+ * A converter with no error of its own, stated as such (every figure 0): for hand calculations
+ * that check other terms alone. Left out, the figures would be the class's typical ones.
+ */
+export const idealConverter = {
+  reference: { tolerance: 0, tempco: 0 },
+  offsetLsb: 0,
+  gainError: 0,
+  inlLsb: 0,
+} as const;
+
+/**
  * The demo logger's converter as db/seed/designs.ts states it (an invented part of an ordinary
  * class: external 2.5 V reference ±0.05 %, 10 ppm/K; ±2 LSB offset, ±0.1 % gain error, ±1 LSB INL),
  * zeroed once at production test (a one-point calibration). db/seed/designs.test.ts checks the

@@ -1,8 +1,8 @@
-// The route handlers of the readout part kinds (ADCs, meter ranges): the same gate, policy action
-// and write rules as the amplifier and shunt routes, one definition for both kinds.
+// The route handlers of the readout part kinds (ADCs, meter ranges): the same write rules as the
+// amplifier and shunt routes, one definition for both kinds; the routes name their policy action.
 import "server-only";
 import { createReadoutPart, deletePart, getReadoutPart, updateReadoutPart } from "@/db/queries/library";
-import { apiRoute } from "@/lib/auth/gate";
+import type { Caller } from "@/lib/auth/gate";
 import { HttpError, json } from "@/lib/http";
 import type { z } from "zod";
 import { adcInput, adcPatch, meterInput, meterPatch, type AdcValues, type MeterValues } from "./schema";
@@ -17,36 +17,37 @@ const kinds: {
   meters: { input: meterInput, patch: meterPatch, word: "meter range" },
 };
 
-/** POST /api/library/{adcs|meters} */
-export function readoutCollectionRoutes<K extends Kind>(kind: K) {
-  const k = kinds[kind] as (typeof kinds)[K];
-  return {
-    POST: apiRoute(
-      { action: "library.edit", doing: "add parts to the library", body: k.input },
-      async ({ caller, body }) => json(written(await createReadoutPart(kind, caller.teamId, body, caller.userId)), 201),
-    ),
-  };
-}
-
-/** PATCH and DELETE /api/library/{adcs|meters}/[id] */
-export function readoutItemRoutes<K extends Kind>(kind: K) {
+/**
+ * The handlers of /api/library/{adcs|meters} (POST) and …/[id] (PATCH, DELETE), with the schemas
+ * they read. Each route file wraps them in `apiRoute` with its policy action named in the file.
+ */
+export function readoutPart<K extends Kind>(kind: K) {
   const k = kinds[kind] as (typeof kinds)[K];
   const notFound = () => new HttpError(404, `That ${k.word} was not found in the library.`);
   return {
-    PATCH: apiRoute(
-      { action: "library.edit", doing: "edit the parts library", body: k.patch },
-      async ({ caller, body, params }) => {
-        const id = partId(params.id, k.word);
-        const stored = await getReadoutPart(kind, caller.teamId, id);
-        if (!stored) throw notFound();
-        const values = mergePatch(stored, body, k.input);
-        return written(await updateReadoutPart(kind, caller.teamId, id, values, body.updatedAt, caller.userId));
-      },
-    ),
-    DELETE: apiRoute({ action: "library.edit", doing: "remove parts from the library" }, async ({ caller, params }) => {
+    input: k.input,
+    patch: k.patch,
+    create: async ({ caller, body }: { caller: Caller; body: Values[K] }) =>
+      json(written(await createReadoutPart(kind, caller.teamId, body, caller.userId)), 201),
+    update: async ({
+      caller,
+      body,
+      params,
+    }: {
+      caller: Caller;
+      body: { updatedAt?: string };
+      params: Record<string, string>;
+    }) => {
+      const id = partId(params.id, k.word);
+      const stored = await getReadoutPart(kind, caller.teamId, id);
+      if (!stored) throw notFound();
+      const values = mergePatch(stored, body, k.input);
+      return written(await updateReadoutPart(kind, caller.teamId, id, values, body.updatedAt, caller.userId));
+    },
+    remove: async ({ caller, params }: { caller: Caller; params: Record<string, string> }) => {
       const id = partId(params.id, k.word);
       if (!(await deletePart(kind, caller.teamId, id, caller.userId))) throw notFound();
       return { deleted: true, id };
-    }),
+    },
   };
 }

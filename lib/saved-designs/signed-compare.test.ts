@@ -6,6 +6,7 @@
 import { describe, expect, it } from "vitest";
 import { fixtureView } from "@/lib/build-sheet/fixtures";
 import { evaluateCandidate, signedOutputEnds, type RequirementInput } from "@/lib/design";
+import { idealConverter } from "@/lib/design/test-helpers";
 import { bestIndexes } from "./compare";
 import { basisDiffers, basisLabel } from "./figure-basis";
 import { metricFields } from "./figures";
@@ -16,7 +17,8 @@ const pack: RequirementInput = {
   current: { min: "-30 A", max: "10 A" },
   supply: { voltage: "24 V", side: "low" },
   drop: { max: "60 mV" },
-  readout: { kind: "adc", bits: 14, fullScale: "2.5 V" },
+  // A converter with no error of its own, stated, so the hand figures below hold the stage's alone.
+  readout: { kind: "adc", bits: 14, fullScale: "2.5 V", ...idealConverter },
   accuracy: { percent: 5, bandMin: "3 A" },
   amplifier: { gains: [20, 50, 100], reference: { voltage: "1.8 V" } },
 };

@@ -1,3 +1,9 @@
-import { readoutCollectionRoutes } from "@/lib/library/readout-routes";
+import { apiRoute } from "@/lib/auth/gate";
+import { readoutPart } from "@/lib/library/readout-routes";
 
-export const { POST } = readoutCollectionRoutes("meters");
+const part = readoutPart("meters");
+
+export const POST = apiRoute(
+  { action: "library.edit", doing: "add parts to the library", body: part.input },
+  part.create,
+);

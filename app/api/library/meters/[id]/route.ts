@@ -1,3 +1,10 @@
-import { readoutItemRoutes } from "@/lib/library/readout-routes";
+import { apiRoute } from "@/lib/auth/gate";
+import { readoutPart } from "@/lib/library/readout-routes";
 
-export const { PATCH, DELETE } = readoutItemRoutes("meters");
+const part = readoutPart("meters");
+
+export const PATCH = apiRoute(
+  { action: "library.edit", doing: "edit the parts library", body: part.patch },
+  part.update,
+);
+export const DELETE = apiRoute({ action: "library.edit", doing: "remove parts from the library" }, part.remove);
