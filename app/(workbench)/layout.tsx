@@ -4,14 +4,13 @@ import { SiteHeader } from "@/components/shell/site-header";
 import { SignOutButton } from "@/components/shell/sign-out-button";
 import { TeamSwitcher } from "@/components/shell/team-switcher";
 import { Badge } from "@/components/ui/badge";
-import { listTeamsOf } from "@/db/queries/users";
-import { requirePageCaller } from "@/lib/auth/gate";
+import { pageCallerTeams, requirePageCaller } from "@/lib/auth/gate";
 
 export const dynamic = "force-dynamic";
 
 export default async function WorkbenchLayout({ children }: { children: ReactNode }) {
   const caller = await requirePageCaller();
-  const teams = await listTeamsOf(caller.userId);
+  const teams = await pageCallerTeams();
   return (
     <div className="flex min-h-screen flex-col">
       <SiteHeader

@@ -4,7 +4,7 @@ import { parseRequirementInput } from "@/lib/design/ambiguous-percent";
 import { evaluateDesign } from "@/lib/saved-designs/service";
 import { demoDesigns } from "../seed/designs";
 import { closeDb, getDb } from "../client";
-import { designRevisions, memberships, teams, users } from "../schema";
+import { designRevisions, memberships, reviews, teams, users } from "../schema";
 import { listTargetAudit } from "./audit";
 import {
   changeDesignStatus,
@@ -194,6 +194,42 @@ describe("design revisions", () => {
       [2, `batch b, edited ${suffix}`],
     ]);
     expect(await getDesignViews(["not-a-uuid", "also-not"], teamId)).toEqual([null, null]);
+  });
+
+  it("takes a revision's latest approval, read with the revisions, and ignores other verdicts", async () => {
+    const { id } = await newDesign(`approved twice ${suffix}`);
+    const db = await getDb();
+    // Written directly: the service lets one approval through per review round, but older data
+    // may hold two on a revision, and a comment on it is no approval.
+    await db.insert(reviews).values([
+      {
+        designId: id,
+        revision: 1,
+        authorId: ids.designer!,
+        verdict: "approve",
+        body: "",
+        createdAt: new Date("2026-01-02T00:00:00Z"),
+      },
+      {
+        designId: id,
+        revision: 1,
+        authorId: ids.reviewer!,
+        verdict: "approve",
+        body: "",
+        createdAt: new Date("2026-01-03T00:00:00Z"),
+      },
+      {
+        designId: id,
+        revision: 1,
+        authorId: ids.designer!,
+        verdict: "comment",
+        body: "",
+        createdAt: new Date("2026-01-04T00:00:00Z"),
+      },
+    ]);
+    const latest = { revision: 1, byId: ids.reviewer!, at: "2026-01-03T00:00:00.000Z" };
+    expect((await listRevisions(id))[0]?.approval).toMatchObject(latest);
+    expect((await getDesignWithHeads(id, teamId))?.heads[0]?.approval).toMatchObject(latest);
   });
 
   it("refuses a verdict on a design that is not in review", async () => {

@@ -207,32 +207,32 @@ export async function getDesign(designId: string, teamId: string) {
 
 export type ApprovalInfo = { revision: number; byName: string; byId: string; at: string };
 
-/** Approvals of a design, by revision (each approval belongs to the revision it was given on). */
-async function approvalsOf(designId: string): Promise<Map<number, ApprovalInfo>> {
-  return (await approvalsOfEach([designId])).get(designId) ?? new Map();
-}
+const approver = alias(users, "approver");
 
-/** Approvals of several designs in one read: by design, then by revision (the latest one given on it). */
-async function approvalsOfEach(designIds: string[]): Promise<Map<string, Map<number, ApprovalInfo>>> {
-  const db = await getDb();
-  const rows = await db
-    .select({
-      designId: reviews.designId,
-      revision: reviews.revision,
-      byName: users.name,
-      byId: users.id,
-      at: reviews.createdAt,
-    })
+/**
+ * The approval given on each revision row, joined in the same read as the revisions: the latest
+ * "approve" review on that design and revision (each approval belongs to the revision it was given
+ * on), or nulls. Uses the reviews (design, revision) index once per revision.
+ */
+const approvalOnRevision = (db: Awaited<ReturnType<typeof getDb>>) =>
+  db
+    .select({ byName: approver.name, byId: approver.id, at: reviews.createdAt })
     .from(reviews)
-    .innerJoin(users, eq(users.id, reviews.authorId))
-    .where(and(inArray(reviews.designId, designIds), eq(reviews.verdict, "approve")))
-    .orderBy(asc(reviews.createdAt));
-  const out = new Map<string, Map<number, ApprovalInfo>>(designIds.map((id) => [id, new Map()]));
-  for (const r of rows)
-    out
-      .get(r.designId)
-      ?.set(r.revision, { revision: r.revision, byName: r.byName, byId: r.byId, at: r.at.toISOString() });
-  return out;
+    .innerJoin(approver, eq(approver.id, reviews.authorId))
+    .where(
+      and(
+        eq(reviews.designId, designRevisions.designId),
+        eq(reviews.revision, designRevisions.revision),
+        eq(reviews.verdict, "approve"),
+      ),
+    )
+    .orderBy(desc(reviews.createdAt))
+    .limit(1)
+    .as("approval");
+
+/** The approval columns of a row read with approvalOnRevision, as the screens take it. */
+function approvalOf(revision: number, a: { byName: string; byId: string; at: Date } | null): ApprovalInfo | null {
+  return a ? { revision, byName: a.byName, byId: a.byId, at: a.at.toISOString() } : null;
 }
 
 /** A revision's head: what a list of revisions shows, without its requirement and figures. */
@@ -252,30 +252,32 @@ const revisionsOf = (designId: string, only?: number[]) =>
     ? and(eq(designRevisions.designId, designId), inArray(designRevisions.revision, only))
     : eq(designRevisions.designId, designId);
 
-/** Rows as the screens take them: ISO times, and the approval given on each revision, if any. */
-async function withApprovals<R extends { revision: number; createdAt: Date }>(designId: string, rows: R[]) {
-  const approvals = await approvalsOf(designId);
-  return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString(), approval: approvals.get(r.revision) ?? null }));
-}
-
 /**
  * Revisions of a design with their requirement and figures, oldest first; all of them, or only the
  * numbers in `only` (a diff needs two, not fifty). Assumes the design was scoped already.
  */
 export async function listRevisions(designId: string, only?: number[]) {
   const db = await getDb();
+  const approval = approvalOnRevision(db);
   const rows = await db
-    .select({ ...revisionHead, requirement: designRevisions.requirement, metrics: designRevisions.metrics })
+    .select({
+      ...revisionHead,
+      requirement: designRevisions.requirement,
+      metrics: designRevisions.metrics,
+      approval: { byName: approval.byName, byId: approval.byId, at: approval.at },
+    })
     .from(designRevisions)
     .innerJoin(users, eq(users.id, designRevisions.authorId))
+    .leftJoinLateral(approval, sql`true`)
     .where(revisionsOf(designId, only))
     .orderBy(asc(designRevisions.revision));
-  const kinds = rows.map(({ choice, plan, metrics, ...r }) => ({
+  return rows.map(({ choice, plan, metrics, approval: given, ...r }) => ({
     ...r,
     ...designKindOf({ choice, plan, metrics }),
     requirement: revisionRequirement(designId, r.revision, r.requirement),
+    createdAt: r.createdAt.toISOString(),
+    approval: approvalOf(r.revision, given),
   }));
-  return withApprovals(designId, kinds);
 }
 export type RevisionRecord = Awaited<ReturnType<typeof listRevisions>>[number];
 
@@ -288,27 +290,30 @@ export async function listRevisionHeads(designId: string) {
   return (await revisionHeadsOfEach([designId])).get(designId) ?? [];
 }
 
-/** The heads of several designs' revisions in two reads (heads, approvals) whatever their number, by design. */
+/** The heads of several designs' revisions, each with its approval, in one read whatever their number, by design. */
 async function revisionHeadsOfEach(designIds: string[]) {
   const db = await getDb();
-  const [rows, approvals] = await Promise.all([
-    db
-      .select({ ...revisionHead, designId: designRevisions.designId })
-      .from(designRevisions)
-      .innerJoin(users, eq(users.id, designRevisions.authorId))
-      .where(inArray(designRevisions.designId, designIds))
-      .orderBy(asc(designRevisions.designId), asc(designRevisions.revision)),
-    approvalsOfEach(designIds),
-  ]);
+  const approval = approvalOnRevision(db);
+  const rows = await db
+    .select({
+      ...revisionHead,
+      designId: designRevisions.designId,
+      approval: { byName: approval.byName, byId: approval.byId, at: approval.at },
+    })
+    .from(designRevisions)
+    .innerJoin(users, eq(users.id, designRevisions.authorId))
+    .leftJoinLateral(approval, sql`true`)
+    .where(inArray(designRevisions.designId, designIds))
+    .orderBy(asc(designRevisions.designId), asc(designRevisions.revision));
   // Exactly one of choice and plan is set (a check constraint says so).
-  const heads = rows.map(({ choice, plan, designId, ...r }) => ({
+  const heads = rows.map(({ choice, plan, designId, approval: given, ...r }) => ({
     designId,
     head: {
       ...(plan
         ? { ...r, kind: "plan" as const, choice: null, plan }
         : { ...r, kind: "pair" as const, choice: choice!, plan: null }),
       createdAt: r.createdAt.toISOString(),
-      approval: approvals.get(designId)?.get(r.revision) ?? null,
+      approval: approvalOf(r.revision, given),
     },
   }));
   const out = new Map(designIds.map((id) => [id, [] as (typeof heads)[number]["head"][]]));

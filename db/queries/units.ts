@@ -73,20 +73,29 @@ async function withReadings(
 
 /** The design's units, oldest first (the order they were built in), with their readings. */
 export async function listUnits(designId: string): Promise<StoredUnit[]> {
+  return (await listUnitsOfEach([designId])).get(designId) ?? [];
+}
+
+/** Several designs' units in one read (and one of their readings), by design, each oldest first. */
+export async function listUnitsOfEach(designIds: string[]): Promise<Map<string, StoredUnit[]>> {
+  const out = new Map<string, StoredUnit[]>(designIds.map((id) => [id, []]));
+  if (designIds.length === 0) return out;
   const db = await getDb();
   const rows = await db
     .select(unitColumns)
     .from(builtUnits)
     .innerJoin(users, eq(users.id, builtUnits.recordedBy))
-    .where(eq(builtUnits.designId, designId))
+    .where(inArray(builtUnits.designId, designIds))
     .orderBy(asc(builtUnits.builtOn), asc(builtUnits.createdAt), asc(builtUnits.serial));
   const readings = await withReadings(rows);
-  return rows.map((r) => ({
-    ...r,
-    createdAt: r.createdAt.toISOString(),
-    updatedAt: r.updatedAt.toISOString(),
-    readings: readings.get(r.id) ?? [],
-  }));
+  for (const r of rows)
+    out.get(r.designId)?.push({
+      ...r,
+      createdAt: r.createdAt.toISOString(),
+      updatedAt: r.updatedAt.toISOString(),
+      readings: readings.get(r.id) ?? [],
+    });
+  return out;
 }
 
 export async function getUnit(designId: string, unitId: string): Promise<StoredUnit | null> {

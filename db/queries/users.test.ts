@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { closeDb, getDb } from "../client";
 import { memberships, teams, users } from "../schema";
 import { listTeamAudit } from "./audit";
-import { changeMemberRole, findUserByEmail, getMember, listMembers } from "./users";
+import { changeMemberRole, findUserByEmail, getMember, getMemberWithTeams, listMembers, listTeamsOf } from "./users";
 
 let teamId = "";
 const ids: Record<string, string> = {};
@@ -28,6 +28,24 @@ beforeAll(async () => {
 afterAll(closeDb);
 
 describe("memberships", () => {
+  it("reads a member with their teams in one query as getMember and listTeamsOf do apart", async () => {
+    const db = await getDb();
+    const [second] = await db
+      .insert(teams)
+      .values({ name: `Second team ${suffix}` })
+      .returning();
+    await db.insert(memberships).values({ teamId: second!.id, userId: ids.designer!, role: "maker" });
+    const both = await getMemberWithTeams(ids.designer!, teamId);
+    const { teams: teamList, ...member } = both!;
+    expect(member).toEqual(await getMember(ids.designer!, teamId));
+    expect(teamList).toEqual(await listTeamsOf(ids.designer!));
+    expect(teamList.map((t) => [t.name, t.role])).toEqual([
+      [`Role test team ${suffix}`, "designer"],
+      [`Second team ${suffix}`, "maker"],
+    ]);
+    expect(await getMemberWithTeams(ids.owner!, second!.id)).toBeNull();
+  });
+
   it("finds a user by e-mail without regard to case", async () => {
     expect((await findUserByEmail(`OWNER-${suffix}@Test.Example`))?.id).toBe(ids.owner);
   });

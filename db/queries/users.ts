@@ -1,6 +1,7 @@
 import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import type { Db, Tx } from "../client";
 import { getDb } from "../client";
+import { alias } from "drizzle-orm/pg-core";
 import { memberships, teams, users, type Role } from "../schema";
 import { recordAudit } from "./audit";
 
@@ -42,6 +43,47 @@ export async function getMember(userId: string, teamId: string) {
       teamName: teams.name,
       role: memberships.role,
       sessionVersion: users.sessionVersion,
+    })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .innerJoin(teams, eq(teams.id, memberships.teamId))
+    .where(and(eq(memberships.userId, userId), eq(memberships.teamId, teamId)))
+    .limit(1);
+  return rows[0] ?? null;
+}
+
+/** A team the user belongs to, as the header's team switcher lists it. */
+export type TeamOfUser = { id: string; name: string; role: Role };
+
+/**
+ * getMember and listTeamsOf in one read, for a signed-in page (its header lists the teams): the
+ * member of `teamId`, with every team of the user in the order joined, or null if not a member.
+ */
+export async function getMemberWithTeams(userId: string, teamId: string) {
+  const db = await getDb();
+  const mine = alias(memberships, "mine");
+  const myTeam = alias(teams, "my_team");
+  const teamsOfUser = db
+    .select({
+      list: sql<
+        TeamOfUser[]
+      >`coalesce(json_agg(json_build_object('id', ${myTeam.id}, 'name', ${myTeam.name}, 'role', ${mine.role}) order by ${mine.createdAt}), '[]'::json)`.as(
+        "list",
+      ),
+    })
+    .from(mine)
+    .innerJoin(myTeam, eq(myTeam.id, mine.teamId))
+    .where(eq(mine.userId, memberships.userId));
+  const rows = await db
+    .select({
+      userId: users.id,
+      email: users.email,
+      name: users.name,
+      teamId: teams.id,
+      teamName: teams.name,
+      role: memberships.role,
+      sessionVersion: users.sessionVersion,
+      teams: sql<TeamOfUser[]>`(${teamsOfUser})`,
     })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))

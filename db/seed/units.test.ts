@@ -6,7 +6,7 @@ import { formatSI, nearestInSeries } from "@/lib/design";
 import { summarizeUnits } from "@/lib/built-units/judge";
 import { closeDb, getDb } from "../client";
 import { listDesigns, listRevisions } from "../queries/designs";
-import { listUnits } from "../queries/units";
+import { listUnits, listUnitsOfEach } from "../queries/units";
 import { teams } from "../schema";
 import { seedDemoIfEmpty } from "./index";
 import { DEMO_UNIT_COUNT } from "./units";
@@ -26,6 +26,12 @@ describe("demo units", () => {
     );
     const stored = await listUnits(pump.id);
     expect(stored).toHaveLength(DEMO_UNIT_COUNT);
+    // Read with other designs (the compare page's one read), each design keeps its own units, in order.
+    const other = (await listDesigns(team!.id)).find((d) => d.id !== pump.id)!;
+    const both = await listUnitsOfEach([other.id, pump.id]);
+    expect(both.get(pump.id)).toEqual(stored);
+    expect(both.get(other.id)).toEqual(await listUnits(other.id));
+    expect([...both.keys()]).toEqual([other.id, pump.id]);
     expect(new Set(stored.map((u) => u.revision))).toEqual(new Set([2]));
     expect(stored.every((u) => u.recordedByName === "Demo Maker")).toBe(true);
     const s = summarizeUnits(stored, revisions);

@@ -7,7 +7,7 @@ import { headers } from "next/headers";
 import { notFound, redirect } from "next/navigation";
 import { cache } from "react";
 import type { z } from "zod";
-import { getMember } from "@/db/queries/users";
+import { getMember, getMemberWithTeams, listTeamsOf, type TeamOfUser } from "@/db/queries/users";
 import type { Role } from "@/db/schema";
 import { HttpError, errorResponse, invalid, json } from "@/lib/http";
 import { readBodyText } from "@/lib/read-upload";
@@ -199,7 +199,29 @@ export function toErrorResponse(e: unknown): Response {
   return json({ message: "Something went wrong on the server; nothing was changed. The error has been logged." }, 500);
 }
 
-const pageCaller = cache(currentCaller);
+/**
+ * A signed-in page's caller with the caller's teams (the header lists them): for a session, the
+ * membership and the team list in one read; for a bearer token, as currentCaller, then the teams.
+ */
+async function currentPageCaller(): Promise<{ caller: Caller; teams: TeamOfUser[] } | null> {
+  if (bearerSecret((await headers()).get("authorization")) !== null) {
+    const caller = await currentCaller();
+    return caller && { caller, teams: await listTeamsOf(caller.userId) };
+  }
+  const session = (await getServerSession(authOptions)) as SessionShape;
+  if (!session?.userId || !session.teamId) return null;
+  const member = await getMemberWithTeams(session.userId, session.teamId);
+  if (!member || member.sessionVersion !== (session.sessionVersion ?? 0)) return null;
+  const { sessionVersion: _version, teams, ...caller } = member;
+  return { caller: { ...caller, via: "session", access: "write" }, teams };
+}
+
+const pageCaller = cache(currentPageCaller);
+
+/** The signed-in page caller's teams, from the same cached read as requirePageCaller (call that first). */
+export async function pageCallerTeams(): Promise<TeamOfUser[]> {
+  return (await pageCaller())?.teams ?? [];
+}
 
 /**
  * For signed-in pages: redirects to /sign-in when signed out, answers the not-found page to a
@@ -207,7 +229,7 @@ const pageCaller = cache(currentCaller);
  * a layout and its page share one session and membership read per request.
  */
 export const requirePageCaller = cache(async (next?: string, roles?: readonly Role[]): Promise<Caller> => {
-  const caller = await pageCaller();
+  const caller = (await pageCaller())?.caller;
   if (!caller) redirect(next ? `/sign-in?next=${encodeURIComponent(next)}` : "/sign-in");
   if (roles && !roles.includes(caller.role)) notFound();
   return caller;

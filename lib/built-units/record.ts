@@ -2,7 +2,7 @@
 // test points (or a 422 naming the reading), and the summary the routes and the page answer with.
 import "server-only";
 import { listRevisions } from "@/db/queries/designs";
-import { listUnits, type StoredReading, type UnitWrite } from "@/db/queries/units";
+import { listUnits, listUnitsOfEach, type StoredReading, type UnitWrite } from "@/db/queries/units";
 import type { Caller } from "@/lib/auth/gate";
 import { benchCheck, matchTestPoints, type BenchCheckRow } from "@/lib/design";
 import { HttpError, type FieldErrors } from "@/lib/http";
@@ -93,10 +93,18 @@ export function writeRefusal(result: Exclude<UnitWrite, { ok: true }>, field = "
 
 export type BuiltYield = { measuredYield: number | null; predictedYield: number | null; unitsBuilt: number };
 
-/** The yield figures the compare page shows beside a design's figures; null when no unit is recorded. */
-export async function builtYieldOf(designId: string): Promise<BuiltYield | null> {
-  const stored = await listUnits(designId);
-  if (stored.length === 0) return null;
-  const s = summarizeUnits(stored, await revisionBases(designId));
-  return { measuredYield: s.yield.measured, predictedYield: s.yield.predicted, unitsBuilt: s.yield.units };
+/**
+ * The yield figures the compare page shows beside each design's figures, in the order given; null
+ * where no unit is recorded. The designs' units in one read, revisions only where units are.
+ */
+export async function builtYieldsOf(designIds: string[]): Promise<(BuiltYield | null)[]> {
+  const units = await listUnitsOfEach(designIds);
+  return Promise.all(
+    designIds.map(async (id) => {
+      const stored = units.get(id) ?? [];
+      if (stored.length === 0) return null;
+      const s = summarizeUnits(stored, await revisionBases(id));
+      return { measuredYield: s.yield.measured, predictedYield: s.yield.predicted, unitsBuilt: s.yield.units };
+    }),
+  );
 }

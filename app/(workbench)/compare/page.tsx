@@ -7,7 +7,7 @@ import { getDesignViews } from "@/db/queries/designs";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
 import { designViewerFor, type DesignView } from "@/lib/design-view";
-import { builtYieldOf } from "@/lib/built-units/record";
+import { builtYieldsOf } from "@/lib/built-units/record";
 import { compareQuery } from "@/lib/saved-designs/compare";
 import { compareCurves } from "@/lib/saved-designs/compare-curves";
 
@@ -94,7 +94,7 @@ export default async function ComparePage({
       <CompareTable
         designs={designs}
         viewers={Object.fromEntries(designs.map((d) => [d.id, designViewerFor(caller, d)]))}
-        built={await Promise.all(designs.map((d) => builtYieldOf(d.id)))}
+        built={await builtYieldsOf(designs.map((d) => d.id))}
       />
     </div>
   );
