@@ -35,6 +35,13 @@ describe("parseRequirement: refusals land on the dotted field path", () => {
   it("non-finite values are refused", () => {
     expect(errorsOf({ ...base, current: { min: "3 uA", max: Infinity } })["current.max"]).toBeDefined();
     expect(errorsOf({ ...base, current: { min: NaN, max: "1 A" } })["current.min"]).toBeDefined();
+    // A size no shunt has (the fuzzer's −1e308 A once reached the netlist writer).
+    expect(errorsOf({ ...base, current: { min: -1e308, max: "1 A" } })["current.min"]).toEqual([
+      "Minimum current must be within ±100 kA",
+    ]);
+    expect(errorsOf({ ...base, current: { min: "3 uA", max: "1 MA" } })["current.max"]).toEqual([
+      "Maximum current must be within ±100 kA",
+    ]);
     expect(errorsOf({ ...base, drop: { max: "Infinity V" } })["drop.max"]).toBeDefined();
   });
   it("bits must be a whole number from 4 to 32", () => {

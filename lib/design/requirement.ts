@@ -111,19 +111,24 @@ const group = (what: string) => ({
     iss.input === undefined ? `${what} is required` : `${what}: expected an object`,
 });
 
+/** The largest current magnitude a requirement may state, A: far beyond any shunt this sizes. */
+export const MAX_CURRENT_A = 1e5;
+const withinCurrentLimit = (what: string) => (v: number) =>
+  Math.abs(v) <= MAX_CURRENT_A || `${what} must be within ±100 kA`;
+
 const baseSchema = z.object(
   {
     current: z.object(
       {
         // Below zero: a bidirectional span (API.md v2), read around amplifier.reference.
-        min: q(
-          "current",
-          "Minimum current",
-          (v) =>
-            v !== 0 ||
-            "Minimum current cannot be zero: give the smallest current to read, or a negative one for a bidirectional span",
+        min: q("current", "Minimum current", (v) =>
+          v === 0
+            ? "Minimum current cannot be zero: give the smallest current to read, or a negative one for a bidirectional span"
+            : withinCurrentLimit("Minimum current")(v),
         ),
-        max: q("current", "Maximum current", positive("Maximum current")),
+        max: q("current", "Maximum current", (v) =>
+          v > 0 ? withinCurrentLimit("Maximum current")(v) : positive("Maximum current")(v),
+        ),
         typical: quantity("current", "Typical current").optional(),
       },
       group("Current span (min and max)"),
