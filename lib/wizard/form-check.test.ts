@@ -43,4 +43,11 @@ describe("checkForm", () => {
     expect(structuredClone(r)).toEqual(r);
     expect(JSON.stringify(r)).not.toContain('"ref":{');
   });
+  it("words a list's bad entry once, quoting it, and nothing in the list's own words", async () => {
+    const r = await checkForm(form({ amplifier: { ...readableDefaults.amplifier, gains: [10, "abc"] } } as never));
+    if (r.ok) throw new Error("a gain of abc passed");
+    expect(errorText(r.errors, "amplifier.gains")).toBe(
+      "Gains swept: “abc” is not a number; give numbers separated by commas",
+    );
+  });
 });

@@ -39,9 +39,13 @@ export async function checkForm(values: WizardValues): Promise<FormCheck> {
         const n = node as { message?: unknown } & Record<string, unknown>;
         if (!n || typeof n !== "object") return;
         if (typeof n.message === "string") n.message = inWords(at, n.message, valueAt(values, at));
-        // A list carries its own message and one per bad entry: word them all.
+        // A list carries one message per bad entry, and react-hook-form may add the list's own under
+        // `root`: that one is the list's (its path is the list's), and says nothing an entry's
+        // message does not, so it goes when an entry has one.
+        const entries = Object.keys(n).filter((k) => /^\d+$/.test(k));
+        if (n.root && entries.some((k) => (n[k] as { message?: unknown } | undefined)?.message)) delete n.root;
         for (const [k, v] of Object.entries(n))
-          if (k !== "ref" && k !== "message" && k !== "type") walk(v, `${at}.${k}`);
+          if (k !== "ref" && k !== "message" && k !== "type") walk(v, k === "root" ? at : `${at}.${k}`);
       };
       walk(valueAt(errors, path), path);
     }
@@ -49,10 +53,8 @@ export async function checkForm(values: WizardValues): Promise<FormCheck> {
     // percent that reads two ways says so in place of any other message on its field.
     const ambiguous = ambiguousPercentErrors(values, "type");
     const far = { ...outOfRangeTyped(values), ...ambiguous };
-    for (const [path, msgs] of Object.entries(far)) {
-      if (valueAt(errors, path) && !ambiguous[path]) continue;
-      place(errors, path, msgs[0]!);
-    }
+    // The working range's words win over the schema's own limit on a value typed far out of range.
+    for (const [path, msgs] of Object.entries(far)) place(errors, path, msgs[0]!);
     return { ok: false, errors: errors as RhfErrors<WizardValues> };
   }
   const requirement = r.values as Requirement;

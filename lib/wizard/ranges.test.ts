@@ -18,9 +18,10 @@ describe("outOfRange", () => {
     expect(outOfRange(req({}))).toEqual({});
   });
   it("names the field and writes the value plainly", () => {
-    const e = outOfRange(req({ current: { min: "3 uA", max: 1e30 } }));
+    // Beyond the working range, inside the engine's own limit (±100 kA, lib/design/requirement.ts).
+    const e = outOfRange(req({ current: { min: "3 uA", max: 5e4 } }));
     expect(e["current.max"]?.[0]).toBe(
-      "Maximum current: 1 × 10^30 A is outside the range this workbench designs for (1 pA to 10 kA)",
+      "Maximum current: 50 kA is outside the range this workbench designs for (1 pA to 10 kA)",
     );
   });
   it("refuses a supply beyond the working range, with prefixes where they exist", () => {
