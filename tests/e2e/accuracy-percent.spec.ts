@@ -33,8 +33,10 @@ for (const [w, width] of Object.entries(widths)) {
     await checkScreen(page, `${shots}/accuracy-ambiguous-${w}.png`);
     expect(await shownText(page)).toContain(message);
     // The field and its message up close, as the full page is long.
+    // The full-page check scrolls; bring the message back into the viewport the clip is taken from.
+    await error.scrollIntoViewIfNeeded();
     const box = (await error.boundingBox())!;
-    const top = Math.max(0, box.y - 160);
+    const top = Math.min(Math.max(0, box.y - 160), 900 - 420);
     await page.screenshot({ path: `${shots}/accuracy-field-${w}.png`, clip: { x: 0, y: top, width, height: 420 } });
 
     await field(page, "Accuracy target").fill("0.02 %");
