@@ -31,7 +31,8 @@ requirement='{
   "supply":   { "voltage": "3.3 V", "side": "low" },
   "drop":     { "max": "100 mV" },
   "readout":  { "kind": "adc", "bits": 12, "fullScale": "2.5 V" },
-  "resolution": { "countsAtMin": 10 }
+  "resolution": { "countsAtMin": 10 },
+  "calibration": "one-point"
 }'
 
 solved="$(api POST /api/solve -H 'content-type: application/json' --data "$requirement")"
