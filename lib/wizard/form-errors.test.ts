@@ -27,4 +27,9 @@ describe("errorPaths", () => {
       } as never),
     ).toEqual(["current.max", "amplifier.gains"]);
   });
+  it("says a word in a list of numbers is not a number, from the list's stock message", () => {
+    expect(inWords("amplifier.gains", "Invalid input", [10, "abc"])).toBe(
+      "Gains swept: “abc” is not a number; give numbers separated by commas",
+    );
+  });
 });

@@ -68,6 +68,9 @@ export function inWords(path: string, message: string, typed?: unknown): string 
   // For a list, quote the entry at fault, not the whole list.
   const entry = Array.isArray(typed) ? typed.find((x) => typeof x !== "number") : typed;
   const shown = entry === undefined || entry === null || entry === "" ? "" : `“${String(entry)}” `;
+  // A list of numbers with a word in it: the list's own stock message, said of the word.
+  if (!m && Array.isArray(typed) && typed.some((x) => typeof x === "number") && typeof entry === "string")
+    return `${label}: ${shown}is not a number; give numbers separated by commas`;
   if (!m) return `${label}: ${shown}cannot be read as it stands`;
   if (m[1] === "number")
     return `${label}: ${shown}is not a number${listPath !== path ? "; give numbers separated by commas" : ""}`;

@@ -57,10 +57,10 @@ test("a maker types in a unit's readings, sees one out of band with its cause, a
   await expect(panel.getByText("39.75 mA is a current, not a voltage")).toBeVisible();
 
   // A unit offset the same few millivolts everywhere: out of band only at the minimum current, where
-  // the offset is a large share. The offset is a quarter beyond the band at Imin (the bands follow
+  // the offset is a large share. The offset is a twentieth beyond the band at Imin (the bands follow
   // the demo's stated parts), and the premise is checked against the design's own bands first.
   const halfBand = bench.map((b) => Math.min(b.maxV - b.expectedV, b.expectedV - b.minV));
-  const offsetV = Number((halfBand[0]! * 1.25).toFixed(4));
+  const offsetV = Number((halfBand[0]! * 1.05).toFixed(5));
   expect(halfBand[0]!, "the offset must fall outside the band at the minimum current").toBeLessThan(offsetV);
   for (const h of halfBand.slice(1)) expect(h, "and inside it at every other test point").toBeGreaterThan(offsetV);
   const typed = bench.map((b) => `${((b.expectedV + offsetV) * 1000).toFixed(2)} mV`);
