@@ -233,9 +233,9 @@ function WizardForm({
     (path: string) => {
       let node: unknown = touched;
       for (const k of path.split(".")) node = (node as Record<string, unknown> | undefined)?.[k];
-      return node ? engineErrorsFor(fieldErrors, path) : undefined;
+      return node ? engineErrorsFor(fieldErrors, path, getValues()) : undefined;
     },
-    [fieldErrors, touched],
+    [fieldErrors, touched, getValues],
   );
 
   const show = useCallback((to: number) => {

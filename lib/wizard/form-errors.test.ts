@@ -1,6 +1,6 @@
 // Stock schema messages are reworded in the field's own words (issue 12 item 7).
 import { describe, expect, it } from "vitest";
-import { errorPaths, inWords } from "./form-errors";
+import { engineErrorsFor, errorPaths, inWords } from "./form-errors";
 
 describe("inWords", () => {
   it("quotes the list entry at fault with the field's label", () => {
@@ -31,5 +31,12 @@ describe("errorPaths", () => {
     expect(inWords("amplifier.gains", "Invalid input", [10, "abc"])).toBe(
       "Gains swept: “abc” is not a number; give numbers separated by commas",
     );
+  });
+  it("quotes the typed entry in the live solve's message for a list", () => {
+    expect(
+      engineErrorsFor({ "amplifier.gains.1": ["Invalid input"] }, "amplifier.gains", {
+        amplifier: { gains: [10, "abc"] },
+      }),
+    ).toBe("Gains swept: “abc” is not a number; give numbers separated by commas");
   });
 });

@@ -27,10 +27,16 @@ export function errorText(errors: RhfErrors<FieldValues>, path: string): string 
 }
 
 /** Engine field errors (dotted) that fall inside one of the given field paths. */
-export function engineErrorsFor(fieldErrors: Record<string, string[]>, path: string): string | undefined {
+export function engineErrorsFor(
+  fieldErrors: Record<string, string[]>,
+  path: string,
+  /** The form's values, to quote what was typed (a list's entries are quoted from the list). */
+  values?: unknown,
+): string | undefined {
+  const typedAt = (k: string) => (values === undefined ? undefined : valueAt(values, k.replace(/\.\d+$/, "")));
   const msgs = Object.entries(fieldErrors)
     .filter(([k]) => k === path || k.startsWith(`${path}.`))
-    .flatMap(([k, v]) => v.map((m) => inWords(k, m)));
+    .flatMap(([k, v]) => v.map((m) => inWords(k, m, typedAt(k))));
   return msgs.length ? [...new Set(msgs)].join("; ") : undefined;
 }
 
