@@ -28,6 +28,17 @@ export async function firstMembership(userId: string) {
   return rows[0] ?? null;
 }
 
+/** What the gate reads of a member: identity, team, role and session version. */
+const memberColumns = {
+  userId: users.id,
+  email: users.email,
+  name: users.name,
+  teamId: teams.id,
+  teamName: teams.name,
+  role: memberships.role,
+  sessionVersion: users.sessionVersion,
+};
+
 /**
  * The caller as the database sees them now: identity, team, current role and session version (or null
  * if no longer a member).
@@ -35,15 +46,7 @@ export async function firstMembership(userId: string) {
 export async function getMember(userId: string, teamId: string) {
   const db = await getDb();
   const rows = await db
-    .select({
-      userId: users.id,
-      email: users.email,
-      name: users.name,
-      teamId: teams.id,
-      teamName: teams.name,
-      role: memberships.role,
-      sessionVersion: users.sessionVersion,
-    })
+    .select(memberColumns)
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .innerJoin(teams, eq(teams.id, memberships.teamId))
@@ -75,16 +78,7 @@ export async function getMemberWithTeams(userId: string, teamId: string) {
     .innerJoin(myTeam, eq(myTeam.id, mine.teamId))
     .where(eq(mine.userId, memberships.userId));
   const rows = await db
-    .select({
-      userId: users.id,
-      email: users.email,
-      name: users.name,
-      teamId: teams.id,
-      teamName: teams.name,
-      role: memberships.role,
-      sessionVersion: users.sessionVersion,
-      teams: sql<TeamOfUser[]>`(${teamsOfUser})`,
-    })
+    .select({ ...memberColumns, teams: sql<TeamOfUser[]>`(${teamsOfUser})` })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .innerJoin(teams, eq(teams.id, memberships.teamId))

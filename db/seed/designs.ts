@@ -22,6 +22,7 @@
 // - the bench adapter's handheld meter states ±(0.5 % of reading + 2 digits) on its 200 mV range,
 //   and the adapter is zeroed with no current before each session (one point).
 // Without them the engine reads each readout with its class's typical figures (DEFAULTS.md).
+import { demoLoggerReadout, demoPumpReadout } from "@/lib/design/demo-converters";
 import { planChoiceOf } from "@/lib/design/range-candidates";
 import { parseRequirement, solve, type Candidate, type PlanChoice, type RequirementInput } from "@/lib/design";
 import { saveNewDesign } from "@/lib/saved-designs/create";
@@ -30,17 +31,6 @@ import { evaluateDesign } from "@/lib/saved-designs/service";
 import { changeDesignStatus, createDesign, reviseDesign } from "../queries/designs";
 import { addReview } from "../queries/reviews";
 import type { DemoIds } from "./team";
-
-/** The logger's converter as its designer states it (both logger designs read it). */
-const loggerReadout = {
-  kind: "adc",
-  bits: 12,
-  fullScale: "2.5 V",
-  reference: { tolerance: "0.05 %", tempco: "10 ppm/K" },
-  offsetLsb: 2,
-  gainError: "0.1 %",
-  inlLsb: 1,
-} as const satisfies RequirementInput["readout"];
 
 type DemoDesign = {
   name: string;
@@ -61,9 +51,8 @@ export const demoDesigns: DemoDesign[] = [
       current: { min: "2 mA", max: "180 mA" },
       supply: { voltage: "3.0 V", side: "low" },
       drop: { max: "60 mV" },
-      readout: loggerReadout,
+      ...demoLoggerReadout,
       resolution: { countsAtMin: 10 },
-      calibration: "one-point",
     },
     pick: (front) => front[0],
     state: "approved",
@@ -75,17 +64,8 @@ export const demoDesigns: DemoDesign[] = [
       current: { min: "100 mA", max: "6 A" },
       supply: { voltage: "24 V", side: "high" },
       drop: { max: "150 mV" },
-      readout: {
-        kind: "adc",
-        bits: 12,
-        fullScale: "3.3 V",
-        reference: { tolerance: "0.1 %", tempco: "25 ppm/K" },
-        offsetLsb: 3,
-        gainError: "0.2 %",
-        inlLsb: 1.5,
-      },
+      ...demoPumpReadout,
       resolution: { countsAtMin: 10 },
-      calibration: "two-point",
       amplifier: { cmrrDb: 120 },
     },
     pick: (front) => front[0],
@@ -129,9 +109,8 @@ export const demoPlanDesign = {
     current: { min: "3 uA", max: "180 mA" },
     supply: { voltage: "3.0 V", side: "low" },
     drop: { max: "60 mV" },
-    readout: loggerReadout,
+    ...demoLoggerReadout,
     resolution: { countsAtMin: 10 },
-    calibration: "one-point",
   } satisfies RequirementInput,
   approvalNote:
     "Each range reads within its limits on its own span, the switch points overlap, and the comparator keeps the low ranges alive at 180 mA; approved for a first build.",

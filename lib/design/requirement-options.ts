@@ -5,6 +5,8 @@
 export const loadModels = ["constant-current", "resistive", "constant-power"] as const;
 export type LoadModel = (typeof loadModels)[number];
 
+import { demoLoggerReadout } from "./demo-converters";
+
 // The topologies live in ./topology (the parts library lists them too).
 export { topologies, topologyLabels, type Topology } from "./topology";
 
@@ -16,15 +18,6 @@ export const defaultRequirementInput = {
   current: { min: "3 uA", max: "180 mA" },
   supply: { voltage: "3.0 V", side: "low" },
   drop: { max: "60 mV" },
-  readout: {
-    kind: "adc",
-    bits: 12,
-    fullScale: "2.5 V",
-    reference: { tolerance: "0.05 %", tempco: "10 ppm/K" },
-    offsetLsb: 2,
-    gainError: "0.1 %",
-    inlLsb: 1,
-  },
+  ...demoLoggerReadout,
   resolution: { countsAtMin: 10 },
-  calibration: "one-point",
 } as const;

@@ -1,5 +1,6 @@
 // Test-only helper: parse a requirement or fail loudly.
 import { parseRequirement, type Requirement, type RequirementInput } from "./requirement";
+import { demoLoggerReadout } from "./demo-converters";
 import type { PlanProfileDesign } from "./plan-switching";
 
 export function req(input: RequirementInput): Requirement {
@@ -19,42 +20,8 @@ export const idealConverter = {
   inlLsb: 0,
 } as const;
 
-/**
- * The demo logger's converter as db/seed/designs.ts states it (an invented part of an ordinary
- * class: external 2.5 V reference ±0.05 %, 10 ppm/K; ±2 LSB offset, ±0.1 % gain error, ±1 LSB INL),
- * zeroed once at production test (a one-point calibration). db/seed/designs.test.ts checks the
- * seed states the same.
- */
-export const demoLoggerReadout = {
-  readout: {
-    kind: "adc",
-    bits: 12,
-    fullScale: "2.5 V",
-    reference: { tolerance: "0.05 %", tempco: "10 ppm/K" },
-    offsetLsb: 2,
-    gainError: "0.1 %",
-    inlLsb: 1,
-  },
-  calibration: "one-point",
-} as const satisfies Pick<RequirementInput, "readout" | "calibration">;
-
-/**
- * The demo pump controller's converter as db/seed/designs.ts states it (invented: reference ±0.1 %,
- * 25 ppm/K; ±3 LSB offset, ±0.2 % gain error, ±1.5 LSB INL at 12 bits on 3.3 V), calibrated at the
- * end of the line at zero and near full scale (two points).
- */
-export const demoPumpReadout = {
-  readout: {
-    kind: "adc",
-    bits: 12,
-    fullScale: "3.3 V",
-    reference: { tolerance: "0.1 %", tempco: "25 ppm/K" },
-    offsetLsb: 3,
-    gainError: "0.2 %",
-    inlLsb: 1.5,
-  },
-  calibration: "two-point",
-} as const satisfies Pick<RequirementInput, "readout" | "calibration">;
+// The demo designs' converters: one statement, shared with the seed and the wizard's start values.
+export { demoLoggerReadout, demoPumpReadout } from "./demo-converters";
 
 /** docs/model.md §6: the demo logger, 3 µA asleep to 180 mA transmitting, from a 3.0 V cell, 60 mV allowed. */
 export const demoLoggerInput = {
