@@ -3,7 +3,7 @@
 import { z } from "zod";
 import { roleSchema } from "@/lib/team-schemas";
 import { textField } from "@/lib/text-field";
-import { csvPartKinds } from "@/lib/library/schema";
+import { partKinds } from "@/lib/library/schema";
 import { verdictEnum } from "@/db/schema";
 
 const verdicts = verdictEnum.enumValues;
@@ -88,7 +88,9 @@ export const auditQuery = z.object({
     .default(200),
 });
 
-export const libraryKindSchema = z.enum(csvPartKinds, { error: 'kind: expected "amplifiers" or "shunts"' });
+export const libraryKindSchema = z.enum(partKinds, {
+  error: 'expected "amplifiers", "shunts", "adcs" or "meters"',
+});
 export const libraryExportQuery = z.object({ kind: libraryKindSchema });
 
 export const invitationBodySchema = z

@@ -17,6 +17,8 @@ const titles: Record<PartKind, string> = {
   adcs: "ADCs",
   meters: "Meter ranges",
 };
+/** In the page's order; a type import above, so the library's zod schemas stay off this page. */
+const kinds = Object.keys(titles) as PartKind[];
 
 type Notice = { tone: "good" | "bad"; text: string } | null;
 
@@ -234,16 +236,16 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
         <div className="flex flex-col gap-2">
           <h3 className="text-sm font-medium">Export</h3>
           <p className="text-xs text-ink-muted">
-            One row per part, SI units, the unit in each column name (offsetV, minOhms…). A file exported here imports
-            back unchanged.
+            One row per part in SI units. Amplifier and shunt columns carry the unit in their name (offsetV, minOhms…);
+            ADC and meter columns keep the readout&apos;s names (fullScale in volts, offsetLsb in steps of the
+            converter). A file exported here imports back unchanged.
           </p>
-          <div className="flex gap-2">
-            <a className={buttonClass("secondary")} href="/api/library/export?kind=amplifiers" download>
-              Amplifiers CSV
-            </a>
-            <a className={buttonClass("secondary")} href="/api/library/export?kind=shunts" download>
-              Shunt families CSV
-            </a>
+          <div className="flex flex-wrap gap-2">
+            {kinds.map((k) => (
+              <a key={k} className={buttonClass("secondary")} href={`/api/library/export?kind=${k}`} download>
+                {titles[k]} CSV
+              </a>
+            ))}
           </div>
         </div>
         {canEdit ? (
@@ -257,8 +259,11 @@ function ImportExport({ canEdit, onDone }: { canEdit: boolean; onDone: (message:
             <div className="grid grid-cols-1 items-end gap-2 sm:grid-cols-[10rem_minmax(0,1fr)]">
               <Field id="import-kind" label="The file holds">
                 <Select id="import-kind" value={kind} onChange={(e) => setKind(e.target.value as PartKind)}>
-                  <option value="amplifiers">Amplifiers</option>
-                  <option value="shunts">Shunt families</option>
+                  {kinds.map((k) => (
+                    <option key={k} value={k}>
+                      {titles[k]}
+                    </option>
+                  ))}
                 </Select>
               </Field>
               <Field id="import-file" label="CSV file">

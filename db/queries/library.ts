@@ -1,6 +1,13 @@
 // The team's parts library: amplifiers, shunt families, ADCs and meter ranges, scoped by team on every query.
 import { and, asc, eq, inArray } from "drizzle-orm";
-import type { AdcValues, AmplifierValues, MeterValues, PartKind, ShuntValues } from "@/lib/library/schema";
+import type {
+  AdcValues,
+  AmplifierValues,
+  ImportedParts,
+  MeterValues,
+  PartKind,
+  ShuntValues,
+} from "@/lib/library/schema";
 import { getDb, type Tx } from "../client";
 import {
   libraryAdcs,
@@ -362,12 +369,14 @@ export async function deletePart(kind: PartKind, teamId: string, id: string, act
 /** Imports parts in one transaction: a name already in the library is updated, a new one added. */
 export async function importParts(
   teamId: string,
-  parts: { kind: "amplifiers"; rows: AmplifierValues[] } | { kind: "shunts"; rows: ShuntValues[] },
+  parts: ImportedParts,
   actorId: string,
 ): Promise<{ created: number; updated: number }> {
   const db = await getDb();
   return db.transaction(async (tx) => {
-    const t = tables[parts.kind];
+    // One table per kind, all keyed (team, name); the rows passed their kind's schema. Typed as one
+    // of them for drizzle, as the readout routes do.
+    const t = tables[parts.kind] as typeof libraryAdcs;
     const names = parts.rows.map((r) => r.name);
     const existing = new Set(
       (
@@ -379,22 +388,11 @@ export async function importParts(
     );
     const now = new Date();
     for (const values of parts.rows) {
-      if (parts.kind === "amplifiers") {
-        const v = values as AmplifierValues;
-        await tx
-          .insert(libraryAmplifiers)
-          .values({ ...v, teamId })
-          .onConflictDoUpdate({
-            target: [libraryAmplifiers.teamId, libraryAmplifiers.name],
-            set: { ...v, updatedAt: now },
-          });
-      } else {
-        const v = values as ShuntValues;
-        await tx
-          .insert(libraryShunts)
-          .values({ ...v, teamId })
-          .onConflictDoUpdate({ target: [libraryShunts.teamId, libraryShunts.name], set: { ...v, updatedAt: now } });
-      }
+      const v = values as AdcValues;
+      await tx
+        .insert(t)
+        .values({ ...v, teamId })
+        .onConflictDoUpdate({ target: [t.teamId, t.name], set: { ...v, updatedAt: now } });
     }
     const updated = names.filter((n) => existing.has(n)).length;
     const result = { created: names.length - updated, updated };

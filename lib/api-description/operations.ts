@@ -465,7 +465,7 @@ export const operations: Operation[] = [
     path: "/api/library/import",
     summary: "Import parts from CSV, all or nothing",
     access: "library.edit",
-    multipart: { file: "the CSV", kind: "amplifiers or shunts" },
+    multipart: { file: "the CSV", kind: "amplifiers, shunts, adcs or meters" },
     ok: json(200, "what was added and updated", responses.libraryImported),
   },
   {

@@ -547,7 +547,7 @@ export const responses = {
   adc: adcPart,
   meter: meterPart,
   libraryImported: z.object({
-    kind: z.enum(["amplifiers", "shunts"]),
+    kind: z.enum(["amplifiers", "shunts", "adcs", "meters"]),
     fileName: z.string(),
     created: z.number().int(),
     updated: z.number().int(),

@@ -1,12 +1,12 @@
 import { describe, expect, it } from "vitest";
-import { demoAmplifiers, demoShunts } from "@/db/seed/library";
+import { demoAdcs, demoAmplifiers, demoMeters, demoShunts } from "@/db/seed/library";
 import { libraryToCsv, parseLibraryCsv } from "./csv";
-import { amplifierInput, shuntInput } from "./schema";
+import { adcInput, amplifierInput, meterInput, shuntInput } from "./schema";
 
 const ampHeader =
   "name,gainMode,gains,offsetV,offsetDriftVPerK,gainErrorFraction,gainDriftPerK,biasCurrentA,noiseDensityVPerRtHz,gbwHz,swingLowV,swingHighV,cmrrDb,supplyMinV,supplyMaxV,topology,commonModeMinV,commonModeMaxV";
 
-function refusal(kind: "amplifiers" | "shunts", text: string) {
+function refusal(kind: "amplifiers" | "shunts" | "adcs" | "meters", text: string) {
   const r = parseLibraryCsv(kind, text);
   if (r.ok) throw new Error("expected a refusal");
   return r.refusal;
@@ -108,5 +108,54 @@ describe("library CSV problems", () => {
     if (r.ok) return;
     expect(r.problems).toHaveLength(50);
     expect(r.stopped).toBe(true);
+  });
+});
+
+describe("library CSV of readouts", () => {
+  it("round-trips the demo ADCs and meter ranges, nested figures as dotted columns", () => {
+    const adcs = demoAdcs.map((a) => adcInput.parse(a));
+    const csv = libraryToCsv("adcs", adcs);
+    expect(csv.split("\n")[0]).toBe(
+      "name,bits,fullScale,sampleRateHz,reference.tolerance,reference.tempco,offsetLsb,gainError,inlLsb",
+    );
+    const back = parseLibraryCsv("adcs", csv);
+    expect(back.ok && back.parts.rows).toEqual(adcs);
+    const meters = demoMeters.map((m) => meterInput.parse(m));
+    const m = libraryToCsv("meters", meters);
+    expect(m.split("\n")[0]).toBe("name,fullScale,counts,accuracy.percentOfReading,accuracy.digits");
+    const mBack = parseLibraryCsv("meters", m);
+    expect(mBack.ok && mBack.parts.rows).toEqual(meters);
+  });
+
+  it("reads plain names with units in the header or the cell", () => {
+    const r = parseLibraryCsv(
+      "adcs",
+      "Name,Bits,Full scale [mV],Sample rate,Reference tolerance,Reference tempco,Offset,Gain error,INL\n" +
+        "Bench converter,14,2048,50 kHz,0.1 %,10 ppm/K,3,0.05 %,1.5\n",
+    );
+    expect(r.ok).toBe(true);
+    if (!r.ok || r.parts.kind !== "adcs") return;
+    expect(r.parts.rows[0]).toEqual({
+      name: "Bench converter",
+      bits: 14,
+      fullScale: 2.048,
+      sampleRateHz: 50_000,
+      reference: { tolerance: 0.001, tempco: 10e-6 },
+      offsetLsb: 3,
+      gainError: 0.0005,
+      inlLsb: 1.5,
+    });
+  });
+
+  it("names the row and the dotted column of a bad nested figure", () => {
+    const head = "name,fullScale,counts,accuracy.percentOfReading,accuracy.digits\n";
+    // The schema's own limit: a meter's accuracy below 50 % of reading.
+    expect(refusal("meters", `${head}M,200 mV,2000,60 %,2\n`).place).toEqual({
+      row: 1,
+      line: 2,
+      column: "accuracy.percentOfReading",
+    });
+    expect(refusal("meters", `${head}M,200 mV,2000.5,0.5 %,2\n`).message).toMatch(/Counts must be a whole number/);
+    expect(refusal("adcs", "name,bits\nA,12\n").message).toMatch(/"fullScale", .* are missing/);
   });
 });

@@ -13,17 +13,12 @@ import {
   unitScale,
   walkCsv,
 } from "@/lib/profile/csv";
-import {
-  amplifierInput,
-  shuntInput,
-  type AmplifierValues,
-  type CsvPartKind as PartKind,
-  type ShuntValues,
-} from "./schema";
+import { adcInput, amplifierInput, meterInput, shuntInput, type ImportedParts, type PartKind } from "./schema";
 
 type Cell = "text" | "number" | "list" | "quantityList" | "bool" | Dimension;
 
 type ColumnSpec = {
+  /** The API's field name; a dotted one (`reference.tolerance`) is a field of a nested object. */
   key: string;
   /** Other header names that mean this column (compared without case, spaces or dashes). */
   aliases: string[];
@@ -95,9 +90,71 @@ export const shuntColumns: ColumnSpec[] = [
   { key: "fourTerminal", aliases: ["4terminal", "kelvin"], cell: "bool", label: "4-terminal" },
 ];
 
-export const columnsOf: Record<PartKind, ColumnSpec[]> = { amplifiers: amplifierColumns, shunts: shuntColumns };
+// Readouts keep the requirement's readout names (API.md v2), so their full scale is volts without
+// a unit in the name, and offset, INL and digits are counts of the converter's or meter's own steps.
+export const adcColumns: ColumnSpec[] = [
+  { key: "name", aliases: [], cell: "text", label: "Name" },
+  { key: "bits", aliases: ["resolution"], cell: "number", label: "Resolution (bits)" },
+  { key: "fullScale", aliases: ["fullscalev", "range"], cell: "voltage", label: "Full scale" },
+  { key: "sampleRateHz", aliases: ["samplerate", "rate"], cell: "frequency", label: "Highest sample rate" },
+  {
+    key: "reference.tolerance",
+    aliases: ["reftolerance"],
+    cell: "fraction",
+    label: "Reference tolerance",
+  },
+  { key: "reference.tempco", aliases: ["reftempco"], cell: "tempco", label: "Reference tempco" },
+  { key: "offsetLsb", aliases: ["offset"], cell: "number", label: "Offset error (LSB)" },
+  { key: "gainError", aliases: [], cell: "fraction", label: "Gain error" },
+  { key: "inlLsb", aliases: ["inl"], cell: "number", label: "INL (LSB)" },
+];
 
-const kindWords: Record<PartKind, string> = { amplifiers: "amplifier", shunts: "shunt" };
+export const meterColumns: ColumnSpec[] = [
+  { key: "name", aliases: [], cell: "text", label: "Name" },
+  { key: "fullScale", aliases: ["fullscalev", "range"], cell: "voltage", label: "Range full scale" },
+  { key: "counts", aliases: [], cell: "number", label: "Counts" },
+  {
+    key: "accuracy.percentOfReading",
+    aliases: ["percentofreading", "ofreading"],
+    cell: "fraction",
+    label: "Accuracy, % of reading",
+  },
+  { key: "accuracy.digits", aliases: ["digits"], cell: "number", label: "Accuracy, digits" },
+];
+
+export const columnsOf: Record<PartKind, ColumnSpec[]> = {
+  amplifiers: amplifierColumns,
+  shunts: shuntColumns,
+  adcs: adcColumns,
+  meters: meterColumns,
+};
+
+const kindWords: Record<PartKind, string> = {
+  amplifiers: "amplifier",
+  shunts: "shunt",
+  adcs: "ADC",
+  meters: "meter range",
+};
+
+const schemaOf: Record<PartKind, z.ZodType> = {
+  amplifiers: amplifierInput,
+  shunts: shuntInput,
+  adcs: adcInput,
+  meters: meterInput,
+};
+
+/** Sets `values[a][b]` for the key "a.b" (one level, as the readouts nest). */
+function setField(values: Record<string, unknown>, key: string, value: unknown) {
+  const [outer, inner] = key.split(".") as [string, string | undefined];
+  if (inner === undefined) values[outer] = value;
+  else values[outer] = { ...((values[outer] as Record<string, unknown> | undefined) ?? {}), [inner]: value };
+}
+
+function getField(part: Readonly<Record<string, unknown>>, key: string): unknown {
+  const [outer, inner] = key.split(".") as [string, string | undefined];
+  const v = part[outer];
+  return inner === undefined ? v : (v as Record<string, unknown> | undefined)?.[inner];
+}
 
 type HeaderColumn = { spec: ColumnSpec; index: number; label: string; scale: number | null };
 
@@ -199,8 +256,6 @@ function readCell(col: HeaderColumn, raw: string): CellResult {
   }
 }
 
-export type ImportedParts = { kind: "amplifiers"; rows: AmplifierValues[] } | { kind: "shunts"; rows: ShuntValues[] };
-
 /** The most bad rows one refused import reports. */
 export const MAX_ROW_PROBLEMS = 50;
 
@@ -209,7 +264,7 @@ export function parseLibraryCsv(
   kind: PartKind,
   text: string,
 ): { ok: true; parts: ImportedParts } | { ok: false; refusal: CsvRefusal; problems?: CsvRefusal[]; stopped?: boolean } {
-  const schema: z.ZodType = kind === "amplifiers" ? amplifierInput : shuntInput;
+  const schema = schemaOf[kind];
   let header = null as HeaderColumn[] | null;
   const rows: unknown[] = [];
   const names = new Map<string, number>();
@@ -245,13 +300,13 @@ export function parseLibraryCsv(
       if (col.spec.optional && raw.trim() === "") continue;
       const r = readCell(col, raw);
       if (!r.ok) return new CsvRefusal(r.reason, { row, line, column: col.label });
-      values[col.spec.key] = r.value;
+      setField(values, col.spec.key, r.value);
     }
     const parsed = schema.safeParse(values);
     const nameColumn = header.find((c) => c.spec.key === "name")!.label;
     if (!parsed.success) {
       const issue = parsed.error.issues[0]!;
-      const key = String(issue.path[0] ?? "name");
+      const key = issue.path.length ? issue.path.map(String).join(".") : "name";
       return new CsvRefusal(issue.message, {
         row,
         line,
@@ -282,10 +337,8 @@ export function parseLibraryCsv(
       ),
     };
   if (rows.length === 0) return { ok: false, refusal: new CsvRefusal("the file has a header but no parts") };
-  return {
-    ok: true,
-    parts: kind === "amplifiers" ? { kind, rows: rows as AmplifierValues[] } : { kind, rows: rows as ShuntValues[] },
-  };
+  // The rows passed the kind's own schema above.
+  return { ok: true, parts: { kind, rows } as ImportedParts };
 }
 
 function cellValue(value: unknown): CsvCell {
@@ -303,7 +356,7 @@ export function libraryToCsv(kind: PartKind, parts: readonly Record<string, unkn
   const columns = columnsOf[kind].map((c) => c.key);
   return writeCsv(
     columns,
-    parts.map((p) => columns.map((k) => cellValue(p[k]))),
+    parts.map((p) => columns.map((k) => cellValue(getField(p, k)))),
     "\n",
   );
 }

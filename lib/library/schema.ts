@@ -228,6 +228,10 @@ export type MeterValues = z.output<typeof meterInput>;
 
 export type PartKind = "amplifiers" | "shunts" | "adcs" | "meters";
 export const partKinds = ["amplifiers", "shunts", "adcs", "meters"] as const;
-/** The kinds a CSV file holds (readouts are added and edited on the page or through the API). */
-export type CsvPartKind = "amplifiers" | "shunts";
-export const csvPartKinds = ["amplifiers", "shunts"] as const;
+
+/** A whole file's parts of one kind, each row checked against its kind's schema. */
+export type ImportedParts =
+  | { kind: "amplifiers"; rows: AmplifierValues[] }
+  | { kind: "shunts"; rows: ShuntValues[] }
+  | { kind: "adcs"; rows: AdcValues[] }
+  | { kind: "meters"; rows: MeterValues[] };

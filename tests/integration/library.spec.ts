@@ -130,8 +130,8 @@ test("CSV import is all or nothing and names the row and column", async () => {
   });
 });
 
-test("export round-trips through import", async () => {
-  for (const kind of ["amplifiers", "shunts"] as const) {
+test("export round-trips through import, readouts included", async () => {
+  for (const kind of ["amplifiers", "shunts", "adcs", "meters"] as const) {
     const before = await library();
     const res = await designer.get(`/api/library/export?kind=${kind}`);
     expect(res.status()).toBe(200);
@@ -147,7 +147,31 @@ test("export round-trips through import", async () => {
     expect(strip(after[kind])).toEqual(strip(before[kind]));
     expect(await (await designer.get(`/api/library/export?kind=${kind}`)).text()).toBe(csv);
   }
-  expect((await designer.get("/api/library/export?kind=resistors")).status()).toBe(422);
+  const wrongKind = await designer.get("/api/library/export?kind=resistors");
+  expect(wrongKind.status()).toBe(422);
+  expect(await wrongKind.json()).toMatchObject({
+    fieldErrors: { kind: ['expected "amplifiers", "shunts", "adcs" or "meters"'] },
+  });
+});
+
+test("an ADC file imports all or nothing, a bad figure named by row and dotted column", async () => {
+  const head = "name,bits,fullScale,sampleRateHz,reference.tolerance,reference.tempco,offsetLsb,gainError,inlLsb";
+  const good = `Import converter ${tag},14,2.048 V,50 kHz,0.1 %,10 ppm/K,3,0.05 %,1.5`;
+  const before = await library();
+  const bad = await importCsv(
+    designer,
+    "adcs",
+    [head, good, `Second ${tag},14,2.048 V,50 kHz,30 %,10 ppm/K,3,0.05 %,1`].join("\n"),
+  );
+  expect(bad.status()).toBe(422);
+  expect(await bad.json()).toMatchObject({ row: 2, line: 3, column: "reference.tolerance" });
+  expect((await library()).adcs).toEqual(before.adcs);
+  const ok = await importCsv(designer, "adcs", [head, good].join("\n"));
+  expect(ok.status(), await ok.text()).toBe(200);
+  expect(await ok.json()).toMatchObject({ kind: "adcs", created: 1, updated: 0 });
+  const added = (await library()).adcs.find((a) => a.name === `Import converter ${tag}`)!;
+  expect(added).toMatchObject({ bits: 14, fullScale: 2.048, sampleRateHz: 50_000, reference: { tolerance: 0.001 } });
+  expect((await designer.delete(`/api/library/adcs/${added.id}`)).status()).toBe(200);
 });
 
 test("ADCs and meter ranges: every member reads the demo ones under the readout's names", async () => {

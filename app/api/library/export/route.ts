@@ -3,7 +3,7 @@ import { apiRoute } from "@/lib/auth/gate";
 import { libraryToCsv } from "@/lib/library/csv";
 import { libraryExportQuery } from "@/lib/route-schemas";
 
-/** `?kind=amplifiers|shunts` → text/csv with the API's field names as the header. */
+/** `?kind=amplifiers|shunts|adcs|meters` → text/csv with the API's field names as the header. */
 export const GET = apiRoute(
   {
     action: "library.read",
@@ -12,7 +12,7 @@ export const GET = apiRoute(
   },
   async ({ caller, query }) => {
     const library = await listLibrary(caller.teamId);
-    const csv = libraryToCsv(query.kind, query.kind === "amplifiers" ? library.amplifiers : library.shunts);
+    const csv = libraryToCsv(query.kind, library[query.kind]);
     return new Response(csv, {
       headers: {
         "content-type": "text/csv; charset=utf-8",

@@ -9,7 +9,7 @@ import { libraryKindSchema } from "@/lib/route-schemas";
 const MAX_LIBRARY_CSV_BYTES = 2_000_000;
 
 /**
- * Imports a CSV of amplifiers or shunts, all or nothing: multipart with `file` and `kind`
+ * Imports a CSV of amplifiers, shunt families, ADCs or meter ranges, all or nothing: multipart with `file` and `kind`
  * (or `?kind=`). A part whose name is already in the library is updated; the rest are added.
  */
 export const POST = apiRoute(
@@ -20,8 +20,8 @@ export const POST = apiRoute(
       upload.fields.kind ?? new URL(request.url).searchParams.get("kind") ?? undefined,
     );
     if (!kind.success)
-      throw new HttpError(422, 'Say which list the file holds: kind "amplifiers" or "shunts".', {
-        kind: ['expected "amplifiers" or "shunts"'],
+      throw new HttpError(422, 'Say which list the file holds: kind "amplifiers", "shunts", "adcs" or "meters".', {
+        kind: ['expected "amplifiers", "shunts", "adcs" or "meters"'],
       });
     const parsed = parseLibraryCsv(kind.data, upload.text);
     if (!parsed.ok) {
