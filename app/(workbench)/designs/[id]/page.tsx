@@ -43,7 +43,8 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
     revisionChanges(design.id, ...firstPair),
     listReviews(design.id),
     listTargetAudit(caller.teamId, "design", design.id),
-    listLibrary(caller.teamId),
+    // Only a pair's parts are named from the library (a plan's build sheet lists its own).
+    design.kind === "pair" ? listLibrary(caller.teamId) : undefined,
   ]);
   const firstDiff = { a: firstPair[0], b: firstPair[1], changes };
   // The picker reads the team's designs itself when it is opened.
