@@ -187,7 +187,13 @@ export function CompareTable({
                     {d.project ?? "no project"} · revision {d.revision} · {d.authorName}
                   </span>
                   <StatusBadge status={d.status} />
-                  {viewers[d.id] && <CompareVerdict design={d} viewer={viewers[d.id]!} />}
+                  {viewers[d.id] && (
+                    // Only what the verdict buttons read: the whole design would ride along in the page's data.
+                    <CompareVerdict
+                      design={{ id: d.id, name: d.name, status: d.status, revision: d.revision, authorId: d.authorId }}
+                      viewer={viewers[d.id]!}
+                    />
+                  )}
                 </div>
               </th>
             ))}

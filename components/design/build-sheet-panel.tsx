@@ -1,6 +1,6 @@
 import type { PairDesignView as DesignView, DesignViewer } from "@/lib/design-view";
 import { designParts, type LibraryParts } from "@/lib/build-sheet/library-parts";
-import { pairBuildFigures } from "@/lib/saved-designs/pair-figures";
+import { pairBuildFigures } from "@/lib/saved-designs/saved-figures";
 import { BuildHeader, PartsTable } from "@/components/design/build-parts";
 
 /**

@@ -2,7 +2,7 @@
 // component: the engine works the figures out here and the browser gets them as data, so showing a
 // design downloads neither the engine nor its unit parser.
 import type { PairDesignView as DesignView } from "@/lib/design-view";
-import { savedPairStudy } from "@/lib/saved-designs/pair-figures";
+import { savedPairStudy } from "@/lib/saved-designs/saved-figures";
 import { CandidateStudyView } from "@/components/candidates/candidate-study-view";
 import { Panel } from "@/components/ui/panel";
 import { RequirementSummary } from "@/components/wizard/requirement-summary";

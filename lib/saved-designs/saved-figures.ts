@@ -1,12 +1,13 @@
-// The engine's figures of a saved pair that the design page shows, worked out once per revision:
-// they depend on the revision's requirement, choice and saved figures alone, and those never change
-// (lib/saved-designs/revision-memo.ts). What depends on anything else (the team's library, the
-// design's status) is worked out per request by the caller.
+// The engine's figures of a saved design that the design page shows, worked out once per revision:
+// they depend on the revision's requirement, choice (or plan) and saved figures alone, and those
+// never change (lib/saved-designs/revision-memo.ts). What depends on anything else (the team's
+// library, the design's status) is worked out per request by the caller.
 import type { CandidateDetail } from "@/lib/design";
 import { evaluateCandidate } from "@/lib/design/candidate";
 import { candidateStudy, type CandidateStudyFigures } from "@/lib/design/candidate-study";
 import { benchHowTo, benchRows, cautions, type BenchRow } from "@/lib/build-sheet/sheet-data";
-import type { PairDesignView } from "@/lib/design-view";
+import { savedPairVerdict, savedPlanVerdict, type SavedVerdict } from "@/lib/design/saved-verdict";
+import type { DesignView, PairDesignView } from "@/lib/design-view";
 import { RevisionMemo, revisionKey } from "./revision-memo";
 
 const studies = new RevisionMemo<CandidateStudyFigures>(500);
@@ -38,4 +39,15 @@ export function pairBuildFigures(design: PairDesignView): PairBuildFigures {
       warnings: cautions(design.requirement, metrics),
     };
   });
+}
+
+const verdicts = new RevisionMemo<SavedVerdict>(1000);
+
+/** Whether the saved figures still pass under today's model (the page says so at the top when not). */
+export function savedVerdictOf(design: DesignView): SavedVerdict {
+  return verdicts.get(revisionKey(design.id, design.revision), () =>
+    design.kind === "plan"
+      ? savedPlanVerdict(design.requirement, design.plan)
+      : savedPairVerdict(design.requirement, design.choice),
+  );
 }
