@@ -33,6 +33,21 @@ type DesignViewBase = {
   revisions: RevisionSummary[];
 };
 
+/**
+ * A design as the design page's client sections get it: without its list of revisions, which none
+ * of them reads (the history gets its own rows), so fifty revisions do not ride along in the page.
+ */
+export type ClientDesignView = DesignView extends infer D
+  ? D extends DesignView
+    ? Omit<D, "revisions">
+    : never
+  : never;
+
+export function clientDesignView(design: DesignView): ClientDesignView {
+  const { revisions: _kept, ...rest } = design;
+  return rest;
+}
+
 /** What the viewer may do with one design: booleans from the policy, computed on the server. */
 export type DesignViewer = {
   userId: string;

@@ -16,16 +16,19 @@ import { reverseFields, reverseFigures } from "@/lib/saved-designs/signed-compar
 import { CompareVerdict } from "./compare-verdict";
 import { seriesColours } from "./colours";
 
-type Row = { key: string; info: FieldInfo; values: unknown[] };
+/** A field across the designs: its values and each as shown (formatted once, read several times). */
+type Row = { key: string; info: FieldInfo; values: unknown[]; texts: string[] };
+
+const shown = (r: Omit<Row, "texts">): Row => ({ ...r, texts: r.values.map((v) => formatField(v, r.info)) });
 
 function rows(fields: Record<string, FieldInfo>, objects: unknown[]): Row[] {
   const flat = objects.map((o) => flatten(o));
   return Object.entries(fields)
     .filter(([path]) => flat.some((f) => f[path] !== undefined && f[path] !== null))
-    .map(([path, info]) => ({ key: path, info, values: flat.map((f) => f[path]) }));
+    .map(([path, info]) => shown({ key: path, info, values: flat.map((f) => f[path]) }));
 }
 
-const differs = (r: Row) => new Set(r.values.map((v) => formatField(v, r.info))).size > 1;
+const differs = (r: Row) => new Set(r.texts).size > 1;
 
 function SameRows({ list, columns }: { list: Row[]; columns: number }) {
   if (list.length === 0) return null;
@@ -40,7 +43,7 @@ function SameRows({ list, columns }: { list: Row[]; columns: number }) {
             {list.map((r) => (
               <div key={r.key} className="flex justify-between gap-2 border-b border-line py-0.5">
                 <dt className="text-ink-muted">{r.info.label}</dt>
-                <dd className="text-right num">{formatField(r.values[0], r.info)}</dd>
+                <dd className="text-right num">{r.texts[0]}</dd>
               </div>
             ))}
           </dl>
@@ -100,25 +103,28 @@ function Section({
                 </span>
               )}
             </th>
-            {r.values.map((v, i) => (
-              <td
-                key={i}
-                className={`px-3 py-1 text-right ${best.includes(i) ? "font-semibold text-good" : ""}`}
-                data-best={best.includes(i) || undefined}
-              >
-                {formatField(v, r.info)}
-                {apart.length > 0 && requirements?.[i] && againstOwnLimit(r.key, v, requirements[i]) && (
-                  <span className="block text-2xs text-ink-muted" data-testid="own-limit">
-                    {againstOwnLimit(r.key, v, requirements[i])}
-                  </span>
-                )}
-                {best.includes(i) && (
-                  <span className="ml-1 text-2xs" aria-label="best in this row">
-                    best
-                  </span>
-                )}
-              </td>
-            ))}
+            {r.values.map((v, i) => {
+              const own = apart.length > 0 && requirements?.[i] ? againstOwnLimit(r.key, v, requirements[i]) : null;
+              return (
+                <td
+                  key={i}
+                  className={`px-3 py-1 text-right ${best.includes(i) ? "font-semibold text-good" : ""}`}
+                  data-best={best.includes(i) || undefined}
+                >
+                  {r.texts[i]}
+                  {own && (
+                    <span className="block text-2xs text-ink-muted" data-testid="own-limit">
+                      {own}
+                    </span>
+                  )}
+                  {best.includes(i) && (
+                    <span className="ml-1 text-2xs" aria-label="best in this row">
+                      best
+                    </span>
+                  )}
+                </td>
+              );
+            })}
           </tr>
         );
       })}
@@ -181,7 +187,13 @@ export function CompareTable({
                     {d.project ?? "no project"} · revision {d.revision} · {d.authorName}
                   </span>
                   <StatusBadge status={d.status} />
-                  {viewers[d.id] && <CompareVerdict design={d} viewer={viewers[d.id]!} />}
+                  {viewers[d.id] && (
+                    // Only what the verdict buttons read: the whole design would ride along in the page's data.
+                    <CompareVerdict
+                      design={{ id: d.id, name: d.name, status: d.status, revision: d.revision, authorId: d.authorId }}
+                      viewer={viewers[d.id]!}
+                    />
+                  )}
                 </div>
               </th>
             ))}
@@ -197,7 +209,7 @@ export function CompareTable({
             mark={false}
           />
           {designs.some((d) => d.kind === "plan") && (
-            <Section title="Ranges (a single pair is one range)" list={planRows(designs)} mark={false} />
+            <Section title="Ranges (a single pair is one range)" list={planRows(designs).map(shown)} mark={false} />
           )}
           <Section
             title="Figures (from the engine, at each design's own requirement)"

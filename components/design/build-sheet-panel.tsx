@@ -1,7 +1,6 @@
 import type { PairDesignView as DesignView, DesignViewer } from "@/lib/design-view";
-import { benchHowTo, benchRows, cautions } from "@/lib/build-sheet/sheet-data";
 import { designParts, type LibraryParts } from "@/lib/build-sheet/library-parts";
-import { evaluateCandidate } from "@/lib/design/candidate";
+import { pairBuildFigures } from "@/lib/saved-designs/saved-figures";
 import { BuildHeader, PartsTable } from "@/components/design/build-parts";
 
 /**
@@ -20,11 +19,9 @@ export function BuildSheetPanel({
   library?: LibraryParts;
 }) {
   const maker = viewer.leadsWithBuildSheet;
-  const metrics = evaluateCandidate(design.requirement, design.choice);
+  // Worked out once per revision; only the library match is read afresh (the library changes).
+  const { metrics, bench, howTo, warnings } = pairBuildFigures(design);
   const parts = designParts(design.requirement, design.choice, metrics, library);
-  const bench = benchRows(design.requirement, design.choice);
-  const howTo = benchHowTo(design.requirement);
-  const warnings = cautions(design.requirement, metrics);
   return (
     <section
       aria-labelledby="build-sheet-heading"

@@ -2,13 +2,13 @@
 // component: the engine works the figures out here and the browser gets them as data, so showing a
 // design downloads neither the engine nor its unit parser.
 import type { PairDesignView as DesignView } from "@/lib/design-view";
-import { candidateStudy } from "@/lib/design/candidate-study";
+import { savedPairStudy } from "@/lib/saved-designs/saved-figures";
 import { CandidateStudyView } from "@/components/candidates/candidate-study-view";
 import { Panel } from "@/components/ui/panel";
 import { RequirementSummary } from "@/components/wizard/requirement-summary";
 
 export function DesignFigures({ design }: { design: DesignView }) {
-  const figures = candidateStudy(design.requirement, design.choice, { saved: design.metrics });
+  const figures = savedPairStudy(design); // once per revision: revisions never change
   return (
     <div className="flex flex-col gap-4" data-testid="design-figures">
       <Panel title={`Requirement (revision ${design.revision})`}>

@@ -8,7 +8,7 @@ import { UploadForm } from "@/components/profile/upload-form";
 import { Button } from "@/components/ui/button";
 import { Panel } from "@/components/ui/panel";
 import { formatSI } from "@/lib/design/format";
-import type { DesignView, DesignViewer } from "@/lib/design-view";
+import type { ClientDesignView, DesignViewer } from "@/lib/design-view";
 import { RangeSwatch } from "@/components/profile/range-bands";
 import type { ApiError, ProfileDetail, ProfileListItem, ProfilesBody } from "@/lib/api-description/responses";
 
@@ -23,7 +23,7 @@ async function getJson<T>(url: string): Promise<T> {
 }
 
 /** Current-profile uploads of a saved design: upload, the list, the summary and the chart. */
-export function ProfilesPanel({ design, viewer }: { design: DesignView; viewer: DesignViewer }) {
+export function ProfilesPanel({ design, viewer }: { design: ClientDesignView; viewer: DesignViewer }) {
   const canUpload = viewer.may.uploadProfiles;
   const qc = useQueryClient();
   const listKey = ["profiles", design.id];

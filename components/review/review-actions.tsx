@@ -4,13 +4,13 @@ import Link from "next/link";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Field, TextInput } from "@/components/ui/field";
-import type { DesignView, DesignViewer } from "@/lib/design-view";
+import type { ClientDesignView, DesignViewer } from "@/lib/design-view";
 import { SendMessage } from "./send-message";
 import { StatusBadge, statusExplained } from "./status-badge";
 import { useSend } from "./use-send";
 
 /** Status, submit, the verdict form and the rename form: each shown only to who may use it. */
-export function ReviewActions({ design, viewer }: { design: DesignView; viewer: DesignViewer }) {
+export function ReviewActions({ design, viewer }: { design: ClientDesignView; viewer: DesignViewer }) {
   const s = useSend();
   const [reason, setReason] = useState("");
   const [name, setName] = useState(design.name);

@@ -1,15 +1,33 @@
 import { Panel } from "@/components/ui/panel";
 import type { RevisionHead } from "@/db/queries/designs";
 import type { ReviewRecord } from "@/db/queries/reviews";
-import type { DesignView, DesignViewer } from "@/lib/design-view";
+import type { ClientDesignView, DesignViewer } from "@/lib/design-view";
 import { AuditTimeline, type AuditEntry } from "./audit-timeline";
 import { CommentThreads } from "./comment-thread";
 import { ReviewActions } from "./review-actions";
-import { RevisionHistory, type RevisionDiff } from "./revision-history";
+import { RevisionHistory, type HistoryRow, type RevisionDiff } from "./revision-history";
+
+/** A revision head as the history shows it (the client gets these fields only). */
+function historyRow(h: RevisionHead): HistoryRow {
+  const base = {
+    revision: h.revision,
+    authorName: h.authorName,
+    createdAt: h.createdAt,
+    approval: h.approval && { byName: h.approval.byName, at: h.approval.at },
+  };
+  return h.kind === "plan"
+    ? {
+        ...base,
+        kind: "plan",
+        choice: null,
+        plan: { ranges: h.plan.ranges.map(({ shuntOhms, gain }) => ({ shuntOhms, gain })) },
+      }
+    : { ...base, kind: "pair", choice: { shuntOhms: h.choice.shuntOhms, gain: h.choice.gain }, plan: null };
+}
 
 /** The design page's review section: status and verdicts, comments, revisions, timeline. */
 export function ReviewPanel(props: {
-  design: DesignView;
+  design: ClientDesignView;
   viewer: DesignViewer;
   revisions: RevisionHead[];
   firstDiff: RevisionDiff;
@@ -27,7 +45,11 @@ export function ReviewPanel(props: {
       </Panel>
       <div className="flex min-w-0 flex-col gap-4">
         <Panel title="Revisions">
-          <RevisionHistory designId={design.id} revisions={props.revisions} firstDiff={props.firstDiff} />
+          <RevisionHistory
+            designId={design.id}
+            revisions={props.revisions.map(historyRow)}
+            firstDiff={props.firstDiff}
+          />
         </Panel>
         <Panel title="Timeline">
           <AuditTimeline entries={props.audit} />

@@ -3,7 +3,6 @@
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { useState } from "react";
 import { Badge } from "@/components/ui/badge";
-import type { RevisionHead } from "@/db/queries/designs";
 import { formatSI } from "@/lib/design/format";
 import type { ApiError, RevisionPairDiff } from "@/lib/api-description/responses";
 import type { Change } from "@/lib/saved-designs/diff";
@@ -21,6 +20,20 @@ const groupNames = {
   plan: "Range plan",
   figures: "Figures",
 } as const;
+
+/**
+ * What a row of the history shows of a revision, and no more: a page lists fifty of them, and each
+ * revision's name, author id and full plan would ride along in the page's data for nothing.
+ */
+export type HistoryRow = {
+  revision: number;
+  authorName: string;
+  createdAt: string; // ISO
+  approval: { byName: string; at: string } | null;
+} & (
+  | { kind: "pair"; choice: { shuntOhms: number; gain: number }; plan: null }
+  | { kind: "plan"; choice: null; plan: { ranges: { shuntOhms: number; gain: number }[] } }
+);
 
 /** What changed from revision `a` to `b`, as the server worked it out (the page brings the first pair). */
 export type RevisionDiff = { a: number; b: number; changes: Change[] };
@@ -43,7 +56,7 @@ export function RevisionHistory({
   firstDiff,
 }: {
   designId: string;
-  revisions: RevisionHead[];
+  revisions: HistoryRow[];
   firstDiff: RevisionDiff;
 }) {
   const [a, setA] = useState(firstDiff.a);

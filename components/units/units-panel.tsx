@@ -10,7 +10,7 @@ import { Panel } from "@/components/ui/panel";
 import type { ApiError, UnitBody, UnitsSummaryBody } from "@/lib/api-description/responses";
 import { formatSI } from "@/lib/design/format";
 import type { PredictedPoint } from "@/lib/design/unit-prediction";
-import type { DesignView, DesignViewer } from "@/lib/design-view";
+import type { ClientDesignView, DesignViewer } from "@/lib/design-view";
 import { CalibrationReach } from "./calibration-reach";
 import { ImportUnitsForm } from "./import-units-form";
 import { RecordUnitForm } from "./record-unit-form";
@@ -26,7 +26,7 @@ async function getSummary(url: string): Promise<UnitsSummaryBody> {
 
 const share = (x: number | null) => (x === null ? "—" : `${String(Number((100 * x).toPrecision(3)))} %`);
 
-export function UnitsPanel({ design, viewer }: { design: DesignView; viewer: DesignViewer }) {
+export function UnitsPanel({ design, viewer }: { design: ClientDesignView; viewer: DesignViewer }) {
   const qc = useQueryClient();
   const base = `/api/designs/${design.id}/units`;
   const key = ["units", design.id];

@@ -1,5 +1,5 @@
 // The team's parts library: amplifiers, shunt families, ADCs and meter ranges, scoped by team on every query.
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, eq, getTableColumns, inArray, sql } from "drizzle-orm";
 import type {
   AdcValues,
   AmplifierValues,
@@ -47,23 +47,36 @@ const auditType: Record<PartKind, string> = {
 
 export type LibraryJson = { amplifiers: AmplifierJson[]; shunts: ShuntJson[]; adcs: AdcJson[]; meters: MeterJson[] };
 
+/**
+ * One table's rows of a team as a JSON array (keys as the schema names them, by name), for reading
+ * the four tables in one query: each query costs PGlite far more than the few rows a library holds.
+ */
+function teamRowsAsJson(table: (typeof tables)[PartKind]) {
+  const pairs = Object.entries(getTableColumns(table)).flatMap(([key, column]) => [sql.raw(`'${key}'`), column]);
+  return sql`(select coalesce(json_agg(json_build_object(${sql.join(pairs, sql`, `)}) order by ${table.name}), '[]'::json) from ${table} where ${table.teamId} = ${sql.placeholder("teamId")})`;
+}
+
+/** A row read as JSON, as drizzle reads it: timestamps to Date (the JSON has them as text). */
+const withDates = <T extends { createdAt: Date; updatedAt: Date }>(row: Json<T>): T =>
+  ({ ...row, createdAt: new Date(row.createdAt), updatedAt: new Date(row.updatedAt) }) as unknown as T;
+
 export async function listLibrary(teamId: string): Promise<LibraryJson> {
   const db = await getDb();
-  const [amplifiers, shunts, adcs, meters] = await Promise.all([
-    db
-      .select()
-      .from(libraryAmplifiers)
-      .where(eq(libraryAmplifiers.teamId, teamId))
-      .orderBy(asc(libraryAmplifiers.name)),
-    db.select().from(libraryShunts).where(eq(libraryShunts.teamId, teamId)).orderBy(asc(libraryShunts.name)),
-    db.select().from(libraryAdcs).where(eq(libraryAdcs.teamId, teamId)).orderBy(asc(libraryAdcs.name)),
-    db.select().from(libraryMeters).where(eq(libraryMeters.teamId, teamId)).orderBy(asc(libraryMeters.name)),
-  ]);
+  const [row] = await db
+    .select({
+      amplifiers: sql<Json<LibraryAmplifier>[]>`${teamRowsAsJson(libraryAmplifiers)}`,
+      shunts: sql<Json<LibraryShunt>[]>`${teamRowsAsJson(libraryShunts)}`,
+      adcs: sql<Json<LibraryAdc>[]>`${teamRowsAsJson(libraryAdcs)}`,
+      meters: sql<Json<LibraryMeter>[]>`${teamRowsAsJson(libraryMeters)}`,
+    })
+    .from(sql`(select 1) as one`)
+    .prepare("list_library")
+    .execute({ teamId });
   return {
-    amplifiers: amplifiers.map(toJson),
-    shunts: shunts.map(toJson),
-    adcs: adcs.map(toJson),
-    meters: meters.map(toJson),
+    amplifiers: row!.amplifiers.map((r) => toJson(withDates<LibraryAmplifier>(r))),
+    shunts: row!.shunts.map((r) => toJson(withDates<LibraryShunt>(r))),
+    adcs: row!.adcs.map((r) => toJson(withDates<LibraryAdc>(r))),
+    meters: row!.meters.map((r) => toJson(withDates<LibraryMeter>(r))),
   };
 }
 

@@ -2,7 +2,6 @@
 // it reads the session, re-reads the caller's membership (the role lives only there),
 // checks the role, and parses the input with zod.
 import "server-only";
-import { getServerSession } from "next-auth";
 import { headers } from "next/headers";
 import { notFound, redirect } from "next/navigation";
 import { cache } from "react";
@@ -12,7 +11,7 @@ import type { Role } from "@/db/schema";
 import { HttpError, errorResponse, invalid, json } from "@/lib/http";
 import { readBodyText } from "@/lib/read-upload";
 import { assertSameOrigin } from "./same-origin";
-import { authOptions } from "./options";
+import { sessionClaims } from "./session-claims";
 import { bearerSecret, callerFromToken } from "./tokens";
 import { can, describeRoles, doingOf, rolesFor, type Action, type ResourceArg } from "./policy";
 
@@ -29,8 +28,6 @@ export type Caller = {
   access: "read" | "write";
 };
 
-type SessionShape = { userId?: string; teamId?: string; sessionVersion?: number } | null;
-
 /**
  * The caller: the owner of a bearer token (lib/auth/tokens.ts: 401 when the token is not valid),
  * else the signed-in session's member, else null (also when the session was ended: sign-out,
@@ -42,7 +39,7 @@ export async function currentCaller(): Promise<Caller | null> {
     const { tokenId: _tokenId, ...caller } = await callerFromToken(bearer);
     return caller;
   }
-  const session = (await getServerSession(authOptions)) as SessionShape;
+  const session = await sessionClaims();
   if (!session?.userId || !session.teamId) return null;
   const member = await getMember(session.userId, session.teamId);
   if (!member || member.sessionVersion !== (session.sessionVersion ?? 0)) return null;
@@ -208,7 +205,7 @@ async function currentPageCaller(): Promise<{ caller: Caller; teams: TeamOfUser[
     const caller = await currentCaller();
     return caller && { caller, teams: await listTeamsOf(caller.userId) };
   }
-  const session = (await getServerSession(authOptions)) as SessionShape;
+  const session = await sessionClaims();
   if (!session?.userId || !session.teamId) return null;
   const member = await getMemberWithTeams(session.userId, session.teamId);
   if (!member || member.sessionVersion !== (session.sessionVersion ?? 0)) return null;

@@ -70,10 +70,22 @@ export const figureBasis: Record<string, string[]> = {
   reverseDissipationW: ["current.min"],
 };
 
+/**
+ * A requirement flattened to dotted paths, once per requirement object: the compare table asks for
+ * every figure row, and a saved revision's parsed requirement is one object kept for the revision.
+ */
+const flattened = new WeakMap<Requirement, Record<string, unknown>>();
+function flatRequirement(req: Requirement): Record<string, unknown> {
+  let flat = flattened.get(req);
+  if (!flat) flattened.set(req, (flat = flatten(req)));
+  return flat;
+}
+
 /** The requirement fields, among a figure's basis, on which the designs differ (empty: comparable). */
 export function basisDiffers(figure: string, requirements: Requirement[]): string[] {
   const basis = figureBasis[figure] ?? [];
-  const flat = requirements.map((r) => flatten(r));
+  if (basis.length === 0) return [];
+  const flat = requirements.map(flatRequirement);
   const valueOf = (path: string, k: number) => derivedBasis[path]?.of(requirements[k]!) ?? flat[k]![path] ?? null;
   return basis.filter((path) => new Set(flat.map((_, k) => JSON.stringify(valueOf(path, k)))).size > 1);
 }

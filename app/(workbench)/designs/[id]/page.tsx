@@ -17,11 +17,11 @@ import { isUuid } from "@/lib/ids";
 import { listLibrary } from "@/db/queries/library";
 import { listReviews } from "@/db/queries/reviews";
 import { formatSI } from "@/lib/design/format";
-import { savedPairVerdict, savedPlanVerdict } from "@/lib/design/saved-verdict";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
-import { designViewerFor } from "@/lib/design-view";
+import { clientDesignView, designViewerFor } from "@/lib/design-view";
 import { revisionChanges } from "@/lib/saved-designs/revision-changes";
+import { savedVerdictOf } from "@/lib/saved-designs/saved-figures";
 import { formatWhen } from "@/lib/saved-designs/when";
 
 export const metadata: Metadata = { title: "Design" };
@@ -43,14 +43,17 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
     revisionChanges(design.id, ...firstPair),
     listReviews(design.id),
     listTargetAudit(caller.teamId, "design", design.id),
-    listLibrary(caller.teamId),
+    // Only a pair's parts are named from the library (a plan's build sheet lists its own).
+    design.kind === "pair" ? listLibrary(caller.teamId) : undefined,
   ]);
   const firstDiff = { a: firstPair[0], b: firstPair[1], changes };
+  // One object for every client section (sent once in the page's data), without the revision list.
+  const forClient = clientDesignView(design);
   // The picker reads the team's designs itself when it is opened.
   const picker = <ComparePicker current={{ id: design.id, name: design.name }} />;
   const review = (
     <ReviewPanel
-      design={design}
+      design={forClient}
       viewer={viewer}
       revisions={revisions}
       firstDiff={firstDiff}
@@ -59,10 +62,7 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
     />
   );
   // The saved figures are the ones it was approved on; today's model may no longer pass them.
-  const verdict =
-    design.kind === "plan"
-      ? savedPlanVerdict(design.requirement, design.plan)
-      : savedPairVerdict(design.requirement, design.choice);
+  const verdict = savedVerdictOf(design);
   const worstDropV =
     design.kind === "plan" ? Math.max(...design.metrics.ranges.map((r) => r.worstBurdenV)) : design.metrics.burdenV;
   return (
@@ -135,19 +135,19 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
           </p>
           {review}
           {!viewer.leadsWithBuildSheet && <PlanBuildPanel design={design} viewer={viewer} />}
-          <ProfilesPanel design={design} viewer={viewer} />
+          <ProfilesPanel design={forClient} viewer={viewer} />
         </>
       ) : (
         <>
           {/* A maker comes to build: the download, parts list and bench check lead the page. */}
           {viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} library={library} />}
-          {viewer.leadsWithBuildSheet && <UnitsPanel design={design} viewer={viewer} />}
+          {viewer.leadsWithBuildSheet && <UnitsPanel design={forClient} viewer={viewer} />}
           {picker}
           <DesignFigures design={design} />
           {review}
           {!viewer.leadsWithBuildSheet && <BuildSheetPanel design={design} viewer={viewer} library={library} />}
-          <ProfilesPanel design={design} viewer={viewer} />
-          {!viewer.leadsWithBuildSheet && <UnitsPanel design={design} viewer={viewer} />}
+          <ProfilesPanel design={forClient} viewer={viewer} />
+          {!viewer.leadsWithBuildSheet && <UnitsPanel design={forClient} viewer={viewer} />}
         </>
       )}
     </div>
