@@ -4,7 +4,7 @@
 // comes back exactly where the designer left it.
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useForm, type Resolver } from "react-hook-form";
-import type { Requirement } from "@/lib/design/requirement";
+import type { FieldErrors, Requirement } from "@/lib/design/requirement";
 import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { Choice } from "@/lib/design/types";
 import { candidateKey } from "@/lib/wizard/candidate-key";
@@ -79,6 +79,8 @@ const inWorker: Resolver<WizardValues, unknown, Requirement> = async (values) =>
   const r = await check({ kind: "form", values });
   return r.ok ? { values: r.requirement, errors: {} } : { values: {}, errors: r.errors };
 };
+
+const noErrors: FieldErrors = {};
 
 export function Wizard({ canSave, revise }: { canSave: boolean; revise?: ReviseTarget }) {
   const [draft, setDraft] = useState<Draft | null>(null);
@@ -224,10 +226,8 @@ function WizardForm({
     };
   }, [watch, persist]);
 
-  const fieldErrors = useMemo(
-    () => (solver.state.status === "invalid" ? solver.state.fieldErrors : {}),
-    [solver.state],
-  );
+  // One empty object while the form is valid: a new one per solve would rebuild every step.
+  const fieldErrors = solver.state.status === "invalid" ? solver.state.fieldErrors : noErrors;
   const touched = formState.touchedFields as Record<string, unknown>;
   const live = useCallback(
     (path: string) => {
@@ -321,6 +321,9 @@ function WizardForm({
     // eslint-disable-next-line react-hooks/exhaustive-deps
     [live, dropMode, gainMode, partName],
   );
+
+  const onSaved = useCallback(() => clearDraft(storageKey), [storageKey]);
+  const revising = useMemo(() => (revise ? { id: revise.id, revision: revise.revision } : undefined), [revise]);
 
   return (
     <FormProvider {...methods}>
@@ -447,8 +450,8 @@ function WizardForm({
           setName={setName}
           project={project}
           setProject={setProject}
-          onSaved={() => clearDraft(storageKey)}
-          revise={revise ? { id: revise.id, revision: revise.revision } : undefined}
+          onSaved={onSaved}
+          revise={revising}
         />
       </div>
     </FormProvider>
