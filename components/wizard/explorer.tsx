@@ -31,6 +31,12 @@ import { SweepProgress } from "./sweep-progress";
 const pairText = (c: { shuntOhms: number; gain: number }) =>
   `${formatSI(c.shuntOhms, "Ω")} × ${Number(c.gain.toPrecision(4))}`;
 
+/**
+ * The panels below the chart skip layout and paint while off screen (they keep their last size as
+ * a placeholder), so a solve redraws the chart without laying out and painting the whole page.
+ */
+const skipOffscreen = "[content-visibility:auto] [contain-intrinsic-size:auto_600px]";
+
 const decades = [
   { label: "1 mV per mA", vPerA: 1 },
   { label: "1 mV per µA", vPerA: 1e3 },
@@ -488,11 +494,11 @@ const Below = memo(function Below({
   }, [shown]);
   return (
     <>
-      <Panel title="Why pairs were refused">
+      <Panel title="Why pairs were refused" className={skipOffscreen}>
         <Rejections rejected={result.rejected} evaluated={result.evaluated} feasibleCount={result.feasibleCount} />
       </Panel>
 
-      <Panel title="Candidate table">
+      <Panel title="Candidate table" className={skipOffscreen}>
         <CandidateTable
           candidates={listed}
           selected={selected}
@@ -507,7 +513,11 @@ const Below = memo(function Below({
         <p className="mt-2 text-2xs text-ink-faint">{rankingInWords(result)}</p>
       </Panel>
 
-      {choice && <CandidateStudy req={req} choice={choice} pinned={pinnedChoices} />}
+      {choice && (
+        <div className={skipOffscreen}>
+          <CandidateStudy req={req} choice={choice} pinned={pinnedChoices} />
+        </div>
+      )}
     </>
   );
 });
@@ -543,7 +553,7 @@ const SaveSection = memo(function SaveSection({
   onSaved: () => void;
 }) {
   return (
-    <Panel title={revise ? `Save revision ${revise.revision + 1}` : "Save"}>
+    <Panel title={revise ? `Save revision ${revise.revision + 1}` : "Save"} className={skipOffscreen}>
       <DefaultsSummary requirement={view.requirement} groups={view.differences} />
       <div className="mt-3" />
       <SavePanel
