@@ -43,7 +43,8 @@ const decades = [
   { label: "1 mV per nA", vPerA: 1e6 },
 ];
 
-export function Explorer({
+/** Memoised: the form's own re-renders (its checks, touched fields) leave the results alone. */
+export const Explorer = memo(function Explorer({
   solver,
   headingRef,
   selected: selectedState,
@@ -331,7 +332,7 @@ export function Explorer({
       )}
     </div>
   );
-}
+});
 
 /** Everything drawn from one solve; memoised so busy flags and typing elsewhere do not redraw the charts. */
 const Results = memo(function Results({
