@@ -359,10 +359,11 @@ const Results = memo(function Results({
   const feasibleListed = result.candidates.filter((c) => c.feasible).length;
   // What lies below the chart follows a deferred copy of the solve (see Below).
   const later = useDeferredValue(shown);
-  // A new selection (the ranking's pick after a solve, or a click) reaches the table and the study
-  // in the same deferred pass: the chart marks it first.
+  // A new selection (the ranking's pick after a solve, or a click) and the new ranking reach the
+  // table and the study in the same deferred pass: the chart marks them first.
   const laterSelected = useDeferredValue(selected);
   const laterPinned = useDeferredValue(pinned);
+  const laterRecommended = useDeferredValue(recommendedKey);
   return (
     <>
       {req.readout.kind === "meter" && (
@@ -444,7 +445,7 @@ const Results = memo(function Results({
       <Below
         shown={later}
         selected={laterSelected}
-        recommendedKey={recommendedKey}
+        recommendedKey={laterRecommended}
         setSelected={setSelected}
         pinned={laterPinned}
         setPinned={setPinned}
