@@ -143,6 +143,7 @@ function WizardForm({
   const [dropMode, setDropMode] = useState(initial.dropMode);
   const [gainMode, setGainMode] = useState(initial.gainMode);
   const [partName, setPartName] = useState(initial.partName);
+  const [readoutPart, setReadoutPart] = useState(initial.readoutPart ?? null);
   const [selected, setSelected] = useState<string | null>(initial.selected);
   const [chosen, setChosen] = useState(initial.chosen ?? false);
   const [pinned, setPinned] = useState<string[]>(initial.pinned);
@@ -186,6 +187,7 @@ function WizardForm({
           dropMode,
           gainMode,
           partName,
+          readoutPart,
           selected,
           chosen,
           pinned,
@@ -203,6 +205,7 @@ function WizardForm({
       dropMode,
       gainMode,
       partName,
+      readoutPart,
       selected,
       chosen,
       pinned,
@@ -304,7 +307,7 @@ function WizardForm({
     () => ({
       span: <SpanStep live={live} />,
       supply: <SupplyStep live={live} dropMode={dropMode} setDropMode={switchDropMode} />,
-      readout: <ReadoutStep live={live} />,
+      readout: <ReadoutStep live={live} readoutPart={readoutPart} setReadoutPart={setReadoutPart} />,
       shunt: <ShuntStep live={live} />,
       amplifier: (
         <AmplifierStep
@@ -319,7 +322,7 @@ function WizardForm({
     }),
     // switchDropMode reads the form when called; it need not rebuild the steps.
     // eslint-disable-next-line react-hooks/exhaustive-deps
-    [live, dropMode, gainMode, partName],
+    [live, dropMode, gainMode, partName, readoutPart],
   );
 
   const onSaved = useCallback(() => clearDraft(storageKey), [storageKey]);
