@@ -31,12 +31,6 @@ import { SweepProgress } from "./sweep-progress";
 const pairText = (c: { shuntOhms: number; gain: number }) =>
   `${formatSI(c.shuntOhms, "Ω")} × ${Number(c.gain.toPrecision(4))}`;
 
-/**
- * The panels below the chart skip layout and paint while off screen (they keep their last size as
- * a placeholder), so a solve redraws the chart without laying out and painting the whole page.
- */
-const skipOffscreen = "[content-visibility:auto] [contain-intrinsic-size:auto_600px]";
-
 const decades = [
   { label: "1 mV per mA", vPerA: 1 },
   { label: "1 mV per µA", vPerA: 1e3 },
@@ -496,11 +490,11 @@ const Below = memo(function Below({
   }, [shown]);
   return (
     <>
-      <Panel title="Why pairs were refused" className={skipOffscreen}>
+      <Panel title="Why pairs were refused">
         <Rejections rejected={result.rejected} evaluated={result.evaluated} feasibleCount={result.feasibleCount} />
       </Panel>
 
-      <Panel title="Candidate table" className={skipOffscreen}>
+      <Panel title="Candidate table">
         <CandidateTable
           candidates={listed}
           selected={selected}
@@ -516,7 +510,7 @@ const Below = memo(function Below({
       </Panel>
 
       {choice && (
-        <div className={skipOffscreen}>
+        <div>
           <CandidateStudy req={req} choice={choice} pinned={pinnedChoices} />
         </div>
       )}
@@ -555,7 +549,7 @@ const SaveSection = memo(function SaveSection({
   onSaved: () => void;
 }) {
   return (
-    <Panel title={revise ? `Save revision ${revise.revision + 1}` : "Save"} className={skipOffscreen}>
+    <Panel title={revise ? `Save revision ${revise.revision + 1}` : "Save"}>
       <DefaultsSummary requirement={view.requirement} groups={view.differences} />
       <div className="mt-3" />
       <SavePanel
