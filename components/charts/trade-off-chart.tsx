@@ -56,7 +56,9 @@ export function TradeOffChart({
 
   return (
     <div>
-      <div ref={ref} className="w-full" style={{ height: HEIGHT }} data-testid="trade-off-chart">
+      {/* Its own layout and paint boundary (fixed height; the tooltip is in a portal): moving the
+          points on a new solve lays out and paints the chart alone. */}
+      <div ref={ref} className="w-full [contain:strict]" style={{ height: HEIGHT }} data-testid="trade-off-chart">
         {width > 0 && feasible.length > 0 && (
           <XYChart
             width={width}

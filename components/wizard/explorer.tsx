@@ -4,6 +4,7 @@
 import { memo, useCallback, useDeferredValue, useEffect, useMemo, type ReactNode, type RefObject } from "react";
 import { evaluateCandidate, isInSweep } from "@/lib/design/candidate";
 import { rejectReasonLabels } from "@/lib/design/pair";
+import type { Requirement } from "@/lib/design/requirement";
 import type { SolveResult } from "@/lib/design/solve";
 import type { Candidate } from "@/lib/design/types";
 import { formatSI } from "@/lib/design/format";
@@ -36,10 +37,11 @@ const decades = [
   { label: "1 mV per nA", vPerA: 1e6 },
 ];
 
-export function Explorer({
+/** Memoised: the form's own re-renders (its checks, touched fields) leave the results alone. */
+export const Explorer = memo(function Explorer({
   solver,
   headingRef,
-  selected,
+  selected: selectedState,
   setSelected,
   chosen,
   setChosen,
@@ -91,10 +93,13 @@ export function Explorer({
   // The selection follows the ranking after every solve, unless the designer picked a pair.
   const recommended = recommendedOf(result);
   const recommendedKey = recommended ? candidateKey(recommended) : null;
+  // Drawn from the solve itself, so the charts show the new selection in the solve's own render;
+  // the state (kept in the draft) catches up in an effect, which then redraws nothing.
+  const selected = result && !chosen ? recommendedKey : selectedState;
   useEffect(() => {
     if (!result || chosen) return;
-    if (selected !== recommendedKey) setSelected(recommendedKey);
-  }, [result, chosen, selected, recommendedKey, setSelected]);
+    if (selectedState !== recommendedKey) setSelected(recommendedKey);
+  }, [result, chosen, selectedState, recommendedKey, setSelected]);
   const pick = useCallback(
     (k: string | null) => {
       setSelected(k);
@@ -208,6 +213,27 @@ export function Explorer({
     };
   }, [planShown, planCheck.state]);
 
+  // The save panel follows a deferred copy too: the chart is committed without waiting for it.
+  const { differences } = solver;
+  const saveView: SaveView | null = useMemo(
+    () =>
+      req
+        ? {
+            requirement: req,
+            differences,
+            candidate: planToSave ? null : candidate,
+            plan: planToSave,
+            note: planToSave ? null : note,
+          }
+        : null,
+    [req, differences, candidate, planToSave, note],
+  );
+  const saveLater = useDeferredValue(saveView);
+  const follow = useCallback(() => {
+    setChosen(false);
+    setSelected(recommendedKey);
+  }, [setChosen, setSelected, recommendedKey]);
+
   return (
     <div className="flex min-w-0 flex-col gap-4" aria-busy={busy}>
       <div className="flex flex-wrap items-baseline gap-x-3 gap-y-1">
@@ -283,18 +309,10 @@ export function Explorer({
             setPinned={setPinned}
             planSlot={planSlot}
           />
-          <Panel title={revise ? `Save revision ${revise.revision + 1}` : "Save"}>
-            <DefaultsSummary requirement={req} groups={solver.differences} />
-            <div className="mt-3" />
-            <SavePanel
-              requirement={req}
-              candidate={planToSave ? null : candidate}
-              plan={planToSave}
-              note={planToSave ? null : note}
-              onFollow={() => {
-                setChosen(false);
-                setSelected(recommendedKey);
-              }}
+          {saveLater && (
+            <SaveSection
+              view={saveLater}
+              onFollow={follow}
               revise={revise}
               canSave={canSave}
               name={name}
@@ -303,12 +321,12 @@ export function Explorer({
               setProject={setProject}
               onSaved={onSaved}
             />
-          </Panel>
+          )}
         </>
       )}
     </div>
   );
-}
+});
 
 /** Everything drawn from one solve; memoised so busy flags and typing elsewhere do not redraw the charts. */
 const Results = memo(function Results({
@@ -335,6 +353,11 @@ const Results = memo(function Results({
   const feasibleListed = result.candidates.filter((c) => c.feasible).length;
   // What lies below the chart follows a deferred copy of the solve (see Below).
   const later = useDeferredValue(shown);
+  // A new selection (the ranking's pick after a solve, or a click) and the new ranking reach the
+  // table and the study in the same deferred pass: the chart marks them first.
+  const laterSelected = useDeferredValue(selected);
+  const laterPinned = useDeferredValue(pinned);
+  const laterRecommended = useDeferredValue(recommendedKey);
   return (
     <>
       {req.readout.kind === "meter" && (
@@ -415,10 +438,10 @@ const Results = memo(function Results({
 
       <Below
         shown={later}
-        selected={selected}
-        recommendedKey={recommendedKey}
+        selected={laterSelected}
+        recommendedKey={laterRecommended}
         setSelected={setSelected}
-        pinned={pinned}
+        pinned={laterPinned}
         setPinned={setPinned}
       />
     </>
@@ -486,7 +509,63 @@ const Below = memo(function Below({
         <p className="mt-2 text-2xs text-ink-faint">{rankingInWords(result)}</p>
       </Panel>
 
-      {choice && <CandidateStudy req={req} choice={choice} pinned={pinnedChoices} />}
+      {choice && (
+        <div>
+          <CandidateStudy req={req} choice={choice} pinned={pinnedChoices} />
+        </div>
+      )}
     </>
+  );
+});
+
+type SaveView = {
+  requirement: Requirement;
+  differences: ReturnType<typeof useSolver>["differences"];
+  candidate: Candidate | null;
+  plan: PlanToSave | null;
+  note: PickNote | null;
+};
+
+/** The defaults summary and saving, from a deferred copy of what the solve gives them. */
+const SaveSection = memo(function SaveSection({
+  view,
+  onFollow,
+  revise,
+  canSave,
+  name,
+  setName,
+  project,
+  setProject,
+  onSaved,
+}: {
+  view: SaveView;
+  onFollow: () => void;
+  revise?: { id: string; revision: number };
+  canSave: boolean;
+  name: string;
+  setName: (s: string) => void;
+  project: string;
+  setProject: (s: string) => void;
+  onSaved: () => void;
+}) {
+  return (
+    <Panel title={revise ? `Save revision ${revise.revision + 1}` : "Save"}>
+      <DefaultsSummary requirement={view.requirement} groups={view.differences} />
+      <div className="mt-3" />
+      <SavePanel
+        requirement={view.requirement}
+        candidate={view.candidate}
+        plan={view.plan}
+        note={view.note}
+        onFollow={onFollow}
+        revise={revise}
+        canSave={canSave}
+        name={name}
+        setName={setName}
+        project={project}
+        setProject={setProject}
+        onSaved={onSaved}
+      />
+    </Panel>
   );
 });

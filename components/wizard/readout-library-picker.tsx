@@ -2,8 +2,8 @@
 
 // The readout step's "Fill from the team library": a library ADC or meter range fills the readout's
 // kind, scale and its own error figures (lib/wizard/library.ts); any figure can still be changed.
-import { useState } from "react";
 import { useFormContext } from "react-hook-form";
+import type { ReadoutPart } from "@/lib/wizard/draft";
 import type { WizardValues } from "@/lib/wizard/form-values";
 import { libraryAdcValues, libraryMeterValues } from "@/lib/wizard/library";
 import { LibraryPicker, useLibrary } from "./library-picker";
@@ -16,10 +16,16 @@ function leaves(prefix: string, value: unknown): [string, unknown][] {
   return Object.entries(value).flatMap(([k, v]) => leaves(`${prefix}.${k}`, v));
 }
 
-export function ReadoutLibraryPicker() {
+/** `picked`: the part the readout was filled from, kept in the wizard's draft across reloads. */
+export function ReadoutLibraryPicker({
+  picked,
+  setPicked,
+}: {
+  picked: ReadoutPart | null;
+  setPicked: (p: ReadoutPart | null) => void;
+}) {
   const { setValue } = useFormContext<WizardValues>();
   const library = useLibrary();
-  const [picked, setPicked] = useState<Row | null>(null);
   const rows: Row[] = [
     ...(library.data?.adcs ?? []).map((a) => ({
       id: a.id,
@@ -35,7 +41,7 @@ export function ReadoutLibraryPicker() {
     })),
   ];
   const pick = (row: Row | undefined) => {
-    setPicked(row ?? null);
+    setPicked(row ? { id: row.id, name: row.name } : null);
     if (!row) return;
     setValue("readout.kind", row.values.kind, { shouldDirty: true });
     // Let the chosen kind's inputs mount before filling them (as the amplifier step does).
@@ -49,7 +55,7 @@ export function ReadoutLibraryPicker() {
     <LibraryPicker
       id="f-library-readout"
       rows={rows}
-      value={picked?.id ?? ""}
+      value={rows.find((r) => r.id === picked?.id)?.id ?? ""}
       onPick={pick}
       loading={library.isLoading}
       noneText="— Type the readout below —"

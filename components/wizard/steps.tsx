@@ -4,6 +4,7 @@ import { useState } from "react";
 import { useFormContext, useWatch } from "react-hook-form";
 import { seriesNames } from "@/lib/design/eseries";
 import { topologies, topologyLabels } from "@/lib/design/requirement-options";
+import type { ReadoutPart } from "@/lib/wizard/draft";
 import type { WizardValues } from "@/lib/wizard/form-values";
 import { LibraryPicker, useLibrary } from "./library-picker";
 import {
@@ -189,11 +190,19 @@ export function SupplyStep({
   );
 }
 
-export function ReadoutStep({ live }: { live: LiveErrors }) {
+export function ReadoutStep({
+  live,
+  readoutPart,
+  setReadoutPart,
+}: {
+  live: LiveErrors;
+  readoutPart: ReadoutPart | null;
+  setReadoutPart: (p: ReadoutPart | null) => void;
+}) {
   const kind = useWatch<WizardValues, "readout.kind">({ name: "readout.kind" });
   return (
     <div className="grid grid-cols-2 gap-3">
-      <ReadoutLibraryPicker />
+      <ReadoutLibraryPicker picked={readoutPart} setPicked={setReadoutPart} />
       <div className="col-span-2">
         <RadioField
           legend="Read by"

@@ -4,7 +4,7 @@
 // comes back exactly where the designer left it.
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { FormProvider, useForm, type Resolver } from "react-hook-form";
-import type { Requirement } from "@/lib/design/requirement";
+import type { FieldErrors, Requirement } from "@/lib/design/requirement";
 import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { Choice } from "@/lib/design/types";
 import { candidateKey } from "@/lib/wizard/candidate-key";
@@ -80,6 +80,8 @@ const inWorker: Resolver<WizardValues, unknown, Requirement> = async (values) =>
   return r.ok ? { values: r.requirement, errors: {} } : { values: {}, errors: r.errors };
 };
 
+const noErrors: FieldErrors = {};
+
 export function Wizard({ canSave, revise }: { canSave: boolean; revise?: ReviseTarget }) {
   const [draft, setDraft] = useState<Draft | null>(null);
   const [generation, setGeneration] = useState(0);
@@ -141,6 +143,7 @@ function WizardForm({
   const [dropMode, setDropMode] = useState(initial.dropMode);
   const [gainMode, setGainMode] = useState(initial.gainMode);
   const [partName, setPartName] = useState(initial.partName);
+  const [readoutPart, setReadoutPart] = useState(initial.readoutPart ?? null);
   const [selected, setSelected] = useState<string | null>(initial.selected);
   const [chosen, setChosen] = useState(initial.chosen ?? false);
   const [pinned, setPinned] = useState<string[]>(initial.pinned);
@@ -184,6 +187,7 @@ function WizardForm({
           dropMode,
           gainMode,
           partName,
+          readoutPart,
           selected,
           chosen,
           pinned,
@@ -201,6 +205,7 @@ function WizardForm({
       dropMode,
       gainMode,
       partName,
+      readoutPart,
       selected,
       chosen,
       pinned,
@@ -224,10 +229,8 @@ function WizardForm({
     };
   }, [watch, persist]);
 
-  const fieldErrors = useMemo(
-    () => (solver.state.status === "invalid" ? solver.state.fieldErrors : {}),
-    [solver.state],
-  );
+  // One empty object while the form is valid: a new one per solve would rebuild every step.
+  const fieldErrors = solver.state.status === "invalid" ? solver.state.fieldErrors : noErrors;
   const touched = formState.touchedFields as Record<string, unknown>;
   const live = useCallback(
     (path: string) => {
@@ -304,7 +307,7 @@ function WizardForm({
     () => ({
       span: <SpanStep live={live} />,
       supply: <SupplyStep live={live} dropMode={dropMode} setDropMode={switchDropMode} />,
-      readout: <ReadoutStep live={live} />,
+      readout: <ReadoutStep live={live} readoutPart={readoutPart} setReadoutPart={setReadoutPart} />,
       shunt: <ShuntStep live={live} />,
       amplifier: (
         <AmplifierStep
@@ -319,8 +322,11 @@ function WizardForm({
     }),
     // switchDropMode reads the form when called; it need not rebuild the steps.
     // eslint-disable-next-line react-hooks/exhaustive-deps
-    [live, dropMode, gainMode, partName],
+    [live, dropMode, gainMode, partName, readoutPart],
   );
+
+  const onSaved = useCallback(() => clearDraft(storageKey), [storageKey]);
+  const revising = useMemo(() => (revise ? { id: revise.id, revision: revise.revision } : undefined), [revise]);
 
   return (
     <FormProvider {...methods}>
@@ -447,8 +453,8 @@ function WizardForm({
           setName={setName}
           project={project}
           setProject={setProject}
-          onSaved={() => clearDraft(storageKey)}
-          revise={revise ? { id: revise.id, revision: revise.revision } : undefined}
+          onSaved={onSaved}
+          revise={revising}
         />
       </div>
     </FormProvider>

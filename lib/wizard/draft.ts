@@ -2,6 +2,8 @@
 import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { WizardValues } from "./form-values";
 
+export type ReadoutPart = { id: string; name: string };
+
 export type Draft = {
   version: 1;
   values: Partial<WizardValues>;
@@ -11,6 +13,8 @@ export type Draft = {
   dropMode: "volts" | "share";
   gainMode: "list" | "pair";
   partName: string | null;
+  /** The team library's ADC or meter range the readout step was filled from (row id and name). */
+  readoutPart?: ReadoutPart | null;
   selected: string | null;
   /** The designer picked `selected` themselves; otherwise the selection follows the ranking. */
   chosen?: boolean;

@@ -3,7 +3,7 @@
 // latest input waits behind it, so typing never queues stale work or blocks the page. A sweep that
 // has run past CANCEL_AFTER_MS when a newer edit arrives is stale and long (up to 2,000,000 pairs):
 // its worker is stopped and a fresh one solves the newer input, rather than making the person wait.
-import { useCallback, useEffect, useRef, useState } from "react";
+import { startTransition, useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { FieldErrors } from "@/lib/design/requirement";
 import type { SolveResult } from "@/lib/design/solve";
 import type { StepDifferences } from "./from-defaults";
@@ -130,7 +130,9 @@ export function useSolver() {
       editTimes.current.set(id, editAt);
       // Keep a plain copy: the form hands out live objects.
       pending.current = { id, input: JSON.parse(JSON.stringify(input ?? {})) as unknown };
-      setBusy(true);
+      // Not urgent: the keystroke's own (synchronous) render stays small, and the solve's answer
+      // is drawn first if it comes before this.
+      startTransition(() => setBusy(true));
       // No debounce: a burst of keystrokes is coalesced by the queue itself (the first goes at once,
       // the rest wait as one pending input behind it), so a single edit never waits on a timer.
       const running = inFlight.current;
@@ -148,5 +150,9 @@ export function useSolver() {
 
   /** The differences of the result on screen; null until the worker has sent them. */
   const shownDifferences = last && differences?.id === last.id ? differences.groups : null;
-  return { state, busy, sweeping, last, differences: shownDifferences, request };
+  // One object per change of what it holds, so a memoised explorer skips the form's own re-renders.
+  return useMemo(
+    () => ({ state, busy, sweeping, last, differences: shownDifferences, request }),
+    [state, busy, sweeping, last, shownDifferences, request],
+  );
 }

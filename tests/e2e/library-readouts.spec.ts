@@ -114,6 +114,31 @@ for (const width of [1280, 390]) {
     expect(await shownText(page)).not.toMatch(/NaN|undefined/);
     await checkScreen(page, `${shots}/wizard-adc-${width}.png`);
     await page.getByRole("form", { name: "Requirement" }).screenshot({ path: `${shots}/wizard-adc-form-${width}.png` });
+
+    // The draft keeps the picker's choice: after a reload the readout step still names the library
+    // part its figures came from, with the figures as filled.
+    await expect
+      .poll(() => page.evaluate(() => window.localStorage.getItem("sensewright.wizard.draft") ?? ""))
+      .toContain("SW-ADC16 precision converter, 4.096 V");
+    await page.reload();
+    await expect(page.getByRole("heading", { name: /Readout/ })).toBeVisible();
+    await expect(picker.locator("option:checked")).toHaveText("ADC: SW-ADC16 precision converter, 4.096 V");
+    await expect(page.getByText('Filled from "SW-ADC16 precision converter, 4.096 V"')).toBeVisible();
+    await expect(field(page, "ADC full scale")).toHaveValue("4.096 V");
+    await expect(readout(page, "offsetLsb")).toHaveValue("4");
+    // Back to typing by hand: the choice is cleared, and stays cleared after a reload.
+    await picker.selectOption({ label: "— Type the readout below —" });
+    await expect(
+      page.getByText("A library part also fills the readout's own error from its data sheet."),
+    ).toBeVisible();
+    await expect
+      .poll(() => page.evaluate(() => window.localStorage.getItem("sensewright.wizard.draft") ?? ""))
+      .not.toContain("SW-ADC16");
+    await page.reload();
+    await expect(picker).toHaveValue("");
+    await expect(
+      page.getByText("A library part also fills the readout's own error from its data sheet."),
+    ).toBeVisible();
     await ctx.close();
   });
 }
