@@ -89,8 +89,12 @@ async function warmRoutes(port: number) {
       /* a route that cannot be reached now is simply not warmed */
     }
   }
-  const { routeWarmUpsSettled } = await import("@/lib/warm-up/run");
-  await routeWarmUpsSettled(30_000);
+  try {
+    const { routeWarmUpsSettled } = await import("@/lib/warm-up/run");
+    await routeWarmUpsSettled(30_000);
+  } catch (err) {
+    console.warn(`[start] route warm-ups not awaited: ${(err as Error).message}`);
+  }
   console.log(`[start] ${paths.length} routes loaded and warmed in ${Math.round(performance.now() - t0)} ms`);
 }
 
