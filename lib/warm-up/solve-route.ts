@@ -45,7 +45,10 @@ const bodies: unknown[] = [
   { ...loggerRequirement, rank: "burdenV * 1000 + errorAtMinPercent" },
 ];
 
-/** A value as a jsonb column gives it back: object keys shortest first, then in byte order. */
+/**
+ * A value as a jsonb column gives it back: object keys shortest first, then in byte order
+ * (PostgreSQL's jsonb order, from memory).
+ */
 function asStored(value: unknown): unknown {
   if (Array.isArray(value)) return value.map(asStored);
   if (value === null || typeof value !== "object") return value;
