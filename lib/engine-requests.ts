@@ -1,6 +1,6 @@
 // Thin adapters between raw request bodies and the engine's parsers, shared by the stateless
 // engine routes: the engine's own dotted field errors come back unchanged (or under a prefix).
-import type { Requirement } from "@/lib/design";
+import { RankExpressionError, solve, type Requirement, type SolveResult } from "@/lib/design";
 import { parseRequirementInput } from "@/lib/design/ambiguous-percent";
 import { HttpError, type FieldErrors } from "@/lib/http";
 
@@ -28,4 +28,25 @@ export function objectBody(raw: unknown): Record<string, unknown> {
     throw new HttpError(422, "The request body must be a JSON object.", { "(body)": ["expected a JSON object"] });
   }
   return raw as Record<string, unknown>;
+}
+
+/**
+ * POST /api/solve's work on its body: a requirement, plus an optional `rank` expression that orders
+ * the candidates after the Pareto front. 422 with the field at fault.
+ */
+export function solveRequest(body: unknown): SolveResult {
+  const { rank, ...rest } = objectBody(body);
+  if (rank !== undefined && typeof rank !== "string") {
+    throw new HttpError(422, "Invalid input at rank: expected a ranking expression as text", {
+      rank: ['Ranking expression: expected text such as "burdenV * 1000 + errorAtMinPercent"'],
+    });
+  }
+  const requirement = requirementOr422(rest);
+  try {
+    return solve(requirement, rank === undefined ? {} : { rankExpression: rank });
+  } catch (e) {
+    if (e instanceof RankExpressionError)
+      throw new HttpError(422, `Invalid input at rank: ${e.message}`, { rank: [e.message] });
+    throw e;
+  }
 }

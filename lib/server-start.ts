@@ -54,7 +54,8 @@ async function keepPlannerStatistics() {
 /**
  * Next loads each route's code on its first request. Once the server answers, ask the slow
  * first-use routes once without a session: the gate answers 401 (or the sign-in redirect) with no
- * effect, and their modules, react-pdf's included, are loaded before a person's first request.
+ * effect, and their modules, react-pdf's included, are loaded before a person's first request. A
+ * module that loads then runs its own code hot (lib/warm-up/run.ts); the line below waits for that.
  */
 async function warmRoutes(port: number) {
   const base = `http://127.0.0.1:${port}`;
@@ -88,7 +89,13 @@ async function warmRoutes(port: number) {
       /* a route that cannot be reached now is simply not warmed */
     }
   }
-  console.log(`[start] ${paths.length} routes loaded in ${Math.round(performance.now() - t0)} ms`);
+  try {
+    const { routeWarmUpsSettled } = await import("@/lib/warm-up/run");
+    await routeWarmUpsSettled(30_000);
+  } catch (err) {
+    console.warn(`[start] route warm-ups not awaited: ${(err as Error).message}`);
+  }
+  console.log(`[start] ${paths.length} routes loaded and warmed in ${Math.round(performance.now() - t0)} ms`);
 }
 
 /**

@@ -9,3 +9,4 @@ export * from "./limits";
 export * from "./design";
 export * from "./capacity";
 export * from "./plan-series";
+export * from "./chart";

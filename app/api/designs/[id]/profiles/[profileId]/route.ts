@@ -4,7 +4,11 @@ import { designViewFor } from "@/lib/saved-designs/access";
 import { profileWindowQuery } from "@/lib/route-schemas";
 import { HttpError } from "@/lib/http";
 import { isUuid } from "@/lib/ids";
-import { clipCurrent, decimateMinMax, judgeRecording, planSeriesOverlay } from "@/lib/profile";
+import { profileChart } from "@/lib/profile";
+import { warmProfileChartRoute } from "@/lib/warm-up/profile-chart-route";
+
+// This route's own chart code runs hot before a person's first chart (lib/warm-up/run.ts).
+warmProfileChartRoute();
 
 const profileNotFound = () => new HttpError(404, "That profile was not found on this design.");
 
@@ -15,9 +19,8 @@ function profileIdOf(raw: string | undefined): string {
 
 /**
  * One profile: the summary stored at upload, the summary against the design's current revision, and
- * the series decimated to `width` pixel columns over `from`..`to` seconds (the whole recording by default).
- * On a range plan the series also says which range each stretch was read on and the load voltage
- * through the path in use.
+ * the series decimated to `width` pixel columns over `from`..`to` seconds (the whole recording by
+ * default); lib/profile/chart.ts builds it.
  */
 export const GET = apiRoute(
   { action: "design.read", doing: "read current profiles", query: profileWindowQuery },
@@ -25,43 +28,7 @@ export const GET = apiRoute(
     const design = await designViewFor(caller, params.id ?? "");
     const profile = await getProfile(design.id, profileIdOf(params.profileId));
     if (!profile) throw profileNotFound();
-    const { timesS, currentsA, ...item } = profile;
-    const judged = judgeRecording(design, timesS, currentsA);
-    const span = { fromS: query.from, toS: query.to, width: query.width };
-    const head = {
-      ...item,
-      startS: timesS[0],
-      endS: timesS[timesS.length - 1],
-      current: {
-        revision: design.revision,
-        summary: item.revision === design.revision ? item.summary : judged.summary,
-      },
-    };
-    if (judged.kind === "pair") {
-      const series = decimateMinMax(timesS, currentsA, {
-        ...span,
-        clipA: clipCurrent(judged.design),
-        lsbA: judged.design.lsbA,
-      });
-      return { ...head, design: { kind: "pair" as const, ...judged.design }, series };
-    }
-    // A plan: clipping and steps are judged on the range each sample was read on (the overlay).
-    const bare = decimateMinMax(timesS, currentsA, { ...span, clipA: Infinity, lsbA: -Infinity });
-    const { clipped, belowStep, ...plan } = planSeriesOverlay(timesS, currentsA, judged.trace, judged.design, bare);
-    const lowest = judged.design.ranges[0]!;
-    return {
-      ...head,
-      design: {
-        kind: "plan" as const,
-        supplyV: judged.design.supplyV,
-        fullScaleV: judged.design.fullScaleV,
-        switchDelayS: judged.design.switchDelayS,
-        lsbA: lowest.resolvableStepA,
-        ranges: judged.design.ranges,
-        switchPoints: judged.design.switchPoints,
-      },
-      series: { ...bare, clipped, belowStep, plan },
-    };
+    return profileChart(design, profile, { fromS: query.from, toS: query.to, width: query.width });
   },
 );
 
