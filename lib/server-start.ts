@@ -4,8 +4,10 @@ import { seedDemoIfEmpty } from "@/db/seed";
 import { stampPeerAddresses } from "@/lib/auth/client-address";
 import { ensureAuthSecret } from "@/lib/auth/secret";
 import { env } from "@/lib/env";
+import { limitHeapGrowth } from "@/lib/heap-growth";
 
 export async function startServer() {
+  limitHeapGrowth();
   const e = env();
   stampPeerAddresses();
   ensureAuthSecret();

@@ -15,6 +15,13 @@ import type { SheetAnswer, SheetJob } from "./render-worker";
  * its own copy of react-pdf and the typefaces (about 60 MB), so more would cost memory for nothing.
  */
 export const SHEET_WORKERS = Math.max(1, Math.min(4, os.availableParallelism() - 1));
+/**
+ * The young generation of each worker's heap. V8's default lets it grow to 48 MB and keep it, on
+ * top of react-pdf and the typefaces; a sheet's garbage is short-lived and dies in a smaller one
+ * just as well. Only the young generation is limited: a cap on the old one would end a worker
+ * mid-sheet.
+ */
+const WORKER_YOUNG_GENERATION_MB = 16;
 /** Sheets waiting beyond this are refused with 503 rather than held in memory without end. */
 const MAX_WAITING = 200;
 /** A sheet renders in well under a second; one that takes this long is stuck, and its worker is replaced. */
@@ -54,7 +61,9 @@ class SheetPool {
   }
 
   private spawn(): Slot {
-    const worker = new Worker(new URL("./render-worker.ts", import.meta.url));
+    const worker = new Worker(new URL("./render-worker.ts", import.meta.url), {
+      resourceLimits: { maxYoungGenerationSizeMb: WORKER_YOUNG_GENERATION_MB },
+    });
     const slot: Slot = { worker, busy: null };
     worker.on("message", (answer: SheetAnswer) => {
       const done = slot.busy;

@@ -6,6 +6,7 @@
 //     compare.ratio; and designs.list.scaleVsDemo, design.page.scaleVsDemo (the scale team's page ÷
 //     the demo team's, to tell the cost of scale from the cost of the page)
 //   under load: health.underSheets.p99Ratio (20 concurrent sheets), server.rss.MB after 20 connections
+//   on a fresh demo database, after the same 20 connections: server.rss.demo.MB (goal < 600 MB)
 // Pages are timed to the last byte of the whole response (the HTML with its RSC payload), as a
 // browser would have it all, never to the first byte: nothing below the fold is left out by streaming.
 // The page and compare figures also come as CPU ratios (*.cpuRatio: the server's CPU time per
@@ -16,6 +17,7 @@
 // Build first (`npx next build`, or with NEXT_DIST_DIR). Nothing here asserts.
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import fs from "node:fs";
+import os from "node:os";
 import path from "node:path";
 import { createInterface } from "node:readline";
 import { request } from "@playwright/test";
@@ -155,7 +157,7 @@ const solveBody = {
   resolution: { countsAtMin: 10 },
 };
 
-export async function run(): Promise<Record<string, number>> {
+async function atScale(): Promise<Record<string, number>> {
   ensureScaleData();
   const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", String(PORT)], {
     env: { ...process.env, PORT: String(PORT), PGLITE_DIR: DIR, SEED_DEMO: "0", NEXTAUTH_URL: BASE },
@@ -310,6 +312,67 @@ export async function run(): Promise<Record<string, number>> {
   }
 }
 
+/**
+ * The memory of the same built server on a fresh demo database (the demo team only, as a new
+ * install has it, seeded at start as scripts/serve-test.mjs does), before and after the same
+ * 20-connection mix of list, search, solve and design page as the demo designer. Run after the scale
+ * server has stopped, on the same port.
+ */
+async function onDemoData(): Promise<Record<string, number>> {
+  const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "sensewright-bench-demo-"));
+  const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-p", String(PORT)], {
+    env: { ...process.env, PORT: String(PORT), PGLITE_DIR: dataDir, SEED_DEMO: "1", NEXTAUTH_URL: BASE },
+    stdio: ["ignore", "pipe", "ignore"],
+    detached: true,
+  });
+  const startUpDone = new Promise<boolean>((resolve) => {
+    createInterface({ input: server.stdout! }).on("line", (line) => {
+      if (/^\[start\] \d+ routes loaded/.test(line)) resolve(true);
+    });
+  });
+  try {
+    await waitForHealth(server);
+    if (!(await Promise.race([startUpDone, new Promise<false>((r) => setTimeout(() => r(false), 120_000))])))
+      console.error("[bench] the demo server did not say its start-up was done; measuring anyway");
+    const rssStartMB = treeRssMB(server.pid!);
+    const cookie = await sessionCookie("designer@harbourline.example");
+    const first = (await (await fetch(`${BASE}/api/designs?limit=1`, { headers: { cookie } })).json()) as {
+      designs: { id: string }[];
+    };
+    const designId = first.designs[0]?.id;
+    if (!designId) throw new Error("the demo database has no designs to open");
+    const mix: Call[] = [
+      { path: "/api/designs", cookie },
+      { path: `/api/designs?q=${encodeURIComponent("logger")}`, cookie },
+      { path: "/api/solve", method: "POST", body: solveBody, cookie },
+      { path: `/designs/${designId}`, cookie },
+    ];
+    await Promise.all(
+      Array.from({ length: 20 }, async (_, w) => {
+        for (let k = 0; k < 10; k++) await timed(mix[(w + k) % mix.length]!);
+      }),
+    );
+    await new Promise((r) => setTimeout(r, 1000));
+    return {
+      "server.rss.demo.start.MB": Math.round(rssStartMB),
+      "server.rss.demo.MB": Math.round(treeRssMB(server.pid!)),
+    };
+  } finally {
+    try {
+      if (server.pid) process.kill(-server.pid, "SIGTERM");
+    } catch {
+      /* already gone */
+    }
+    await new Promise((r) => setTimeout(r, 1000));
+    fs.rmSync(dataDir, { recursive: true, force: true });
+  }
+}
+
+export async function run(): Promise<Record<string, number>> {
+  return { ...(await atScale()), ...(await onDemoData()) };
+}
+
+// `npx tsx scripts/bench/server.ts [demo]`: the whole section, or the demo-data memory alone.
 if (import.meta.url === `file://${process.argv[1]}`) {
-  run().then((r) => console.log(JSON.stringify(r, null, 2)));
+  (process.argv[2] === "demo" ? onDemoData() : run()).then((r) => console.log(JSON.stringify(r, null, 2)));
 }
