@@ -1,0 +1,39 @@
+// What a design's page shows from the database, in one query: the design, its current revision,
+// every revision's head, its reviews and its audit trail. Each query costs PGlite a fixed amount
+// well above these rows' plan and transfer, and the page made five of them.
+import { and, eq, sql } from "drizzle-orm";
+import type { DesignView } from "@/lib/design-view";
+import { getDb } from "../client";
+import { designs } from "../schema";
+import { targetAuditFromJson, targetAuditJson, type TargetAuditRecord } from "./audit";
+import { designsWithHeads, designWithHeadsOf, isUuid, type RevisionHead } from "./designs";
+import { reviewFromJson, reviewsJson, type ReviewRecord } from "./reviews";
+
+export type DesignPageData = {
+  view: DesignView;
+  heads: RevisionHead[];
+  reviews: ReviewRecord[];
+  audit: TargetAuditRecord[];
+};
+
+/**
+ * The design (scoped by team; null when it is not this team's or the id is not a UUID) with the
+ * same heads as getDesignWithHeads, reviews as listReviews and audit as listTargetAudit read.
+ * Reviews and audit are read before the caller's right to the design is checked: the page drops
+ * them with the design when the policy says no.
+ */
+export async function getDesignPage(designId: string, teamId: string): Promise<DesignPageData | null> {
+  if (!isUuid(designId)) return null;
+  const [row] = await designsWithHeads(await getDb(), {
+    reviews: reviewsJson(sql`${designs.id}`),
+    audit: targetAuditJson(teamId, "design", sql`${designs.id}::text`),
+  })
+    .where(and(eq(designs.id, designId), eq(designs.teamId, teamId)))
+    .limit(1);
+  if (!row) return null;
+  return {
+    ...designWithHeadsOf(row),
+    reviews: row.reviews.map(reviewFromJson),
+    audit: row.audit.map(targetAuditFromJson),
+  };
+}
