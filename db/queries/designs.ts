@@ -185,21 +185,25 @@ export async function pageDesigns(teamId: string, opts: DesignListQuery) {
   };
 }
 
-/** Designs, each with its current revision and that revision's author's name. */
-const designsWithCurrent = (db: Awaited<ReturnType<typeof getDb>>) =>
+/** Designs, each with its current revision and that revision's author's name, plus any extra columns. */
+const designsWithCurrent = <X extends Record<string, SQL.Aliased | SQL>>(
+  db: Awaited<ReturnType<typeof getDb>>,
+  extra: X,
+) =>
   db
-    .select({ design: designs, current: designRevisions, authorName: author.name })
+    .select({ design: designs, current: designRevisions, authorName: author.name, ...extra })
     .from(designs)
     .innerJoin(
       designRevisions,
       and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)),
     )
-    .innerJoin(author, eq(author.id, designRevisions.authorId));
+    .innerJoin(author, eq(author.id, designRevisions.authorId))
+    .$dynamic();
 
 /** The design with its current revision, scoped by team: another team's design is null. */
 export async function getDesign(designId: string, teamId: string) {
   if (!isUuid(designId)) return null;
-  const rows = await designsWithCurrent(await getDb())
+  const rows = await designsWithCurrent(await getDb(), {})
     .where(and(eq(designs.id, designId), eq(designs.teamId, teamId)))
     .limit(1);
   return rows[0] ?? null;
@@ -366,16 +370,7 @@ function headFromJson({ choice, plan, createdAt, approval, ...r }: HeadJson): Re
 export const designsWithHeads = <X extends Record<string, SQL.Aliased | SQL>>(
   db: Awaited<ReturnType<typeof getDb>>,
   extra: X,
-) =>
-  db
-    .select({ design: designs, current: designRevisions, authorName: author.name, heads: headsJson, ...extra })
-    .from(designs)
-    .innerJoin(
-      designRevisions,
-      and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)),
-    )
-    .innerJoin(author, eq(author.id, designRevisions.authorId))
-    .$dynamic();
+) => designsWithCurrent(db, { heads: headsJson, ...extra });
 
 /** A row of designsWithHeads as the screens see it, with its heads. */
 export function designWithHeadsOf(row: {
