@@ -64,7 +64,7 @@ export type TargetAuditRecord = Awaited<ReturnType<typeof listTargetAudit>>[numb
  * listTargetAudit as one JSON array column of another query (the design page reads its design,
  * revisions, reviews and audit in one query): the same rows, newest first, timestamps as text.
  */
-export function targetAuditJson(teamId: string, targetType: string, targetId: SQL) {
+export function targetAuditJson(teamId: SQL | string, targetType: string, targetId: SQL) {
   const pairs = Object.entries(auditColumns).flatMap(([key, column]) => [sql.raw(`'${key}'`), column]);
   return sql<
     (Omit<TargetAuditRecord, "at"> & { at: string })[]

@@ -7,7 +7,18 @@ import { getDb } from "../client";
 import { designs } from "../schema";
 import { targetAuditFromJson, targetAuditJson, type TargetAuditRecord } from "./audit";
 import { designsWithHeads, designWithHeadsOf, isUuid, type RevisionHead } from "./designs";
+import { preparedOnce } from "./prepared";
 import { reviewFromJson, reviewsJson, type ReviewRecord } from "./reviews";
+
+const designPage = preparedOnce((db) =>
+  designsWithHeads(db, {
+    reviews: reviewsJson(sql`${designs.id}`),
+    audit: targetAuditJson(sql`${sql.placeholder("teamId")}`, "design", sql`${designs.id}::text`),
+  })
+    .where(and(eq(designs.id, sql.placeholder("designId")), eq(designs.teamId, sql.placeholder("teamId"))))
+    .limit(1)
+    .prepare("design_page"),
+);
 
 export type DesignPageData = {
   view: DesignView;
@@ -24,12 +35,7 @@ export type DesignPageData = {
  */
 export async function getDesignPage(designId: string, teamId: string): Promise<DesignPageData | null> {
   if (!isUuid(designId)) return null;
-  const [row] = await designsWithHeads(await getDb(), {
-    reviews: reviewsJson(sql`${designs.id}`),
-    audit: targetAuditJson(teamId, "design", sql`${designs.id}::text`),
-  })
-    .where(and(eq(designs.id, designId), eq(designs.teamId, teamId)))
-    .limit(1);
+  const [row] = await designPage(await getDb()).execute({ designId, teamId });
   if (!row) return null;
   return {
     ...designWithHeadsOf(row),
