@@ -1,4 +1,4 @@
-// The design page's one query against the separate reads it replaced, on the demo team's designs
+// The design page's one query against the separate reads it replaced (library included), on the demo team's designs
 // (a pair approved after a return, a range plan, a draft) and one with comments, a reply and
 // three revisions: the same rows, keys and numbers to the last bit, in the same order.
 import { eq } from "drizzle-orm";
@@ -8,6 +8,7 @@ import { memberships, teams } from "../schema";
 import { seedDemoIfEmpty } from "../seed/index";
 import { listTargetAudit } from "./audit";
 import { getDesignPage } from "./design-page";
+import { listLibrary } from "./library";
 import {
   designViewOf,
   getDesign,
@@ -81,6 +82,7 @@ async function separateReads(id: string, team: string) {
     heads,
     reviews: await listReviews(id),
     audit: await listTargetAudit(team, "design", id),
+    library: await listLibrary(team),
   };
 }
 
@@ -95,6 +97,7 @@ describe("getDesignPage", () => {
       expect(page).toStrictEqual(reference);
       expect(page!.audit.length).toBeGreaterThan(0);
       reviewed += page!.reviews.length;
+      expect(page!.library.amplifiers.length).toBeGreaterThan(0);
     }
     // The demo's approvals and return, and the comments above, were all compared.
     expect(reviewed).toBeGreaterThanOrEqual(7);
