@@ -1,4 +1,4 @@
-import { and, desc, eq } from "drizzle-orm";
+import { and, desc, eq, sql, type SQL } from "drizzle-orm";
 import type { Db, Tx } from "../client";
 import { getDb } from "../client";
 import { auditEvents, users } from "../schema";
@@ -56,5 +56,25 @@ export async function listTargetAudit(teamId: string, targetType: string, target
     .where(
       and(eq(auditEvents.teamId, teamId), eq(auditEvents.targetType, targetType), eq(auditEvents.targetId, targetId)),
     )
-    .orderBy(desc(auditEvents.at));
+    .orderBy(desc(auditEvents.at), desc(auditEvents.id));
 }
+export type TargetAuditRecord = Awaited<ReturnType<typeof listTargetAudit>>[number];
+
+/**
+ * listTargetAudit as one JSON array column of another query (the design page reads its design,
+ * revisions, reviews and audit in one query): the same rows, newest first, timestamps as text.
+ */
+export function targetAuditJson(teamId: SQL | string, targetType: string, targetId: SQL) {
+  const pairs = Object.entries(auditColumns).flatMap(([key, column]) => [sql.raw(`'${key}'`), column]);
+  return sql<
+    (Omit<TargetAuditRecord, "at"> & { at: string })[]
+  >`(select coalesce(json_agg(json_build_object(${sql.join(pairs, sql`, `)}) order by ${auditEvents.at} desc, ${auditEvents.id} desc), '[]'::json)
+    from ${auditEvents} left join ${users} on ${users.id} = ${auditEvents.actorId}
+    where ${auditEvents.teamId} = ${teamId} and ${auditEvents.targetType} = ${targetType} and ${auditEvents.targetId} = ${targetId})`;
+}
+
+/** A row of targetAuditJson as listTargetAudit reads it. */
+export const targetAuditFromJson = (row: Omit<TargetAuditRecord, "at"> & { at: string }): TargetAuditRecord => ({
+  ...row,
+  at: new Date(row.at),
+});

@@ -185,21 +185,25 @@ export async function pageDesigns(teamId: string, opts: DesignListQuery) {
   };
 }
 
-/** Designs, each with its current revision and that revision's author's name. */
-const designsWithCurrent = (db: Awaited<ReturnType<typeof getDb>>) =>
+/** Designs, each with its current revision and that revision's author's name, plus any extra columns. */
+const designsWithCurrent = <X extends Record<string, SQL.Aliased | SQL>>(
+  db: Awaited<ReturnType<typeof getDb>>,
+  extra: X,
+) =>
   db
-    .select({ design: designs, current: designRevisions, authorName: author.name })
+    .select({ design: designs, current: designRevisions, authorName: author.name, ...extra })
     .from(designs)
     .innerJoin(
       designRevisions,
       and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)),
     )
-    .innerJoin(author, eq(author.id, designRevisions.authorId));
+    .innerJoin(author, eq(author.id, designRevisions.authorId))
+    .$dynamic();
 
 /** The design with its current revision, scoped by team: another team's design is null. */
 export async function getDesign(designId: string, teamId: string) {
   if (!isUuid(designId)) return null;
-  const rows = await designsWithCurrent(await getDb())
+  const rows = await designsWithCurrent(await getDb(), {})
     .where(and(eq(designs.id, designId), eq(designs.teamId, teamId)))
     .limit(1);
   return rows[0] ?? null;
@@ -322,36 +326,95 @@ async function revisionHeadsOfEach(designIds: string[]) {
 }
 export type RevisionHead = Awaited<ReturnType<typeof listRevisionHeads>>[number];
 
+/** A revision head as headsJson reads it: timestamps as PostgreSQL's JSON text. */
+type HeadJson = Omit<RevisionHead, "kind" | "createdAt" | "approval"> & {
+  createdAt: string;
+  approval: { byName: string; byId: string; at: string } | null;
+};
+
+const head = alias(designRevisions, "head");
+const headAuthor = alias(users, "head_author");
+const approving = alias(reviews, "approving");
+
+/**
+ * The heads of the outer row's design, oldest first, each with its approval (as approvalOnRevision
+ * picks it), as one JSON array: the design and its revisions in one query, since each query costs
+ * PGlite more than its plan and rows.
+ */
+// (An alias interpolated into sql`` prints its name only; the FROM spells out table and alias.)
+const headsJson = sql<HeadJson[]>`(select coalesce(json_agg(json_build_object(
+    'revision', ${head.revision}, 'name', ${head.name}, 'choice', ${head.choice}, 'plan', ${head.plan},
+    'authorId', ${head.authorId}, 'authorName', ${headAuthor.name}, 'createdAt', ${head.createdAt},
+    'approval', (select json_build_object('byName', ${approver.name}, 'byId', ${approver.id}, 'at', ${approving.createdAt})
+      from ${reviews} ${sql.identifier("approving")} join ${users} ${sql.identifier("approver")} on ${approver.id} = ${approving.authorId}
+      where ${approving.designId} = ${head.designId} and ${approving.revision} = ${head.revision} and ${approving.verdict} = 'approve'
+      order by ${approving.createdAt} desc limit 1)
+  ) order by ${head.revision}), '[]'::json)
+  from ${designRevisions} ${sql.identifier("head")} join ${users} ${sql.identifier("head_author")} on ${headAuthor.id} = ${head.authorId} where ${head.designId} = ${designs.id})`;
+
+/** A head of headsJson as revisionHeadsOfEach reads it. */
+function headFromJson({ choice, plan, createdAt, approval, ...r }: HeadJson): RevisionHead {
+  return {
+    ...(plan
+      ? { ...r, kind: "plan" as const, choice: null, plan }
+      : { ...r, kind: "pair" as const, choice: choice!, plan: null }),
+    createdAt: new Date(createdAt).toISOString(),
+    approval: approval && approvalOf(r.revision, { ...approval, at: new Date(approval.at) }),
+  };
+}
+
+/**
+ * Designs with their current revision, its author's name and every revision's head (plus any
+ * extra columns), in one query.
+ */
+export const designsWithHeads = <X extends Record<string, SQL.Aliased | SQL>>(
+  db: Awaited<ReturnType<typeof getDb>>,
+  extra: X,
+) => designsWithCurrent(db, { heads: headsJson, ...extra });
+
+/** A row of designsWithHeads as the screens see it, with its heads. */
+export function designWithHeadsOf(row: {
+  design: typeof designs.$inferSelect;
+  current: typeof designRevisions.$inferSelect;
+  authorName: string;
+  heads: HeadJson[];
+}): { view: DesignView; heads: RevisionHead[] } {
+  const heads = row.heads.map(headFromJson);
+  return { view: designViewOf(row, heads), heads };
+}
+
 /** The saved design as the screens see it, or null when it is not this team's. */
 export async function getDesignView(designId: string, teamId: string): Promise<DesignView | null> {
   return (await getDesignWithHeads(designId, teamId))?.view ?? null;
 }
 
-/** The design as the screens see it and the heads of its revisions, read once for a page that shows both. */
+/** The design as the screens see it and the heads of its revisions, in one query, for a page that shows both. */
 export async function getDesignWithHeads(
   designId: string,
   teamId: string,
 ): Promise<{ view: DesignView; heads: RevisionHead[] } | null> {
-  const found = await getDesign(designId, teamId);
-  if (!found) return null;
-  const heads = await listRevisionHeads(found.design.id);
-  return { view: designViewOf(found, heads), heads };
+  if (!isUuid(designId)) return null;
+  const [row] = await designsWithHeads(await getDb(), {})
+    .where(and(eq(designs.id, designId), eq(designs.teamId, teamId)))
+    .limit(1);
+  return row ? designWithHeadsOf(row) : null;
 }
 
 /**
  * Several designs as the screens see them, in the order asked, null where one is not this team's
- * (or the id is not one): three reads however many designs, for the compare page.
+ * (or the id is not one): one query however many designs, for the compare page.
  */
 export async function getDesignViews(designIds: string[], teamId: string): Promise<(DesignView | null)[]> {
   const ids = [...new Set(designIds.filter(isUuid))];
   if (ids.length === 0) return designIds.map(() => null);
-  const rows = await designsWithCurrent(await getDb()).where(and(inArray(designs.id, ids), eq(designs.teamId, teamId)));
-  const heads = rows.length ? await revisionHeadsOfEach(rows.map((r) => r.design.id)) : new Map();
-  const views = new Map(rows.map((r) => [r.design.id, designViewOf(r, heads.get(r.design.id) ?? [])]));
+  const rows = await designsWithHeads(await getDb(), {}).where(
+    and(inArray(designs.id, ids), eq(designs.teamId, teamId)),
+  );
+  const views = new Map(rows.map((r) => [r.design.id, designWithHeadsOf(r).view]));
   return designIds.map((id) => views.get(id) ?? null);
 }
 
-function designViewOf(
+export function designViewOf(
   { design, current, authorName }: NonNullable<Awaited<ReturnType<typeof getDesign>>>,
   revisions: RevisionHead[],
 ): DesignView {

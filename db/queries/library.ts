@@ -60,24 +60,37 @@ function teamRowsAsJson(table: (typeof tables)[PartKind]) {
 const withDates = <T extends { createdAt: Date; updatedAt: Date }>(row: Json<T>): T =>
   ({ ...row, createdAt: new Date(row.createdAt), updatedAt: new Date(row.updatedAt) }) as unknown as T;
 
+/** The four library tables of the team named by the "teamId" placeholder, as columns of one row. */
+export const teamLibraryColumns = () => ({
+  amplifiers: sql<Json<LibraryAmplifier>[]>`${teamRowsAsJson(libraryAmplifiers)}`,
+  shunts: sql<Json<LibraryShunt>[]>`${teamRowsAsJson(libraryShunts)}`,
+  adcs: sql<Json<LibraryAdc>[]>`${teamRowsAsJson(libraryAdcs)}`,
+  meters: sql<Json<LibraryMeter>[]>`${teamRowsAsJson(libraryMeters)}`,
+});
+
+/** A row read with teamLibraryColumns, as the API sends the library. */
+export function libraryOf(row: {
+  amplifiers: Json<LibraryAmplifier>[];
+  shunts: Json<LibraryShunt>[];
+  adcs: Json<LibraryAdc>[];
+  meters: Json<LibraryMeter>[];
+}): LibraryJson {
+  return {
+    amplifiers: row.amplifiers.map((r) => toJson(withDates<LibraryAmplifier>(r))),
+    shunts: row.shunts.map((r) => toJson(withDates<LibraryShunt>(r))),
+    adcs: row.adcs.map((r) => toJson(withDates<LibraryAdc>(r))),
+    meters: row.meters.map((r) => toJson(withDates<LibraryMeter>(r))),
+  };
+}
+
 export async function listLibrary(teamId: string): Promise<LibraryJson> {
   const db = await getDb();
   const [row] = await db
-    .select({
-      amplifiers: sql<Json<LibraryAmplifier>[]>`${teamRowsAsJson(libraryAmplifiers)}`,
-      shunts: sql<Json<LibraryShunt>[]>`${teamRowsAsJson(libraryShunts)}`,
-      adcs: sql<Json<LibraryAdc>[]>`${teamRowsAsJson(libraryAdcs)}`,
-      meters: sql<Json<LibraryMeter>[]>`${teamRowsAsJson(libraryMeters)}`,
-    })
+    .select(teamLibraryColumns())
     .from(sql`(select 1) as one`)
     .prepare("list_library")
     .execute({ teamId });
-  return {
-    amplifiers: row!.amplifiers.map((r) => toJson(withDates<LibraryAmplifier>(r))),
-    shunts: row!.shunts.map((r) => toJson(withDates<LibraryShunt>(r))),
-    adcs: row!.adcs.map((r) => toJson(withDates<LibraryAdc>(r))),
-    meters: row!.meters.map((r) => toJson(withDates<LibraryMeter>(r))),
-  };
+  return libraryOf(row!);
 }
 
 export async function getAmplifier(teamId: string, id: string): Promise<LibraryAmplifier | null> {

@@ -1,31 +1,52 @@
 // Review comments and verdicts. A verdict and the status change it makes commit together, and
 // only while the design is still in review at the revision the reviewer saw.
-import { and, asc, eq } from "drizzle-orm";
+import { and, asc, eq, sql, type SQL } from "drizzle-orm";
 import { getDb } from "../client";
 import { designRevisions, designs, reviews, users, type Verdict } from "../schema";
 import { recordAudit } from "./audit";
 import { changeDesignStatus } from "./designs";
 
+const reviewColumns = {
+  id: reviews.id,
+  revision: reviews.revision,
+  verdict: reviews.verdict,
+  body: reviews.body,
+  parentId: reviews.parentId,
+  authorId: reviews.authorId,
+  authorName: users.name,
+  createdAt: reviews.createdAt,
+};
+
+/** A design's comments and verdicts, oldest first. */
 export async function listReviews(designId: string) {
   const db = await getDb();
   const rows = await db
-    .select({
-      id: reviews.id,
-      revision: reviews.revision,
-      verdict: reviews.verdict,
-      body: reviews.body,
-      parentId: reviews.parentId,
-      authorId: reviews.authorId,
-      authorName: users.name,
-      createdAt: reviews.createdAt,
-    })
+    .select(reviewColumns)
     .from(reviews)
     .innerJoin(users, eq(users.id, reviews.authorId))
     .where(eq(reviews.designId, designId))
-    .orderBy(asc(reviews.createdAt));
+    .orderBy(asc(reviews.createdAt), asc(reviews.id));
   return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
 }
 export type ReviewRecord = Awaited<ReturnType<typeof listReviews>>[number];
+
+/**
+ * listReviews as one JSON array column of another query (the design page reads its design,
+ * revisions, reviews and audit in one query): the same rows in the same order.
+ */
+export function reviewsJson(designId: SQL) {
+  const pairs = Object.entries(reviewColumns).flatMap(([key, column]) => [sql.raw(`'${key}'`), column]);
+  return sql<
+    ReviewRecord[]
+  >`(select coalesce(json_agg(json_build_object(${sql.join(pairs, sql`, `)}) order by ${reviews.createdAt}, ${reviews.id}), '[]'::json)
+    from ${reviews} join ${users} on ${users.id} = ${reviews.authorId} where ${reviews.designId} = ${designId})`;
+}
+
+/** A row of reviewsJson as listReviews reads it (the JSON's timestamp is PostgreSQL's text, not ISO). */
+export const reviewFromJson = (row: ReviewRecord): ReviewRecord => ({
+  ...row,
+  createdAt: new Date(row.createdAt).toISOString(),
+});
 
 export type AddReviewInput = {
   designId: string;

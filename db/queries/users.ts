@@ -1,6 +1,7 @@
 import { and, asc, eq, inArray, sql } from "drizzle-orm";
 import type { Db, Tx } from "../client";
 import { getDb } from "../client";
+import { preparedOnce } from "./prepared";
 import { alias } from "drizzle-orm/pg-core";
 import { memberships, teams, users, type Role } from "../schema";
 import { recordAudit } from "./audit";
@@ -63,7 +64,11 @@ export type TeamOfUser = { id: string; name: string; role: Role };
  * member of `teamId`, with every team of the user in the order joined, or null if not a member.
  */
 export async function getMemberWithTeams(userId: string, teamId: string) {
-  const db = await getDb();
+  const rows = await memberWithTeams(await getDb()).execute({ userId, teamId });
+  return rows[0] ?? null;
+}
+
+const memberWithTeams = preparedOnce((db) => {
   const mine = alias(memberships, "mine");
   const myTeam = alias(teams, "my_team");
   const teamsOfUser = db
@@ -77,15 +82,15 @@ export async function getMemberWithTeams(userId: string, teamId: string) {
     .from(mine)
     .innerJoin(myTeam, eq(myTeam.id, mine.teamId))
     .where(eq(mine.userId, memberships.userId));
-  const rows = await db
+  return db
     .select({ ...memberColumns, teams: sql<TeamOfUser[]>`(${teamsOfUser})` })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .innerJoin(teams, eq(teams.id, memberships.teamId))
-    .where(and(eq(memberships.userId, userId), eq(memberships.teamId, teamId)))
-    .limit(1);
-  return rows[0] ?? null;
-}
+    .where(and(eq(memberships.userId, sql.placeholder("userId")), eq(memberships.teamId, sql.placeholder("teamId"))))
+    .limit(1)
+    .prepare("member_with_teams");
+});
 
 export async function listMembers(teamId: string) {
   const db = await getDb();

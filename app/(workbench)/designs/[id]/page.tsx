@@ -11,11 +11,8 @@ import { ComparePicker } from "@/components/review/compare-picker";
 import { ReviewPanel } from "@/components/review/review-panel";
 import { StatusBadge, statusExplained } from "@/components/review/status-badge";
 import { UnitsPanel } from "@/components/units/units-panel";
-import { listTargetAudit } from "@/db/queries/audit";
-import { getDesignWithHeads } from "@/db/queries/designs";
+import { getDesignPage } from "@/db/queries/design-page";
 import { isUuid } from "@/lib/ids";
-import { listLibrary } from "@/db/queries/library";
-import { listReviews } from "@/db/queries/reviews";
 import { formatSI } from "@/lib/design/format";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
@@ -30,22 +27,18 @@ export default async function DesignPage({ params }: { params: Promise<{ id: str
   const { id } = await params;
   const caller = await requirePageCaller(`/designs/${id}`);
   if (!isUuid(id)) notFound();
-  const found = await getDesignWithHeads(id, caller.teamId);
+  const found = await getDesignPage(id, caller.teamId);
   // Makers see approved designs only; anything else is "not found" for them, as in the API.
   if (!found || !can(caller, "design.read", found.view)) notFound();
-  const { view: design, heads: revisions } = found;
+  const { view: design, heads: revisions, reviews, audit } = found;
+  // Only a pair's parts are named from the library (a plan's build sheet lists its own).
+  const library = design.kind === "pair" ? found.library : undefined;
   const viewer = designViewerFor(caller, design);
   // The history lists each revision's head; the one diff it opens on (the last save against the
   // one before) is worked out from those two revisions' full records, once: revisions never change.
   const last = design.revision;
   const firstPair = [Math.max(1, last - 1), last] as const;
-  const [changes, reviews, audit, library] = await Promise.all([
-    revisionChanges(design.id, ...firstPair),
-    listReviews(design.id),
-    listTargetAudit(caller.teamId, "design", design.id),
-    // Only a pair's parts are named from the library (a plan's build sheet lists its own).
-    design.kind === "pair" ? listLibrary(caller.teamId) : undefined,
-  ]);
+  const changes = await revisionChanges(design.id, ...firstPair);
   const firstDiff = { a: firstPair[0], b: firstPair[1], changes };
   // One object for every client section (sent once in the page's data), without the revision list.
   const forClient = clientDesignView(design);
