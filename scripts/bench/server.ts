@@ -11,7 +11,9 @@
 // browser would have it all, never to the first byte: nothing below the fold is left out by streaming.
 // The page and compare figures also come as CPU ratios (*.cpuRatio: the server's CPU time per
 // request ÷ health's, from /proc), which another process's load on this shared machine moves far
-// less than wall time. First calls are timed once the server says its start-up work is done; a
+// less than wall time; page.floor.cpuRatio is the same for a signed-in page with nothing in it (a
+// design id that is not there), the part of every page's cost that is the workbench's frame and the
+// framework's rendering. First calls are timed once the server says its start-up work is done; a
 // first call is one sample by nature (one start, one first call), its warm figure the median of
 // eleven, so the ratio's noise is the first call's own.
 // Build first (`npx next build`, or with NEXT_DIST_DIR). Nothing here asserts.
@@ -64,7 +66,8 @@ async function sessionCookie(email: string): Promise<string> {
   }
 }
 
-type Call = { path: string; method?: "GET" | "POST"; body?: unknown; cookie?: string };
+/** `status`: the answer expected when it is not a success (a page of a design that is not there: 404). */
+type Call = { path: string; method?: "GET" | "POST"; body?: unknown; cookie?: string; status?: number };
 
 /** Milliseconds for one request, body read to the end; throws on a non-2xx answer. */
 async function timed(call: Call): Promise<number> {
@@ -79,7 +82,8 @@ async function timed(call: Call): Promise<number> {
   });
   await res.arrayBuffer();
   const ms = performance.now() - t0;
-  if (!res.ok) throw new Error(`${call.method ?? "GET"} ${call.path} answered ${res.status}`);
+  if (call.status ? res.status !== call.status : !res.ok)
+    throw new Error(`${call.method ?? "GET"} ${call.path} answered ${res.status}`);
   return ms;
 }
 
@@ -256,7 +260,13 @@ async function atScale(): Promise<Record<string, number>> {
     const health = median(t.health!);
     const cpu = await cpuPerRequest(
       server.pid!,
-      { health: calls.health!, designPage: calls.designPage!, compare: calls.compare! },
+      {
+        health: calls.health!,
+        designPage: calls.designPage!,
+        compare: calls.compare!,
+        // The least a signed-in page costs: the workbench's frame around a design that is not there.
+        floorPage: as({ path: "/designs/00000000-0000-4000-8000-000000000000", status: 404 }),
+      },
       40,
     );
 
@@ -305,6 +315,7 @@ async function atScale(): Promise<Record<string, number>> {
       "compare.ratio": median(t.compare!) / health,
       "design.page.cpuRatio": cpu.designPage! / cpu.health!,
       "compare.cpuRatio": cpu.compare! / cpu.health!,
+      "page.floor.cpuRatio": cpu.floorPage! / cpu.health!,
       "health.idle.p99.ms": quantile(idle, 0.99),
       "health.underSheets.p99Ratio": quantile(busy, 0.99) / quantile(idle, 0.99),
       "server.rss.start.MB": Math.round(rssStartMB),
