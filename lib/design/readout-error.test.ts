@@ -7,7 +7,7 @@ import { describe, expect, it } from "vitest";
 import { errorAt } from "./error-budget";
 import { monteCarlo } from "./monte-carlo";
 import { solve } from "./solve";
-import { req } from "./test-helpers";
+import { idealLoggerAdc, loggerBurstInput, req } from "./test-helpers";
 
 const termOf = (terms: { source: string; errorA: number }[], source: string) =>
   terms.find((t) => t.source === source)?.errorA ?? NaN;
@@ -79,16 +79,8 @@ describe("a converter whose own error is not stated reads with its class's typic
   });
   it("the demo logger's burst range is feasible only with an ideal converter, which must now be stated to count", () => {
     // docs/model.md §6: 2 mA–180 mA from 3.0 V, 60 mV, 12 bits at 2.5 V, 2 % from 18 mA.
-    const burst = { current: { min: "2 mA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } };
-    const ideal = {
-      kind: "adc" as const,
-      bits: 12,
-      fullScale: "2.5 V",
-      reference: { tolerance: 0, tempco: 0 },
-      offsetLsb: 0,
-      gainError: 0,
-      inlLsb: 0,
-    };
+    const burst = loggerBurstInput;
+    const ideal = idealLoggerAdc;
     expect(solve(req({ ...burst, readout: ideal })).feasibleCount).toBeGreaterThan(0);
     // 12 bits: 3.5 LSB of fixed error (offset, INL, half a step) where half a step was counted.
     const unstated = solve(req({ ...burst, readout: { kind: "adc", bits: 12, fullScale: "2.5 V" } }));

@@ -6,19 +6,11 @@ import { evaluateCandidate } from "./candidate";
 import { solve } from "./solve";
 import { savedPairVerdict, savedPlanVerdict } from "./saved-verdict";
 import { planChoiceOf } from "./range-candidates";
-import { demoLoggerInput, req } from "./test-helpers";
+import { demoLoggerInput, idealLoggerAdc, loggerBurstInput, req } from "./test-helpers";
 
 // docs/model.md §6: the logger's burst range as saved before issue 14, no readout figures stated.
-const burst = { current: { min: "2 mA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } };
-const idealAdc = {
-  kind: "adc" as const,
-  bits: 12,
-  fullScale: "2.5 V",
-  reference: { tolerance: 0, tempco: 0 },
-  offsetLsb: 0,
-  gainError: 0,
-  inlLsb: 0,
-};
+const burst = loggerBurstInput;
+const idealAdc = idealLoggerAdc;
 
 describe("a saved pair under today's model", () => {
   // The pair the old rule (an ideal converter) called feasible: with the zeros stated it still is.

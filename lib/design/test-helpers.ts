@@ -32,6 +32,16 @@ export const demoLoggerInput = {
   resolution: { countsAtMin: 10 },
 } as const satisfies RequirementInput;
 
+/** docs/model.md §6: the logger's burst range (2 mA–180 mA), as saved before issue 14: no readout stated. */
+export const loggerBurstInput = {
+  current: { min: "2 mA", max: "180 mA" },
+  supply: { voltage: "3.0 V" },
+  drop: { max: "60 mV" },
+} as const satisfies RequirementInput;
+
+/** The burst range's 12-bit, 2.5 V converter with every error figure stated as zero (the pre-issue-14 assumption). */
+export const idealLoggerAdc = { kind: "adc", bits: 12, fullScale: "2.5 V", ...idealConverter } as const;
+
 /**
  * Issue 11's sensor node: a 3.3 V node at 5 µA–250 mA, 50 mV allowed, 12-bit at 3.3 V, 1 % from
  * 1 mA over −20…60 °C. No single pair covers it; the diagnosis must still say what would work.

@@ -8,19 +8,11 @@ import { fixtureView } from "@/lib/build-sheet/fixtures";
 import { renderBuildSheet } from "@/lib/build-sheet/render";
 import { sheetData } from "@/lib/build-sheet/sheet-data";
 import { solve } from "@/lib/design/solve";
-import { req } from "@/lib/design/test-helpers";
+import { idealLoggerAdc, loggerBurstInput, req } from "@/lib/design/test-helpers";
 
-const burst = { current: { min: "2 mA", max: "180 mA" }, supply: { voltage: "3.0 V" }, drop: { max: "60 mV" } };
+const burst = loggerBurstInput;
 // The pair an ideal converter made feasible (the zeros stated: what the old rule assumed).
-const idealAdc = {
-  kind: "adc" as const,
-  bits: 12,
-  fullScale: "2.5 V",
-  reference: { tolerance: 0, tempco: 0 },
-  offsetLsb: 0,
-  gainError: 0,
-  inlLsb: 0,
-};
+const idealAdc = idealLoggerAdc;
 const c = solve(req({ ...burst, readout: idealAdc })).candidates.find((x) => x.feasible)!;
 const choice = { shuntOhms: c.shuntOhms, gain: c.gain };
 
