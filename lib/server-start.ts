@@ -101,17 +101,15 @@ async function warmRoutes(port: number) {
 }
 
 /**
- * First-use costs paid before the first request rather than by it: the engine's first sweep (JIT,
- * unit tables), the database's first reads, and the build sheet's typeface and PDF modules (the
- * typeface is built once per process and shared). A failure here is logged and never stops the start.
+ * First-use costs paid before the first request rather than by it: the database's first reads and
+ * the build sheet's worker threads with their typeface and PDF modules. The engine is warmed by
+ * each route in its own copy (lib/warm-up): a solve here would warm only this bundle's copy. A
+ * failure here is logged and never stops the start.
  */
 async function warmUp() {
   const t0 = performance.now();
   try {
-    const { parseRequirement, solve } = await import("@/lib/design");
     const { fixtureView, loggerRequirement } = await import("@/lib/build-sheet/fixtures");
-    const parsed = parseRequirement(loggerRequirement);
-    if (parsed.ok) solve(parsed.requirement);
     const { pingDatabase } = await import("@/db/queries/health");
     await pingDatabase();
     // Through the pool, one sheet per worker at once, so every worker thread starts and loads
@@ -123,7 +121,7 @@ async function warmUp() {
         renderBuildSheetOffThread(sample, { team: "warm-up", generatedAt: new Date() }),
       ),
     );
-    console.log(`[start] engine, database and build sheet warmed in ${Math.round(performance.now() - t0)} ms`);
+    console.log(`[start] database and build sheet warmed in ${Math.round(performance.now() - t0)} ms`);
   } catch (err) {
     console.warn(`[start] warm-up skipped: ${(err as Error).message}`);
   }
