@@ -1,4 +1,5 @@
 // The build sheet's typefaces: static WOFF files from npm that react-pdf reads as they are.
+// They are handed to react-pdf as plain sfnt data, made once from each WOFF (./woff.ts says why).
 // Inter (a real regular and a real bold, one file each for Latin, Greek and Cyrillic together)
 // sets the sheet; Noto Sans SC draws the Chinese and Japanese a design's name or project may
 // hold. react-pdf picks, character by character, the first family of a list that has the glyph.
@@ -10,6 +11,7 @@
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { Font } from "@react-pdf/renderer";
+import { woffToSfnt } from "./woff";
 
 const WEIGHTS = [400, 700] as const;
 
@@ -24,8 +26,26 @@ const CJK_PKG = ["@fontsource", "noto-sans-sc"];
 const cjkFile = (slice: string, weight: number) =>
   modules(...CJK_PKG, "files", `noto-sans-sc-${slice.replace(/[[\]]/g, "")}-${weight}-normal.woff`);
 
-/** Inter's regular and bold files, for a baseline that writes the same text without react-pdf (bench). */
-export const interFontFiles = () => ({ regular: interFile(400), bold: interFile(700) });
+const sfnts = new Map<string, Buffer>();
+
+/** The sfnt inside a WOFF file of the packages, read and inflated once per process. */
+function sfntOf(file: string): Buffer {
+  let sfnt = sfnts.get(file);
+  if (!sfnt) {
+    let woff: Buffer;
+    try {
+      woff = readFileSync(file);
+    } catch {
+      throw new Error(`The build sheet's typeface is missing (${file}); install the app's dependencies.`);
+    }
+    sfnt = woffToSfnt(woff);
+    sfnts.set(file, sfnt);
+  }
+  return sfnt;
+}
+
+/** Inter's regular and bold as the sheet embeds them, for a baseline that writes the same text without react-pdf (bench). */
+export const interFontData = () => ({ regular: sfntOf(interFile(400)), bold: sfntOf(interFile(700)) });
 
 /** The families the sheet's own words and figures are set in (charts, schematic): µ and Ω included. */
 export const LABEL_FONTS = [INTER];
@@ -62,7 +82,13 @@ function slices(): Slice[] {
 function register(family: string, file: (weight: number) => string) {
   // Asked of react-pdf itself: a module reload in development gives it a fresh, empty registry.
   if (Font.getRegisteredFontFamilies().includes(family)) return;
-  Font.register({ family, fonts: WEIGHTS.map((fontWeight) => ({ src: file(fontWeight), fontWeight })) });
+  Font.register({
+    family,
+    fonts: WEIGHTS.map((fontWeight) => ({
+      src: `data:font/sfnt;base64,${sfntOf(file(fontWeight)).toString("base64")}`,
+      fontWeight,
+    })),
+  });
 }
 
 /**

@@ -6,8 +6,7 @@
 import { createRequire } from "node:module";
 import { getDocumentProxy } from "unpdf";
 import { fixtureView, loggerRequirement } from "../../lib/build-sheet/fixtures";
-import { readFileSync } from "node:fs";
-import { interFontFiles } from "../../lib/build-sheet/fonts";
+import { interFontData } from "../../lib/build-sheet/fonts";
 import { renderBuildSheet } from "../../lib/build-sheet/render";
 
 /** The part of pdfkit's API the baseline uses (the package ships no types). */
@@ -98,9 +97,8 @@ export async function run(): Promise<Record<string, number>> {
   const sheet = await renderBuildSheet(view, meta);
   const first = performance.now() - t0;
   const pages = await textRuns(sheet);
-  // The same static files the sheet embeds (react-pdf reads them through fontkit, as pdfkit does here).
-  const files = interFontFiles();
-  const fonts = { regular: readFileSync(files.regular), bold: readFileSync(files.bold) };
+  // The same font data the sheet embeds (react-pdf reads it through fontkit, as pdfkit does here).
+  const fonts = interFontData();
   const runBaseline = () => baseline(pages, fonts);
   const runSheet = () => renderBuildSheet(view, meta);
   for (let k = 0; k < 3; k++) {
