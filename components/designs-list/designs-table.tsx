@@ -158,28 +158,28 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
         <table className="w-full text-sm" aria-label="Designs">
           <thead className="text-left text-xs text-ink-muted">
             <tr>
-              <th scope="col" className="w-8 px-3 py-2">
+              <th scope="col" className="w-8 px-2 sm:px-3 py-2">
                 <span className="sr-only">Pick to compare</span>
               </th>
-              <th scope="col" className="px-3 py-2 font-medium">
+              <th scope="col" className="px-2 sm:px-3 py-2 font-medium">
                 Name
               </th>
-              <th scope="col" className="hidden px-3 py-2 font-medium md:table-cell">
+              <th scope="col" className="hidden px-2 sm:px-3 py-2 font-medium md:table-cell">
                 Project
               </th>
-              <th scope="col" className="px-3 py-2 font-medium">
+              <th scope="col" className="px-2 sm:px-3 py-2 font-medium">
                 Status
               </th>
-              <th scope="col" className="hidden px-3 py-2 font-medium lg:table-cell">
+              <th scope="col" className="hidden px-2 sm:px-3 py-2 font-medium lg:table-cell">
                 Revision
               </th>
-              <th scope="col" className="hidden px-3 py-2 font-medium md:table-cell">
+              <th scope="col" className="hidden px-2 sm:px-3 py-2 font-medium md:table-cell">
                 Choice
               </th>
-              <th scope="col" className="hidden px-3 py-2 font-medium lg:table-cell">
+              <th scope="col" className="hidden px-2 sm:px-3 py-2 font-medium lg:table-cell">
                 Author
               </th>
-              <th scope="col" className="px-3 py-2 font-medium" aria-sort="descending">
+              <th scope="col" className="px-2 sm:px-3 py-2 font-medium" aria-sort="descending">
                 Updated (UTC)
               </th>
             </tr>
@@ -189,7 +189,7 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
               const on = picked.some((p) => p.id === d.id);
               return (
                 <tr key={d.id} className="border-t border-line align-top hover:bg-sunken/50">
-                  <td className="px-3 py-1.5">
+                  <td className="px-2 sm:px-3 py-1.5">
                     <input
                       type="checkbox"
                       checked={on}
@@ -199,7 +199,7 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
                     />
                   </td>
                   {/* A long unbroken name wraps anywhere rather than push the other columns out. */}
-                  <td className="min-w-[8rem] max-w-md px-3 py-1.5 [overflow-wrap:anywhere]">
+                  <td className="min-w-[8rem] max-w-md px-2 sm:px-3 py-1.5 [overflow-wrap:anywhere]">
                     <Link href={`/designs/${d.id}`} className="font-medium text-ink underline-offset-2 hover:underline">
                       {d.name}
                     </Link>
@@ -210,22 +210,22 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
                     ) : null}
                     <span className="block text-xs text-ink-muted md:hidden">{d.project ?? "no project"}</span>
                   </td>
-                  <td className="hidden max-w-xs px-3 py-1.5 [overflow-wrap:anywhere] md:table-cell">
+                  <td className="hidden max-w-xs px-2 sm:px-3 py-1.5 [overflow-wrap:anywhere] md:table-cell">
                     {d.project || <span className="text-ink-faint">—</span>}
                   </td>
-                  <td className="whitespace-nowrap px-3 py-1.5">
+                  <td className="whitespace-nowrap px-2 sm:px-3 py-1.5">
                     <StatusBadge status={d.status} />
                   </td>
-                  <td className="hidden whitespace-nowrap px-3 py-1.5 num lg:table-cell">{d.revision}</td>
-                  <td className="hidden whitespace-nowrap px-3 py-1.5 num md:table-cell">
+                  <td className="hidden whitespace-nowrap px-2 sm:px-3 py-1.5 num lg:table-cell">{d.revision}</td>
+                  <td className="hidden whitespace-nowrap px-2 sm:px-3 py-1.5 num md:table-cell">
                     {d.shuntOhms !== null && d.gain !== null
                       ? `${formatSI(d.shuntOhms, "Ω")} × ${Number(d.gain.toPrecision(4))}`
                       : d.planRanges
                         ? `${d.planRanges} ranges`
                         : "—"}
                   </td>
-                  <td className="hidden whitespace-nowrap px-3 py-1.5 lg:table-cell">{d.authorName}</td>
-                  <td className="whitespace-nowrap px-3 py-1.5 num">
+                  <td className="hidden whitespace-nowrap px-2 sm:px-3 py-1.5 lg:table-cell">{d.authorName}</td>
+                  <td className="whitespace-nowrap px-2 sm:px-3 py-1.5 num">
                     {day(d.updatedAt)}
                     <span className="hidden sm:inline"> {time(d.updatedAt)}</span>
                   </td>
@@ -234,14 +234,14 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
             })}
             {rows.length === 0 && !list.isPending && !list.isError && (
               <tr>
-                <td colSpan={8} className="px-3 py-6 text-center text-ink-muted">
+                <td colSpan={8} className="px-2 sm:px-3 py-6 text-center text-ink-muted">
                   {filtered ? "No design matches the search and filter." : "No designs on this page."}
                 </td>
               </tr>
             )}
             {list.isPending && (
               <tr>
-                <td colSpan={8} className="px-3 py-6 text-center text-ink-muted">
+                <td colSpan={8} className="px-2 sm:px-3 py-6 text-center text-ink-muted">
                   Loading designs…
                 </td>
               </tr>

@@ -82,7 +82,8 @@ export function RevisionHistory({
           <thead className="text-xs text-ink-muted">
             <tr className="border-b border-line">
               <th className="py-1 pr-3 font-medium">Revision</th>
-              <th className="py-1 pr-3 font-medium">Author</th>
+              {/* On a phone the author goes under the revision number, so the row fits without scrolling. */}
+              <th className="hidden py-1 pr-3 font-medium sm:table-cell">Author</th>
               <th className="py-1 pr-3 font-medium">Saved</th>
               <th className="py-1 pr-3 text-right font-medium">Shunt</th>
               <th className="py-1 pr-3 text-right font-medium">Gain</th>
@@ -92,8 +93,11 @@ export function RevisionHistory({
           <tbody>
             {shown.map((r) => (
               <tr key={r.revision} className="border-b border-line last:border-0">
-                <td className="py-1 pr-3">{r.revision}</td>
-                <td className="py-1 pr-3">{r.authorName}</td>
+                <td className="py-1 pr-3">
+                  {r.revision}
+                  <span className="block text-xs text-ink-muted sm:hidden">{r.authorName}</span>
+                </td>
+                <td className="hidden py-1 pr-3 sm:table-cell">{r.authorName}</td>
                 <td className="py-1 pr-3 text-xs text-ink-muted">{formatWhen(r.createdAt)}</td>
                 {r.kind === "plan" ? (
                   <>

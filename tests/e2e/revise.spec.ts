@@ -80,6 +80,11 @@ test("designer → returned → revise → resubmit → approve", async ({ brows
   await expect(rp.getByText("Revision 2 approved")).toBeVisible();
   await expect(rp.getByTestId("design-status").first()).toHaveText("approved");
   await checkScreen(rp, `${shots}/approved-phone.png`);
+  // On a phone the revisions table fits its panel (the author goes under the revision number).
+  const history = rp.getByRole("table").filter({ has: rp.getByRole("columnheader", { name: "Approval" }) });
+  await expect(history.getByRole("row", { name: /^2 / })).toContainText("approved");
+  const sideways = await history.evaluate((t) => t.parentElement!.scrollWidth - t.parentElement!.clientWidth);
+  expect(sideways, "the revisions table scrolls sideways at 390 px").toBeLessThanOrEqual(0);
   await rctx.close();
 });
 
