@@ -215,6 +215,15 @@ export function DesignsTable({ initial, initialParams }: { initial: DesignsPage;
                   </td>
                   <td className="whitespace-nowrap px-2 sm:px-3 py-1.5">
                     <StatusBadge status={d.status} />
+                    {d.failsCurrentModel && (
+                      <span
+                        className="mt-0.5 block"
+                        data-testid="fails-current-model"
+                        title="Its saved figures fail under the current model: open it to see what fails before building it."
+                      >
+                        <Badge tone="bad">fails today</Badge>
+                      </span>
+                    )}
                   </td>
                   <td className="hidden whitespace-nowrap px-2 sm:px-3 py-1.5 num lg:table-cell">{d.revision}</td>
                   <td className="hidden whitespace-nowrap px-2 sm:px-3 py-1.5 num md:table-cell">

@@ -3,7 +3,8 @@
 import { and, asc, desc, eq, ilike, inArray, or, sql, type SQL } from "drizzle-orm";
 import { alias } from "drizzle-orm/pg-core";
 import { z } from "zod";
-import { designKindOf, parseRequirement, type DesignKind, type Requirement } from "@/lib/design";
+import { designKindOf, parseRequirement, type Choice, type DesignKind, type Requirement } from "@/lib/design";
+import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { DesignView } from "@/lib/design-view";
 import { isUuid } from "@/lib/ids";
 import { getDb, type Tx } from "../client";
@@ -284,6 +285,40 @@ export async function listRevisions(designId: string, only?: number[]) {
   }));
 }
 export type RevisionRecord = Awaited<ReturnType<typeof listRevisions>>[number];
+
+/** What today's model needs to re-check a revision: its requirement and its pair or plan. */
+export type RevisionBasisRow = { designId: string; revision: number; requirement: Requirement } & (
+  { kind: "pair"; choice: Choice; plan: null } | { kind: "plan"; choice: null; plan: PlanChoice }
+);
+
+/** The requirement and the pair or plan of each revision asked for, in one read; missing ones are left out. */
+export async function revisionBasesOf(keys: { designId: string; revision: number }[]): Promise<RevisionBasisRow[]> {
+  const asked = keys.filter((k) => isUuid(k.designId) && Number.isInteger(k.revision));
+  if (asked.length === 0) return [];
+  const db = await getDb();
+  const pairs = sql.join(
+    asked.map((k) => sql`(${k.designId}::uuid, ${k.revision}::int)`),
+    sql`, `,
+  );
+  const rows = await db
+    .select({
+      designId: designRevisions.designId,
+      revision: designRevisions.revision,
+      requirement: designRevisions.requirement,
+      choice: designRevisions.choice,
+      plan: designRevisions.plan,
+    })
+    .from(designRevisions)
+    .where(sql`(${designRevisions.designId}, ${designRevisions.revision}) in (${pairs})`);
+  return rows.map((r): RevisionBasisRow => {
+    const basis = { designId: r.designId, revision: r.revision };
+    const requirement = revisionRequirement(r.designId, r.revision, r.requirement);
+    // Exactly one of choice and plan is set (a check constraint says so).
+    return r.plan
+      ? { ...basis, requirement, kind: "plan", choice: null, plan: r.plan }
+      : { ...basis, requirement, kind: "pair", choice: r.choice!, plan: null };
+  });
+}
 
 /**
  * The head of every revision (number, name, author, time, choice, approval), oldest first: a design

@@ -153,6 +153,9 @@ const designRow = z.object({
   shuntOhms: z.number().nullable().describe("the pair's shunt (null for a range plan)"),
   gain: z.number().nullable(),
   planRanges: z.number().int().nullable().describe("how many ranges a range plan has (null for a pair)"),
+  failsCurrentModel: z
+    .boolean()
+    .describe("true when the current revision's pair or plan fails under today's model (its page names what fails)"),
 });
 const designSummary = {
   id,

@@ -28,6 +28,11 @@ export class RevisionMemo<V> {
     return value;
   }
 
+  /** The value kept for `key`, if any, without computing one (and without counting it as a use). */
+  peek(key: string): V | undefined {
+    return this.entries.get(key);
+  }
+
   delete(key: string) {
     this.entries.delete(key);
   }

@@ -7,7 +7,10 @@ import { evaluateCandidate } from "@/lib/design/candidate";
 import { candidateStudy, type CandidateStudyFigures } from "@/lib/design/candidate-study";
 import { benchHowTo, benchRows, cautions, type BenchRow } from "@/lib/build-sheet/sheet-data";
 import { savedPairVerdict, savedPlanVerdict, type SavedVerdict } from "@/lib/design/saved-verdict";
-import type { DesignView, PairDesignView } from "@/lib/design-view";
+import type { Choice } from "@/lib/design";
+import type { PlanChoice } from "@/lib/design/plan-choice";
+import type { Requirement } from "@/lib/design/requirement";
+import type { PairDesignView } from "@/lib/design-view";
 import { RevisionMemo, revisionKey } from "./revision-memo";
 
 const studies = new RevisionMemo<CandidateStudyFigures>(500);
@@ -41,13 +44,23 @@ export function pairBuildFigures(design: PairDesignView): PairBuildFigures {
   });
 }
 
-const verdicts = new RevisionMemo<SavedVerdict>(1000);
+// Sized for the designs list too: a page of up to 200 rows, each its design's current revision.
+const verdicts = new RevisionMemo<SavedVerdict>(4000);
+
+/** What today's model re-checks of a saved revision. */
+export type VerdictBasis = { id: string; revision: number; requirement: Requirement } & (
+  { kind: "pair"; choice: Choice } | { kind: "plan"; plan: PlanChoice }
+);
 
 /** Whether the saved figures still pass under today's model (the page says so at the top when not). */
-export function savedVerdictOf(design: DesignView): SavedVerdict {
+export function savedVerdictOf(design: VerdictBasis): SavedVerdict {
   return verdicts.get(revisionKey(design.id, design.revision), () =>
     design.kind === "plan"
       ? savedPlanVerdict(design.requirement, design.plan)
       : savedPairVerdict(design.requirement, design.choice),
   );
 }
+
+/** The verdict already worked out for a revision, if any (the designs list reads the rest). */
+export const knownVerdict = (designId: string, revision: number): SavedVerdict | undefined =>
+  verdicts.peek(revisionKey(designId, revision));

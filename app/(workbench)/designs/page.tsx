@@ -5,9 +5,9 @@ import { DesignsTable } from "@/components/designs-list/designs-table";
 import { readListParams } from "@/components/designs-list/list-params";
 import { buttonClass } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/panel";
-import { pageDesigns } from "@/db/queries/designs";
 import { requirePageCaller } from "@/lib/auth/gate";
-import { decodeListCursor, encodeListCursor } from "@/lib/saved-designs/list-cursor";
+import { decodeListCursor } from "@/lib/saved-designs/list-cursor";
+import { designsListPage } from "@/lib/saved-designs/list-page";
 import { can } from "@/lib/auth/policy";
 
 export const metadata: Metadata = { title: "Designs" };
@@ -26,18 +26,13 @@ export default async function DesignsPage({
   // browser through GET /api/designs. A cursor this team's list did not give out starts at page 1.
   const after = params.cursor ? decodeListCursor(caller.teamId, params.cursor) : undefined;
   if (after === null) params.cursor = "";
-  const page = await pageDesigns(caller.teamId, {
-    approvedOnly,
+  const initial = await designsListPage(caller, {
     status: params.status || undefined,
     q: params.q || undefined,
     limit: PAGE_SIZE,
     after: after ?? undefined,
   });
-  const initial = {
-    designs: page.designs,
-    nextCursor: page.next ? encodeListCursor(caller.teamId, page.next) : null,
-  };
-  const teamHasNone = !params.q && !params.status && !params.cursor && page.designs.length === 0;
+  const teamHasNone = !params.q && !params.status && !params.cursor && initial.designs.length === 0;
   const canCreate = can(caller, "design.create");
   return (
     <div className="flex min-w-0 flex-col gap-4">

@@ -1,10 +1,9 @@
 import { z } from "zod";
-import { pageDesigns } from "@/db/queries/designs";
 import { designStatusEnum } from "@/db/schema";
 import { apiRoute } from "@/lib/auth/gate";
-import { can } from "@/lib/auth/policy";
 import { HttpError, json } from "@/lib/http";
-import { decodeListCursor, encodeListCursor } from "@/lib/saved-designs/list-cursor";
+import { decodeListCursor } from "@/lib/saved-designs/list-cursor";
+import { designsListPage } from "@/lib/saved-designs/list-page";
 import { idempotencyKeyOf, saveNewDesign } from "@/lib/saved-designs/create";
 import { createDesignSchema } from "@/lib/saved-designs/service";
 
@@ -32,14 +31,12 @@ export const GET = apiRoute(
         cursor: ["was not given out by this team's designs list; start again without a cursor"],
       });
     }
-    const page = await pageDesigns(caller.teamId, {
-      approvedOnly: !can(caller, "design.read-unapproved"),
+    return designsListPage(caller, {
       status: query.status,
       q: query.q || undefined,
       limit: query.limit,
       after,
     });
-    return { designs: page.designs, nextCursor: page.next ? encodeListCursor(caller.teamId, page.next) : null };
   },
 );
 
