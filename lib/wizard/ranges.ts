@@ -1,10 +1,11 @@
 // Plausible bounds for what a current-sense front end is designed for. The engine takes any
 // finite number; a typo such as 1e30 A would otherwise come back as figures in "PA". These are the
 // product's working range (common practice, no source), not physics: wide enough for a picoammeter
-// front end and a welding-current shunt alike.
+// front end and a welding-current shunt alike. Currents go as far as the engine takes them
+// (MAX_CURRENT_A), so a design saved through the API can always be opened in the wizard.
 import { formatSI } from "@/lib/design/format";
 import { parseQuantity, type Dimension } from "@/lib/design/units";
-import type { FieldErrors, Requirement } from "@/lib/design/requirement";
+import { MAX_CURRENT_A, type FieldErrors, type Requirement } from "@/lib/design/requirement";
 
 type Bound = {
   path: string;
@@ -25,7 +26,7 @@ const bounds: Bound[] = [
     unit: "A",
     dim: "current",
     min: 1e-12,
-    max: 1e4,
+    max: MAX_CURRENT_A,
     get: (r) => r.current.min,
     signed: true,
   },
@@ -35,7 +36,7 @@ const bounds: Bound[] = [
     unit: "A",
     dim: "current",
     min: 1e-12,
-    max: 1e4,
+    max: MAX_CURRENT_A,
     get: (r) => r.current.max,
   },
   {
@@ -44,7 +45,7 @@ const bounds: Bound[] = [
     unit: "A",
     dim: "current",
     min: 1e-12,
-    max: 1e4,
+    max: MAX_CURRENT_A,
     get: (r) => r.current.typical,
     signed: true,
   },

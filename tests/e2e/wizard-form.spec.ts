@@ -29,7 +29,7 @@ for (const [w, width] of Object.entries(widths)) {
     await field(page, "Maximum current").fill("1e30 A");
     await field(page, "Maximum current").blur();
     await expect(page.locator("#f-current-max-error")).toContainText(
-      "Maximum current: 1 × 10^30 A is outside the range this workbench designs for (1 pA to 10 kA)",
+      "Maximum current: 1 × 10^30 A is outside the range this workbench designs for (1 pA to 100 kA)",
     );
     await field(page, "Maximum current").fill("180 mA");
     await expect(page.locator("#f-current-max-error")).toHaveText("");
