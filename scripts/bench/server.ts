@@ -122,25 +122,33 @@ function treeCpuMs(pid: number): number {
 }
 
 /**
- * The server's CPU time per request of each call, run one after another: on a machine
- * other work shares, a request's wall time grows with their load, its CPU time much less.
+ * The server's CPU time per request of each call: on a machine other work shares, a request's wall
+ * time grows with their load, its CPU time much less. The calls take turns in blocks, three rounds,
+ * so that the garbage one call leaves (collected during whichever runs next) and any drift in the
+ * server's state fall on all of them alike rather than on the one measured after a heavy one.
  */
 async function cpuPerRequest(pid: number, calls: Record<string, Call>, minRounds: number) {
-  // /proc counts CPU in 10 ms ticks: each call runs until it has used at least 60 ticks (a cheap
-  // one such as health needs a few hundred requests for that), so the rounding stays under 2 %.
-  const MIN_CPU_MS = 600;
-  const MAX_ROUNDS = 1000;
-  const out: Record<string, number> = {};
-  for (const [k, c] of Object.entries(calls)) {
-    const before = treeCpuMs(pid);
-    let rounds = 0;
-    while (rounds < MAX_ROUNDS && (rounds < minRounds || treeCpuMs(pid) - before < MIN_CPU_MS)) {
-      await timed(c);
-      rounds++;
+  // /proc counts CPU in 10 ms ticks: each call runs until it has used at least 60 ticks over the
+  // three rounds (a cheap one such as health needs a few hundred requests for that), so the
+  // rounding stays under 2 %.
+  const ROUNDS = 3;
+  const MIN_CPU_MS = 600 / ROUNDS;
+  const MAX_REQUESTS = 1000 / ROUNDS;
+  const cpu: Record<string, number> = {};
+  const requests: Record<string, number> = {};
+  for (let round = 0; round < ROUNDS; round++) {
+    for (const [k, c] of Object.entries(calls)) {
+      const before = treeCpuMs(pid);
+      let n = 0;
+      while (n < MAX_REQUESTS && (n < minRounds / ROUNDS || treeCpuMs(pid) - before < MIN_CPU_MS)) {
+        await timed(c);
+        n++;
+      }
+      cpu[k] = (cpu[k] ?? 0) + treeCpuMs(pid) - before;
+      requests[k] = (requests[k] ?? 0) + n;
     }
-    out[k] = (treeCpuMs(pid) - before) / rounds;
   }
-  return out;
+  return Object.fromEntries(Object.keys(calls).map((k) => [k, cpu[k]! / requests[k]!]));
 }
 
 function ensureScaleData() {
