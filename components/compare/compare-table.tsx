@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { StatusBadge } from "@/components/review/status-badge";
+import type { SavedVerdict } from "@/lib/design/saved-verdict";
 import type { DesignView, DesignViewer } from "@/lib/design-view";
 import { bestIndexes } from "@/lib/saved-designs/compare";
 import { againstOwnLimit, basisDiffers, basisLabel } from "@/lib/saved-designs/figure-basis";
@@ -62,11 +63,14 @@ function Section({
   list,
   mark,
   requirements,
+  ranked,
 }: {
   title: string;
   list: Row[];
   mark: boolean;
   requirements?: DesignView["requirement"][];
+  /** Per design: whether it takes part in "best" (not when it fails under today's model). */
+  ranked?: boolean[];
 }) {
   return (
     <>
@@ -83,7 +87,7 @@ function Section({
               requirements.filter((_, i) => r.values[i] !== undefined && r.values[i] !== null),
             )
           : [];
-        const best = mark && apart.length === 0 ? bestIndexes(r.values, r.info) : [];
+        const best = mark && apart.length === 0 ? bestIndexes(r.values, r.info, ranked) : [];
         return (
           <tr key={r.key} className="border-b border-line last:border-0" data-testid={`row-${r.key}`}>
             <th
@@ -151,12 +155,16 @@ export function CompareTable({
   designs,
   viewers,
   built = [],
+  verdicts = [],
 }: {
   designs: DesignView[];
+  /** Per design, in order: whether its saved pair or plan still passes under today's model. */
+  verdicts?: SavedVerdict[];
   /** Per design id, from the policy on the server. */
   viewers: Record<string, DesignViewer>;
   built?: (Record<keyof typeof builtFields, number | null> | null)[];
 }) {
+  const ranked = designs.map((_, i) => !verdicts[i]?.fails);
   const requirementRows = rows(
     requirementFields,
     designs.map((d) => d.requirement),
@@ -187,6 +195,12 @@ export function CompareTable({
                     {d.project ?? "no project"} · revision {d.revision} · {d.authorName}
                   </span>
                   <StatusBadge status={d.status} />
+                  {verdicts[i]?.fails && (
+                    // Its figures below are as saved; today's model refuses them (its page says why).
+                    <span className="max-w-56 text-right text-xs text-bad" data-testid="compare-fails-today">
+                      Fails under the current model: {verdicts[i].failing.join("; ")}
+                    </span>
+                  )}
                   {viewers[d.id] && (
                     // Only what the verdict buttons read: the whole design would ride along in the page's data.
                     <CompareVerdict
@@ -219,6 +233,7 @@ export function CompareTable({
             )}
             mark
             requirements={designs.map((d) => d.requirement)}
+            ranked={ranked}
           />
           {designs.some((d) => d.requirement.current.min < 0) && (
             <Section
@@ -226,6 +241,7 @@ export function CompareTable({
               list={rows(reverseFields, designs.map(reverseFigures))}
               mark
               requirements={designs.map((d) => d.requirement)}
+              ranked={ranked}
             />
           )}
           {built.some(Boolean) && (

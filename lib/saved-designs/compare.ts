@@ -20,11 +20,13 @@ export const compareQuery = z.object({
 /**
  * Indexes holding the best value of the row. Ties are judged on the value as shown (two designs
  * both showing 2.95 V are equal to the reader), all tied ones are marked, and none when every
- * shown value is the same or the row has no better direction.
+ * shown value is the same or the row has no better direction. Only the designs `ranked` says
+ * (all when it is not given) take part: one whose saved figures fail under today's model is
+ * never "best" on the strength of figures the engine no longer stands behind.
  */
-export function bestIndexes(values: unknown[], info: FieldInfo | undefined): number[] {
+export function bestIndexes(values: unknown[], info: FieldInfo | undefined, ranked?: boolean[]): number[] {
   if (!info?.better) return [];
-  const nums = values.map((v) => (typeof v === "number" && Number.isFinite(v) ? v : null));
+  const nums = values.map((v, i) => (typeof v === "number" && Number.isFinite(v) && (ranked?.[i] ?? true) ? v : null));
   const present = nums.filter((v): v is number => v !== null);
   if (present.length < 2) return [];
   const best = info.better === "lower" ? Math.min(...present) : Math.max(...present);

@@ -11,6 +11,7 @@ import { toDisplayDigits } from "@/lib/display-digits";
 import { builtYieldsOf } from "@/lib/built-units/record";
 import { compareQuery } from "@/lib/saved-designs/compare";
 import { compareCurves } from "@/lib/saved-designs/compare-curves";
+import { savedVerdictOf } from "@/lib/saved-designs/saved-figures";
 
 export const metadata: Metadata = { title: "Compare designs" };
 
@@ -61,11 +62,12 @@ export default async function ComparePage({
         <p className="text-ink-muted">
           Each design is evaluated at its own requirement. A figure row marks the best value only where every design
           takes that figure at the same points (the same span, supply and readout it rests on); otherwise each value is
-          shown against its own design&apos;s limit. Rows whose values differ are in full ink. A range plan shows, among
-          the whole-span figures, only those it takes at the same points as a single pair (the drop and load voltage at
-          the maximum current, the error and steps at the minimum); its per-range figures follow, unranked. A
-          bidirectional design&apos;s figures at its positive end are in the figure rows, those at its negative end in
-          their own rows below them.
+          shown against its own design&apos;s limit. A design whose saved figures fail under today&apos;s model says so
+          under its name and is not ranked. Rows whose values differ are in full ink. A range plan shows, among the
+          whole-span figures, only those it takes at the same points as a single pair (the drop and load voltage at the
+          maximum current, the error and steps at the minimum); its per-range figures follow, unranked. A bidirectional
+          design&apos;s figures at its positive end are in the figure rows, those at its negative end in their own rows
+          below them.
           {missing > 0 &&
             ` ${missing} of the designs asked for ${missing === 1 ? "was" : "were"} not found and ${missing === 1 ? "is" : "are"} left out.`}
         </p>
@@ -97,6 +99,7 @@ export default async function ComparePage({
         designs={designs}
         viewers={Object.fromEntries(designs.map((d) => [d.id, designViewerFor(caller, d)]))}
         built={await builtYieldsOf(designs.map((d) => d.id))}
+        verdicts={designs.map(savedVerdictOf)}
       />
     </div>
   );
