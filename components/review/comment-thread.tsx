@@ -114,6 +114,9 @@ function Entry({ r, replies, designId }: { r: ReviewRecord; replies: ReviewRecor
   );
 }
 
+/** Threads shown before "Show comments on … earlier revisions": a long history opens on its latest. */
+const RECENT_THREADS = 5;
+
 /** Comments and verdicts, one thread per revision (newest revision first), replies nested. */
 export function CommentThreads({
   designId,
@@ -124,10 +127,12 @@ export function CommentThreads({
   currentRevision: number;
   reviews: ReviewRecord[];
 }) {
+  const [all, setAll] = useState(false);
   const revisions = [...new Set([currentRevision, ...reviews.map((r) => r.revision)])].sort((a, b) => b - a);
+  const earlier = revisions.length - RECENT_THREADS;
   return (
     <div className="flex flex-col gap-4">
-      {revisions.map((rev) => {
+      {(all ? revisions : revisions.slice(0, RECENT_THREADS)).map((rev) => {
         const top = reviews.filter((r) => r.revision === rev && !r.parentId);
         return (
           <section key={rev} aria-label={`Comments on revision ${rev}`} className="flex flex-col gap-2">
@@ -151,6 +156,18 @@ export function CommentThreads({
           </section>
         );
       })}
+      {earlier > 0 && (
+        <button
+          type="button"
+          onClick={() => setAll((v) => !v)}
+          aria-expanded={all}
+          className="self-start text-xs text-copper hover:underline"
+        >
+          {all
+            ? `Show the ${RECENT_THREADS} latest threads only`
+            : `Show comments on ${earlier} earlier revision${earlier === 1 ? "" : "s"}`}
+        </button>
+      )}
     </div>
   );
 }
