@@ -286,6 +286,10 @@ export async function listRevisions(designId: string, only?: number[]) {
 }
 export type RevisionRecord = Awaited<ReturnType<typeof listRevisions>>[number];
 
+/** A stored revision's pair or plan, told apart: exactly one of the two is set (a check constraint says so). */
+const pairOrPlan = (choice: Choice | null, plan: PlanChoice | null) =>
+  plan ? { kind: "plan" as const, choice: null, plan } : { kind: "pair" as const, choice: choice!, plan: null };
+
 /** What today's model needs to re-check a revision: its requirement and its pair or plan. */
 export type RevisionBasisRow = { designId: string; revision: number; requirement: Requirement } & (
   { kind: "pair"; choice: Choice; plan: null } | { kind: "plan"; choice: null; plan: PlanChoice }
@@ -310,14 +314,12 @@ export async function revisionBasesOf(keys: { designId: string; revision: number
     })
     .from(designRevisions)
     .where(sql`(${designRevisions.designId}, ${designRevisions.revision}) in (${pairs})`);
-  return rows.map((r): RevisionBasisRow => {
-    const basis = { designId: r.designId, revision: r.revision };
-    const requirement = revisionRequirement(r.designId, r.revision, r.requirement);
-    // Exactly one of choice and plan is set (a check constraint says so).
-    return r.plan
-      ? { ...basis, requirement, kind: "plan", choice: null, plan: r.plan }
-      : { ...basis, requirement, kind: "pair", choice: r.choice!, plan: null };
-  });
+  return rows.map((r): RevisionBasisRow => ({
+    designId: r.designId,
+    revision: r.revision,
+    requirement: revisionRequirement(r.designId, r.revision, r.requirement),
+    ...pairOrPlan(r.choice, r.plan),
+  }));
 }
 
 /**
@@ -344,13 +346,11 @@ async function revisionHeadsOfEach(designIds: string[]) {
     .leftJoinLateral(approval, sql`true`)
     .where(inArray(designRevisions.designId, designIds))
     .orderBy(asc(designRevisions.designId), asc(designRevisions.revision));
-  // Exactly one of choice and plan is set (a check constraint says so).
   const heads = rows.map(({ choice, plan, designId, approval: given, ...r }) => ({
     designId,
     head: {
-      ...(plan
-        ? { ...r, kind: "plan" as const, choice: null, plan }
-        : { ...r, kind: "pair" as const, choice: choice!, plan: null }),
+      ...r,
+      ...pairOrPlan(choice, plan),
       createdAt: r.createdAt.toISOString(),
       approval: approvalOf(r.revision, given),
     },
@@ -390,9 +390,8 @@ const headsJson = sql<HeadJson[]>`(select coalesce(json_agg(json_build_object(
 /** A head of headsJson as revisionHeadsOfEach reads it. */
 function headFromJson({ choice, plan, createdAt, approval, ...r }: HeadJson): RevisionHead {
   return {
-    ...(plan
-      ? { ...r, kind: "plan" as const, choice: null, plan }
-      : { ...r, kind: "pair" as const, choice: choice!, plan: null }),
+    ...r,
+    ...pairOrPlan(choice, plan),
     createdAt: new Date(createdAt).toISOString(),
     approval: approval && approvalOf(r.revision, { ...approval, at: new Date(approval.at) }),
   };
