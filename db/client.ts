@@ -8,6 +8,7 @@ import type { PgDatabase, PgQueryResultHKT } from "drizzle-orm/pg-core";
 import { env } from "@/lib/env";
 import { acquireDataDirLock } from "./lock";
 import * as schema from "./schema";
+import { withStatementCache } from "./statement-cache";
 
 export type Db = PgDatabase<PgQueryResultHKT, typeof schema>;
 export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
@@ -73,7 +74,7 @@ async function open(): Promise<Handle> {
     extensions: { pg_trgm },
     startParams: [...PGlite.defaultStartParams, "-c", `shared_buffers=${PGLITE_SHARED_BUFFERS}`],
   });
-  const db = drizzle(client, { schema });
+  const db = drizzle(withStatementCache(client), { schema });
   await migrate(db, { migrationsFolder: migrationsFolder() });
   return { db: db, kind: "pglite", close: () => client.close() };
 }

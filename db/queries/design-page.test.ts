@@ -1,8 +1,9 @@
 // The design page's one query against the separate reads it replaced (library included), on the demo team's designs
 // (a pair approved after a return, a range plan, a draft) and one with comments, a reply and
 // three revisions: the same rows, keys and numbers to the last bit, in the same order.
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { z } from "zod";
 import { closeDb, getDb } from "../client";
 import { memberships, teams } from "../schema";
 import { seedDemoIfEmpty } from "../seed/index";
@@ -115,6 +116,23 @@ describe("getDesignPage", () => {
       (await separateReads(designIds[0]!, teamId))!.view,
     ]);
     expect(views.some((v) => v?.approval)).toBe(true);
+  });
+
+  // Vitest runs on an in-memory PGlite unless DATABASE_URL names a server (vitest.config.ts).
+  it.runIf(!process.env.DATABASE_URL)("is one named statement on PGlite, planned once for every design", async () => {
+    for (const id of designIds) await getDesignPage(id, teamId);
+    const db = await getDb();
+    const kept = z
+      .object({
+        rows: z.array(z.object({ statement: z.string(), generic_plans: z.number(), custom_plans: z.number() })),
+      })
+      .parse(await db.execute(sql`select statement, generic_plans, custom_plans from pg_prepared_statements`)).rows;
+    // Of the prepared queries these tests run, the page's (the only one with the audit trail) is kept once.
+    const pages = kept.filter((k) => k.statement.includes('"audit_events"'));
+    expect(pages).toHaveLength(1);
+    const [page] = pages;
+    expect(page!.custom_plans).toBe(5);
+    expect(page!.generic_plans).toBeGreaterThanOrEqual(designIds.length * 3 - 5);
   });
 
   it("is null for another team's design and for an id that is not a UUID", async () => {

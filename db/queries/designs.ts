@@ -10,6 +10,7 @@ import { isUuid } from "@/lib/ids";
 import { getDb, type Tx } from "../client";
 import { designRevisions, designs, reviews, users, type DesignStatus } from "../schema";
 import { recordAudit } from "./audit";
+import { preparedOnce } from "./prepared";
 import { RevisionMemo, revisionKey } from "@/lib/saved-designs/revision-memo";
 
 /** Ids come from URLs: anything that is not a UUID cannot name a design (and must not reach SQL as one). */
@@ -434,6 +435,15 @@ export async function getDesignWithHeads(
   return row ? designWithHeadsOf(row) : null;
 }
 
+// The ids as one array parameter: one text, so one kept statement, however many designs are asked.
+const designViews = preparedOnce((db) =>
+  designsWithHeads(db, {})
+    .where(
+      and(sql`${designs.id} = any(${sql.placeholder("ids")}::uuid[])`, eq(designs.teamId, sql.placeholder("teamId"))),
+    )
+    .prepare("design_views"),
+);
+
 /**
  * Several designs as the screens see them, in the order asked, null where one is not this team's
  * (or the id is not one): one query however many designs, for the compare page.
@@ -441,9 +451,7 @@ export async function getDesignWithHeads(
 export async function getDesignViews(designIds: string[], teamId: string): Promise<(DesignView | null)[]> {
   const ids = [...new Set(designIds.filter(isUuid))];
   if (ids.length === 0) return designIds.map(() => null);
-  const rows = await designsWithHeads(await getDb(), {}).where(
-    and(inArray(designs.id, ids), eq(designs.teamId, teamId)),
-  );
+  const rows = await designViews(await getDb()).execute({ ids, teamId });
   const views = new Map(rows.map((r) => [r.design.id, designWithHeadsOf(r).view]));
   return designIds.map((id) => views.get(id) ?? null);
 }
