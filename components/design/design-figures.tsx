@@ -2,21 +2,13 @@
 // component: the engine works the figures out here and the browser gets them as data, so showing a
 // design downloads neither the engine nor its unit parser.
 import type { PairDesignView as DesignView } from "@/lib/design-view";
-import { toDisplayDigits } from "@/lib/display-digits";
-import { savedPairStudy } from "@/lib/saved-designs/saved-figures";
+import { savedPairStudyToDraw } from "@/lib/saved-designs/saved-figures";
 import { CandidateStudyView } from "@/components/candidates/candidate-study-view";
 import { Panel } from "@/components/ui/panel";
 import { RequirementSummary } from "@/components/wizard/requirement-summary";
 
 export function DesignFigures({ design }: { design: DesignView }) {
-  const study = savedPairStudy(design); // once per revision: revisions never change
-  // The curves and budgets are only drawn; the pair and its figures go as they are.
-  const figures = {
-    ...study,
-    errorCurves: study.errorCurves.map((c) => ({ ...c, points: toDisplayDigits(c.points) })),
-    load: toDisplayDigits(study.load),
-    budgets: toDisplayDigits(study.budgets),
-  };
+  const figures = savedPairStudyToDraw(design); // once per revision: revisions never change
   return (
     <div className="flex flex-col gap-4" data-testid="design-figures">
       <Panel title={`Requirement (revision ${design.revision})`}>

@@ -4,7 +4,8 @@ import { candidateStudy } from "@/lib/design/candidate-study";
 import { benchHowTo, benchRows, cautions } from "@/lib/build-sheet/sheet-data";
 import { fixtureView, loggerRequirement, pumpRequirement } from "@/lib/build-sheet/fixtures";
 import { savedPairVerdict } from "@/lib/design/saved-verdict";
-import { pairBuildFigures, savedPairStudy, savedVerdictOf } from "./saved-figures";
+import { toDisplayDigits } from "@/lib/display-digits";
+import { pairBuildFigures, savedPairStudy, savedPairStudyToDraw, savedVerdictOf } from "./saved-figures";
 
 // What is kept per revision must be exactly what the engine gives for that revision (the engine's
 // own tests check the figures against their sources); these check the keeping.
@@ -36,5 +37,20 @@ describe("a saved pair's figures, once per revision", () => {
     const next = fixtureView(pumpRequirement, { revision: 5 }); // same id as logger, a later revision
     expect(savedPairStudy(next).detail).toEqual(next.metrics);
     expect(pairBuildFigures(next).bench).toEqual(benchRows(next.requirement, next.choice));
+  });
+
+  it("go to the page drawn at display digits, the pair and its figures exact, rounded once", () => {
+    const study = savedPairStudy(logger);
+    const drawn = savedPairStudyToDraw(logger);
+    expect(drawn.detail).toEqual(study.detail);
+    expect(drawn.errorCurves.map((c) => c.points)).toEqual(study.errorCurves.map((c) => toDisplayDigits(c.points)));
+    expect(drawn.load).toEqual(toDisplayDigits(study.load));
+    expect(drawn.budgets).toEqual(toDisplayDigits(study.budgets));
+    // The rounding shows: some drawn value differs from the exact one, by less than 5 digits allow.
+    const exact = study.load.flatMap((p) => Object.values(p).filter((v): v is number => typeof v === "number"));
+    const shown = drawn.load.flatMap((p) => Object.values(p).filter((v): v is number => typeof v === "number"));
+    expect(shown.some((v, k) => v !== exact[k])).toBe(true);
+    shown.forEach((v, k) => expect(Math.abs(v - exact[k]!)).toBeLessThanOrEqual(Math.abs(exact[k]!) * 5e-5));
+    expect(savedPairStudyToDraw({ ...logger })).toBe(drawn);
   });
 });

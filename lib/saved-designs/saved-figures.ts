@@ -11,6 +11,7 @@ import type { Choice } from "@/lib/design";
 import type { PlanChoice } from "@/lib/design/plan-choice";
 import type { Requirement } from "@/lib/design/requirement";
 import type { PairDesignView } from "@/lib/design-view";
+import { toDisplayDigits } from "@/lib/display-digits";
 import { RevisionMemo, revisionKey } from "./revision-memo";
 
 const studies = new RevisionMemo<CandidateStudyFigures>(500);
@@ -20,6 +21,25 @@ export function savedPairStudy(design: PairDesignView): CandidateStudyFigures {
   return studies.get(revisionKey(design.id, design.revision), () =>
     candidateStudy(design.requirement, design.choice, { saved: design.metrics }),
   );
+}
+
+const drawn = new RevisionMemo<CandidateStudyFigures>(500);
+
+/**
+ * savedPairStudy as the design page sends it: the curves and budgets, which are only drawn, at the
+ * digits a screen shows (lib/display-digits.ts); the pair and its figures exact. Kept per revision
+ * like the study, so a page view does not round them again.
+ */
+export function savedPairStudyToDraw(design: PairDesignView): CandidateStudyFigures {
+  return drawn.get(revisionKey(design.id, design.revision), () => {
+    const study = savedPairStudy(design);
+    return {
+      ...study,
+      errorCurves: study.errorCurves.map((c) => ({ ...c, points: toDisplayDigits(c.points) })),
+      load: toDisplayDigits(study.load),
+      budgets: toDisplayDigits(study.budgets),
+    };
+  });
 }
 
 /** What the build sheet panel shows of a pair beside its parts: today's evaluation, bench check, cautions. */

@@ -7,7 +7,6 @@ import { getDesignViews } from "@/db/queries/designs";
 import { requirePageCaller } from "@/lib/auth/gate";
 import { can } from "@/lib/auth/policy";
 import { designViewerFor, type DesignView } from "@/lib/design-view";
-import { toDisplayDigits } from "@/lib/display-digits";
 import { builtYieldsOf } from "@/lib/built-units/record";
 import { compareQuery } from "@/lib/saved-designs/compare";
 import { compareCurves } from "@/lib/saved-designs/compare-curves";
@@ -49,8 +48,8 @@ export default async function ComparePage({
       </EmptyState>
     );
   }
-  // Only drawn: sent at the digits a chart can show.
-  const curves = designs.map((d) => toDisplayDigits(compareCurves(d)));
+  // Only drawn: at the digits a chart can show (compareCurves keeps them so).
+  const curves = designs.map(compareCurves);
   const errorSeries: CurveSeries[] = designs.map((d, k) => ({ key: d.id, label: d.name, points: curves[k]!.error }));
   const burdenSeries: CurveSeries[] = designs.map((d, k) => ({ key: d.id, label: d.name, points: curves[k]!.burden }));
   // A bidirectional design is drawn by magnitude: its error and drop are the same at −I and +I.
