@@ -6,6 +6,7 @@ import path from "node:path";
 import { promisify } from "node:util";
 import type { PgDatabase, PgQueryResultHKT } from "drizzle-orm/pg-core";
 import { env } from "@/lib/env";
+import { byteaParsers, byteaSerializers } from "./bytea";
 import { acquireDataDirLock } from "./lock";
 import * as schema from "./schema";
 import { withStatementCache } from "./statement-cache";
@@ -73,6 +74,8 @@ async function open(): Promise<Handle> {
     dataDir: inMemory ? undefined : path.resolve(PGLITE_DIR),
     extensions: { pg_trgm },
     startParams: [...PGlite.defaultStartParams, "-c", `shared_buffers=${PGLITE_SHARED_BUFFERS}`],
+    parsers: byteaParsers,
+    serializers: byteaSerializers,
   });
   const db = drizzle(withStatementCache(client), { schema });
   await migrate(db, { migrationsFolder: migrationsFolder() });
