@@ -37,16 +37,6 @@ type Options = {
   max?: number;
 };
 
-function joined(parts: Uint8Array[]): Uint8Array {
-  const out = new Uint8Array(parts.reduce((n, p) => n + p.length, 0));
-  let at = 0;
-  for (const p of parts) {
-    out.set(p, at);
-    at += p.length;
-  }
-  return out;
-}
-
 /** A statement PostgreSQL no longer has, or whose result types a schema change altered: parse again. */
 function isStale(e: unknown): boolean {
   const { code, message } = (e ?? {}) as { code?: string; message?: string };
@@ -75,7 +65,7 @@ export function withStatementCache(
     }
     const name = `sw_${++shared.made}`;
     parts.push(serialize.parse({ name, text }), serialize.describe({ type: "S", name }), serialize.sync());
-    const { messages } = await client.execProtocol(joined(parts), { syncToFs: false });
+    const { messages } = await client.execProtocol(Buffer.concat(parts), { syncToFs: false });
     const statement = { name, paramTypes: parse.parseDescribeStatementResults(messages) };
     statements.set(text, statement);
     return statement;
@@ -99,7 +89,7 @@ export function withStatementCache(
       return write ? write(value) : String(value);
     });
     const { messages } = await client.execProtocol(
-      joined([
+      Buffer.concat([
         serialize.bind({ statement: statement.name, values }),
         serialize.describe({ type: "P" }),
         serialize.execute({}),

@@ -8,11 +8,11 @@ import { RevisionMemo, revisionKey } from "./revision-memo";
 
 type Point = { x: number; y: number };
 export type CompareCurves = { error: Point[]; burden: Point[] };
-// The points are only drawn: kept at the digits a chart shows (lib/display-digits.ts).
 
 /** Points across the span: enough for a smooth log–log line at the page's chart width. */
 const POINTS = 60;
 
+/** Kept at the digits a chart shows (lib/display-digits.ts): the points are only drawn. */
 const curves = new RevisionMemo<CompareCurves>(1000);
 
 /**
